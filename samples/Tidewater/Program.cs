@@ -1,0 +1,28 @@
+using System;
+using Phaseward;
+
+namespace Tidewater
+{
+    /// <summary>Checks every Tidewater design at run time and prints Phaseward's report for each.</summary>
+    public static class Program
+    {
+        public static int Main()
+        {
+            Design[] designs =
+            {
+                new PressureSampler(),
+            };
+
+            var findings = 0;
+            foreach (var design in designs)
+            {
+                var report = design.Check();
+                Console.Write(report);
+                findings += report.Findings.Count;
+            }
+
+            Console.WriteLine(findings == 0 ? "All Tidewater designs are clean." : $"{findings} finding(s) in the Tidewater designs.");
+            return 0;
+        }
+    }
+}

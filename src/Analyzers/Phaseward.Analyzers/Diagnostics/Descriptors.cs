@@ -1,0 +1,12 @@
+using Microsoft.CodeAnalysis;
+
+namespace Phaseward.Analyzers.Diagnostics
+{
+    /// <summary>Every descriptor Phaseward reports, built from the rules' constant IDs and texts.</summary>
+    internal static class Descriptors
+    {
+        public static readonly DiagnosticDescriptor DesignFound = DescriptorFactory.Create(
+            RuleIds.DesignFound, RuleTexts.DesignFoundTitle, RuleTexts.DesignFoundMessage, RuleCategories.Elaboration,
+            DiagnosticSeverity.Info, RuleTexts.DesignFoundDescription);
+    }
+}

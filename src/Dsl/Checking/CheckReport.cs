@@ -1,0 +1,35 @@
+using System.Collections.Generic;
+using System.Text;
+
+namespace Phaseward
+{
+    /// <summary>The result of checking a design at run time.</summary>
+    public sealed class CheckReport
+    {
+        public CheckReport(Netlist netlist, IReadOnlyList<Finding> findings)
+        {
+            Netlist = netlist;
+            Findings = findings;
+        }
+
+        public Netlist Netlist { get; }
+
+        public IReadOnlyList<Finding> Findings { get; }
+
+        public bool IsClean => Findings.Count == 0;
+
+        /// <summary>A human-readable report: a summary line, then one line per finding with its location.</summary>
+        public override string ToString()
+        {
+            var text = new StringBuilder();
+            text.Append("Phaseward: design '").Append(Netlist.DesignName).Append("': ")
+                .Append(Netlist.Devices.Count).Append(" devices, ")
+                .Append(Netlist.Nets.Count).Append(" nets, ")
+                .Append(Netlist.Clocks.Count).Append(" clocks — ");
+            text.AppendLine(IsClean ? "clean, no findings." : Findings.Count + (Findings.Count == 1 ? " finding:" : " findings:"));
+            foreach (var finding in Findings)
+                text.Append("  ").AppendLine(finding.ToString());
+            return text.ToString();
+        }
+    }
+}

@@ -1,0 +1,21 @@
+using System.Collections.Generic;
+using System.Linq;
+
+namespace Phaseward
+{
+    /// <summary>Every rule's descriptor, keyed by ID: the one source of titles and messages for both front ends.</summary>
+    public static class RuleCatalog
+    {
+        public static RuleDescriptor DesignFound { get; } = new(
+            RuleIds.DesignFound, RuleTexts.DesignFoundTitle, RuleTexts.DesignFoundMessage, RuleCategories.Elaboration, Severity.Info, RuleTexts.DesignFoundDescription);
+
+        public static IReadOnlyList<RuleDescriptor> All { get; } = new[]
+        {
+            DesignFound,
+        };
+
+        private static readonly Dictionary<string, RuleDescriptor> ById = All.ToDictionary(d => d.Id);
+
+        public static RuleDescriptor? Find(string id) => id is not null && ById.TryGetValue(id, out var descriptor) ? descriptor : null;
+    }
+}

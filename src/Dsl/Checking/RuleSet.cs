@@ -1,0 +1,12 @@
+using System.Collections.Generic;
+
+namespace Phaseward
+{
+    /// <summary>The rules Phaseward runs, in a fixed order (so reports are deterministic).</summary>
+    public static class RuleSet
+    {
+        public static IReadOnlyList<Rule> All { get; } = new Rule[]
+        {
+        };
+    }
+}

@@ -1,0 +1,12 @@
+namespace Phaseward
+{
+    /// <summary>The library cells that expand into primitives.</summary>
+    public enum MacroKind
+    {
+        DynamicLatch,
+        StaticLatch,
+        DynamicRegister,
+        StaticRegister,
+        Keeper,
+    }
+}

@@ -1,0 +1,41 @@
+using System;
+using System.Globalization;
+
+namespace Phaseward
+{
+    /// <summary>Formats SI values with engineering prefixes and three significant digits ("1.25 ns").</summary>
+    public static class Engineering
+    {
+        private static readonly string[] Prefixes = { "a", "f", "p", "n", "µ", "m", "", "k", "M", "G", "T" };
+        private const int UnitPrefixIndex = 6;
+
+        public static string Format(double value, string unit)
+        {
+            if (double.IsNaN(value) || double.IsInfinity(value))
+                return value.ToString(CultureInfo.InvariantCulture) + " " + unit;
+            if (value == 0)
+                return "0 " + unit;
+
+            var exponent = (int)Math.Floor(Math.Log10(Math.Abs(value)) / 3);
+            exponent = Math.Max(-UnitPrefixIndex, Math.Min(Prefixes.Length - 1 - UnitPrefixIndex, exponent));
+            var scaled = value / Math.Pow(10, exponent * 3);
+            // Rounding to three significant digits can carry into the next prefix (999.7 -> 1000).
+            var rounded = RoundSignificant(scaled, 3);
+            if (Math.Abs(rounded) >= 1000 && exponent < Prefixes.Length - 1 - UnitPrefixIndex)
+            {
+                exponent++;
+                rounded = RoundSignificant(value / Math.Pow(10, exponent * 3), 3);
+            }
+
+            return rounded.ToString("0.##", CultureInfo.InvariantCulture) + " " + Prefixes[exponent + UnitPrefixIndex] + unit;
+        }
+
+        private static double RoundSignificant(double value, int digits)
+        {
+            if (value == 0) return 0;
+            var magnitude = (int)Math.Floor(Math.Log10(Math.Abs(value))) + 1;
+            var decimals = Math.Max(0, digits - magnitude);
+            return Math.Round(value, decimals, MidpointRounding.AwayFromZero);
+        }
+    }
+}
