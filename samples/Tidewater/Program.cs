@@ -11,6 +11,14 @@ namespace Tidewater
             Design[] designs =
             {
                 new PressureSampler(),
+                new BurstCapture(),
+                new BurstCaptureStatic(),
+                new ChannelSelect(),
+                new ChannelSelectBuffered(),
+                new TideAverager(),
+                new TideAveragerTwoPhase(),
+                new Housekeeping(),
+                new HousekeepingStatic(),
             };
 
             var findings = 0;

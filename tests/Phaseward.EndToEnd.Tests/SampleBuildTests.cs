@@ -30,9 +30,12 @@ public class SampleBuildTests
             using var log = JsonDocument.Parse(File.ReadAllText(sarif));
             Assert.Equal("2.1.0", log.RootElement.GetProperty("version").GetString());
             var results = log.RootElement.GetProperty("runs")[0].GetProperty("results").EnumerateArray().ToList();
-            var found = results.Where(r => r.GetProperty("ruleId").GetString() == RuleIds.DesignFound).ToList();
-            var location = Assert.Single(found).GetProperty("locations")[0].GetProperty("physicalLocation");
-            Assert.EndsWith("PressureSampler.cs", location.GetProperty("artifactLocation").GetProperty("uri").GetString());
+            var found = results
+                .Where(r => r.GetProperty("ruleId").GetString() == RuleIds.DesignFound)
+                .Select(r => r.GetProperty("locations")[0].GetProperty("physicalLocation"))
+                .Where(l => l.GetProperty("artifactLocation").GetProperty("uri").GetString()!.EndsWith("PressureSampler.cs", StringComparison.Ordinal))
+                .ToList();
+            var location = Assert.Single(found);
             Assert.True(location.GetProperty("region").GetProperty("startLine").GetInt32() > 0);
         }
         finally

@@ -23,13 +23,15 @@ namespace Phaseward
         {
             var text = new StringBuilder();
             text.Append("Phaseward: design '").Append(Netlist.DesignName).Append("': ")
-                .Append(Netlist.Devices.Count).Append(" devices, ")
-                .Append(Netlist.Nets.Count).Append(" nets, ")
-                .Append(Netlist.Clocks.Count).Append(" clocks — ");
+                .Append(Count(Netlist.Devices.Count, "device")).Append(", ")
+                .Append(Count(Netlist.Nets.Count, "net")).Append(", ")
+                .Append(Count(Netlist.Clocks.Count, "clock")).Append(" — ");
             text.AppendLine(IsClean ? "clean, no findings." : Findings.Count + (Findings.Count == 1 ? " finding:" : " findings:"));
             foreach (var finding in Findings)
                 text.Append("  ").AppendLine(finding.ToString());
             return text.ToString();
         }
+
+        private static string Count(int count, string noun) => count + " " + noun + (count == 1 ? string.Empty : "s");
     }
 }
