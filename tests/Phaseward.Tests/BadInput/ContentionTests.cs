@@ -37,14 +37,5 @@ namespace Phaseward.Tests.BadInput
             var feedback = c.ToNetlist().Net("q.fb");
             Rejection.Argument(c, () => c.Buffer(p.A, feedback), "output", "'q.fb'");
         }
-
-        [Fact]
-        public void Pass_gates_onto_a_driven_net_are_not_contention_between_restoring_stages()
-        {
-            var c = p.Circuit;
-            c.TransmissionGate(p.A, p.Clk.High, p.Driven);
-
-            Assert.Equal(2, c.ToNetlist().DriversOf(p.Driven).Count);
-        }
     }
 }
