@@ -47,9 +47,9 @@ namespace Phaseward
         {
             CheckNet(d, nameof(d));
             CheckPhase(transparent, nameof(transparent));
-            var cellName = name ?? AutoName("latch");
-            CheckNewNetName(cellName, nameof(name));
             var isStatic = kind == MacroKind.StaticLatch;
+            var cellName = name ?? AutoName("latch", LatchInternalNets(isStatic));
+            CheckNewNetName(cellName, nameof(name));
             CheckCellNetsFree(cellName, LatchInternalNets(isStatic), nameof(name));
 
             return BuildLatch(kind, d, transparent, cellName, cellName, null, span);
@@ -59,9 +59,9 @@ namespace Phaseward
         {
             CheckNet(d, nameof(d));
             CheckClock(clock, nameof(clock));
-            var cellName = name ?? AutoName("reg");
-            CheckNewNetName(cellName, nameof(name));
             var isStatic = kind == MacroKind.StaticRegister;
+            var cellName = name ?? AutoName("reg", RegisterInternalNets(isStatic));
+            CheckNewNetName(cellName, nameof(name));
             var latchKind = isStatic ? MacroKind.StaticLatch : MacroKind.DynamicLatch;
             CheckCellNetsFree(cellName + ".master", LatchInternalNets(isStatic), nameof(name));
             CheckNewNetName(cellName + ".master", nameof(name));
@@ -73,6 +73,11 @@ namespace Phaseward
         }
 
         private static string[] LatchInternalNets(bool isStatic) => isStatic ? new[] { ".x", ".fb" } : new[] { ".x" };
+
+        private static string[] RegisterInternalNets(bool isStatic)
+            => isStatic
+                ? new[] { ".master", ".master.x", ".master.fb", ".slave.x", ".slave.fb" }
+                : new[] { ".master", ".master.x", ".slave.x" };
 
         private void CheckCellNetsFree(string cellName, string[] suffixes, string parameter)
         {

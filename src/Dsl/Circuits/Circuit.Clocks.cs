@@ -60,7 +60,7 @@ namespace Phaseward
                 CheckNewClockName(name, nameof(name));
 
             return AddClock(name ?? AutoClockName(clock.Name + ".buf"), ClockKind.Buffered, clock, clock.Period, clock.Duty, null,
-                delay ?? Process.StageDelay, null, ClockStopLevel.Low, null, Site(callerFile, callerLine));
+                delay, null, ClockStopLevel.Low, null, Site(callerFile, callerLine));
         }
 
         private void CheckNewClockName(string? name, string parameter)
@@ -78,7 +78,7 @@ namespace Phaseward
             return prefix + count.ToString(System.Globalization.CultureInfo.InvariantCulture);
         }
 
-        private Clock AddClock(string name, ClockKind kind, Clock? source, Time period, double duty, Time? skew, Time delay, Net? enable,
+        private Clock AddClock(string name, ClockKind kind, Clock? source, Time period, double duty, Time? skew, Time? delay, Net? enable,
             ClockStopLevel stopLevel, Time? maxIdle, SourceSpan span)
         {
             var clock = new Clock(this, clocks.Count, name, kind, source, period, duty, skew, delay, enable, stopLevel, maxIdle, span);

@@ -20,26 +20,26 @@ namespace Phaseward
             => AddPrimitive(DeviceKind.Inverter, new[] { input }, OneInput, null, null, name, null, null, Site(callerFile, callerLine));
 
         public void Inverter(Net input, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-            => AddPrimitive(DeviceKind.Inverter, new[] { input }, OneInput, null, null, null, output, null, Site(callerFile, callerLine));
+            => AddPrimitive(DeviceKind.Inverter, new[] { input }, OneInput, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 
         /// <summary>A non-inverting restoring stage (two inverters).</summary>
         public Net Buffer(Net input, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
             => AddPrimitive(DeviceKind.Buffer, new[] { input }, OneInput, null, null, name, null, null, Site(callerFile, callerLine));
 
         public void Buffer(Net input, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-            => AddPrimitive(DeviceKind.Buffer, new[] { input }, OneInput, null, null, null, output, null, Site(callerFile, callerLine));
+            => AddPrimitive(DeviceKind.Buffer, new[] { input }, OneInput, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 
         public Net Nand(Net a, Net b, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
             => AddPrimitive(DeviceKind.Nand, new[] { a, b }, TwoInputs, null, null, name, null, null, Site(callerFile, callerLine));
 
         public void Nand(Net a, Net b, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-            => AddPrimitive(DeviceKind.Nand, new[] { a, b }, TwoInputs, null, null, null, output, null, Site(callerFile, callerLine));
+            => AddPrimitive(DeviceKind.Nand, new[] { a, b }, TwoInputs, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 
         public Net Nor(Net a, Net b, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
             => AddPrimitive(DeviceKind.Nor, new[] { a, b }, TwoInputs, null, null, name, null, null, Site(callerFile, callerLine));
 
         public void Nor(Net a, Net b, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-            => AddPrimitive(DeviceKind.Nor, new[] { a, b }, TwoInputs, null, null, null, output, null, Site(callerFile, callerLine));
+            => AddPrimitive(DeviceKind.Nor, new[] { a, b }, TwoInputs, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 
         /// <summary>A transmission gate that conducts while <paramref name="when"/> is active.</summary>
         public Net TransmissionGate(Net input, Phase when, string? name = null, Resistance? onResistance = null,
@@ -55,7 +55,7 @@ namespace Phaseward
             [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
         {
             CheckPhase(when, nameof(when));
-            AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, when, null, null, output,
+            AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, when, null, null, Existing(output),
                 CheckResistance(onResistance, nameof(onResistance)), Site(callerFile, callerLine));
         }
 
@@ -73,7 +73,7 @@ namespace Phaseward
             [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
         {
             CheckNet(control, nameof(control));
-            AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, null, control, null, output,
+            AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, null, control, null, Existing(output),
                 CheckResistance(onResistance, nameof(onResistance)), Site(callerFile, callerLine));
         }
     }

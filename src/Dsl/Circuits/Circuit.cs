@@ -112,7 +112,7 @@ namespace Phaseward
                 throw new ArgumentException($"'{parameter}': net '{output.Name}' is already driven by a restoring stage; a second one would fight it.", parameter);
         }
 
-        private string AutoName(string prefix)
+        private string AutoName(string prefix, params string[] internalSuffixes)
         {
             autoNameCounters.TryGetValue(prefix, out var count);
             string candidate;
@@ -121,10 +121,18 @@ namespace Phaseward
                 count++;
                 candidate = prefix + count.ToString(System.Globalization.CultureInfo.InvariantCulture);
             }
-            while (netsByName.ContainsKey(candidate) || clockNames.Contains(candidate));
+            while (netsByName.ContainsKey(candidate) || clockNames.Contains(candidate) || AnyTaken(candidate, internalSuffixes));
 
             autoNameCounters[prefix] = count;
             return candidate;
+        }
+
+        private bool AnyTaken(string cellName, string[] suffixes)
+        {
+            foreach (var suffix in suffixes)
+                if (netsByName.ContainsKey(cellName + suffix))
+                    return true;
+            return false;
         }
 
         private Net NewNet(string name)
@@ -161,6 +169,10 @@ namespace Phaseward
             DeviceKind.Nor => "nor",
             _ => "tg",
         };
+
+        // The overloads that drive an existing net pass it through here: AddPrimitive reads a null output as "make a new net".
+        private static Net Existing(Net? output)
+            => output ?? throw new ArgumentNullException(nameof(output), $"'{nameof(output)}' must not be null.");
 
         private static Resistance? CheckResistance(Resistance? value, string parameter)
             => value is { } r ? new Resistance(Guard.Positive(r.Ohms, parameter, "Ω")) : null;

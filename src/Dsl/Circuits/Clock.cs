@@ -28,9 +28,10 @@ namespace Phaseward
     public sealed class Clock
     {
         private readonly Time? complementSkew;
+        private readonly Time? delay;
 
         internal Clock(Circuit owner, int id, string name, ClockKind kind, Clock? source, Time period, double duty,
-            Time? complementSkew, Time delay, Net? enable, ClockStopLevel stopLevel, Time? maxIdle, SourceSpan span)
+            Time? complementSkew, Time? delay, Net? enable, ClockStopLevel stopLevel, Time? maxIdle, SourceSpan span)
         {
             Owner = owner;
             Id = id;
@@ -40,7 +41,7 @@ namespace Phaseward
             Period = period;
             Duty = duty;
             this.complementSkew = complementSkew;
-            Delay = delay;
+            this.delay = delay;
             Enable = enable;
             StopLevel = stopLevel;
             MaxIdle = maxIdle;
@@ -73,8 +74,9 @@ namespace Phaseward
         /// <summary>How late the complement arrives after the true clock (explicit, else the root's, else the process's).</summary>
         public Time ComplementSkew => complementSkew ?? Source?.ComplementSkew ?? Owner.Process.ComplementSkew;
 
-        /// <summary>Delay this clock adds to its source (zero for root and gated clocks).</summary>
-        public Time Delay { get; }
+        /// <summary>Delay this clock adds to its source (zero for root and gated clocks; a buffer without its own delay
+        /// takes the stage delay of the process in force).</summary>
+        public Time Delay => delay ?? Owner.Process.StageDelay;
 
         /// <summary>Total delay from the root clock to this one.</summary>
         public Time DelayFromRoot => Delay + (Source?.DelayFromRoot ?? Time.Zero);
