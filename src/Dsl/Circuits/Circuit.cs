@@ -24,6 +24,7 @@ namespace Phaseward
         private readonly HashSet<string> clockNames = new(StringComparer.Ordinal);
         private readonly HashSet<string> outputNames = new(StringComparer.Ordinal);
         private readonly HashSet<int> strongDriven = new();
+        private readonly HashSet<int> inputNets = new();
         private readonly HashSet<int> passDriven = new();
         private readonly Dictionary<int, Capacitance> capacitanceOverrides = new();
         private readonly Dictionary<int, Current> leakageOverrides = new();
@@ -108,6 +109,8 @@ namespace Phaseward
 
         private void CheckCanDriveStrongly(Net output, string parameter)
         {
+            if (inputNets.Contains(output.Id))
+                throw new ArgumentException($"'{parameter}': net '{output.Name}' is a primary input, already driven from outside; a restoring stage on it would fight that driver.", parameter);
             if (strongDriven.Contains(output.Id))
                 throw new ArgumentException($"'{parameter}': net '{output.Name}' is already driven by a restoring stage; a second one would fight it.", parameter);
         }

@@ -37,5 +37,12 @@ namespace Phaseward.Tests.BadInput
             var feedback = c.ToNetlist().Net("q.fb");
             Rejection.Argument(c, () => c.Buffer(p.A, feedback), "output", "'q.fb'");
         }
+    
+        [Fact]
+        public void A_restoring_stage_on_a_primary_input_is_refused()
+        {
+            var c = p.Circuit;
+            Rejection.Argument(c, () => c.Inverter(p.B, p.A), "output", $"'{p.A.Name}'", "primary input");
+        }
     }
 }
