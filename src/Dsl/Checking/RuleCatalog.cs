@@ -9,9 +9,24 @@ namespace Phaseward
         public static RuleDescriptor DesignFound { get; } = new(
             RuleIds.DesignFound, RuleTexts.DesignFoundTitle, RuleTexts.DesignFoundMessage, RuleCategories.Elaboration, Severity.Info, RuleTexts.DesignFoundDescription);
 
+        public static RuleDescriptor DynamicNodeOnGatedClock { get; } = new(
+            RuleIds.DynamicNodeOnGatedClock, RuleTexts.DynamicNodeOnGatedClockTitle, RuleTexts.DynamicNodeOnGatedClockMessage,
+            RuleCategories.DynamicStorage, Severity.Warning, RuleTexts.DynamicNodeOnGatedClockDescription);
+
+        public static RuleDescriptor ClockTooSlowForDynamicStorage { get; } = new(
+            RuleIds.ClockTooSlowForDynamicStorage, RuleTexts.ClockTooSlowForDynamicStorageTitle, RuleTexts.ClockTooSlowForDynamicStorageMessage,
+            RuleCategories.DynamicStorage, Severity.Warning, RuleTexts.ClockTooSlowForDynamicStorageDescription);
+
+        public static RuleDescriptor ChargeSharing { get; } = new(
+            RuleIds.ChargeSharing, RuleTexts.ChargeSharingTitle, RuleTexts.ChargeSharingMessage,
+            RuleCategories.DynamicStorage, Severity.Warning, RuleTexts.ChargeSharingDescription);
+
         public static IReadOnlyList<RuleDescriptor> All { get; } = new[]
         {
             DesignFound,
+            DynamicNodeOnGatedClock,
+            ClockTooSlowForDynamicStorage,
+            ChargeSharing,
         };
 
         private static readonly Dictionary<string, RuleDescriptor> ById = All.ToDictionary(d => d.Id);

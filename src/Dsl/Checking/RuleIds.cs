@@ -8,5 +8,14 @@ namespace Phaseward
     {
         /// <summary>Temporary: proves the analyzer loads into a real build (replaced by the compile-time elaborator).</summary>
         public const string DesignFound = "PW9000";
+
+        /// <summary>A dynamic storage node floats while its gated clock is stopped, for longer than it retains its level.</summary>
+        public const string DynamicNodeOnGatedClock = "PW3001";
+
+        /// <summary>A running clock leaves a dynamic storage node floating for longer than it retains its level.</summary>
+        public const string ClockTooSlowForDynamicStorage = "PW3002";
+
+        /// <summary>A pass device joins a charged floating node to another floating node and the shared level droops too far.</summary>
+        public const string ChargeSharing = "PW3003";
     }
 }

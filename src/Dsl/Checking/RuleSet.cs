@@ -7,6 +7,9 @@ namespace Phaseward
     {
         public static IReadOnlyList<Rule> All { get; } = new Rule[]
         {
+            new DynamicNodeOnGatedClockRule(),
+            new ClockTooSlowForDynamicStorageRule(),
+            new ChargeSharingRule(),
         };
     }
 }

@@ -8,5 +8,17 @@ namespace Phaseward.Analyzers.Diagnostics
         public static readonly DiagnosticDescriptor DesignFound = DescriptorFactory.Create(
             RuleIds.DesignFound, RuleTexts.DesignFoundTitle, RuleTexts.DesignFoundMessage, RuleCategories.Elaboration,
             DiagnosticSeverity.Info, RuleTexts.DesignFoundDescription);
+
+        public static readonly DiagnosticDescriptor DynamicNodeOnGatedClock = DescriptorFactory.Create(
+            RuleIds.DynamicNodeOnGatedClock, RuleTexts.DynamicNodeOnGatedClockTitle, RuleTexts.DynamicNodeOnGatedClockMessage,
+            RuleCategories.DynamicStorage, DiagnosticSeverity.Warning, RuleTexts.DynamicNodeOnGatedClockDescription);
+
+        public static readonly DiagnosticDescriptor ClockTooSlowForDynamicStorage = DescriptorFactory.Create(
+            RuleIds.ClockTooSlowForDynamicStorage, RuleTexts.ClockTooSlowForDynamicStorageTitle, RuleTexts.ClockTooSlowForDynamicStorageMessage,
+            RuleCategories.DynamicStorage, DiagnosticSeverity.Warning, RuleTexts.ClockTooSlowForDynamicStorageDescription);
+
+        public static readonly DiagnosticDescriptor ChargeSharing = DescriptorFactory.Create(
+            RuleIds.ChargeSharing, RuleTexts.ChargeSharingTitle, RuleTexts.ChargeSharingMessage,
+            RuleCategories.DynamicStorage, DiagnosticSeverity.Warning, RuleTexts.ChargeSharingDescription);
     }
 }

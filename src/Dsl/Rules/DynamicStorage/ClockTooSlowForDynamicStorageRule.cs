@@ -1,0 +1,48 @@
+using System.Collections.Generic;
+
+namespace Phaseward
+{
+    /// <summary>
+    /// PW3002: with its clocks running, a storage node floats for longer per period than its retention time (see
+    /// <see cref="StorageIsolation.WhileRunning"/>); reports the lowest safe clock frequency.
+    /// </summary>
+    public sealed class ClockTooSlowForDynamicStorageRule : Rule
+    {
+        public override IReadOnlyList<RuleDescriptor> Descriptors { get; } = new[] { RuleCatalog.ClockTooSlowForDynamicStorage };
+
+        public override IEnumerable<Finding> Check(RuleContext context)
+        {
+            foreach (var node in StorageNodes.Of(context.Netlist))
+            {
+                context.CancellationToken.ThrowIfCancellationRequested();
+                if (StorageIsolation.WhileRunning(node) is not { } running)
+                    continue;
+                var retention = node.Retention;
+                if (running.LowestSafeFrequency(retention.Time) is not { } minimum)
+                    continue;
+
+                var root = running.Root;
+                var properties = new Dictionary<string, string>
+                {
+                    [DynamicStorageProperties.Node] = node.Net.Name,
+                    [DynamicStorageProperties.RootClock] = root.Name,
+                    [DynamicStorageProperties.RetentionSeconds] = DynamicStorageProperties.Number(retention.Time.Seconds),
+                    [DynamicStorageProperties.IsolationSeconds] = DynamicStorageProperties.Number(running.Longest.Seconds),
+                    [DynamicStorageProperties.MinimumFrequencyHertz] = DynamicStorageProperties.Number(minimum.Hertz),
+                };
+                CellProperties.Add(properties, node);
+
+                yield return new Finding(
+                    RuleCatalog.ClockTooSlowForDynamicStorage,
+                    node.PrimaryDriver.Span,
+                    new object[]
+                    {
+                        node.Net.Name, running.Longest, root.Period, root.Name,
+                        retention.Time, retention.Capacitance, retention.ToleratedDroop, retention.Leakage, minimum,
+                    },
+                    new[] { root.Span },
+                    properties);
+            }
+        }
+    }
+}

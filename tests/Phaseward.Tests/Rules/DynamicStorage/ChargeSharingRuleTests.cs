@@ -1,0 +1,141 @@
+using System;
+using System.Globalization;
+using System.Linq;
+
+namespace Phaseward.Tests.Rules.DynamicStorage;
+
+/// <summary>
+/// PW3003. Droop V·C2/(C1+C2) by conservation of charge (common practice; see <see cref="Storage.ChargeSharingTests"/>
+/// for the source), V the 1.2 V supply and ΔV = 0.3 V tolerated (illustrative process).
+/// </summary>
+public class ChargeSharingRuleTests
+{
+    private static readonly Rule Rule = new ChargeSharingRule();
+
+    private static (Netlist Netlist, Finding[] Findings) Check(Action<Circuit> describe)
+    {
+        var c = new Circuit("buoy");
+        describe(c);
+        var netlist = c.ToNetlist();
+        return (netlist, Checker.Check(netlist, new[] { Rule }).Findings.ToArray());
+    }
+
+    [Fact]
+    public void TwoDynamicNodesInSeriesShareCharge()
+    {
+        var (netlist, findings) = Check(c =>
+        {
+            var clk = c.Clock("clk", 10.Nanoseconds());
+            var a = c.TransmissionGate(c.Input("d"), clk.Low, "a");
+            var b = c.TransmissionGate(a, clk.High, "b");
+            c.Inverter(b, "q");
+        });
+
+        // a: wire 1 + two pass-gate terminals 2 × 1.5 = 4 fF; b: wire 1 + one terminal 1.5 + inverter gate 2 = 4.5 fF.
+        // Droop 1.2 V × 4.5 / 8.5 = 635.3 mV; settles at 1.2 V × 4 / 8.5 = 564.7 mV.
+        var finding = Assert.Single(findings);
+        Assert.Equal(
+            "When 'b' conducts, floating node 'a' (C1 = 4 fF) shares its charge with floating node 'b' (C2 = 4.5 fF): "
+            + "a 1.2 V level settles at 565 mV, a droop of 635 mV, more than the tolerated 300 mV",
+            finding.Message);
+        Assert.Equal(netlist.Devices.Single(d => d.Name == "b").Span, finding.Location);
+        Assert.Equal(netlist.Devices.Single(d => d.Name == "a").Span, Assert.Single(finding.RelatedLocations));
+        Assert.Equal(1.2 * 4.5 / 8.5, double.Parse(finding.Properties[DynamicStorageProperties.DroopVolts], CultureInfo.InvariantCulture), 1e-12);
+        Assert.Equal("a", finding.Properties[DynamicStorageProperties.Node]);
+        Assert.Equal("b", finding.Properties[DynamicStorageProperties.OtherNode]);
+    }
+
+    [Theory]
+    [InlineData(100.0, false)] // 1.2 × 4.5 / 104.5 = 51.7 mV
+    [InlineData(13.6, false)]  // 1.2 × 4.5 / 18.1 = 298.3 mV
+    [InlineData(13.0, true)]   // 1.2 × 4.5 / 17.5 = 308.6 mV
+    public void ABigEnoughStorageCapacitorAbsorbsTheSharing(double femtofarads, bool reported)
+    {
+        var (_, findings) = Check(c =>
+        {
+            var clk = c.Clock("clk", 10.Nanoseconds());
+            var a = c.TransmissionGate(c.Input("d"), clk.Low, "a");
+            c.SetCapacitance(a, femtofarads.Femtofarads());
+            c.Inverter(c.TransmissionGate(a, clk.High, "b"), "q");
+        });
+        Assert.Equal(reported ? 1 : 0, findings.Length);
+    }
+
+    [Fact]
+    public void ADataControlledGateFromADynamicNodeIntoAFloatingNodeCounts()
+    {
+        var (_, findings) = Check(c =>
+        {
+            var clk = c.Clock("clk", 10.Nanoseconds());
+            var x = c.TransmissionGate(c.Input("d"), clk.High, "x");
+            var y = c.TransmissionGate(x, c.Input("sel"), "y");
+            c.Inverter(y, "q");
+        });
+        Assert.Equal("y", Assert.Single(findings).Properties[DynamicStorageProperties.OtherNode]);
+    }
+
+    [Fact]
+    public void DrivenOrRestoredNodesDoNotShareCharge()
+    {
+        var (_, findings) = Check(c =>
+        {
+            var clk = c.Clock("clk", 10.Nanoseconds());
+            var d = c.Input("d");
+            // From a primary input, and from a restoring stage: driven, not shared.
+            c.Inverter(c.TransmissionGate(d, clk.High, "from_input"));
+            c.Inverter(c.TransmissionGate(c.Inverter(d), clk.High, "from_inverter"));
+            // From a static latch's node (its feedback keeps it driven all period) into a floating node.
+            var s = c.StaticLatch(d, clk.High, "s");
+            var sx = c.TransmissionGate(s, clk.Low, "after_static"); // s is the latch output (restored) anyway
+            c.Inverter(sx);
+            // Registers hand over through restoring inverters.
+            c.DynamicRegister(d, clk, "r");
+            // Into a node kept by a keeper.
+            var kept = c.TransmissionGate(c.TransmissionGate(d, clk.Low, "dyn"), clk.High, "kept");
+            c.Keeper(kept);
+        });
+        Assert.Empty(findings);
+    }
+
+    [Fact]
+    public void AnOutputDrivenAllThroughTheWindowIsNotFloating()
+    {
+        var (_, findings) = Check(c =>
+        {
+            var clk = c.Clock("clk", 10.Nanoseconds());
+            var d = c.Input("d");
+            var a = c.TransmissionGate(d, clk.Low, "a");
+            var b = c.TransmissionGate(a, clk.High, "b");
+            c.TransmissionGate(c.Inverter(d), clk.High, b); // b is driven from a restoring stage throughout
+            c.Inverter(b, "q");
+        });
+        Assert.Empty(findings);
+    }
+
+    [Fact]
+    public void ASourceNodeRefreshedThroughoutTheWindowIsNotFloating()
+    {
+        var (_, findings) = Check(c =>
+        {
+            var clk = c.Clock("clk", 10.Nanoseconds());
+            var d = c.Input("d");
+            var a = c.TransmissionGate(d, clk.High, "a"); // conducts whenever the next gate does
+            c.Inverter(c.TransmissionGate(a, clk.High, "b"), "q");
+        });
+        Assert.Empty(findings);
+    }
+
+    [Fact]
+    public void TheSupplyOfTheProcessSetsTheLevel()
+    {
+        var (_, findings) = Check(c =>
+        {
+            c.UseProcess(new Process { Supply = 0.6.Volts() });
+            var clk = c.Clock("clk", 10.Nanoseconds());
+            var a = c.TransmissionGate(c.Input("d"), clk.Low, "a");
+            c.Inverter(c.TransmissionGate(a, clk.High, "b"), "q");
+        });
+        // 0.6 V × 4.5 / 8.5 = 317.6 mV > 300 mV.
+        Assert.Contains("a 600 mV level settles at 282 mV, a droop of 318 mV", Assert.Single(findings).Message);
+    }
+}

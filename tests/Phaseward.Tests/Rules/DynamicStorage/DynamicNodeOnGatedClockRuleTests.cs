@@ -1,0 +1,207 @@
+using System;
+using System.Linq;
+
+namespace Phaseward.Tests.Rules.DynamicStorage;
+
+/// <summary>
+/// PW3001. Default (illustrative) process: a latch's storage node is 1 fF wire + 1.5 fF pass-gate diffusion + 2 fF
+/// inverter gate = 4.5 fF; with ΔV = 0.3 V and 5 pA, t_ret = 4.5 fF × 0.3 V / 5 pA = 270 µs (common practice: Q = C·V,
+/// t = Q/I).
+/// </summary>
+public class DynamicNodeOnGatedClockRuleTests
+{
+    private static readonly Rule Rule = new DynamicNodeOnGatedClockRule();
+
+    private static (Netlist Netlist, Finding[] Findings) Check(Action<Circuit> describe)
+    {
+        var c = new Circuit("buoy");
+        describe(c);
+        var netlist = c.ToNetlist();
+        return (netlist, Checker.Check(netlist, new[] { Rule }).Findings.ToArray());
+    }
+
+    [Fact]
+    public void DynamicLatchOnAClockStoppedLowIsReportedWithItsFigures()
+    {
+        Clock? gate = null;
+        var (netlist, findings) = Check(c =>
+        {
+            var clk = c.Clock("clk", 10.Nanoseconds());
+            gate = c.ClockGate(clk, c.Input("burst"), ClockStopLevel.Low, name: "burst_clk");
+            c.DynamicLatch(c.Input("sample"), gate.High, "hold");
+        });
+
+        var finding = Assert.Single(findings);
+        Assert.Equal("PW3001", finding.RuleId);
+        Assert.Equal(
+            "Dynamic node 'hold.x' floats while gated clock 'burst_clk' is stopped low (declared maximum idle time: unbounded), "
+            + "but keeps its level only 270 µs (C·ΔV/I_leak with C = 4.5 fF, ΔV = 300 mV, I_leak = 5 pA)",
+            finding.Message);
+        Assert.Equal(netlist.Devices.Single(d => d.Name == "hold.pass").Span, finding.Location);
+        Assert.Equal(gate!.Span, Assert.Single(finding.RelatedLocations));
+        Assert.Equal("hold.x", finding.Properties[DynamicStorageProperties.Node]);
+        Assert.Equal("DynamicLatch", finding.Properties[DynamicStorageProperties.Cell]);
+        Assert.Equal("hold", finding.Properties[DynamicStorageProperties.CellName]);
+        Assert.Equal("StaticLatch", finding.Properties[DynamicStorageProperties.StaticReplacement]);
+        Assert.Equal("burst_clk", finding.Properties[DynamicStorageProperties.GatedClock]);
+        Assert.Equal("clk", finding.Properties[DynamicStorageProperties.UngatedClock]);
+        Assert.Equal("clk", finding.Properties[DynamicStorageProperties.RootClock]);
+        Assert.Equal("unbounded", finding.Properties[DynamicStorageProperties.IdleSeconds]);
+        Assert.Equal(270e-6, double.Parse(finding.Properties[DynamicStorageProperties.RetentionSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-15);
+    }
+
+    [Fact]
+    public void TheExampleInTheRuleDocumentation()
+    {
+        // docs/rules/PW3001.md (invented burst-sampling scenario).
+        var (_, findings) = Check(c =>
+        {
+            var clk = c.Clock("sample", 100.Nanoseconds());
+            var burst = c.ClockGate(clk, c.Input("burst_enable"), ClockStopLevel.Low, maxIdle: 2.Seconds(), name: "burst_clk");
+            c.DynamicLatch(c.Input("comparator"), burst.High, "hold");
+        });
+        Assert.Equal(
+            "Dynamic node 'hold.x' floats while gated clock 'burst_clk' is stopped low (declared maximum idle time: 2 s), "
+            + "but keeps its level only 270 µs (C·ΔV/I_leak with C = 4.5 fF, ΔV = 300 mV, I_leak = 5 pA)",
+            Assert.Single(findings).Message);
+    }
+
+    [Theory]
+    [InlineData(ClockStopLevel.Low, ClockPolarity.High, true)]
+    [InlineData(ClockStopLevel.Low, ClockPolarity.Low, false)]
+    [InlineData(ClockStopLevel.High, ClockPolarity.Low, true)]
+    [InlineData(ClockStopLevel.High, ClockPolarity.High, false)]
+    public void OnlyTheStopLevelThatShutsTheLatchIsReported(ClockStopLevel stop, ClockPolarity transparent, bool reported)
+    {
+        var (_, findings) = Check(c =>
+        {
+            var gated = c.ClockGate(c.Clock("clk", 10.Nanoseconds()), c.Input("en"), stop);
+            c.DynamicLatch(c.Input("d"), gated[transparent], "l");
+        });
+        Assert.Equal(reported ? 1 : 0, findings.Length);
+        if (reported) Assert.Contains($"stopped {stop.ToString().ToLowerInvariant()}", findings[0].Message);
+    }
+
+    [Theory]
+    [InlineData(100.0, false)]  // 100 µs < 270 µs
+    [InlineData(269.0, false)]  // just shorter
+    [InlineData(1000.0, true)]  // 1 ms > 270 µs
+    public void DeclaredIdleTimeIsComparedWithRetention(double idleUs, bool reported)
+    {
+        var (_, findings) = Check(c =>
+        {
+            var gated = c.ClockGate(c.Clock("clk", 10.Nanoseconds()), c.Input("en"), ClockStopLevel.Low, idleUs.Microseconds());
+            c.DynamicLatch(c.Input("d"), gated.High, "l");
+        });
+        Assert.Equal(reported ? 1 : 0, findings.Length);
+        if (reported)
+        {
+            Assert.Contains("declared maximum idle time: 1 ms", findings[0].Message);
+            Assert.Equal("0.001", findings[0].Properties[DynamicStorageProperties.IdleSeconds]);
+        }
+    }
+
+    [Theory]
+    [InlineData(ClockStopLevel.Low)]
+    [InlineData(ClockStopLevel.High)]
+    public void StaticLatchesAndRegistersKeepTheirBitWhenTheClockStops(ClockStopLevel stop)
+    {
+        var (_, findings) = Check(c =>
+        {
+            var gated = c.ClockGate(c.Clock("clk", 10.Nanoseconds()), c.Input("en"), stop);
+            var d = c.Input("d");
+            c.StaticLatch(d, gated.High, "a");
+            c.StaticLatch(d, gated.Low, "b");
+            c.StaticRegister(d, gated, "r");
+        });
+        Assert.Empty(findings);
+    }
+
+    [Fact]
+    public void DynamicLatchOnAnUngatedClockIsNotThisRulesBusiness()
+    {
+        var (_, findings) = Check(c => c.DynamicLatch(c.Input("d"), c.Clock("clk", 10.Nanoseconds()).High, "l"));
+        Assert.Empty(findings);
+    }
+
+    [Theory]
+    [InlineData(ClockStopLevel.Low, "r.slave.x")]
+    [InlineData(ClockStopLevel.High, "r.master.x")]
+    public void DynamicRegisterLosesTheLatchWhosePhaseIsHeldOff(ClockStopLevel stop, string node)
+    {
+        var (netlist, findings) = Check(c =>
+        {
+            var gated = c.ClockGate(c.BufferedClock(c.Clock("clk", 10.Nanoseconds()), name: "clk_buf"), c.Input("en"), stop, name: "g");
+            c.DynamicRegister(c.Input("d"), gated, "r");
+        });
+        var finding = Assert.Single(findings);
+        Assert.Equal(node, finding.Properties[DynamicStorageProperties.Node]);
+        Assert.Equal("DynamicRegister", finding.Properties[DynamicStorageProperties.Cell]);
+        Assert.Equal("r", finding.Properties[DynamicStorageProperties.CellName]);
+        Assert.Equal("StaticRegister", finding.Properties[DynamicStorageProperties.StaticReplacement]);
+        Assert.Equal("clk_buf", finding.Properties[DynamicStorageProperties.UngatedClock]);
+        Assert.Equal("clk", finding.Properties[DynamicStorageProperties.RootClock]);
+        Assert.Equal(netlist.Macros.Single(m => m.Name == "r").Span, finding.Location);
+    }
+
+    [Fact]
+    public void PerNodeLeakageAndCapacitanceOverridesChangeTheVerdict()
+    {
+        // 100 µs idle against 270 µs: clean. 50 pA on the node: 4.5 fF × 0.3 V / 50 pA = 27 µs < 100 µs: reported.
+        var (_, leaky) = Check(c =>
+        {
+            var gated = c.ClockGate(c.Clock("clk", 10.Nanoseconds()), c.Input("en"), ClockStopLevel.Low, 100.Microseconds());
+            c.DynamicLatch(c.Input("d"), gated.High, "l");
+            c.SetLeakage(c.Node("other"), 50.Picoamperes()); // an override on another net changes nothing here
+        });
+        Assert.Empty(leaky);
+
+        var (_, withLeak) = Check(c =>
+        {
+            var gated = c.ClockGate(c.Clock("clk", 10.Nanoseconds()), c.Input("en"), ClockStopLevel.Low, 100.Microseconds());
+            var node = c.Node("x");
+            c.TransmissionGate(c.Input("d"), gated.High, node);
+            c.Inverter(node, "q");
+            c.SetLeakage(node, 50.Picoamperes());
+        });
+        var finding = Assert.Single(withLeak);
+        Assert.Contains("keeps its level only 27 µs", finding.Message);
+        Assert.Contains("I_leak = 50 pA", finding.Message);
+        Assert.False(finding.Properties.ContainsKey(DynamicStorageProperties.Cell));
+
+        // A 100 fF storage capacitor: 100 fF × 0.3 V / 50 pA = 600 µs > 100 µs: clean again.
+        var (_, withCap) = Check(c =>
+        {
+            var gated = c.ClockGate(c.Clock("clk", 10.Nanoseconds()), c.Input("en"), ClockStopLevel.Low, 100.Microseconds());
+            var node = c.Node("x");
+            c.TransmissionGate(c.Input("d"), gated.High, node);
+            c.Inverter(node, "q");
+            c.SetLeakage(node, 50.Picoamperes());
+            c.SetCapacitance(node, 100.Femtofarads());
+        });
+        Assert.Empty(withCap);
+    }
+
+    [Fact]
+    public void TheProcessFiguresFeedTheEstimate()
+    {
+        var (_, findings) = Check(c =>
+        {
+            c.UseProcess(new Process { StorageLeakage = 1.Picoamperes(), ToleratedDroop = 0.2.Volts() });
+            var gated = c.ClockGate(c.Clock("clk", 10.Nanoseconds()), c.Input("en"), ClockStopLevel.Low, 1.Milliseconds());
+            c.DynamicLatch(c.Input("d"), gated.High, "l");
+        });
+        // 4.5 fF × 0.2 V / 1 pA = 900 µs < 1 ms: reported, with the process's figures.
+        var finding = Assert.Single(findings);
+        Assert.Contains("keeps its level only 900 µs (C·ΔV/I_leak with C = 4.5 fF, ΔV = 200 mV, I_leak = 1 pA)", finding.Message);
+    }
+
+    [Fact]
+    public void RunsFromTheRuleSetAndTheCatalog()
+    {
+        Assert.Contains(RuleSet.All, r => r is DynamicNodeOnGatedClockRule);
+        Assert.Same(RuleCatalog.DynamicNodeOnGatedClock, RuleCatalog.Find("PW3001"));
+        Assert.Equal(Severity.Warning, RuleCatalog.DynamicNodeOnGatedClock.DefaultSeverity);
+        Assert.Equal(RuleCategories.DynamicStorage, RuleCatalog.DynamicNodeOnGatedClock.Category);
+    }
+}
