@@ -9,8 +9,13 @@ namespace Phaseward
         public static RuleDescriptor DesignFound { get; } = new(
             RuleIds.DesignFound, RuleTexts.DesignFoundTitle, RuleTexts.DesignFoundMessage, RuleCategories.Elaboration, Severity.Info, RuleTexts.DesignFoundDescription);
 
+        public static RuleDescriptor SeriesPassGates { get; } = new(
+            RuleIds.SeriesPassGates, RuleTexts.SeriesPassGatesTitle, RuleTexts.SeriesPassGatesMessage, RuleCategories.PassGatePaths, Severity.Warning,
+            RuleTexts.SeriesPassGatesDescription);
+
         public static IReadOnlyList<RuleDescriptor> All { get; } = new[]
         {
+            SeriesPassGates,
             DesignFound,
         };
 

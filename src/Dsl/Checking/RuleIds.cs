@@ -8,5 +8,8 @@ namespace Phaseward
     {
         /// <summary>Temporary: proves the analyzer loads into a real build (replaced by the compile-time elaborator).</summary>
         public const string DesignFound = "PW9000";
+
+        /// <summary>Pass gates in series without a restoring stage.</summary>
+        public const string SeriesPassGates = "PW2001";
     }
 }

@@ -8,5 +8,9 @@ namespace Phaseward.Analyzers.Diagnostics
         public static readonly DiagnosticDescriptor DesignFound = DescriptorFactory.Create(
             RuleIds.DesignFound, RuleTexts.DesignFoundTitle, RuleTexts.DesignFoundMessage, RuleCategories.Elaboration,
             DiagnosticSeverity.Info, RuleTexts.DesignFoundDescription);
+
+        public static readonly DiagnosticDescriptor SeriesPassGates = DescriptorFactory.Create(
+            RuleIds.SeriesPassGates, RuleTexts.SeriesPassGatesTitle, RuleTexts.SeriesPassGatesMessage, RuleCategories.PassGatePaths,
+            DiagnosticSeverity.Warning, RuleTexts.SeriesPassGatesDescription);
     }
 }
