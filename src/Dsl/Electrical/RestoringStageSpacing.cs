@@ -57,7 +57,9 @@ namespace Phaseward
                 throw new ArgumentOutOfRangeException(nameof(gates), gates, $"'{nameof(gates)}' must be at least 1 (was {gates}).");
             if (double.IsNaN(spacing) || double.IsInfinity(spacing) || spacing <= 0)
                 throw new ArgumentOutOfRangeException(nameof(spacing), spacing, $"'{nameof(spacing)}' must be a positive, finite number of gates (was {spacing}).");
-            Check(stageDelay, resistance, capacitance);
+            Guard.Positive(stageDelay.Seconds, nameof(stageDelay), "s");
+            Guard.Positive(resistance.Ohms, nameof(resistance), "Ω");
+            Guard.NonNegative(capacitance.Farads, nameof(capacitance), "F");
             return new Time(gates * PerGateDelay(spacing, stageDelay, resistance, capacitance));
         }
 
