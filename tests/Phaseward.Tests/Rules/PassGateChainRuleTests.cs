@@ -343,6 +343,39 @@ namespace Phaseward.Tests.Rules
             Assert.DoesNotContain(new TelemetryMux().Check(new RulePolicy { MaxSeriesPassGates = 6 }).Findings, f => f.RuleId == RuleIds.SeriesPassGates);
         }
 
+        // The example and its fix in docs/rules/PW2001.md (keep them in step). By hand: as the five-gate chain above,
+        // but hop5 also drives an inverter (+2 fF gate load): hop5 4.5 fF, downstream +2 fF on every net:
+        //   Elmore = 4 kΩ·23 fF + 5 kΩ·(20.5 + 16.5 + 12.5 + 8.5 + 4.5) fF = 92 + 312.5 = 404.5 ps; ln 2 × = 280 ps;
+        //   restored: mean C (4·4 + 4.5)/5 = 4.1 fF, RC = 20.5 ps, t = 2.5·(ln 2·20.5 ps·3 + 20 ps) = 157 ps.
+        private sealed class TelemetryBus : Design
+        {
+            private readonly bool restored;
+
+            public TelemetryBus(bool restored) => this.restored = restored;
+
+            protected override void Describe(Circuit c)
+            {
+                var frame = c.Clock("frame", 20.Nanoseconds());
+                var sample = c.Input("salinity");
+                var hop1 = c.TransmissionGate(sample, frame.High, "hop1");
+                var hop2 = c.TransmissionGate(hop1, frame.High, "hop2");
+                var hop3 = c.TransmissionGate(restored ? c.Buffer(hop2, "fresh") : hop2, frame.High, "hop3");
+                var hop4 = c.TransmissionGate(hop3, frame.High, "hop4");
+                var hop5 = c.TransmissionGate(restored ? c.Buffer(hop4, "again") : hop4, frame.High, "hop5");
+                c.Output("bus", c.Inverter(hop5));
+            }
+        }
+
+        [Fact]
+        public void Documented_example_and_its_fix()
+        {
+            var finding = Assert.Single(new TelemetryBus(restored: false).Check().Findings, f => f.RuleId == RuleIds.SeriesPassGates);
+            Assert.Equal("5 pass gates in series without a restoring stage (limit 2): Elmore delay 405 ps (50% estimate 280 ps); "
+                         + "a restoring stage every 2 gates would give about 157 ps", finding.Message);
+            Assert.Equal("hop2\nhop4", finding.Properties["splitAfterDevices"]);
+            Assert.DoesNotContain(new TelemetryBus(restored: true).Check().Findings, f => f.RuleId == RuleIds.SeriesPassGates);
+        }
+
         private static string Name(Circuit c, string id) => c.ToNetlist().Devices[int.Parse(id, CultureInfo.InvariantCulture)].Name;
     }
 }
