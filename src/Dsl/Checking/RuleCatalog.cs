@@ -9,6 +9,9 @@ namespace Phaseward
         public static RuleDescriptor DesignFound { get; } = new(
             RuleIds.DesignFound, RuleTexts.DesignFoundTitle, RuleTexts.DesignFoundMessage, RuleCategories.Elaboration, Severity.Info, RuleTexts.DesignFoundDescription);
 
+        public static RuleDescriptor SeriesPassGates { get; } = new(
+            RuleIds.SeriesPassGates, RuleTexts.SeriesPassGatesTitle, RuleTexts.SeriesPassGatesMessage, RuleCategories.PassGatePaths, Severity.Warning,
+            RuleTexts.SeriesPassGatesDescription);
         public static RuleDescriptor DynamicNodeOnGatedClock { get; } = new(
             RuleIds.DynamicNodeOnGatedClock, RuleTexts.DynamicNodeOnGatedClockTitle, RuleTexts.DynamicNodeOnGatedClockMessage,
             RuleCategories.DynamicStorage, Severity.Warning, RuleTexts.DynamicNodeOnGatedClockDescription);
@@ -23,6 +26,7 @@ namespace Phaseward
 
         public static IReadOnlyList<RuleDescriptor> All { get; } = new[]
         {
+            SeriesPassGates,
             DesignFound,
             DynamicNodeOnGatedClock,
             ClockTooSlowForDynamicStorage,

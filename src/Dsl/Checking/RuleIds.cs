@@ -9,6 +9,8 @@ namespace Phaseward
         /// <summary>Temporary: proves the analyzer loads into a real build (replaced by the compile-time elaborator).</summary>
         public const string DesignFound = "PW9000";
 
+        /// <summary>Pass gates in series without a restoring stage.</summary>
+        public const string SeriesPassGates = "PW2001";
         /// <summary>A dynamic storage node floats while its gated clock is stopped, for longer than it retains its level.</summary>
         public const string DynamicNodeOnGatedClock = "PW3001";
 

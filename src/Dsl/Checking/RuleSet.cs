@@ -7,6 +7,7 @@ namespace Phaseward
     {
         public static IReadOnlyList<Rule> All { get; } = new Rule[]
         {
+            new PassGateChainRule(),
             new DynamicNodeOnGatedClockRule(),
             new ClockTooSlowForDynamicStorageRule(),
             new ChargeSharingRule(),

@@ -10,6 +10,13 @@ namespace Phaseward
         public const string DesignFoundMessage = "Phaseward checked design '{0}'";
         public const string DesignFoundDescription = "Reported once per design class to show that the Phaseward analyzers are loaded into the build.";
 
+        public const string SeriesPassGatesTitle = "Pass gates in series without a restoring stage";
+        public const string SeriesPassGatesMessage =
+            "{0} pass gates in series without a restoring stage (limit {1}): Elmore delay {2} (50% estimate {3}); a restoring stage every {4} gates would give about {5}";
+        public const string SeriesPassGatesDescription =
+            "A chain of pass gates with no restoring stage is an RC ladder: its delay grows with the square of its length and its edges slow down. "
+            + "The rule reports a chain longer than phaseward.max_series_pass_gates (default: the optimum restoring-stage spacing of the design's process, at least 2) "
+            + "at its first gate beyond the limit. Figures are first-order estimates.";
         public const string DynamicNodeOnGatedClockTitle = "Dynamic node on a clock that can be gated off";
         public const string DynamicNodeOnGatedClockMessage =
             "Dynamic node '{0}' floats while gated clock '{1}' is stopped {2} (declared maximum idle time: {3}), but keeps its level only {4} (C·ΔV/I_leak with C = {5}, ΔV = {6}, I_leak = {7})";

@@ -9,6 +9,9 @@ namespace Phaseward.Analyzers.Diagnostics
             RuleIds.DesignFound, RuleTexts.DesignFoundTitle, RuleTexts.DesignFoundMessage, RuleCategories.Elaboration,
             DiagnosticSeverity.Info, RuleTexts.DesignFoundDescription);
 
+        public static readonly DiagnosticDescriptor SeriesPassGates = DescriptorFactory.Create(
+            RuleIds.SeriesPassGates, RuleTexts.SeriesPassGatesTitle, RuleTexts.SeriesPassGatesMessage, RuleCategories.PassGatePaths,
+            DiagnosticSeverity.Warning, RuleTexts.SeriesPassGatesDescription);
         public static readonly DiagnosticDescriptor DynamicNodeOnGatedClock = DescriptorFactory.Create(
             RuleIds.DynamicNodeOnGatedClock, RuleTexts.DynamicNodeOnGatedClockTitle, RuleTexts.DynamicNodeOnGatedClockMessage,
             RuleCategories.DynamicStorage, DiagnosticSeverity.Warning, RuleTexts.DynamicNodeOnGatedClockDescription);
