@@ -11,6 +11,7 @@ namespace Tidewater
     {
         protected override void Describe(Circuit c)
         {
+            c.UseProcess(TidewaterProcess.Figures());
             var capture = c.Clock("capture", 2.Nanoseconds());
             var burstEnable = c.Input("burst_enable");
             var burst = c.ClockGate(capture, burstEnable, ClockStopLevel.Low, name: "burst");
@@ -26,6 +27,7 @@ namespace Tidewater
     {
         protected override void Describe(Circuit c)
         {
+            c.UseProcess(TidewaterProcess.Figures());
             var capture = c.Clock("capture", 2.Nanoseconds());
             var burstEnable = c.Input("burst_enable");
             var burst = c.ClockGate(capture, burstEnable, ClockStopLevel.Low, name: "burst");

@@ -4,24 +4,24 @@ namespace Tidewater
 {
     /// <summary>
     /// Hazard (pass gates in series). The telemetry front end picks one of eight sensor channels with a pass-gate mux
-    /// tree and steers it through a row of clocked pass gates to the packer, with no restoring stage anywhere: an RC
-    /// ladder whose delay grows with the square of its length. Figures are invented for this demo.
+    /// tree and routes it through a row of routing switches (pass gates enabled by the route bits) to the packer, with
+    /// no restoring stage anywhere: an RC ladder whose delay grows with the square of its length. Figures are invented.
     /// </summary>
     public sealed class ChannelSelect : Design
     {
         private const int SelectBits = 3;
-        private const int SteeringStages = 4;
+        private const int RouteStages = 4;
 
         protected override void Describe(Circuit c)
         {
-            var frame = c.Clock("frame", 5.Nanoseconds());
+            c.UseProcess(TidewaterProcess.Figures());
             var level = new Net[1 << SelectBits];
             for (var i = 0; i < level.Length; i++)
                 level[i] = c.Input($"channel{i}");
 
             var selected = MuxTree(c, level);
-            for (var stage = 0; stage < SteeringStages; stage++)
-                selected = c.TransmissionGate(selected, stage % 2 == 0 ? frame.High : frame.Low, $"steer{stage}");
+            for (var stage = 0; stage < RouteStages; stage++)
+                selected = c.TransmissionGate(selected, c.Input($"route{stage}"), $"routed{stage}");
 
             c.Output("packer_in", c.Inverter(selected));
         }
@@ -49,12 +49,12 @@ namespace Tidewater
         }
     }
 
-    /// <summary>The fix: a restoring buffer between the mux tree and the steering row splits the RC ladder.</summary>
+    /// <summary>The fix: restoring buffers after the mux tree and halfway along the routing row split the RC ladder.</summary>
     public sealed class ChannelSelectBuffered : Design
     {
         protected override void Describe(Circuit c)
         {
-            var frame = c.Clock("frame", 5.Nanoseconds());
+            c.UseProcess(TidewaterProcess.Figures());
             var channels = new Net[8];
             for (var i = 0; i < channels.Length; i++)
                 channels[i] = c.Input($"channel{i}");
@@ -62,9 +62,9 @@ namespace Tidewater
             var selected = c.Buffer(ChannelSelect.MuxTree(c, channels), "mux_out");
             for (var stage = 0; stage < 4; stage++)
             {
-                selected = c.TransmissionGate(selected, stage % 2 == 0 ? frame.High : frame.Low, $"steer{stage}");
+                selected = c.TransmissionGate(selected, c.Input($"route{stage}"), $"routed{stage}");
                 if (stage == 1)
-                    selected = c.Buffer(selected, "steer_restore");
+                    selected = c.Buffer(selected, "route_restore");
             }
 
             c.Output("packer_in", c.Inverter(selected));

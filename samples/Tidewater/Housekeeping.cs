@@ -20,7 +20,8 @@ namespace Tidewater
 
         protected override void Describe(Circuit c)
         {
-            var tick = c.Clock("housekeeping", 100.Microseconds());
+            c.UseProcess(TidewaterProcess.Figures());
+            var tick = c.Clock("housekeeping", 1.Milliseconds());
             var carry = c.Input("count_enable");
             for (var bit = 0; bit < counterBits; bit++)
             {
@@ -37,7 +38,8 @@ namespace Tidewater
     {
         protected override void Describe(Circuit c)
         {
-            var tick = c.Clock("housekeeping", 100.Microseconds());
+            c.UseProcess(TidewaterProcess.Figures());
+            var tick = c.Clock("housekeeping", 1.Milliseconds());
             var carry = c.Input("count_enable");
             for (var bit = 0; bit < 4; bit++)
             {

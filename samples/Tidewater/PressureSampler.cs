@@ -11,6 +11,7 @@ namespace Tidewater
     {
         protected override void Describe(Circuit c)
         {
+            c.UseProcess(TidewaterProcess.Figures());
             var sample = c.Clock("sample", 4.Nanoseconds());
             var decision = c.Input("comparator");
 

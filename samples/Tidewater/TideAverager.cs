@@ -10,6 +10,7 @@ namespace Tidewater
     {
         protected override void Describe(Circuit c)
         {
+            c.UseProcess(TidewaterProcess.Figures());
             var average = c.Clock("average", 8.Nanoseconds());
             var tide = c.Input("tide_bit");
 
@@ -25,6 +26,7 @@ namespace Tidewater
     {
         protected override void Describe(Circuit c)
         {
+            c.UseProcess(TidewaterProcess.Figures());
             var average = c.Clock("average", 8.Nanoseconds());
             var tide = c.Input("tide_bit");
 

@@ -15,7 +15,8 @@ namespace Phaseward
     /// The feedback search walks back from each pass driver's input through at most <see cref="FeedbackDepth"/>
     /// restoring stages and <see cref="FeedbackBreadth"/> nets, so the whole analysis stays linear in the netlist's
     /// size; a feedback loop longer than that is not recognised (the node is then treated as dynamic, which can only
-    /// add findings). NAND/NOR stages count as inverting stages of a loop whatever their other input is (a latch with
+    /// add findings). A net driven by data-controlled pass gates on a control and its inverse (a pass-gate mux) is
+    /// driven at every instant and is not a storage node. NAND/NOR stages count as inverting stages of a loop whatever their other input is (a latch with
     /// a reset gate in its loop is still static). The result is computed once per netlist and shared by the rules.
     /// </remarks>
     public static class StorageNodes
@@ -56,6 +57,8 @@ namespace Phaseward
                 if (!netlist.IsDrivenOnlyThroughPassDevices(net))
                     continue;
                 var drivers = netlist.DriversOf(net);
+                if (IsComplementaryMux(netlist, drivers))
+                    continue;
                 List<Device>? feedback = null;
                 foreach (var driver in drivers)
                     if (IsRestoredCopy(netlist, driver.Inputs[0], net))
@@ -68,6 +71,25 @@ namespace Phaseward
             }
 
             return new StorageMap(nodes, byNet);
+        }
+
+        // A pass-gate mux whose arms are controlled by a net and its inverse: one arm conducts at every instant, so the
+        // node is driven from the selected input, not stored. (Arms on decoded one-hot selects cannot be proven so and
+        // stay storage nodes.)
+        private static bool IsComplementaryMux(Netlist netlist, IReadOnlyList<Device> drivers)
+        {
+            HashSet<int>? controls = null;
+            foreach (var driver in drivers)
+                if (driver.DataControl is { } control)
+                    (controls ??= new HashSet<int>()).Add(control.Id);
+            if (controls is null || controls.Count < 2)
+                return false;
+
+            foreach (var id in controls)
+                foreach (var controlDriver in netlist.DriversOf(netlist.Nets[id]))
+                    if (controlDriver.Kind == DeviceKind.Inverter && controls.Contains(controlDriver.Inputs[0].Id))
+                        return true;
+            return false;
         }
 
         // True if 'source' is made from 'node' through restoring stages only, with an even number of inversions.
