@@ -9,6 +9,20 @@ namespace Phaseward
         public static RuleDescriptor DesignFound { get; } = new(
             RuleIds.DesignFound, RuleTexts.DesignFoundTitle, RuleTexts.DesignFoundMessage, RuleCategories.Elaboration, Severity.Info, RuleTexts.DesignFoundDescription);
 
+        public static RuleDescriptor SameWindowLatches { get; } = new(
+            RuleIds.SameWindowLatches, RuleTexts.SameWindowLatchesTitle, RuleTexts.SameWindowLatchesMessage, RuleCategories.ClockPhases, Severity.Warning, RuleTexts.SameWindowLatchesDescription);
+
+        public static RuleDescriptor OverlapRace { get; } = new(
+            RuleIds.OverlapRace, RuleTexts.OverlapRaceTitle, RuleTexts.OverlapRaceMessage, RuleCategories.ClockPhases, Severity.Warning, RuleTexts.OverlapRaceDescription);
+
+        public static RuleDescriptor RegisterSetup { get; } = new(
+            RuleIds.RegisterSetup, RuleTexts.RegisterSetupTitle, RuleTexts.RegisterSetupMessage, RuleCategories.Timing, Severity.Warning, RuleTexts.RegisterSetupDescription);
+
+        public static RuleDescriptor RegisterHold { get; } = new(
+            RuleIds.RegisterHold, RuleTexts.RegisterHoldTitle, RuleTexts.RegisterHoldMessage, RuleCategories.Timing, Severity.Warning, RuleTexts.RegisterHoldDescription);
+
+        public static RuleDescriptor LatchBorrowing { get; } = new(
+            RuleIds.LatchBorrowing, RuleTexts.LatchBorrowingTitle, RuleTexts.LatchBorrowingMessage, RuleCategories.Timing, Severity.Warning, RuleTexts.LatchBorrowingDescription);
         public static RuleDescriptor SeriesPassGates { get; } = new(
             RuleIds.SeriesPassGates, RuleTexts.SeriesPassGatesTitle, RuleTexts.SeriesPassGatesMessage, RuleCategories.PassGatePaths, Severity.Warning,
             RuleTexts.SeriesPassGatesDescription);
@@ -28,6 +42,11 @@ namespace Phaseward
         {
             SeriesPassGates,
             DesignFound,
+            SameWindowLatches,
+            OverlapRace,
+            RegisterSetup,
+            RegisterHold,
+            LatchBorrowing,
             DynamicNodeOnGatedClock,
             ClockTooSlowForDynamicStorage,
             ChargeSharing,

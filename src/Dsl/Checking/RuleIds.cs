@@ -9,6 +9,20 @@ namespace Phaseward
         /// <summary>Temporary: proves the analyzer loads into a real build (replaced by the compile-time elaborator).</summary>
         public const string DesignFound = "PW9000";
 
+        /// <summary>Two latches transparent in the same window in series (or a latch feeding itself in its own phase).</summary>
+        public const string SameWindowLatches = "PW1001";
+
+        /// <summary>A latch pair on complementary phases races through the clock overlap.</summary>
+        public const string OverlapRace = "PW1002";
+
+        /// <summary>A register-to-register path misses the capturing register's setup time.</summary>
+        public const string RegisterSetup = "PW4001";
+
+        /// <summary>A register-to-register path is shorter than the capturing register's hold time (plus clock skew).</summary>
+        public const string RegisterHold = "PW4002";
+
+        /// <summary>A two-phase latch path arrives after the capturing latch closes, even with time borrowing.</summary>
+        public const string LatchBorrowing = "PW4003";
         /// <summary>Pass gates in series without a restoring stage.</summary>
         public const string SeriesPassGates = "PW2001";
         /// <summary>A dynamic storage node floats while its gated clock is stopped, for longer than it retains its level.</summary>

@@ -7,6 +7,10 @@ namespace Phaseward
     {
         public static IReadOnlyList<Rule> All { get; } = new Rule[]
         {
+            new SameWindowLatchesRule(),
+            new OverlapRaceRule(),
+            new RegisterTimingRule(),
+            new LatchBorrowingRule(),
             new PassGateChainRule(),
             new DynamicNodeOnGatedClockRule(),
             new ClockTooSlowForDynamicStorageRule(),

@@ -10,6 +10,25 @@ namespace Phaseward
         public const string DesignFoundMessage = "Phaseward checked design '{0}'";
         public const string DesignFoundDescription = "Reported once per design class to show that the Phaseward analyzers are loaded into the build.";
 
+        public const string SameWindowLatchesTitle = "Latches transparent in the same phase are in series";
+        public const string SameWindowLatchesMessage = "Latch '{0}' takes its data from latch '{1}' and both are transparent in {2}: data can run through both in one phase";
+        public const string SameWindowLatchesDescription = "A data path runs from one latch's storage node to another latch's input through logic only, and both latches are transparent in the same window of the same root clock (gated and buffered copies included). Data launched through the first latch runs straight on through the second in the same phase, so the pair stores nothing for a cycle. Put the second latch on the complementary phase, or insert a latch of the complementary phase between them.";
+
+        public const string OverlapRaceTitle = "Clock overlap lets data race through complementary latches";
+        public const string OverlapRaceMessage = "Latch '{0}' can catch data launched through latch '{1}' during the {2} overlap of clock '{3}': the fastest path takes {4} but both pass gates conduct together for {5} (margin {6})";
+        public const string OverlapRaceDescription = "Two latches on complementary phases of one clock are both transparent while the clock and its late complement overlap. Data entering the first latch when it opens must not reach the second latch's storage node before the second latch closes: the shortest delay through the first latch, the path and the second latch's pass gate must exceed the overlap. For a master-slave register this is t(TG1) + t(I1) + t(TG2) against the 0-0 overlap (rising-edge register).";
+
+        public const string RegisterSetupTitle = "Register setup time violated";
+        public const string RegisterSetupMessage = "Register '{0}' misses its setup time on the path from register '{1}': clock-to-output {2} + path {3} + setup {4} = {5} exceeds the {6} available (slack {7})";
+        public const string RegisterSetupDescription = "On a register-to-register path the launching register's clock-to-output, the slowest path and the capturing register's setup time must fit in the time between the launching and the capturing edge (a clock period, corrected for clock skew).";
+
+        public const string RegisterHoldTitle = "Register hold time violated";
+        public const string RegisterHoldMessage = "Register '{0}' can lose its data on the path from register '{1}': minimum clock-to-output {2} + shortest path {3} = {4} is less than its hold time {5} plus clock skew {6} (slack {7})";
+        public const string RegisterHoldDescription = "New data launched by a register must not reach the next register's input before that register's master has closed: the shortest clock-to-output plus the shortest path must exceed the capturing register's hold time (the clock overlap after its edge) plus the clock skew between the two registers.";
+
+        public const string LatchBorrowingTitle = "Latch path too slow even with time borrowing";
+        public const string LatchBorrowingMessage = "Data from latch '{1}' reaches latch '{0}' {2} after '{0}' opens, but its window ({3}) less its setup time ({4}) allows only {5} (slack {6}; '{1}' had borrowed {7})";
+        public const string LatchBorrowingDescription = "In a two-phase latch pipeline data may arrive at a latch after it opens and pass straight through (time borrowing), but it must arrive before the latch closes, less the latch's setup time. Borrowing is carried along the chain of latches.";
         public const string SeriesPassGatesTitle = "Pass gates in series without a restoring stage";
         public const string SeriesPassGatesMessage =
             "{0} pass gates in series without a restoring stage (limit {1}): Elmore delay {2} (50% estimate {3}); a restoring stage every {4} gates would give about {5}";

@@ -1,0 +1,37 @@
+using System.Linq;
+
+namespace Phaseward.Tests.Rules.ClockPhases;
+
+/// <summary>Shared set-up for the clock-phase and timing tests.</summary>
+internal static class Figures
+{
+    /// <summary>
+    /// A process in which every net is exactly 10 fF (wire only, no gate or diffusion share), pass gates are 5 kΩ and
+    /// restoring stages 4 kΩ. Test-only figures chosen so that stage delays are round by hand:
+    /// t_TG = 0.69 · 5 kΩ · 10 fF = 34.5 ps, t_inv = 0.69 · 4 kΩ · 10 fF = 27.6 ps.
+    /// </summary>
+    public static Process Flat { get; } = new()
+    {
+        Name = "flat 10 fF (test figures)",
+        WireCapacitance = 10.Femtofarads(),
+        GateCapacitance = 0.Femtofarads(),
+        DiffusionCapacitance = 0.Femtofarads(),
+        PassGateResistance = 5.Kiloohms(),
+        DriverResistance = 4.Kiloohms(),
+    };
+
+    public const double TgPs = 34.5;
+    public const double InvPs = 27.6;
+
+    public static Circuit NewCircuit(string name, bool flat = true)
+    {
+        var circuit = new Circuit(name);
+        if (flat) circuit.UseProcess(Flat);
+        return circuit;
+    }
+
+    public static Finding[] Run(Rule rule, Circuit circuit, RulePolicy? policy = null)
+        => rule.Check(new RuleContext(circuit.ToNetlist(), policy ?? RulePolicy.Default)).ToArray();
+
+    public static double Ps(Time t) => t.Seconds * 1e12;
+}
