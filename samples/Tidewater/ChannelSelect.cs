@@ -4,7 +4,7 @@ namespace Tidewater
 {
     /// <summary>
     /// Hazard (pass gates in series). The telemetry front end picks one of eight sensor channels with a pass-gate mux
-    /// tree and routes it through a row of routing switches (pass gates enabled by the route bits) to the packer, with
+    /// tree and routes it through a row of routing switches (pass gates on one route enable) to the packer, with
     /// no restoring stage anywhere: an RC ladder whose delay grows with the square of its length. Figures are invented.
     /// </summary>
     public sealed class ChannelSelect : Design
@@ -20,8 +20,9 @@ namespace Tidewater
                 level[i] = c.Input($"channel{i}");
 
             var selected = MuxTree(c, level);
+            var routeEnable = c.Input("route_enable");
             for (var stage = 0; stage < RouteStages; stage++)
-                selected = c.TransmissionGate(selected, c.Input($"route{stage}"), $"routed{stage}");
+                selected = c.TransmissionGate(selected, routeEnable, $"routed{stage}");
 
             c.Output("packer_in", c.Inverter(selected));
         }
@@ -60,9 +61,10 @@ namespace Tidewater
                 channels[i] = c.Input($"channel{i}");
 
             var selected = c.Buffer(ChannelSelect.MuxTree(c, channels), "mux_out");
+            var routeEnable = c.Input("route_enable");
             for (var stage = 0; stage < 4; stage++)
             {
-                selected = c.TransmissionGate(selected, c.Input($"route{stage}"), $"routed{stage}");
+                selected = c.TransmissionGate(selected, routeEnable, $"routed{stage}");
                 if (stage == 1)
                     selected = c.Buffer(selected, "route_restore");
             }

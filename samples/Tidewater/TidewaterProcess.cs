@@ -17,7 +17,7 @@ namespace Tidewater
             StorageLeakage = 5.Picoamperes(),
             ToleratedDroop = 0.3.Volts(),
             Supply = 1.2.Volts(),
-            ComplementSkew = 30.Picoseconds(),
+            ComplementSkew = 15.Picoseconds(),
         };
     }
 }

@@ -109,6 +109,12 @@ namespace Phaseward
                 if (!ReferenceEquals(driver, except))
                     others.Add(driver);
 
+            // A driver switched by the same control net as the device conducts whenever the device does.
+            if (device.DataControl is { } control)
+                foreach (var driver in others)
+                    if (ReferenceEquals(driver.DataControl, control))
+                        return false;
+
             if (device.ClockControl is { } phase)
             {
                 var window = PhaseWindow.Of(phase);

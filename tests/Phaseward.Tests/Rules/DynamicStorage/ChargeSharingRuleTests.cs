@@ -75,6 +75,27 @@ public class ChargeSharingRuleTests
     }
 
     [Fact]
+    public void GatesSwitchedByOneControlNetConductTogetherAndDoNotShare()
+    {
+        // A route switched by one enable: whenever the second gate conducts, so does the first, which keeps the middle
+        // node driven from the input. A second, independent enable brings the sharing back.
+        var (_, shared) = Check(c =>
+        {
+            var enable = c.Input("route_enable");
+            var middle = c.TransmissionGate(c.Input("d"), enable, "middle");
+            c.Inverter(c.TransmissionGate(middle, enable, "end"), "q");
+        });
+        Assert.Empty(shared);
+
+        var (_, independent) = Check(c =>
+        {
+            var middle = c.TransmissionGate(c.Input("d"), c.Input("first_enable"), "middle");
+            c.Inverter(c.TransmissionGate(middle, c.Input("second_enable"), "end"), "q");
+        });
+        Assert.Equal("middle", Assert.Single(independent).Properties[DynamicStorageProperties.Node]);
+    }
+
+    [Fact]
     public void DrivenOrRestoredNodesDoNotShareCharge()
     {
         var (_, findings) = Check(c =>
