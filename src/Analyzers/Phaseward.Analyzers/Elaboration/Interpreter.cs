@@ -157,6 +157,24 @@ namespace Phaseward.Analyzers.Elaboration
 
         public DesignCatalog Catalog { get; }
 
+        /// <summary>The syntax tree with the given path (null if none).</summary>
+        public SyntaxTree? TreeAt(string path)
+        {
+            var trees = treesByPath ??= BuildTreeIndex();
+            return trees.TryGetValue(path, out var tree) ? tree : null;
+        }
+
+        private Dictionary<string, SyntaxTree>? treesByPath;
+
+        private Dictionary<string, SyntaxTree> BuildTreeIndex()
+        {
+            var index = new Dictionary<string, SyntaxTree>(StringComparer.Ordinal);
+            foreach (var tree in Compilation.SyntaxTrees)
+                if (!index.ContainsKey(tree.FilePath))
+                    index.Add(tree.FilePath, tree);
+            return index;
+        }
+
         public bool IsInSource(ISymbol symbol)
             => SymbolEqualityComparer.Default.Equals(symbol.ContainingAssembly, Compilation.Assembly) && symbol.DeclaringSyntaxReferences.Length > 0;
 
