@@ -180,8 +180,6 @@ namespace Phaseward.Analyzers.Elaboration
             // A partial method's implementation is the part with a body.
             if (method.PartialImplementationPart is { } implementation)
                 syntax = implementation.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken) ?? syntax;
-            if (syntax is ArrowExpressionClauseSyntax arrow)
-                syntax = arrow.Parent ?? syntax;
 
             var operation = ModelOf(syntax).GetOperation(syntax, cancellationToken);
             return operation switch
@@ -189,6 +187,8 @@ namespace Phaseward.Analyzers.Elaboration
                 IMethodBodyOperation body => (IOperation?)body.BlockBody ?? body.ExpressionBody,
                 ILocalFunctionOperation local => (IOperation?)local.Body ?? local.IgnoredBody,
                 IBlockOperation block => block,
+                // An expression-bodied property or indexer getter ('=> value').
+                { } expression when syntax is ArrowExpressionClauseSyntax => expression,
                 _ => null,
             };
         }
