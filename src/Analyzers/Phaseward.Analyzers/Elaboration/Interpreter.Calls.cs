@@ -46,7 +46,7 @@ namespace Phaseward.Analyzers.Elaboration
         /// <summary>Calls the real DSL (or library) member behind <paramref name="method"/>, telling the circuit where the call is.</summary>
         private object? CallClr(IOperation site, IMethodSymbol method, object? receiver, object?[] arguments)
         {
-            var member = DslMembers.Find(method);
+            var member = session.MemberOf(method);
             if (member is null)
                 return Unsupported(site, "the call to " + Describe(method),
                     "the Phaseward assembly loaded by the compiler has no such member (is it older than the one the project references?)");

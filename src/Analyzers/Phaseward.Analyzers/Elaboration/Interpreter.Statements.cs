@@ -81,6 +81,10 @@ namespace Phaseward.Analyzers.Elaboration
                 case ISwitchOperation switchStatement:
                     return Switch(switchStatement, frame);
 
+                case IThrowOperation thrown:
+                    Evaluate(thrown, frame);
+                    return Completion.Normal;
+
                 case IEmptyOperation:
                 case ILocalFunctionOperation:
                     return Completion.Normal;

@@ -140,6 +140,7 @@ namespace Phaseward.Analyzers.Elaboration
     internal sealed class ElaborationSession
     {
         private readonly ConcurrentDictionary<ISymbol, IOperation?> bodies = new(SymbolEqualityComparer.Default);
+        private readonly ConcurrentDictionary<IMethodSymbol, System.Reflection.MethodBase?> members = new(SymbolEqualityComparer.Default);
 
         public ElaborationSession(Compilation compilation, INamedTypeSymbol designType)
         {
@@ -177,6 +178,9 @@ namespace Phaseward.Analyzers.Elaboration
 
         public bool IsInSource(ISymbol symbol)
             => SymbolEqualityComparer.Default.Equals(symbol.ContainingAssembly, Compilation.Assembly) && symbol.DeclaringSyntaxReferences.Length > 0;
+
+        /// <summary>The run-time member behind a DSL or library method symbol (cached per symbol of this compilation).</summary>
+        public System.Reflection.MethodBase? MemberOf(IMethodSymbol method) => members.GetOrAdd(method, DslMembers.Find);
 
         public IOperation? BodyOf(ISymbol method, Func<ISymbol, IOperation?> factory) => bodies.GetOrAdd(method.OriginalDefinition, factory);
     }
