@@ -11,6 +11,7 @@ namespace Tidewater
             Design[] designs =
             {
                 new PressureSampler(),
+                new StrainLanes(),
             };
 
             var findings = 0;
