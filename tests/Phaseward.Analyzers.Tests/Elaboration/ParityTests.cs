@@ -54,18 +54,24 @@ public class ParityTests
             .OrderBy(p => p).ToArray();
         var samples = InMemoryDesigns.FromFiles(files);
         Assert.NotEmpty(samples.DesignNames);
+        // A sample may show PW9001 (StrainLanes does, on a configuration check that makes no devices): its netlist must
+        // still match exactly, and nothing else may be reported.
         foreach (var design in samples.DesignNames)
-            AssertParity(samples, design);
+            AssertParity(samples, design, allowNotElaborated: true);
     }
 
     internal static void AssertParity(InMemoryDesigns designs, string design, params object[] constructorArguments)
+        => AssertParity(designs, design, allowNotElaborated: false, constructorArguments);
+
+    internal static void AssertParity(InMemoryDesigns designs, string design, bool allowNotElaborated, params object[] constructorArguments)
     {
         var compileTime = designs.CompileTime(design);
         var runTime = designs.RunTime(design, constructorArguments);
         Assert.NotNull(compileTime.Netlist);
         Assert.True(runTime.Devices.Count > 0, design + " made no devices at run time");
         Assert.Equal(NetlistText.Write(runTime, includeSpans: true), NetlistText.Write(compileTime.Netlist!, includeSpans: true));
-        Assert.True(compileTime.Issues.Count == 0, design + ": " + string.Join("\n", compileTime.Issues));
+        var issues = compileTime.Issues.Where(i => !allowNotElaborated || i.RuleId != RuleIds.NotElaborated).ToList();
+        Assert.True(issues.Count == 0, design + ": " + string.Join("\n", issues));
         Assert.Equal(runTime.Devices.Count, compileTime.Netlist!.Devices.Count);
     }
 }
