@@ -225,6 +225,29 @@ public class DesignThrowsTests
     }
 
     [Fact]
+    public void ACallThatThrowsOnEveryIterationStopsAfterAHundredExceptions()
+    {
+        var result = new InMemoryDesigns(("/src/Repeat.cs", """
+            using Phaseward;
+
+            public sealed class Repeat : Design
+            {
+                protected override void Describe(Circuit c)
+                {
+                    var n = c.Input("n");
+                    for (var i = 0; i < 1_000_000; i++)
+                        c.SetCapacitance(n, -i.Femtofarads());
+                }
+            }
+            """)).CompileTime("Repeat");
+        var issue = Assert.Single(result.Issues);
+        Assert.Equal(RuleIds.DesignThrows, issue.RuleId);
+        // i = 0 throws too (a capacitance must be positive). 100 iterations of four steps each (iteration, Femtofarads,
+        // the Capacitance negation operator, SetCapacitance) plus c.Input, then elaboration stops.
+        Assert.Equal(1 + 4 * Interpreter.MaxThrows, result.Steps);
+    }
+
+    [Fact]
     public void UserThrowStopsTheDesignWithItsMessage()
     {
         var result = new InMemoryDesigns(("/src/Guarded.cs", """

@@ -17,6 +17,10 @@ namespace Phaseward.Analyzers.Elaboration
 
             switch (operation)
             {
+                case IInvalidOperation:
+                    // Code that does not compile: the compiler reports it; the elaborator only skips what depends on it.
+                    return Unknown.Value;
+
                 case IConversionOperation conversion:
                     return Convert(conversion, Evaluate(conversion.Operand, frame), frame);
 

@@ -89,6 +89,10 @@ namespace Phaseward.Analyzers.Elaboration
                 case ILocalFunctionOperation:
                     return Completion.Normal;
 
+                case IInvalidOperation:
+                    Poison(statement, frame);
+                    return Completion.Normal;
+
                 default:
                     Unsupported(statement, StatementName(statement), "this kind of statement is outside the subset the elaborator interprets");
                     Poison(statement, frame);

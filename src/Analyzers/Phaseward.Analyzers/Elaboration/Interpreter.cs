@@ -62,8 +62,22 @@ namespace Phaseward.Analyzers.Elaboration
             return Unknown.Value;
         }
 
+        /// <summary>
+        /// How many exceptions the design may throw (and the elaborator step over) before elaboration stops. At run time the
+        /// first one ends Describe; stepping over a few keeps the rest of the design checked, but a loop that throws on
+        /// every iteration would otherwise spend its whole step budget in exception handling.
+        /// </summary>
+        public const int MaxThrows = 100;
+
+        private int throws;
+
         /// <summary>Reports PW9003 at the site: the design throws here when it runs.</summary>
-        public void Throws(SyntaxNode site, string message) => Report(RuleIds.DesignThrows, site, DesignName, message);
+        public void Throws(SyntaxNode site, string message)
+        {
+            Report(RuleIds.DesignThrows, site, DesignName, message);
+            if (++throws >= MaxThrows && !Silent)
+                throw new ElaborationStopped();
+        }
 
         public void Report(string ruleId, SyntaxNode site, params string[] arguments)
         {
