@@ -1,9 +1,10 @@
 namespace Phaseward.Analyzers.Elaboration
 {
     /// <summary>
-    /// How much work the elaborator may do for one design. One step is one loop iteration or one call (to a method of
-    /// the design, a helper, a local function, the DSL or the .NET library); straight-line code between them is free,
-    /// because it is bounded by the length of the source.
+    /// How much work the elaborator may do for one design. One step is one loop iteration or one call (a method, local
+    /// function, operator or constructor of the design's code, the DSL or System.Math, or a property getter written in the
+    /// design's code); reading a DSL property and straight-line code between calls are free, because they are bounded by
+    /// the length of the source.
     /// </summary>
     internal readonly struct ElaborationLimits : System.IEquatable<ElaborationLimits>
     {

@@ -12,7 +12,9 @@ namespace ParityDesigns
             var a = c.Input("a");
             var b = c.Input("b");
             var n = c.Nand(a, b, "n1");
-            var x = c.Inverter(n);
+            // Split over lines: run time records the line of the call's '(' (C#'s [CallerLineNumber]), as must the elaborator.
+            var x = c
+                .Inverter(n);
             var latched = c.DynamicLatch(x, clk.High, "lat");
             var held = c.StaticLatch(latched, clk.High.Complement);
             c.SetCapacitance(latched, 3.5.Femtofarads());
@@ -70,7 +72,7 @@ namespace ParityDesigns
                 var x = c.Input($"d{row}");
                 for (var col = 0; col <= row + 1; col++)
                 {
-                    x = col % 2 == 0 ? c.DynamicLatch(x, clk.High, $"r{row}c{col}") : c.DynamicLatch(x, clk.Low, $"r{row}c{col}");
+                    x = col % 2 == 0 ? c.DynamicLatch(x, clk.High, $"r{row}c{col}") : c.DynamicLatch(x, clk.Low, $"r{row}c{col:D2}|{row,3}");
                     if (col == 2) break;
                 }
 
