@@ -19,6 +19,7 @@ namespace Tidewater
                 new TideAveragerTwoPhase(),
                 new Housekeeping(),
                 new HousekeepingStatic(),
+                new StrainLanes(),
             };
 
             var findings = 0;

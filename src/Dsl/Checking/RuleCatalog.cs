@@ -6,8 +6,21 @@ namespace Phaseward
     /// <summary>Every rule's descriptor, keyed by ID: the one source of titles and messages for both front ends.</summary>
     public static class RuleCatalog
     {
-        public static RuleDescriptor DesignFound { get; } = new(
-            RuleIds.DesignFound, RuleTexts.DesignFoundTitle, RuleTexts.DesignFoundMessage, RuleCategories.Elaboration, Severity.Info, RuleTexts.DesignFoundDescription);
+        public static RuleDescriptor NotElaborated { get; } = new(
+            RuleIds.NotElaborated, RuleTexts.NotElaboratedTitle, RuleTexts.NotElaboratedMessage, RuleCategories.Elaboration,
+            Severity.Info, RuleTexts.NotElaboratedDescription);
+
+        public static RuleDescriptor ElaborationBudgetExceeded { get; } = new(
+            RuleIds.ElaborationBudgetExceeded, RuleTexts.ElaborationBudgetExceededTitle, RuleTexts.ElaborationBudgetExceededMessage,
+            RuleCategories.Elaboration, Severity.Warning, RuleTexts.ElaborationBudgetExceededDescription);
+
+        public static RuleDescriptor DesignThrows { get; } = new(
+            RuleIds.DesignThrows, RuleTexts.DesignThrowsTitle, RuleTexts.DesignThrowsMessage, RuleCategories.Elaboration,
+            Severity.Error, RuleTexts.DesignThrowsDescription);
+
+        public static RuleDescriptor InvalidOption { get; } = new(
+            RuleIds.InvalidOption, RuleTexts.InvalidOptionTitle, RuleTexts.InvalidOptionMessage, RuleCategories.Elaboration,
+            Severity.Warning, RuleTexts.InvalidOptionDescription);
 
         public static RuleDescriptor SameWindowLatches { get; } = new(
             RuleIds.SameWindowLatches, RuleTexts.SameWindowLatchesTitle, RuleTexts.SameWindowLatchesMessage, RuleCategories.ClockPhases, Severity.Warning, RuleTexts.SameWindowLatchesDescription);
@@ -41,7 +54,6 @@ namespace Phaseward
         public static IReadOnlyList<RuleDescriptor> All { get; } = new[]
         {
             SeriesPassGates,
-            DesignFound,
             SameWindowLatches,
             OverlapRace,
             RegisterSetup,
@@ -50,6 +62,10 @@ namespace Phaseward
             DynamicNodeOnGatedClock,
             ClockTooSlowForDynamicStorage,
             ChargeSharing,
+            NotElaborated,
+            ElaborationBudgetExceeded,
+            DesignThrows,
+            InvalidOption,
         };
 
         private static readonly Dictionary<string, RuleDescriptor> ById = All.ToDictionary(d => d.Id);

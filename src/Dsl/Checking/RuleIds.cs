@@ -6,8 +6,6 @@ namespace Phaseward
     /// </summary>
     public static class RuleIds
     {
-        /// <summary>Temporary: proves the analyzer loads into a real build (replaced by the compile-time elaborator).</summary>
-        public const string DesignFound = "PW9000";
 
         /// <summary>Two latches transparent in the same window in series (or a latch feeding itself in its own phase).</summary>
         public const string SameWindowLatches = "PW1001";
@@ -33,5 +31,16 @@ namespace Phaseward
 
         /// <summary>A pass device joins a charged floating node to another floating node and the shared level droops too far.</summary>
         public const string ChargeSharing = "PW3003";
+        /// <summary>Part of a design could not be elaborated at compile time (outside the supported subset).</summary>
+        public const string NotElaborated = "PW9001";
+
+        /// <summary>Compile-time elaboration stopped: the step budget or the call-depth limit was reached.</summary>
+        public const string ElaborationBudgetExceeded = "PW9002";
+
+        /// <summary>The design throws while it is elaborated (a DSL call rejected its arguments, or the code throws).</summary>
+        public const string DesignThrows = "PW9003";
+
+        /// <summary>A <c>phaseward.</c> option in .editorconfig has a value that cannot be used.</summary>
+        public const string InvalidOption = "PW9004";
     }
 }

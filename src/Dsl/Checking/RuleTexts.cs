@@ -6,9 +6,6 @@ namespace Phaseward
     /// </summary>
     public static class RuleTexts
     {
-        public const string DesignFoundTitle = "Phaseward checked a design";
-        public const string DesignFoundMessage = "Phaseward checked design '{0}'";
-        public const string DesignFoundDescription = "Reported once per design class to show that the Phaseward analyzers are loaded into the build.";
 
         public const string SameWindowLatchesTitle = "Latches transparent in the same phase are in series";
         public const string SameWindowLatchesMessage = "Latch '{0}' takes its data from latch '{1}' and both are transparent in {2}: data can run through both in one phase";
@@ -53,5 +50,29 @@ namespace Phaseward
             "When '{0}' conducts, floating node '{1}' (C1 = {2}) shares its charge with floating node '{3}' (C2 = {4}): a {5} level settles at {6}, a droop of {7}, more than the tolerated {8}";
         public const string ChargeSharingDescription =
             "A pass device that opens between a charged floating node and another floating node shares the charge between them: the level settles at V·C1/(C1+C2), a droop of V·C2/(C1+C2) in the worst case (the other node at the opposite level). First-order estimate by conservation of charge.";
+        public const string NotElaboratedTitle = "Part of the design could not be elaborated at compile time";
+        public const string NotElaboratedMessage = "Phaseward could not elaborate {0} here: {1}; what depends on it is skipped and the rest of design '{2}' is still checked";
+        public const string NotElaboratedDescription =
+            "The compile-time elaborator interprets Describe() and the code it calls. Code outside the subset it understands is not guessed: " +
+            "it is reported once, whatever depends on its value is skipped, and the rest of the design is still checked. Run Design.Check() " +
+            "at run time to check the whole design.";
+
+        public const string ElaborationBudgetExceededTitle = "Compile-time elaboration stopped at its budget";
+        public const string ElaborationBudgetExceededMessage = "Phaseward stopped elaborating design '{0}' here: {1}; the part elaborated so far is still checked";
+        public const string ElaborationBudgetExceededDescription =
+            "A step budget (loop iterations and calls) and a call-depth limit keep the editor responsive when a loop or a recursion does " +
+            "not end. Raise phaseward.elaboration_step_budget or phaseward.elaboration_recursion_limit if the design is merely large.";
+
+        public const string DesignThrowsTitle = "The design throws while it is elaborated";
+        public const string DesignThrowsMessage = "Design '{0}' throws here when it is elaborated: {1}";
+        public const string DesignThrowsDescription =
+            "A DSL call rejected its arguments (for example a negative capacitance), or the design's own code throws. At run time " +
+            "Design.Elaborate() would stop here with this exception.";
+
+        public const string InvalidOptionTitle = "Invalid Phaseward option";
+        public const string InvalidOptionMessage = "The value '{1}' of option '{0}' is not valid: expected {2}; the default ({3}) is used";
+        public const string InvalidOptionDescription =
+            "A key prefixed 'phaseward.' in .editorconfig or .globalconfig has a value Phaseward cannot read. The default is used instead. " +
+            "See docs/configuration.md for each key's format.";
     }
 }

@@ -1,3 +1,5 @@
+using System.Collections.Generic;
+using System.Collections.Immutable;
 using Microsoft.CodeAnalysis;
 
 namespace Phaseward.Analyzers.Diagnostics
@@ -5,10 +7,6 @@ namespace Phaseward.Analyzers.Diagnostics
     /// <summary>Every descriptor Phaseward reports, built from the rules' constant IDs and texts.</summary>
     internal static class Descriptors
     {
-        public static readonly DiagnosticDescriptor DesignFound = DescriptorFactory.Create(
-            RuleIds.DesignFound, RuleTexts.DesignFoundTitle, RuleTexts.DesignFoundMessage, RuleCategories.Elaboration,
-            DiagnosticSeverity.Info, RuleTexts.DesignFoundDescription);
-
         public static readonly DiagnosticDescriptor SameWindowLatches = DescriptorFactory.Create(
             RuleIds.SameWindowLatches, RuleTexts.SameWindowLatchesTitle, RuleTexts.SameWindowLatchesMessage, RuleCategories.ClockPhases,
             DiagnosticSeverity.Warning, RuleTexts.SameWindowLatchesDescription);
@@ -42,5 +40,54 @@ namespace Phaseward.Analyzers.Diagnostics
         public static readonly DiagnosticDescriptor ChargeSharing = DescriptorFactory.Create(
             RuleIds.ChargeSharing, RuleTexts.ChargeSharingTitle, RuleTexts.ChargeSharingMessage,
             RuleCategories.DynamicStorage, DiagnosticSeverity.Warning, RuleTexts.ChargeSharingDescription);
+        public static readonly DiagnosticDescriptor NotElaborated = DescriptorFactory.Create(
+            RuleIds.NotElaborated, RuleTexts.NotElaboratedTitle, RuleTexts.NotElaboratedMessage, RuleCategories.Elaboration,
+            DiagnosticSeverity.Info, RuleTexts.NotElaboratedDescription);
+
+        public static readonly DiagnosticDescriptor ElaborationBudgetExceeded = DescriptorFactory.Create(
+            RuleIds.ElaborationBudgetExceeded, RuleTexts.ElaborationBudgetExceededTitle, RuleTexts.ElaborationBudgetExceededMessage,
+            RuleCategories.Elaboration, DiagnosticSeverity.Warning, RuleTexts.ElaborationBudgetExceededDescription);
+
+        public static readonly DiagnosticDescriptor DesignThrows = DescriptorFactory.Create(
+            RuleIds.DesignThrows, RuleTexts.DesignThrowsTitle, RuleTexts.DesignThrowsMessage, RuleCategories.Elaboration,
+            DiagnosticSeverity.Error, RuleTexts.DesignThrowsDescription);
+
+        public static readonly DiagnosticDescriptor InvalidOption = DescriptorFactory.Create(
+            RuleIds.InvalidOption, RuleTexts.InvalidOptionTitle, RuleTexts.InvalidOptionMessage, RuleCategories.Elaboration,
+            DiagnosticSeverity.Warning, RuleTexts.InvalidOptionDescription);
+
+        // Add each new descriptor here too: the finding-to-diagnostic mapping looks descriptors up by rule ID.
+        private static readonly DiagnosticDescriptor[] All =
+        {
+            SameWindowLatches,
+            OverlapRace,
+            SeriesPassGates,
+            DynamicNodeOnGatedClock,
+            ClockTooSlowForDynamicStorage,
+            ChargeSharing,
+            RegisterSetup,
+            RegisterHold,
+            LatchBorrowing,
+            NotElaborated,
+            ElaborationBudgetExceeded,
+            DesignThrows,
+            InvalidOption,
+        };
+
+        private static readonly ImmutableDictionary<string, DiagnosticDescriptor> ById = CreateLookup();
+
+        /// <summary>The descriptor of a rule ID (from <see cref="RuleIds"/>), or null if none is declared.</summary>
+        public static DiagnosticDescriptor? Find(string id) => ById.TryGetValue(id, out var descriptor) ? descriptor : null;
+
+        private static ImmutableDictionary<string, DiagnosticDescriptor> CreateLookup()
+        {
+            var builder = ImmutableDictionary.CreateBuilder<string, DiagnosticDescriptor>();
+            foreach (var descriptor in All)
+                builder.Add(descriptor.Id, descriptor);
+            return builder.ToImmutable();
+        }
+
+        /// <summary>Every declared descriptor (for tests that compare the analyzers with the DSL's catalog).</summary>
+        public static IReadOnlyList<DiagnosticDescriptor> Declared => All;
     }
 }

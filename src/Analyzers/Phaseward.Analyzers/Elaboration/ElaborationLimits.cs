@@ -1,0 +1,42 @@
+namespace Phaseward.Analyzers.Elaboration
+{
+    /// <summary>
+    /// How much work the elaborator may do for one design. One step is one loop iteration or one call (a method, local
+    /// function, operator or constructor of the design's code, the DSL or System.Math, or a property getter written in the
+    /// design's code); reading a DSL property and straight-line code between calls are free, because they are bounded by
+    /// the length of the source.
+    /// </summary>
+    internal readonly struct ElaborationLimits : System.IEquatable<ElaborationLimits>
+    {
+        /// <summary>
+        /// Default step budget. A loop that makes one device per iteration through a helper method costs three steps per
+        /// device (iteration, helper call, DSL call), so 1,000,000 such devices take 3,000,000 steps; an endless loop
+        /// stops after 10,000,000 steps (about a second of interpretation).
+        /// </summary>
+        public const long DefaultStepBudget = 10_000_000;
+
+        /// <summary>Default limit on nested calls of interpreted methods (recursion depth).</summary>
+        public const int DefaultRecursionLimit = 64;
+
+        /// <summary>The largest recursion limit accepted: deeper nesting would risk the compiler's own stack.</summary>
+        public const int MaxRecursionLimit = 512;
+
+        public ElaborationLimits(long stepBudget, int recursionLimit)
+        {
+            StepBudget = stepBudget;
+            RecursionLimit = recursionLimit;
+        }
+
+        public static ElaborationLimits Default { get; } = new(DefaultStepBudget, DefaultRecursionLimit);
+
+        public long StepBudget { get; }
+
+        public int RecursionLimit { get; }
+
+        public bool Equals(ElaborationLimits other) => StepBudget == other.StepBudget && RecursionLimit == other.RecursionLimit;
+
+        public override bool Equals(object? obj) => obj is ElaborationLimits other && Equals(other);
+
+        public override int GetHashCode() => StepBudget.GetHashCode() * 31 + RecursionLimit;
+    }
+}

@@ -1,0 +1,92 @@
+using System;
+using System.Collections.Generic;
+using System.Collections.Immutable;
+using System.Linq;
+using System.Threading;
+using System.Threading.Tasks;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.CSharp;
+using Microsoft.CodeAnalysis.Diagnostics;
+using Phaseward.Analyzers.Elaboration;
+using Phaseward.Analyzers.Tests.Elaboration;
+using Phaseward.Analyzers.Tests.Verifiers;
+
+namespace Phaseward.Analyzers.Tests;
+
+/// <summary>Half-typed and mutated designs never make the elaborator throw (AD0001) or hang; cancellation is honoured.</summary>
+public class RobustnessTests
+{
+    private const string Design = """
+        using System.Collections.Generic;
+        using Phaseward;
+
+        public sealed class Typing : Design
+        {
+            private readonly int width = 3;
+
+            protected override void Describe(Circuit c)
+            {
+                var clk = c.Clock("clk", 4.Nanoseconds());
+                var nets = new List<Net>();
+                for (var i = 0; i < width; i++)
+                    nets.Add(c.DynamicLatch(c.Input("d" + i), i % 2 == 0 ? clk.High : clk.Low));
+                var (a, b) = (nets[0], nets[1]);
+                c.Output("y", c.Nand(a, b));
+            }
+        }
+        """;
+
+    public static IEnumerable<object[]> Mutations()
+    {
+        // Every prefix cut at a line boundary, and a few typical typing states.
+        var lines = Design.Split('\n');
+        for (var n = 1; n < lines.Length; n++)
+            yield return new object[] { string.Join("\n", lines.Take(n)) };
+        yield return new object[] { Design.Replace("c.Input(\"d\" + i)", "c.Input(") };
+        yield return new object[] { Design.Replace("nets[1]", "nets[") };
+        yield return new object[] { Design.Replace("width; i++", "width; i+") };
+        yield return new object[] { Design.Replace("4.Nanoseconds()", "4.Nanosecond()") };
+        yield return new object[] { Design.Replace("var (a, b)", "var (a, b, q)") };
+        yield return new object[] { Design.Replace("private readonly int width = 3;", "private readonly int width = ;") };
+        yield return new object[] { Design.Replace("c.Nand(a, b)", "c.Nand(a, b, c)") };
+        yield return new object[] { Design.Replace("nets.Add(", "nets.Add(nets, ") };
+    }
+
+    [Theory]
+    [MemberData(nameof(Mutations))]
+    public async Task NeverThrowsOnBrokenSource(string source)
+    {
+        var compilation = CSharpCompilation.Create("Broken", new[] { CSharpSyntaxTree.ParseText(source, path: "/src/Typing.cs") },
+            PhasewareTest.References, new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary));
+        var failures = new List<Exception>();
+        var options = new CompilationWithAnalyzersOptions(new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty),
+            (e, _, _) => failures.Add(e), concurrentAnalysis: false, logAnalyzerExecutionTime: false);
+        var diagnostics = await compilation.WithAnalyzers(ImmutableArray.Create<DiagnosticAnalyzer>(new ElaborationAnalyzer()), options)
+            .GetAnalyzerDiagnosticsAsync(CancellationToken.None);
+
+        Assert.Empty(failures);
+        Assert.DoesNotContain(diagnostics, d => d.Id == "AD0001");
+        // Code that does not compile is the compiler's to report; the elaborator adds no PW9001 for it.
+        Assert.DoesNotContain(diagnostics, d => d.Id == RuleIds.NotElaborated && d.GetMessage().Contains("failed on it"));
+    }
+
+    [Fact]
+    public void CancellationIsHonoured()
+    {
+        var designs = new InMemoryDesigns(("/src/Endless.cs", """
+            using Phaseward;
+
+            public sealed class Endless : Design
+            {
+                protected override void Describe(Circuit c)
+                {
+                    while (true) { }
+                }
+            }
+            """));
+        using var cancelled = new CancellationTokenSource();
+        cancelled.Cancel();
+        var design = designs.Session.Catalog.Designs.Single();
+        Assert.ThrowsAny<OperationCanceledException>(() => DesignElaborator.Elaborate(designs.Session, design, ElaborationLimits.Default, cancelled.Token));
+    }
+}
