@@ -1,0 +1,75 @@
+using System.Collections.Generic;
+using System.Linq;
+using System.Threading;
+using System.Threading.Tasks;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.CodeFixes;
+using Microsoft.CodeAnalysis.CSharp;
+using Microsoft.CodeAnalysis.CSharp.Testing;
+using Microsoft.CodeAnalysis.Diagnostics;
+using Microsoft.CodeAnalysis.Testing;
+
+namespace Phaseward.Analyzers.Tests.Verifiers;
+
+/// <summary>
+/// Code-fix test with the Phaseward set-up. Besides the framework's own checks (the fixed source matches, compiles
+/// without errors and leaves exactly the expected diagnostics), every comment of the original source must survive
+/// the fix: a fix may change code it was asked to change, never drop a designer's notes.
+/// </summary>
+public sealed class PhasewareCodeFixTest<TAnalyzer, TCodeFix> : CSharpCodeFixTest<TAnalyzer, TCodeFix, DefaultVerifier>
+    where TAnalyzer : DiagnosticAnalyzer, new()
+    where TCodeFix : CodeFixProvider, new()
+{
+    private readonly string source;
+    private readonly string fixedSource;
+
+    public PhasewareCodeFixTest(string source, string fixedSource, params DiagnosticResult[] expected)
+    {
+        this.source = source;
+        this.fixedSource = fixedSource;
+        ReferenceAssemblies = PhasewareTest.ReferenceAssemblies;
+        PhasewareTest.Configure(TestState);
+        PhasewareTest.Configure(FixedState);
+        PhasewareTest.Configure(BatchFixedState);
+        TestCode = source;
+        FixedCode = fixedSource;
+        ExpectedDiagnostics.AddRange(expected);
+    }
+
+    public PhasewareCodeFixTest<TAnalyzer, TCodeFix> WithEditorConfig(string lines)
+    {
+        TestState.AnalyzerConfigFiles.Add(PhasewareTest.EditorConfig(lines));
+        return this;
+    }
+
+    /// <summary>Chooses which of the offered code actions to apply (by equivalence key).</summary>
+    public PhasewareCodeFixTest<TAnalyzer, TCodeFix> Choosing(string equivalenceKey)
+    {
+        CodeActionEquivalenceKey = equivalenceKey;
+        return this;
+    }
+
+    public new async Task RunAsync(CancellationToken cancellationToken = default)
+    {
+        AssertCommentsKept(source, fixedSource);
+        await base.RunAsync(cancellationToken);
+    }
+
+    private static void AssertCommentsKept(string original, string fixedText)
+    {
+        var fixedComments = Comments(fixedText).ToList();
+        foreach (var comment in Comments(original))
+        {
+            Assert.True(fixedComments.Remove(comment), $"The fix dropped or altered the comment: {comment}");
+        }
+    }
+
+    private static IEnumerable<string> Comments(string text)
+        => CSharpSyntaxTree.ParseText(MarkupFree(text)).GetRoot().DescendantTrivia()
+            .Where(t => t.IsKind(SyntaxKind.SingleLineCommentTrivia) || t.IsKind(SyntaxKind.MultiLineCommentTrivia))
+            .Select(t => t.ToString().Trim());
+
+    // Markup such as {|#0:...|} or [|...|] only marks spans; comments never contain it in our tests.
+    private static string MarkupFree(string text)
+        => System.Text.RegularExpressions.Regex.Replace(text, @"\{\|(#\d+|[A-Z]+\d+):|\|\}|\[\||\|\]", string.Empty);
+}
