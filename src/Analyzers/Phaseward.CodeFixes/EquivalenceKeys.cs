@@ -4,5 +4,9 @@ namespace Phaseward.CodeFixes
     public static class EquivalenceKeys
     {
         public const string Prefix = "Phaseward.";
+
+        // PW2001
+        public const string InsertRestoringBuffer = Prefix + "PW2001.InsertRestoringBuffer";
+        public const string InsertRestoringInverter = Prefix + "PW2001.InsertRestoringInverter";
     }
 }
