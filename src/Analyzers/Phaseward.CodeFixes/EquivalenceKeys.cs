@@ -4,5 +4,12 @@ namespace Phaseward.CodeFixes
     public static class EquivalenceKeys
     {
         public const string Prefix = "Phaseward.";
+
+        // PW3001, PW3002
+        public const string UseStaticLatch = Prefix + "PW3001.PW3002.UseStaticLatch";
+        public const string UseStaticRegister = Prefix + "PW3001.PW3002.UseStaticRegister";
+
+        // PW3001
+        public const string ClockFromUngatedClock = Prefix + "PW3001.ClockFromUngatedClock";
     }
 }
