@@ -5,6 +5,12 @@ namespace Phaseward.CodeFixes
     {
         public const string Prefix = "Phaseward.";
 
+        // PW3001, PW3002
+        public const string UseStaticLatch = Prefix + "PW3001.PW3002.UseStaticLatch";
+        public const string UseStaticRegister = Prefix + "PW3001.PW3002.UseStaticRegister";
+
+        // PW3001
+        public const string ClockFromUngatedClock = Prefix + "PW3001.ClockFromUngatedClock";
         // PW2001
         public const string InsertRestoringBuffer = Prefix + "PW2001.InsertRestoringBuffer";
         public const string InsertRestoringInverter = Prefix + "PW2001.InsertRestoringInverter";
