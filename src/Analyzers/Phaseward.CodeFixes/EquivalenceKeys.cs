@@ -4,5 +4,9 @@ namespace Phaseward.CodeFixes
     public static class EquivalenceKeys
     {
         public const string Prefix = "Phaseward.";
+
+        // PW1001
+        public const string SwitchLatchPhase = Prefix + "PW1001.SwitchLatchPhase";
+        public const string InsertLatchBeforeRegister = Prefix + "PW1001.InsertLatchBeforeRegister";
     }
 }
