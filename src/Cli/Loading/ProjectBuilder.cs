@@ -15,9 +15,8 @@ internal static class ProjectBuilder
     public static string Build(string project, string artifactsPath, TextWriter log)
     {
         log.WriteLine($"Building {project} ...");
-        var (exitCode, output) = Run(
-            $"build \"{project}\" --nologo -c Debug --artifacts-path \"{artifactsPath}\" -getProperty:TargetPath",
-            Path.GetDirectoryName(project)!);
+        var common = $"\"{project}\" -nologo -p:Configuration=Debug -p:UseArtifactsOutput=true \"-p:ArtifactsPath={artifactsPath}\"";
+        var (exitCode, output) = Run($"build {common}", Path.GetDirectoryName(project)!);
         var lines = output.Split('\n', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
         if (exitCode != 0)
         {
@@ -26,8 +25,10 @@ internal static class ProjectBuilder
             throw new InputException($"project '{project}' failed to build (dotnet build exit code {exitCode}):{Environment.NewLine}{detail}");
         }
 
-        // -getProperty prints the property's value as the last line of standard output once the build has run.
-        var targetPath = lines.LastOrDefault(l => l.EndsWith(".dll", StringComparison.OrdinalIgnoreCase) && Path.IsPathRooted(l));
+        // Then ask MSBuild where the assembly went (evaluation only: quick).
+        var (queryExit, query) = Run($"msbuild {common} -getProperty:TargetPath", Path.GetDirectoryName(project)!);
+        var targetPath = queryExit != 0 ? null : query.Split('\n', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)
+            .LastOrDefault(l => l.EndsWith(".dll", StringComparison.OrdinalIgnoreCase) && Path.IsPathRooted(l));
         if (targetPath is null || !File.Exists(targetPath))
             throw new InputException($"project '{project}' built, but its assembly was not found (TargetPath '{targetPath ?? "(none)"}'); "
                 + "projects that target several frameworks are not supported: build one and pass its .dll");
