@@ -1,5 +1,7 @@
+using System;
 using System.Collections.Generic;
 using System.Globalization;
+using System.Threading;
 
 namespace Phaseward
 {
@@ -20,33 +22,9 @@ namespace Phaseward
         public override IEnumerable<Finding> Check(RuleContext context)
         {
             var model = LatchModel.Of(context.Netlist);
-            var worst = new Dictionary<(int, int), (LatchPath Path, Time Fastest, Time Overlap)>();
-            var order = new List<(int, int)>();
-            foreach (var path in model.Paths)
+            foreach (var race in OverlapRaces.For(model, context.CancellationToken))
             {
-                context.CancellationToken.ThrowIfCancellationRequested();
-                var a = path.From;
-                var b = path.To;
-                var phaseB = path.EntryGate.ClockControl!;
-                if (!LatchModel.Complementary(a.Phase, phaseB) || IsRegisterToRegister(model, a, b))
-                    continue;
-
-                var overlap = OpenOverlap(a.Phase, phaseB);
-                if (overlap <= Time.Zero)
-                    continue;
-                var fastest = FastestEntry(model, a) + path.MinDelay + model.StageDelay(path.EntryGate);
-                var key = (a.Index, b.Index);
-                if (!worst.TryGetValue(key, out var seen))
-                    order.Add(key);
-                else if (fastest - overlap >= seen.Fastest - seen.Overlap)
-                    continue;
-                worst[key] = (path, fastest, overlap);
-            }
-
-            foreach (var key in order)
-            {
-                var (path, fastest, overlap) = worst[key];
-                var margin = fastest - overlap;
+                var (path, fastest, overlap, margin) = (race.Path, race.Fastest, race.Overlap, race.Margin);
                 if (margin >= context.Policy.MinimumRaceMargin)
                     continue;
                 var a = path.From;
@@ -62,9 +40,8 @@ namespace Phaseward
                 };
                 if (register is not null)
                     properties[FindingProperties.Register] = register.Name;
-                var overlapName = a.Phase.Polarity == ClockPolarity.High ? "1-1" : "0-0";
                 yield return new Finding(RuleCatalog.OverlapRace, path.EntryGate.Span,
-                    new object[] { b.Name, a.Name, overlapName, a.Phase.Clock.Root.Name, fastest, overlap, margin },
+                    new object[] { b.Name, a.Name, race.OverlapName, a.Phase.Clock.Root.Name, fastest, overlap, margin },
                     new[] { a.Span }, properties);
             }
         }
@@ -87,12 +64,77 @@ namespace Phaseward
             => model.RegisterOf(a) is { } from && ReferenceEquals(from.Slave, a)
                && model.RegisterOf(b) is { } to && ReferenceEquals(to.Master, b);
 
-        private static Time FastestEntry(LatchModel model, Latch latch)
+        internal static Time FastestEntry(LatchModel model, Latch latch)
         {
             var fastest = model.StageDelay(latch.EntryGates[0]);
             foreach (var gate in latch.EntryGates)
                 fastest = Time.Min(fastest, model.StageDelay(gate));
             return fastest;
+        }
+    }
+
+    /// <summary>The race check of one latch pair across a clock overlap (see <see cref="OverlapRaceRule"/>).</summary>
+    public sealed class OverlapRace
+    {
+        internal OverlapRace(LatchPath path, Time fastest, Time overlap)
+        {
+            Path = path;
+            Fastest = fastest;
+            Overlap = overlap;
+        }
+
+        /// <summary>The fastest path from the launching latch to the catching one.</summary>
+        public LatchPath Path { get; }
+
+        /// <summary>Launching entry gate + shortest path + catching entry gate.</summary>
+        public Time Fastest { get; }
+
+        /// <summary>How long the catching latch still conducts after the launching one opens.</summary>
+        public Time Overlap { get; }
+
+        /// <summary>Fastest − overlap: negative when data can run through both.</summary>
+        public Time Margin => Fastest - Overlap;
+
+        /// <summary>"1-1" when the launching latch opens on the rising edge, else "0-0".</summary>
+        public string OverlapName => Path.From.Phase.Polarity == ClockPolarity.High ? "1-1" : "0-0";
+    }
+
+    /// <summary>
+    /// Every latch pair on complementary phases of one root clock that an overlap can race through, with its margin: the
+    /// figures behind PW1002, passing pairs included, in the order the rule reports them (for reports).
+    /// </summary>
+    public static class OverlapRaces
+    {
+        public static IReadOnlyList<OverlapRace> For(LatchModel model, CancellationToken cancellationToken = default)
+        {
+            if (model is null) throw new ArgumentNullException(nameof(model));
+            var worst = new Dictionary<(int, int), OverlapRace>();
+            var order = new List<(int, int)>();
+            foreach (var path in model.Paths)
+            {
+                cancellationToken.ThrowIfCancellationRequested();
+                var a = path.From;
+                var b = path.To;
+                var phaseB = path.EntryGate.ClockControl!;
+                if (!LatchModel.Complementary(a.Phase, phaseB) || OverlapRaceRule.IsRegisterToRegister(model, a, b))
+                    continue;
+
+                var overlap = OverlapRaceRule.OpenOverlap(a.Phase, phaseB);
+                if (overlap <= Time.Zero)
+                    continue;
+                var fastest = OverlapRaceRule.FastestEntry(model, a) + path.MinDelay + model.StageDelay(path.EntryGate);
+                var key = (a.Index, b.Index);
+                if (!worst.TryGetValue(key, out var seen))
+                    order.Add(key);
+                else if (fastest - overlap >= seen.Margin)
+                    continue;
+                worst[key] = new OverlapRace(path, fastest, overlap);
+            }
+
+            var races = new List<OverlapRace>(order.Count);
+            foreach (var key in order)
+                races.Add(worst[key]);
+            return races;
         }
     }
 }

@@ -1,5 +1,7 @@
+using System;
 using System.Collections.Generic;
 using System.Globalization;
+using System.Threading;
 
 namespace Phaseward
 {
@@ -24,39 +26,11 @@ namespace Phaseward
         public override IEnumerable<Finding> Check(RuleContext context)
         {
             var figures = TimingFigures.For(context.Netlist);
-            var model = figures.Model;
-            var timingOf = new Dictionary<Register, RegisterTiming>();
-            foreach (var timing in figures.Registers)
-                timingOf[timing.Register] = timing;
-
-            var checks = new Dictionary<(Register, Register), RegisterPathCheck>();
-            var order = new List<(Register, Register)>();
-            foreach (var path in model.Paths)
+            foreach (var result in RegisterPathChecks.For(figures, context.CancellationToken))
             {
-                context.CancellationToken.ThrowIfCancellationRequested();
-                if (!OverlapRaceRule.IsRegisterToRegister(model, path.From, path.To))
-                    continue;
-                var launch = model.RegisterOf(path.From)!;
-                var capture = model.RegisterOf(path.To)!;
-                if (!ReferenceEquals(launch.Clock.Root, capture.Clock.Root))
-                    continue;
-                var check = RegisterPathCheck.Of(model, timingOf[launch], timingOf[capture], path);
-                var key = (launch, capture);
-                if (!checks.TryGetValue(key, out var seen))
-                {
-                    order.Add(key);
-                    checks[key] = check;
-                }
-                else
-                {
-                    checks[key] = RegisterPathCheck.Worse(seen, check);
-                }
-            }
-
-            foreach (var key in order)
-            {
-                var check = checks[key];
-                var (launch, capture) = key;
+                var check = result.Check;
+                var launch = result.Launch;
+                var capture = result.Capture;
                 if (check.SetupSlack < context.Policy.MinimumTimingSlack)
                     yield return new Finding(RuleCatalog.RegisterSetup, capture.Span,
                         new object[]
@@ -84,6 +58,69 @@ namespace Phaseward
             [FindingProperties.IsRegisterStage] = "true",
             [FindingProperties.MarginSeconds] = slack.Seconds.ToString("R", CultureInfo.InvariantCulture),
         };
+    }
+
+    /// <summary>A checked register-to-register pair: the launching and capturing registers and the worst of their paths.</summary>
+    public sealed class RegisterPathResult
+    {
+        internal RegisterPathResult(Register launch, Register capture, RegisterPathCheck check)
+        {
+            Launch = launch;
+            Capture = capture;
+            Check = check;
+        }
+
+        public Register Launch { get; }
+
+        public Register Capture { get; }
+
+        public RegisterPathCheck Check { get; }
+    }
+
+    /// <summary>
+    /// The setup and hold checks behind PW4001 and PW4002, for every pair of registers on one root clock joined by a
+    /// path (the worst path of each pair), in the order the rule reports them. For reports: the same figures as the
+    /// findings' messages, passing checks included.
+    /// </summary>
+    public static class RegisterPathChecks
+    {
+        public static IReadOnlyList<RegisterPathResult> For(TimingFigures figures, CancellationToken cancellationToken = default)
+        {
+            if (figures is null) throw new ArgumentNullException(nameof(figures));
+            var model = figures.Model;
+            var timingOf = new Dictionary<Register, RegisterTiming>();
+            foreach (var timing in figures.Registers)
+                timingOf[timing.Register] = timing;
+
+            var checks = new Dictionary<(Register, Register), RegisterPathCheck>();
+            var order = new List<(Register, Register)>();
+            foreach (var path in model.Paths)
+            {
+                cancellationToken.ThrowIfCancellationRequested();
+                if (!OverlapRaceRule.IsRegisterToRegister(model, path.From, path.To))
+                    continue;
+                var launch = model.RegisterOf(path.From)!;
+                var capture = model.RegisterOf(path.To)!;
+                if (!ReferenceEquals(launch.Clock.Root, capture.Clock.Root))
+                    continue;
+                var check = RegisterPathCheck.Of(model, timingOf[launch], timingOf[capture], path);
+                var key = (launch, capture);
+                if (!checks.TryGetValue(key, out var seen))
+                {
+                    order.Add(key);
+                    checks[key] = check;
+                }
+                else
+                {
+                    checks[key] = RegisterPathCheck.Worse(seen, check);
+                }
+            }
+
+            var results = new List<RegisterPathResult>(order.Count);
+            foreach (var key in order)
+                results.Add(new RegisterPathResult(key.Item1, key.Item2, checks[key]));
+            return results;
+        }
     }
 
     /// <summary>The setup and hold check of one register-to-register path.</summary>

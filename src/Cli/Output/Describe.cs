@@ -1,0 +1,33 @@
+using System.Globalization;
+using System.Linq;
+using Phaseward.Cli.Model;
+
+namespace Phaseward.Cli.Output;
+
+/// <summary>Short texts shared by the text and HTML outputs, so both say the same thing.</summary>
+internal static class Describe
+{
+    public const string Caution = "Figures are first-order estimates (0.69·R·C stages, Elmore delays, linear leakage, nominal clock edges). "
+        + "They catch clocking hazards early; they do not replace transistor-level simulation, the foundry's rules or sign-off.";
+
+    public static string Location(SourceSpan span)
+        => span.IsKnown ? $"{span.Path}:{span.Line.ToString(CultureInfo.InvariantCulture)}" : "(unknown location)";
+
+    public static string ShortLocation(SourceSpan span)
+        => span.IsKnown ? $"{System.IO.Path.GetFileName(span.Path)}:{span.Line.ToString(CultureInfo.InvariantCulture)}" : "?";
+
+    public static string Window(PhaseWindow window) => $"[{window.Opens}, {window.Closes})";
+
+    public static string ClockKindText(Clock clock) => clock.Kind switch
+    {
+        ClockKind.Root => $"root, period {clock.Period}, duty {clock.Duty.ToString("0.##", CultureInfo.InvariantCulture)}, complement skew {clock.ComplementSkew}",
+        ClockKind.Gated => $"gated from {clock.Source!.Name} by {clock.Enable?.Name ?? "?"}, stops {(clock.StopLevel == ClockStopLevel.High ? "high" : "low")}, "
+            + $"idle bound {clock.MaxIdle?.ToString() ?? "none"}",
+        _ => $"buffered from {clock.Source!.Name}, +{clock.Delay} (total {clock.DelayFromRoot} after {clock.Root.Name})",
+    };
+
+    public static string LatchKind(Latch latch) => latch.IsStatic ? "static" : "dynamic";
+
+    public static string FindingIds(DesignReport report, Latch latch)
+        => string.Join(",", report.FindingsOf(latch).Select(f => f.RuleId).Distinct());
+}

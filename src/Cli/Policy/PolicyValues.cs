@@ -1,0 +1,76 @@
+using System;
+using System.Globalization;
+
+namespace Phaseward.Cli.Policy;
+
+/// <summary>
+/// The rules' thresholds for the report: the <c>phaseward.</c> keys of the .editorconfig files above the input, then the
+/// command-line options, with the same meaning and units as for the analyzers (docs/configuration.md).
+/// </summary>
+internal sealed class PolicyValues
+{
+    public const string MaxSeriesPassGatesKey = "phaseward.max_series_pass_gates";
+    public const string MinimumRaceMarginKey = "phaseward.min_race_margin";
+    public const string MinimumTimingSlackKey = "phaseward.min_timing_slack";
+
+    public int? MaxSeriesPassGates { get; set; }
+
+    public Time MinimumRaceMargin { get; set; } = RulePolicy.Default.MinimumRaceMargin;
+
+    public Time MinimumTimingSlack { get; set; } = RulePolicy.Default.MinimumTimingSlack;
+
+    public RulePolicy ToRulePolicy() => new()
+    {
+        MaxSeriesPassGates = MaxSeriesPassGates,
+        MinimumRaceMargin = MinimumRaceMargin,
+        MinimumTimingSlack = MinimumTimingSlack,
+    };
+
+    /// <summary>Sets one threshold from its key's text; <paramref name="where"/> names the file or option in the error.</summary>
+    public bool TrySet(string key, string value, string where)
+    {
+        switch (key.ToLowerInvariant())
+        {
+            case MaxSeriesPassGatesKey:
+                if (!int.TryParse(value.Trim(), NumberStyles.Integer, CultureInfo.InvariantCulture, out var gates) || gates < 1 || gates > 10_000)
+                    throw Invalid(value, where, "a whole number of pass gates from 1 to 10000");
+                MaxSeriesPassGates = gates;
+                return true;
+            case MinimumRaceMarginKey:
+                MinimumRaceMargin = ParseDuration(value, where);
+                return true;
+            case MinimumTimingSlackKey:
+                MinimumTimingSlack = ParseDuration(value, where);
+                return true;
+            default:
+                return false;
+        }
+    }
+
+    /// <summary>A duration of zero or more with its unit: 5ps, 0.2ns, 1 us (s, ms, us, µs, ns, ps, fs).</summary>
+    public static Time ParseDuration(string text, string where)
+    {
+        var trimmed = text.Trim();
+        var split = trimmed.Length;
+        while (split > 0 && char.IsLetter(trimmed[split - 1]))
+            split--;
+        var scale = trimmed[split..].ToLowerInvariant() switch
+        {
+            "s" => 1.0,
+            "ms" => 1e-3,
+            "us" or "µs" => 1e-6,
+            "ns" => 1e-9,
+            "ps" => 1e-12,
+            "fs" => 1e-15,
+            _ => double.NaN,
+        };
+        if (double.IsNaN(scale)
+            || !double.TryParse(trimmed[..split].Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out var number)
+            || number < 0 || double.IsInfinity(number))
+            throw Invalid(text, where, "a duration of zero or more with its unit, such as 5ps or 0.2ns (s, ms, us, ns, ps, fs)");
+        return new Time(number * scale);
+    }
+
+    private static InputException Invalid(string value, string where, string expected)
+        => new($"the value '{value}' of {where} is not valid: expected {expected}");
+}
