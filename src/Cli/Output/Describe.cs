@@ -11,7 +11,16 @@ internal static class Describe
         + "They catch clocking hazards early; they do not replace transistor-level simulation, the foundry's rules or sign-off.";
 
     public static string Location(SourceSpan span)
-        => span.IsKnown ? $"{span.Path}:{span.Line.ToString(CultureInfo.InvariantCulture)}" : "(unknown location)";
+        => span.IsKnown ? $"{DisplayPath(span.Path)}:{span.Line.ToString(CultureInfo.InvariantCulture)}" : "(unknown location)";
+
+    /// <summary>A path as the user would type it: relative to the working directory when it lies below it.</summary>
+    public static string DisplayPath(string path)
+    {
+        if (string.IsNullOrEmpty(path) || !System.IO.Path.IsPathFullyQualified(path))
+            return path;
+        var relative = System.IO.Path.GetRelativePath(System.Environment.CurrentDirectory, path);
+        return relative.StartsWith("..", System.StringComparison.Ordinal) || System.IO.Path.IsPathFullyQualified(relative) ? path : relative;
+    }
 
     public static string ShortLocation(SourceSpan span)
         => span.IsKnown ? $"{System.IO.Path.GetFileName(span.Path)}:{span.Line.ToString(CultureInfo.InvariantCulture)}" : "?";

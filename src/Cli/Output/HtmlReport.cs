@@ -29,7 +29,7 @@ internal static class HtmlReport
         h.AppendLine("</head>");
         h.AppendLine("<body>");
         h.AppendLine(TimingDiagram.Defs().ToString(System.Xml.Linq.SaveOptions.DisableFormatting));
-        h.Append("<header><h1>Phaseward design report</h1><p class=\"input\">").Append(E(input)).AppendLine("</p>");
+        h.Append("<header><h1>Phaseward design report</h1><p class=\"input\">").Append(E(Describe.DisplayPath(input))).AppendLine("</p>");
         h.AppendLine("<nav><ul class=\"designs\">");
         foreach (var r in reports)
         {
