@@ -1,0 +1,111 @@
+using System;
+using System.IO;
+using System.Linq;
+using Phaseward.EndToEnd.Tests.Packaging;
+
+namespace Phaseward.EndToEnd.Tests;
+
+/// <summary>
+/// The package as a user meets it: a fresh design project with one PackageReference to the packed <c>Phaseward</c>,
+/// built by the real SDK. What the compiler prints and what its SARIF log holds are checked against the design files.
+/// </summary>
+[Collection(PackagedPhasewareCollection.Name)]
+public sealed class PackageBuildTests
+{
+    private readonly PackagedPhaseward package;
+
+    public PackageBuildTests(PackagedPhaseward package) => this.package = package;
+
+    [Fact]
+    public void PackageHoldsTheLibraryAndTheAnalyzersWithTheirCopyOfTheDsl()
+    {
+        Assert.True(File.Exists(package.LibraryPath), package.LibraryPath);
+        var analyzers = Directory.GetFiles(package.AnalyzerDirectory).Select(Path.GetFileName).Order(StringComparer.Ordinal);
+        Assert.Equal(new[] { "Phaseward.Analyzers.dll", "Phaseward.CodeFixes.dll", "Phaseward.dll" }, analyzers);
+    }
+
+    [Fact]
+    public void BuildShowsEachHazardWithFileLineAndMessage()
+    {
+        var build = package.Baseline;
+        Assert.True(build.ExitCode == 0, build.Output);
+        Assert.DoesNotContain("AD0001", build.Output, StringComparison.Ordinal); // an analyzer that threw
+        Assert.DoesNotContain("CS8032", build.Output, StringComparison.Ordinal); // an analyzer that could not be loaded
+
+        var messages = build.PhasewareMessages;
+        foreach (var design in FrostlineDesigns.WithHazards)
+        {
+            var (line, column) = design.ExpectedPosition;
+            var found = Assert.Single(messages, m => m.Id == design.RuleId);
+            Assert.Equal(Path.Combine(package.DesignProject, design.FileName), found.File);
+            Assert.Equal((line, column), (found.Line, found.Column));
+            Assert.Equal("warning", found.Severity);
+            Assert.Equal($"https://github.com/phaseward/phaseward/blob/main/docs/rules/{design.RuleId}.md", found.HelpLink);
+            Assert.DoesNotContain("{0}", found.Message, StringComparison.Ordinal);
+        }
+
+        // The messages carry the design's own names and the rule's figures.
+        Assert.Equal(
+            "Latch 'late' takes its data from latch 'early' and both are transparent in tick.High: data can run through both in one phase",
+            Assert.Single(messages, m => m.Id == RuleIds.SameWindowLatches).Message);
+        Assert.StartsWith("6 pass gates in series without a restoring stage (limit 2): Elmore delay ",
+            Assert.Single(messages, m => m.Id == RuleIds.SeriesPassGates).Message, StringComparison.Ordinal);
+        Assert.StartsWith("Dynamic node 'wet_hold.x' floats while gated clock 'heater_sense' is stopped low",
+            Assert.Single(messages, m => m.Id == RuleIds.DynamicNodeOnGatedClock).Message, StringComparison.Ordinal);
+        Assert.DoesNotContain(messages, m => m.File.EndsWith(FrostlineDesigns.DewSampler.FileName, StringComparison.Ordinal));
+        Assert.Equal(3, messages.Count);
+    }
+
+    [Fact]
+    public void SarifLogHoldsEachResultWithRuleIdAndRegion()
+    {
+        var build = package.Baseline;
+        Assert.True(build.ExitCode == 0, build.Output);
+        var (version, results, helpUris) = SarifLog.Read(build.SarifPath);
+        Assert.Equal("2.1.0", version);
+
+        var phaseward = results.Where(r => r.IsPhaseward).ToList();
+        foreach (var design in FrostlineDesigns.WithHazards)
+        {
+            var (line, column) = design.ExpectedPosition;
+            var result = Assert.Single(phaseward, r => r.RuleId == design.RuleId);
+            Assert.Equal(design.FileName, result.FileName);
+            Assert.Equal((line, column), (result.StartLine, result.StartColumn));
+            Assert.Equal("warning", result.Level);
+            Assert.False(result.Suppressed);
+            Assert.Equal($"https://github.com/phaseward/phaseward/blob/main/docs/rules/{design.RuleId}.md", helpUris[design.RuleId!]);
+        }
+
+        Assert.Equal(3, phaseward.Count);
+    }
+
+    [Fact]
+    public void WarnAsErrorFailsTheBuild()
+    {
+        var build = package.Build(package.DesignProject, "warnaserror", "-warnaserror");
+        Assert.True(build.ExitCode != 0, build.Output);
+        var errors = build.PhasewareMessages.Where(m => m.Severity == "error").Select(m => m.Id).Order(StringComparer.Ordinal);
+        Assert.Equal(FrostlineDesigns.WithHazards.Select(d => d.RuleId!).Order(StringComparer.Ordinal), errors);
+    }
+
+    [Fact]
+    public void CiPolicyFromTheSamplesMakesSelectedRulesErrors()
+    {
+        // CI drops samples/ci-policy.globalconfig next to the project as .globalconfig (the SDK picks that name up).
+        var project = package.CreateDesignProject("ci-policy");
+        File.Copy(Path.Combine(DotnetCli.RepositoryRoot, "samples", "ci-policy.globalconfig"), Path.Combine(project, ".globalconfig"));
+
+        var build = package.Build(project, "ci-policy");
+
+        Assert.True(build.ExitCode != 0, build.Output);
+        foreach (var design in FrostlineDesigns.WithHazards)
+        {
+            var (line, column) = design.ExpectedPosition;
+            var error = Assert.Single(build.PhasewareMessages, m => m.Id == design.RuleId);
+            Assert.Equal(("error", design.FileName, line, column), (error.Severity, Path.GetFileName(error.File), error.Line, error.Column));
+        }
+
+        var (_, results, _) = SarifLog.Read(build.SarifPath);
+        Assert.All(results.Where(r => r.IsPhaseward), r => Assert.Equal("error", r.Level));
+    }
+}
