@@ -1,7 +1,11 @@
 using System;
 using System.IO;
+using System.Collections.Generic;
 using System.Linq;
+using System.Threading;
+using System.Threading.Tasks;
 using Phaseward.EndToEnd.Tests.Packaging;
+using Phaseward.EndToEnd.Tests.Workspace;
 
 namespace Phaseward.EndToEnd.Tests;
 
@@ -89,7 +93,7 @@ public sealed class PackageBuildTests
     }
 
     [Fact]
-    public void CiPolicyFromTheSamplesMakesSelectedRulesErrors()
+    public async Task CiPolicyFailsTheBuildUntilTheCodeFixesAreApplied()
     {
         // CI drops samples/ci-policy.globalconfig next to the project as .globalconfig (the SDK picks that name up).
         var project = package.CreateDesignProject("ci-policy");
@@ -106,6 +110,32 @@ public sealed class PackageBuildTests
         }
 
         var (_, results, _) = SarifLog.Read(build.SarifPath);
+        Assert.Equal(3, results.Count(r => r.IsPhaseward));
         Assert.All(results.Where(r => r.IsPhaseward), r => Assert.Equal("error", r.Level));
+
+        // The designer takes the first code fix offered at each diagnostic (through the workspace API, with the fixes from
+        // the package) and saves: the same build under the same policy is clean.
+        using var cancellation = new CancellationTokenSource(TimeSpan.FromMinutes(2));
+        using (var workspace = DesignWorkspace.Open(project, package.Root, package.LibraryPath, package.AnalyzerDirectory))
+        {
+            var problems = new List<string>();
+            foreach (var design in FrostlineDesigns.WithHazards)
+            {
+                var (applied, problem) = await CodeFixRunner.FixDocumentAsync(workspace, design.FileName, cancellation.Token);
+                if (problem is not null) problems.Add(problem);
+                else Assert.NotEmpty(applied);
+            }
+
+            Assert.True(problems.Count == 0, string.Join("\n", problems));
+            await workspace.SaveAsync(cancellation.Token);
+        }
+
+        foreach (var design in FrostlineDesigns.WithHazards)
+            Assert.NotEqual(design.Source, File.ReadAllText(Path.Combine(project, design.FileName)));
+        var fixedBuild = package.Build(project, "ci-policy-fixed");
+        Assert.True(fixedBuild.ExitCode == 0, fixedBuild.Output);
+        Assert.Empty(fixedBuild.PhasewareMessages);
+        (_, results, _) = SarifLog.Read(fixedBuild.SarifPath);
+        Assert.DoesNotContain(results, r => r.IsPhaseward && r.Level is "warning" or "error");
     }
 }

@@ -134,7 +134,7 @@ public sealed record BuildResult(int ExitCode, string Output, string SarifPath)
 {
     // file(line,col): warning PW1001: message (help link) [project]
     private static readonly Regex CompilerMessage = new(
-        @"^\s*(?<file>[^\s(][^(]*)\((?<line>\d+),(?<column>\d+)\): (?<severity>warning|error|info) (?<id>PW\d{4}): (?<message>.*?)(?: \((?<help>https?://[^)\s]+)\))?(?: \[[^\]]+\])?\s*$",
+        @"^[ \t]*(?<file>[^\s(][^(\r\n]*)\((?<line>\d+),(?<column>\d+)\): (?<severity>warning|error|info) (?<id>PW\d{4}): (?<message>.*?)(?: \((?<help>https?://[^)\s]+)\))?(?: \[[^\]\r\n]+\])?[ \t\r]*$",
         RegexOptions.Multiline);
 
     /// <summary>Phaseward's messages in the console output, each once (MSBuild repeats them in its summary).</summary>
