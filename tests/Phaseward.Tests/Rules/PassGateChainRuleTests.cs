@@ -376,6 +376,84 @@ namespace Phaseward.Tests.Rules
             Assert.DoesNotContain(new TelemetryBus(restored: true).Check().Findings, f => f.RuleId == RuleIds.SeriesPassGates);
         }
 
+        // The split sites a code fix needs (splitSites): a straight run of five separate calls, then a loop-like call that
+        // makes four gates in a row, then one call through a helper. Spans are set as the compile-time elaborator sets them.
+        // Chain positions: hop1..hop5 at calls 100..140, loop0..loop3 at call 200, last at call 300 (via a helper call 50).
+        // Limit 2, spacing 2: splits after positions 2, 4, 6, 8 (count (10 - 1) / 2 = 4), next gates at 3, 5, 7, 9.
+        [Fact]
+        public void Split_sites_name_the_call_after_each_split_and_the_run_made_there()
+        {
+            var c = new Circuit("Buoy");
+            var clock = c.Clock("sample", 10.Nanoseconds());
+            SourceSpan? site = null;
+            c.SourceSiteProvider = () => site ?? SourceSpan.Unknown;
+            var net = c.Input("sensor");
+            for (var i = 1; i <= 5; i++)
+            {
+                site = new SourceSpan("/src/Buoy.cs", 10 + i, 9, 100 + 10 * (i - 1), 8);
+                net = c.TransmissionGate(net, clock.High, "hop" + i);
+            }
+
+            site = new SourceSpan("/src/Buoy.cs", 20, 13, 200, 30);
+            for (var i = 0; i < 4; i++)
+                net = c.TransmissionGate(net, clock.High, "loop" + i);
+
+            site = new SourceSpan("/src/Lib.cs", 3, 9, 300, 12, new[] { new SourceSpan("/src/Buoy.cs", 25, 9, 50, 20) });
+            net = c.TransmissionGate(net, clock.High, "last");
+            site = new SourceSpan("/src/Buoy.cs", 26, 9, 400, 10);
+            c.Output("bus", c.Inverter(net));
+
+            var finding = Assert.Single(Check(c));
+            Assert.Equal("10", finding.Properties["chainLength"]);
+            Assert.Equal("hop2\nhop4\nloop0\nloop2", finding.Properties["splitAfterDevices"]);
+            var sites = finding.Properties[PassGateChainRule.SplitSitesProperty].Split('\n');
+            Assert.Equal(new[]
+            {
+                "3|3|1|1|false|120|8|/src/Buoy.cs",   // hop3: its own call
+                "5|5|1|1|false|140|8|/src/Buoy.cs",   // hop5
+                "7|6|4|4|false|200|30|/src/Buoy.cs",  // loop1 (split after loop0): run of four at call 200 from position 6
+                "9|6|4|4|false|200|30|/src/Buoy.cs",  // loop3
+            }, sites);
+
+            // Limit 1 (spacing 1): split before every gate from position 2 on; the helper's gate reports its caller.
+            var strict = Assert.Single(Check(c, limit: 1));
+            var last = strict.Properties[PassGateChainRule.SplitSitesProperty].Split('\n').Last();
+            Assert.Equal("10|10|1|1|true|300|12|/src/Lib.cs", last);
+        }
+
+        [Fact]
+        public void Split_sites_count_every_gate_a_call_makes_even_off_the_chain()
+        {
+            // One call makes two gates: one on the chain, one on a side branch. A fix at that call would touch both.
+            var c = new Circuit("Buoy");
+            var clock = c.Clock("sample", 10.Nanoseconds());
+            SourceSpan? site = null;
+            c.SourceSiteProvider = () => site ?? SourceSpan.Unknown;
+            var net = c.Input("sensor");
+            site = new SourceSpan("/src/Buoy.cs", 1, 1, 10, 5);
+            net = c.TransmissionGate(net, clock.High, "a");
+            site = new SourceSpan("/src/Buoy.cs", 2, 1, 20, 5);
+            net = c.TransmissionGate(net, clock.High, "b");
+            site = new SourceSpan("/src/Buoy.cs", 3, 1, 30, 5);
+            var side = c.TransmissionGate(c.Input("other"), clock.High, "side");
+            net = c.TransmissionGate(net, clock.High, "c");
+            c.Output("y", c.Inverter(net));
+            c.Output("z", c.Inverter(side));
+
+            var finding = Assert.Single(Check(c));
+            Assert.Equal("3|3|1|2|false|30|5|/src/Buoy.cs", finding.Properties[PassGateChainRule.SplitSitesProperty]);
+        }
+
+        [Fact]
+        public void Split_sites_at_run_time_have_no_character_span()
+        {
+            var c = new Circuit("Buoy");
+            var clock = c.Clock("sample", 10.Nanoseconds());
+            Chain(c, c.Input("sensor"), clock.High, 3, "hop");
+            var line = Assert.Single(Check(c)).Properties[PassGateChainRule.SplitSitesProperty];
+            Assert.StartsWith("3|3|1|1|false|-1|0|", line, StringComparison.Ordinal);
+        }
+
         private static string Name(Circuit c, string id) => c.ToNetlist().Devices[int.Parse(id, CultureInfo.InvariantCulture)].Name;
     }
 }

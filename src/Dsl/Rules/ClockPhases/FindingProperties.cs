@@ -30,6 +30,14 @@ namespace Phaseward
         /// <summary>The register the reported latch belongs to, when it is a register stage.</summary>
         public const string Register = "Register";
 
+        /// <summary>
+        /// "true" when every clocked gate of the reported latch (entry and feedback) comes from its one call: a library
+        /// latch or register, or a hand-built latch of a single clocked pass gate. Then changing the phase at that call
+        /// switches the whole latch; otherwise ("false", e.g. a hand-built static latch whose feedback gate is another call)
+        /// it would break the latch, and the PW1001 fix is not offered.
+        /// </summary>
+        public const string PhaseSetByOneCall = "PhaseSetByOneCall";
+
         /// <summary>A race margin or a timing slack, in seconds (invariant culture, round-trip format).</summary>
         public const string MarginSeconds = "MarginSeconds";
     }

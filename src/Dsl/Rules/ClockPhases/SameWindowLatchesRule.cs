@@ -45,6 +45,7 @@ namespace Phaseward
                     [FindingProperties.Polarity] = phaseB.Polarity.ToString(),
                     [FindingProperties.ComplementPolarity] = phaseB.Complement.Polarity.ToString(),
                     [FindingProperties.IsRegisterStage] = register is null ? "false" : "true",
+                    [FindingProperties.PhaseSetByOneCall] = b.Cell is not null || (b.EntryGates.Count == 1 && b.FeedbackGates.Count == 0) ? "true" : "false",
                 };
                 if (register is not null)
                     properties[FindingProperties.Register] = register.Name;

@@ -42,6 +42,17 @@ namespace Phaseward
         public const string SplitPointCountProperty = "splitPointCount";
         public const string SplitPointsTruncatedProperty = "splitPointsTruncated";
 
+        /// <summary>
+        /// Where each listed split point can be fixed in the source, one line per split point (same order as
+        /// <see cref="SplitAfterDeviceIdsProperty"/>): <c>position|runFirst|runCount|siteGates|siteHasCallers|start|length|path</c>.
+        /// <c>position</c> is the chain position (1-based) of the gate right after the split, the one whose input a
+        /// restoring stage would drive; <c>start</c>/<c>length</c>/<c>path</c> are that gate's call (its innermost source
+        /// span; start is -1 when unknown, as at run time); <c>siteGates</c> is how many pass devices the whole netlist makes
+        /// at that call; <c>runFirst</c>/<c>runCount</c> the consecutive run of this chain's gates made at that call in creation
+        /// order (a loop's iterations), and <c>siteHasCallers</c> whether any of them was made through a helper method.
+        /// </summary>
+        public const string SplitSitesProperty = "splitSites";
+
         private static readonly IReadOnlyList<RuleDescriptor> Supported = new[] { RuleCatalog.SeriesPassGates };
 
         public override IReadOnlyList<RuleDescriptor> Descriptors => Supported;
@@ -83,17 +94,19 @@ namespace Phaseward
 
             var network = new PassGateNetwork(netlist, context.CancellationToken);
             var chains = new SeriesChains(network, context.CancellationToken);
+            Dictionary<SiteKey, (int Gates, bool HasCallers)>? siteGates = null;
             foreach (var gate in netlist.Devices)
             {
                 if (!gate.IsPassDevice || chains.DepthIn(gate) != limit + 1) continue;
                 context.CancellationToken.ThrowIfCancellationRequested();
-                findings.Add(Report(netlist, chains, gate, limit, optimum, spacing));
+                findings.Add(Report(netlist, chains, gate, limit, optimum, spacing, ref siteGates));
             }
 
             return findings;
         }
 
-        private static Finding Report(Netlist netlist, SeriesChains chains, Device gate, int limit, int? optimum, int spacing)
+        private static Finding Report(Netlist netlist, SeriesChains chains, Device gate, int limit, int? optimum, int spacing,
+            ref Dictionary<SiteKey, (int Gates, bool HasCallers)>? siteGates)
         {
             var chain = chains.ChainThrough(gate);
             var process = netlist.Process;
@@ -102,14 +115,20 @@ namespace Phaseward
             var meanCapacitance = chain.TotalNodeCapacitance / chain.Length;
             var restored = RestoringStageSpacing.BufferedChainDelay(chain.Length, spacing, meanResistance, meanCapacitance, process.StageDelay);
 
-            var splits = SplitPoints(chains, gate, chain.Length, limit, spacing, out var splitCount);
+            var window = ChainWindow(chains, gate, chain.Length, limit, spacing);
+            var splitCount = (chain.Length - 1) / spacing;
+            var listed = Math.Min(splitCount, MaxListedSplitPoints);
             var ids = new StringBuilder();
             var names = new StringBuilder();
-            foreach (var split in splits)
+            var sites = new StringBuilder();
+            for (var k = 1; k <= listed; k++)
             {
-                if (ids.Length > 0) { ids.Append(','); names.Append('\n'); }
+                // Split after position k·spacing (window index k·spacing - 1); the next gate is at index k·spacing.
+                var split = window[k * spacing - 1];
+                if (ids.Length > 0) { ids.Append(','); names.Append('\n'); sites.Append('\n'); }
                 ids.Append(split.Id.ToString(CultureInfo.InvariantCulture));
                 names.Append(split.Name);
+                AppendSite(sites, window, k * spacing, siteGates ??= CountPassGatesBySite(netlist));
             }
 
             var properties = new Dictionary<string, string>
@@ -127,7 +146,8 @@ namespace Phaseward
                 [SplitAfterDeviceIdsProperty] = ids.ToString(),
                 [SplitAfterDevicesProperty] = names.ToString(),
                 [SplitPointCountProperty] = Invariant(splitCount),
-                [SplitPointsTruncatedProperty] = splitCount > splits.Count ? "true" : "false",
+                [SplitPointsTruncatedProperty] = splitCount > listed ? "true" : "false",
+                [SplitSitesProperty] = sites.ToString(),
             };
 
             return new Finding(
@@ -138,28 +158,85 @@ namespace Phaseward
                 properties);
         }
 
-        // The gates after which a restoring stage goes: positions spacing, 2·spacing, ... (counted from the run's first
-        // gate) short of the run's end. Walks back from the reported gate (it sits at position limit + 1) and forward
-        // along the longest continuation, listing at most MaxListedSplitPoints.
-        private static List<Device> SplitPoints(SeriesChains chains, Device gate, int length, int limit, int spacing, out int count)
+        // The chain through the reported gate from its first gate (index 0 = position 1), as far as the listed split points
+        // and the run of gates at the last one's call need: the gate sits at position limit + 1; earlier gates are found
+        // walking back, later ones along the longest continuation. At most limit + 1 + (MaxListedSplitPoints + 1) · spacing
+        // gates, whatever the chain's length.
+        private static List<Device> ChainWindow(SeriesChains chains, Device gate, int length, int limit, int spacing)
         {
-            count = (length - 1) / spacing;
-            var listed = Math.Min(count, MaxListedSplitPoints);
-            var result = new List<Device>(listed);
-            var position = limit + 1;
-            var backward = new List<Device>();
+            var end = (int)Math.Min(length, (long)limit + 1 + (long)(MaxListedSplitPoints + 1) * spacing);
+            var window = new List<Device>(end);
             for (Device? g = chains.Previous(gate); g is not null; g = chains.Previous(g))
+                window.Add(g);
+            window.Reverse();
+            for (Device? g = gate; g is not null && window.Count < end; g = chains.Next(g))
+                window.Add(g);
+            return window;
+        }
+
+        // One line of SplitSitesProperty for the gate at window[index] (chain position index + 1).
+        private static void AppendSite(StringBuilder sites, List<Device> window, int index, Dictionary<SiteKey, (int Gates, bool HasCallers)> siteGates)
+        {
+            var next = window[index];
+            var span = next.Span;
+            var key = new SiteKey(span);
+            var first = index;
+            var last = index;
+            var hasCallers = span.Callers.Count > 0;
+            if (span.Start >= 0)
             {
-                position--;
-                if (position % spacing == 0) backward.Add(g);
+                while (first > 0 && new SiteKey(window[first - 1].Span).Equals(key) && window[first - 1].Id < window[first].Id)
+                    first--;
+                while (last + 1 < window.Count && new SiteKey(window[last + 1].Span).Equals(key) && window[last + 1].Id > window[last].Id)
+                    last++;
             }
 
-            for (var i = backward.Count - 1; i >= 0 && result.Count < listed; i--)
-                result.Add(backward[i]);
-            position = limit + 1;
-            for (Device? g = gate; g is not null && result.Count < listed && position < length; g = chains.Next(g), position++)
-                if (position % spacing == 0) result.Add(g);
-            return result;
+            var gates = siteGates.TryGetValue(key, out var site) ? site.Gates : 1;
+            hasCallers |= site.HasCallers;
+            sites.Append(Invariant(index + 1)).Append('|')
+                .Append(Invariant(first + 1)).Append('|')
+                .Append(Invariant(last - first + 1)).Append('|')
+                .Append(Invariant(gates)).Append('|')
+                .Append(hasCallers ? "true" : "false").Append('|')
+                .Append(Invariant(span.Start)).Append('|')
+                .Append(Invariant(span.Length)).Append('|')
+                .Append(span.Path);
+        }
+
+        // How many pass devices the netlist makes at each call (innermost source span), and whether any came through a helper.
+        private static Dictionary<SiteKey, (int Gates, bool HasCallers)> CountPassGatesBySite(Netlist netlist)
+        {
+            var counts = new Dictionary<SiteKey, (int Gates, bool HasCallers)>();
+            foreach (var device in netlist.Devices)
+            {
+                if (!device.IsPassDevice || device.Span.Start < 0) continue;
+                var key = new SiteKey(device.Span);
+                counts.TryGetValue(key, out var site);
+                counts[key] = (site.Gates + 1, site.HasCallers || device.Span.Callers.Count > 0);
+            }
+
+            return counts;
+        }
+
+        /// <summary>A call in the source: path, start and length of a span (its callers aside).</summary>
+        private readonly struct SiteKey : IEquatable<SiteKey>
+        {
+            private readonly string path;
+            private readonly int start;
+            private readonly int length;
+
+            public SiteKey(SourceSpan span)
+            {
+                path = span.Path;
+                start = span.Start;
+                length = span.Length;
+            }
+
+            public bool Equals(SiteKey other) => start == other.start && length == other.length && string.Equals(path, other.path, StringComparison.Ordinal);
+
+            public override bool Equals(object? obj) => obj is SiteKey other && Equals(other);
+
+            public override int GetHashCode() => (StringComparer.Ordinal.GetHashCode(path) * 397) ^ (start * 31) ^ length;
         }
 
         private static string Invariant(int value) => value.ToString(CultureInfo.InvariantCulture);

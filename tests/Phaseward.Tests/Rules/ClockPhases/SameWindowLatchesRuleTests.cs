@@ -33,6 +33,27 @@ public class SameWindowLatchesRuleTests
         Assert.Equal("clk.Low", finding.Properties[FindingProperties.ComplementPhase]);
         Assert.Equal("Low", finding.Properties[FindingProperties.ComplementPolarity]);
         Assert.Equal("false", finding.Properties[FindingProperties.IsRegisterStage]);
+        Assert.Equal("true", finding.Properties[FindingProperties.PhaseSetByOneCall]);
+    }
+
+    [Fact]
+    public void AHandBuiltStaticLatchsPhaseIsNotSetByOneCall()
+    {
+        // Entry gate and feedback gate are separate calls: switching the entry alone would put both on one phase.
+        var c = Figures.NewCircuit("handbuilt");
+        var clk = c.Clock("clk", 1.Nanoseconds());
+        var a = c.DynamicLatch(c.Input("d"), clk.High, "A");
+        var plain = c.Node("plain");
+        c.TransmissionGate(a, clk.High, plain);
+        var store = c.Node("store");
+        c.TransmissionGate(c.Inverter(plain), clk.High, store);
+        var q = c.Inverter(store, "q");
+        c.TransmissionGate(c.Inverter(q), clk.Low, store);
+
+        var findings = Figures.Run(Rule, c).ToDictionary(f => f.Properties[FindingProperties.TargetLatch]);
+
+        Assert.Equal("true", findings["plain"].Properties[FindingProperties.PhaseSetByOneCall]);
+        Assert.Equal("false", findings["store"].Properties[FindingProperties.PhaseSetByOneCall]);
     }
 
     [Fact]

@@ -1,0 +1,60 @@
+using System.Threading.Tasks;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Testing;
+using Phaseward.Analyzers.Tests.Verifiers;
+using static Phaseward.Analyzers.Tests.Rules.RuleSources;
+
+namespace Phaseward.Analyzers.Tests.Rules;
+
+/// <summary>
+/// PW4002 through the analyzer. Constraint from Weste &amp; Harris, "CMOS VLSI Design", 4th ed., ch. 10 (section from
+/// memory): t_ccq + t_cd ≥ t_hold + t_skew. Test process (<see cref="RuleSources"/>): t_ccq = t_TG + t_inv = 62.1 ps, one
+/// inverter 27.6 ps: 89.7 ps; hold = the 1-1 overlap = 30 ps; the capture clock is a buffered copy, late by the skew.
+/// </summary>
+public class PW4002Tests
+{
+    private static string Pipeline(string name, int skewPs) => Design(name, $$"""
+        var clk = c.Clock("clk", 1.Nanoseconds(), 0.5, 30.Picoseconds());
+        var late = c.BufferedClock(clk, {{skewPs}}.Picoseconds(), "late");
+        var q1 = {|#1:c.DynamicRegister(c.Input("d"), clk, "R1")|};
+        c.Output("q", {|#0:c.StaticRegister(c.Inverter(q1), late, "R2")|});
+        """);
+
+    private static DiagnosticResult Pw4002(string skew, string slack)
+        => new DiagnosticResult(RuleIds.RegisterHold, DiagnosticSeverity.Warning)
+            .WithMessage("Register 'R2' can lose its data on the path from register 'R1': minimum clock-to-output 62.1 ps + shortest path 27.6 ps = " +
+                         $"89.7 ps is less than its hold time 30 ps plus clock skew {skew} (slack {slack})")
+            .WithLocation(0).WithLocation(1);
+
+    [Fact]
+    public Task WorkedExample_ALateBufferedCaptureClockBreaksHold()
+        // 89.7 − (30 + 70) = −10.3 ps.
+        => new PhasewareAnalyzerTest<TimingAnalyzer>(Pipeline("Late", 70), Pw4002("70 ps", "-10.3 ps")).RunAsync();
+
+    [Fact]
+    public Task ASmallerSkewHolds()
+        // 89.7 − (30 + 50) = +9.7 ps.
+        => new PhasewareAnalyzerTest<TimingAnalyzer>(Pipeline("Holds", 50).Replace("{|#0:", "").Replace("{|#1:", "").Replace("|}", "")).RunAsync();
+
+    [Fact]
+    public Task MinTimingSlackOptionReportsASmallPositiveSlack()
+        => new PhasewareAnalyzerTest<TimingAnalyzer>(Pipeline("Required", 50), Pw4002("50 ps", "9.7 ps"))
+            .WithEditorConfig("phaseward.min_timing_slack = 10ps")
+            .RunAsync();
+
+    [Fact]
+    public Task SeverityNoneSilencesTheRule()
+        => new PhasewareAnalyzerTest<TimingAnalyzer>(Pipeline("Silenced", 70).Replace("{|#0:", "").Replace("{|#1:", "").Replace("|}", ""))
+            .WithEditorConfig("dotnet_diagnostic.PW4002.severity = none")
+            .RunAsync();
+
+    [Fact]
+    public Task GatedCaptureClockOnABufferedCopy()
+        // Gating adds no delay: the skew is still the buffer's 70 ps.
+        => new PhasewareAnalyzerTest<TimingAnalyzer>(Design("Gated", """
+            var clk = c.Clock("clk", 1.Nanoseconds(), 0.5, 30.Picoseconds());
+            var gated = c.ClockGate(c.BufferedClock(clk, 70.Picoseconds(), "late"), c.Input("en"), name: "gated");
+            var q1 = {|#1:c.DynamicRegister(c.Input("d"), clk, "R1")|};
+            c.Output("q", {|#0:c.StaticRegister(c.Inverter(q1), gated, "R2")|});
+            """), Pw4002("70 ps", "-10.3 ps")).RunAsync();
+}
