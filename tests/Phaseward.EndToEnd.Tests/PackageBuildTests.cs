@@ -6,6 +6,7 @@ using System.Threading;
 using System.Threading.Tasks;
 using Phaseward.EndToEnd.Tests.Packaging;
 using Phaseward.EndToEnd.Tests.Workspace;
+using Xunit.Abstractions;
 
 namespace Phaseward.EndToEnd.Tests;
 
@@ -17,8 +18,13 @@ namespace Phaseward.EndToEnd.Tests;
 public sealed class PackageBuildTests
 {
     private readonly PackagedPhaseward package;
+    private readonly ITestOutputHelper output;
 
-    public PackageBuildTests(PackagedPhaseward package) => this.package = package;
+    public PackageBuildTests(PackagedPhaseward package, ITestOutputHelper output)
+    {
+        this.package = package;
+        this.output = output;
+    }
 
     [Fact]
     public void PackageHoldsTheLibraryAndTheAnalyzersWithTheirCopyOfTheDsl()
@@ -124,6 +130,7 @@ public sealed class PackageBuildTests
                 var (applied, problem) = await CodeFixRunner.FixDocumentAsync(workspace, design.FileName, cancellation.Token);
                 if (problem is not null) problems.Add(problem);
                 else Assert.NotEmpty(applied);
+                foreach (var title in applied) output.WriteLine($"{design.FileName}: {title}");
             }
 
             Assert.True(problems.Count == 0, string.Join("\n", problems));
