@@ -1,9 +1,11 @@
 using System;
 using System.IO;
+using System.IO.Compression;
 using System.Collections.Generic;
 using System.Linq;
 using System.Threading;
 using System.Threading.Tasks;
+using System.Xml.Linq;
 using Phaseward.EndToEnd.Tests.Packaging;
 using Phaseward.EndToEnd.Tests.Workspace;
 using Xunit.Abstractions;
@@ -27,11 +29,25 @@ public sealed class PackageBuildTests
     }
 
     [Fact]
-    public void PackageHoldsTheLibraryAndTheAnalyzersWithTheirCopyOfTheDsl()
+    public void PackageHoldsTheLibraryTheAnalyzersWithTheirCopyOfTheDslAndItsMetadata()
     {
         Assert.True(File.Exists(package.LibraryPath), package.LibraryPath);
         var analyzers = Directory.GetFiles(package.AnalyzerDirectory).Select(Path.GetFileName).Order(StringComparer.Ordinal);
         Assert.Equal(new[] { "Phaseward.Analyzers.dll", "Phaseward.CodeFixes.dll", "Phaseward.dll" }, analyzers);
+
+        // The metadata a registry shows: version, description, licence, readme, repository.
+        using var nupkg = ZipFile.OpenRead(Directory.GetFiles(package.Feed, "Phaseward.*.nupkg").Single());
+        using var nuspecStream = nupkg.Entries.Single(e => e.FullName == "Phaseward.nuspec").Open();
+        var metadata = XDocument.Load(nuspecStream).Root!.Elements().Single(e => e.Name.LocalName == "metadata");
+        string Field(string name) => metadata.Elements().SingleOrDefault(e => e.Name.LocalName == name)?.Value ?? string.Empty;
+        Assert.Equal(("Phaseward", package.PackageVersion), (Field("id"), Field("version")));
+        Assert.Matches(@"^\d+\.\d+\.\d+", package.PackageVersion);
+        Assert.Equal("MIT", Field("license"));
+        Assert.Equal("README.md", Field("readme"));
+        Assert.Contains(nupkg.Entries, e => e.FullName == "README.md");
+        Assert.False(string.IsNullOrWhiteSpace(Field("description")));
+        var repository = metadata.Elements().Single(e => e.Name.LocalName == "repository");
+        Assert.Equal("https://github.com/phaseward/phaseward", repository.Attribute("url")?.Value);
     }
 
     [Fact]
