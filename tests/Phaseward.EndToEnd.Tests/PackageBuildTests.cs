@@ -32,6 +32,10 @@ public sealed class PackageBuildTests
     public void PackageHoldsTheLibraryTheAnalyzersWithTheirCopyOfTheDslAndItsMetadata()
     {
         Assert.True(File.Exists(package.LibraryPath), package.LibraryPath);
+        // Restored from the temporary feed, not from a same-named package of another source.
+        var restoredFrom = Path.Combine(package.PackagesFolder, "phaseward", package.PackageVersion.ToLowerInvariant(), ".nupkg.metadata");
+        using (var restored = System.Text.Json.JsonDocument.Parse(File.ReadAllText(restoredFrom)))
+            Assert.Equal(package.Feed, restored.RootElement.GetProperty("source").GetString()?.TrimEnd(Path.DirectorySeparatorChar));
         var analyzers = Directory.GetFiles(package.AnalyzerDirectory).Select(Path.GetFileName).Order(StringComparer.Ordinal);
         Assert.Equal(new[] { "Phaseward.Analyzers.dll", "Phaseward.CodeFixes.dll", "Phaseward.dll" }, analyzers);
 

@@ -112,7 +112,7 @@ public sealed class PackagedPhaseward : IDisposable
         {
             Directory.Delete(Root, recursive: true);
         }
-        catch (IOException)
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
             // A language server may still hold a file for a moment; the folder is in the temp directory either way.
         }
