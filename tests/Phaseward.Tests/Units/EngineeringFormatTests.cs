@@ -62,5 +62,15 @@ namespace Phaseward.Tests.Units
             Assert.Equal("5000 TΩ", Engineering.Format(5e15, "Ω"));
             Assert.Equal("0.01 aF", Engineering.Format(1e-20, "F"));
         }
+
+        [Fact]
+        public void Two_compared_values_get_enough_digits_to_differ()
+        {
+            // 270.45 µs against 270.0 µs: three digits would print both as "270 µs".
+            Assert.Equal(("270.5 µs", "270 µs"), Engineering.FormatApart(270.45e-6, 270e-6, "s"));
+            Assert.Equal(("541 µs", "270 µs"), Engineering.FormatApart(541e-6, 270e-6, "s"));
+            Assert.Equal(("1 ns", "1 ns"), Engineering.FormatApart(1e-9, 1e-9, "s"));
+            Assert.Equal("1.2346 ns", Engineering.Format(1.23456e-9, "s", 5));
+        }
     }
 }

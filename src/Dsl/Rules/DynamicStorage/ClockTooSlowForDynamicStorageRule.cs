@@ -22,6 +22,7 @@ namespace Phaseward
                     continue;
 
                 var root = running.Root;
+                var (isolation, retained) = Engineering.FormatApart(running.Longest.Seconds, retention.Time.Seconds, "s");
                 var properties = new Dictionary<string, string>
                 {
                     [DynamicStorageProperties.Node] = node.Net.Name,
@@ -37,8 +38,8 @@ namespace Phaseward
                     node.PrimaryDriver.Span,
                     new object[]
                     {
-                        node.Net.Name, running.Longest, root.Period, root.Name,
-                        retention.Time, retention.Capacitance, retention.ToleratedDroop, retention.Leakage, minimum,
+                        node.Net.Name, isolation, root.Period, root.Name,
+                        retained, retention.Capacitance, retention.ToleratedDroop, retention.Leakage, minimum,
                     },
                     new[] { root.Span },
                     properties);

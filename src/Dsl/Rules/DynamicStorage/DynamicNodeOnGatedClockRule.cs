@@ -22,7 +22,9 @@ namespace Phaseward
                     continue;
 
                 var gate = stopped.Gate;
-                var idleText = stopped.IdleBound?.ToString() ?? DynamicStorageProperties.Unbounded;
+                var (idleText, retainedText) = stopped.IdleBound is { } idleShown
+                    ? Engineering.FormatApart(idleShown.Seconds, retention.Time.Seconds, "s")
+                    : (DynamicStorageProperties.Unbounded, retention.Time.ToString());
                 var related = new List<SourceSpan>(stopped.Gates.Count);
                 foreach (var g in stopped.Gates)
                     related.Add(g.Span);
@@ -47,7 +49,7 @@ namespace Phaseward
                     new object[]
                     {
                         node.Net.Name, gate.Name, gate.StopLevel == ClockStopLevel.High ? "high" : "low", idleText,
-                        retention.Time, retention.Capacitance, retention.ToleratedDroop, retention.Leakage,
+                        retainedText, retention.Capacitance, retention.ToleratedDroop, retention.Leakage,
                     },
                     related,
                     properties);

@@ -166,7 +166,7 @@ public class LatchBorrowingRuleTests
     {
         // L1→L2 with no inverters arrives before L2 opens (no borrowing); L2→L3: 34.5 + 828 − 500 = 362.5 ps ≤ 465.5 ps.
         Assert.Empty(Figures.Run(Rule, Chain(0, 29)));
-        // 28 inverters after borrowing 114.1 ps: 448.9 ps ≤ 465.5 ps (slack 16.6 ps).
+        // 28 inverters after borrowing 114.1 ps: 449.0 ps ≤ 465.5 ps (slack 16.5 ps).
         Assert.Empty(Figures.Run(Rule, Chain(20, 28)));
     }
 
