@@ -31,6 +31,7 @@ public sealed class PackageBuildTests
     [Fact]
     public void PackageHoldsTheLibraryTheAnalyzersWithTheirCopyOfTheDslAndItsMetadata()
     {
+        output.WriteLine($"dotnet pack: {package.PackDuration.TotalSeconds:F0} s; first restore of the design project: {package.RestoreDuration.TotalSeconds:F0} s");
         Assert.True(File.Exists(package.LibraryPath), package.LibraryPath);
         // Restored from the temporary feed, not from a same-named package of another source.
         var restoredFrom = Path.Combine(package.PackagesFolder, "phaseward", package.PackageVersion.ToLowerInvariant(), ".nupkg.metadata");

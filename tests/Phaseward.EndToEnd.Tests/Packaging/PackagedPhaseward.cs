@@ -24,6 +24,7 @@ public sealed class PackagedPhaseward : IDisposable
         Feed = Path.Combine(Root, "feed");
         PackagesFolder = Path.Combine(Root, "packages");
 
+        var clock = System.Diagnostics.Stopwatch.StartNew();
         var package = Path.Combine(DotnetCli.RepositoryRoot, "src", "Package", "Phaseward.Package.csproj");
         var (exitCode, output) = DotnetCli.Run(
             $"pack \"{package}\" -c Release -o \"{Feed}\" --artifacts-path \"{Path.Combine(Root, "pack-artifacts")}\" -nodeReuse:false",
@@ -31,6 +32,8 @@ public sealed class PackagedPhaseward : IDisposable
         if (exitCode != 0) throw new InvalidOperationException("dotnet pack failed:\n" + output);
         var nupkg = Directory.GetFiles(Feed, "Phaseward.*.nupkg").Single();
         PackageVersion = Path.GetFileNameWithoutExtension(nupkg).Substring("Phaseward.".Length);
+        PackDuration = clock.Elapsed;
+        clock.Restart();
 
         // The temp root isolates the design project from whatever lies above /tmp: its own NuGet.config (local feed added
         // to the machine's sources, temporary packages folder), empty Directory.Build.* and a root .editorconfig.
@@ -52,11 +55,17 @@ public sealed class PackagedPhaseward : IDisposable
         DesignProject = CreateDesignProject("design");
         (exitCode, output) = Dotnet($"restore \"{DesignProject}\"", DesignProject);
         if (exitCode != 0) throw new InvalidOperationException("dotnet restore of the design project failed:\n" + output);
+        RestoreDuration = clock.Elapsed;
 
         baseline = new Lazy<BuildResult>(() => Build(DesignProject, "baseline"));
     }
 
     public string Root { get; }
+
+    /// <summary>How long packing and the first restore took (printed by a test: most of the collection's time).</summary>
+    public TimeSpan PackDuration { get; }
+
+    public TimeSpan RestoreDuration { get; }
 
     public string Feed { get; }
 
