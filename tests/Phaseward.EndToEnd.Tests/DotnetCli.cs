@@ -1,4 +1,5 @@
 using System;
+using System.Collections.Generic;
 using System.Diagnostics;
 using System.IO;
 using System.Text;
@@ -11,6 +12,10 @@ internal static class DotnetCli
     public static string RepositoryRoot { get; } = FindRepositoryRoot();
 
     public static (int ExitCode, string Output) Run(string arguments, string workingDirectory, TimeSpan timeout)
+        => Run(arguments, workingDirectory, timeout, environment: null);
+
+    /// <summary>As <see cref="Run(string, string, TimeSpan)"/>, with environment variables set (or removed, when null).</summary>
+    public static (int ExitCode, string Output) Run(string arguments, string workingDirectory, TimeSpan timeout, IReadOnlyDictionary<string, string?>? environment)
     {
         var start = new ProcessStartInfo("dotnet", arguments)
         {
@@ -25,6 +30,11 @@ internal static class DotnetCli
         start.Environment.Remove("MSBuildExtensionsPath");
         start.Environment.Remove("MSBuildSDKsPath");
         start.Environment.Remove("MSBUILD_EXE_PATH");
+        foreach (var (name, value) in environment ?? new Dictionary<string, string?>())
+        {
+            if (value is null) start.Environment.Remove(name);
+            else start.Environment[name] = value;
+        }
 
         var output = new StringBuilder();
         using var process = new System.Diagnostics.Process { StartInfo = start };
