@@ -1,33 +1,22 @@
-using System.Collections.Immutable;
 using System.Composition;
-using System.Threading.Tasks;
 using Microsoft.CodeAnalysis;
-using Microsoft.CodeAnalysis.CodeActions;
 using Microsoft.CodeAnalysis.CodeFixes;
 
 namespace Phaseward.CodeFixes
 {
-    /// <summary>PW2001: inserts a restoring inverter (inverts the data: each inserted stage flips the polarity downstream) at each split point of an over-long pass-gate chain.</summary>
+    /// <summary>
+    /// PW2001: inserts a restoring inverter at each split point of an over-long pass-gate chain. Each inserted stage
+    /// flips the polarity downstream; the title says so.
+    /// </summary>
     [ExportCodeFixProvider(LanguageNames.CSharp, Name = nameof(InsertRestoringInverterFix)), Shared]
-    public sealed class InsertRestoringInverterFix : CodeFixProvider
+    public sealed class InsertRestoringInverterFix : InsertRestoringStageFix
     {
         public const string Title = "Insert a restoring inverter (inverts the data)";
 
-        public override ImmutableArray<string> FixableDiagnosticIds => ImmutableArray.Create(RuleIds.SeriesPassGates);
+        protected override string StageMethod => "Inverter";
 
-        public override FixAllProvider GetFixAllProvider() => new RestoringStageFixAllProvider("Inverter", Title);
+        protected override string ActionTitle => Title;
 
-        public override async Task RegisterCodeFixesAsync(CodeFixContext context)
-        {
-            foreach (var diagnostic in context.Diagnostics)
-            {
-                var edits = await RestoringStageInsertion.PlanAsync(context.Document.Project.Solution, diagnostic, "Inverter", context.CancellationToken).ConfigureAwait(false);
-                if (edits is null) continue;
-                var solution = context.Document.Project.Solution;
-                context.RegisterCodeFix(
-                    CodeAction.Create(Title, ct => RestoringStageInsertion.ApplyAsync(solution, edits, ct), EquivalenceKeys.InsertRestoringInverter),
-                    diagnostic);
-            }
-        }
+        protected override string EquivalenceKey => EquivalenceKeys.InsertRestoringInverter;
     }
 }
