@@ -41,6 +41,9 @@ namespace Phaseward.Benchmarks
 
             var references = ImmutableArray.CreateRange<MetadataReference>(Basic.Reference.Assemblies.Net80.References.All)
                 .Add(MetadataReference.CreateFromFile(typeof(Design).Assembly.Location));
+            if (settings.Profile is { } profileSize)
+                return Profile(profileSize, references);
+
             var sdk = settings.SkipSdk ? ImmutableArray<DiagnosticAnalyzer>.Empty : SdkAnalyzers.Load(settings.SdkAnalyzers ?? SdkAnalyzers.DefaultDirectory());
             var phaseward = PhasewardAnalyzers();
 
@@ -59,8 +62,12 @@ namespace Phaseward.Benchmarks
 
             // Warm-up: every measurement once on the smallest design, so JIT and first-use costs stay out of the table.
             var warm = new Bench(new Case(DesignShape.Loop, 1_000), references, phaseward, sdk);
-            warm.RunOnce(record: false);
-            new Bench(new Case(DesignShape.StraightLine, 1_000), references, phaseward, sdk).RunOnce(record: false);
+            var warmStraight = new Bench(new Case(DesignShape.StraightLine, 1_000), references, phaseward, sdk);
+            for (var i = 0; i < 3; i++)
+            {
+                warm.RunOnce(record: false);
+                warmStraight.RunOnce(record: false);
+            }
 
             var results = new List<Bench>();
             foreach (var c in cases)
@@ -83,6 +90,45 @@ namespace Phaseward.Benchmarks
             return 0;
         }
 
+        /// <summary>A Stopwatch breakdown by phase of one loop design: binding, interpretation, netlist, each rule, mapping.</summary>
+        private static int Profile(int size, ImmutableArray<MetadataReference> references)
+        {
+            var source = DesignGenerator.Generate(DesignShape.Loop, size);
+            for (var run = 0; run < 3; run++)
+            {
+                var tree = CSharpSyntaxTree.ParseText(source, new CSharpParseOptions(LanguageVersion.Latest), DesignPath, Encoding.UTF8);
+                var compilation = CSharpCompilation.Create("Profile", new[] { tree }, references,
+                    new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, nullableContextOptions: NullableContextOptions.Enable));
+                var session = new ElaborationSession(compilation, compilation.GetTypeByMetadataName("Phaseward.Design")!);
+                var design = session.Catalog.Designs.Single();
+                var line = new StringBuilder($"run {run}: ");
+                var bind = Samples.Time(() => session.Models.Get(tree).GetOperation(design.DescribeSyntax));
+                ElaborationResult? result = null;
+                var elaborate = Samples.Time(() => result = DesignElaborator.Elaborate(session, design, ElaborationLimits.Default, CancellationToken.None));
+                var netlist = result!.Netlist!;
+                line.Append($"bind {bind:N0} ms, elaborate {elaborate:N0} ms ({result.Steps:N0} steps, {netlist.Devices.Count:N0} devices); rules:");
+                var total = 0.0;
+                var findings = new List<Finding>();
+                foreach (var rule in RuleSet.All)
+                {
+                    var ms = Samples.Time(() => findings.AddRange(Checker.Check(netlist, new[] { rule }, RulePolicy.Default).Findings));
+                    total += ms;
+                    line.Append($" {rule.GetType().Name} {ms:N0}");
+                }
+
+                var mapper = new DiagnosticMapper(session, design);
+                var map = Samples.Time(() => { foreach (var f in findings) mapper.FromFinding(f); });
+                line.Append($"; rules total {total:N0} ms; {findings.Count:N0} findings (")
+                    .Append(string.Join(", ", findings.GroupBy(f => f.RuleId).OrderBy(g => g.Key, StringComparer.Ordinal).Select(g => g.Key + " " + g.Count())))
+                    .Append($") mapped in {map:N0} ms; process CPU {Cpu():N0} ms so far");
+                Console.WriteLine(line);
+            }
+
+            return 0;
+        }
+
+        private static double Cpu() => Process.GetCurrentProcess().TotalProcessorTime.TotalMilliseconds;
+
         private static ImmutableArray<DiagnosticAnalyzer> PhasewardAnalyzers()
             => typeof(PhasewareAnalyzer).Assembly.GetTypes()
                 .Where(t => !t.IsAbstract && typeof(DiagnosticAnalyzer).IsAssignableFrom(t) && t.GetCustomAttribute<DiagnosticAnalyzerAttribute>() is not null)
@@ -98,6 +144,7 @@ namespace Phaseward.Benchmarks
             text.AppendLine($"- runtime {System.Runtime.InteropServices.RuntimeInformation.FrameworkDescription}, {System.Runtime.InteropServices.RuntimeInformation.OSDescription}, " +
                             $"{System.Environment.ProcessorCount} logical processors, GC {(System.Runtime.GCSettings.IsServerGC ? "server" : "workstation")}");
             text.AppendLine($"- Roslyn {typeof(CSharpCompilation).Assembly.GetName().Version} (host), Phaseward analyzers: {phasewardAnalyzers}, SDK code analyzers: {sdkAnalyzers}");
+            text.AppendLine($"- times are {(Samples.CpuTime ? "process CPU time (user+system)" : "wall-clock time")}");
             text.AppendLine($"- runs per case: {settings.Runs} (from {settings.LargeSize:N0} devices: {settings.LargeRuns}), medians; analysis not concurrent (one thread)");
             text.AppendLine();
             return text.ToString();
@@ -108,29 +155,32 @@ namespace Phaseward.Benchmarks
             static string Ms(double v) => v >= 100 ? v.ToString("N0", CultureInfo.InvariantCulture) : v.ToString("N1", CultureInfo.InvariantCulture);
             static string X(double v) => double.IsNaN(v) ? "-" : v.ToString("N2", CultureInfo.InvariantCulture) + "×";
             var text = new StringBuilder();
-            text.AppendLine("### Times (medians, ms)");
+            text.AppendLine("### Times (medians, ms of " + (Samples.CpuTime ? "CPU" : "wall") + ")");
             text.AppendLine();
-            text.AppendLine("| shape | devices | source lines | elaboration | rules | mapping | Phaseward in analyzer callbacks | Phaseward wall | walk wall | SDK analyzers wall | compiler bind+diagnose | findings | runs | spread |");
+            text.AppendLine("| shape | devices | source lines | elaboration | rules | mapping | Phaseward in analyzer callbacks | Phaseward wall | walk wall | walk + Phaseward wall | SDK analyzers wall | compiler bind+diagnose | findings | runs | spread |");
             text.AppendLine("|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|");
             foreach (var b in results)
                 text.AppendLine($"| {b.Case.Shape} | {b.Devices:N0} | {b.SourceLines:N0} | {Ms(b.Elaboration.Median)} | {Ms(b.Rules.Median)} | {Ms(b.Mapping.Median)} | " +
-                                $"{Ms(b.PhasewardCallbacks.Median)} | {Ms(b.PhasewardWall.Median)} | {Ms(b.WalkWall.Median)} | {Ms(b.SdkWall.Median)} | {Ms(b.Compiler.Median)} | " +
+                                $"{Ms(b.PhasewardCallbacks.Median)} | {Ms(b.PhasewardWall.Median)} | {Ms(b.WalkWall.Median)} | {Ms(b.WalkAndPhasewardWall.Median)} | {Ms(b.SdkWall.Median)} | {Ms(b.Compiler.Median)} | " +
                                 $"{b.Findings:N0} | {b.PhasewardWall.Count} | {b.PhasewardWall.Spread:P0} |");
             text.AppendLine();
             text.AppendLine("### Cost added over the compiler, ratios, throughput, memory");
             text.AppendLine();
-            text.AppendLine("Added = analyzer run (wall) − compiler bind+diagnose (the analyzer driver compiles the documents too).");
+            text.AppendLine("Added = analyzer run (wall) − compiler bind+diagnose (the analyzer driver compiles the documents too). " +
+                            "PW marginal = (walk + Phaseward) − walk: Phaseward's cost when the driver already binds operations for another analyzer, as in a build.");
             text.AppendLine();
-            text.AppendLine("| shape | devices | Phaseward added ms | walk added ms | SDK added ms | PW / walk | PW / SDK | PW / compiler | µs per device (PW added) | µs per device (elab+rules) | devices/s (elab+rules) | peak managed MB (elaboration) | peak managed MB (PW run) |");
-            text.AppendLine("|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|");
+            text.AppendLine("| shape | devices | Phaseward added ms | walk added ms | SDK added ms | PW marginal ms | PW / walk | PW / SDK | PW / compiler | PW marginal / compiler | µs per device (PW added) | µs per device (elab+rules) | devices/s (elab+rules) | peak managed MB (elaboration) | peak managed MB (PW run) |");
+            text.AppendLine("|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|");
             foreach (var b in results)
             {
+                var marginal = b.WalkAndPhasewardWall.Median - b.WalkWall.Median;
                 var pw = b.PhasewardWall.Median - b.Compiler.Median;
                 var walk = b.WalkWall.Median - b.Compiler.Median;
                 var sdk = b.SdkWall.Median - b.Compiler.Median;
                 var core = b.Elaboration.Median + b.Rules.Median + b.Mapping.Median;
-                text.AppendLine($"| {b.Case.Shape} | {b.Devices:N0} | {Ms(pw)} | {(b.WalkWall.Count == 0 ? "-" : Ms(walk))} | {(b.SdkWall.Count == 0 ? "-" : Ms(sdk))} | " +
+                text.AppendLine($"| {b.Case.Shape} | {b.Devices:N0} | {Ms(pw)} | {(b.WalkWall.Count == 0 ? "-" : Ms(walk))} | {(b.SdkWall.Count == 0 ? "-" : Ms(sdk))} | {(b.WalkWall.Count == 0 ? "-" : Ms(marginal))} | " +
                                 $"{(b.WalkWall.Count == 0 ? "-" : X(pw / walk))} | {(b.SdkWall.Count == 0 ? "-" : X(pw / sdk))} | {X(pw / b.Compiler.Median)} | " +
+                                $"{(b.WalkWall.Count == 0 ? "-" : X(marginal / b.Compiler.Median))} | " +
                                 $"{(pw * 1000 / b.Devices).ToString("N2", CultureInfo.InvariantCulture)} | {(core * 1000 / b.Devices).ToString("N2", CultureInfo.InvariantCulture)} | " +
                                 $"{(b.Devices / (core / 1000)).ToString("N0", CultureInfo.InvariantCulture)} | {b.ElaborationMemory.Median / 1e6:N0} | {b.PhasewardMemory.Median / 1e6:N0} |");
             }
@@ -188,6 +238,9 @@ namespace Phaseward.Benchmarks
             public Samples PhasewardMemory { get; } = new();
 
             public Samples WalkWall { get; } = new();
+
+            /// <summary>The walker and Phaseward's analyzers in one run: binding for operations is paid once, by the driver.</summary>
+            public Samples WalkAndPhasewardWall { get; } = new();
 
             public Samples SdkWall { get; } = new();
 
@@ -254,10 +307,11 @@ namespace Phaseward.Benchmarks
                         throw new InvalidOperationException("Phaseward reported " + failures[0]);
                 }
 
-                double walkMs = double.NaN, sdkMs = double.NaN;
+                double walkMs = double.NaN, sdkMs = double.NaN, bothMs = double.NaN;
                 if (!skipReferences)
                 {
                     walkMs = Analyze(ImmutableArray.Create<DiagnosticAnalyzer>(new WalkAnalyzer()), logTime: false).Ms;
+                    bothMs = Analyze(phaseward.Add(new WalkAnalyzer()), logTime: false).Ms;
                     if (!sdk.IsEmpty)
                         sdkMs = Analyze(sdk, logTime: false, sdkOptions).Ms;
                 }
@@ -273,6 +327,7 @@ namespace Phaseward.Benchmarks
                 PhasewardCallbacks.Add(callbacksMs);
                 PhasewardMemory.Add(phasewardBytes);
                 if (!double.IsNaN(walkMs)) WalkWall.Add(walkMs);
+                if (!double.IsNaN(bothMs)) WalkAndPhasewardWall.Add(bothMs);
                 if (!double.IsNaN(sdkMs)) SdkWall.Add(sdkMs);
             }
 
@@ -282,10 +337,10 @@ namespace Phaseward.Benchmarks
                 var compilation = Fresh(specific);
                 var options = new CompilationWithAnalyzersOptions(new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty),
                     (e, a, _) => throw new InvalidOperationException($"Analyzer {a} threw: {e}"), concurrentAnalysis: false, logAnalyzerExecutionTime: logTime);
-                var watch = Stopwatch.StartNew();
+                var start = Samples.Now();
                 var withAnalyzers = compilation.WithAnalyzers(analyzers, options);
                 var diagnostics = withAnalyzers.GetAnalyzerDiagnosticsAsync(CancellationToken.None).GetAwaiter().GetResult();
-                var ms = watch.Elapsed.TotalMilliseconds;
+                var ms = Samples.Now() - start;
                 var callbacks = 0.0;
                 if (logTime)
                     foreach (var analyzer in analyzers)
@@ -305,7 +360,7 @@ namespace Phaseward.Benchmarks
         private sealed class Settings
         {
             public const string Usage = "usage: Phaseward.Benchmarks [--sizes 1000,10000,100000,1000000] [--straight-line-max 100000] [--runs 5] " +
-                                        "[--large-size 100000] [--large-runs 3] [--sdk-analyzers DIR | --no-sdk] [--out FILE]";
+                                        "[--large-size 100000] [--large-runs 3] [--sdk-analyzers DIR | --no-sdk] [--out FILE] | --profile DEVICES  [--wall: wall-clock instead of CPU time]";
 
             public int[] Sizes { get; private set; } = { 1_000, 10_000, 100_000, 1_000_000 };
 
@@ -322,6 +377,8 @@ namespace Phaseward.Benchmarks
             public bool SkipSdk { get; private set; }
 
             public string? Output { get; private set; }
+
+            public int? Profile { get; private set; }
 
             public static Settings Parse(string[] args)
             {
@@ -342,6 +399,8 @@ namespace Phaseward.Benchmarks
                         case "--sdk-analyzers": s.SdkAnalyzers = Value(); break;
                         case "--no-sdk": s.SkipSdk = true; break;
                         case "--out": s.Output = Value(); break;
+                        case "--profile": s.Profile = Positive(option, Value()); break;
+                        case "--wall": Samples.CpuTime = false; break;
                         default: throw new ArgumentException($"Unknown option '{option}'.");
                     }
                 }
