@@ -90,7 +90,7 @@ namespace Phaseward.Benchmarks
         public static bool CpuTime { get; set; } = true;
 
         public static double Now()
-            => CpuTime ? Process.GetCurrentProcess().TotalProcessorTime.TotalMilliseconds : Stopwatch.GetTimestamp() * 1000.0 / Stopwatch.Frequency;
+            => CpuTime ? System.Diagnostics.Process.GetCurrentProcess().TotalProcessorTime.TotalMilliseconds : Stopwatch.GetTimestamp() * 1000.0 / Stopwatch.Frequency;
 
         public static double Time(Action action)
         {

@@ -127,7 +127,7 @@ namespace Phaseward.Benchmarks
             return 0;
         }
 
-        private static double Cpu() => Process.GetCurrentProcess().TotalProcessorTime.TotalMilliseconds;
+        private static double Cpu() => System.Diagnostics.Process.GetCurrentProcess().TotalProcessorTime.TotalMilliseconds;
 
         private static ImmutableArray<DiagnosticAnalyzer> PhasewardAnalyzers()
             => typeof(PhasewareAnalyzer).Assembly.GetTypes()
