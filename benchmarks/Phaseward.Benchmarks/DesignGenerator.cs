@@ -16,9 +16,9 @@ namespace Phaseward.Benchmarks
 
     /// <summary>
     /// Writes Phaseward designs of a chosen size for the benchmark (and the robustness tests). A design is a chain of
-    /// identical lanes; each lane mixes a static latch on the high phase, a two-input pass-gate tree on data-controlled
-    /// transmission gates, a pass gate on an enable, a restoring buffer, a dynamic latch on the low phase of a gated clock
-    /// (one gated clock per block of lanes, with a bounded idle time) and a NAND closing the lane:
+    /// identical lanes; each lane mixes a static latch on the low phase, a two-input pass-gate tree on data-controlled
+    /// transmission gates, a pass gate on an enable, a restoring buffer, a dynamic latch on the high phase of a gated clock
+    /// (one gated clock per block of lanes, with a bounded idle time; it stops low, so its high phase is closed while stopped) and a NAND closing the lane:
     /// <see cref="DevicesPerLane"/> primitives. The figures are invented for the benchmark.
     /// </summary>
     public static class DesignGenerator
@@ -115,7 +115,7 @@ namespace Phaseward.Benchmarks
         /// <summary>One lane: 13 primitives, one DSL call per device (the static and dynamic latches are one call each).</summary>
         private static void WriteLaneBody(StringBuilder text, string indent, string suffix, string input, string result)
         {
-            text.Append(indent).Append("var a").Append(suffix).Append(" = c.StaticLatch(").Append(input).Append(", clk.High);\n");
+            text.Append(indent).Append("var a").Append(suffix).Append(" = c.StaticLatch(").Append(input).Append(", clk.Low);\n");
             text.Append(indent).Append("var s").Append(suffix).Append(" = c.Inverter(a").Append(suffix).Append(");\n");
             text.Append(indent).Append("var sb").Append(suffix).Append(" = c.Inverter(s").Append(suffix).Append(");\n");
             text.Append(indent).Append("var m").Append(suffix).Append(" = c.Node();\n");
@@ -123,8 +123,8 @@ namespace Phaseward.Benchmarks
             text.Append(indent).Append("c.TransmissionGate(sb").Append(suffix).Append(", selb, m").Append(suffix).Append(");\n");
             text.Append(indent).Append("var r").Append(suffix).Append(" = c.TransmissionGate(m").Append(suffix).Append(", en);\n");
             text.Append(indent).Append("var q").Append(suffix).Append(" = c.Buffer(r").Append(suffix).Append(");\n");
-            text.Append(indent).Append("var k").Append(suffix).Append(" = c.DynamicLatch(q").Append(suffix).Append(", gated.Low);\n");
-            text.Append(indent).Append(result).Append("c.Nand(k").Append(suffix).Append(", s").Append(suffix).Append(");\n");
+            text.Append(indent).Append("var k").Append(suffix).Append(" = c.DynamicLatch(q").Append(suffix).Append(", gated.High);\n");
+            text.Append(indent).Append(result).Append("c.Nand(k").Append(suffix).Append(", en);\n");
         }
     }
 }
