@@ -19,6 +19,17 @@ namespace Phaseward.Analyzers.Tests.Robustness;
 /// </summary>
 internal static class BoundedAnalysis
 {
+    /// <summary>
+    /// The device budget for the typing and mutation tests (the samples have fewer than a hundred devices). Half-typed code
+    /// is often a loop that does not end yet; with the default budgets (2,000,000 devices, 10,000,000 steps) such a loop is
+    /// still stopped, but only after seconds to tens of seconds on this class of machine (see BENCHMARKS.md), and thousands
+    /// of variants must run in about a minute, so these tests set budgets as a project with small designs would.
+    /// </summary>
+    public const int TypingDeviceBudget = 20_000;
+
+    /// <summary>The step budget for the same tests (the samples take under a thousand steps; the default is 10,000,000).</summary>
+    public const int TypingStepBudget = 200_000;
+
     /// <summary>Far above what any analysis here needs (milliseconds); reaching it means the analyzer hangs.</summary>
     public static readonly TimeSpan HangBound = TimeSpan.FromSeconds(30);
 
@@ -50,7 +61,7 @@ internal static class BoundedAnalysis
     public static async Task<ImmutableArray<Diagnostic>> DocumentAsync(Compilation compilation, SyntaxTree tree, string what)
     {
         var failures = new List<string>();
-        var options = new CompilationWithAnalyzersOptions(new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty),
+        var options = new CompilationWithAnalyzersOptions(new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty, TypingOptions.Instance),
             (e, analyzer, _) => { lock (failures) failures.Add(analyzer.GetType().Name + ": " + e); }, concurrentAnalysis: false, logAnalyzerExecutionTime: false);
         var withAnalyzers = compilation.WithAnalyzers(Analyzers, options);
         using var bound = new CancellationTokenSource(HangBound);
@@ -74,5 +85,33 @@ internal static class BoundedAnalysis
         var internalFailure = diagnostics.FirstOrDefault(d => d.Id == RuleIds.NotElaborated && d.GetMessage().Contains("failed on it"));
         Assert.True(internalFailure is null, $"The elaborator failed internally on {what}: {internalFailure}");
         return diagnostics;
+    }
+}
+
+/// <summary>The analyzer options of the typing tests: the device and step budgets of <see cref="BoundedAnalysis"/>.</summary>
+internal sealed class TypingOptions : AnalyzerConfigOptionsProvider
+{
+    public static readonly TypingOptions Instance = new();
+
+    private static readonly Options Values = new();
+
+    public override AnalyzerConfigOptions GlobalOptions => Values;
+
+    public override AnalyzerConfigOptions GetOptions(SyntaxTree tree) => Values;
+
+    public override AnalyzerConfigOptions GetOptions(AdditionalText textFile) => Values;
+
+    private sealed class Options : AnalyzerConfigOptions
+    {
+        public override bool TryGetValue(string key, [System.Diagnostics.CodeAnalysis.NotNullWhen(true)] out string? value)
+        {
+            value = key switch
+            {
+                "phaseward.elaboration_device_budget" => BoundedAnalysis.TypingDeviceBudget.ToString(System.Globalization.CultureInfo.InvariantCulture),
+                "phaseward.elaboration_step_budget" => BoundedAnalysis.TypingStepBudget.ToString(System.Globalization.CultureInfo.InvariantCulture),
+                _ => null,
+            };
+            return value is not null;
+        }
     }
 }

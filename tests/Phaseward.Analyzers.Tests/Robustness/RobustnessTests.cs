@@ -106,7 +106,30 @@ public class RobustnessTests
         var issue = Assert.Single(result.Issues);
         Assert.Equal(RuleIds.ElaborationBudgetExceeded, issue.RuleId);
         Assert.Contains("device budget of 1000 devices", string.Join(" ", issue.Arguments));
-        Assert.Equal(1_001, result.Netlist!.Devices.Count);
+        // Each inverter makes a net too: the input and 1,000 inverter outputs make 1,001 nets, just past the budget.
+        Assert.Equal(1_000, result.Netlist!.Devices.Count);
+    }
+
+    [Fact]
+    public void EndlessLoopMakingNetsStopsAtTheDeviceBudget()
+    {
+        var designs = new InMemoryDesigns(("/src/Nets.cs", """
+            using Phaseward;
+
+            public sealed class Nets : Design
+            {
+                protected override void Describe(Circuit c)
+                {
+                    for (var i = 0; i >= 0; i++)
+                        c.Node();
+                }
+            }
+            """));
+        var result = designs.CompileTime("Nets", new ElaborationLimits(ElaborationLimits.DefaultStepBudget, ElaborationLimits.DefaultRecursionLimit, 1_000));
+
+        var issue = Assert.Single(result.Issues);
+        Assert.Contains("device budget of 1000 devices (or nets", string.Join(" ", issue.Arguments));
+        Assert.Equal(1_001, result.Netlist!.Nets.Count);
     }
 
     [Fact]

@@ -41,7 +41,7 @@ namespace Phaseward.Analyzers.Elaboration
 
         public int RecursionLimit { get; }
 
-        /// <summary>The most devices one design may elaborate to.</summary>
+        /// <summary>The most devices (and, separately, nets) one design may elaborate to.</summary>
         public long DeviceBudget { get; }
 
         public bool Equals(ElaborationLimits other) => StepBudget == other.StepBudget && RecursionLimit == other.RecursionLimit && DeviceBudget == other.DeviceBudget;

@@ -65,10 +65,10 @@ namespace Phaseward.Analyzers.Elaboration
             try
             {
                 var result = member is ConstructorInfo constructor ? constructor.Invoke(clrArguments) : member.Invoke(receiver, clrArguments);
-                if (circuit is not null && circuit.DeviceCount > limits.DeviceBudget)
+                if (circuit is not null && (circuit.DeviceCount > limits.DeviceBudget || circuit.NetCount > limits.DeviceBudget))
                 {
                     Report(RuleIds.ElaborationBudgetExceeded, loops.Count > 0 ? loops.Peek().Syntax : site.Syntax, DesignName,
-                        $"the device budget of {limits.DeviceBudget} devices (phaseward.elaboration_device_budget) is used up");
+                        $"the device budget of {limits.DeviceBudget} devices (or nets; phaseward.elaboration_device_budget) is used up");
                     throw new ElaborationStopped();
                 }
 
