@@ -157,8 +157,8 @@ namespace Phaseward.Benchmarks
             var text = new StringBuilder();
             text.AppendLine("### Times (medians, ms of " + (Samples.CpuTime ? "CPU" : "wall") + ")");
             text.AppendLine();
-            text.AppendLine("| shape | devices | source lines | elaboration | rules | mapping | Phaseward in analyzer callbacks | Phaseward wall | walk wall | walk + Phaseward wall | SDK analyzers wall | compiler bind+diagnose | findings | runs | spread |");
-            text.AppendLine("|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|");
+            text.AppendLine("| shape | devices | source lines | elaboration | rules | mapping | Phaseward in analyzer callbacks (Roslyn telemetry, wall clock) | Phaseward run | walk run | walk + Phaseward run | SDK analyzers run | compiler bind+diagnose | findings | runs | spread (Phaseward run) |");
+            text.AppendLine("|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|");
             foreach (var b in results)
                 text.AppendLine($"| {b.Case.Shape} | {b.Devices:N0} | {b.SourceLines:N0} | {Ms(b.Elaboration.Median)} | {Ms(b.Rules.Median)} | {Ms(b.Mapping.Median)} | " +
                                 $"{Ms(b.PhasewardCallbacks.Median)} | {Ms(b.PhasewardWall.Median)} | {Ms(b.WalkWall.Median)} | {Ms(b.WalkAndPhasewardWall.Median)} | {Ms(b.SdkWall.Median)} | {Ms(b.Compiler.Median)} | " +
@@ -166,7 +166,7 @@ namespace Phaseward.Benchmarks
             text.AppendLine();
             text.AppendLine("### Cost added over the compiler, ratios, throughput, memory");
             text.AppendLine();
-            text.AppendLine("Added = analyzer run (wall) − compiler bind+diagnose (the analyzer driver compiles the documents too). " +
+            text.AppendLine("Added = analyzer run − compiler bind+diagnose (the analyzer driver compiles the documents too). " +
                             "PW marginal = (walk + Phaseward) − walk: Phaseward's cost when the driver already binds operations for another analyzer, as in a build.");
             text.AppendLine();
             text.AppendLine("| shape | devices | Phaseward added ms | walk added ms | SDK added ms | PW marginal ms | PW / walk | PW / SDK | PW / compiler | PW marginal / compiler | µs per device (PW added) | µs per device (elab+rules) | devices/s (elab+rules) | peak managed MB (elaboration) | peak managed MB (PW run) |");
