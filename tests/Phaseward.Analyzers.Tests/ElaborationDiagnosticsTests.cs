@@ -121,6 +121,26 @@ public class ElaborationBudgetTests
             .RunAsync();
 
     [Fact]
+    public Task EndlessLoopMakingDevicesStopsAtAConfiguredDeviceBudget()
+        => new PhasewareAnalyzerTest<ElaborationAnalyzer>("""
+                using Phaseward;
+
+                public sealed class Runaway : Design
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var n = c.Input("a");
+                        {|#0:for (var i = 0; i >= 0; i++)
+                            n = c.Inverter(n);|}
+                    }
+                }
+                """,
+                new DiagnosticResult(RuleIds.ElaborationBudgetExceeded, DiagnosticSeverity.Warning).WithLocation(0)
+                    .WithArguments("Runaway", "the device budget of 500 devices (or nets; phaseward.elaboration_device_budget) is used up"))
+            .WithEditorConfig("phaseward.elaboration_device_budget = 500")
+            .RunAsync();
+
+    [Fact]
     public void EndlessLoopStopsAtTheDefaultBudget()
     {
         var result = new InMemoryDesigns(("/src/Endless.cs", EndlessLoop.Replace("{|#0:", "").Replace("|}", ""))).CompileTime("Endless");

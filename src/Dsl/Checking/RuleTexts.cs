@@ -60,8 +60,9 @@ namespace Phaseward
         public const string ElaborationBudgetExceededTitle = "Compile-time elaboration stopped at its budget";
         public const string ElaborationBudgetExceededMessage = "Phaseward stopped elaborating design '{0}' here: {1}; the part elaborated so far is still checked";
         public const string ElaborationBudgetExceededDescription =
-            "A step budget (loop iterations and calls) and a call-depth limit keep the editor responsive when a loop or a recursion does " +
-            "not end. Raise phaseward.elaboration_step_budget or phaseward.elaboration_recursion_limit if the design is merely large.";
+            "A step budget (loop iterations and calls), a device budget and a call-depth limit keep the editor responsive when a loop or a " +
+            "recursion does not end. Raise phaseward.elaboration_step_budget, phaseward.elaboration_device_budget or " +
+            "phaseward.elaboration_recursion_limit if the design is merely large.";
 
         public const string DesignThrowsTitle = "The design throws while it is elaborated";
         public const string DesignThrowsMessage = "Design '{0}' throws here when it is elaborated: {1}";

@@ -43,6 +43,9 @@ namespace Phaseward
         /// <summary>How many primitives the circuit holds so far.</summary>
         public int DeviceCount => devices.Count;
 
+        /// <summary>How many nets the circuit holds so far (the compile-time elaborator bounds it like the devices).</summary>
+        internal int NetCount => nets.Count;
+
         /// <summary>
         /// Set by the compile-time elaborator: where the DSL call being executed was written. At run time it is null and
         /// the caller's file and line are used.

@@ -14,6 +14,20 @@ namespace Phaseward.Analyzers.Elaboration
     {
         public static object? Binary(BinaryOperatorKind kind, object left, object right, ITypeSymbol operandType, bool isChecked)
         {
+            // In code that does not compile yet an operand can be a value of another type (a net where a number belongs):
+            // such an operation is outside the subset, like any other the elaborator does not handle.
+            try
+            {
+                return BinaryOf(kind, left, right, operandType, isChecked);
+            }
+            catch (InvalidCastException)
+            {
+                return null;
+            }
+        }
+
+        private static object? BinaryOf(BinaryOperatorKind kind, object left, object right, ITypeSymbol operandType, bool isChecked)
+        {
             if (operandType.TypeKind == TypeKind.Enum)
                 return Enum(kind, left, right);
             switch (operandType.SpecialType)
@@ -59,6 +73,18 @@ namespace Phaseward.Analyzers.Elaboration
         };
 
         public static object? Unary(UnaryOperatorKind kind, object operand, ITypeSymbol type, bool isChecked)
+        {
+            try
+            {
+                return UnaryOf(kind, operand, type, isChecked);
+            }
+            catch (InvalidCastException)
+            {
+                return null;
+            }
+        }
+
+        private static object? UnaryOf(UnaryOperatorKind kind, object operand, ITypeSymbol type, bool isChecked)
         {
             switch (type.SpecialType)
             {

@@ -15,28 +15,39 @@ namespace Phaseward.Analyzers.Elaboration
         /// </summary>
         public const long DefaultStepBudget = 10_000_000;
 
+        /// <summary>
+        /// Default cap on the devices (primitives) one design may elaborate to. Steps bound the interpretation, but a runaway
+        /// loop that makes devices costs far more per step (each device is kept, with its source span): this cap stops it
+        /// before it takes the compiler's memory and minutes of time. Twice the largest design the benchmark measures.
+        /// </summary>
+        public const int DefaultDeviceBudget = 2_000_000;
+
         /// <summary>Default limit on nested calls of interpreted methods (recursion depth).</summary>
         public const int DefaultRecursionLimit = 64;
 
         /// <summary>The largest recursion limit accepted: deeper nesting would risk the compiler's own stack.</summary>
         public const int MaxRecursionLimit = 512;
 
-        public ElaborationLimits(long stepBudget, int recursionLimit)
+        public ElaborationLimits(long stepBudget, int recursionLimit, long deviceBudget = DefaultDeviceBudget)
         {
             StepBudget = stepBudget;
             RecursionLimit = recursionLimit;
+            DeviceBudget = deviceBudget;
         }
 
-        public static ElaborationLimits Default { get; } = new(DefaultStepBudget, DefaultRecursionLimit);
+        public static ElaborationLimits Default { get; } = new(DefaultStepBudget, DefaultRecursionLimit, DefaultDeviceBudget);
 
         public long StepBudget { get; }
 
         public int RecursionLimit { get; }
 
-        public bool Equals(ElaborationLimits other) => StepBudget == other.StepBudget && RecursionLimit == other.RecursionLimit;
+        /// <summary>The most devices (and, separately, nets) one design may elaborate to.</summary>
+        public long DeviceBudget { get; }
+
+        public bool Equals(ElaborationLimits other) => StepBudget == other.StepBudget && RecursionLimit == other.RecursionLimit && DeviceBudget == other.DeviceBudget;
 
         public override bool Equals(object? obj) => obj is ElaborationLimits other && Equals(other);
 
-        public override int GetHashCode() => StepBudget.GetHashCode() * 31 + RecursionLimit;
+        public override int GetHashCode() => (StepBudget.GetHashCode() * 31 + RecursionLimit) * 31 + DeviceBudget.GetHashCode();
     }
 }

@@ -152,6 +152,7 @@ namespace Phaseward.Analyzers.Elaboration
                     var index = Evaluate(element.Indices[0], frame);
                     if (Unknown.Is(array) || Unknown.Is(index)) return default;
                     if (array is not object?[] items) break;
+                    if (index is not (int or long or short or byte or sbyte or ushort or uint or ulong or char)) break; // broken code
                     var i = System.Convert.ToInt32(index, CultureInfo.InvariantCulture);
                     if (i < 0 || i >= items.Length)
                     {

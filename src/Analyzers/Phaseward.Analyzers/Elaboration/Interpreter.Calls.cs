@@ -65,6 +65,13 @@ namespace Phaseward.Analyzers.Elaboration
             try
             {
                 var result = member is ConstructorInfo constructor ? constructor.Invoke(clrArguments) : member.Invoke(receiver, clrArguments);
+                if (circuit is not null && (circuit.DeviceCount > limits.DeviceBudget || circuit.NetCount > limits.DeviceBudget))
+                {
+                    Report(RuleIds.ElaborationBudgetExceeded, loops.Count > 0 ? loops.Peek().Syntax : site.Syntax, DesignName,
+                        $"the device budget of {limits.DeviceBudget} devices (or nets; phaseward.elaboration_device_budget) is used up");
+                    throw new ElaborationStopped();
+                }
+
                 return FromClr(result);
             }
             catch (TargetInvocationException e) when (e.InnerException is { } inner && inner is not OperationCanceledException)
@@ -72,7 +79,7 @@ namespace Phaseward.Analyzers.Elaboration
                 Throws(site.Syntax, inner.Message);
                 return Unknown.Value;
             }
-            catch (Exception e) when (e is ArgumentException or TargetParameterCountException or InvalidCastException or MemberAccessException)
+            catch (Exception e) when (e is ArgumentException or TargetParameterCountException or InvalidCastException or MemberAccessException or TargetException)
             {
                 return Unsupported(site, "the call to " + Describe(method), "its arguments could not be passed (" + e.Message + ")");
             }

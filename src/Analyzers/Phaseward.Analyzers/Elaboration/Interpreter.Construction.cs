@@ -49,7 +49,17 @@ namespace Phaseward.Analyzers.Elaboration
                     if (chained is not null)
                     {
                         var (values, _) = Arguments(chained.Arguments, chained.TargetMethod, frame);
-                        Construct(instance, chained.TargetMethod, values ?? new object?[chained.TargetMethod.Parameters.Length], chained);
+                        // ': this(...)' chains can loop in code that does not compile yet (a constructor calling itself):
+                        // each link counts against the recursion limit, so the elaborator stops instead of overflowing the stack.
+                        EnterCall(chained);
+                        try
+                        {
+                            Construct(instance, chained.TargetMethod, values ?? new object?[chained.TargetMethod.Parameters.Length], chained);
+                        }
+                        finally
+                        {
+                            LeaveCall();
+                        }
                     }
                     else
                     {

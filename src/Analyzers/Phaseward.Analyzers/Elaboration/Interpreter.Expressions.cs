@@ -217,6 +217,9 @@ namespace Phaseward.Analyzers.Elaboration
             if (Unknown.Is(index)) return index;
             if (array is not object?[] items)
                 return Unsupported(element, "this array", "it does not come from the design's code");
+            // In code that does not compile yet the index can be a value of another type (a net, a string).
+            if (index is not (int or long or short or byte or sbyte or ushort or uint or ulong or char))
+                return Unsupported(element, "this array index", "it is not a whole number");
             var i = System.Convert.ToInt32(index, CultureInfo.InvariantCulture);
             if (i < 0 || i >= items.Length)
             {

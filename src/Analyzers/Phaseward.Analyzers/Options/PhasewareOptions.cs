@@ -26,7 +26,8 @@ namespace Phaseward.Analyzers.Options
             var reader = new OptionReader(options, problems);
             var limits = new ElaborationLimits(
                 reader.Integer(OptionKeys.ElaborationStepBudget, ElaborationLimits.DefaultStepBudget, 1, long.MaxValue / 2),
-                reader.Integer(OptionKeys.ElaborationRecursionLimit, ElaborationLimits.DefaultRecursionLimit, 1, ElaborationLimits.MaxRecursionLimit));
+                reader.Integer(OptionKeys.ElaborationRecursionLimit, ElaborationLimits.DefaultRecursionLimit, 1, ElaborationLimits.MaxRecursionLimit),
+                reader.Integer(OptionKeys.ElaborationDeviceBudget, ElaborationLimits.DefaultDeviceBudget, 1, int.MaxValue));
             var policy = RulePolicyReader.Read(reader);
             return new PhasewareOptions(limits, policy, problems);
         }

@@ -11,7 +11,7 @@ using Phaseward.Analyzers.Elaboration;
 using Phaseward.Analyzers.Tests.Elaboration;
 using Phaseward.Analyzers.Tests.Verifiers;
 
-namespace Phaseward.Analyzers.Tests;
+namespace Phaseward.Analyzers.Tests.Robustness;
 
 /// <summary>Half-typed and mutated designs never make the elaborator throw (AD0001) or hang; cancellation is honoured.</summary>
 public class RobustnessTests
@@ -68,6 +68,68 @@ public class RobustnessTests
         Assert.DoesNotContain(diagnostics, d => d.Id == "AD0001");
         // Code that does not compile is the compiler's to report; the elaborator adds no PW9001 for it.
         Assert.DoesNotContain(diagnostics, d => d.Id == RuleIds.NotElaborated && d.GetMessage().Contains("failed on it"));
+    }
+
+    [Theory]
+    [InlineData("public Looping() : this() { }")]
+    [InlineData("public Looping() : this(4) { } public Looping(int bits) : this() { }")]
+    public async Task ConstructorChainThatCallsItselfStopsAtTheRecursionLimit(string constructors)
+    {
+        // Does not compile (CS0516 / CS0768), but is what the editor sees mid-edit: it once overflowed the elaborator's stack.
+        var source = "using Phaseward;\npublic sealed class Looping : Design\n{\n    " + constructors + "\n" +
+                     "    protected override void Describe(Circuit c) => c.Output(\"y\", c.Input(\"a\"));\n}\n";
+        var tree = BoundedAnalysis.Parse("/src/Looping.cs", source);
+        var diagnostics = await BoundedAnalysis.DocumentAsync(BoundedAnalysis.Compile(new[] { tree }), tree, "a constructor chain that calls itself");
+        Assert.Contains(diagnostics, d => d.Id == RuleIds.ElaborationBudgetExceeded && d.GetMessage().Contains("nest deeper"));
+    }
+
+    [Fact]
+    public void EndlessLoopMakingDevicesStopsAtTheDeviceBudget()
+    {
+        // Steps alone let such a loop make millions of devices (minutes, gigabytes) before the step budget runs out.
+        var designs = new InMemoryDesigns(("/src/Runaway.cs", """
+            using Phaseward;
+
+            public sealed class Runaway : Design
+            {
+                protected override void Describe(Circuit c)
+                {
+                    var n = c.Input("a");
+                    for (var i = 0; i >= 0; i++)
+                        n = c.Inverter(n);
+                    c.Output("y", n);
+                }
+            }
+            """));
+        var result = designs.CompileTime("Runaway", new ElaborationLimits(ElaborationLimits.DefaultStepBudget, ElaborationLimits.DefaultRecursionLimit, 1_000));
+
+        var issue = Assert.Single(result.Issues);
+        Assert.Equal(RuleIds.ElaborationBudgetExceeded, issue.RuleId);
+        Assert.Contains("device budget of 1000 devices", string.Join(" ", issue.Arguments));
+        // Each inverter makes a net too: the input and 1,000 inverter outputs make 1,001 nets, just past the budget.
+        Assert.Equal(1_000, result.Netlist!.Devices.Count);
+    }
+
+    [Fact]
+    public void EndlessLoopMakingNetsStopsAtTheDeviceBudget()
+    {
+        var designs = new InMemoryDesigns(("/src/Nets.cs", """
+            using Phaseward;
+
+            public sealed class Nets : Design
+            {
+                protected override void Describe(Circuit c)
+                {
+                    for (var i = 0; i >= 0; i++)
+                        c.Node();
+                }
+            }
+            """));
+        var result = designs.CompileTime("Nets", new ElaborationLimits(ElaborationLimits.DefaultStepBudget, ElaborationLimits.DefaultRecursionLimit, 1_000));
+
+        var issue = Assert.Single(result.Issues);
+        Assert.Contains("device budget of 1000 devices (or nets", string.Join(" ", issue.Arguments));
+        Assert.Equal(1_001, result.Netlist!.Nets.Count);
     }
 
     [Fact]

@@ -1,0 +1,124 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using System.Text;
+using System.Threading.Tasks;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.CSharp;
+
+namespace Phaseward.Analyzers.Tests.Robustness;
+
+/// <summary>
+/// Every sample file as it is being typed (prefixes, sampled), and seeded random token-level mutations of the samples:
+/// the analyzers never throw (AD0001), never fail inside the elaborator, and never hang. The other sample files stay
+/// whole, as in the editor.
+/// </summary>
+public class TypingTests
+{
+    /// <summary>Prefixes per sample file: one per stride, at a seeded random offset inside it, plus every line end.</summary>
+    private const int PrefixesPerFile = 30;
+
+    /// <summary>Mutated variants per sample file (9 files: 2,070 in all).</summary>
+    private const int MutationsPerFile = 230;
+
+    public static IEnumerable<object[]> SampleFiles() => BoundedAnalysis.Samples.Select(s => new object[] { s.Path });
+
+    [Theory]
+    [MemberData(nameof(SampleFiles))]
+    public async Task EveryPrefixOfASampleAsTyped(string path)
+    {
+        var (baseline, tree, text) = Setup(path);
+        var random = new Random(Seed(path));
+        var cuts = new SortedSet<int> { 0, text.Length };
+        var stride = Math.Max(1, text.Length / PrefixesPerFile);
+        for (var start = 0; start < text.Length; start += stride)
+            cuts.Add(Math.Min(text.Length, start + random.Next(stride)));
+        for (var i = text.IndexOf('\n'); i >= 0; i = text.IndexOf('\n', i + 1))
+            if (random.Next(3) == 0)
+                cuts.Add(i);
+
+        foreach (var cut in cuts)
+            await AnalyseVariant(baseline, tree, text.Substring(0, cut), $"{path} cut at {cut} of {text.Length}");
+    }
+
+    [Theory]
+    [MemberData(nameof(SampleFiles))]
+    public async Task RandomTokenMutationsOfASample(string path)
+    {
+        var (baseline, tree, text) = Setup(path);
+        var tokens = tree.GetRoot().DescendantTokens().Where(t => t.Span.Length > 0).ToList();
+        var random = new Random(Seed(path) ^ 0x5EED);
+        for (var n = 0; n < MutationsPerFile; n++)
+        {
+            var edits = new List<(int Start, int Length, string Text)>();
+            var count = 1 + random.Next(3);
+            var describe = new StringBuilder();
+            for (var k = 0; k < count; k++)
+            {
+                var token = tokens[random.Next(tokens.Count)];
+                var other = tokens[random.Next(tokens.Count)].Text;
+                switch (random.Next(5))
+                {
+                    case 0: edits.Add((token.SpanStart, token.Span.Length, "")); describe.Append($" delete '{token.Text}'@{token.SpanStart}"); break;
+                    case 1: edits.Add((token.SpanStart, 0, token.Text + " ")); describe.Append($" duplicate '{token.Text}'@{token.SpanStart}"); break;
+                    case 2: edits.Add((token.SpanStart, token.Span.Length, other)); describe.Append($" replace '{token.Text}'@{token.SpanStart} by '{other}'"); break;
+                    case 3: edits.Add((token.SpanStart, 0, other + " ")); describe.Append($" insert '{other}'@{token.SpanStart}"); break;
+                    default:
+                        var next = token.GetNextToken();
+                        if (next.Span.Length == 0) goto case 0;
+                        edits.Add((token.SpanStart, next.Span.End - token.SpanStart, next.Text + text.Substring(token.Span.End, next.SpanStart - token.Span.End) + token.Text));
+                        describe.Append($" swap '{token.Text}' '{next.Text}'@{token.SpanStart}");
+                        break;
+                }
+            }
+
+            await AnalyseVariant(baseline, tree, Apply(text, edits), $"{path} mutation {n}:{describe}");
+        }
+    }
+
+    private static async Task AnalyseVariant(CSharpCompilation baseline, SyntaxTree original, string variant, string what)
+    {
+        var tree = BoundedAnalysis.Parse(original.FilePath, variant);
+        var compilation = baseline.ReplaceSyntaxTree(original, tree);
+        await BoundedAnalysis.DocumentAsync(compilation, tree, what);
+
+        // A file without a design (the process figures, the program) is typed while designs that use it are open.
+        if (!variant.Contains("Describe", StringComparison.Ordinal))
+        {
+            var design = compilation.SyntaxTrees.First(t => t.FilePath.EndsWith("BurstCapture.cs", StringComparison.Ordinal));
+            await BoundedAnalysis.DocumentAsync(compilation, design, what + " (BurstCapture.cs analysed)");
+        }
+    }
+
+    private static (CSharpCompilation Baseline, SyntaxTree Tree, string Text) Setup(string path)
+    {
+        var trees = BoundedAnalysis.Samples.Select(s => BoundedAnalysis.Parse(s.Path, s.Text)).ToList();
+        var tree = trees.Single(t => t.FilePath == path);
+        return (BoundedAnalysis.Compile(trees), tree, tree.ToString());
+    }
+
+    /// <summary>Applies non-overlapping edits (overlapping ones after the first are dropped), from the end backwards.</summary>
+    private static string Apply(string text, List<(int Start, int Length, string Text)> edits)
+    {
+        var kept = new List<(int Start, int Length, string Text)>();
+        foreach (var edit in edits.OrderBy(e => e.Start))
+            if (kept.Count == 0 || edit.Start >= kept[^1].Start + kept[^1].Length && edit.Start != kept[^1].Start)
+                kept.Add(edit);
+        var result = new StringBuilder(text);
+        foreach (var edit in Enumerable.Reverse(kept))
+        {
+            result.Remove(edit.Start, edit.Length);
+            result.Insert(edit.Start, edit.Text);
+        }
+
+        return result.ToString();
+    }
+
+    private static int Seed(string path)
+    {
+        var seed = 17;
+        foreach (var ch in path)
+            seed = unchecked(seed * 31 + ch);
+        return seed;
+    }
+}
