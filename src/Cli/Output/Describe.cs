@@ -25,6 +25,10 @@ internal static class Describe
     public static string ShortLocation(SourceSpan span)
         => span.IsKnown ? $"{System.IO.Path.GetFileName(span.Path)}:{span.Line.ToString(CultureInfo.InvariantCulture)}" : "?";
 
+    /// <summary>"1 clock", "2 clocks".</summary>
+    public static string Count(int count, string noun)
+        => count.ToString(CultureInfo.InvariantCulture) + " " + noun + (count == 1 ? string.Empty : "s");
+
     public static string Window(PhaseWindow window) => $"[{window.Opens}, {window.Closes})";
 
     public static string ClockKindText(Clock clock) => clock.Kind switch

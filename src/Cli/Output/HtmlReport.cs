@@ -58,7 +58,8 @@ internal static class HtmlReport
         var n = r.Netlist;
         h.Append("<section class=\"design\" id=\"").Append(E(Anchor(r))).Append("\" data-design=\"").Append(E(r.Name)).AppendLine("\">");
         h.Append("<h2>").Append(E(r.Name)).Append(" <small>").Append(E(r.TypeName)).Append(" · ")
-            .Append(n.Devices.Count).Append(" devices, ").Append(n.Nets.Count).Append(" nets, ").Append(n.Clocks.Count).AppendLine(" clocks</small></h2>");
+            .Append(Describe.Count(n.Devices.Count, "device")).Append(", ").Append(Describe.Count(n.Nets.Count, "net")).Append(", ")
+            .Append(Describe.Count(n.Clocks.Count, "clock")).AppendLine("</small></h2>");
 
         h.AppendLine("<h3>Findings</h3>");
         if (r.Findings.Count == 0)

@@ -22,7 +22,7 @@ internal static class TextReport
     public static void WriteDesign(TextWriter w, DesignReport r)
     {
         var n = r.Netlist;
-        w.WriteLine($"== Design '{r.Name}' ({r.TypeName}): {n.Devices.Count} devices, {n.Nets.Count} nets, {n.Clocks.Count} clocks");
+        w.WriteLine($"== Design '{r.Name}' ({r.TypeName}): {Describe.Count(n.Devices.Count, "device")}, {Describe.Count(n.Nets.Count, "net")}, {Describe.Count(n.Clocks.Count, "clock")}");
 
         var errors = r.Findings.Count(f => f.Severity == ReportSeverity.Error);
         var warnings = r.Findings.Count(f => f.Severity == ReportSeverity.Warning);
