@@ -53,10 +53,10 @@ namespace Phaseward.Analyzers.Elaboration
             if (receiver is not null && IsNumericValue(receiver) && member.DeclaringType != receiver.GetType())
                 return Unsupported(site, "the call to " + Describe(method), "it is outside the subset");
 
-            var parameters = member.GetParameters();
-            var clrArguments = new object?[parameters.Length];
-            for (var i = 0; i < parameters.Length; i++)
-                clrArguments[i] = ToClr(arguments[i], parameters[i].ParameterType);
+            var parameterTypes = session.ParameterTypesOf(member);
+            var clrArguments = new object?[parameterTypes.Length];
+            for (var i = 0; i < parameterTypes.Length; i++)
+                clrArguments[i] = ToClr(arguments[i], parameterTypes[i]);
 
             var circuit = Circuit;
             var callers = this.callers;
@@ -156,6 +156,7 @@ namespace Phaseward.Analyzers.Elaboration
             }
 
             EnterCall(site);
+            var outerCallers = callers;
             PushCaller(site.Syntax);
             try
             {
@@ -174,7 +175,8 @@ namespace Phaseward.Analyzers.Elaboration
             }
             finally
             {
-                PopCaller();
+                // The caller chains are never mutated once built, so the outer chain is restored as it was.
+                callers = outerCallers;
                 LeaveCall();
             }
         }
