@@ -59,9 +59,15 @@ namespace Phaseward.Analyzers.Elaboration
                 clrArguments[i] = ToClr(arguments[i], parameterTypes[i]);
 
             var circuit = Circuit;
-            var callers = this.callers;
             if (circuit is not null)
-                circuit.SourceSiteProvider = () => SourceSites.For(site.Syntax, callers);
+            {
+                // One delegate per interpreter (not a closure per call): the DSL asks for the site synchronously, during
+                // this call, and a DSL member never calls back into the interpreter.
+                clrSite = site;
+                clrSiteCallers = callers;
+                circuit.SourceSiteProvider = clrSiteProvider ??= CurrentClrSite;
+            }
+
             try
             {
                 var result = member is ConstructorInfo constructor ? constructor.Invoke(clrArguments) : member.Invoke(receiver, clrArguments);
@@ -89,6 +95,12 @@ namespace Phaseward.Analyzers.Elaboration
                     circuit.SourceSiteProvider = null;
             }
         }
+
+        private IOperation? clrSite;
+        private SourceSpan[] clrSiteCallers = Array.Empty<SourceSpan>();
+        private Func<SourceSpan>? clrSiteProvider;
+
+        private SourceSpan CurrentClrSite() => SourceSites.For(clrSite!.Syntax, clrSiteCallers);
 
         private object? CallOperator(IOperation site, IMethodSymbol method, object?[] operands, Frame frame)
         {
