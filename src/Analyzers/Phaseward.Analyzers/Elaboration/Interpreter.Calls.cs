@@ -120,7 +120,8 @@ namespace Phaseward.Analyzers.Elaboration
         private (object?[]? Values, Variable?[] References) Arguments(IReadOnlyList<IArgumentOperation> arguments, IMethodSymbol method, Frame frame)
         {
             var values = new object?[method.Parameters.Length];
-            var references = new Variable?[method.Parameters.Length];
+            // Allocated only when a ref/out argument needs it (DSL calls never do); an empty array means none.
+            Variable?[]? references = null;
             var unknown = false;
             foreach (var argument in arguments)
             {
@@ -137,7 +138,7 @@ namespace Phaseward.Analyzers.Elaboration
                         continue;
                     }
 
-                    references[ordinal] = variable;
+                    (references ??= new Variable?[method.Parameters.Length])[ordinal] = variable;
                     values[ordinal] = variable.Value;
                     continue;
                 }
@@ -148,7 +149,7 @@ namespace Phaseward.Analyzers.Elaboration
                 values[ordinal] = value;
             }
 
-            return (unknown ? null : values, references);
+            return (unknown ? null : values, references ?? Array.Empty<Variable?>());
         }
 
         /// <summary>Runs a method, local function or accessor declared in this compilation.</summary>
@@ -176,7 +177,7 @@ namespace Phaseward.Analyzers.Elaboration
                 var parameters = method.OriginalDefinition.Parameters;
                 for (var i = 0; i < parameters.Length && i < arguments.Length; i++)
                 {
-                    if (references[i] is { } variable)
+                    if (i < references.Length && references[i] is { } variable)
                         frame.Bind(parameters[i], variable);
                     else
                         frame.Declare(parameters[i], arguments[i]);
