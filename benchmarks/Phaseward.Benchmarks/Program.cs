@@ -104,16 +104,20 @@ namespace Phaseward.Benchmarks
                 var line = new StringBuilder($"run {run}: ");
                 var bind = Samples.Time(() => session.Models.Get(tree).GetOperation(design.DescribeSyntax));
                 ElaborationResult? result = null;
+                // Bytes allocated on this thread: a figure the shared machine's load does not disturb.
+                var allocatedBefore = GC.GetAllocatedBytesForCurrentThread();
                 var elaborate = Samples.Time(() => result = DesignElaborator.Elaborate(session, design, ElaborationLimits.Default, CancellationToken.None));
+                var elaborateMb = (GC.GetAllocatedBytesForCurrentThread() - allocatedBefore) / 1e6;
                 var netlist = result!.Netlist!;
-                line.Append($"bind {bind:N0} ms, elaborate {elaborate:N0} ms ({result.Steps:N0} steps, {netlist.Devices.Count:N0} devices); rules:");
+                line.Append($"bind {bind:N0} ms, elaborate {elaborate:N0} ms, {elaborateMb:N0} MB allocated ({result.Steps:N0} steps, {netlist.Devices.Count:N0} devices); rules:");
                 var total = 0.0;
                 var findings = new List<Finding>();
                 foreach (var rule in RuleSet.All)
                 {
+                    var ruleAllocated = GC.GetAllocatedBytesForCurrentThread();
                     var ms = Samples.Time(() => findings.AddRange(Checker.Check(netlist, new[] { rule }, RulePolicy.Default).Findings));
                     total += ms;
-                    line.Append($" {rule.GetType().Name} {ms:N0}");
+                    line.Append($" {rule.GetType().Name} {ms:N0} ({(GC.GetAllocatedBytesForCurrentThread() - ruleAllocated) / 1e6:N0} MB)");
                 }
 
                 var mapper = new DiagnosticMapper(session, design);

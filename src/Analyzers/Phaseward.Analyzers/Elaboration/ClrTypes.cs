@@ -9,9 +9,12 @@ namespace Phaseward.Analyzers.Elaboration
     {
         public static readonly Assembly Dsl = typeof(Design).Assembly;
 
+        // Assembly.GetName() builds a new AssemblyName on every call; the name is asked for on every DSL call.
+        private static readonly string DslName = Dsl.GetName().Name;
+
         /// <summary>True if the symbol is declared in the Phaseward DSL assembly.</summary>
         public static bool IsDsl(ISymbol? symbol)
-            => symbol?.ContainingAssembly is { } assembly && assembly.Identity.Name == Dsl.GetName().Name;
+            => symbol?.ContainingAssembly is { } assembly && assembly.Identity.Name == DslName;
 
         /// <summary>The run-time type for a symbol, when it is a DSL type or a well-known library type; else null.</summary>
         public static Type? Resolve(ITypeSymbol type)
@@ -77,7 +80,7 @@ namespace Phaseward.Analyzers.Elaboration
 
         private static Type? FindType(IAssemblySymbol? assembly, string name)
         {
-            if (assembly is not null && assembly.Identity.Name == Dsl.GetName().Name)
+            if (assembly is not null && assembly.Identity.Name == DslName)
                 return Dsl.GetType(name, throwOnError: false);
             // Library types: System.Private.CoreLib / netstandard forwarders resolve by name.
             return Type.GetType(name, throwOnError: false)

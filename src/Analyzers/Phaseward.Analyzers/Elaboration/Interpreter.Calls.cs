@@ -53,15 +53,21 @@ namespace Phaseward.Analyzers.Elaboration
             if (receiver is not null && IsNumericValue(receiver) && member.DeclaringType != receiver.GetType())
                 return Unsupported(site, "the call to " + Describe(method), "it is outside the subset");
 
-            var parameters = member.GetParameters();
-            var clrArguments = new object?[parameters.Length];
-            for (var i = 0; i < parameters.Length; i++)
-                clrArguments[i] = ToClr(arguments[i], parameters[i].ParameterType);
+            var parameterTypes = session.ParameterTypesOf(member);
+            var clrArguments = new object?[parameterTypes.Length];
+            for (var i = 0; i < parameterTypes.Length; i++)
+                clrArguments[i] = ToClr(arguments[i], parameterTypes[i]);
 
             var circuit = Circuit;
-            var callers = this.callers;
             if (circuit is not null)
-                circuit.SourceSiteProvider = () => SourceSites.For(site.Syntax, callers);
+            {
+                // One delegate per interpreter (not a closure per call): the DSL asks for the site synchronously, during
+                // this call, and a DSL member never calls back into the interpreter.
+                clrSite = site;
+                clrSiteCallers = callers;
+                circuit.SourceSiteProvider = clrSiteProvider ??= CurrentClrSite;
+            }
+
             try
             {
                 var result = member is ConstructorInfo constructor ? constructor.Invoke(clrArguments) : member.Invoke(receiver, clrArguments);
@@ -90,6 +96,12 @@ namespace Phaseward.Analyzers.Elaboration
             }
         }
 
+        private IOperation? clrSite;
+        private SourceSpan[] clrSiteCallers = Array.Empty<SourceSpan>();
+        private Func<SourceSpan>? clrSiteProvider;
+
+        private SourceSpan CurrentClrSite() => SourceSites.For(clrSite!.Syntax, clrSiteCallers);
+
         private object? CallOperator(IOperation site, IMethodSymbol method, object?[] operands, Frame frame)
         {
             if (operands.Any(Unknown.Is)) return Unknown.Value;
@@ -108,7 +120,8 @@ namespace Phaseward.Analyzers.Elaboration
         private (object?[]? Values, Variable?[] References) Arguments(IReadOnlyList<IArgumentOperation> arguments, IMethodSymbol method, Frame frame)
         {
             var values = new object?[method.Parameters.Length];
-            var references = new Variable?[method.Parameters.Length];
+            // Allocated only when a ref/out argument needs it (DSL calls never do); an empty array means none.
+            Variable?[]? references = null;
             var unknown = false;
             foreach (var argument in arguments)
             {
@@ -125,7 +138,7 @@ namespace Phaseward.Analyzers.Elaboration
                         continue;
                     }
 
-                    references[ordinal] = variable;
+                    (references ??= new Variable?[method.Parameters.Length])[ordinal] = variable;
                     values[ordinal] = variable.Value;
                     continue;
                 }
@@ -136,7 +149,7 @@ namespace Phaseward.Analyzers.Elaboration
                 values[ordinal] = value;
             }
 
-            return (unknown ? null : values, references);
+            return (unknown ? null : values, references ?? Array.Empty<Variable?>());
         }
 
         /// <summary>Runs a method, local function or accessor declared in this compilation.</summary>
@@ -156,6 +169,7 @@ namespace Phaseward.Analyzers.Elaboration
             }
 
             EnterCall(site);
+            var outerCallers = callers;
             PushCaller(site.Syntax);
             try
             {
@@ -163,7 +177,7 @@ namespace Phaseward.Analyzers.Elaboration
                 var parameters = method.OriginalDefinition.Parameters;
                 for (var i = 0; i < parameters.Length && i < arguments.Length; i++)
                 {
-                    if (references[i] is { } variable)
+                    if (i < references.Length && references[i] is { } variable)
                         frame.Bind(parameters[i], variable);
                     else
                         frame.Declare(parameters[i], arguments[i]);
@@ -174,7 +188,8 @@ namespace Phaseward.Analyzers.Elaboration
             }
             finally
             {
-                PopCaller();
+                // The caller chains are never mutated once built, so the outer chain is restored as it was.
+                callers = outerCallers;
                 LeaveCall();
             }
         }

@@ -138,13 +138,6 @@ namespace Phaseward.Analyzers.Elaboration
             callers = next;
         }
 
-        private void PopCaller()
-        {
-            var previous = new SourceSpan[callers.Length - 1];
-            Array.Copy(callers, previous, previous.Length);
-            callers = previous;
-        }
-
         private SemanticModel ModelOf(SyntaxNode node) => session.Models.Get(node.SyntaxTree);
 
         private static string Describe(ISymbol symbol) => "'" + symbol.ToDisplayString(SymbolDisplayFormat.CSharpShortErrorMessageFormat) + "'";
@@ -155,6 +148,7 @@ namespace Phaseward.Analyzers.Elaboration
     {
         private readonly ConcurrentDictionary<ISymbol, IOperation?> bodies = new(SymbolEqualityComparer.Default);
         private readonly ConcurrentDictionary<IMethodSymbol, System.Reflection.MethodBase?> members = new(SymbolEqualityComparer.Default);
+        private readonly ConcurrentDictionary<System.Reflection.MethodBase, Type[]> parameterTypes = new();
 
         public ElaborationSession(Compilation compilation, INamedTypeSymbol designType)
         {
@@ -195,6 +189,10 @@ namespace Phaseward.Analyzers.Elaboration
 
         /// <summary>The run-time member behind a DSL or library method symbol (cached per symbol of this compilation).</summary>
         public System.Reflection.MethodBase? MemberOf(IMethodSymbol method) => members.GetOrAdd(method, DslMembers.Find);
+
+        /// <summary>The parameter types of a run-time member (MethodBase.GetParameters copies its array on every call).</summary>
+        public Type[] ParameterTypesOf(System.Reflection.MethodBase member)
+            => parameterTypes.GetOrAdd(member, m => m.GetParameters().Select(p => p.ParameterType).ToArray());
 
         public IOperation? BodyOf(ISymbol method, Func<ISymbol, IOperation?> factory) => bodies.GetOrAdd(method.OriginalDefinition, factory);
     }
