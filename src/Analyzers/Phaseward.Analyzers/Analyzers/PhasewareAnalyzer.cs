@@ -30,10 +30,12 @@ namespace Phaseward.Analyzers
         private void AnalyzeDocument(SemanticModelAnalysisContext context, ElaborationSession session)
         {
             var tree = context.SemanticModel.SyntaxTree;
+            PhasewareOptions? options = null;
             foreach (var design in session.Catalog.AnchoredIn(tree))
             {
                 context.CancellationToken.ThrowIfCancellationRequested();
-                var options = PhasewareOptions.Read(context.Options.AnalyzerConfigOptionsProvider.GetOptions(tree));
+                // The options belong to the document, not the design: read them once, and only for documents with designs.
+                options ??= PhasewareOptions.Read(context.Options.AnalyzerConfigOptionsProvider.GetOptions(tree));
                 var result = CompilationElaborations.Elaborate(session, design, options.Limits, context.CancellationToken);
                 AnalyzeDesign(new DesignAnalysisContext(context, design, result, options, new DiagnosticMapper(session, design)));
             }
