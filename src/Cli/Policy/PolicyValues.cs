@@ -49,27 +49,7 @@ internal sealed class PolicyValues
 
     /// <summary>A duration of zero or more with its unit: 5ps, 0.2ns, 1 us (s, ms, us, µs, ns, ps, fs).</summary>
     public static Time ParseDuration(string text, string where)
-    {
-        var trimmed = text.Trim();
-        var split = trimmed.Length;
-        while (split > 0 && char.IsLetter(trimmed[split - 1]))
-            split--;
-        var scale = trimmed[split..].ToLowerInvariant() switch
-        {
-            "s" => 1.0,
-            "ms" => 1e-3,
-            "us" or "µs" => 1e-6,
-            "ns" => 1e-9,
-            "ps" => 1e-12,
-            "fs" => 1e-15,
-            _ => double.NaN,
-        };
-        if (double.IsNaN(scale)
-            || !double.TryParse(trimmed[..split].Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out var number)
-            || number < 0 || double.IsInfinity(number))
-            throw Invalid(text, where, "a duration of zero or more with its unit, such as 5ps or 0.2ns (s, ms, us, ns, ps, fs)");
-        return new Time(number * scale);
-    }
+        => Time.TryParseDuration(text, out var value) ? value : throw Invalid(text, where, Time.DurationFormat);
 
     private static InputException Invalid(string value, string where, string expected)
         => new($"the value '{value}' of {where} is not valid: expected {expected}");

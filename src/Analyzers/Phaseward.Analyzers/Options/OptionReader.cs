@@ -62,35 +62,10 @@ namespace Phaseward.Analyzers.Options
         {
             if (!options.TryGetValue(key, out var text))
                 return defaultValue;
-            if (TryParseDuration(text, out var value))
+            if (Time.TryParseDuration(text, out var value))
                 return value;
-            problems.Add(new OptionProblem(key, text, "a duration of zero or more with its unit, such as 5ps or 0.2ns (s, ms, us, ns, ps, fs)", defaultValue.ToString()));
+            problems.Add(new OptionProblem(key, text, Time.DurationFormat, defaultValue.ToString()));
             return defaultValue;
-        }
-
-        private static bool TryParseDuration(string text, out Time value)
-        {
-            value = Time.Zero;
-            var trimmed = text.Trim();
-            var split = trimmed.Length;
-            while (split > 0 && char.IsLetter(trimmed[split - 1]))
-                split--;
-            var scale = trimmed.Substring(split).ToLowerInvariant() switch
-            {
-                "s" => 1.0,
-                "ms" => 1e-3,
-                "us" or "µs" => 1e-6,
-                "ns" => 1e-9,
-                "ps" => 1e-12,
-                "fs" => 1e-15,
-                _ => double.NaN,
-            };
-            if (double.IsNaN(scale)
-                || !double.TryParse(trimmed.Substring(0, split).Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out var number)
-                || number < 0 || double.IsInfinity(number))
-                return false;
-            value = new Time(number * scale);
-            return true;
         }
 
         /// <summary>true or false.</summary>
