@@ -106,10 +106,12 @@ namespace Phaseward.Benchmarks
                 ElaborationResult? result = null;
                 // Bytes allocated on this thread: a figure the shared machine's load does not disturb.
                 var allocatedBefore = GC.GetAllocatedBytesForCurrentThread();
+                var gcBefore = GcCounts.Now();
                 var elaborate = Samples.Time(() => result = DesignElaborator.Elaborate(session, design, ElaborationLimits.Default, CancellationToken.None));
                 var elaborateMb = (GC.GetAllocatedBytesForCurrentThread() - allocatedBefore) / 1e6;
                 var netlist = result!.Netlist!;
-                line.Append($"bind {bind:N0} ms, elaborate {elaborate:N0} ms, {elaborateMb:N0} MB allocated ({result.Steps:N0} steps, {netlist.Devices.Count:N0} devices); rules:");
+                line.Append($"bind {bind:N0} ms, elaborate {elaborate:N0} ms, {elaborateMb:N0} MB allocated, {GcCounts.Now() - gcBefore} ({result.Steps:N0} steps, {netlist.Devices.Count:N0} devices); rules:");
+                var rulesGcBefore = GcCounts.Now();
                 var total = 0.0;
                 var findings = new List<Finding>();
                 foreach (var rule in RuleSet.All)
@@ -122,7 +124,7 @@ namespace Phaseward.Benchmarks
 
                 var mapper = new DiagnosticMapper(session, design);
                 var map = Samples.Time(() => { foreach (var f in findings) mapper.FromFinding(f); });
-                line.Append($"; rules total {total:N0} ms; {findings.Count:N0} findings (")
+                line.Append($"; rules total {total:N0} ms, {GcCounts.Now() - rulesGcBefore}; {findings.Count:N0} findings (")
                     .Append(string.Join(", ", findings.GroupBy(f => f.RuleId).OrderBy(g => g.Key, StringComparer.Ordinal).Select(g => g.Key + " " + g.Count())))
                     .Append($") mapped in {map:N0} ms; process CPU {Cpu():N0} ms so far");
                 Console.WriteLine(line);
