@@ -72,12 +72,14 @@ namespace Phaseward
             return BuildLatch(latchKind, master, clock.High, cellName + ".slave", cellName, register, span);
         }
 
-        private static string[] LatchInternalNets(bool isStatic) => isStatic ? new[] { ".x", ".fb" } : new[] { ".x" };
+        private static readonly string[] StaticLatchNets = { ".x", ".fb" };
+        private static readonly string[] DynamicLatchNets = { ".x" };
+        private static readonly string[] StaticRegisterNets = { ".master", ".master.x", ".master.fb", ".slave.x", ".slave.fb" };
+        private static readonly string[] DynamicRegisterNets = { ".master", ".master.x", ".slave.x" };
 
-        private static string[] RegisterInternalNets(bool isStatic)
-            => isStatic
-                ? new[] { ".master", ".master.x", ".master.fb", ".slave.x", ".slave.fb" }
-                : new[] { ".master", ".master.x", ".slave.x" };
+        private static string[] LatchInternalNets(bool isStatic) => isStatic ? StaticLatchNets : DynamicLatchNets;
+
+        private static string[] RegisterInternalNets(bool isStatic) => isStatic ? StaticRegisterNets : DynamicRegisterNets;
 
         private void CheckCellNetsFree(string cellName, string[] suffixes, string parameter)
         {

@@ -37,7 +37,7 @@ namespace Phaseward
         {
             CheckClock(clock, nameof(clock));
             CheckNet(enable, nameof(enable));
-            if (!Enum.IsDefined(typeof(ClockStopLevel), stopsAt))
+            if (stopsAt is not (ClockStopLevel.Low or ClockStopLevel.High))
                 throw new ArgumentException($"'{nameof(stopsAt)}' must be ClockStopLevel.Low or ClockStopLevel.High (was {(int)stopsAt}).", nameof(stopsAt));
             if (maxIdle is { } idle)
                 Guard.Positive(idle.Seconds, nameof(maxIdle), "s");
@@ -70,12 +70,22 @@ namespace Phaseward
                 throw new ArgumentException($"'{parameter}': a clock named \"{name}\" already exists in design '{DesignName}'.", parameter);
         }
 
+        // The lowest free number after the last one given for this prefix: clocks are never removed, so every lower
+        // number is still taken and this is the lowest free one, found without rescanning from 1 (which made a design
+        // with k gated clocks cost O(k²)).
         private string AutoClockName(string prefix)
         {
-            var count = 1;
-            while (clockNames.Contains(prefix + count.ToString(System.Globalization.CultureInfo.InvariantCulture)))
+            autoClockCounters.TryGetValue(prefix, out var count);
+            string candidate;
+            do
+            {
                 count++;
-            return prefix + count.ToString(System.Globalization.CultureInfo.InvariantCulture);
+                candidate = prefix + count.ToString(System.Globalization.CultureInfo.InvariantCulture);
+            }
+            while (clockNames.Contains(candidate));
+
+            autoClockCounters[prefix] = count;
+            return candidate;
         }
 
         private Clock AddClock(string name, ClockKind kind, Clock? source, Time period, double duty, Time? skew, Time? delay, Net? enable,

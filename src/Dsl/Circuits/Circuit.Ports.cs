@@ -13,7 +13,7 @@ namespace Phaseward
             CheckNewNetName(name, nameof(name));
             var net = NewNet(name);
             inputs.Add(new Port(name, net, Site(callerFile, callerLine)));
-            inputNets.Add(net.Id);
+            netDrives[net.Id] |= NetDrive.PrimaryInput;
             return net;
         }
 

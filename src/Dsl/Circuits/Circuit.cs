@@ -23,12 +23,11 @@ namespace Phaseward
         private readonly Dictionary<string, Net> netsByName = new(StringComparer.Ordinal);
         private readonly HashSet<string> clockNames = new(StringComparer.Ordinal);
         private readonly HashSet<string> outputNames = new(StringComparer.Ordinal);
-        private readonly HashSet<int> strongDriven = new();
-        private readonly HashSet<int> inputNets = new();
-        private readonly HashSet<int> passDriven = new();
+        private readonly List<NetDrive> netDrives = new();
         private readonly Dictionary<int, Capacitance> capacitanceOverrides = new();
         private readonly Dictionary<int, Current> leakageOverrides = new();
         private readonly Dictionary<string, int> autoNameCounters = new(StringComparer.Ordinal);
+        private readonly Dictionary<string, int> autoClockCounters = new(StringComparer.Ordinal);
 
         internal Circuit(string designName)
         {
@@ -112,9 +111,10 @@ namespace Phaseward
 
         private void CheckCanDriveStrongly(Net output, string parameter)
         {
-            if (inputNets.Contains(output.Id))
+            var drive = netDrives[output.Id];
+            if ((drive & NetDrive.PrimaryInput) != 0)
                 throw new ArgumentException($"'{parameter}': net '{output.Name}' is a primary input, already driven from outside; a restoring stage on it would fight that driver.", parameter);
-            if (strongDriven.Contains(output.Id))
+            if ((drive & NetDrive.RestoringStage) != 0)
                 throw new ArgumentException($"'{parameter}': net '{output.Name}' is already driven by a restoring stage; a second one would fight it.", parameter);
         }
 
@@ -145,6 +145,7 @@ namespace Phaseward
         {
             var net = new Net(this, nets.Count, name);
             nets.Add(net);
+            netDrives.Add(NetDrive.None);
             netsByName.Add(name, net);
             return net;
         }
@@ -155,16 +156,18 @@ namespace Phaseward
             var device = new Device(devices.Count, name, kind, deviceInputs, output, clockControl, dataControl, resistance, isWeak, span, macro, role);
             devices.Add(device);
             macro?.Add(device);
-            if (kind.IsRestoring())
-            {
-                if (!isWeak) strongDriven.Add(output.Id);
-            }
-            else
-            {
-                passDriven.Add(output.Id);
-            }
-
+            if (kind.IsRestoring() && !isWeak)
+                netDrives[output.Id] |= NetDrive.RestoringStage;
             return device;
+        }
+
+        /// <summary>What already drives a net, by net id: two strong drivers on one net would fight.</summary>
+        [Flags]
+        private enum NetDrive : byte
+        {
+            None = 0,
+            PrimaryInput = 1,
+            RestoringStage = 2,
         }
 
         private static string Prefix(DeviceKind kind) => kind switch

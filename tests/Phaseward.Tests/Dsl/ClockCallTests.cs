@@ -116,6 +116,23 @@ namespace Phaseward.Tests.Dsl
         }
 
         [Fact]
+        public void Clock_auto_names_take_the_lowest_free_number_around_names_the_designer_chose()
+        {
+            var c = new Circuit("clocks");
+            var clk = c.Clock("clk", 2.Nanoseconds());
+            var en = c.Input("en");
+            c.ClockGate(clk, en, name: "clk.gated2");
+            c.BufferedClock(clk, name: "clk.buf1");
+
+            Assert.Equal("clk.gated1", c.ClockGate(clk, en).Name);
+            Assert.Equal("clk.gated3", c.ClockGate(clk, en).Name);
+            c.ClockGate(clk, en, name: "clk.gated4");
+            Assert.Equal("clk.gated5", c.ClockGate(clk, en).Name);
+            Assert.Equal("clk.buf2", c.BufferedClock(clk).Name);
+            Assert.Equal("clk.gated6", c.ClockGate(clk, en).Name);
+        }
+
+        [Fact]
         public void BufferedClock_delay_defaults_to_the_process_stage_delay()
         {
             var c = new Circuit("clocks");
