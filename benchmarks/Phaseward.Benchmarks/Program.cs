@@ -42,7 +42,7 @@ namespace Phaseward.Benchmarks
             var references = ImmutableArray.CreateRange<MetadataReference>(Basic.Reference.Assemblies.Net80.References.All)
                 .Add(MetadataReference.CreateFromFile(typeof(Design).Assembly.Location));
             if (settings.Profile is { } profileSize)
-                return Profile(settings.ProfileShape, profileSize, references);
+                return Profile(settings.ProfileShape, profileSize, settings.Runs, references);
 
             var sdk = settings.SkipSdk ? ImmutableArray<DiagnosticAnalyzer>.Empty : SdkAnalyzers.Load(settings.SdkAnalyzers ?? SdkAnalyzers.DefaultDirectory());
             var phaseward = PhasewardAnalyzers();
@@ -94,11 +94,19 @@ namespace Phaseward.Benchmarks
         /// A Stopwatch breakdown by phase of one design: binding every method body (as the analyzer driver does anyway),
         /// then what Phaseward adds: interpretation with the netlist, each rule, mapping.
         /// </summary>
-        private static int Profile(DesignShape shape, int size, ImmutableArray<MetadataReference> references)
+        private static int Profile(DesignShape shape, int size, int runs, ImmutableArray<MetadataReference> references)
         {
             var source = DesignGenerator.Generate(shape, size);
-            for (var run = 0; run < 3; run++)
+            var elaborations = new Samples();
+            var elaborationsOutsideGc = new Samples();
+            var rules = new Samples();
+            var rulesOutsideGc = new Samples();
+            for (var run = 0; run < runs; run++)
             {
+                // Each run starts from a collected heap, so one run's garbage is not collected in the next one's time.
+                GC.Collect();
+                GC.WaitForPendingFinalizers();
+                GC.Collect();
                 var tree = CSharpSyntaxTree.ParseText(source, new CSharpParseOptions(LanguageVersion.Latest), DesignPath, Encoding.UTF8);
                 var compilation = CSharpCompilation.Create("Profile", new[] { tree }, references,
                     new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, nullableContextOptions: NullableContextOptions.Enable));
@@ -119,8 +127,9 @@ namespace Phaseward.Benchmarks
                 var gcBefore = GcCounts.Now();
                 var elaborate = Samples.Time(() => result = DesignElaborator.Elaborate(session, design, ElaborationLimits.Default, CancellationToken.None));
                 var elaborateMb = (GC.GetAllocatedBytesForCurrentThread() - allocatedBefore) / 1e6;
+                var elaborateGc = GcCounts.Now() - gcBefore;
                 var netlist = result!.Netlist!;
-                line.Append($"bind {bind:N0} ms, elaborate {elaborate:N0} ms, {elaborateMb:N0} MB allocated, {GcCounts.Now() - gcBefore} ({result.Steps:N0} steps, {netlist.Devices.Count:N0} devices); rules:");
+                line.Append($"bind {bind:N0} ms, elaborate {elaborate:N0} ms, {elaborateMb:N0} MB allocated, {elaborateGc} ({result.Steps:N0} steps, {netlist.Devices.Count:N0} devices); rules:");
                 var rulesGcBefore = GcCounts.Now();
                 var total = 0.0;
                 var findings = new List<Finding>();
@@ -134,12 +143,23 @@ namespace Phaseward.Benchmarks
 
                 var mapper = new DiagnosticMapper(session, design);
                 var map = Samples.Time(() => { foreach (var f in findings) mapper.FromFinding(f); });
-                line.Append($"; rules total {total:N0} ms, {GcCounts.Now() - rulesGcBefore}; {findings.Count:N0} findings (")
+                var rulesGc = GcCounts.Now() - rulesGcBefore;
+                line.Append($"; rules total {total:N0} ms, {rulesGc}; {findings.Count:N0} findings (")
                     .Append(string.Join(", ", findings.GroupBy(f => f.RuleId).OrderBy(g => g.Key, StringComparer.Ordinal).Select(g => g.Key + " " + g.Count())))
                     .Append($") mapped in {map:N0} ms; process CPU {Cpu():N0} ms so far");
                 Console.WriteLine(line);
+                if (run == 0)
+                    continue;   // the first run also pays for JIT compilation and first use
+                elaborations.Add(elaborate);
+                elaborationsOutsideGc.Add(elaborate - elaborateGc.Paused.TotalMilliseconds);
+                rules.Add(total);
+                rulesOutsideGc.Add(total - rulesGc.Paused.TotalMilliseconds);
             }
 
+            // The minimum is the figure least disturbed by other work on a shared machine; the median is the typical one.
+            if (elaborations.Count > 0)
+                Console.WriteLine($"runs 1-{runs - 1}, ms (min / median): elaborate {elaborations.Min:N0} / {elaborations.Median:N0}, outside GC pauses {elaborationsOutsideGc.Min:N0} / {elaborationsOutsideGc.Median:N0}; " +
+                                  $"rules {rules.Min:N0} / {rules.Median:N0}, outside GC pauses {rulesOutsideGc.Min:N0} / {rulesOutsideGc.Median:N0}");
             return 0;
         }
 

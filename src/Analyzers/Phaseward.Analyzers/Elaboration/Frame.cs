@@ -9,10 +9,12 @@ namespace Phaseward.Analyzers.Elaboration
     /// </summary>
     internal sealed class Frame
     {
-        private readonly Dictionary<ISymbol, Variable> variables = new(SymbolEqualityComparer.Default);
+        private readonly Dictionary<ISymbol, Variable> variables;
 
-        public Frame(IMethodSymbol? method, Frame? lexicalParent, DesignInstance? instance)
+        /// <param name="capacity">How many variables the frame is expected to hold (it grows beyond if need be).</param>
+        public Frame(IMethodSymbol? method, Frame? lexicalParent, DesignInstance? instance, int capacity = 0)
         {
+            variables = new Dictionary<ISymbol, Variable>(capacity, SymbolEqualityComparer.Default);
             Method = method;
             LexicalParent = lexicalParent;
             Instance = instance;
@@ -24,6 +26,9 @@ namespace Phaseward.Analyzers.Elaboration
 
         /// <summary>The design object <c>this</c> refers to (null in static code).</summary>
         public DesignInstance? Instance { get; }
+
+        /// <summary>How many variables the frame holds.</summary>
+        public int Count => variables.Count;
 
         /// <summary>Set by <c>return</c>.</summary>
         public object? ReturnValue { get; set; }

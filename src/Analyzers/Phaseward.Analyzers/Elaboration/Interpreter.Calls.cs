@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using System.Collections.Immutable;
 using System.Linq;
 using System.Reflection;
 using Microsoft.CodeAnalysis;
@@ -43,7 +44,10 @@ namespace Phaseward.Analyzers.Elaboration
             return CallClr(invocation, method, receiver, values);
         }
 
-        /// <summary>Calls the real DSL (or library) member behind <paramref name="method"/>, telling the circuit where the call is.</summary>
+        /// <summary>
+        /// Calls the real DSL (or library) member behind <paramref name="method"/>, telling the circuit where the call is.
+        /// <paramref name="arguments"/> is converted in place to the member's parameter types.
+        /// </summary>
         private object? CallClr(IOperation site, IMethodSymbol method, object? receiver, object?[] arguments)
         {
             var member = session.MemberOf(method);
@@ -53,8 +57,11 @@ namespace Phaseward.Analyzers.Elaboration
             if (receiver is not null && IsNumericValue(receiver) && member.DeclaringType != receiver.GetType())
                 return Unsupported(site, "the call to " + Describe(method), "it is outside the subset");
 
+            // Converted in place: every caller hands over an array it made for this call (one array per call, not two).
             var parameterTypes = session.ParameterTypesOf(member);
-            var clrArguments = new object?[parameterTypes.Length];
+            if (arguments.Length != parameterTypes.Length)
+                return Unsupported(site, "the call to " + Describe(method), "its arguments could not be passed (the run-time member takes " + parameterTypes.Length + ")");
+            var clrArguments = arguments;
             for (var i = 0; i < parameterTypes.Length; i++)
                 clrArguments[i] = ToClr(arguments[i], parameterTypes[i]);
 
@@ -96,6 +103,10 @@ namespace Phaseward.Analyzers.Elaboration
             }
         }
 
+        // The most variables a call of each method body has held: the next call's frame starts that large instead of
+        // growing its table step by step (a helper called once per loop iteration would otherwise regrow it every time).
+        private readonly Dictionary<IOperation, int> frameSizes = new();
+
         private IOperation? clrSite;
         private SourceSpan[] clrSiteCallers = Array.Empty<SourceSpan>();
         private Func<SourceSpan>? clrSiteProvider;
@@ -117,7 +128,7 @@ namespace Phaseward.Analyzers.Elaboration
         /// Evaluates arguments into parameter order. Returns null values when an argument is unknown (the call is then skipped
         /// without a report: the unknown value was reported where it arose).
         /// </summary>
-        private (object?[]? Values, Variable?[] References) Arguments(IReadOnlyList<IArgumentOperation> arguments, IMethodSymbol method, Frame frame)
+        private (object?[]? Values, Variable?[] References) Arguments(ImmutableArray<IArgumentOperation> arguments, IMethodSymbol method, Frame frame)
         {
             var values = new object?[method.Parameters.Length];
             // Allocated only when a ref/out argument needs it (DSL calls never do); an empty array means none.
@@ -173,7 +184,8 @@ namespace Phaseward.Analyzers.Elaboration
             PushCaller(site.Syntax);
             try
             {
-                var frame = new Frame(method.OriginalDefinition, parent, method.IsStatic && method.MethodKind != MethodKind.LocalFunction ? null : instance);
+                frameSizes.TryGetValue(body, out var expectedVariables);
+                var frame = new Frame(method.OriginalDefinition, parent, method.IsStatic && method.MethodKind != MethodKind.LocalFunction ? null : instance, expectedVariables);
                 var parameters = method.OriginalDefinition.Parameters;
                 for (var i = 0; i < parameters.Length && i < arguments.Length; i++)
                 {
@@ -184,6 +196,8 @@ namespace Phaseward.Analyzers.Elaboration
                 }
 
                 Execute(body, frame);
+                if (frame.Count > expectedVariables)
+                    frameSizes[body] = frame.Count;
                 return frame.ReturnValue;
             }
             finally
