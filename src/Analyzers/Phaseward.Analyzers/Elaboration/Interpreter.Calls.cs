@@ -111,7 +111,20 @@ namespace Phaseward.Analyzers.Elaboration
         private SourceSpan[] clrSiteCallers = Array.Empty<SourceSpan>();
         private Func<SourceSpan>? clrSiteProvider;
 
-        private SourceSpan CurrentClrSite() => SourceSites.For(clrSite!.Syntax, clrSiteCallers);
+        // Inside a loop the same call is made with the same caller chain (chains are interned, see PushCaller) on every
+        // iteration: its span is built once and shared by every device made there. Straight-line code makes each call
+        // once, so nothing is cached for it.
+        private readonly Dictionary<(SyntaxNode Site, SourceSpan[] Callers), SourceSpan> loopSites = new();
+
+        private SourceSpan CurrentClrSite()
+        {
+            var syntax = clrSite!.Syntax;
+            if (loops.Count == 0)
+                return SourceSites.For(syntax, clrSiteCallers);
+            if (!loopSites.TryGetValue((syntax, clrSiteCallers), out var span))
+                loopSites.Add((syntax, clrSiteCallers), span = SourceSites.For(syntax, clrSiteCallers));
+            return span;
+        }
 
         private object? CallOperator(IOperation site, IMethodSymbol method, object?[] operands, Frame frame)
         {

@@ -130,11 +130,20 @@ namespace Phaseward.Analyzers.Elaboration
             }
         }
 
+        // Chains are interned by (outer chain, call site): a helper called from the same place in every loop iteration
+        // gets the same chain array each time, so the spans made under it can be shared too (see CurrentClrSite).
+        private readonly Dictionary<(SourceSpan[] Outer, SyntaxNode Site), SourceSpan[]> chains = new();
+
         private void PushCaller(SyntaxNode site)
         {
-            var next = new SourceSpan[callers.Length + 1];
-            Array.Copy(callers, next, callers.Length);
-            next[callers.Length] = SourceSites.For(site, callers);
+            if (!chains.TryGetValue((callers, site), out var next))
+            {
+                next = new SourceSpan[callers.Length + 1];
+                Array.Copy(callers, next, callers.Length);
+                next[callers.Length] = SourceSites.For(site, callers);
+                chains.Add((callers, site), next);
+            }
+
             callers = next;
         }
 
