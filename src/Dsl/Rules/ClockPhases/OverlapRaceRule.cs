@@ -66,9 +66,10 @@ namespace Phaseward
 
         internal static Time FastestEntry(LatchModel model, Latch latch)
         {
-            var fastest = model.StageDelay(latch.EntryGates[0]);
-            foreach (var gate in latch.EntryGates)
-                fastest = Time.Min(fastest, model.StageDelay(gate));
+            var gates = latch.EntryGates;
+            var fastest = model.StageDelay(gates[0]);
+            for (var i = 1; i < gates.Count; i++)
+                fastest = Time.Min(fastest, model.StageDelay(gates[i]));
             return fastest;
         }
     }
