@@ -47,10 +47,10 @@ namespace Phaseward
         }
 
         /// <summary>How long a gate on <paramref name="late"/> still conducts after one on <paramref name="opening"/> opens (zero if it is shut then).</summary>
-        public static Time OpenOverlap(Phase opening, Phase late)
+        public static Time OpenOverlap(Phase opening, Phase late) => OpenOverlap(PhaseWindow.Of(opening), PhaseWindow.Of(late));
+
+        internal static Time OpenOverlap(PhaseWindow a, PhaseWindow b)
         {
-            var a = PhaseWindow.Of(opening);
-            var b = PhaseWindow.Of(late);
             if (!a.SharesRootWith(b))
                 return Time.Zero;
             var period = a.Period.Seconds;
@@ -111,6 +111,7 @@ namespace Phaseward
             if (model is null) throw new ArgumentNullException(nameof(model));
             var worst = new Dictionary<(int, int), OverlapRace>();
             var order = new List<(int, int)>();
+            var windows = new PhaseWindowCache();
             foreach (var path in model.Paths)
             {
                 cancellationToken.ThrowIfCancellationRequested();
@@ -120,7 +121,7 @@ namespace Phaseward
                 if (!LatchModel.Complementary(a.Phase, phaseB) || OverlapRaceRule.IsRegisterToRegister(model, a, b))
                     continue;
 
-                var overlap = OverlapRaceRule.OpenOverlap(a.Phase, phaseB);
+                var overlap = OverlapRaceRule.OpenOverlap(windows.Of(a.Phase), windows.Of(phaseB));
                 if (overlap <= Time.Zero)
                     continue;
                 var fastest = OverlapRaceRule.FastestEntry(model, a) + path.MinDelay + model.StageDelay(path.EntryGate);
