@@ -41,13 +41,21 @@ namespace Phaseward
         public static PhaseWindow Of(Phase phase)
         {
             if (phase is null) throw new ArgumentNullException(nameof(phase));
+            var arc = ArcOf(phase);
+            return new PhaseWindow(phase, phase.Clock.Period, arc.Opens, arc.Length);
+        }
+
+        /// <summary>The window's opening and length, as <see cref="Of"/> computes them but without allocating a window
+        /// (the storage models need one per pass driver).</summary>
+        internal static Arc ArcOf(Phase phase)
+        {
             var clock = phase.Clock;
             var period = clock.Period;
             var skew = clock.ComplementSkew;
             var highTime = period * clock.Duty;
             var opens = phase.Polarity == ClockPolarity.High ? clock.DelayFromRoot : clock.DelayFromRoot + highTime;
             var length = (phase.Polarity == ClockPolarity.High ? highTime : period - highTime) + skew;
-            return new PhaseWindow(phase, period, Wrap(opens, period), length);
+            return new Arc(Wrap(opens, period), length);
         }
 
         /// <summary>True if both phases come from the same root clock, so their windows can be compared.</summary>

@@ -92,12 +92,16 @@ namespace Phaseward
         /// <summary>The pass gate continues into its output net (the net is not restored and the edge closes no loop).</summary>
         public bool IsOutputEdgeKept(Device gate) => outputEdgeKept[gate.Id];
 
-        /// <summary>The pass gates this net feeds (as their data input), in netlist order.</summary>
-        public IEnumerable<Device> PassLoadsOf(Net net)
-        {
-            for (var i = passLoadStart[net.Id]; i < passLoadStart[net.Id + 1]; i++)
-                yield return Netlist.Devices[passLoads[i]];
-        }
+        /// <summary>Where the pass gates this net feeds (as their data input) begin among <see cref="PassLoadAt"/>; they
+        /// run, in netlist order, up to <see cref="PassLoadEnd"/> (an index range rather than an enumerable, which would
+        /// allocate on every net).</summary>
+        public int PassLoadStart(Net net) => passLoadStart[net.Id];
+
+        /// <summary>Where the pass gates this net feeds end among <see cref="PassLoadAt"/> (exclusive).</summary>
+        public int PassLoadEnd(Net net) => passLoadStart[net.Id + 1];
+
+        /// <summary>The pass gate at a position of the flat pass-load index.</summary>
+        public Device PassLoadAt(int position) => Netlist.Devices[passLoads[position]];
 
         /// <summary>The net's capacitance plus all capacitance its pass gates feed (F).</summary>
         public Capacitance DownstreamCapacitanceOf(Net net) => new(downstreamFarads[net.Id]);
@@ -116,7 +120,7 @@ namespace Phaseward
         public Resistance RootResistanceOf(Net net)
         {
             Resistance? strongest = null;
-            foreach (var driver in Netlist.DriversOf(net))
+            foreach (var driver in Netlist.DriverList(net))
             {
                 if (!driver.IsRestoring || driver.IsWeak) continue;
                 var r = Netlist.ResistanceOf(driver);
@@ -129,7 +133,7 @@ namespace Phaseward
         private static bool IsRestoredNet(Netlist netlist, Net net)
         {
             if (netlist.IsInput(net)) return true;
-            foreach (var driver in netlist.DriversOf(net))
+            foreach (var driver in netlist.DriverList(net))
                 if (driver.IsRestoring && !driver.IsWeak)
                     return true;
             return false;
@@ -220,9 +224,12 @@ namespace Phaseward
                 if (node < DeviceCount) continue;
                 var net = nets[node - DeviceCount];
                 var total = Netlist.CapacitanceOf(net).Farads;
-                foreach (var load in PassLoadsOf(net))
-                    if (inputEdgeKept[load.Id] && outputEdgeKept[load.Id])
-                        total += sums[load.Output.Id];
+                for (var position = passLoadStart[net.Id]; position < passLoadStart[net.Id + 1]; position++)
+                {
+                    var load = passLoads[position];
+                    if (inputEdgeKept[load] && outputEdgeKept[load])
+                        total += sums[Netlist.Devices[load].Output.Id];
+                }
                 sums[net.Id] = total;
             }
 

@@ -12,6 +12,9 @@ namespace Phaseward
     {
         private static readonly IReadOnlyList<Device> NoDevices = Array.Empty<Device>();
 
+        // What the internal accessors return for a net with no such devices; never added to.
+        private static readonly List<Device> NoDeviceList = new(0);
+
         private readonly List<Device>?[] drivers;
         private readonly List<Device>?[] dataLoads;
         private readonly List<Device>?[] controlLoads;
@@ -38,8 +41,9 @@ namespace Phaseward
             foreach (var device in devices)
             {
                 Add(drivers, device.Output, device);
-                foreach (var input in device.Inputs)
-                    Add(dataLoads, input, device);
+                var deviceInputs = device.Inputs;
+                for (var i = 0; i < deviceInputs.Count; i++)
+                    Add(dataLoads, deviceInputs[i], device);
                 if (device.DataControl is { } control)
                     Add(controlLoads, control, device);
             }
@@ -91,6 +95,13 @@ namespace Phaseward
         /// <summary>Pass gates controlled by this net.</summary>
         public IReadOnlyList<Device> ControlLoadsOf(Net net) => controlLoads[Index(net)] ?? NoDevices;
 
+        // The same indexes as concrete lists, for the rules' hot loops: enumerating an IReadOnlyList boxes its enumerator.
+        internal List<Device> DriverList(Net net) => drivers[Index(net)] ?? NoDeviceList;
+
+        internal List<Device> DataLoadList(Net net) => dataLoads[Index(net)] ?? NoDeviceList;
+
+        internal List<Device> ControlLoadList(Net net) => controlLoads[Index(net)] ?? NoDeviceList;
+
         /// <summary>True for a primary input (driven from outside through the process's driver resistance).</summary>
         public bool IsInput(Net net) => isInput[Index(net)];
 
@@ -113,7 +124,7 @@ namespace Phaseward
         /// <summary>All devices that have no restoring driver on the net, i.e. whose output is held only through pass devices.</summary>
         public bool IsDrivenOnlyThroughPassDevices(Net net)
         {
-            var netDrivers = DriversOf(net);
+            var netDrivers = DriverList(net);
             if (netDrivers.Count == 0 || IsInput(net))
                 return false;
             foreach (var driver in netDrivers)
@@ -128,7 +139,7 @@ namespace Phaseward
         {
             var gateLoads = enableLoads;
             var diffusionTerminals = 0;
-            foreach (var load in DataLoadsOf(net))
+            foreach (var load in DataLoadList(net))
             {
                 if (load.IsPassDevice) diffusionTerminals++;
                 else gateLoads++;

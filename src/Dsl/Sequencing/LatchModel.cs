@@ -72,8 +72,9 @@ namespace Phaseward
         public Time EntryDelay(Latch latch)
         {
             var worst = Time.Zero;
-            foreach (var gate in latch.EntryGates)
-                worst = Time.Max(worst, StageDelay(gate));
+            var gates = latch.EntryGates;
+            for (var i = 0; i < gates.Count; i++)
+                worst = Time.Max(worst, StageDelay(gates[i]));
             return worst;
         }
 
@@ -94,37 +95,42 @@ namespace Phaseward
             var entryLatch = new Latch?[netlist.Devices.Count];
             var isStorage = new bool[netlist.Nets.Count];
             var clocked = new List<Device>(4);
+            var loopStages = new List<Device?>(4);
             var entries = new List<Device>(4);
             var feedback = new List<Device>(2);
+            var windowFirsts = new List<Device>(1);
 
             foreach (var net in netlist.Nets)
             {
                 if (!IsStorageNode(netlist, net, out var hasKeeper))
                     continue;
                 clocked.Clear();
-                foreach (var driver in netlist.DriversOf(net))
+                foreach (var driver in netlist.DriverList(net))
                     if (driver.IsPassDevice && driver.ClockControl is not null)
                         clocked.Add(driver);
                 if (clocked.Count == 0)
                     continue;
                 clocked.Sort((a, b) => a.Id.CompareTo(b.Id));
 
+                loopStages.Clear();
                 Phase? entryPhase = null;
                 foreach (var gate in clocked)
-                    if (FeedbackStageOf(netlist, gate, net) is null)
-                    {
-                        entryPhase = gate.ClockControl;
-                        break;
-                    }
+                {
+                    var stage = FeedbackStageOf(netlist, gate, net);
+                    loopStages.Add(stage);
+                    if (stage is null)
+                        entryPhase ??= gate.ClockControl;
+                }
 
                 entryPhase ??= clocked[0].ClockControl!;
 
                 entries.Clear();
                 feedback.Clear();
                 Device? feedbackStage = null;
-                foreach (var gate in clocked)
+                for (var i = 0; i < clocked.Count; i++)
                 {
-                    var stage = FeedbackStageOf(netlist, gate, net);
+                    var gate = clocked[i];
+                    var stage = loopStages[i];
                     if (stage is not null && !SameWindow(gate.ClockControl!, entryPhase))
                     {
                         feedback.Add(gate);
@@ -138,22 +144,20 @@ namespace Phaseward
 
                 isStorage[net.Id] = true;
                 var outputStage = OutputStageOf(netlist, net, entries[0]);
-                // One latch per entry window (almost always exactly one).
-                var windows = new List<List<Device>>();
+                // One latch per entry window (almost always exactly one), each window named by its first entry gate.
+                windowFirsts.Clear();
                 foreach (var gate in entries)
-                {
-                    var group = windows.Find(g => SameWindow(g[0].ClockControl!, gate.ClockControl!));
-                    if (group is null) windows.Add(group = new List<Device>());
-                    group.Add(gate);
-                }
+                    if (WindowFirstOf(windowFirsts, gate) is null)
+                        windowFirsts.Add(gate);
 
-                foreach (var group in windows)
+                foreach (var first in windowFirsts)
                 {
-                    var cell = group[0].Macro is { Kind: MacroKind.DynamicLatch or MacroKind.StaticLatch } macro ? macro : null;
+                    var group = EntriesInWindowOf(entries, first);
+                    var cell = first.Macro is { Kind: MacroKind.DynamicLatch or MacroKind.StaticLatch } macro ? macro : null;
                     var name = cell?.Name ?? net.Name;
-                    if (windows.Count > 1)
-                        name += "@" + group[0].ClockControl!.Name;
-                    var latch = new Latch(latches.Count, name, net, group[0].ClockControl!, group.ToArray(), feedback.ToArray(),
+                    if (windowFirsts.Count > 1)
+                        name += "@" + first.ClockControl!.Name;
+                    var latch = new Latch(latches.Count, name, net, first.ClockControl!, group, feedback.ToArray(),
                         outputStage, feedbackStage, hasKeeper, cell);
                     latches.Add(latch);
                     foreach (var gate in group)
@@ -164,10 +168,34 @@ namespace Phaseward
             return new LatchModel(netlist, latches, entryLatch, isStorage);
         }
 
+        // The first gate of the window the gate opens in, among the windows found so far, or null.
+        private static Device? WindowFirstOf(List<Device> windowFirsts, Device gate)
+        {
+            foreach (var first in windowFirsts)
+                if (SameWindow(first.ClockControl!, gate.ClockControl!))
+                    return first;
+            return null;
+        }
+
+        // The entry gates that open in the window of 'first', in order.
+        private static Device[] EntriesInWindowOf(List<Device> entries, Device first)
+        {
+            var count = 0;
+            foreach (var gate in entries)
+                if (SameWindow(first.ClockControl!, gate.ClockControl!))
+                    count++;
+            var group = new Device[count];
+            count = 0;
+            foreach (var gate in entries)
+                if (SameWindow(first.ClockControl!, gate.ClockControl!))
+                    group[count++] = gate;
+            return group;
+        }
+
         private static bool IsStorageNode(Netlist netlist, Net net, out bool hasKeeper)
         {
             hasKeeper = false;
-            var drivers = netlist.DriversOf(net);
+            var drivers = netlist.DriverList(net);
             if (drivers.Count == 0 || netlist.IsInput(net))
                 return false;
             var passDrivers = 0;
@@ -184,11 +212,11 @@ namespace Phaseward
         // The static-latch loop: storage → inverter → inverter → this gate. Returns the second inverter, or null.
         private static Device? FeedbackStageOf(Netlist netlist, Device gate, Net storage)
         {
-            foreach (var second in netlist.DriversOf(gate.Inputs[0]))
+            foreach (var second in netlist.DriverList(gate.Inputs[0]))
             {
                 if (second.Kind != DeviceKind.Inverter || second.IsWeak)
                     continue;
-                foreach (var first in netlist.DriversOf(second.Inputs[0]))
+                foreach (var first in netlist.DriverList(second.Inputs[0]))
                     if (first.Kind == DeviceKind.Inverter && !first.IsWeak && ReferenceEquals(first.Inputs[0], storage))
                         return second;
             }
@@ -200,7 +228,7 @@ namespace Phaseward
         private static Device? OutputStageOf(Netlist netlist, Net storage, Device entry)
         {
             Device? first = null;
-            foreach (var load in netlist.DataLoadsOf(storage))
+            foreach (var load in netlist.DataLoadList(storage))
             {
                 if (!load.IsRestoring || load.IsWeak)
                     continue;
@@ -241,7 +269,7 @@ namespace Phaseward
                     continue;
                 Latch? slave = null;
                 var dedicated = true;
-                foreach (var load in Netlist.DataLoadsOf(stage.Output))
+                foreach (var load in Netlist.DataLoadList(stage.Output))
                 {
                     if (master.FeedbackStage is { } fb && ReferenceEquals(load, fb))
                         continue;
@@ -409,14 +437,14 @@ namespace Phaseward
             return paths;
         }
 
-        private int EdgeCount(Net net) => Netlist.DataLoadsOf(net).Count + Netlist.ControlLoadsOf(net).Count;
+        private int EdgeCount(Net net) => Netlist.DataLoadList(net).Count + Netlist.ControlLoadList(net).Count;
 
         // Edge i out of a net: a stage to its output net, or (next = null) an entry gate where another latch begins.
         // False when the device carries no data onwards (keepers, clocked gates that enter no latch, side doors into storage).
         private bool TryEdge(Net net, int i, out Device device, out Net? next)
         {
-            var data = Netlist.DataLoadsOf(net);
-            device = i < data.Count ? data[i] : Netlist.ControlLoadsOf(net)[i - data.Count];
+            var data = Netlist.DataLoadList(net);
+            device = i < data.Count ? data[i] : Netlist.ControlLoadList(net)[i - data.Count];
             next = null;
             if (device.IsWeak)
                 return false;

@@ -15,6 +15,7 @@ namespace Phaseward
             OutputDelay = output;
             Setup = entry + (latch.FeedbackGates.Count > 0 ? output + feedback : Time.Zero);
             DataToOutput = entry + output;
+            Window = latch.Window;
             Hold = Window.Length - (latch.Phase.Polarity == ClockPolarity.High
                 ? latch.Phase.Clock.Period * latch.Phase.Clock.Duty
                 : latch.Phase.Clock.Period * (1 - latch.Phase.Clock.Duty));
@@ -26,7 +27,8 @@ namespace Phaseward
 
         public Phase Phase => Latch.Phase;
 
-        public PhaseWindow Window => Latch.Window;
+        /// <summary>When the latch is transparent (made once, with the other figures).</summary>
+        public PhaseWindow Window { get; }
 
         /// <summary>t of the entry gate charging the storage node.</summary>
         public Time EntryDelay { get; }

@@ -33,52 +33,12 @@ namespace Phaseward
         /// </summary>
         public static List<TimeInterval> Union(IEnumerable<Arc> arcs, Time period)
         {
-            if (!(period.Seconds > 0)) throw new ArgumentException($"'{nameof(period)}' must be positive (was {period}).", nameof(period));
-            var t = period.Seconds;
-            var eps = t * Tolerance;
+            CheckPeriod(period);
             var pieces = new List<(double Start, double End)>();
             foreach (var arc in arcs)
-            {
-                if (arc.Length.Seconds <= 0) continue;
-                if (arc.Length.Seconds >= t - eps)
-                {
-                    pieces.Add((0, t));
-                    continue;
-                }
-
-                var start = arc.Opens.Seconds % t;
-                if (start < 0) start += t;
-                var end = start + arc.Length.Seconds;
-                if (end <= t)
-                {
-                    pieces.Add((start, end));
-                }
-                else
-                {
-                    pieces.Add((start, t));
-                    pieces.Add((0, end - t));
-                }
-            }
-
-            pieces.Sort((a, b) => a.Start.CompareTo(b.Start));
+                AddPieces(arc, period.Seconds, pieces);
             var merged = new List<TimeInterval>(pieces.Count);
-            double curStart = 0, curEnd = 0;
-            var open = false;
-            foreach (var (start, end) in pieces)
-            {
-                if (open && start <= curEnd + eps)
-                {
-                    curEnd = Math.Max(curEnd, end);
-                    continue;
-                }
-
-                if (open) merged.Add(new TimeInterval(new Time(curStart), new Time(curEnd)));
-                curStart = start;
-                curEnd = end;
-                open = true;
-            }
-
-            if (open) merged.Add(new TimeInterval(new Time(curStart), new Time(Math.Min(curEnd, t))));
+            Merge(pieces, period.Seconds, merged);
             return merged;
         }
 
@@ -86,18 +46,20 @@ namespace Phaseward
         /// The longest stretch of the period that none of <paramref name="arcs"/> covers (the whole period if there
         /// are none, zero if they cover it all).
         /// </summary>
-        public static Time LongestGap(IEnumerable<Arc> arcs, Time period)
+        public static Time LongestGap(IEnumerable<Arc> arcs, Time period) => LongestGapIn(Union(arcs, period), period);
+
+        /// <summary><see cref="LongestGap(IEnumerable{Arc}, Time)"/> working in <paramref name="buffers"/>, which it overwrites
+        /// (for callers that combine the arcs of many nodes).</summary>
+        internal static Time LongestGap(List<Arc> arcs, Time period, ArcBuffers buffers)
         {
-            var union = Union(arcs, period);
-            var t = period.Seconds;
-            if (union.Count == 0) return period;
-            var eps = t * Tolerance;
-            var longest = 0.0;
-            for (var i = 1; i < union.Count; i++)
-                longest = Math.Max(longest, union[i].Start.Seconds - union[i - 1].End.Seconds);
-            // The gap that wraps from the last interval's end round to the first one's start.
-            longest = Math.Max(longest, union[0].Start.Seconds + t - union[union.Count - 1].End.Seconds);
-            return longest <= eps ? Time.Zero : new Time(longest);
+            CheckPeriod(period);
+            var pieces = buffers.Pieces;
+            pieces.Clear();
+            foreach (var arc in arcs)
+                AddPieces(arc, period.Seconds, pieces);
+            var merged = buffers.Union;
+            Merge(pieces, period.Seconds, merged);
+            return LongestGapIn(merged, period);
         }
 
         /// <summary>True if every instant of <paramref name="arc"/> lies inside one of <paramref name="cover"/>.</summary>
@@ -120,6 +82,74 @@ namespace Phaseward
             }
 
             return true;
+        }
+
+        private static void CheckPeriod(Time period)
+        {
+            if (!(period.Seconds > 0)) throw new ArgumentException($"'{nameof(period)}' must be positive (was {period}).", nameof(period));
+        }
+
+        // The arc as one or two pieces inside [0, t) (two when it wraps), or none when it is empty.
+        private static void AddPieces(Arc arc, double t, List<(double Start, double End)> pieces)
+        {
+            var eps = t * Tolerance;
+            if (arc.Length.Seconds <= 0) return;
+            if (arc.Length.Seconds >= t - eps)
+            {
+                pieces.Add((0, t));
+                return;
+            }
+
+            var start = arc.Opens.Seconds % t;
+            if (start < 0) start += t;
+            var end = start + arc.Length.Seconds;
+            if (end <= t)
+            {
+                pieces.Add((start, end));
+            }
+            else
+            {
+                pieces.Add((start, t));
+                pieces.Add((0, end - t));
+            }
+        }
+
+        // Sorts the pieces and merges those that overlap or touch into 'merged' (cleared first).
+        private static void Merge(List<(double Start, double End)> pieces, double t, List<TimeInterval> merged)
+        {
+            var eps = t * Tolerance;
+            pieces.Sort((a, b) => a.Start.CompareTo(b.Start));
+            merged.Clear();
+            double curStart = 0, curEnd = 0;
+            var open = false;
+            foreach (var (start, end) in pieces)
+            {
+                if (open && start <= curEnd + eps)
+                {
+                    curEnd = Math.Max(curEnd, end);
+                    continue;
+                }
+
+                if (open) merged.Add(new TimeInterval(new Time(curStart), new Time(curEnd)));
+                curStart = start;
+                curEnd = end;
+                open = true;
+            }
+
+            if (open) merged.Add(new TimeInterval(new Time(curStart), new Time(Math.Min(curEnd, t))));
+        }
+
+        private static Time LongestGapIn(List<TimeInterval> union, Time period)
+        {
+            var t = period.Seconds;
+            if (union.Count == 0) return period;
+            var eps = t * Tolerance;
+            var longest = 0.0;
+            for (var i = 1; i < union.Count; i++)
+                longest = Math.Max(longest, union[i].Start.Seconds - union[i - 1].End.Seconds);
+            // The gap that wraps from the last interval's end round to the first one's start.
+            longest = Math.Max(longest, union[0].Start.Seconds + t - union[union.Count - 1].End.Seconds);
+            return longest <= eps ? Time.Zero : new Time(longest);
         }
     }
 }

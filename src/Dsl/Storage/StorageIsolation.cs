@@ -53,19 +53,38 @@ namespace Phaseward
         public static RunningIsolation? WhileRunning(StorageNode node)
         {
             if (node is null) throw new ArgumentNullException(nameof(node));
-            RunningIsolation? best = null;
-            foreach (var group in ByRoot(node.Drivers))
+            return WhileRunning(node, new ArcBuffers());
+        }
+
+        /// <summary><see cref="WhileRunning(StorageNode)"/> working in <paramref name="buffers"/>: per root clock (in order of
+        /// first appearance among the drivers) the longest gap between its drivers' windows; the shortest such gap wins.</summary>
+        internal static RunningIsolation? WhileRunning(StorageNode node, ArcBuffers buffers)
+        {
+            var drivers = node.Drivers;
+            var roots = buffers.Roots;
+            roots.Clear();
+            for (var i = 0; i < drivers.Count; i++)
+                if (drivers[i].ClockControl is { } phase && !roots.Contains(phase.Clock.Root))
+                    roots.Add(phase.Clock.Root);
+
+            Clock? bestRoot = null;
+            var bestGap = Time.Zero;
+            var arcs = buffers.Arcs;
+            foreach (var root in roots)
             {
-                var root = group[0].ClockControl!.Clock.Root;
-                var arcs = new List<Arc>(group.Count);
-                foreach (var driver in group)
-                    arcs.Add(Arc.Of(PhaseWindow.Of(driver.ClockControl!)));
-                var gap = Arc.LongestGap(arcs, root.Period);
-                if (best is null || gap < best.Longest)
-                    best = new RunningIsolation(node, root, gap, group);
+                arcs.Clear();
+                for (var i = 0; i < drivers.Count; i++)
+                    if (drivers[i].ClockControl is { } phase && ReferenceEquals(phase.Clock.Root, root))
+                        arcs.Add(PhaseWindow.ArcOf(phase));
+                var gap = Arc.LongestGap(arcs, root.Period, buffers);
+                if (bestRoot is null || gap < bestGap)
+                {
+                    bestRoot = root;
+                    bestGap = gap;
+                }
             }
 
-            return best;
+            return bestRoot is null ? null : new RunningIsolation(node, bestRoot, bestGap, DriversOn(bestRoot, drivers));
         }
 
         /// <summary>
@@ -76,9 +95,10 @@ namespace Phaseward
         {
             if (node is null) throw new ArgumentNullException(nameof(node));
             var gates = new List<Clock>(1);
-            foreach (var driver in node.Drivers)
+            var drivers = node.Drivers;
+            for (var i = 0; i < drivers.Count; i++)
             {
-                if (driver.ClockControl is not { } phase) continue; // data-controlled: possibly off anyway
+                if (drivers[i].ClockControl is not { } phase) continue; // data-controlled: possibly off anyway
                 var gate = GateHoldingOff(phase);
                 if (gate is null) return null;
                 if (!gates.Contains(gate)) gates.Add(gate);
@@ -121,7 +141,7 @@ namespace Phaseward
                 var cover = new List<Arc>();
                 foreach (var driver in others)
                     if (driver.ClockControl is { } other && ReferenceEquals(other.Clock.Root, phase.Clock.Root))
-                        cover.Add(Arc.Of(PhaseWindow.Of(other)));
+                        cover.Add(PhaseWindow.ArcOf(other));
                 return !Arc.IsCovered(Arc.Of(window), cover, window.Period);
             }
 
@@ -129,7 +149,7 @@ namespace Phaseward
             {
                 var arcs = new List<Arc>(group.Count);
                 foreach (var driver in group)
-                    arcs.Add(Arc.Of(PhaseWindow.Of(driver.ClockControl!)));
+                    arcs.Add(PhaseWindow.ArcOf(driver.ClockControl!));
                 if (Arc.LongestGap(arcs, group[0].ClockControl!.Clock.Root.Period) == Time.Zero)
                     return false;
             }
@@ -149,6 +169,16 @@ namespace Phaseward
             var opens = phase.Polarity == ClockPolarity.High ? clock.DelayFromRoot : clock.DelayFromRoot + highTime;
             var length = (phase.Polarity == ClockPolarity.High ? highTime : period - highTime) + clock.ComplementSkew;
             return new Arc(opens, length);
+        }
+
+        // The clock-controlled drivers on one root clock, in order.
+        private static List<Device> DriversOn(Clock root, IReadOnlyList<Device> drivers)
+        {
+            var on = new List<Device>(2);
+            for (var i = 0; i < drivers.Count; i++)
+                if (drivers[i].ClockControl is { } phase && ReferenceEquals(phase.Clock.Root, root))
+                    on.Add(drivers[i]);
+            return on;
         }
 
         // Clock-controlled drivers grouped by root clock, groups in order of first appearance.

@@ -52,16 +52,18 @@ namespace Phaseward
         {
             var byNet = new StorageNode?[netlist.Nets.Count];
             var nodes = new List<StorageNode>();
+            var controls = new HashSet<int>();
+            var feedbackSearch = new FeedbackSearch(netlist);
             foreach (var net in netlist.Nets)
             {
                 if (!netlist.IsDrivenOnlyThroughPassDevices(net))
                     continue;
-                var drivers = netlist.DriversOf(net);
-                if (IsComplementaryMux(netlist, drivers))
+                var drivers = netlist.DriverList(net);
+                if (IsComplementaryMux(netlist, drivers, controls))
                     continue;
                 List<Device>? feedback = null;
                 foreach (var driver in drivers)
-                    if (IsRestoredCopy(netlist, driver.Inputs[0], net))
+                    if (feedbackSearch.IsRestoredCopy(driver.Inputs[0], net))
                         (feedback ??= new List<Device>(1)).Add(driver);
 
                 var node = new StorageNode(net, feedback is null ? StorageKind.Dynamic : StorageKind.ClockedFeedback, drivers,
@@ -75,55 +77,67 @@ namespace Phaseward
 
         // A pass-gate mux whose arms are controlled by a net and its inverse: one arm conducts at every instant, so the
         // node is driven from the selected input, not stored. (Arms on decoded one-hot selects cannot be proven so and
-        // stay storage nodes.)
-        private static bool IsComplementaryMux(Netlist netlist, IReadOnlyList<Device> drivers)
+        // stay storage nodes.) 'controls' is scratch space, reused from node to node.
+        private static bool IsComplementaryMux(Netlist netlist, List<Device> drivers, HashSet<int> controls)
         {
-            HashSet<int>? controls = null;
+            controls.Clear();
             foreach (var driver in drivers)
                 if (driver.DataControl is { } control)
-                    (controls ??= new HashSet<int>()).Add(control.Id);
-            if (controls is null || controls.Count < 2)
+                    controls.Add(control.Id);
+            if (controls.Count < 2)
                 return false;
 
             foreach (var id in controls)
-                foreach (var controlDriver in netlist.DriversOf(netlist.Nets[id]))
+                foreach (var controlDriver in netlist.DriverList(netlist.Nets[id]))
                     if (controlDriver.Kind == DeviceKind.Inverter && controls.Contains(controlDriver.Inputs[0].Id))
                         return true;
             return false;
         }
 
-        // True if 'source' is made from 'node' through restoring stages only, with an even number of inversions.
-        private static bool IsRestoredCopy(Netlist netlist, Net source, Net node)
+        /// <summary>The feedback search, with its frontiers kept from one search to the next (it runs once per pass driver).</summary>
+        private sealed class FeedbackSearch
         {
-            var frontier = new List<(Net Net, bool Inverted)> { (source, false) };
-            var visited = 1;
-            for (var depth = 0; depth < FeedbackDepth && frontier.Count > 0; depth++)
-            {
-                var next = new List<(Net Net, bool Inverted)>();
-                foreach (var (net, inverted) in frontier)
-                {
-                    foreach (var driver in netlist.DriversOf(net))
-                    {
-                        if (!driver.IsRestoring) continue;
-                        var parity = inverted ^ driver.Kind.IsInverting();
-                        foreach (var input in driver.Inputs)
-                        {
-                            if (ReferenceEquals(input, node))
-                            {
-                                if (!parity) return true;
-                                continue;
-                            }
+            private readonly Netlist netlist;
+            private List<(Net Net, bool Inverted)> frontier = new();
+            private List<(Net Net, bool Inverted)> next = new();
 
-                            if (visited++ >= FeedbackBreadth) return false;
-                            next.Add((input, parity));
+            public FeedbackSearch(Netlist netlist) => this.netlist = netlist;
+
+            // True if 'source' is made from 'node' through restoring stages only, with an even number of inversions.
+            public bool IsRestoredCopy(Net source, Net node)
+            {
+                frontier.Clear();
+                frontier.Add((source, false));
+                var visited = 1;
+                for (var depth = 0; depth < FeedbackDepth && frontier.Count > 0; depth++)
+                {
+                    next.Clear();
+                    foreach (var (net, inverted) in frontier)
+                    {
+                        foreach (var driver in netlist.DriverList(net))
+                        {
+                            if (!driver.IsRestoring) continue;
+                            var parity = inverted ^ driver.Kind.IsInverting();
+                            var inputs = driver.Inputs;
+                            for (var i = 0; i < inputs.Count; i++)
+                            {
+                                if (ReferenceEquals(inputs[i], node))
+                                {
+                                    if (!parity) return true;
+                                    continue;
+                                }
+
+                                if (visited++ >= FeedbackBreadth) return false;
+                                next.Add((inputs[i], parity));
+                            }
                         }
                     }
+
+                    (frontier, next) = (next, frontier);
                 }
 
-                frontier = next;
+                return false;
             }
-
-            return false;
         }
 
         private sealed class StorageMap

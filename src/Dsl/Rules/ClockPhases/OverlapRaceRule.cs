@@ -47,10 +47,10 @@ namespace Phaseward
         }
 
         /// <summary>How long a gate on <paramref name="late"/> still conducts after one on <paramref name="opening"/> opens (zero if it is shut then).</summary>
-        public static Time OpenOverlap(Phase opening, Phase late)
+        public static Time OpenOverlap(Phase opening, Phase late) => OpenOverlap(PhaseWindow.Of(opening), PhaseWindow.Of(late));
+
+        internal static Time OpenOverlap(PhaseWindow a, PhaseWindow b)
         {
-            var a = PhaseWindow.Of(opening);
-            var b = PhaseWindow.Of(late);
             if (!a.SharesRootWith(b))
                 return Time.Zero;
             var period = a.Period.Seconds;
@@ -66,9 +66,10 @@ namespace Phaseward
 
         internal static Time FastestEntry(LatchModel model, Latch latch)
         {
-            var fastest = model.StageDelay(latch.EntryGates[0]);
-            foreach (var gate in latch.EntryGates)
-                fastest = Time.Min(fastest, model.StageDelay(gate));
+            var gates = latch.EntryGates;
+            var fastest = model.StageDelay(gates[0]);
+            for (var i = 1; i < gates.Count; i++)
+                fastest = Time.Min(fastest, model.StageDelay(gates[i]));
             return fastest;
         }
     }
@@ -110,6 +111,7 @@ namespace Phaseward
             if (model is null) throw new ArgumentNullException(nameof(model));
             var worst = new Dictionary<(int, int), OverlapRace>();
             var order = new List<(int, int)>();
+            var windows = new PhaseWindowCache();
             foreach (var path in model.Paths)
             {
                 cancellationToken.ThrowIfCancellationRequested();
@@ -119,7 +121,7 @@ namespace Phaseward
                 if (!LatchModel.Complementary(a.Phase, phaseB) || OverlapRaceRule.IsRegisterToRegister(model, a, b))
                     continue;
 
-                var overlap = OverlapRaceRule.OpenOverlap(a.Phase, phaseB);
+                var overlap = OverlapRaceRule.OpenOverlap(windows.Of(a.Phase), windows.Of(phaseB));
                 if (overlap <= Time.Zero)
                     continue;
                 var fastest = OverlapRaceRule.FastestEntry(model, a) + path.MinDelay + model.StageDelay(path.EntryGate);

@@ -12,10 +12,11 @@ namespace Phaseward
 
         public override IEnumerable<Finding> Check(RuleContext context)
         {
+            var buffers = new ArcBuffers();
             foreach (var node in StorageNodes.Of(context.Netlist))
             {
                 context.CancellationToken.ThrowIfCancellationRequested();
-                if (StorageIsolation.WhileRunning(node) is not { } running)
+                if (StorageIsolation.WhileRunning(node, buffers) is not { } running)
                     continue;
                 var retention = node.Retention;
                 if (running.LowestSafeFrequency(retention.Time) is not { } minimum)

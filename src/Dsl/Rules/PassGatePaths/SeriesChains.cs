@@ -58,7 +58,7 @@ namespace Phaseward
                 {
                     var net = netlist.Nets[network.NetIdOf(node)];
                     var best = -1;
-                    foreach (var driver in netlist.DriversOf(net))
+                    foreach (var driver in netlist.DriverList(net))
                     {
                         if (!driver.IsPassDevice || !network.IsOutputEdgeKept(driver)) continue;
                         if (best < 0 || depthIn[driver.Id] > depthIn[best]
@@ -106,8 +106,9 @@ namespace Phaseward
                     var net = netlist.Nets[network.NetIdOf(node)];
                     var best = -1;
                     var bestDelay = 0.0;
-                    foreach (var load in network.PassLoadsOf(net))
+                    for (var position = network.PassLoadStart(net); position < network.PassLoadEnd(net); position++)
                     {
+                        var load = network.PassLoadAt(position);
                         if (!network.IsInputEdgeKept(load)) continue;
                         var delay = netlist.ResistanceOf(load).Ohms * network.ChargedThrough(load).Farads + elmoreAfter[load.Id];
                         if (best < 0 || depthOut[load.Id] > depthOut[best] || (depthOut[load.Id] == depthOut[best] && delay > bestDelay))

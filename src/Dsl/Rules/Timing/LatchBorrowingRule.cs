@@ -112,7 +112,9 @@ namespace Phaseward
                     if (placed[latch.Index]) continue;
                     placed[latch.Index] = true;
                     order.Add(latch);
-                    foreach (var path in outgoing[latch.Index] ?? new List<LatchPath>())
+                    if (outgoing[latch.Index] is not { } paths)
+                        continue;
+                    foreach (var path in paths)
                         if (path.From != path.To && --indegree[path.To.Index] == 0)
                             queue.Enqueue(path.To);
                 }
@@ -128,7 +130,9 @@ namespace Phaseward
             {
                 foreach (var a in order)
                 {
-                    foreach (var path in outgoing[a.Index] ?? new List<LatchPath>())
+                    if (outgoing[a.Index] is not { } paths)
+                        continue;
+                    foreach (var path in paths)
                     {
                         var b = path.To;
                         var timingA = figures.Of(a);

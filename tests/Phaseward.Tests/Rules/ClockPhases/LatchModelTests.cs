@@ -28,6 +28,33 @@ public class LatchModelTests
     }
 
     [Fact]
+    public void EntryGatesInTwoWindowsMakeTwoLatchesOnOneNode()
+    {
+        // The model's rule (see LatchModel): entry gates of one window make one latch, named after the node and the
+        // window's first phase when the node holds more than one; a buffered copy of a phase opens in the same window.
+        var c = Figures.NewCircuit("windows");
+        var clk = c.Clock("clk", 1.Nanoseconds());
+        var other = c.Clock("other", 3.Nanoseconds());
+        var late = c.BufferedClock(clk, 50.Picoseconds());
+        var d = c.Input("d");
+        var e = c.Input("e");
+        var s = c.Node("s");
+        c.TransmissionGate(d, clk.High, s);
+        c.TransmissionGate(e, other.High, s);
+        c.TransmissionGate(e, late.High, s);
+        c.Inverter(s, "q");
+
+        var model = LatchModel.Of(c.ToNetlist());
+
+        Assert.Equal(new[] { "s@clk.High", "s@other.High" }, model.Latches.Select(l => l.Name).ToArray());
+        Assert.Equal(new[] { clk.High, late.High }, model.Latches[0].EntryGates.Select(g => g.ClockControl).ToArray());
+        Assert.Equal(new[] { other.High }, model.Latches[1].EntryGates.Select(g => g.ClockControl).ToArray());
+        Assert.All(model.Latches, l => Assert.Same(s, l.Storage));
+        Assert.All(model.Latches, l => Assert.Equal("q", l.Output.Name));
+        Assert.Same(model.Latches[0], model.LatchEnteredBy(model.Latches[0].EntryGates[1]));
+    }
+
+    [Fact]
     public void HandBuiltStaticLatchAndKeeperLatchAreFoundLikeTheCell()
     {
         var c = Figures.NewCircuit("hand");
