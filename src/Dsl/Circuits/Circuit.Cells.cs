@@ -48,9 +48,13 @@ namespace Phaseward
             CheckNet(d, nameof(d));
             CheckPhase(transparent, nameof(transparent));
             var isStatic = kind == MacroKind.StaticLatch;
+            // An auto name was found free together with its internal nets; only a given name needs checking.
             var cellName = name ?? AutoName("latch", LatchInternalNets(isStatic));
-            CheckNewNetName(cellName, nameof(name));
-            CheckCellNetsFree(cellName, LatchInternalNets(isStatic), nameof(name));
+            if (name is not null)
+            {
+                CheckNewNetName(cellName, nameof(name));
+                CheckCellNetsFree(cellName, LatchInternalNets(isStatic), nameof(name));
+            }
 
             return BuildLatch(kind, d, transparent, cellName, cellName, null, span);
         }
@@ -61,11 +65,15 @@ namespace Phaseward
             CheckClock(clock, nameof(clock));
             var isStatic = kind == MacroKind.StaticRegister;
             var cellName = name ?? AutoName("reg", RegisterInternalNets(isStatic));
-            CheckNewNetName(cellName, nameof(name));
+            if (name is not null)
+            {
+                CheckNewNetName(cellName, nameof(name));
+                CheckCellNetsFree(cellName + ".master", LatchInternalNets(isStatic), nameof(name));
+                CheckNewNetName(cellName + ".master", nameof(name));
+                CheckCellNetsFree(cellName + ".slave", LatchInternalNets(isStatic), nameof(name));
+            }
+
             var latchKind = isStatic ? MacroKind.StaticLatch : MacroKind.DynamicLatch;
-            CheckCellNetsFree(cellName + ".master", LatchInternalNets(isStatic), nameof(name));
-            CheckNewNetName(cellName + ".master", nameof(name));
-            CheckCellNetsFree(cellName + ".slave", LatchInternalNets(isStatic), nameof(name));
 
             var register = AddMacro(kind, cellName, span, null);
             var master = BuildLatch(latchKind, d, clock.Low, cellName + ".master", cellName + ".master", register, span);

@@ -5,8 +5,10 @@ namespace Phaseward
     /// <summary>One use of a library cell: which primitives it expanded into and where it was written.</summary>
     public sealed class MacroInstance
     {
-        private readonly List<Device> devices = new();
-        private readonly List<MacroInstance> parts = new();
+        private static readonly IReadOnlyList<MacroInstance> NoParts = new MacroInstance[0];
+
+        private readonly List<Device> devices = new(4);
+        private List<MacroInstance>? parts;   // only registers have parts: made on the first one
 
         internal MacroInstance(int id, MacroKind kind, string name, SourceSpan span, MacroInstance? parent)
         {
@@ -15,7 +17,8 @@ namespace Phaseward
             Name = name;
             Span = span;
             Parent = parent;
-            parent?.parts.Add(this);
+            if (parent is not null)
+                (parent.parts ??= new List<MacroInstance>(2)).Add(this);
         }
 
         public int Id { get; }
@@ -33,7 +36,7 @@ namespace Phaseward
         public IReadOnlyList<Device> Devices => devices;
 
         /// <summary>Cells nested in this one (a register's master and slave latches).</summary>
-        public IReadOnlyList<MacroInstance> Parts => parts;
+        public IReadOnlyList<MacroInstance> Parts => (IReadOnlyList<MacroInstance>?)parts ?? NoParts;
 
         internal void Add(Device device)
         {

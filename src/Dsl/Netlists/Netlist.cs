@@ -10,16 +10,16 @@ namespace Phaseward
     /// </summary>
     public sealed class Netlist
     {
-        private static readonly IReadOnlyList<Device> NoDevices = Array.Empty<Device>();
+        private static readonly Device[] NoDevices = Array.Empty<Device>();
 
-        // What the internal accessors return for a net with no such devices; never added to.
-        private static readonly List<Device> NoDeviceList = new(0);
-
-        private readonly List<Device>?[] drivers;
-        private readonly List<Device>?[] dataLoads;
-        private readonly List<Device>?[] controlLoads;
+        // Per net, exactly sized (null: none). Arrays rather than lists: a million-net design then holds one object per
+        // non-empty index entry instead of two, and the rules iterate them without enumerator objects.
+        private readonly Device[]?[] drivers;
+        private readonly Device[]?[] dataLoads;
+        private readonly Device[]?[] controlLoads;
+        private readonly Net[] netArray;
         private readonly Capacitance[] capacitances;
-        private readonly Current?[] leakageOverrides;
+        private readonly IReadOnlyDictionary<int, Current> leakageOverrides;
         private readonly bool[] isInput;
 
         internal Netlist(string designName, Process process, IReadOnlyList<Net> nets, IReadOnlyList<Device> devices,
@@ -34,19 +34,41 @@ namespace Phaseward
             Macros = macros;
             Inputs = inputs;
             Outputs = outputs;
+            netArray = nets as Net[] ?? new List<Net>(nets).ToArray();
+            leakageOverrides = leakage;
 
-            drivers = new List<Device>?[nets.Count];
-            dataLoads = new List<Device>?[nets.Count];
-            controlLoads = new List<Device>?[nets.Count];
-            foreach (var device in devices)
+            // Each index in two passes: count per net, then fill arrays of exactly that size.
+            var counts = new int[nets.Count];
+            for (var d = 0; d < devices.Count; d++)
+                counts[devices[d].Output.Id]++;
+            drivers = Allocate(counts);
+            for (var d = 0; d < devices.Count; d++)
+                Fill(drivers, counts, devices[d].Output, devices[d]);
+
+            Array.Clear(counts, 0, counts.Length);
+            for (var d = 0; d < devices.Count; d++)
             {
-                Add(drivers, device.Output, device);
-                var deviceInputs = device.Inputs;
+                var deviceInputs = devices[d].Inputs;
                 for (var i = 0; i < deviceInputs.Count; i++)
-                    Add(dataLoads, deviceInputs[i], device);
-                if (device.DataControl is { } control)
-                    Add(controlLoads, control, device);
+                    counts[deviceInputs[i].Id]++;
             }
+
+            dataLoads = Allocate(counts);
+            for (var d = 0; d < devices.Count; d++)
+            {
+                var deviceInputs = devices[d].Inputs;
+                for (var i = 0; i < deviceInputs.Count; i++)
+                    Fill(dataLoads, counts, deviceInputs[i], devices[d]);
+            }
+
+            Array.Clear(counts, 0, counts.Length);
+            for (var d = 0; d < devices.Count; d++)
+                if (devices[d].DataControl is { } control)
+                    counts[control.Id]++;
+            controlLoads = Allocate(counts);
+            for (var d = 0; d < devices.Count; d++)
+                if (devices[d].DataControl is { } control)
+                    Fill(controlLoads, counts, control, devices[d]);
 
             isInput = new bool[nets.Count];
             foreach (var port in inputs)
@@ -58,15 +80,10 @@ namespace Phaseward
                     enableLoads[enable.Id]++;
 
             capacitances = new Capacitance[nets.Count];
-            leakageOverrides = new Current?[nets.Count];
-            foreach (var net in nets)
-            {
+            foreach (var net in netArray)
                 capacitances[net.Id] = capacitanceOverrides.TryGetValue(net.Id, out var set)
                     ? set
                     : EstimateCapacitance(net, enableLoads[net.Id]);
-                if (leakage.TryGetValue(net.Id, out var current))
-                    leakageOverrides[net.Id] = current;
-            }
         }
 
         public string DesignName { get; }
@@ -95,12 +112,12 @@ namespace Phaseward
         /// <summary>Pass gates controlled by this net.</summary>
         public IReadOnlyList<Device> ControlLoadsOf(Net net) => controlLoads[Index(net)] ?? NoDevices;
 
-        // The same indexes as concrete lists, for the rules' hot loops: enumerating an IReadOnlyList boxes its enumerator.
-        internal List<Device> DriverList(Net net) => drivers[Index(net)] ?? NoDeviceList;
+        // The same indexes as arrays, for the rules' hot loops: enumerating an IReadOnlyList boxes its enumerator.
+        internal Device[] DriverList(Net net) => drivers[Index(net)] ?? NoDevices;
 
-        internal List<Device> DataLoadList(Net net) => dataLoads[Index(net)] ?? NoDeviceList;
+        internal Device[] DataLoadList(Net net) => dataLoads[Index(net)] ?? NoDevices;
 
-        internal List<Device> ControlLoadList(Net net) => controlLoads[Index(net)] ?? NoDeviceList;
+        internal Device[] ControlLoadList(Net net) => controlLoads[Index(net)] ?? NoDevices;
 
         /// <summary>True for a primary input (driven from outside through the process's driver resistance).</summary>
         public bool IsInput(Net net) => isInput[Index(net)];
@@ -112,7 +129,7 @@ namespace Phaseward
         public Capacitance CapacitanceOf(Net net) => capacitances[Index(net)];
 
         /// <summary>The storage leakage of this net: the value set in the design, else the process figure.</summary>
-        public Current LeakageOf(Net net) => leakageOverrides[Index(net)] ?? Process.StorageLeakage;
+        public Current LeakageOf(Net net) => leakageOverrides.TryGetValue(Index(net), out var set) ? set : Process.StorageLeakage;
 
         /// <summary>The device's effective resistance: its own figure, else the process figure for its kind.</summary>
         public Resistance ResistanceOf(Device device)
@@ -125,7 +142,7 @@ namespace Phaseward
         public bool IsDrivenOnlyThroughPassDevices(Net net)
         {
             var netDrivers = DriverList(net);
-            if (netDrivers.Count == 0 || IsInput(net))
+            if (netDrivers.Length == 0 || IsInput(net))
                 return false;
             foreach (var driver in netDrivers)
                 if (driver.IsRestoring)
@@ -145,19 +162,33 @@ namespace Phaseward
                 else gateLoads++;
             }
 
-            gateLoads += ControlLoadsOf(net).Count;
-            diffusionTerminals += DriversOf(net).Count;
+            gateLoads += ControlLoadList(net).Length;
+            diffusionTerminals += DriverList(net).Length;
             return Process.WireCapacitance + Process.GateCapacitance * gateLoads + Process.DiffusionCapacitance * diffusionTerminals;
         }
 
         private int Index(Net net)
         {
             if (net is null) throw new ArgumentNullException(nameof(net));
-            if ((uint)net.Id >= (uint)Nets.Count || !ReferenceEquals(Nets[net.Id], net))
+            if ((uint)net.Id >= (uint)netArray.Length || !ReferenceEquals(netArray[net.Id], net))
                 throw new ArgumentException($"Net '{net.Name}' does not belong to the netlist of design '{DesignName}'.", nameof(net));
             return net.Id;
         }
 
-        private static void Add(List<Device>?[] index, Net net, Device device) => (index[net.Id] ??= new List<Device>(2)).Add(device);
+        // Arrays of the counted sizes; the counts are reset to 0 to serve as fill positions (and end as the counts again).
+        private static Device[]?[] Allocate(int[] counts)
+        {
+            var index = new Device[]?[counts.Length];
+            for (var i = 0; i < counts.Length; i++)
+            {
+                if (counts[i] > 0)
+                    index[i] = new Device[counts[i]];
+                counts[i] = 0;
+            }
+
+            return index;
+        }
+
+        private static void Fill(Device[]?[] index, int[] positions, Net net, Device device) => index[net.Id]![positions[net.Id]++] = device;
     }
 }

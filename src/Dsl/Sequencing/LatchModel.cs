@@ -196,7 +196,7 @@ namespace Phaseward
         {
             hasKeeper = false;
             var drivers = netlist.DriverList(net);
-            if (drivers.Count == 0 || netlist.IsInput(net))
+            if (drivers.Length == 0 || netlist.IsInput(net))
                 return false;
             var passDrivers = 0;
             foreach (var driver in drivers)
@@ -437,19 +437,19 @@ namespace Phaseward
             return paths;
         }
 
-        private int EdgeCount(Net net) => Netlist.DataLoadList(net).Count + Netlist.ControlLoadList(net).Count;
+        private int EdgeCount(Net net) => Netlist.DataLoadList(net).Length + Netlist.ControlLoadList(net).Length;
 
         // Edge i out of a net: a stage to its output net, or (next = null) an entry gate where another latch begins.
         // False when the device carries no data onwards (keepers, clocked gates that enter no latch, side doors into storage).
         private bool TryEdge(Net net, int i, out Device device, out Net? next)
         {
             var data = Netlist.DataLoadList(net);
-            device = i < data.Count ? data[i] : Netlist.ControlLoadList(net)[i - data.Count];
+            device = i < data.Length ? data[i] : Netlist.ControlLoadList(net)[i - data.Length];
             next = null;
             if (device.IsWeak)
                 return false;
             if (device.IsPassDevice && device.ClockControl is not null)
-                return entryLatchOfDevice[device.Id] is not null && i < data.Count;
+                return entryLatchOfDevice[device.Id] is not null && i < data.Length;
             if (isLatchStorage[device.Output.Id])
                 return false;
             next = device.Output;

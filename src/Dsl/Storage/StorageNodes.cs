@@ -78,7 +78,7 @@ namespace Phaseward
         // A pass-gate mux whose arms are controlled by a net and its inverse: one arm conducts at every instant, so the
         // node is driven from the selected input, not stored. (Arms on decoded one-hot selects cannot be proven so and
         // stay storage nodes.) 'controls' is scratch space, reused from node to node.
-        private static bool IsComplementaryMux(Netlist netlist, List<Device> drivers, HashSet<int> controls)
+        private static bool IsComplementaryMux(Netlist netlist, Device[] drivers, HashSet<int> controls)
         {
             controls.Clear();
             foreach (var driver in drivers)
