@@ -14,7 +14,9 @@ namespace Phaseward.Analyzers.Tests.Verifiers;
 /// <summary>
 /// Code-fix test with the Phaseward set-up. Besides the framework's own checks (the fixed source matches, compiles
 /// without errors and leaves exactly the expected diagnostics), every comment of the original source must survive
-/// the fix: a fix may change code it was asked to change, never drop a designer's notes.
+/// the fix: a fix may change code it was asked to change, never drop a designer's notes. The comment check reads the
+/// expected fixed source, which the framework requires the fix's output to equal, so together they hold for the output
+/// (CodeFixVerifierTests provokes each failure).
 /// </summary>
 public sealed class PhasewareCodeFixTest<TAnalyzer, TCodeFix> : CSharpCodeFixTest<TAnalyzer, TCodeFix, DefaultVerifier>
     where TAnalyzer : DiagnosticAnalyzer, new()
@@ -28,6 +30,10 @@ public sealed class PhasewareCodeFixTest<TAnalyzer, TCodeFix> : CSharpCodeFixTes
         this.source = source;
         this.fixedSource = fixedSource;
         ReferenceAssemblies = PhasewareTest.ReferenceAssemblies;
+        // The framework's default, stated here because it is a promise of every code-fix test: a compiler error in the
+        // original or the fixed source is an unexpected diagnostic and fails the test. CodeFixVerifierTests shows that it
+        // does and that no code-fix test switches it off.
+        CompilerDiagnostics = CompilerDiagnostics.Errors;
         PhasewareTest.Configure(TestState);
         PhasewareTest.Configure(FixedState);
         PhasewareTest.Configure(BatchFixedState);
