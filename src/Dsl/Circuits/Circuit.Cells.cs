@@ -38,8 +38,8 @@ namespace Phaseward
 
             var cell = AddMacro(MacroKind.Keeper, cellName, span, null);
             var sensed = NewNet(cellName);
-            AddDevice(cellName + ".sense", DeviceKind.Inverter, new[] { node }, sensed, null, null, null, false, span, cell, "sense-inverter");
-            AddDevice(cellName + ".feedback", DeviceKind.Inverter, new[] { sensed }, node, null, null, null, true, span, cell, "weak-feedback-inverter");
+            AddDevice(null, DeviceKind.Inverter, new[] { node }, sensed, null, null, null, false, span, cell, "sense-inverter", nameInCell: "sense");
+            AddDevice(null, DeviceKind.Inverter, new[] { sensed }, node, null, null, null, true, span, cell, "weak-feedback-inverter", nameInCell: "feedback");
             return sensed;
         }
 
@@ -100,13 +100,13 @@ namespace Phaseward
             var cell = AddMacro(kind, cellName, span, parent);
             var storage = NewNet(cellName + ".x");
             var output = NewNet(outputName);
-            AddDevice(cellName + ".pass", DeviceKind.TransmissionGate, new[] { d }, storage, transparent, null, null, false, span, cell, "pass");
-            AddDevice(cellName + ".inverter", DeviceKind.Inverter, new[] { storage }, output, null, null, null, false, span, cell, "inverter");
+            AddDevice(null, DeviceKind.TransmissionGate, new[] { d }, storage, transparent, null, null, false, span, cell, "pass", nameInCell: "pass");
+            AddDevice(null, DeviceKind.Inverter, new[] { storage }, output, null, null, null, false, span, cell, "inverter", nameInCell: "inverter");
             if (kind == MacroKind.StaticLatch)
             {
                 var feedback = NewNet(cellName + ".fb");
-                AddDevice(cellName + ".feedback-inverter", DeviceKind.Inverter, new[] { output }, feedback, null, null, null, false, span, cell, "feedback-inverter");
-                AddDevice(cellName + ".feedback-pass", DeviceKind.TransmissionGate, new[] { feedback }, storage, transparent.Complement, null, null, false, span, cell, "feedback-pass");
+                AddDevice(null, DeviceKind.Inverter, new[] { output }, feedback, null, null, null, false, span, cell, "feedback-inverter", nameInCell: "feedback-inverter");
+                AddDevice(null, DeviceKind.TransmissionGate, new[] { feedback }, storage, transparent.Complement, null, null, false, span, cell, "feedback-pass", nameInCell: "feedback-pass");
             }
 
             return output;

@@ -150,10 +150,10 @@ namespace Phaseward
             return net;
         }
 
-        private Device AddDevice(string name, DeviceKind kind, Net[] deviceInputs, Net output, Phase? clockControl, Net? dataControl,
-            Resistance? resistance, bool isWeak, SourceSpan span, MacroInstance? macro = null, string? role = null)
+        private Device AddDevice(string? name, DeviceKind kind, Net[] deviceInputs, Net output, Phase? clockControl, Net? dataControl,
+            Resistance? resistance, bool isWeak, SourceSpan span, MacroInstance? macro = null, string? role = null, string? nameInCell = null)
         {
-            var device = new Device(devices.Count, name, kind, deviceInputs, output, clockControl, dataControl, resistance, isWeak, span, macro, role);
+            var device = new Device(devices.Count, name, kind, deviceInputs, output, clockControl, dataControl, resistance, isWeak, span, macro, role, nameInCell);
             devices.Add(device);
             macro?.Add(device);
             if (kind.IsRestoring() && !isWeak)

@@ -5,11 +5,18 @@ namespace Phaseward
     /// <summary>A primitive: a restoring stage or a pass device, with its connections and where it was written.</summary>
     public sealed class Device
     {
-        internal Device(int id, string name, DeviceKind kind, IReadOnlyList<Net> inputs, Net output, Phase? clockControl,
-            Net? dataControl, Resistance? resistance, bool isWeak, SourceSpan span, MacroInstance? macro, string? role)
+        private readonly string? nameInCell;
+        private string? name;
+
+        /// <param name="name">The device's name; null for a part of a cell, named <paramref name="nameInCell"/> inside it.</param>
+        internal Device(int id, string? name, DeviceKind kind, IReadOnlyList<Net> inputs, Net output, Phase? clockControl,
+            Net? dataControl, Resistance? resistance, bool isWeak, SourceSpan span, MacroInstance? macro, string? role, string? nameInCell = null)
         {
+            if (name is null && (macro is null || nameInCell is null))
+                throw new System.ArgumentException("A device needs a name, or a cell and its name inside the cell.", nameof(name));
             Id = id;
-            Name = name;
+            this.name = name;
+            this.nameInCell = nameInCell;
             Kind = kind;
             Inputs = inputs;
             Output = output;
@@ -24,7 +31,9 @@ namespace Phaseward
 
         public int Id { get; }
 
-        public string Name { get; }
+        /// <summary>The device's name; a cell's parts are named "cell.part", composed when first asked for (a large
+        /// design then does not hold a string per part that nobody reads).</summary>
+        public string Name => name ??= Macro!.Name + "." + nameInCell;
 
         public DeviceKind Kind { get; }
 
