@@ -203,13 +203,14 @@ namespace Phaseward.Benchmarks
             text.AppendLine("### Cost added over the compiler, ratios, throughput, memory");
             text.AppendLine();
             text.AppendLine("Added = analyzer run − compiler bind+diagnose (the analyzer driver compiles the documents too). " +
-                            "PW marginal = (walk + Phaseward) − walk: Phaseward's cost when the driver already binds operations for another analyzer, as in a build.");
+                            "PW marginal = (walk + Phaseward) − walk, taken pair by pair in each run (the two in alternating order) and then the median: " +
+                            "Phaseward's cost when the driver already binds operations for another analyzer, as in a build. Every timed measurement starts from a collected heap.");
             text.AppendLine();
             text.AppendLine("| shape | devices | Phaseward added ms | walk added ms | SDK added ms | PW marginal ms | PW / walk | PW / SDK | PW / compiler | PW marginal / compiler | µs per device (PW added) | µs per device (elab+rules) | devices/s (elab+rules) | peak managed MB (elaboration) | peak managed MB (PW run) |");
             text.AppendLine("|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|");
             foreach (var b in results)
             {
-                var marginal = b.WalkAndPhasewardWall.Median - b.WalkWall.Median;
+                var marginal = b.PhasewardMarginal.Median;
                 var pw = b.PhasewardWall.Median - b.Compiler.Median;
                 var walk = b.WalkWall.Median - b.Compiler.Median;
                 var sdk = b.SdkWall.Median - b.Compiler.Median;
@@ -280,6 +281,11 @@ namespace Phaseward.Benchmarks
 
             public Samples SdkWall { get; } = new();
 
+            /// <summary>(walk + Phaseward) − walk within each run: a paired difference, steadier than a difference of medians.</summary>
+            public Samples PhasewardMarginal { get; } = new();
+
+            private int runs;
+
             public void Release() => tree = null;
 
             public string Summary()
@@ -289,6 +295,7 @@ namespace Phaseward.Benchmarks
             public void RunOnce(bool record, bool skipReferences = false)
             {
                 // Compiler: declare, bind and diagnose every document of a fresh compilation.
+                Settle();
                 var compilerMs = Samples.Time(() =>
                 {
                     var errors = Fresh(null).GetDiagnostics().Where(d => d.Severity == DiagnosticSeverity.Error).ToList();
@@ -303,6 +310,7 @@ namespace Phaseward.Benchmarks
                 ElaborationResult? result = null;
                 double elaborationMs;
                 long elaborationBytes;
+                Settle();
                 using (var memory = PeakMemory.Start())
                 {
                     elaborationMs = Samples.Time(() => result = DesignElaborator.Elaborate(session, design, ElaborationLimits.Default, CancellationToken.None));
@@ -330,6 +338,7 @@ namespace Phaseward.Benchmarks
                 long phasewardBytes;
                 double phasewardMs;
                 double callbacksMs;
+                Settle();
                 using (var memory = PeakMemory.Start())
                 {
                     var run = Analyze(phaseward, logTime: true);
@@ -346,8 +355,11 @@ namespace Phaseward.Benchmarks
                 double walkMs = double.NaN, sdkMs = double.NaN, bothMs = double.NaN;
                 if (!skipReferences)
                 {
-                    walkMs = Analyze(ImmutableArray.Create<DiagnosticAnalyzer>(new WalkAnalyzer()), logTime: false).Ms;
+                    // Alternating which of the pair goes first cancels a drift of the machine's speed within a run.
+                    var walkFirst = runs++ % 2 == 0;
+                    if (walkFirst) walkMs = Analyze(ImmutableArray.Create<DiagnosticAnalyzer>(new WalkAnalyzer()), logTime: false).Ms;
                     bothMs = Analyze(phaseward.Add(new WalkAnalyzer()), logTime: false).Ms;
+                    if (!walkFirst) walkMs = Analyze(ImmutableArray.Create<DiagnosticAnalyzer>(new WalkAnalyzer()), logTime: false).Ms;
                     if (!sdk.IsEmpty)
                         sdkMs = Analyze(sdk, logTime: false, sdkOptions).Ms;
                 }
@@ -364,12 +376,22 @@ namespace Phaseward.Benchmarks
                 PhasewardMemory.Add(phasewardBytes);
                 if (!double.IsNaN(walkMs)) WalkWall.Add(walkMs);
                 if (!double.IsNaN(bothMs)) WalkAndPhasewardWall.Add(bothMs);
+                if (!double.IsNaN(bothMs) && !double.IsNaN(walkMs)) PhasewardMarginal.Add(bothMs - walkMs);
                 if (!double.IsNaN(sdkMs)) SdkWall.Add(sdkMs);
+            }
+
+            // Collects the garbage of the previous measurement before the next one starts, outside its time.
+            private static void Settle()
+            {
+                GC.Collect();
+                GC.WaitForPendingFinalizers();
+                GC.Collect();
             }
 
             private (double Ms, double CallbacksMs, ImmutableArray<Diagnostic> Diagnostics) Analyze(ImmutableArray<DiagnosticAnalyzer> analyzers, bool logTime,
                 ImmutableDictionary<string, ReportDiagnostic>? specific = null)
             {
+                Settle();
                 var compilation = Fresh(specific);
                 var options = new CompilationWithAnalyzersOptions(new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty),
                     (e, a, _) => throw new InvalidOperationException($"Analyzer {a} threw: {e}"), concurrentAnalysis: false, logAnalyzerExecutionTime: logTime);

@@ -98,8 +98,27 @@ public class CodeFixVerifierTests
 
         var failure = await Assert.ThrowsAnyAsync<Exception>(() => Test<DropsAComment>(brokenOutput).RunAsync());
 
-        Assert.Contains("The fix dropped or altered the comment: // hold the wave-height comparator while sample is high",
+        Assert.Contains("The fix dropped or altered the comment in the test source: // hold the wave-height comparator while sample is high",
             failure.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task ACommentDroppedFromAnotherDocumentOfTheTestFails()
+    {
+        // A multi-file test: the comment check covers every document, not only the one with the diagnostic.
+        const string Library = """
+            // shared by the wave-front stages
+            public static class Shared
+            {
+            }
+            """;
+        var test = Test<SameWindowLatchesCodeFix>(CorrectlyFixed);
+        test.TestState.Sources.Add(("/0/Shared.cs", Library));
+        test.FixedState.Sources.Add(("/0/Shared.cs", Library.Replace("// shared by the wave-front stages\n", string.Empty, StringComparison.Ordinal)));
+
+        var failure = await Assert.ThrowsAnyAsync<Exception>(() => test.RunAsync());
+
+        Assert.Contains("dropped or altered the comment in /0/Shared.cs: // shared by the wave-front stages", failure.Message, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -57,16 +57,24 @@ public sealed class PhasewareCodeFixTest<TAnalyzer, TCodeFix> : CSharpCodeFixTes
 
     public new async Task RunAsync(CancellationToken cancellationToken = default)
     {
-        AssertCommentsKept(source, fixedSource);
+        AssertCommentsKept(source, fixedSource, "the test source");
+        // Further documents of a multi-file test: each original against the fixed document of the same name.
+        foreach (var (name, text) in TestState.Sources.Skip(1))
+        {
+            var fixedDocument = FixedState.Sources.Where(s => s.filename == name).Select(s => s.content.ToString()).FirstOrDefault();
+            Assert.True(fixedDocument is not null, $"The fixed state has no document '{name}': a fix must not delete a designer's file.");
+            AssertCommentsKept(text.ToString(), fixedDocument!, name);
+        }
+
         await base.RunAsync(cancellationToken);
     }
 
-    private static void AssertCommentsKept(string original, string fixedText)
+    private static void AssertCommentsKept(string original, string fixedText, string document)
     {
         var fixedComments = Comments(fixedText).ToList();
         foreach (var comment in Comments(original))
         {
-            Assert.True(fixedComments.Remove(comment), $"The fix dropped or altered the comment: {comment}");
+            Assert.True(fixedComments.Remove(comment), $"The fix dropped or altered the comment in {document}: {comment}");
         }
     }
 

@@ -6,7 +6,8 @@ namespace Phaseward
     /// <summary>
     /// The series runs of pass gates in a netlist: for every pass gate, the longest run of pass gates that ends at it
     /// (and the Elmore delay at its output along that run), and the longest run that continues from it. Two sweeps over
-    /// the <see cref="PassGateNetwork"/>'s acyclic order, so O(devices + nets) in all, however long or wide the chains.
+    /// the <see cref="PassGateNetwork"/>'s acyclic order (the second on first use), so O(devices + nets) in all, however
+    /// long or wide the chains.
     /// </summary>
     /// <remarks>
     /// The Elmore delay along a run is the second pass of the RC-tree algorithm (<see cref="ElmoreDelay"/>): the driver's
@@ -22,11 +23,15 @@ namespace Phaseward
         private readonly double[] elmoreIn;
         private readonly double[] ohmsIn;
         private readonly double[] faradsIn;
-        private readonly int[] depthOut;
-        private readonly int[] next;
-        private readonly double[] elmoreAfter;
-        private readonly double[] ohmsAfter;
-        private readonly double[] faradsAfter;
+        private readonly CancellationToken cancellationToken;
+
+        // The runs continuing from each gate: the second sweep, made on first use. A rule that only needs the runs ending
+        // at each gate (a design with no over-long chain) never pays for it.
+        private int[]? depthOut;
+        private int[]? next;
+        private double[]? elmoreAfter;
+        private double[]? ohmsAfter;
+        private double[]? faradsAfter;
 
         public SeriesChains(PassGateNetwork network, CancellationToken cancellationToken = default)
         {
@@ -40,11 +45,7 @@ namespace Phaseward
             elmoreIn = new double[n];
             ohmsIn = new double[n];
             faradsIn = new double[n];
-            depthOut = new int[n];
-            next = new int[n];
-            elmoreAfter = new double[n];
-            ohmsAfter = new double[n];
-            faradsAfter = new double[n];
+            this.cancellationToken = cancellationToken;
 
             var netBestDriver = new int[netlist.Nets.Count];
             var order = network.Postorder;
@@ -94,8 +95,23 @@ namespace Phaseward
                     faradsIn[gate.Id] = faradsIn[before] + farads;
                 }
             }
+        }
 
-            // Backward in postorder: the longest run continuing from each gate.
+        // Backward in postorder: the longest run continuing from each gate.
+        private void EnsureContinuations()
+        {
+            if (this.depthOut is not null)
+                return;
+            var network = Network;
+            var netlist = network.Netlist;
+            var devices = netlist.Devices;
+            var order = network.Postorder;
+            var n = devices.Count;
+            var depthOut = new int[n];
+            var next = new int[n];
+            var elmoreAfter = new double[n];
+            var ohmsAfter = new double[n];
+            var faradsAfter = new double[n];
             var netBestLoad = new int[netlist.Nets.Count];
             for (var i = 0; i < order.Count; i++)
             {
@@ -137,6 +153,12 @@ namespace Phaseward
                 ohmsAfter[gate.Id] = netlist.ResistanceOf(afterGate).Ohms + ohmsAfter[after];
                 faradsAfter[gate.Id] = netlist.CapacitanceOf(afterGate.Output).Farads + faradsAfter[after];
             }
+
+            this.next = next;
+            this.elmoreAfter = elmoreAfter;
+            this.ohmsAfter = ohmsAfter;
+            this.faradsAfter = faradsAfter;
+            this.depthOut = depthOut;
         }
 
         public PassGateNetwork Network { get; }
@@ -148,7 +170,11 @@ namespace Phaseward
         public Device? Previous(Device gate) => previous[gate.Id] is var id and >= 0 && gate.IsPassDevice ? Network.Netlist.Devices[id] : null;
 
         /// <summary>The next gate on the longest run continuing from this gate (null at its end).</summary>
-        public Device? Next(Device gate) => next[gate.Id] is var id and >= 0 && gate.IsPassDevice ? Network.Netlist.Devices[id] : null;
+        public Device? Next(Device gate)
+        {
+            EnsureContinuations();
+            return next![gate.Id] is var id and >= 0 && gate.IsPassDevice ? Network.Netlist.Devices[id] : null;
+        }
 
         /// <summary>The first gate of the longest run that ends at this gate.</summary>
         public Device StartOf(Device gate) => Network.Netlist.Devices[start[gate.Id]];
@@ -158,13 +184,14 @@ namespace Phaseward
         {
             if (gate is null) throw new ArgumentNullException(nameof(gate));
             if (!gate.IsPassDevice) throw new ArgumentException($"'{nameof(gate)}' must be a pass device (was {gate}).", nameof(gate));
+            EnsureContinuations();
             var id = gate.Id;
             return new Chain(
                 StartOf(gate),
-                depthIn[id] + depthOut[id] - 1,
-                new Time(elmoreIn[id] + elmoreAfter[id]),
-                new Resistance(ohmsIn[id] + ohmsAfter[id]),
-                new Capacitance(faradsIn[id] + faradsAfter[id]));
+                depthIn[id] + depthOut![id] - 1,
+                new Time(elmoreIn[id] + elmoreAfter![id]),
+                new Resistance(ohmsIn[id] + ohmsAfter![id]),
+                new Capacitance(faradsIn[id] + faradsAfter![id]));
         }
 
         /// <summary>A run of pass gates in series: its first gate, length, Elmore delay at its far end and its totals.</summary>
