@@ -20,7 +20,7 @@ namespace Phaseward
         private readonly List<MacroInstance> macros = new();
         private readonly List<Port> inputs = new();
         private readonly List<Port> outputs = new();
-        private readonly Dictionary<string, Net> netsByName = new(StringComparer.Ordinal);
+        private readonly HashSet<string> netNames = new(StringComparer.Ordinal);
         private readonly HashSet<string> clockNames = new(StringComparer.Ordinal);
         private readonly HashSet<string> outputNames = new(StringComparer.Ordinal);
         private readonly List<NetDrive> netDrives = new();
@@ -105,7 +105,7 @@ namespace Phaseward
         {
             if (name is null) return;
             Guard.Name(name, parameter);
-            if (netsByName.ContainsKey(name))
+            if (netNames.Contains(name))
                 throw new ArgumentException($"'{parameter}': a net named \"{name}\" already exists in design '{DesignName}'.", parameter);
         }
 
@@ -127,7 +127,7 @@ namespace Phaseward
                 count++;
                 candidate = prefix + count.ToString(System.Globalization.CultureInfo.InvariantCulture);
             }
-            while (netsByName.ContainsKey(candidate) || clockNames.Contains(candidate) || AnyTaken(candidate, internalSuffixes));
+            while (netNames.Contains(candidate) || clockNames.Contains(candidate) || AnyTaken(candidate, internalSuffixes));
 
             autoNameCounters[prefix] = count;
             return candidate;
@@ -136,7 +136,7 @@ namespace Phaseward
         private bool AnyTaken(string cellName, string[] suffixes)
         {
             foreach (var suffix in suffixes)
-                if (netsByName.ContainsKey(cellName + suffix))
+                if (netNames.Contains(cellName + suffix))
                     return true;
             return false;
         }
@@ -146,7 +146,7 @@ namespace Phaseward
             var net = new Net(this, nets.Count, name);
             nets.Add(net);
             netDrives.Add(NetDrive.None);
-            netsByName.Add(name, net);
+            netNames.Add(name);
             return net;
         }
 
