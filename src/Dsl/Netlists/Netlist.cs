@@ -10,13 +10,9 @@ namespace Phaseward
     /// </summary>
     public sealed class Netlist
     {
-        private static readonly Device[] NoDevices = Array.Empty<Device>();
-
-        // Per net, exactly sized (null: none). Arrays rather than lists: a million-net design then holds one object per
-        // non-empty index entry instead of two, and the rules iterate them without enumerator objects.
-        private readonly Device[]?[] drivers;
-        private readonly Device[]?[] dataLoads;
-        private readonly Device[]?[] controlLoads;
+        private readonly NetDeviceIndex drivers;
+        private readonly NetDeviceIndex dataLoads;
+        private readonly NetDeviceIndex controlLoads;
         private readonly Net[] netArray;
         private readonly Capacitance[] capacitances;
         private readonly IReadOnlyDictionary<int, Current> leakageOverrides;
@@ -37,38 +33,9 @@ namespace Phaseward
             netArray = nets as Net[] ?? new List<Net>(nets).ToArray();
             leakageOverrides = leakage;
 
-            // Each index in two passes: count per net, then fill arrays of exactly that size.
-            var counts = new int[nets.Count];
-            for (var d = 0; d < devices.Count; d++)
-                counts[devices[d].Output.Id]++;
-            drivers = Allocate(counts);
-            for (var d = 0; d < devices.Count; d++)
-                Fill(drivers, counts, devices[d].Output, devices[d]);
-
-            Array.Clear(counts, 0, counts.Length);
-            for (var d = 0; d < devices.Count; d++)
-            {
-                var deviceInputs = devices[d].Inputs;
-                for (var i = 0; i < deviceInputs.Count; i++)
-                    counts[deviceInputs[i].Id]++;
-            }
-
-            dataLoads = Allocate(counts);
-            for (var d = 0; d < devices.Count; d++)
-            {
-                var deviceInputs = devices[d].Inputs;
-                for (var i = 0; i < deviceInputs.Count; i++)
-                    Fill(dataLoads, counts, deviceInputs[i], devices[d]);
-            }
-
-            Array.Clear(counts, 0, counts.Length);
-            for (var d = 0; d < devices.Count; d++)
-                if (devices[d].DataControl is { } control)
-                    counts[control.Id]++;
-            controlLoads = Allocate(counts);
-            for (var d = 0; d < devices.Count; d++)
-                if (devices[d].DataControl is { } control)
-                    Fill(controlLoads, counts, control, devices[d]);
+            drivers = NetDeviceIndex.Build(devices, nets.Count, NetConnection.Output);
+            dataLoads = NetDeviceIndex.Build(devices, nets.Count, NetConnection.DataInput);
+            controlLoads = NetDeviceIndex.Build(devices, nets.Count, NetConnection.Control);
 
             isInput = new bool[nets.Count];
             foreach (var port in inputs)
@@ -104,20 +71,20 @@ namespace Phaseward
         public IReadOnlyList<Port> Outputs { get; }
 
         /// <summary>Devices whose output is this net (restoring stages and pass gates).</summary>
-        public IReadOnlyList<Device> DriversOf(Net net) => drivers[Index(net)] ?? NoDevices;
+        public IReadOnlyList<Device> DriversOf(Net net) => drivers.Of(Index(net)).AsReadOnlyList();
 
         /// <summary>Devices that take this net as a data input.</summary>
-        public IReadOnlyList<Device> DataLoadsOf(Net net) => dataLoads[Index(net)] ?? NoDevices;
+        public IReadOnlyList<Device> DataLoadsOf(Net net) => dataLoads.Of(Index(net)).AsReadOnlyList();
 
         /// <summary>Pass gates controlled by this net.</summary>
-        public IReadOnlyList<Device> ControlLoadsOf(Net net) => controlLoads[Index(net)] ?? NoDevices;
+        public IReadOnlyList<Device> ControlLoadsOf(Net net) => controlLoads.Of(Index(net)).AsReadOnlyList();
 
-        // The same indexes as arrays, for the rules' hot loops: enumerating an IReadOnlyList boxes its enumerator.
-        internal Device[] DriverList(Net net) => drivers[Index(net)] ?? NoDevices;
+        // The same indexes as ranges, for the rules' hot loops: no list object, no boxed enumerator.
+        internal DeviceRange DriverList(Net net) => drivers.Of(Index(net));
 
-        internal Device[] DataLoadList(Net net) => dataLoads[Index(net)] ?? NoDevices;
+        internal DeviceRange DataLoadList(Net net) => dataLoads.Of(Index(net));
 
-        internal Device[] ControlLoadList(Net net) => controlLoads[Index(net)] ?? NoDevices;
+        internal DeviceRange ControlLoadList(Net net) => controlLoads.Of(Index(net));
 
         /// <summary>True for a primary input (driven from outside through the process's driver resistance).</summary>
         public bool IsInput(Net net) => isInput[Index(net)];
@@ -174,21 +141,5 @@ namespace Phaseward
                 throw new ArgumentException($"Net '{net.Name}' does not belong to the netlist of design '{DesignName}'.", nameof(net));
             return net.Id;
         }
-
-        // Arrays of the counted sizes; the counts are reset to 0 to serve as fill positions (and end as the counts again).
-        private static Device[]?[] Allocate(int[] counts)
-        {
-            var index = new Device[]?[counts.Length];
-            for (var i = 0; i < counts.Length; i++)
-            {
-                if (counts[i] > 0)
-                    index[i] = new Device[counts[i]];
-                counts[i] = 0;
-            }
-
-            return index;
-        }
-
-        private static void Fill(Device[]?[] index, int[] positions, Net net, Device device) => index[net.Id]![positions[net.Id]++] = device;
     }
 }

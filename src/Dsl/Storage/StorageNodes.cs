@@ -66,7 +66,7 @@ namespace Phaseward
                     if (feedbackSearch.IsRestoredCopy(driver.Inputs[0], net))
                         (feedback ??= new List<Device>(1)).Add(driver);
 
-                var node = new StorageNode(net, feedback is null ? StorageKind.Dynamic : StorageKind.ClockedFeedback, drivers,
+                var node = new StorageNode(net, feedback is null ? StorageKind.Dynamic : StorageKind.ClockedFeedback, drivers.AsReadOnlyList(),
                     (IReadOnlyList<Device>?)feedback ?? Array.Empty<Device>(), Retention.Of(netlist, net));
                 byNet[net.Id] = node;
                 nodes.Add(node);
@@ -78,7 +78,7 @@ namespace Phaseward
         // A pass-gate mux whose arms are controlled by a net and its inverse: one arm conducts at every instant, so the
         // node is driven from the selected input, not stored. (Arms on decoded one-hot selects cannot be proven so and
         // stay storage nodes.) 'controls' is scratch space, reused from node to node.
-        private static bool IsComplementaryMux(Netlist netlist, Device[] drivers, HashSet<int> controls)
+        private static bool IsComplementaryMux(Netlist netlist, DeviceRange drivers, HashSet<int> controls)
         {
             controls.Clear();
             foreach (var driver in drivers)
