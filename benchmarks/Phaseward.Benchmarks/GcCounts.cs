@@ -24,6 +24,17 @@ namespace Phaseward.Benchmarks
 
         public TimeSpan Paused { get; }
 
+        /// <summary>
+        /// Collects everything collectable, outside any measured time: a measurement that starts after this pays for
+        /// its own garbage, not for the previous measurement's.
+        /// </summary>
+        public static void Settle()
+        {
+            GC.Collect(2, GCCollectionMode.Forced, blocking: true, compacting: true);
+            GC.WaitForPendingFinalizers();
+            GC.Collect(2, GCCollectionMode.Forced, blocking: true, compacting: true);
+        }
+
         public static GcCounts Now()
             => new(GC.CollectionCount(0), GC.CollectionCount(1), GC.CollectionCount(2), GC.GetTotalPauseDuration());
 

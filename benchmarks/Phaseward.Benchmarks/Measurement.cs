@@ -16,8 +16,7 @@ namespace Phaseward.Benchmarks
 
         private PeakMemory()
         {
-            GC.Collect(2, GCCollectionMode.Forced, blocking: true, compacting: true);
-            GC.WaitForPendingFinalizers();
+            GcCounts.Settle();
             baseline = GC.GetTotalMemory(forceFullCollection: true);
             peak = baseline;
             sampler = new Thread(Sample) { IsBackground = true, Name = "peak-memory", Priority = ThreadPriority.AboveNormal };

@@ -104,9 +104,7 @@ namespace Phaseward.Benchmarks
             for (var run = 0; run < runs; run++)
             {
                 // Each run starts from a collected heap, so one run's garbage is not collected in the next one's time.
-                GC.Collect();
-                GC.WaitForPendingFinalizers();
-                GC.Collect();
+                GcCounts.Settle();
                 var tree = CSharpSyntaxTree.ParseText(source, new CSharpParseOptions(LanguageVersion.Latest), DesignPath, Encoding.UTF8);
                 var compilation = CSharpCompilation.Create("Profile", new[] { tree }, references,
                     new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, nullableContextOptions: NullableContextOptions.Enable));
@@ -295,7 +293,7 @@ namespace Phaseward.Benchmarks
             public void RunOnce(bool record, bool skipReferences = false)
             {
                 // Compiler: declare, bind and diagnose every document of a fresh compilation.
-                Settle();
+                GcCounts.Settle();
                 var compilerMs = Samples.Time(() =>
                 {
                     var errors = Fresh(null).GetDiagnostics().Where(d => d.Severity == DiagnosticSeverity.Error).ToList();
@@ -310,7 +308,6 @@ namespace Phaseward.Benchmarks
                 ElaborationResult? result = null;
                 double elaborationMs;
                 long elaborationBytes;
-                Settle();
                 using (var memory = PeakMemory.Start())
                 {
                     elaborationMs = Samples.Time(() => result = DesignElaborator.Elaborate(session, design, ElaborationLimits.Default, CancellationToken.None));
@@ -338,7 +335,6 @@ namespace Phaseward.Benchmarks
                 long phasewardBytes;
                 double phasewardMs;
                 double callbacksMs;
-                Settle();
                 using (var memory = PeakMemory.Start())
                 {
                     var run = Analyze(phaseward, logTime: true);
@@ -380,18 +376,10 @@ namespace Phaseward.Benchmarks
                 if (!double.IsNaN(sdkMs)) SdkWall.Add(sdkMs);
             }
 
-            // Collects the garbage of the previous measurement before the next one starts, outside its time.
-            private static void Settle()
-            {
-                GC.Collect();
-                GC.WaitForPendingFinalizers();
-                GC.Collect();
-            }
-
             private (double Ms, double CallbacksMs, ImmutableArray<Diagnostic> Diagnostics) Analyze(ImmutableArray<DiagnosticAnalyzer> analyzers, bool logTime,
                 ImmutableDictionary<string, ReportDiagnostic>? specific = null)
             {
-                Settle();
+                GcCounts.Settle();
                 var compilation = Fresh(specific);
                 var options = new CompilationWithAnalyzersOptions(new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty),
                     (e, a, _) => throw new InvalidOperationException($"Analyzer {a} threw: {e}"), concurrentAnalysis: false, logAnalyzerExecutionTime: logTime);
