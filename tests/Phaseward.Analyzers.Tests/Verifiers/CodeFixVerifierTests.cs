@@ -9,6 +9,7 @@ using System.Threading.Tasks;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CodeActions;
 using Microsoft.CodeAnalysis.CodeFixes;
+using Microsoft.CodeAnalysis.CSharp.Testing;
 using Microsoft.CodeAnalysis.Testing;
 using Microsoft.CodeAnalysis.Text;
 using Phaseward.Analyzers.Tests.Elaboration;
@@ -100,6 +101,19 @@ public class CodeFixVerifierTests
 
         Assert.Contains("The fix dropped or altered the comment in the test source: // hold the wave-height comparator while sample is high",
             failure.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task TheCommentCheckHoldsWhenTheTestIsRunThroughTheFrameworkType()
+    {
+        // RunAsync is not virtual: the check lives in the run itself, so a test started through the framework's own type
+        // is checked as well.
+        var brokenOutput = new DropsAComment().Spoil(CorrectlyFixed);
+        CSharpCodeFixTest<ClockPhaseAnalyzer, DropsAComment, DefaultVerifier> asFrameworkType = Test<DropsAComment>(brokenOutput);
+
+        var failure = await Assert.ThrowsAnyAsync<Exception>(() => asFrameworkType.RunAsync());
+
+        Assert.Contains("dropped or altered the comment in the test source", failure.Message, StringComparison.Ordinal);
     }
 
     [Fact]

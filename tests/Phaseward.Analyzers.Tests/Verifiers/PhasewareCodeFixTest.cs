@@ -55,7 +55,9 @@ public sealed class PhasewareCodeFixTest<TAnalyzer, TCodeFix> : CSharpCodeFixTes
         return this;
     }
 
-    public new async Task RunAsync(CancellationToken cancellationToken = default)
+    // The framework's run calls this however the test is started (RunAsync is not virtual), so the check cannot be
+    // bypassed by calling RunAsync through a base type.
+    protected override async Task RunImplAsync(CancellationToken cancellationToken)
     {
         AssertCommentsKept(source, fixedSource, "the test source");
         // Further documents of a multi-file test: each original against the fixed document of the same name.
@@ -66,7 +68,7 @@ public sealed class PhasewareCodeFixTest<TAnalyzer, TCodeFix> : CSharpCodeFixTes
             AssertCommentsKept(text.ToString(), fixedDocument!, name);
         }
 
-        await base.RunAsync(cancellationToken);
+        await base.RunImplAsync(cancellationToken);
     }
 
     private static void AssertCommentsKept(string original, string fixedText, string document)
