@@ -70,23 +70,9 @@ namespace Phaseward
                 throw new ArgumentException($"'{parameter}': a clock named \"{name}\" already exists in design '{DesignName}'.", parameter);
         }
 
-        // The lowest free number after the last one given for this prefix: clocks are never removed, so every lower
-        // number is still taken and this is the lowest free one, found without rescanning from 1 (which made a design
-        // with k gated clocks cost O(k²)).
+        // A clock name no other clock has.
         private string AutoClockName(string prefix)
-        {
-            autoClockCounters.TryGetValue(prefix, out var count);
-            string candidate;
-            do
-            {
-                count++;
-                candidate = prefix + count.ToString(System.Globalization.CultureInfo.InvariantCulture);
-            }
-            while (clockNames.Contains(candidate));
-
-            autoClockCounters[prefix] = count;
-            return candidate;
-        }
+            => NextFreeName(autoClockCounters, prefix, Array.Empty<string>(), static (circuit, _, candidate) => circuit.clockNames.Contains(candidate));
 
         private Clock AddClock(string name, ClockKind kind, Clock? source, Time period, double duty, Time? skew, Time? delay, Net? enable,
             ClockStopLevel stopLevel, Time? maxIdle, SourceSpan span)

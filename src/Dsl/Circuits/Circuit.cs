@@ -118,18 +118,26 @@ namespace Phaseward
                 throw new ArgumentException($"'{parameter}': net '{output.Name}' is already driven by a restoring stage; a second one would fight it.", parameter);
         }
 
+        // A net name (or a cell's name, free together with its internal nets) that no net or clock has.
         private string AutoName(string prefix, params string[] internalSuffixes)
+            => NextFreeName(autoNameCounters, prefix, internalSuffixes,
+                static (circuit, suffixes, candidate) => circuit.netNames.Contains(candidate) || circuit.clockNames.Contains(candidate) || circuit.AnyTaken(candidate, suffixes));
+
+        // prefix + the lowest free number after the last one given for this prefix: names are never removed, so every
+        // lower number is still taken and this is the lowest free one, found without rescanning from 1 (which made k
+        // auto names with one prefix cost O(k²)). The test is static and gets its state passed in: nothing is allocated.
+        private string NextFreeName(Dictionary<string, int> counters, string prefix, string[] state, Func<Circuit, string[], string, bool> isTaken)
         {
-            autoNameCounters.TryGetValue(prefix, out var count);
+            counters.TryGetValue(prefix, out var count);
             string candidate;
             do
             {
                 count++;
                 candidate = prefix + count.ToString(System.Globalization.CultureInfo.InvariantCulture);
             }
-            while (netNames.Contains(candidate) || clockNames.Contains(candidate) || AnyTaken(candidate, internalSuffixes));
+            while (isTaken(this, state, candidate));
 
-            autoNameCounters[prefix] = count;
+            counters[prefix] = count;
             return candidate;
         }
 
