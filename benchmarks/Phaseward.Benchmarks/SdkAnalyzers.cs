@@ -8,65 +8,64 @@ using System.Runtime.InteropServices;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 
-namespace Phaseward.Benchmarks
+namespace Phaseward.Benchmarks;
+
+/// <summary>
+/// Reference (b): the .NET SDK's built-in code analyzers (Microsoft.CodeAnalysis.NetAnalyzers and its C# part), loaded
+/// from the installed SDK, with every rule they support switched on as a warning (the widest setting, like
+/// AnalysisMode=All with every rule raised to warning).
+/// </summary>
+internal static class SdkAnalyzers
 {
-    /// <summary>
-    /// Reference (b): the .NET SDK's built-in code analyzers (Microsoft.CodeAnalysis.NetAnalyzers and its C# part), loaded
-    /// from the installed SDK, with every rule they support switched on as a warning (the widest setting, like
-    /// AnalysisMode=All with every rule raised to warning).
-    /// </summary>
-    internal static class SdkAnalyzers
+    public static string DefaultDirectory()
     {
-        public static string DefaultDirectory()
+        // .../dotnet/shared/Microsoft.NETCore.App/<version>/ -> .../dotnet
+        var root = Path.GetFullPath(Path.Combine(RuntimeEnvironment.GetRuntimeDirectory(), "..", "..", ".."));
+        var sdks = Directory.Exists(Path.Combine(root, "sdk"))
+            ? Directory.GetDirectories(Path.Combine(root, "sdk")).Where(d => Version.TryParse(Path.GetFileName(d).Split('-')[0], out _))
+                .OrderBy(d => Version.Parse(Path.GetFileName(d).Split('-')[0])).ToList()
+            : new List<string>();
+        if (sdks.Count == 0)
+            throw new InvalidOperationException($"No .NET SDK found under '{root}'; pass --sdk-analyzers <directory>.");
+        return Path.Combine(sdks[^1], "Sdks", "Microsoft.NET.Sdk", "analyzers");
+    }
+
+    public static ImmutableArray<DiagnosticAnalyzer> Load(string directory)
+    {
+        var files = new[] { "Microsoft.CodeAnalysis.NetAnalyzers.dll", "Microsoft.CodeAnalysis.CSharp.NetAnalyzers.dll" }
+            .Select(f => Path.Combine(directory, f)).ToList();
+        foreach (var file in files)
+            if (!File.Exists(file))
+                throw new FileNotFoundException($"SDK analyzer assembly '{file}' not found; pass --sdk-analyzers <directory>.", file);
+        var loader = new Loader();
+        foreach (var file in files)
+            loader.AddDependencyLocation(file);
+        var analyzers = files.SelectMany(f => new AnalyzerFileReference(f, loader).GetAnalyzers(LanguageNames.CSharp)).ToImmutableArray();
+        if (analyzers.IsEmpty)
+            throw new InvalidOperationException($"No C# analyzers found in '{directory}'.");
+        return analyzers;
+    }
+
+    /// <summary>Every diagnostic the analyzers support, raised to warning.</summary>
+    public static ImmutableDictionary<string, ReportDiagnostic> AllAsWarnings(IEnumerable<DiagnosticAnalyzer> analyzers)
+        => analyzers.SelectMany(a => a.SupportedDiagnostics).Select(d => d.Id).Distinct()
+            .ToImmutableDictionary(id => id, _ => ReportDiagnostic.Warn);
+
+    private sealed class Loader : IAnalyzerAssemblyLoader
+    {
+        private readonly Dictionary<string, Assembly> loaded = new(StringComparer.OrdinalIgnoreCase);
+
+        public void AddDependencyLocation(string fullPath)
         {
-            // .../dotnet/shared/Microsoft.NETCore.App/<version>/ -> .../dotnet
-            var root = Path.GetFullPath(Path.Combine(RuntimeEnvironment.GetRuntimeDirectory(), "..", "..", ".."));
-            var sdks = Directory.Exists(Path.Combine(root, "sdk"))
-                ? Directory.GetDirectories(Path.Combine(root, "sdk")).Where(d => Version.TryParse(Path.GetFileName(d).Split('-')[0], out _))
-                    .OrderBy(d => Version.Parse(Path.GetFileName(d).Split('-')[0])).ToList()
-                : new List<string>();
-            if (sdks.Count == 0)
-                throw new InvalidOperationException($"No .NET SDK found under '{root}'; pass --sdk-analyzers <directory>.");
-            return Path.Combine(sdks[^1], "Sdks", "Microsoft.NET.Sdk", "analyzers");
         }
 
-        public static ImmutableArray<DiagnosticAnalyzer> Load(string directory)
+        public Assembly LoadFromPath(string fullPath)
         {
-            var files = new[] { "Microsoft.CodeAnalysis.NetAnalyzers.dll", "Microsoft.CodeAnalysis.CSharp.NetAnalyzers.dll" }
-                .Select(f => Path.Combine(directory, f)).ToList();
-            foreach (var file in files)
-                if (!File.Exists(file))
-                    throw new FileNotFoundException($"SDK analyzer assembly '{file}' not found; pass --sdk-analyzers <directory>.", file);
-            var loader = new Loader();
-            foreach (var file in files)
-                loader.AddDependencyLocation(file);
-            var analyzers = files.SelectMany(f => new AnalyzerFileReference(f, loader).GetAnalyzers(LanguageNames.CSharp)).ToImmutableArray();
-            if (analyzers.IsEmpty)
-                throw new InvalidOperationException($"No C# analyzers found in '{directory}'.");
-            return analyzers;
-        }
-
-        /// <summary>Every diagnostic the analyzers support, raised to warning.</summary>
-        public static ImmutableDictionary<string, ReportDiagnostic> AllAsWarnings(IEnumerable<DiagnosticAnalyzer> analyzers)
-            => analyzers.SelectMany(a => a.SupportedDiagnostics).Select(d => d.Id).Distinct()
-                .ToImmutableDictionary(id => id, _ => ReportDiagnostic.Warn);
-
-        private sealed class Loader : IAnalyzerAssemblyLoader
-        {
-            private readonly Dictionary<string, Assembly> loaded = new(StringComparer.OrdinalIgnoreCase);
-
-            public void AddDependencyLocation(string fullPath)
+            lock (loaded)
             {
-            }
-
-            public Assembly LoadFromPath(string fullPath)
-            {
-                lock (loaded)
-                {
-                    if (!loaded.TryGetValue(fullPath, out var assembly))
-                        loaded[fullPath] = assembly = Assembly.LoadFrom(fullPath);
-                    return assembly;
-                }
+                if (!loaded.TryGetValue(fullPath, out var assembly))
+                    loaded[fullPath] = assembly = Assembly.LoadFrom(fullPath);
+                return assembly;
             }
         }
     }

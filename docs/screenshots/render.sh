@@ -1,11 +1,11 @@
 #!/usr/bin/env bash
-# Renders the design report of a Tidewater sample design in headless Chromium (Debian's package) and writes the
+# Renders the design report of a Quorvane sample design in headless Chromium (Debian's package) and writes the
 # screenshot the README shows. Fails when the report cannot be made or the page logs a console error.
-# Usage: docs/screenshots/render.sh [output.png] [design]     (defaults: docs/images/report-tidewater.png, BurstCapture)
+# Usage: docs/screenshots/render.sh [output.png] [design]     (defaults: docs/images/report-quorvane.png, BurstCapture)
 set -euo pipefail
 cd "$(dirname "$0")/../.."
 root=$(pwd)
-png=$(realpath -m "${1:-docs/images/report-tidewater.png}")
+png=$(realpath -m "${1:-docs/images/report-quorvane.png}")
 design=${2:-BurstCapture}
 browser=$(command -v chromium || command -v chromium-browser || true)
 if [ -z "$browser" ]; then
@@ -19,7 +19,7 @@ page="$work/report.html"
 
 # The page has no script, so any console message at all (Chromium logs them as ":CONSOLE:<line>]") fails the run.
 # The report's own exit code is 1 when a finding is at error severity; the sample's are warnings, so anything but 0 is a failure.
-dotnet run --project src/Cli -- samples/Tidewater/Tidewater.csproj --design "$design" \
+dotnet run --project src/Cli -- samples/Quorvane/Quorvane.csproj --design "$design" \
   --artifacts "$work/artifacts" --html "$page" >"$work/report.txt"
 
 run_chromium() {

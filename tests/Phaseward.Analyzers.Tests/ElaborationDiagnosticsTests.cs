@@ -44,7 +44,7 @@ public class NotElaboratedTests
 
     [Fact]
     public Task EachConstructOutsideTheSubsetIsReportedOnce()
-        => new PhasewareAnalyzerTest<ElaborationAnalyzer>(Source,
+        => new PhasewardAnalyzerTest<ElaborationAnalyzer>(Source,
                 Enumerable.Range(0, 5).Select(i => new DiagnosticResult(RuleIds.NotElaborated, DiagnosticSeverity.Info).WithLocation(i)).ToArray())
             .RunAsync();
 
@@ -65,7 +65,7 @@ public class NotElaboratedTests
 
     [Fact]
     public Task ReportedOnceEvenInsideALoop()
-        => new PhasewareAnalyzerTest<ElaborationAnalyzer>("""
+        => new PhasewardAnalyzerTest<ElaborationAnalyzer>("""
             using System;
             using Phaseward;
 
@@ -83,7 +83,7 @@ public class NotElaboratedTests
     [Fact]
     public Task SilentWithoutTheDsl()
     {
-        var test = new PhasewareAnalyzerTest<ElaborationAnalyzer>("""
+        var test = new PhasewardAnalyzerTest<ElaborationAnalyzer>("""
             public abstract class Design { protected abstract void Describe(object c); }
             public sealed class Sampler : Design { protected override void Describe(object c) { System.Console.WriteLine(); } }
             """);
@@ -114,7 +114,7 @@ public class ElaborationBudgetTests
 
     [Fact]
     public Task EndlessLoopStopsAtAConfiguredBudget()
-        => new PhasewareAnalyzerTest<ElaborationAnalyzer>(EndlessLoop,
+        => new PhasewardAnalyzerTest<ElaborationAnalyzer>(EndlessLoop,
                 new DiagnosticResult(RuleIds.ElaborationBudgetExceeded, DiagnosticSeverity.Warning).WithLocation(0)
                     .WithArguments("Endless", "the step budget of 1000 steps (loop iterations and calls; phaseward.elaboration_step_budget) is used up"))
             .WithEditorConfig("phaseward.elaboration_step_budget = 1000")
@@ -122,7 +122,7 @@ public class ElaborationBudgetTests
 
     [Fact]
     public Task EndlessLoopMakingDevicesStopsAtAConfiguredDeviceBudget()
-        => new PhasewareAnalyzerTest<ElaborationAnalyzer>("""
+        => new PhasewardAnalyzerTest<ElaborationAnalyzer>("""
                 using Phaseward;
 
                 public sealed class Runaway : Design
@@ -152,7 +152,7 @@ public class ElaborationBudgetTests
 
     [Fact]
     public Task UnboundedRecursionStopsAtTheDepthLimit()
-        => new PhasewareAnalyzerTest<ElaborationAnalyzer>("""
+        => new PhasewardAnalyzerTest<ElaborationAnalyzer>("""
             using Phaseward;
 
             public sealed class Deep : Design
@@ -200,7 +200,7 @@ public class DesignThrowsTests
 {
     [Fact]
     public Task NegativeCapacitanceIsAnErrorAtTheCall()
-        => new PhasewareAnalyzerTest<ElaborationAnalyzer>("""
+        => new PhasewardAnalyzerTest<ElaborationAnalyzer>("""
             using Phaseward;
 
             public sealed class Leaky : Design
@@ -220,7 +220,7 @@ public class DesignThrowsTests
     [Fact]
     public Task ACallInAHelperInAnotherFileIsReportedAtTheCallInDescribe()
     {
-        var test = new PhasewareAnalyzerTest<ElaborationAnalyzer>("""
+        var test = new PhasewardAnalyzerTest<ElaborationAnalyzer>("""
             using Phaseward;
 
             public sealed class Split : Design
@@ -302,7 +302,7 @@ public class InvalidOptionTests
     [InlineData("phaseward.elaboration_step_budget", "0", "a whole number from 1 to 4611686018427387903 (for example 10000000)", "10000000")]
     [InlineData("phaseward.elaboration_recursion_limit", "100000", "a whole number from 1 to 512 (for example 64)", "64")]
     public Task InvalidValueIsReportedAtDescribe(string key, string value, string expected, string fallback)
-        => new PhasewareAnalyzerTest<ElaborationAnalyzer>("""
+        => new PhasewardAnalyzerTest<ElaborationAnalyzer>("""
             using Phaseward;
 
             public sealed class Plain : Design
@@ -316,7 +316,7 @@ public class InvalidOptionTests
 
     [Fact]
     public Task ValidValuesWithDigitSeparatorsAreAccepted()
-        => new PhasewareAnalyzerTest<ElaborationAnalyzer>("""
+        => new PhasewardAnalyzerTest<ElaborationAnalyzer>("""
             using Phaseward;
 
             public sealed class Plain : Design

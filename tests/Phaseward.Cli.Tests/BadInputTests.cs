@@ -149,8 +149,8 @@ public sealed class BadInputTests : IClassFixture<DesignProjectFixture>, IDispos
     public void UsageErrors()
     {
         Assert.Equal(ReportCommand.BadInput, Of().ExitCode);
-        Assert.Contains("unknown option '--colour'", Of(TidewaterDll, "--colour").Err);
-        Assert.Contains("option '--html' needs a value", Of(TidewaterDll, "--html").Err);
+        Assert.Contains("unknown option '--colour'", Of(QuorvaneDll, "--colour").Err);
+        Assert.Contains("option '--html' needs a value", Of(QuorvaneDll, "--html").Err);
         var help = Of("--help");
         Assert.Equal(ReportCommand.Clean, help.ExitCode);
         Assert.Contains("Usage: phaseward-report", help.Out);

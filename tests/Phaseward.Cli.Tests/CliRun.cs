@@ -16,8 +16,8 @@ internal sealed record CliRun(int ExitCode, string Out, string Err)
         return new CliRun(code, stdout.ToString(), stderr.ToString());
     }
 
-    /// <summary>The Tidewater sample assembly built beside the tests.</summary>
-    public static string TidewaterDll { get; } = Path.Combine(AppContext.BaseDirectory, "Tidewater.dll");
+    /// <summary>The Quorvane sample assembly built beside the tests.</summary>
+    public static string QuorvaneDll { get; } = Path.Combine(AppContext.BaseDirectory, "Quorvane.dll");
 
     public static string NewTempDirectory()
     {

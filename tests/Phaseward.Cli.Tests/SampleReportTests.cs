@@ -3,13 +3,13 @@ using System.Globalization;
 using System.IO;
 using System.Linq;
 using System.Xml.Linq;
-using Tidewater;
+using Quorvane;
 using static Phaseward.Cli.Tests.CliRun;
 
 namespace Phaseward.Cli.Tests;
 
 /// <summary>
-/// The report of the Tidewater samples: its text tables and its HTML page (read as XML), checked against the figures
+/// The report of the Quorvane samples: its text tables and its HTML page (read as XML), checked against the figures
 /// Phaseward computes for the same designs (Design.Check, TimingFigures, StorageNodes), not against a stored snapshot.
 /// </summary>
 public sealed class SampleReportTests : IDisposable
@@ -21,7 +21,7 @@ public sealed class SampleReportTests : IDisposable
     [Fact]
     public void TextReportListsEveryFindingWithItsIdMessageAndLine()
     {
-        var run = Of(TidewaterDll);
+        var run = Of(QuorvaneDll);
 
         Assert.Equal(ReportCommand.Clean, run.ExitCode); // the samples' findings are warnings by default
         foreach (var design in SampleDesigns())
@@ -38,13 +38,13 @@ public sealed class SampleReportTests : IDisposable
             }
         }
 
-        Assert.DoesNotContain("Skipped design", run.Out, StringComparison.Ordinal); // every Tidewater design has a public parameterless constructor
+        Assert.DoesNotContain("Skipped design", run.Out, StringComparison.Ordinal); // every Quorvane design has a public parameterless constructor
     }
 
     [Fact]
     public void TextTablesCarryTheLatchAndRegisterFiguresAligned()
     {
-        var run = Of(TidewaterDll, "--design", nameof(PressureSampler));
+        var run = Of(QuorvaneDll, "--design", nameof(PressureSampler));
         var netlist = new PressureSampler().Elaborate();
         var figures = TimingFigures.For(netlist);
         var lines = run.Out.Split('\n');
@@ -72,7 +72,7 @@ public sealed class SampleReportTests : IDisposable
     [Fact]
     public void PassGateChainsAndStorageNodesCarryTheRulesFigures()
     {
-        var run = Of(TidewaterDll, "--design", nameof(ChannelSelect), "--design", nameof(Housekeeping));
+        var run = Of(QuorvaneDll, "--design", nameof(ChannelSelect), "--design", nameof(Housekeeping));
 
         var channel = new ChannelSelect().Check();
         var pw2001 = Assert.Single(channel.Findings, f => f.RuleId == RuleIds.SeriesPassGates);
@@ -95,8 +95,8 @@ public sealed class SampleReportTests : IDisposable
     [Fact]
     public void HtmlPageHasOneBarGroupPerLatchWithTitlesCarryingTheFigures()
     {
-        var html = Path.Combine(directory, "tidewater.html");
-        var run = Of(TidewaterDll, "--html", html);
+        var html = Path.Combine(directory, "quorvane.html");
+        var run = Of(QuorvaneDll, "--html", html);
         Assert.Equal(ReportCommand.Clean, run.ExitCode);
 
         var page = ReadPage(html);
@@ -134,7 +134,7 @@ public sealed class SampleReportTests : IDisposable
     public void DiagramShadesEachClocksOverlapsAndHasALegend()
     {
         var html = Path.Combine(directory, "burst.html");
-        Assert.Equal(0, Of(TidewaterDll, "--design", nameof(BurstCapture), "--html", html).ExitCode);
+        Assert.Equal(0, Of(QuorvaneDll, "--design", nameof(BurstCapture), "--html", html).ExitCode);
         var svg = ReadPage(html).Descendants(Svg + "svg").Single(s => HasClass(s, "timing-diagram"));
         var netlist = new BurstCapture().Elaborate();
 
@@ -168,7 +168,7 @@ public sealed class SampleReportTests : IDisposable
     public void HtmlPageIsSelfContainedAndListsTheSameFindings()
     {
         var html = Path.Combine(directory, "tide.html");
-        Assert.Equal(0, Of(TidewaterDll, "--design", nameof(TideAverager), "--html", html).ExitCode);
+        Assert.Equal(0, Of(QuorvaneDll, "--design", nameof(TideAverager), "--html", html).ExitCode);
         var text = File.ReadAllText(html);
         var page = ReadPage(html);
 
@@ -189,12 +189,12 @@ public sealed class SampleReportTests : IDisposable
     [Fact]
     public void PolicyOptionsChangeWhatIsReported()
     {
-        var strict = Of(TidewaterDll, "--design", nameof(ChannelSelect), "--max-series-pass-gates", "10");
+        var strict = Of(QuorvaneDll, "--design", nameof(ChannelSelect), "--max-series-pass-gates", "10");
         Assert.Equal(0, strict.ExitCode);
         Assert.DoesNotContain(RuleIds.SeriesPassGates + "  ", strict.Out);
         Assert.Contains("Findings: none", strict.Out);
 
-        var bad = Of(TidewaterDll, "--min-race-margin", "5");
+        var bad = Of(QuorvaneDll, "--min-race-margin", "5");
         Assert.Equal(ReportCommand.BadInput, bad.ExitCode);
         Assert.Contains("'5'", bad.Err);
         Assert.Contains("--min-race-margin", bad.Err);

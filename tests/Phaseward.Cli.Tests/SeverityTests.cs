@@ -1,5 +1,5 @@
 using System.IO;
-using Tidewater;
+using Quorvane;
 using static Phaseward.Cli.Tests.CliRun;
 
 namespace Phaseward.Cli.Tests;
@@ -14,19 +14,19 @@ public sealed class SeverityTests : System.IDisposable
     [Fact]
     public void ErrorOptionMakesTheExitCodeOne()
     {
-        var run = Of(TidewaterDll, "--design", nameof(BurstCapture), "--error", RuleIds.DynamicNodeOnGatedClock);
+        var run = Of(QuorvaneDll, "--design", nameof(BurstCapture), "--error", RuleIds.DynamicNodeOnGatedClock);
         Assert.Equal(ReportCommand.ErrorFindings, run.ExitCode);
         Assert.Contains("error     PW3001", run.Out);
         Assert.Contains("1 at error severity", run.Out);
 
         // The clean twin has nothing to raise.
-        Assert.Equal(ReportCommand.Clean, Of(TidewaterDll, "--design", nameof(BurstCaptureStatic), "--error", "*").ExitCode);
+        Assert.Equal(ReportCommand.Clean, Of(QuorvaneDll, "--design", nameof(BurstCaptureStatic), "--error", "*").ExitCode);
     }
 
     [Fact]
     public void EditorConfigBesideTheInputSetsSeverities()
     {
-        var dll = CopyTidewater();
+        var dll = CopyQuorvane();
         File.WriteAllText(Path.Combine(directory, ".editorconfig"), """
             root = true
 
@@ -55,7 +55,7 @@ public sealed class SeverityTests : System.IDisposable
     [Fact]
     public void BadSeverityValuesNameTheFileKeyAndValue()
     {
-        var dll = CopyTidewater();
+        var dll = CopyQuorvane();
         var config = Path.Combine(directory, ".editorconfig");
         File.WriteAllText(config, "root = true\n[*]\ndotnet_diagnostic.PW1001.severity = loud\n");
         var run = Of(dll);
@@ -63,7 +63,7 @@ public sealed class SeverityTests : System.IDisposable
         Assert.Contains(config, run.Err);
         Assert.Contains("'loud'", run.Err);
 
-        var unknown = Of(TidewaterDll, "--error", "PW0000");
+        var unknown = Of(QuorvaneDll, "--error", "PW0000");
         Assert.Equal(ReportCommand.BadInput, unknown.ExitCode);
         Assert.Contains("'PW0000'", unknown.Err);
     }
@@ -80,10 +80,10 @@ public sealed class SeverityTests : System.IDisposable
         Assert.False(Policy.EditorConfig.AppliesToCSharp("tests/**.cs"));
     }
 
-    private string CopyTidewater()
+    private string CopyQuorvane()
     {
-        foreach (var name in new[] { "Tidewater.dll", "Phaseward.dll" })
+        foreach (var name in new[] { "Quorvane.dll", "Phaseward.dll" })
             File.Copy(Path.Combine(System.AppContext.BaseDirectory, name), Path.Combine(directory, name));
-        return Path.Combine(directory, "Tidewater.dll");
+        return Path.Combine(directory, "Quorvane.dll");
     }
 }

@@ -10,7 +10,7 @@ namespace Phaseward.EndToEnd.Tests;
 /// .editorconfig beside a fresh design project, change what a real build reports; so does a <c>#pragma</c> in the
 /// source. The unchanged project's build (<see cref="PackagedPhaseward.Baseline"/>) is the control.
 /// </summary>
-[Collection(PackagedPhasewareCollection.Name)]
+[Collection(PackagedPhasewardCollection.Name)]
 public sealed class EditorConfigTests
 {
     private readonly PackagedPhaseward package;
@@ -46,11 +46,11 @@ public sealed class EditorConfigTests
             """);
 
         var build = package.Build(project, "editorconfig");
-        var messages = build.PhasewareMessages;
+        var messages = build.PhasewardMessages;
 
         // Control: the same designs without the .editorconfig report PW1001 and PW2001 as warnings.
-        Assert.Contains(package.Baseline.PhasewareMessages, m => m.Id == RuleIds.SameWindowLatches && m.Severity == "warning");
-        Assert.Contains(package.Baseline.PhasewareMessages, m => m.Id == RuleIds.SeriesPassGates && m.Severity == "warning");
+        Assert.Contains(package.Baseline.PhasewardMessages, m => m.Id == RuleIds.SameWindowLatches && m.Severity == "warning");
+        Assert.Contains(package.Baseline.PhasewardMessages, m => m.Id == RuleIds.SeriesPassGates && m.Severity == "warning");
 
         // severity = none: gone.
         Assert.DoesNotContain(messages, m => m.Id == RuleIds.SameWindowLatches);

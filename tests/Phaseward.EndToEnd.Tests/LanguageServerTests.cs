@@ -13,7 +13,7 @@ namespace Phaseward.EndToEnd.Tests;
 /// setting on opens the restored design project that references the packed package, reports Phaseward's diagnostics
 /// at the right ranges, and drops one when an edit removes the hazard.
 /// </summary>
-[Collection(PackagedPhasewareCollection.Name)]
+[Collection(PackagedPhasewardCollection.Name)]
 public sealed class LanguageServerTests
 {
     private static readonly TimeSpan PullTimeout = TimeSpan.FromSeconds(150);

@@ -1,7 +1,7 @@
 using System;
+using System.Collections.Generic;
 using System.IO;
 using System.IO.Compression;
-using System.Collections.Generic;
 using System.Linq;
 using System.Threading;
 using System.Threading.Tasks;
@@ -16,7 +16,7 @@ namespace Phaseward.EndToEnd.Tests;
 /// The package as a user meets it: a fresh design project with one PackageReference to the packed <c>Phaseward</c>,
 /// built by the real SDK. What the compiler prints and what its SARIF log holds are checked against the design files.
 /// </summary>
-[Collection(PackagedPhasewareCollection.Name)]
+[Collection(PackagedPhasewardCollection.Name)]
 public sealed class PackageBuildTests
 {
     private readonly PackagedPhaseward package;
@@ -63,7 +63,7 @@ public sealed class PackageBuildTests
         Assert.DoesNotContain("AD0001", build.Output, StringComparison.Ordinal); // an analyzer that threw
         Assert.DoesNotContain("CS8032", build.Output, StringComparison.Ordinal); // an analyzer that could not be loaded
 
-        var messages = build.PhasewareMessages;
+        var messages = build.PhasewardMessages;
         foreach (var design in FrostlineDesigns.WithHazards)
         {
             var (line, column) = design.ExpectedPosition;
@@ -115,7 +115,7 @@ public sealed class PackageBuildTests
     {
         var build = package.Build(package.DesignProject, "warnaserror", "-warnaserror");
         Assert.True(build.ExitCode != 0, build.Output);
-        var errors = build.PhasewareMessages.Where(m => m.Severity == "error").Select(m => m.Id).Order(StringComparer.Ordinal);
+        var errors = build.PhasewardMessages.Where(m => m.Severity == "error").Select(m => m.Id).Order(StringComparer.Ordinal);
         Assert.Equal(FrostlineDesigns.WithHazards.Select(d => d.RuleId!).Order(StringComparer.Ordinal), errors);
     }
 
@@ -132,7 +132,7 @@ public sealed class PackageBuildTests
         foreach (var design in FrostlineDesigns.WithHazards)
         {
             var (line, column) = design.ExpectedPosition;
-            var error = Assert.Single(build.PhasewareMessages, m => m.Id == design.RuleId);
+            var error = Assert.Single(build.PhasewardMessages, m => m.Id == design.RuleId);
             Assert.Equal(("error", design.FileName, line, column), (error.Severity, Path.GetFileName(error.File), error.Line, error.Column));
         }
 
@@ -162,7 +162,7 @@ public sealed class PackageBuildTests
             Assert.NotEqual(design.Source, File.ReadAllText(Path.Combine(project, design.FileName)));
         var fixedBuild = package.Build(project, "ci-policy-fixed");
         Assert.True(fixedBuild.ExitCode == 0, fixedBuild.Output);
-        Assert.Empty(fixedBuild.PhasewareMessages);
+        Assert.Empty(fixedBuild.PhasewardMessages);
         (_, results, _) = SarifLog.Read(fixedBuild.SarifPath);
         Assert.DoesNotContain(results, r => r.IsPhaseward && r.Level is "warning" or "error");
     }

@@ -18,7 +18,7 @@ public class SampleBuildTests
         try
         {
             var sarif = Path.Combine(artifacts, "build.sarif");
-            var project = Path.Combine(DotnetCli.RepositoryRoot, "samples", "Tidewater", "Tidewater.csproj");
+            var project = Path.Combine(DotnetCli.RepositoryRoot, "samples", "Quorvane", "Quorvane.csproj");
             var (exitCode, output) = DotnetCli.Run(
                 $"build \"{project}\" --artifacts-path \"{artifacts}\" -p:ErrorLog=\"{sarif}%2Cversion=2.1\"",
                 DotnetCli.RepositoryRoot, TimeSpan.FromMinutes(5));
@@ -36,7 +36,7 @@ public class SampleBuildTests
             var location = found.GetProperty("locations")[0].GetProperty("physicalLocation");
             Assert.EndsWith("StrainLanes.cs", location.GetProperty("artifactLocation").GetProperty("uri").GetString());
             var expectedLine = Array.FindIndex(
-                File.ReadAllLines(Path.Combine(DotnetCli.RepositoryRoot, "samples", "Tidewater", "StrainLanes.cs")),
+                File.ReadAllLines(Path.Combine(DotnetCli.RepositoryRoot, "samples", "Quorvane", "StrainLanes.cs")),
                 line => line.Contains("Lanes.Distinct().Count()", StringComparison.Ordinal)) + 1;
             Assert.Equal(expectedLine, location.GetProperty("region").GetProperty("startLine").GetInt32());
         }

@@ -14,7 +14,7 @@ namespace Phaseward.EndToEnd.Tests;
 /// diagnostics, list the code actions at a diagnostic, apply one, and see the diagnostic gone. Analyzers and code fixes
 /// are loaded from the packed package, as an editor loads them from a restored package.
 /// </summary>
-[Collection(PackagedPhasewareCollection.Name)]
+[Collection(PackagedPhasewardCollection.Name)]
 public sealed class WorkspaceTests
 {
     private static readonly TimeSpan Timeout = TimeSpan.FromMinutes(2);
@@ -26,7 +26,7 @@ public sealed class WorkspaceTests
     public async Task SampleDocumentShowsItsDiagnosticAndACodeFixRemovesIt()
     {
         using var cancellation = new CancellationTokenSource(Timeout);
-        var sample = Path.Combine(DotnetCli.RepositoryRoot, "samples", "Tidewater");
+        var sample = Path.Combine(DotnetCli.RepositoryRoot, "samples", "Quorvane");
         using var workspace = DesignWorkspace.Open(sample, DotnetCli.RepositoryRoot, package.LibraryPath, package.AnalyzerDirectory, OutputKind.ConsoleApplication);
         Assert.NotEmpty(workspace.Analyzers);
 

@@ -1,23 +1,22 @@
-namespace Phaseward.CodeFixes
+namespace Phaseward.CodeFixes;
+
+/// <summary>Public equivalence keys of Phaseward's code actions (FixAll groups actions by these).</summary>
+public static class EquivalenceKeys
 {
-    /// <summary>Public equivalence keys of Phaseward's code actions (FixAll groups actions by these).</summary>
-    public static class EquivalenceKeys
-    {
-        public const string Prefix = "Phaseward.";
+    public const string Prefix = "Phaseward.";
 
-        // PW1001
-        public const string SwitchLatchPhase = Prefix + "PW1001.SwitchLatchPhase";
-        public const string InsertLatchBeforeRegister = Prefix + "PW1001.InsertLatchBeforeRegister";
+    // PW1001
+    public const string SwitchLatchPhase = Prefix + "PW1001.SwitchLatchPhase";
+    public const string InsertLatchBeforeRegister = Prefix + "PW1001.InsertLatchBeforeRegister";
 
-        // PW2001
-        public const string InsertRestoringBuffer = Prefix + "PW2001.InsertRestoringBuffer";
-        public const string InsertRestoringInverter = Prefix + "PW2001.InsertRestoringInverter";
+    // PW2001
+    public const string InsertRestoringBuffer = Prefix + "PW2001.InsertRestoringBuffer";
+    public const string InsertRestoringInverter = Prefix + "PW2001.InsertRestoringInverter";
 
-        // PW3001, PW3002
-        public const string UseStaticLatch = Prefix + "PW3001.PW3002.UseStaticLatch";
-        public const string UseStaticRegister = Prefix + "PW3001.PW3002.UseStaticRegister";
+    // PW3001, PW3002
+    public const string UseStaticLatch = Prefix + "PW3001.PW3002.UseStaticLatch";
+    public const string UseStaticRegister = Prefix + "PW3001.PW3002.UseStaticRegister";
 
-        // PW3001
-        public const string ClockFromUngatedClock = Prefix + "PW3001.ClockFromUngatedClock";
-    }
+    // PW3001
+    public const string ClockFromUngatedClock = Prefix + "PW3001.ClockFromUngatedClock";
 }

@@ -1,37 +1,36 @@
 using System.Collections.Generic;
 using System.Text;
 
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>The result of checking a design at run time.</summary>
+public sealed class CheckReport
 {
-    /// <summary>The result of checking a design at run time.</summary>
-    public sealed class CheckReport
+    public CheckReport(Netlist netlist, IReadOnlyList<Finding> findings)
     {
-        public CheckReport(Netlist netlist, IReadOnlyList<Finding> findings)
-        {
-            Netlist = netlist;
-            Findings = findings;
-        }
-
-        public Netlist Netlist { get; }
-
-        public IReadOnlyList<Finding> Findings { get; }
-
-        public bool IsClean => Findings.Count == 0;
-
-        /// <summary>A human-readable report: a summary line, then one line per finding with its location.</summary>
-        public override string ToString()
-        {
-            var text = new StringBuilder();
-            text.Append("Phaseward: design '").Append(Netlist.DesignName).Append("': ")
-                .Append(Count(Netlist.Devices.Count, "device")).Append(", ")
-                .Append(Count(Netlist.Nets.Count, "net")).Append(", ")
-                .Append(Count(Netlist.Clocks.Count, "clock")).Append(" — ");
-            text.AppendLine(IsClean ? "clean, no findings." : Findings.Count + (Findings.Count == 1 ? " finding:" : " findings:"));
-            foreach (var finding in Findings)
-                text.Append("  ").AppendLine(finding.ToString());
-            return text.ToString();
-        }
-
-        private static string Count(int count, string noun) => count + " " + noun + (count == 1 ? string.Empty : "s");
+        Netlist = netlist;
+        Findings = findings;
     }
+
+    public Netlist Netlist { get; }
+
+    public IReadOnlyList<Finding> Findings { get; }
+
+    public bool IsClean => Findings.Count == 0;
+
+    /// <summary>A human-readable report: a summary line, then one line per finding with its location.</summary>
+    public override string ToString()
+    {
+        var text = new StringBuilder();
+        text.Append("Phaseward: design '").Append(Netlist.DesignName).Append("': ")
+            .Append(Count(Netlist.Devices.Count, "device")).Append(", ")
+            .Append(Count(Netlist.Nets.Count, "net")).Append(", ")
+            .Append(Count(Netlist.Clocks.Count, "clock")).Append(" — ");
+        text.AppendLine(IsClean ? "clean, no findings." : Findings.Count + (Findings.Count == 1 ? " finding:" : " findings:"));
+        foreach (var finding in Findings)
+            text.Append("  ").AppendLine(finding.ToString());
+        return text.ToString();
+    }
+
+    private static string Count(int count, string noun) => count + " " + noun + (count == 1 ? string.Empty : "s");
 }

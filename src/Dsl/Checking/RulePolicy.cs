@@ -1,53 +1,52 @@
-using Phaseward.Internal;
 using System;
+using Phaseward.Internal;
 
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>
+/// Lint policy: thresholds that are a team's choice rather than a property of the design. The analyzers read it
+/// from <c>.editorconfig</c> keys prefixed <c>phaseward.</c>; at run time pass one to <see cref="Design.Check"/>.
+/// </summary>
+public sealed class RulePolicy
 {
+    private readonly Time minimumRaceMargin = Time.Zero;
+    private readonly Time minimumTimingSlack = Time.Zero;
+    private readonly int? maxSeriesPassGates;
+
+    public static RulePolicy Default { get; } = new();
+
     /// <summary>
-    /// Lint policy: thresholds that are a team's choice rather than a property of the design. The analyzers read it
-    /// from <c>.editorconfig</c> keys prefixed <c>phaseward.</c>; at run time pass one to <see cref="Design.Check"/>.
+    /// PW1002 reports a latch pair whose overlap race margin is below this (default 0: only negative margins).
+    /// Key <c>phaseward.min_race_margin</c>. Zero or positive.
     /// </summary>
-    public sealed class RulePolicy
+    public Time MinimumRaceMargin
     {
-        private readonly Time minimumRaceMargin = Time.Zero;
-        private readonly Time minimumTimingSlack = Time.Zero;
-        private readonly int? maxSeriesPassGates;
+        get => minimumRaceMargin;
+        init => minimumRaceMargin = new Time(Guard.NonNegative(value.Seconds, nameof(MinimumRaceMargin), "s"));
+    }
 
-        public static RulePolicy Default { get; } = new();
+    /// <summary>
+    /// PW4001, PW4002 and PW4003 report a path whose slack is below this (default 0: only negative slack).
+    /// Key <c>phaseward.min_timing_slack</c>. Zero or positive.
+    /// </summary>
+    public Time MinimumTimingSlack
+    {
+        get => minimumTimingSlack;
+        init => minimumTimingSlack = new Time(Guard.NonNegative(value.Seconds, nameof(MinimumTimingSlack), "s"));
+    }
 
-        /// <summary>
-        /// PW1002 reports a latch pair whose overlap race margin is below this (default 0: only negative margins).
-        /// Key <c>phaseward.min_race_margin</c>. Zero or positive.
-        /// </summary>
-        public Time MinimumRaceMargin
+    /// <summary>
+    /// The most pass gates allowed in series without a restoring stage (PW2001; <c>phaseward.max_series_pass_gates</c>).
+    /// Null: the optimum restoring-stage spacing computed from the design's process, but never below 2.
+    /// </summary>
+    public int? MaxSeriesPassGates
+    {
+        get => maxSeriesPassGates;
+        init
         {
-            get => minimumRaceMargin;
-            init => minimumRaceMargin = new Time(Guard.NonNegative(value.Seconds, nameof(MinimumRaceMargin), "s"));
-        }
-
-        /// <summary>
-        /// PW4001, PW4002 and PW4003 report a path whose slack is below this (default 0: only negative slack).
-        /// Key <c>phaseward.min_timing_slack</c>. Zero or positive.
-        /// </summary>
-        public Time MinimumTimingSlack
-        {
-            get => minimumTimingSlack;
-            init => minimumTimingSlack = new Time(Guard.NonNegative(value.Seconds, nameof(MinimumTimingSlack), "s"));
-        }
-
-        /// <summary>
-        /// The most pass gates allowed in series without a restoring stage (PW2001; <c>phaseward.max_series_pass_gates</c>).
-        /// Null: the optimum restoring-stage spacing computed from the design's process, but never below 2.
-        /// </summary>
-        public int? MaxSeriesPassGates
-        {
-            get => maxSeriesPassGates;
-            init
-            {
-                if (value is < 1)
-                    throw new ArgumentException($"'{nameof(MaxSeriesPassGates)}' must be at least 1 pass gate (was {value}).", nameof(MaxSeriesPassGates));
-                maxSeriesPassGates = value;
-            }
+            if (value is < 1)
+                throw new ArgumentException($"'{nameof(MaxSeriesPassGates)}' must be at least 1 pass gate (was {value}).", nameof(MaxSeriesPassGates));
+            maxSeriesPassGates = value;
         }
     }
 }

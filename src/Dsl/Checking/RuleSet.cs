@@ -1,20 +1,19 @@
 using System.Collections.Generic;
 
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>The rules Phaseward runs, in a fixed order (so reports are deterministic).</summary>
+public static class RuleSet
 {
-    /// <summary>The rules Phaseward runs, in a fixed order (so reports are deterministic).</summary>
-    public static class RuleSet
+    public static IReadOnlyList<Rule> All { get; } = new Rule[]
     {
-        public static IReadOnlyList<Rule> All { get; } = new Rule[]
-        {
-            new SameWindowLatchesRule(),
-            new OverlapRaceRule(),
-            new RegisterTimingRule(),
-            new LatchBorrowingRule(),
-            new PassGateChainRule(),
-            new DynamicNodeOnGatedClockRule(),
-            new ClockTooSlowForDynamicStorageRule(),
-            new ChargeSharingRule(),
-        };
-    }
+        new SameWindowLatchesRule(),
+        new OverlapRaceRule(),
+        new RegisterTimingRule(),
+        new LatchBorrowingRule(),
+        new PassGateChainRule(),
+        new DynamicNodeOnGatedClockRule(),
+        new ClockTooSlowForDynamicStorageRule(),
+        new ChargeSharingRule(),
+    };
 }

@@ -1,79 +1,78 @@
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>
+/// Titles and message formats as constants, so that the analyzers' descriptors are built from compile-time constants
+/// (the release-tracking analyzer reads them) and both front ends print the same words.
+/// </summary>
+public static class RuleTexts
 {
-    /// <summary>
-    /// Titles and message formats as constants, so that the analyzers' descriptors are built from compile-time constants
-    /// (the release-tracking analyzer reads them) and both front ends print the same words.
-    /// </summary>
-    public static class RuleTexts
-    {
 
-        public const string SameWindowLatchesTitle = "Latches transparent in the same phase are in series";
-        public const string SameWindowLatchesMessage = "Latch '{0}' takes its data from latch '{1}' and both are transparent in {2}: data can run through both in one phase";
-        public const string SameWindowLatchesDescription = "A data path runs from one latch's storage node to another latch's input through logic only, and both latches are transparent in the same window of the same root clock (gated and buffered copies included). Data launched through the first latch runs straight on through the second in the same phase, so the pair stores nothing for a cycle. Put the second latch on the complementary phase, or insert a latch of the complementary phase between them.";
+    public const string SameWindowLatchesTitle = "Latches transparent in the same phase are in series";
+    public const string SameWindowLatchesMessage = "Latch '{0}' takes its data from latch '{1}' and both are transparent in {2}: data can run through both in one phase";
+    public const string SameWindowLatchesDescription = "A data path runs from one latch's storage node to another latch's input through logic only, and both latches are transparent in the same window of the same root clock (gated and buffered copies included). Data launched through the first latch runs straight on through the second in the same phase, so the pair stores nothing for a cycle. Put the second latch on the complementary phase, or insert a latch of the complementary phase between them.";
 
-        public const string OverlapRaceTitle = "Clock overlap lets data race through complementary latches";
-        public const string OverlapRaceMessage = "Latch '{0}' can catch data launched through latch '{1}' during the {2} overlap of clock '{3}': the fastest path takes {4} but both pass gates conduct together for {5} (margin {6})";
-        public const string OverlapRaceDescription = "Two latches on complementary phases of one clock are both transparent while the clock and its late complement overlap. Data entering the first latch when it opens must not reach the second latch's storage node before the second latch closes: the shortest delay through the first latch, the path and the second latch's pass gate must exceed the overlap. For a master-slave register this is t(TG1) + t(I1) + t(TG2) against the 0-0 overlap (rising-edge register).";
+    public const string OverlapRaceTitle = "Clock overlap lets data race through complementary latches";
+    public const string OverlapRaceMessage = "Latch '{0}' can catch data launched through latch '{1}' during the {2} overlap of clock '{3}': the fastest path takes {4} but both pass gates conduct together for {5} (margin {6})";
+    public const string OverlapRaceDescription = "Two latches on complementary phases of one clock are both transparent while the clock and its late complement overlap. Data entering the first latch when it opens must not reach the second latch's storage node before the second latch closes: the shortest delay through the first latch, the path and the second latch's pass gate must exceed the overlap. For a master-slave register this is t(TG1) + t(I1) + t(TG2) against the 0-0 overlap (rising-edge register).";
 
-        public const string RegisterSetupTitle = "Register setup time violated";
-        public const string RegisterSetupMessage = "Register '{0}' misses its setup time on the path from register '{1}': clock-to-output {2} + path {3} + setup {4} = {5} exceeds the {6} available (slack {7})";
-        public const string RegisterSetupDescription = "On a register-to-register path the launching register's clock-to-output, the slowest path and the capturing register's setup time must fit in the time between the launching and the capturing edge (a clock period, corrected for clock skew).";
+    public const string RegisterSetupTitle = "Register setup time violated";
+    public const string RegisterSetupMessage = "Register '{0}' misses its setup time on the path from register '{1}': clock-to-output {2} + path {3} + setup {4} = {5} exceeds the {6} available (slack {7})";
+    public const string RegisterSetupDescription = "On a register-to-register path the launching register's clock-to-output, the slowest path and the capturing register's setup time must fit in the time between the launching and the capturing edge (a clock period, corrected for clock skew).";
 
-        public const string RegisterHoldTitle = "Register hold time violated";
-        public const string RegisterHoldMessage = "Register '{0}' can lose its data on the path from register '{1}': minimum clock-to-output {2} + shortest path {3} = {4} is less than its hold time {5} plus clock skew {6} (slack {7})";
-        public const string RegisterHoldDescription = "New data launched by a register must not reach the next register's input before that register's master has closed: the shortest clock-to-output plus the shortest path must exceed the capturing register's hold time (the clock overlap after its edge) plus the clock skew between the two registers.";
+    public const string RegisterHoldTitle = "Register hold time violated";
+    public const string RegisterHoldMessage = "Register '{0}' can lose its data on the path from register '{1}': minimum clock-to-output {2} + shortest path {3} = {4} is less than its hold time {5} plus clock skew {6} (slack {7})";
+    public const string RegisterHoldDescription = "New data launched by a register must not reach the next register's input before that register's master has closed: the shortest clock-to-output plus the shortest path must exceed the capturing register's hold time (the clock overlap after its edge) plus the clock skew between the two registers.";
 
-        public const string LatchBorrowingTitle = "Latch path too slow even with time borrowing";
-        public const string LatchBorrowingMessage = "Data from latch '{1}' reaches latch '{0}' {2} after '{0}' opens, but its window ({3}) less its setup time ({4}) allows only {5} (slack {6}; '{1}' had borrowed {7})";
-        public const string LatchBorrowingDescription = "In a two-phase latch pipeline data may arrive at a latch after it opens and pass straight through (time borrowing), but it must arrive before the latch closes, less the latch's setup time. Borrowing is carried along the chain of latches.";
-        public const string SeriesPassGatesTitle = "Pass gates in series without a restoring stage";
-        public const string SeriesPassGatesMessage =
-            "{0} pass gates in series without a restoring stage (limit {1}): Elmore delay {2} (50% estimate {3}); a restoring stage every {4} gates would give about {5}";
-        public const string SeriesPassGatesDescription =
-            "A chain of pass gates with no restoring stage is an RC ladder: its delay grows with the square of its length and its edges slow down. "
-            + "The rule reports a chain longer than phaseward.max_series_pass_gates (default: the optimum restoring-stage spacing of the design's process, at least 2) "
-            + "at its first gate beyond the limit. Figures are first-order estimates.";
-        public const string DynamicNodeOnGatedClockTitle = "Dynamic node on a clock that can be gated off";
-        public const string DynamicNodeOnGatedClockMessage =
-            "Dynamic node '{0}' floats while gated clock '{1}' is stopped {2} (declared maximum idle time: {3}), but keeps its level only {4} (C·ΔV/I_leak with C = {5}, ΔV = {6}, I_leak = {7})";
-        public const string DynamicNodeOnGatedClockDescription =
-            "A node driven only through pass devices, with no keeper or restoring feedback, holds its bit as charge. When its clock gate stops the clock at a level that turns every driver off, leakage drains the node for as long as the clock stays off; if the gate declares no maximum idle time, or one longer than the node's retention time C·ΔV/I_leak, the bit can be lost. First-order, linear estimate.";
+    public const string LatchBorrowingTitle = "Latch path too slow even with time borrowing";
+    public const string LatchBorrowingMessage = "Data from latch '{1}' reaches latch '{0}' {2} after '{0}' opens, but its window ({3}) less its setup time ({4}) allows only {5} (slack {6}; '{1}' had borrowed {7})";
+    public const string LatchBorrowingDescription = "In a two-phase latch pipeline data may arrive at a latch after it opens and pass straight through (time borrowing), but it must arrive before the latch closes, less the latch's setup time. Borrowing is carried along the chain of latches.";
+    public const string SeriesPassGatesTitle = "Pass gates in series without a restoring stage";
+    public const string SeriesPassGatesMessage =
+        "{0} pass gates in series without a restoring stage (limit {1}): Elmore delay {2} (50% estimate {3}); a restoring stage every {4} gates would give about {5}";
+    public const string SeriesPassGatesDescription =
+        "A chain of pass gates with no restoring stage is an RC ladder: its delay grows with the square of its length and its edges slow down. "
+        + "The rule reports a chain longer than phaseward.max_series_pass_gates (default: the optimum restoring-stage spacing of the design's process, at least 2) "
+        + "at its first gate beyond the limit. Figures are first-order estimates.";
+    public const string DynamicNodeOnGatedClockTitle = "Dynamic node on a clock that can be gated off";
+    public const string DynamicNodeOnGatedClockMessage =
+        "Dynamic node '{0}' floats while gated clock '{1}' is stopped {2} (declared maximum idle time: {3}), but keeps its level only {4} (C·ΔV/I_leak with C = {5}, ΔV = {6}, I_leak = {7})";
+    public const string DynamicNodeOnGatedClockDescription =
+        "A node driven only through pass devices, with no keeper or restoring feedback, holds its bit as charge. When its clock gate stops the clock at a level that turns every driver off, leakage drains the node for as long as the clock stays off; if the gate declares no maximum idle time, or one longer than the node's retention time C·ΔV/I_leak, the bit can be lost. First-order, linear estimate.";
 
-        public const string ClockTooSlowForDynamicStorageTitle = "Clock too slow for dynamic storage";
-        public const string ClockTooSlowForDynamicStorageMessage =
-            "Dynamic node '{0}' floats for up to {1} of every {2} period of clock '{3}', longer than its retention time {4} (C·ΔV/I_leak with C = {5}, ΔV = {6}, I_leak = {7}); run the clock at {8} or faster";
-        public const string ClockTooSlowForDynamicStorageDescription =
-            "A dynamic node is refreshed only while one of its pass devices conducts. With the clock running, the longest stretch of each period in which all of them are off (from the period, duty and complement skew) must be shorter than the node's retention time C·ΔV/I_leak. First-order, linear estimate.";
+    public const string ClockTooSlowForDynamicStorageTitle = "Clock too slow for dynamic storage";
+    public const string ClockTooSlowForDynamicStorageMessage =
+        "Dynamic node '{0}' floats for up to {1} of every {2} period of clock '{3}', longer than its retention time {4} (C·ΔV/I_leak with C = {5}, ΔV = {6}, I_leak = {7}); run the clock at {8} or faster";
+    public const string ClockTooSlowForDynamicStorageDescription =
+        "A dynamic node is refreshed only while one of its pass devices conducts. With the clock running, the longest stretch of each period in which all of them are off (from the period, duty and complement skew) must be shorter than the node's retention time C·ΔV/I_leak. First-order, linear estimate.";
 
-        public const string ChargeSharingTitle = "Charge sharing corrupts a dynamic node";
-        public const string ChargeSharingMessage =
-            "When '{0}' conducts, floating node '{1}' (C1 = {2}) shares its charge with floating node '{3}' (C2 = {4}): a {5} level settles at {6}, a droop of {7}, more than the tolerated {8}";
-        public const string ChargeSharingDescription =
-            "A pass device that opens between a charged floating node and another floating node shares the charge between them: the level settles at V·C1/(C1+C2), a droop of V·C2/(C1+C2) in the worst case (the other node at the opposite level). First-order estimate by conservation of charge.";
-        public const string NotElaboratedTitle = "Part of the design could not be elaborated at compile time";
-        public const string NotElaboratedMessage = "Phaseward could not elaborate {0} here: {1}; what depends on it is skipped and the rest of design '{2}' is still checked";
-        public const string NotElaboratedDescription =
-            "The compile-time elaborator interprets Describe() and the code it calls. Code outside the subset it understands is not guessed: " +
-            "it is reported once, whatever depends on its value is skipped, and the rest of the design is still checked. Run Design.Check() " +
-            "at run time to check the whole design.";
+    public const string ChargeSharingTitle = "Charge sharing corrupts a dynamic node";
+    public const string ChargeSharingMessage =
+        "When '{0}' conducts, floating node '{1}' (C1 = {2}) shares its charge with floating node '{3}' (C2 = {4}): a {5} level settles at {6}, a droop of {7}, more than the tolerated {8}";
+    public const string ChargeSharingDescription =
+        "A pass device that opens between a charged floating node and another floating node shares the charge between them: the level settles at V·C1/(C1+C2), a droop of V·C2/(C1+C2) in the worst case (the other node at the opposite level). First-order estimate by conservation of charge.";
+    public const string NotElaboratedTitle = "Part of the design could not be elaborated at compile time";
+    public const string NotElaboratedMessage = "Phaseward could not elaborate {0} here: {1}; what depends on it is skipped and the rest of design '{2}' is still checked";
+    public const string NotElaboratedDescription =
+        "The compile-time elaborator interprets Describe() and the code it calls. Code outside the subset it understands is not guessed: " +
+        "it is reported once, whatever depends on its value is skipped, and the rest of the design is still checked. Run Design.Check() " +
+        "at run time to check the whole design.";
 
-        public const string ElaborationBudgetExceededTitle = "Compile-time elaboration stopped at its budget";
-        public const string ElaborationBudgetExceededMessage = "Phaseward stopped elaborating design '{0}' here: {1}; the part elaborated so far is still checked";
-        public const string ElaborationBudgetExceededDescription =
-            "A step budget (loop iterations and calls), a device budget and a call-depth limit keep the editor responsive when a loop or a " +
-            "recursion does not end. Raise phaseward.elaboration_step_budget, phaseward.elaboration_device_budget or " +
-            "phaseward.elaboration_recursion_limit if the design is merely large.";
+    public const string ElaborationBudgetExceededTitle = "Compile-time elaboration stopped at its budget";
+    public const string ElaborationBudgetExceededMessage = "Phaseward stopped elaborating design '{0}' here: {1}; the part elaborated so far is still checked";
+    public const string ElaborationBudgetExceededDescription =
+        "A step budget (loop iterations and calls), a device budget and a call-depth limit keep the editor responsive when a loop or a " +
+        "recursion does not end. Raise phaseward.elaboration_step_budget, phaseward.elaboration_device_budget or " +
+        "phaseward.elaboration_recursion_limit if the design is merely large.";
 
-        public const string DesignThrowsTitle = "The design throws while it is elaborated";
-        public const string DesignThrowsMessage = "Design '{0}' throws here when it is elaborated: {1}";
-        public const string DesignThrowsDescription =
-            "A DSL call rejected its arguments (for example a negative capacitance), or the design's own code throws. At run time " +
-            "Design.Elaborate() would stop here with this exception.";
+    public const string DesignThrowsTitle = "The design throws while it is elaborated";
+    public const string DesignThrowsMessage = "Design '{0}' throws here when it is elaborated: {1}";
+    public const string DesignThrowsDescription =
+        "A DSL call rejected its arguments (for example a negative capacitance), or the design's own code throws. At run time " +
+        "Design.Elaborate() would stop here with this exception.";
 
-        public const string InvalidOptionTitle = "Invalid Phaseward option";
-        public const string InvalidOptionMessage = "The value '{1}' of option '{0}' is not valid: expected {2}; the default ({3}) is used";
-        public const string InvalidOptionDescription =
-            "A key prefixed 'phaseward.' in .editorconfig or .globalconfig has a value Phaseward cannot read. The default is used instead. " +
-            "See docs/configuration.md for each key's format.";
-    }
+    public const string InvalidOptionTitle = "Invalid Phaseward option";
+    public const string InvalidOptionMessage = "The value '{1}' of option '{0}' is not valid: expected {2}; the default ({3}) is used";
+    public const string InvalidOptionDescription =
+        "A key prefixed 'phaseward.' in .editorconfig or .globalconfig has a value Phaseward cannot read. The default is used instead. " +
+        "See docs/configuration.md for each key's format.";
 }

@@ -1,10 +1,9 @@
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>How serious a finding is by default (configurable per rule in .editorconfig for the analyzers).</summary>
+public enum Severity
 {
-    /// <summary>How serious a finding is by default (configurable per rule in .editorconfig for the analyzers).</summary>
-    public enum Severity
-    {
-        Info,
-        Warning,
-        Error,
-    }
+    Info,
+    Warning,
+    Error,
 }

@@ -2,85 +2,84 @@ using System;
 using System.Runtime.CompilerServices;
 using Phaseward.Internal;
 
-namespace Phaseward
+namespace Phaseward;
+
+public sealed partial class Circuit
 {
-    public sealed partial class Circuit
+    /// <summary>A free-running root clock.</summary>
+    /// <param name="name">Unique clock name.</param>
+    /// <param name="period">Clock period (positive).</param>
+    /// <param name="duty">Fraction of the period the clock is high, strictly between 0 and 1.</param>
+    /// <param name="complementSkew">How late the complement arrives (default: the process figure).</param>
+    public Clock Clock(string name, Time period, double duty = 0.5, Time? complementSkew = null,
+        [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
     {
-        /// <summary>A free-running root clock.</summary>
-        /// <param name="name">Unique clock name.</param>
-        /// <param name="period">Clock period (positive).</param>
-        /// <param name="duty">Fraction of the period the clock is high, strictly between 0 and 1.</param>
-        /// <param name="complementSkew">How late the complement arrives (default: the process figure).</param>
-        public Clock Clock(string name, Time period, double duty = 0.5, Time? complementSkew = null,
-            [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+        CheckNewClockName(name, nameof(name));
+        Guard.Positive(period.Seconds, nameof(period), "s");
+        Guard.Fraction(duty, nameof(duty));
+        if (complementSkew is { } skew)
         {
+            Guard.NonNegative(skew.Seconds, nameof(complementSkew), "s");
+            if (skew >= period * Math.Min(duty, 1 - duty))
+                throw new ArgumentException($"'{nameof(complementSkew)}' ({skew}) must be shorter than the clock's shorter phase ({period * Math.Min(duty, 1 - duty)}).", nameof(complementSkew));
+        }
+
+        return AddClock(name, ClockKind.Root, null, period, duty, complementSkew, Time.Zero, null, ClockStopLevel.Low, null, Site(callerFile, callerLine));
+    }
+
+    /// <summary>
+    /// A clock gate: a copy of <paramref name="clock"/> that runs while <paramref name="enable"/> is high and is held at
+    /// <paramref name="stopsAt"/> while it is low.
+    /// </summary>
+    /// <param name="maxIdle">The longest the gate is guaranteed to stay disabled (null: unbounded).</param>
+    public Clock ClockGate(Clock clock, Net enable, ClockStopLevel stopsAt = ClockStopLevel.Low, Time? maxIdle = null, string? name = null,
+        [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+    {
+        CheckClock(clock, nameof(clock));
+        CheckNet(enable, nameof(enable));
+        if (stopsAt is not (ClockStopLevel.Low or ClockStopLevel.High))
+            throw new ArgumentException($"'{nameof(stopsAt)}' must be ClockStopLevel.Low or ClockStopLevel.High (was {(int)stopsAt}).", nameof(stopsAt));
+        if (maxIdle is { } idle)
+            Guard.Positive(idle.Seconds, nameof(maxIdle), "s");
+        if (name is not null)
             CheckNewClockName(name, nameof(name));
-            Guard.Positive(period.Seconds, nameof(period), "s");
-            Guard.Fraction(duty, nameof(duty));
-            if (complementSkew is { } skew)
-            {
-                Guard.NonNegative(skew.Seconds, nameof(complementSkew), "s");
-                if (skew >= period * Math.Min(duty, 1 - duty))
-                    throw new ArgumentException($"'{nameof(complementSkew)}' ({skew}) must be shorter than the clock's shorter phase ({period * Math.Min(duty, 1 - duty)}).", nameof(complementSkew));
-            }
 
-            return AddClock(name, ClockKind.Root, null, period, duty, complementSkew, Time.Zero, null, ClockStopLevel.Low, null, Site(callerFile, callerLine));
-        }
+        return AddClock(name ?? AutoClockName(clock.Name + ".gated"), ClockKind.Gated, clock, clock.Period, clock.Duty, null, Time.Zero,
+            enable, stopsAt, maxIdle, Site(callerFile, callerLine));
+    }
 
-        /// <summary>
-        /// A clock gate: a copy of <paramref name="clock"/> that runs while <paramref name="enable"/> is high and is held at
-        /// <paramref name="stopsAt"/> while it is low.
-        /// </summary>
-        /// <param name="maxIdle">The longest the gate is guaranteed to stay disabled (null: unbounded).</param>
-        public Clock ClockGate(Clock clock, Net enable, ClockStopLevel stopsAt = ClockStopLevel.Low, Time? maxIdle = null, string? name = null,
-            [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-        {
-            CheckClock(clock, nameof(clock));
-            CheckNet(enable, nameof(enable));
-            if (stopsAt is not (ClockStopLevel.Low or ClockStopLevel.High))
-                throw new ArgumentException($"'{nameof(stopsAt)}' must be ClockStopLevel.Low or ClockStopLevel.High (was {(int)stopsAt}).", nameof(stopsAt));
-            if (maxIdle is { } idle)
-                Guard.Positive(idle.Seconds, nameof(maxIdle), "s");
-            if (name is not null)
-                CheckNewClockName(name, nameof(name));
+    /// <summary>A copy of <paramref name="clock"/> delayed by a clock buffer.</summary>
+    /// <param name="delay">The buffer's delay (default: the process's stage delay).</param>
+    public Clock BufferedClock(Clock clock, Time? delay = null, string? name = null,
+        [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+    {
+        CheckClock(clock, nameof(clock));
+        if (delay is { } d)
+            Guard.NonNegative(d.Seconds, nameof(delay), "s");
+        if (name is not null)
+            CheckNewClockName(name, nameof(name));
 
-            return AddClock(name ?? AutoClockName(clock.Name + ".gated"), ClockKind.Gated, clock, clock.Period, clock.Duty, null, Time.Zero,
-                enable, stopsAt, maxIdle, Site(callerFile, callerLine));
-        }
+        return AddClock(name ?? AutoClockName(clock.Name + ".buf"), ClockKind.Buffered, clock, clock.Period, clock.Duty, null,
+            delay, null, ClockStopLevel.Low, null, Site(callerFile, callerLine));
+    }
 
-        /// <summary>A copy of <paramref name="clock"/> delayed by a clock buffer.</summary>
-        /// <param name="delay">The buffer's delay (default: the process's stage delay).</param>
-        public Clock BufferedClock(Clock clock, Time? delay = null, string? name = null,
-            [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-        {
-            CheckClock(clock, nameof(clock));
-            if (delay is { } d)
-                Guard.NonNegative(d.Seconds, nameof(delay), "s");
-            if (name is not null)
-                CheckNewClockName(name, nameof(name));
+    private void CheckNewClockName(string? name, string parameter)
+    {
+        Guard.Name(name, parameter);
+        if (clockNames.Contains(name!))
+            throw new ArgumentException($"'{parameter}': a clock named \"{name}\" already exists in design '{DesignName}'.", parameter);
+    }
 
-            return AddClock(name ?? AutoClockName(clock.Name + ".buf"), ClockKind.Buffered, clock, clock.Period, clock.Duty, null,
-                delay, null, ClockStopLevel.Low, null, Site(callerFile, callerLine));
-        }
+    // A clock name no other clock has.
+    private string AutoClockName(string prefix)
+        => NextFreeName(autoClockCounters, prefix, Array.Empty<string>(), static (circuit, _, candidate) => circuit.clockNames.Contains(candidate));
 
-        private void CheckNewClockName(string? name, string parameter)
-        {
-            Guard.Name(name, parameter);
-            if (clockNames.Contains(name!))
-                throw new ArgumentException($"'{parameter}': a clock named \"{name}\" already exists in design '{DesignName}'.", parameter);
-        }
-
-        // A clock name no other clock has.
-        private string AutoClockName(string prefix)
-            => NextFreeName(autoClockCounters, prefix, Array.Empty<string>(), static (circuit, _, candidate) => circuit.clockNames.Contains(candidate));
-
-        private Clock AddClock(string name, ClockKind kind, Clock? source, Time period, double duty, Time? skew, Time? delay, Net? enable,
-            ClockStopLevel stopLevel, Time? maxIdle, SourceSpan span)
-        {
-            var clock = new Clock(this, clocks.Count, name, kind, source, period, duty, skew, delay, enable, stopLevel, maxIdle, span);
-            clocks.Add(clock);
-            clockNames.Add(name);
-            return clock;
-        }
+    private Clock AddClock(string name, ClockKind kind, Clock? source, Time period, double duty, Time? skew, Time? delay, Net? enable,
+        ClockStopLevel stopLevel, Time? maxIdle, SourceSpan span)
+    {
+        var clock = new Clock(this, clocks.Count, name, kind, source, period, duty, skew, delay, enable, stopLevel, maxIdle, span);
+        clocks.Add(clock);
+        clockNames.Add(name);
+        return clock;
     }
 }

@@ -1,80 +1,79 @@
 using System.Runtime.CompilerServices;
 
-namespace Phaseward
+namespace Phaseward;
+
+// Restoring stages and pass gates. Each comes in two forms: one that makes a new output net (optionally named) and
+// one that drives a net made earlier with Node() -- the form needed for wired pass-gate muxes and feedback loops.
+public sealed partial class Circuit
 {
-    // Restoring stages and pass gates. Each comes in two forms: one that makes a new output net (optionally named) and
-    // one that drives a net made earlier with Node() -- the form needed for wired pass-gate muxes and feedback loops.
-    public sealed partial class Circuit
+    private static readonly string[] OneInput = { "input" };
+    private static readonly string[] TwoInputs = { "a", "b" };
+
+    /// <summary>Declares a net that is driven later (by devices given it as their <c>output</c>).</summary>
+    public Net Node(string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
     {
-        private static readonly string[] OneInput = { "input" };
-        private static readonly string[] TwoInputs = { "a", "b" };
+        CheckNewNetName(name, nameof(name));
+        return NewNet(name ?? AutoName("node"));
+    }
 
-        /// <summary>Declares a net that is driven later (by devices given it as their <c>output</c>).</summary>
-        public Net Node(string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-        {
-            CheckNewNetName(name, nameof(name));
-            return NewNet(name ?? AutoName("node"));
-        }
+    public Net Inverter(Net input, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+        => AddPrimitive(DeviceKind.Inverter, new[] { input }, OneInput, null, null, name, null, null, Site(callerFile, callerLine));
 
-        public Net Inverter(Net input, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-            => AddPrimitive(DeviceKind.Inverter, new[] { input }, OneInput, null, null, name, null, null, Site(callerFile, callerLine));
+    public void Inverter(Net input, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+        => AddPrimitive(DeviceKind.Inverter, new[] { input }, OneInput, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 
-        public void Inverter(Net input, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-            => AddPrimitive(DeviceKind.Inverter, new[] { input }, OneInput, null, null, null, Existing(output), null, Site(callerFile, callerLine));
+    /// <summary>A non-inverting restoring stage (two inverters).</summary>
+    public Net Buffer(Net input, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+        => AddPrimitive(DeviceKind.Buffer, new[] { input }, OneInput, null, null, name, null, null, Site(callerFile, callerLine));
 
-        /// <summary>A non-inverting restoring stage (two inverters).</summary>
-        public Net Buffer(Net input, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-            => AddPrimitive(DeviceKind.Buffer, new[] { input }, OneInput, null, null, name, null, null, Site(callerFile, callerLine));
+    public void Buffer(Net input, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+        => AddPrimitive(DeviceKind.Buffer, new[] { input }, OneInput, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 
-        public void Buffer(Net input, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-            => AddPrimitive(DeviceKind.Buffer, new[] { input }, OneInput, null, null, null, Existing(output), null, Site(callerFile, callerLine));
+    public Net Nand(Net a, Net b, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+        => AddPrimitive(DeviceKind.Nand, new[] { a, b }, TwoInputs, null, null, name, null, null, Site(callerFile, callerLine));
 
-        public Net Nand(Net a, Net b, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-            => AddPrimitive(DeviceKind.Nand, new[] { a, b }, TwoInputs, null, null, name, null, null, Site(callerFile, callerLine));
+    public void Nand(Net a, Net b, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+        => AddPrimitive(DeviceKind.Nand, new[] { a, b }, TwoInputs, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 
-        public void Nand(Net a, Net b, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-            => AddPrimitive(DeviceKind.Nand, new[] { a, b }, TwoInputs, null, null, null, Existing(output), null, Site(callerFile, callerLine));
+    public Net Nor(Net a, Net b, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+        => AddPrimitive(DeviceKind.Nor, new[] { a, b }, TwoInputs, null, null, name, null, null, Site(callerFile, callerLine));
 
-        public Net Nor(Net a, Net b, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-            => AddPrimitive(DeviceKind.Nor, new[] { a, b }, TwoInputs, null, null, name, null, null, Site(callerFile, callerLine));
+    public void Nor(Net a, Net b, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+        => AddPrimitive(DeviceKind.Nor, new[] { a, b }, TwoInputs, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 
-        public void Nor(Net a, Net b, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-            => AddPrimitive(DeviceKind.Nor, new[] { a, b }, TwoInputs, null, null, null, Existing(output), null, Site(callerFile, callerLine));
+    /// <summary>A transmission gate that conducts while <paramref name="when"/> is active.</summary>
+    public Net TransmissionGate(Net input, Phase when, string? name = null, Resistance? onResistance = null,
+        [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+    {
+        CheckPhase(when, nameof(when));
+        return AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, when, null, name, null,
+            CheckResistance(onResistance, nameof(onResistance)), Site(callerFile, callerLine));
+    }
 
-        /// <summary>A transmission gate that conducts while <paramref name="when"/> is active.</summary>
-        public Net TransmissionGate(Net input, Phase when, string? name = null, Resistance? onResistance = null,
-            [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-        {
-            CheckPhase(when, nameof(when));
-            return AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, when, null, name, null,
-                CheckResistance(onResistance, nameof(onResistance)), Site(callerFile, callerLine));
-        }
+    /// <summary>A transmission gate that conducts while <paramref name="when"/> is active, driving an existing net.</summary>
+    public void TransmissionGate(Net input, Phase when, Net output, Resistance? onResistance = null,
+        [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+    {
+        CheckPhase(when, nameof(when));
+        AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, when, null, null, Existing(output),
+            CheckResistance(onResistance, nameof(onResistance)), Site(callerFile, callerLine));
+    }
 
-        /// <summary>A transmission gate that conducts while <paramref name="when"/> is active, driving an existing net.</summary>
-        public void TransmissionGate(Net input, Phase when, Net output, Resistance? onResistance = null,
-            [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-        {
-            CheckPhase(when, nameof(when));
-            AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, when, null, null, Existing(output),
-                CheckResistance(onResistance, nameof(onResistance)), Site(callerFile, callerLine));
-        }
+    /// <summary>A data-controlled transmission gate (as in a mux): it conducts while <paramref name="control"/> is high.</summary>
+    public Net TransmissionGate(Net input, Net control, string? name = null, Resistance? onResistance = null,
+        [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+    {
+        CheckNet(control, nameof(control));
+        return AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, null, control, name, null,
+            CheckResistance(onResistance, nameof(onResistance)), Site(callerFile, callerLine));
+    }
 
-        /// <summary>A data-controlled transmission gate (as in a mux): it conducts while <paramref name="control"/> is high.</summary>
-        public Net TransmissionGate(Net input, Net control, string? name = null, Resistance? onResistance = null,
-            [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-        {
-            CheckNet(control, nameof(control));
-            return AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, null, control, name, null,
-                CheckResistance(onResistance, nameof(onResistance)), Site(callerFile, callerLine));
-        }
-
-        /// <summary>A data-controlled transmission gate driving an existing net (the arms of a pass-gate mux).</summary>
-        public void TransmissionGate(Net input, Net control, Net output, Resistance? onResistance = null,
-            [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-        {
-            CheckNet(control, nameof(control));
-            AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, null, control, null, Existing(output),
-                CheckResistance(onResistance, nameof(onResistance)), Site(callerFile, callerLine));
-        }
+    /// <summary>A data-controlled transmission gate driving an existing net (the arms of a pass-gate mux).</summary>
+    public void TransmissionGate(Net input, Net control, Net output, Resistance? onResistance = null,
+        [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+    {
+        CheckNet(control, nameof(control));
+        AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, null, control, null, Existing(output),
+            CheckResistance(onResistance, nameof(onResistance)), Site(callerFile, callerLine));
     }
 }

@@ -1,22 +1,21 @@
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>A node of the circuit. Nets are made by the <see cref="Circuit"/> that owns them.</summary>
+public sealed class Net
 {
-    /// <summary>A node of the circuit. Nets are made by the <see cref="Circuit"/> that owns them.</summary>
-    public sealed class Net
+    internal Net(Circuit owner, int id, string name)
     {
-        internal Net(Circuit owner, int id, string name)
-        {
-            Owner = owner;
-            Id = id;
-            Name = name;
-        }
-
-        internal Circuit Owner { get; }
-
-        /// <summary>Position of the net in its netlist (0-based, in order of creation).</summary>
-        public int Id { get; }
-
-        public string Name { get; }
-
-        public override string ToString() => Name;
+        Owner = owner;
+        Id = id;
+        Name = name;
     }
+
+    internal Circuit Owner { get; }
+
+    /// <summary>Position of the net in its netlist (0-based, in order of creation).</summary>
+    public int Id { get; }
+
+    public string Name { get; }
+
+    public override string ToString() => Name;
 }

@@ -1,30 +1,29 @@
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>The two overlap windows of a clock and its late complement (see <see cref="PhaseWindow"/>).</summary>
+public sealed class ClockOverlaps
 {
-    /// <summary>The two overlap windows of a clock and its late complement (see <see cref="PhaseWindow"/>).</summary>
-    public sealed class ClockOverlaps
+    private ClockOverlaps(Clock clock, TimeInterval oneOne, TimeInterval zeroZero)
     {
-        private ClockOverlaps(Clock clock, TimeInterval oneOne, TimeInterval zeroZero)
-        {
-            Clock = clock;
-            OneOne = oneOne;
-            ZeroZero = zeroZero;
-        }
+        Clock = clock;
+        OneOne = oneOne;
+        ZeroZero = zeroZero;
+    }
 
-        public Clock Clock { get; }
+    public Clock Clock { get; }
 
-        /// <summary>Clock and complement both high, after the rising edge: both phases' pass gates conduct.</summary>
-        public TimeInterval OneOne { get; }
+    /// <summary>Clock and complement both high, after the rising edge: both phases' pass gates conduct.</summary>
+    public TimeInterval OneOne { get; }
 
-        /// <summary>Clock and complement both low, after the falling edge: both phases' pass gates conduct.</summary>
-        public TimeInterval ZeroZero { get; }
+    /// <summary>Clock and complement both low, after the falling edge: both phases' pass gates conduct.</summary>
+    public TimeInterval ZeroZero { get; }
 
-        public static ClockOverlaps Of(Clock clock)
-        {
-            var high = PhaseWindow.Of(clock.High);
-            var low = PhaseWindow.Of(clock.Low);
-            var skew = clock.ComplementSkew;
-            // The Low window opens at the falling edge: the 0-0 overlap starts there; the 1-1 overlap starts where High opens.
-            return new ClockOverlaps(clock, new TimeInterval(high.Opens, high.Opens + skew), new TimeInterval(low.Opens, low.Opens + skew));
-        }
+    public static ClockOverlaps Of(Clock clock)
+    {
+        var high = PhaseWindow.Of(clock.High);
+        var low = PhaseWindow.Of(clock.Low);
+        var skew = clock.ComplementSkew;
+        // The Low window opens at the falling edge: the 0-0 overlap starts there; the 1-1 overlap starts where High opens.
+        return new ClockOverlaps(clock, new TimeInterval(high.Opens, high.Opens + skew), new TimeInterval(low.Opens, low.Opens + skew));
     }
 }

@@ -1,21 +1,20 @@
 using System.Collections.Generic;
 
-namespace Phaseward
-{
-    /// <summary>
-    /// The windows of the phases one computation asks about, each made once: <see cref="PhaseWindow.Of"/> makes a new
-    /// window per call, and a rule asks once per latch path. Kept for one run rather than on the phase or the netlist,
-    /// because a clock's skew and delay can fall back to its circuit's process figures.
-    /// </summary>
-    internal sealed class PhaseWindowCache
-    {
-        private readonly Dictionary<Phase, PhaseWindow> windows = new();
+namespace Phaseward;
 
-        public PhaseWindow Of(Phase phase)
-        {
-            if (!windows.TryGetValue(phase, out var window))
-                windows.Add(phase, window = PhaseWindow.Of(phase));
-            return window;
-        }
+/// <summary>
+/// The windows of the phases one computation asks about, each made once: <see cref="PhaseWindow.Of"/> makes a new
+/// window per call, and a rule asks once per latch path. Kept for one run rather than on the phase or the netlist,
+/// because a clock's skew and delay can fall back to its circuit's process figures.
+/// </summary>
+internal sealed class PhaseWindowCache
+{
+    private readonly Dictionary<Phase, PhaseWindow> windows = new();
+
+    public PhaseWindow Of(Phase phase)
+    {
+        if (!windows.TryGetValue(phase, out var window))
+            windows.Add(phase, window = PhaseWindow.Of(phase));
+        return window;
     }
 }

@@ -1,7 +1,6 @@
-namespace System.Runtime.CompilerServices
+namespace System.Runtime.CompilerServices;
+
+// netstandard2.0 lacks this marker type; the compiler needs it for init-only setters.
+internal static class IsExternalInit
 {
-    // netstandard2.0 lacks this marker type; the compiler needs it for init-only setters.
-    internal static class IsExternalInit
-    {
-    }
 }

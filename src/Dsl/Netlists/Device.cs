@@ -1,71 +1,70 @@
 using System.Collections.Generic;
 
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>A primitive: a restoring stage or a pass device, with its connections and where it was written.</summary>
+public sealed class Device
 {
-    /// <summary>A primitive: a restoring stage or a pass device, with its connections and where it was written.</summary>
-    public sealed class Device
+    private readonly string? nameInCell;
+    private string? name;
+
+    /// <param name="name">The device's name; null for a part of a cell, named <paramref name="nameInCell"/> inside it.</param>
+    internal Device(int id, string? name, DeviceKind kind, IReadOnlyList<Net> inputs, Net output, Phase? clockControl,
+        Net? dataControl, Resistance? resistance, bool isWeak, SourceSpan span, MacroInstance? macro, string? role, string? nameInCell = null)
     {
-        private readonly string? nameInCell;
-        private string? name;
-
-        /// <param name="name">The device's name; null for a part of a cell, named <paramref name="nameInCell"/> inside it.</param>
-        internal Device(int id, string? name, DeviceKind kind, IReadOnlyList<Net> inputs, Net output, Phase? clockControl,
-            Net? dataControl, Resistance? resistance, bool isWeak, SourceSpan span, MacroInstance? macro, string? role, string? nameInCell = null)
-        {
-            if (name is null && (macro is null || nameInCell is null))
-                throw new System.ArgumentException("A device needs a name, or a cell and its name inside the cell.", nameof(name));
-            Id = id;
-            this.name = name;
-            this.nameInCell = nameInCell;
-            Kind = kind;
-            Inputs = inputs;
-            Output = output;
-            ClockControl = clockControl;
-            DataControl = dataControl;
-            ResistanceOverride = resistance;
-            IsWeak = isWeak;
-            Span = span;
-            Macro = macro;
-            Role = role;
-        }
-
-        public int Id { get; }
-
-        /// <summary>The device's name; a cell's parts are named "cell.part", composed when first asked for (a large
-        /// design then does not hold a string per part that nobody reads).</summary>
-        public string Name => name ??= Macro!.Name + "." + nameInCell;
-
-        public DeviceKind Kind { get; }
-
-        /// <summary>Data inputs (one for inverters, buffers and pass gates; two for NAND and NOR).</summary>
-        public IReadOnlyList<Net> Inputs { get; }
-
-        public Net Output { get; }
-
-        /// <summary>The clock phase a pass gate conducts in (null for data-controlled gates and restoring stages).</summary>
-        public Phase? ClockControl { get; }
-
-        /// <summary>The net that controls a data-controlled pass gate (it conducts while the net is high).</summary>
-        public Net? DataControl { get; }
-
-        /// <summary>An on-resistance set in the design for this device (null: the process figure applies).</summary>
-        public Resistance? ResistanceOverride { get; }
-
-        /// <summary>A deliberately weak driver (a keeper's feedback stage).</summary>
-        public bool IsWeak { get; }
-
-        public SourceSpan Span { get; }
-
-        /// <summary>The library cell this device belongs to (null when written as a primitive).</summary>
-        public MacroInstance? Macro { get; }
-
-        /// <summary>The device's role inside its cell ("pass", "inverter", "feedback-inverter", "feedback-pass", ...).</summary>
-        public string? Role { get; }
-
-        public bool IsRestoring => Kind.IsRestoring();
-
-        public bool IsPassDevice => Kind == DeviceKind.TransmissionGate;
-
-        public override string ToString() => $"{Kind} {Name}";
+        if (name is null && (macro is null || nameInCell is null))
+            throw new System.ArgumentException("A device needs a name, or a cell and its name inside the cell.", nameof(name));
+        Id = id;
+        this.name = name;
+        this.nameInCell = nameInCell;
+        Kind = kind;
+        Inputs = inputs;
+        Output = output;
+        ClockControl = clockControl;
+        DataControl = dataControl;
+        ResistanceOverride = resistance;
+        IsWeak = isWeak;
+        Span = span;
+        Macro = macro;
+        Role = role;
     }
+
+    public int Id { get; }
+
+    /// <summary>The device's name; a cell's parts are named "cell.part", composed when first asked for (a large
+    /// design then does not hold a string per part that nobody reads).</summary>
+    public string Name => name ??= Macro!.Name + "." + nameInCell;
+
+    public DeviceKind Kind { get; }
+
+    /// <summary>Data inputs (one for inverters, buffers and pass gates; two for NAND and NOR).</summary>
+    public IReadOnlyList<Net> Inputs { get; }
+
+    public Net Output { get; }
+
+    /// <summary>The clock phase a pass gate conducts in (null for data-controlled gates and restoring stages).</summary>
+    public Phase? ClockControl { get; }
+
+    /// <summary>The net that controls a data-controlled pass gate (it conducts while the net is high).</summary>
+    public Net? DataControl { get; }
+
+    /// <summary>An on-resistance set in the design for this device (null: the process figure applies).</summary>
+    public Resistance? ResistanceOverride { get; }
+
+    /// <summary>A deliberately weak driver (a keeper's feedback stage).</summary>
+    public bool IsWeak { get; }
+
+    public SourceSpan Span { get; }
+
+    /// <summary>The library cell this device belongs to (null when written as a primitive).</summary>
+    public MacroInstance? Macro { get; }
+
+    /// <summary>The device's role inside its cell ("pass", "inverter", "feedback-inverter", "feedback-pass", ...).</summary>
+    public string? Role { get; }
+
+    public bool IsRestoring => Kind.IsRestoring();
+
+    public bool IsPassDevice => Kind == DeviceKind.TransmissionGate;
+
+    public override string ToString() => $"{Kind} {Name}";
 }

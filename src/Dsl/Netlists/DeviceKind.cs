@@ -1,23 +1,22 @@
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>The primitives a netlist is made of. Macros expand into these.</summary>
+public enum DeviceKind
 {
-    /// <summary>The primitives a netlist is made of. Macros expand into these.</summary>
-    public enum DeviceKind
-    {
-        Inverter,
-        Buffer,
-        Nand,
-        Nor,
+    Inverter,
+    Buffer,
+    Nand,
+    Nor,
 
-        /// <summary>A transmission gate, controlled by a clock phase or by a data net.</summary>
-        TransmissionGate,
-    }
+    /// <summary>A transmission gate, controlled by a clock phase or by a data net.</summary>
+    TransmissionGate,
+}
 
-    public static class DeviceKindExtensions
-    {
-        /// <summary>A restoring stage drives its output from the supply rails.</summary>
-        public static bool IsRestoring(this DeviceKind kind) => kind != DeviceKind.TransmissionGate;
+public static class DeviceKindExtensions
+{
+    /// <summary>A restoring stage drives its output from the supply rails.</summary>
+    public static bool IsRestoring(this DeviceKind kind) => kind != DeviceKind.TransmissionGate;
 
-        /// <summary>A restoring stage whose output is the inverse of its input(s).</summary>
-        public static bool IsInverting(this DeviceKind kind) => kind is DeviceKind.Inverter or DeviceKind.Nand or DeviceKind.Nor;
-    }
+    /// <summary>A restoring stage whose output is the inverse of its input(s).</summary>
+    public static bool IsInverting(this DeviceKind kind) => kind is DeviceKind.Inverter or DeviceKind.Nand or DeviceKind.Nor;
 }

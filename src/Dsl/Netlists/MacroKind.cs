@@ -1,12 +1,11 @@
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>The library cells that expand into primitives.</summary>
+public enum MacroKind
 {
-    /// <summary>The library cells that expand into primitives.</summary>
-    public enum MacroKind
-    {
-        DynamicLatch,
-        StaticLatch,
-        DynamicRegister,
-        StaticRegister,
-        Keeper,
-    }
+    DynamicLatch,
+    StaticLatch,
+    DynamicRegister,
+    StaticRegister,
+    Keeper,
 }

@@ -1,145 +1,144 @@
 using System;
 using System.Collections.Generic;
 
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>
+/// The elaborated design: primitives only, with nets, clocks, ports and the electrical figures the rules use.
+/// Built once by <see cref="Circuit"/>; the indexes (drivers, loads, capacitances) are computed up front so that
+/// every rule can run in time linear in the size of the design.
+/// </summary>
+public sealed class Netlist
 {
-    /// <summary>
-    /// The elaborated design: primitives only, with nets, clocks, ports and the electrical figures the rules use.
-    /// Built once by <see cref="Circuit"/>; the indexes (drivers, loads, capacitances) are computed up front so that
-    /// every rule can run in time linear in the size of the design.
-    /// </summary>
-    public sealed class Netlist
+    private readonly NetDeviceIndex drivers;
+    private readonly NetDeviceIndex dataLoads;
+    private readonly NetDeviceIndex controlLoads;
+    private readonly Net[] netArray;
+    private readonly Capacitance[] capacitances;
+    private readonly IReadOnlyDictionary<int, Current> leakageOverrides;
+    private readonly bool[] isInput;
+
+    internal Netlist(string designName, Process process, IReadOnlyList<Net> nets, IReadOnlyList<Device> devices,
+        IReadOnlyList<Clock> clocks, IReadOnlyList<MacroInstance> macros, IReadOnlyList<Port> inputs, IReadOnlyList<Port> outputs,
+        IReadOnlyDictionary<int, Capacitance> capacitanceOverrides, IReadOnlyDictionary<int, Current> leakage)
     {
-        private readonly NetDeviceIndex drivers;
-        private readonly NetDeviceIndex dataLoads;
-        private readonly NetDeviceIndex controlLoads;
-        private readonly Net[] netArray;
-        private readonly Capacitance[] capacitances;
-        private readonly IReadOnlyDictionary<int, Current> leakageOverrides;
-        private readonly bool[] isInput;
+        DesignName = designName;
+        Process = process;
+        Nets = nets;
+        Devices = devices;
+        Clocks = clocks;
+        Macros = macros;
+        Inputs = inputs;
+        Outputs = outputs;
+        netArray = nets as Net[] ?? new List<Net>(nets).ToArray();
+        leakageOverrides = leakage;
 
-        internal Netlist(string designName, Process process, IReadOnlyList<Net> nets, IReadOnlyList<Device> devices,
-            IReadOnlyList<Clock> clocks, IReadOnlyList<MacroInstance> macros, IReadOnlyList<Port> inputs, IReadOnlyList<Port> outputs,
-            IReadOnlyDictionary<int, Capacitance> capacitanceOverrides, IReadOnlyDictionary<int, Current> leakage)
-        {
-            DesignName = designName;
-            Process = process;
-            Nets = nets;
-            Devices = devices;
-            Clocks = clocks;
-            Macros = macros;
-            Inputs = inputs;
-            Outputs = outputs;
-            netArray = nets as Net[] ?? new List<Net>(nets).ToArray();
-            leakageOverrides = leakage;
+        drivers = NetDeviceIndex.Build(devices, nets.Count, NetConnection.Output);
+        dataLoads = NetDeviceIndex.Build(devices, nets.Count, NetConnection.DataInput);
+        controlLoads = NetDeviceIndex.Build(devices, nets.Count, NetConnection.Control);
 
-            drivers = NetDeviceIndex.Build(devices, nets.Count, NetConnection.Output);
-            dataLoads = NetDeviceIndex.Build(devices, nets.Count, NetConnection.DataInput);
-            controlLoads = NetDeviceIndex.Build(devices, nets.Count, NetConnection.Control);
+        isInput = new bool[nets.Count];
+        foreach (var port in inputs)
+            isInput[port.Net.Id] = true;
 
-            isInput = new bool[nets.Count];
-            foreach (var port in inputs)
-                isInput[port.Net.Id] = true;
+        var enableLoads = new int[nets.Count];
+        foreach (var clock in clocks)
+            if (clock.Enable is { } enable)
+                enableLoads[enable.Id]++;
 
-            var enableLoads = new int[nets.Count];
-            foreach (var clock in clocks)
-                if (clock.Enable is { } enable)
-                    enableLoads[enable.Id]++;
+        capacitances = new Capacitance[nets.Count];
+        foreach (var net in netArray)
+            capacitances[net.Id] = capacitanceOverrides.TryGetValue(net.Id, out var set)
+                ? set
+                : EstimateCapacitance(net, enableLoads[net.Id]);
+    }
 
-            capacitances = new Capacitance[nets.Count];
-            foreach (var net in netArray)
-                capacitances[net.Id] = capacitanceOverrides.TryGetValue(net.Id, out var set)
-                    ? set
-                    : EstimateCapacitance(net, enableLoads[net.Id]);
-        }
+    public string DesignName { get; }
 
-        public string DesignName { get; }
+    public Process Process { get; }
 
-        public Process Process { get; }
+    public IReadOnlyList<Net> Nets { get; }
 
-        public IReadOnlyList<Net> Nets { get; }
+    public IReadOnlyList<Device> Devices { get; }
 
-        public IReadOnlyList<Device> Devices { get; }
+    /// <summary>Root and derived clocks, in order of declaration.</summary>
+    public IReadOnlyList<Clock> Clocks { get; }
 
-        /// <summary>Root and derived clocks, in order of declaration.</summary>
-        public IReadOnlyList<Clock> Clocks { get; }
+    public IReadOnlyList<MacroInstance> Macros { get; }
 
-        public IReadOnlyList<MacroInstance> Macros { get; }
+    public IReadOnlyList<Port> Inputs { get; }
 
-        public IReadOnlyList<Port> Inputs { get; }
+    public IReadOnlyList<Port> Outputs { get; }
 
-        public IReadOnlyList<Port> Outputs { get; }
+    /// <summary>Devices whose output is this net (restoring stages and pass gates).</summary>
+    public IReadOnlyList<Device> DriversOf(Net net) => drivers.Of(Index(net)).AsReadOnlyList();
 
-        /// <summary>Devices whose output is this net (restoring stages and pass gates).</summary>
-        public IReadOnlyList<Device> DriversOf(Net net) => drivers.Of(Index(net)).AsReadOnlyList();
+    /// <summary>Devices that take this net as a data input.</summary>
+    public IReadOnlyList<Device> DataLoadsOf(Net net) => dataLoads.Of(Index(net)).AsReadOnlyList();
 
-        /// <summary>Devices that take this net as a data input.</summary>
-        public IReadOnlyList<Device> DataLoadsOf(Net net) => dataLoads.Of(Index(net)).AsReadOnlyList();
+    /// <summary>Pass gates controlled by this net.</summary>
+    public IReadOnlyList<Device> ControlLoadsOf(Net net) => controlLoads.Of(Index(net)).AsReadOnlyList();
 
-        /// <summary>Pass gates controlled by this net.</summary>
-        public IReadOnlyList<Device> ControlLoadsOf(Net net) => controlLoads.Of(Index(net)).AsReadOnlyList();
+    // The same indexes as ranges, for the rules' hot loops: no list object, no boxed enumerator.
+    internal DeviceRange DriverList(Net net) => drivers.Of(Index(net));
 
-        // The same indexes as ranges, for the rules' hot loops: no list object, no boxed enumerator.
-        internal DeviceRange DriverList(Net net) => drivers.Of(Index(net));
+    internal DeviceRange DataLoadList(Net net) => dataLoads.Of(Index(net));
 
-        internal DeviceRange DataLoadList(Net net) => dataLoads.Of(Index(net));
+    internal DeviceRange ControlLoadList(Net net) => controlLoads.Of(Index(net));
 
-        internal DeviceRange ControlLoadList(Net net) => controlLoads.Of(Index(net));
+    /// <summary>True for a primary input (driven from outside through the process's driver resistance).</summary>
+    public bool IsInput(Net net) => isInput[Index(net)];
 
-        /// <summary>True for a primary input (driven from outside through the process's driver resistance).</summary>
-        public bool IsInput(Net net) => isInput[Index(net)];
+    /// <summary>
+    /// The net's capacitance: the value set in the design, else the process estimate
+    /// wire + gate × (gate loads) + diffusion × (pass-gate terminals and stage outputs on the net).
+    /// </summary>
+    public Capacitance CapacitanceOf(Net net) => capacitances[Index(net)];
 
-        /// <summary>
-        /// The net's capacitance: the value set in the design, else the process estimate
-        /// wire + gate × (gate loads) + diffusion × (pass-gate terminals and stage outputs on the net).
-        /// </summary>
-        public Capacitance CapacitanceOf(Net net) => capacitances[Index(net)];
+    /// <summary>The storage leakage of this net: the value set in the design, else the process figure.</summary>
+    public Current LeakageOf(Net net) => leakageOverrides.TryGetValue(Index(net), out var set) ? set : Process.StorageLeakage;
 
-        /// <summary>The storage leakage of this net: the value set in the design, else the process figure.</summary>
-        public Current LeakageOf(Net net) => leakageOverrides.TryGetValue(Index(net), out var set) ? set : Process.StorageLeakage;
+    /// <summary>The device's effective resistance: its own figure, else the process figure for its kind.</summary>
+    public Resistance ResistanceOf(Device device)
+        => device.ResistanceOverride
+           ?? (device.IsPassDevice ? Process.PassGateResistance
+               : device.IsWeak ? Process.KeeperResistance
+               : Process.DriverResistance);
 
-        /// <summary>The device's effective resistance: its own figure, else the process figure for its kind.</summary>
-        public Resistance ResistanceOf(Device device)
-            => device.ResistanceOverride
-               ?? (device.IsPassDevice ? Process.PassGateResistance
-                   : device.IsWeak ? Process.KeeperResistance
-                   : Process.DriverResistance);
-
-        /// <summary>All devices that have no restoring driver on the net, i.e. whose output is held only through pass devices.</summary>
-        public bool IsDrivenOnlyThroughPassDevices(Net net)
-        {
-            var netDrivers = DriverList(net);
-            if (netDrivers.Length == 0 || IsInput(net))
+    /// <summary>All devices that have no restoring driver on the net, i.e. whose output is held only through pass devices.</summary>
+    public bool IsDrivenOnlyThroughPassDevices(Net net)
+    {
+        var netDrivers = DriverList(net);
+        if (netDrivers.Length == 0 || IsInput(net))
+            return false;
+        foreach (var driver in netDrivers)
+            if (driver.IsRestoring)
                 return false;
-            foreach (var driver in netDrivers)
-                if (driver.IsRestoring)
-                    return false;
-            return true;
-        }
+        return true;
+    }
 
-        public override string ToString() => NetlistText.Write(this, includeSpans: false);
+    public override string ToString() => NetlistText.Write(this, includeSpans: false);
 
-        private Capacitance EstimateCapacitance(Net net, int enableLoads)
+    private Capacitance EstimateCapacitance(Net net, int enableLoads)
+    {
+        var gateLoads = enableLoads;
+        var diffusionTerminals = 0;
+        foreach (var load in DataLoadList(net))
         {
-            var gateLoads = enableLoads;
-            var diffusionTerminals = 0;
-            foreach (var load in DataLoadList(net))
-            {
-                if (load.IsPassDevice) diffusionTerminals++;
-                else gateLoads++;
-            }
-
-            gateLoads += ControlLoadList(net).Length;
-            diffusionTerminals += DriverList(net).Length;
-            return Process.WireCapacitance + Process.GateCapacitance * gateLoads + Process.DiffusionCapacitance * diffusionTerminals;
+            if (load.IsPassDevice) diffusionTerminals++;
+            else gateLoads++;
         }
 
-        private int Index(Net net)
-        {
-            if (net is null) throw new ArgumentNullException(nameof(net));
-            if ((uint)net.Id >= (uint)netArray.Length || !ReferenceEquals(netArray[net.Id], net))
-                throw new ArgumentException($"Net '{net.Name}' does not belong to the netlist of design '{DesignName}'.", nameof(net));
-            return net.Id;
-        }
+        gateLoads += ControlLoadList(net).Length;
+        diffusionTerminals += DriverList(net).Length;
+        return Process.WireCapacitance + Process.GateCapacitance * gateLoads + Process.DiffusionCapacitance * diffusionTerminals;
+    }
+
+    private int Index(Net net)
+    {
+        if (net is null) throw new ArgumentNullException(nameof(net));
+        if ((uint)net.Id >= (uint)netArray.Length || !ReferenceEquals(netArray[net.Id], net))
+            throw new ArgumentException($"Net '{net.Name}' does not belong to the netlist of design '{DesignName}'.", nameof(net));
+        return net.Id;
     }
 }

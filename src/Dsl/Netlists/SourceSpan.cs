@@ -1,56 +1,55 @@
 using System;
 using System.Collections.Generic;
 
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>
+/// Where a device, clock or port was written. At run time only the file and line of the call are known; at
+/// compile time the analyzer also records the column, the character span and the chain of call sites that led
+/// there through the design's helper methods.
+/// </summary>
+public sealed class SourceSpan : IEquatable<SourceSpan>
 {
-    /// <summary>
-    /// Where a device, clock or port was written. At run time only the file and line of the call are known; at
-    /// compile time the analyzer also records the column, the character span and the chain of call sites that led
-    /// there through the design's helper methods.
-    /// </summary>
-    public sealed class SourceSpan : IEquatable<SourceSpan>
+    private static readonly IReadOnlyList<SourceSpan> NoCallers = Array.Empty<SourceSpan>();
+
+    public SourceSpan(string path, int line, int column = 0, int start = -1, int length = 0, IReadOnlyList<SourceSpan>? callers = null)
     {
-        private static readonly IReadOnlyList<SourceSpan> NoCallers = Array.Empty<SourceSpan>();
-
-        public SourceSpan(string path, int line, int column = 0, int start = -1, int length = 0, IReadOnlyList<SourceSpan>? callers = null)
-        {
-            Path = path ?? string.Empty;
-            Line = line;
-            Column = column;
-            Start = start;
-            Length = length;
-            Callers = callers ?? NoCallers;
-        }
-
-        public static SourceSpan Unknown { get; } = new(string.Empty, 0);
-
-        /// <summary>The source file ("" when unknown).</summary>
-        public string Path { get; }
-
-        /// <summary>1-based line (0 when unknown).</summary>
-        public int Line { get; }
-
-        /// <summary>1-based column (0 when unknown, as at run time).</summary>
-        public int Column { get; }
-
-        /// <summary>0-based character offset in the file (-1 when unknown).</summary>
-        public int Start { get; }
-
-        public int Length { get; }
-
-        /// <summary>The call sites that led here, outermost first (the call in <c>Describe</c> comes first).</summary>
-        public IReadOnlyList<SourceSpan> Callers { get; }
-
-        public bool IsKnown => Line > 0;
-
-        public bool Equals(SourceSpan? other)
-            => other is not null && Path == other.Path && Line == other.Line && Column == other.Column && Start == other.Start && Length == other.Length;
-
-        public override bool Equals(object? obj) => Equals(obj as SourceSpan);
-
-        public override int GetHashCode() => (Path.GetHashCode() * 397) ^ (Line * 31) ^ Start;
-
-        public override string ToString()
-            => !IsKnown ? "(unknown location)" : Column > 0 ? $"{Path}({Line},{Column})" : $"{Path}({Line})";
+        Path = path ?? string.Empty;
+        Line = line;
+        Column = column;
+        Start = start;
+        Length = length;
+        Callers = callers ?? NoCallers;
     }
+
+    public static SourceSpan Unknown { get; } = new(string.Empty, 0);
+
+    /// <summary>The source file ("" when unknown).</summary>
+    public string Path { get; }
+
+    /// <summary>1-based line (0 when unknown).</summary>
+    public int Line { get; }
+
+    /// <summary>1-based column (0 when unknown, as at run time).</summary>
+    public int Column { get; }
+
+    /// <summary>0-based character offset in the file (-1 when unknown).</summary>
+    public int Start { get; }
+
+    public int Length { get; }
+
+    /// <summary>The call sites that led here, outermost first (the call in <c>Describe</c> comes first).</summary>
+    public IReadOnlyList<SourceSpan> Callers { get; }
+
+    public bool IsKnown => Line > 0;
+
+    public bool Equals(SourceSpan? other)
+        => other is not null && Path == other.Path && Line == other.Line && Column == other.Column && Start == other.Start && Length == other.Length;
+
+    public override bool Equals(object? obj) => Equals(obj as SourceSpan);
+
+    public override int GetHashCode() => (Path.GetHashCode() * 397) ^ (Line * 31) ^ Start;
+
+    public override string ToString()
+        => !IsKnown ? "(unknown location)" : Column > 0 ? $"{Path}({Line},{Column})" : $"{Path}({Line})";
 }

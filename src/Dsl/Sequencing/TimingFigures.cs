@@ -3,148 +3,147 @@ using System.Collections.Generic;
 using System.Globalization;
 using System.Text;
 
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>First-order timing figures of one latch, derived from its devices (see <see cref="TimingFigures"/>).</summary>
+public sealed class LatchTiming
 {
-    /// <summary>First-order timing figures of one latch, derived from its devices (see <see cref="TimingFigures"/>).</summary>
-    public sealed class LatchTiming
+    internal LatchTiming(Latch latch, Time entry, Time output, Time feedback)
     {
-        internal LatchTiming(Latch latch, Time entry, Time output, Time feedback)
-        {
-            Latch = latch;
-            EntryDelay = entry;
-            OutputDelay = output;
-            Setup = entry + (latch.FeedbackGates.Count > 0 ? output + feedback : Time.Zero);
-            DataToOutput = entry + output;
-            Window = latch.Window;
-            Hold = Window.Length - (latch.Phase.Polarity == ClockPolarity.High
-                ? latch.Phase.Clock.Period * latch.Phase.Clock.Duty
-                : latch.Phase.Clock.Period * (1 - latch.Phase.Clock.Duty));
-        }
-
-        public Latch Latch { get; }
-
-        public string Name => Latch.Name;
-
-        public Phase Phase => Latch.Phase;
-
-        /// <summary>When the latch is transparent (made once, with the other figures).</summary>
-        public PhaseWindow Window { get; }
-
-        /// <summary>t of the entry gate charging the storage node.</summary>
-        public Time EntryDelay { get; }
-
-        /// <summary>t of the output stage.</summary>
-        public Time OutputDelay { get; }
-
-        /// <summary>
-        /// How long before the window closes the input must be settled: the entry gate's delay, plus (static latch) the
-        /// output and feedback stages, so that the feedback loop holds the new value when the feedback gate takes over.
-        /// </summary>
-        public Time Setup { get; }
-
-        /// <summary>Delay from the input (while transparent) to the output: entry gate + output stage.</summary>
-        public Time DataToOutput { get; }
-
-        /// <summary>Delay from the window opening (data waiting) to the output: entry gate + output stage.</summary>
-        public Time ClockToOutput => DataToOutput;
-
-        /// <summary>How long after the nominal closing edge the input must stay stable: the gate conducts until the late complement arrives (the complement skew).</summary>
-        public Time Hold { get; }
+        Latch = latch;
+        EntryDelay = entry;
+        OutputDelay = output;
+        Setup = entry + (latch.FeedbackGates.Count > 0 ? output + feedback : Time.Zero);
+        DataToOutput = entry + output;
+        Window = latch.Window;
+        Hold = Window.Length - (latch.Phase.Polarity == ClockPolarity.High
+            ? latch.Phase.Clock.Period * latch.Phase.Clock.Duty
+            : latch.Phase.Clock.Period * (1 - latch.Phase.Clock.Duty));
     }
 
-    /// <summary>First-order timing figures of one master–slave register (see <see cref="TimingFigures"/>).</summary>
-    public sealed class RegisterTiming
-    {
-        internal RegisterTiming(Register register, LatchTiming master, LatchTiming slave)
-        {
-            Register = register;
-            Setup = master.Setup;
-            ClockToOutput = slave.EntryDelay + master.OutputDelay + slave.OutputDelay;
-            ClockToOutputMin = slave.EntryDelay + slave.OutputDelay;
-            var overlaps = ClockOverlaps.Of(register.Clock);
-            Hold = register.IsPositiveEdge ? overlaps.OneOne.Length : overlaps.ZeroZero.Length;
-            MasterSlaveRace = master.EntryDelay + master.OutputDelay + slave.EntryDelay;
-        }
+    public Latch Latch { get; }
 
-        public Register Register { get; }
+    public string Name => Latch.Name;
 
-        public string Name => Register.Name;
+    public Phase Phase => Latch.Phase;
 
-        public Clock Clock => Register.Clock;
+    /// <summary>When the latch is transparent (made once, with the other figures).</summary>
+    public PhaseWindow Window { get; }
 
-        /// <summary>Setup time before the capturing edge: the master latch's setup (dynamic: its input pass gate's delay).</summary>
-        public Time Setup { get; }
+    /// <summary>t of the entry gate charging the storage node.</summary>
+    public Time EntryDelay { get; }
 
-        /// <summary>Clock-to-output (propagation): slave pass gate + the master's and the slave's inverters.</summary>
-        public Time ClockToOutput { get; }
-
-        /// <summary>Clock-to-output (contamination, data settled early): slave pass gate + the slave's inverter.</summary>
-        public Time ClockToOutputMin { get; }
-
-        /// <summary>Hold time: the overlap after the capturing edge during which the master still conducts (1-1 for a rising-edge register).</summary>
-        public Time Hold { get; }
-
-        /// <summary>t(TG1) + t(I1) + t(TG2): how long data entering the master takes to reach the slave's storage node (must exceed the other overlap).</summary>
-        public Time MasterSlaveRace { get; }
-    }
+    /// <summary>t of the output stage.</summary>
+    public Time OutputDelay { get; }
 
     /// <summary>
-    /// Setup, hold and clock-to-output of every latch and register of a netlist, derived from their devices with the
-    /// first-order stage delay 0.69·R·C. For a report or the command line: <c>TimingFigures.For(netlist).ToString()</c>
-    /// prints a table. First-order estimates: they do not replace transistor-level simulation or sign-off.
+    /// How long before the window closes the input must be settled: the entry gate's delay, plus (static latch) the
+    /// output and feedback stages, so that the feedback loop holds the new value when the feedback gate takes over.
     /// </summary>
-    public sealed class TimingFigures
+    public Time Setup { get; }
+
+    /// <summary>Delay from the input (while transparent) to the output: entry gate + output stage.</summary>
+    public Time DataToOutput { get; }
+
+    /// <summary>Delay from the window opening (data waiting) to the output: entry gate + output stage.</summary>
+    public Time ClockToOutput => DataToOutput;
+
+    /// <summary>How long after the nominal closing edge the input must stay stable: the gate conducts until the late complement arrives (the complement skew).</summary>
+    public Time Hold { get; }
+}
+
+/// <summary>First-order timing figures of one master–slave register (see <see cref="TimingFigures"/>).</summary>
+public sealed class RegisterTiming
+{
+    internal RegisterTiming(Register register, LatchTiming master, LatchTiming slave)
     {
-        private readonly LatchTiming[] byLatch;
+        Register = register;
+        Setup = master.Setup;
+        ClockToOutput = slave.EntryDelay + master.OutputDelay + slave.OutputDelay;
+        ClockToOutputMin = slave.EntryDelay + slave.OutputDelay;
+        var overlaps = ClockOverlaps.Of(register.Clock);
+        Hold = register.IsPositiveEdge ? overlaps.OneOne.Length : overlaps.ZeroZero.Length;
+        MasterSlaveRace = master.EntryDelay + master.OutputDelay + slave.EntryDelay;
+    }
 
-        private TimingFigures(LatchModel model)
+    public Register Register { get; }
+
+    public string Name => Register.Name;
+
+    public Clock Clock => Register.Clock;
+
+    /// <summary>Setup time before the capturing edge: the master latch's setup (dynamic: its input pass gate's delay).</summary>
+    public Time Setup { get; }
+
+    /// <summary>Clock-to-output (propagation): slave pass gate + the master's and the slave's inverters.</summary>
+    public Time ClockToOutput { get; }
+
+    /// <summary>Clock-to-output (contamination, data settled early): slave pass gate + the slave's inverter.</summary>
+    public Time ClockToOutputMin { get; }
+
+    /// <summary>Hold time: the overlap after the capturing edge during which the master still conducts (1-1 for a rising-edge register).</summary>
+    public Time Hold { get; }
+
+    /// <summary>t(TG1) + t(I1) + t(TG2): how long data entering the master takes to reach the slave's storage node (must exceed the other overlap).</summary>
+    public Time MasterSlaveRace { get; }
+}
+
+/// <summary>
+/// Setup, hold and clock-to-output of every latch and register of a netlist, derived from their devices with the
+/// first-order stage delay 0.69·R·C. For a report or the command line: <c>TimingFigures.For(netlist).ToString()</c>
+/// prints a table. First-order estimates: they do not replace transistor-level simulation or sign-off.
+/// </summary>
+public sealed class TimingFigures
+{
+    private readonly LatchTiming[] byLatch;
+
+    private TimingFigures(LatchModel model)
+    {
+        Model = model;
+        byLatch = new LatchTiming[model.Latches.Count];
+        foreach (var latch in model.Latches)
         {
-            Model = model;
-            byLatch = new LatchTiming[model.Latches.Count];
-            foreach (var latch in model.Latches)
-            {
-                var feedback = latch.FeedbackStage is { } stage ? model.StageDelay(stage) : Time.Zero;
-                byLatch[latch.Index] = new LatchTiming(latch, model.EntryDelay(latch), model.OutputDelay(latch), feedback);
-            }
-
-            var registers = new List<RegisterTiming>();
-            foreach (var register in model.Registers)
-                registers.Add(new RegisterTiming(register, byLatch[register.Master.Index], byLatch[register.Slave.Index]));
-            Registers = registers;
+            var feedback = latch.FeedbackStage is { } stage ? model.StageDelay(stage) : Time.Zero;
+            byLatch[latch.Index] = new LatchTiming(latch, model.EntryDelay(latch), model.OutputDelay(latch), feedback);
         }
 
-        public LatchModel Model { get; }
+        var registers = new List<RegisterTiming>();
+        foreach (var register in model.Registers)
+            registers.Add(new RegisterTiming(register, byLatch[register.Master.Index], byLatch[register.Slave.Index]));
+        Registers = registers;
+    }
 
-        /// <summary>Every latch, register halves included, in the order of <see cref="LatchModel.Latches"/>.</summary>
-        public IReadOnlyList<LatchTiming> Latches => byLatch;
+    public LatchModel Model { get; }
 
-        public IReadOnlyList<RegisterTiming> Registers { get; }
+    /// <summary>Every latch, register halves included, in the order of <see cref="LatchModel.Latches"/>.</summary>
+    public IReadOnlyList<LatchTiming> Latches => byLatch;
 
-        public static TimingFigures For(Netlist netlist) => new(LatchModel.Of(netlist));
+    public IReadOnlyList<RegisterTiming> Registers { get; }
 
-        public LatchTiming Of(Latch latch)
-        {
-            if (latch is null) throw new ArgumentNullException(nameof(latch));
-            if (latch.Index >= byLatch.Length || !ReferenceEquals(byLatch[latch.Index].Latch, latch))
-                throw new ArgumentException($"Latch '{latch.Name}' does not belong to the netlist of design '{Model.Netlist.DesignName}'.", nameof(latch));
-            return byLatch[latch.Index];
-        }
+    public static TimingFigures For(Netlist netlist) => new(LatchModel.Of(netlist));
 
-        /// <summary>A plain-text table: one line per register, then one per latch.</summary>
-        public override string ToString()
-        {
-            var text = new StringBuilder();
-            text.Append("Timing figures of design '").Append(Model.Netlist.DesignName).AppendLine("' (first-order estimates, 0.69·R·C per stage)");
-            text.AppendLine("register | clock | edge | setup | clk-q | clk-q min | hold");
-            foreach (var r in Registers)
-                text.Append(string.Join(" | ", r.Name, r.Clock.Name, r.Register.IsPositiveEdge ? "rising" : "falling",
-                    r.Setup, r.ClockToOutput, r.ClockToOutputMin, r.Hold)).AppendLine();
-            text.AppendLine("latch | phase | kind | window | setup | d-q | clk-q | hold");
-            foreach (var l in byLatch)
-                text.Append(string.Join(" | ", l.Name, l.Phase.Name, l.Latch.IsStatic ? "static" : "dynamic",
-                    string.Format(CultureInfo.InvariantCulture, "[{0}, {1})", l.Window.Opens, l.Window.Closes),
-                    l.Setup, l.DataToOutput, l.ClockToOutput, l.Hold)).AppendLine();
-            return text.ToString();
-        }
+    public LatchTiming Of(Latch latch)
+    {
+        if (latch is null) throw new ArgumentNullException(nameof(latch));
+        if (latch.Index >= byLatch.Length || !ReferenceEquals(byLatch[latch.Index].Latch, latch))
+            throw new ArgumentException($"Latch '{latch.Name}' does not belong to the netlist of design '{Model.Netlist.DesignName}'.", nameof(latch));
+        return byLatch[latch.Index];
+    }
+
+    /// <summary>A plain-text table: one line per register, then one per latch.</summary>
+    public override string ToString()
+    {
+        var text = new StringBuilder();
+        text.Append("Timing figures of design '").Append(Model.Netlist.DesignName).AppendLine("' (first-order estimates, 0.69·R·C per stage)");
+        text.AppendLine("register | clock | edge | setup | clk-q | clk-q min | hold");
+        foreach (var r in Registers)
+            text.Append(string.Join(" | ", r.Name, r.Clock.Name, r.Register.IsPositiveEdge ? "rising" : "falling",
+                r.Setup, r.ClockToOutput, r.ClockToOutputMin, r.Hold)).AppendLine();
+        text.AppendLine("latch | phase | kind | window | setup | d-q | clk-q | hold");
+        foreach (var l in byLatch)
+            text.Append(string.Join(" | ", l.Name, l.Phase.Name, l.Latch.IsStatic ? "static" : "dynamic",
+                string.Format(CultureInfo.InvariantCulture, "[{0}, {1})", l.Window.Opens, l.Window.Closes),
+                l.Setup, l.DataToOutput, l.ClockToOutput, l.Hold)).AppendLine();
+        return text.ToString();
     }
 }

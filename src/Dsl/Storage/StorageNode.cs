@@ -1,76 +1,75 @@
 using System.Collections.Generic;
 
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>A net driven only through pass devices (no restoring stage, keeper included, drives it; not a primary input).</summary>
+public sealed class StorageNode
 {
-    /// <summary>A net driven only through pass devices (no restoring stage, keeper included, drives it; not a primary input).</summary>
-    public sealed class StorageNode
+    internal StorageNode(Net net, StorageKind kind, IReadOnlyList<Device> drivers, IReadOnlyList<Device> feedbackDrivers, Retention retention)
     {
-        internal StorageNode(Net net, StorageKind kind, IReadOnlyList<Device> drivers, IReadOnlyList<Device> feedbackDrivers, Retention retention)
+        Net = net;
+        Kind = kind;
+        Drivers = drivers;
+        FeedbackDrivers = feedbackDrivers;
+        Retention = retention;
+    }
+
+    public Net Net { get; }
+
+    public StorageKind Kind { get; }
+
+    /// <summary>Every pass device that drives the node, feedback gates included, in netlist order.</summary>
+    public IReadOnlyList<Device> Drivers { get; }
+
+    /// <summary>The drivers that feed the node a restored copy of itself (empty for a dynamic node).</summary>
+    public IReadOnlyList<Device> FeedbackDrivers { get; }
+
+    /// <summary>t_ret = C·ΔV / I_leak for this node.</summary>
+    public Retention Retention { get; }
+
+    /// <summary>True if at least one driver is controlled by a clock phase.</summary>
+    public bool IsClocked
+    {
+        get
         {
-            Net = net;
-            Kind = kind;
-            Drivers = drivers;
-            FeedbackDrivers = feedbackDrivers;
-            Retention = retention;
-        }
-
-        public Net Net { get; }
-
-        public StorageKind Kind { get; }
-
-        /// <summary>Every pass device that drives the node, feedback gates included, in netlist order.</summary>
-        public IReadOnlyList<Device> Drivers { get; }
-
-        /// <summary>The drivers that feed the node a restored copy of itself (empty for a dynamic node).</summary>
-        public IReadOnlyList<Device> FeedbackDrivers { get; }
-
-        /// <summary>t_ret = C·ΔV / I_leak for this node.</summary>
-        public Retention Retention { get; }
-
-        /// <summary>True if at least one driver is controlled by a clock phase.</summary>
-        public bool IsClocked
-        {
-            get
-            {
-                foreach (var driver in Drivers)
-                    if (driver.ClockControl is not null)
-                        return true;
-                return false;
-            }
-        }
-
-        /// <summary>The first clock-controlled driver (the call that made the node, for reports), else the first driver.</summary>
-        public Device PrimaryDriver
-        {
-            get
-            {
-                foreach (var driver in Drivers)
-                    if (driver.ClockControl is not null && !IsFeedback(driver))
-                        return driver;
-                return Drivers[0];
-            }
-        }
-
-        /// <summary>The outermost library cell the node was made by (a register rather than its latch), or null.</summary>
-        public MacroInstance? Cell
-        {
-            get
-            {
-                var macro = PrimaryDriver.Macro;
-                while (macro?.Parent is { } parent)
-                    macro = parent;
-                return macro;
-            }
-        }
-
-        public bool IsFeedback(Device driver)
-        {
-            foreach (var feedback in FeedbackDrivers)
-                if (ReferenceEquals(feedback, driver))
+            foreach (var driver in Drivers)
+                if (driver.ClockControl is not null)
                     return true;
             return false;
         }
-
-        public override string ToString() => $"{Kind} storage node {Net.Name}";
     }
+
+    /// <summary>The first clock-controlled driver (the call that made the node, for reports), else the first driver.</summary>
+    public Device PrimaryDriver
+    {
+        get
+        {
+            foreach (var driver in Drivers)
+                if (driver.ClockControl is not null && !IsFeedback(driver))
+                    return driver;
+            return Drivers[0];
+        }
+    }
+
+    /// <summary>The outermost library cell the node was made by (a register rather than its latch), or null.</summary>
+    public MacroInstance? Cell
+    {
+        get
+        {
+            var macro = PrimaryDriver.Macro;
+            while (macro?.Parent is { } parent)
+                macro = parent;
+            return macro;
+        }
+    }
+
+    public bool IsFeedback(Device driver)
+    {
+        foreach (var feedback in FeedbackDrivers)
+            if (ReferenceEquals(feedback, driver))
+                return true;
+        return false;
+    }
+
+    public override string ToString() => $"{Kind} storage node {Net.Name}";
 }

@@ -15,8 +15,8 @@ public class ClockFromUngatedClockCodeFixTests
 {
     private static DiagnosticResult PW3001(int marker = 0) => new DiagnosticResult(RuleIds.DynamicNodeOnGatedClock, DiagnosticSeverity.Warning).WithLocation(marker).WithOptions(DiagnosticOptions.IgnoreAdditionalLocations);
 
-    private static PhasewareCodeFixTest<DynamicStorageAnalyzer, ClockFromUngatedClockCodeFix> Test(string source, string fixedSource, params DiagnosticResult[] expected)
-        => new PhasewareCodeFixTest<DynamicStorageAnalyzer, ClockFromUngatedClockCodeFix>(source, fixedSource, expected).Choosing(EquivalenceKeys.ClockFromUngatedClock);
+    private static PhasewardCodeFixTest<DynamicStorageAnalyzer, ClockFromUngatedClockCodeFix> Test(string source, string fixedSource, params DiagnosticResult[] expected)
+        => new PhasewardCodeFixTest<DynamicStorageAnalyzer, ClockFromUngatedClockCodeFix>(source, fixedSource, expected).Choosing(EquivalenceKeys.ClockFromUngatedClock);
 
     private static string Design(string body) => $$"""
         using Phaseward;
@@ -98,7 +98,7 @@ public class ClockFromUngatedClockCodeFixTests
     private static Task NoFix(string body)
     {
         var source = Design(body);
-        return new PhasewareCodeFixTest<DynamicStorageAnalyzer, ClockFromUngatedClockCodeFix>(source, source, PW3001()).RunAsync();
+        return new PhasewardCodeFixTest<DynamicStorageAnalyzer, ClockFromUngatedClockCodeFix>(source, source, PW3001()).RunAsync();
     }
 
     [Fact]
@@ -168,6 +168,6 @@ public class ClockFromUngatedClockCodeFixTests
                     => {|#0:c.DynamicLatch(d, clock.High, "hold")|};
             }
             """;
-        return new PhasewareCodeFixTest<DynamicStorageAnalyzer, ClockFromUngatedClockCodeFix>(Source, Source, PW3001()).RunAsync();
+        return new PhasewardCodeFixTest<DynamicStorageAnalyzer, ClockFromUngatedClockCodeFix>(Source, Source, PW3001()).RunAsync();
     }
 }

@@ -36,7 +36,7 @@ public class PW2001CodeFixTests
 
     [Fact]
     public Task BufferGoesIntoTheArgumentThatCarriesTheChain()
-        => new PhasewareCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>(Straight, """
+        => new PhasewardCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>(Straight, """
             using Phaseward;
 
             public sealed class Relay : Design
@@ -57,7 +57,7 @@ public class PW2001CodeFixTests
 
     [Fact]
     public Task InverterIsTheOtherChoice()
-        => new PhasewareCodeFixTest<PassGatePathAnalyzer, InsertRestoringInverterFix>(Straight,
+        => new PhasewardCodeFixTest<PassGatePathAnalyzer, InsertRestoringInverterFix>(Straight,
                 Straight.Replace("{|#0:", "").Replace("{|#1:", "").Replace(")|}", ")").Replace("/* carried */ n2", "/* carried */ c.Inverter(n2)"),
                 PW2001.WithLocation(1).WithLocation(0))
             .Choosing(EquivalenceKeys.InsertRestoringInverter)
@@ -73,7 +73,7 @@ public class PW2001CodeFixTests
     // Five gates: splits after 2 and 4, so the buffers go into the third and fifth calls; the receiver keeps its name.
     [Fact]
     public Task EachSplitPointOfALongerChainGetsAStage()
-        => new PhasewareCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>("""
+        => new PhasewardCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>("""
             using Phaseward;
 
             public sealed class Relay : Design
@@ -111,7 +111,7 @@ public class PW2001CodeFixTests
     // A wired mux tree (c.Node, drive-existing-net overloads) and a route gate: the buffer goes into the route gate.
     [Fact]
     public Task MuxTreeGetsItsStageBeforeTheRouteGate()
-        => new PhasewareCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>("""
+        => new PhasewardCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>("""
             using Phaseward;
 
             public sealed class Select4 : Design
@@ -166,7 +166,7 @@ public class PW2001CodeFixTests
     [Fact]
     public Task HelperInAnotherFileIsFixedWhereTheGateIsMade()
     {
-        var test = new PhasewareCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>("""
+        var test = new PhasewardCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>("""
             using Phaseward;
 
             public sealed class Relay : Design
@@ -259,7 +259,7 @@ public class PW2001CodeFixTests
     // Six gates in a loop: splits after gates 2 and 4, i.e. before the gates of iterations 2 and 4.
     [Fact]
     public Task LoopGetsAStageEveryMthIteration()
-        => new PhasewareCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>(Loop, LoopFixed, PW2001.WithLocation(0).WithLocation(0))
+        => new PhasewardCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>(Loop, LoopFixed, PW2001.WithLocation(0).WithLocation(0))
             .RunAsync();
 
     // The fixed loop elaborates to the intended netlist: the compile-time elaborator and the compiled design run at run
@@ -285,7 +285,7 @@ public class PW2001CodeFixTests
     // before the gates of iterations 2 and 4.
     [Fact]
     public Task LoopOffsetIsTakenIntoTheCondition()
-        => new PhasewareCodeFixTest<PassGatePathAnalyzer, InsertRestoringInverterFix>("""
+        => new PhasewardCodeFixTest<PassGatePathAnalyzer, InsertRestoringInverterFix>("""
             using Phaseward;
 
             public sealed class Row : Design
@@ -357,7 +357,7 @@ public class PW2001CodeFixTests
                 }
             }
             """;
-        return new PhasewareCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>(source, source, PW2001.WithLocation(0).WithLocation(0)).RunAsync();
+        return new PhasewardCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>(source, source, PW2001.WithLocation(0).WithLocation(0)).RunAsync();
     }
 
     [Fact]
@@ -384,7 +384,7 @@ public class PW2001CodeFixTests
             }
             """;
         // Reported at the loop's call (same file), first gate the same call.
-        return new PhasewareCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>(source, source, PW2001.WithLocation(2).WithLocation(2))
+        return new PhasewardCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>(source, source, PW2001.WithLocation(2).WithLocation(2))
             .RunAsync();
     }
 
@@ -420,7 +420,7 @@ public class PW2001CodeFixTests
                 }
             }
             """;
-        return new PhasewareCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>(source, source,
+        return new PhasewardCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>(source, source,
             PW2001.WithLocation(0).WithLocation(0), PW2001.WithLocation(1).WithLocation(0)).RunAsync();
     }
 
@@ -429,7 +429,7 @@ public class PW2001CodeFixTests
     [Fact]
     public Task FixAllMergesSharedSplitPoints()
     {
-        var test = new PhasewareCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>("""
+        var test = new PhasewardCodeFixTest<PassGatePathAnalyzer, InsertRestoringBufferFix>("""
             using Phaseward;
 
             public sealed class Arms : Design

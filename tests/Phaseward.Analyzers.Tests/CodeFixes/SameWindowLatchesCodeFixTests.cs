@@ -18,7 +18,7 @@ public class SameWindowLatchesCodeFixTests
         => new DiagnosticResult(RuleIds.SameWindowLatches, DiagnosticSeverity.Warning).WithLocation(location).WithLocation(related)
             .WithArguments(latch, source, phase);
 
-    private static PhasewareCodeFixTest<ClockPhaseAnalyzer, SameWindowLatchesCodeFix> Test(string source, string fixedSource, params DiagnosticResult[] expected)
+    private static PhasewardCodeFixTest<ClockPhaseAnalyzer, SameWindowLatchesCodeFix> Test(string source, string fixedSource, params DiagnosticResult[] expected)
         => new(source, fixedSource, expected);
 
     [Fact]

@@ -16,7 +16,7 @@ public class UseStaticCellCodeFixTests
 
     private static DiagnosticResult PW3002(int marker = 0) => new DiagnosticResult(RuleIds.ClockTooSlowForDynamicStorage, DiagnosticSeverity.Warning).WithLocation(marker).WithOptions(DiagnosticOptions.IgnoreAdditionalLocations);
 
-    private static PhasewareCodeFixTest<DynamicStorageAnalyzer, UseStaticCellCodeFix> Test(string source, string fixedSource, params DiagnosticResult[] expected)
+    private static PhasewardCodeFixTest<DynamicStorageAnalyzer, UseStaticCellCodeFix> Test(string source, string fixedSource, params DiagnosticResult[] expected)
         => new(source, fixedSource, expected);
 
     [Fact]

@@ -24,7 +24,7 @@ internal sealed class InMemoryDesigns
         var options = new CSharpParseOptions(LanguageVersion.Latest);
         Compilation = CSharpCompilation.Create("Designs" + Guid.NewGuid().ToString("N"),
             sources.Select(s => CSharpSyntaxTree.ParseText(s.Text, options, s.Path, System.Text.Encoding.UTF8)),
-            PhasewareTest.References,
+            PhasewardTest.References,
             new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, nullableContextOptions: NullableContextOptions.Enable));
         var errors = Compilation.GetDiagnostics().Where(d => d.Severity == DiagnosticSeverity.Error).ToList();
         if (errors.Count > 0)

@@ -33,7 +33,7 @@ internal static class BoundedAnalysis
     /// <summary>Far above what any analysis here needs (milliseconds); reaching it means the analyzer hangs.</summary>
     public static readonly TimeSpan HangBound = TimeSpan.FromSeconds(30);
 
-    public static ImmutableArray<DiagnosticAnalyzer> Analyzers { get; } = typeof(PhasewareAnalyzer).Assembly.GetTypes()
+    public static ImmutableArray<DiagnosticAnalyzer> Analyzers { get; } = typeof(PhasewardAnalyzer).Assembly.GetTypes()
         .Where(t => !t.IsAbstract && typeof(DiagnosticAnalyzer).IsAssignableFrom(t) && t.GetCustomAttribute<DiagnosticAnalyzerAttribute>() is not null)
         .OrderBy(t => t.Name, StringComparer.Ordinal)
         .Select(t => (DiagnosticAnalyzer)Activator.CreateInstance(t)!)
@@ -41,15 +41,15 @@ internal static class BoundedAnalysis
 
     public static CSharpParseOptions ParseOptions { get; } = new(LanguageVersion.Latest);
 
-    /// <summary>The Tidewater sample sources (path, text), in file-name order.</summary>
+    /// <summary>The Quorvane sample sources (path, text), in file-name order.</summary>
     public static IReadOnlyList<(string Path, string Text)> Samples { get; } = System.IO.Directory
-        .GetFiles(Repository.PathOf("samples", "Tidewater"), "*.cs")
+        .GetFiles(Repository.PathOf("samples", "Quorvane"), "*.cs")
         .OrderBy(p => p, StringComparer.Ordinal)
-        .Select(p => ("/samples/Tidewater/" + System.IO.Path.GetFileName(p), System.IO.File.ReadAllText(p)))
+        .Select(p => ("/samples/Quorvane/" + System.IO.Path.GetFileName(p), System.IO.File.ReadAllText(p)))
         .ToList();
 
     public static CSharpCompilation Compile(IEnumerable<SyntaxTree> trees, string name = "Robustness")
-        => CSharpCompilation.Create(name, trees, PhasewareTest.References,
+        => CSharpCompilation.Create(name, trees, PhasewardTest.References,
             new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, nullableContextOptions: NullableContextOptions.Enable));
 
     public static SyntaxTree Parse(string path, string text) => CSharpSyntaxTree.ParseText(text, ParseOptions, path, System.Text.Encoding.UTF8);

@@ -57,7 +57,7 @@ public class RobustnessTests
     public async Task NeverThrowsOnBrokenSource(string source)
     {
         var compilation = CSharpCompilation.Create("Broken", new[] { CSharpSyntaxTree.ParseText(source, path: "/src/Typing.cs") },
-            PhasewareTest.References, new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary));
+            PhasewardTest.References, new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary));
         var failures = new List<Exception>();
         var options = new CompilationWithAnalyzersOptions(new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty),
             (e, _, _) => failures.Add(e), concurrentAnalysis: false, logAnalyzerExecutionTime: false);

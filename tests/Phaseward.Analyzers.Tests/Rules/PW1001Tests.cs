@@ -3,8 +3,8 @@ using System.Threading.Tasks;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp;
 using Microsoft.CodeAnalysis.Diagnostics;
-using Microsoft.CodeAnalysis.Text;
 using Microsoft.CodeAnalysis.Testing;
+using Microsoft.CodeAnalysis.Text;
 using Phaseward.Analyzers.Tests.Verifiers;
 using static Phaseward.Analyzers.Tests.Rules.RuleSources;
 
@@ -22,7 +22,7 @@ public class PW1001Tests
             .WithMessage($"Latch '{latch}' takes its data from latch '{source}' and both are transparent in {phase}: data can run through both in one phase");
 
     private static Task Verify(string source, params DiagnosticResult[] expected)
-        => new PhasewareAnalyzerTest<ClockPhaseAnalyzer>(source, expected).RunAsync();
+        => new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(source, expected).RunAsync();
 
     [Fact]
     public Task PlainLatchesOnTheSamePhase()
@@ -114,7 +114,7 @@ public class PW1001Tests
     [Fact]
     public Task HelperInAnotherFileIsReportedAtTheCallInDescribe()
     {
-        var test = new PhasewareAnalyzerTest<ClockPhaseAnalyzer>(Design("OtherFileHelper", """
+        var test = new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(Design("OtherFileHelper", """
             var clk = c.Clock("clk", 4.Nanoseconds());
             var first = {|#2:Stages.Latch(c, c.Input("d"), clk.High, "first")|};
             {|#0:Stages.Latch(c, first, clk.High, "second")|};
@@ -170,10 +170,10 @@ public class PW1001Tests
         using var workspace = new AdhocWorkspace();
         var project = workspace.AddProject("Severe", LanguageNames.CSharp)
             .WithCompilationOptions(new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary))
-            .AddMetadataReferences(PhasewareTest.References);
+            .AddMetadataReferences(PhasewardTest.References);
         var source = Design("Severe", Pair.Replace("{|#0:", "").Replace("{|#1:", "").Replace("|}", ""));
         project = project.AddDocument("Severe.cs", source, filePath: "/src/Severe.cs").Project;
-        project = project.AddAnalyzerConfigDocument(".editorconfig", SourceText.From(PhasewareTest.EditorConfig("dotnet_diagnostic.PW1001.severity = error").Content),
+        project = project.AddAnalyzerConfigDocument(".editorconfig", SourceText.From(PhasewardTest.EditorConfig("dotnet_diagnostic.PW1001.severity = error").Content),
             filePath: "/.editorconfig").Project;
         var compilation = (await project.GetCompilationAsync())!;
         var diagnostics = await compilation.WithAnalyzers(ImmutableArray.Create<DiagnosticAnalyzer>(new ClockPhaseAnalyzer()), project.AnalyzerOptions)
@@ -186,7 +186,7 @@ public class PW1001Tests
 
     [Fact]
     public Task SeveritySuggestion()
-        => new PhasewareAnalyzerTest<ClockPhaseAnalyzer>(Design("Mild", Pair),
+        => new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(Design("Mild", Pair),
                 new DiagnosticResult(RuleIds.SameWindowLatches, DiagnosticSeverity.Info).WithLocation(0).WithLocation(1)
                     .WithArguments("B", "A", "clk.High"))
             .WithEditorConfig("dotnet_diagnostic.PW1001.severity = suggestion")
@@ -194,7 +194,7 @@ public class PW1001Tests
 
     [Fact]
     public Task SeverityNoneSilencesTheRule()
-        => new PhasewareAnalyzerTest<ClockPhaseAnalyzer>(Design("Silenced", Pair.Replace("{|#0:", "").Replace("{|#1:", "").Replace("|}", "")))
+        => new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(Design("Silenced", Pair.Replace("{|#0:", "").Replace("{|#1:", "").Replace("|}", "")))
             .WithEditorConfig("dotnet_diagnostic.PW1001.severity = none")
             .RunAsync();
 }

@@ -20,7 +20,7 @@ public class PW1002Tests
                          $"the fastest path takes {fastest} but both pass gates conduct together for {overlap} (margin {margin})");
 
     private static Task Verify(string source, params DiagnosticResult[] expected)
-        => new PhasewareAnalyzerTest<ClockPhaseAnalyzer>(source, expected).RunAsync();
+        => new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(source, expected).RunAsync();
 
     [Fact]
     public Task WorkedExample_RegisterWhoseZeroZeroOverlapExceedsTheRaceDelay()
@@ -76,7 +76,7 @@ public class PW1002Tests
     [Fact]
     public Task HelperInAnotherFileIsReportedAtTheCallInDescribe()
     {
-        var test = new PhasewareAnalyzerTest<ClockPhaseAnalyzer>(Design("Helper", """
+        var test = new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(Design("Helper", """
             var clk = c.Clock("clk", 1.Nanoseconds(), 0.5, 120.Picoseconds());
             c.Output("q", {|#0:Cells.Register(c, c.Input("d"), clk)|});
             """),
@@ -100,20 +100,20 @@ public class PW1002Tests
     [Fact]
     public Task MinRaceMarginOptionRaisesTheBar()
         // Margin 96.6 − 80 = 16.6 ps: clean by default (see RegisterBelowTheRaceDelayIsClean), reported at 20 ps.
-        => new PhasewareAnalyzerTest<ClockPhaseAnalyzer>(Margin166,
+        => new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(Margin166,
                 Pw1002("R.slave", "R.master", "0-0", "clk", "96.6 ps", "80 ps", "16.6 ps").WithLocation(0).WithLocation(0))
             .WithEditorConfig("phaseward.min_race_margin = 20ps")
             .RunAsync();
 
     [Fact]
     public Task MinRaceMarginBelowTheMarginKeepsItClean()
-        => new PhasewareAnalyzerTest<ClockPhaseAnalyzer>(Margin166.Replace("{|#0:", "").Replace("|}", ""))
+        => new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(Margin166.Replace("{|#0:", "").Replace("|}", ""))
             .WithEditorConfig("phaseward.min_race_margin = 0.015ns")
             .RunAsync();
 
     [Fact]
     public Task SeverityFromEditorConfig()
-        => new PhasewareAnalyzerTest<ClockPhaseAnalyzer>(Margin166,
+        => new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(Margin166,
                 new DiagnosticResult(RuleIds.OverlapRace, DiagnosticSeverity.Info).WithLocation(0).WithLocation(0)
                     .WithArguments("R.slave", "R.master", "0-0", "clk", "96.6 ps", "80 ps", "16.6 ps"))
             .WithEditorConfig("phaseward.min_race_margin = 20ps\ndotnet_diagnostic.PW1002.severity = suggestion")

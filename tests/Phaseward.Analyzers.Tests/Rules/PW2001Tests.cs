@@ -25,7 +25,7 @@ public class PW2001Tests
     // Restored every 2: mean C = 12.5/3 fF, R·C = 20.83 ps; t = 3·(ln 2·20.83 ps·3/2 + 20 ps/2) = 95.0 ps.
     [Fact]
     public Task StraightChainIsReportedAtTheFirstGateBeyondTheLimit()
-        => new PhasewareAnalyzerTest<PassGatePathAnalyzer>("""
+        => new PhasewardAnalyzerTest<PassGatePathAnalyzer>("""
             using Phaseward;
 
             public sealed class Relay : Design
@@ -46,7 +46,7 @@ public class PW2001Tests
 
     [Fact]
     public Task ChainAtTheLimitIsClean()
-        => new PhasewareAnalyzerTest<PassGatePathAnalyzer>("""
+        => new PhasewardAnalyzerTest<PassGatePathAnalyzer>("""
             using Phaseward;
 
             public sealed class Short : Design
@@ -69,7 +69,7 @@ public class PW2001Tests
     // The loop's single call is both the first gate and the first gate beyond the limit.
     [Fact]
     public Task ChainBuiltInALoopIsReportedAtTheLoopsCall()
-        => new PhasewareAnalyzerTest<PassGatePathAnalyzer>("""
+        => new PhasewardAnalyzerTest<PassGatePathAnalyzer>("""
             using Phaseward;
 
             public sealed class Row : Design
@@ -89,7 +89,7 @@ public class PW2001Tests
 
     [Fact]
     public Task LoopRestoredEverySecondIterationIsClean()
-        => new PhasewareAnalyzerTest<PassGatePathAnalyzer>("""
+        => new PhasewardAnalyzerTest<PassGatePathAnalyzer>("""
             using Phaseward;
 
             public sealed class Row : Design
@@ -115,7 +115,7 @@ public class PW2001Tests
     // Its chain starts at the first-made first-level arm (ties broken by device order).
     [Fact]
     public Task MuxTreeIsReportedOnceAtTheGateBeyondTheLimit()
-        => new PhasewareAnalyzerTest<PassGatePathAnalyzer>("""
+        => new PhasewardAnalyzerTest<PassGatePathAnalyzer>("""
             using Phaseward;
 
             public sealed class Select4 : Design
@@ -147,7 +147,7 @@ public class PW2001Tests
     // reported once at its call in the loop; both chains start at the first-level arm made first (device order).
     [Fact]
     public Task MuxTreeBuiltInLoopsReportsEachLastLevelArm()
-        => new PhasewareAnalyzerTest<PassGatePathAnalyzer>("""
+        => new PhasewardAnalyzerTest<PassGatePathAnalyzer>("""
             using Phaseward;
 
             public sealed class Select8 : Design
@@ -183,7 +183,7 @@ public class PW2001Tests
     // The chain's middle gate is made in a helper of the same class: the chain is followed through the call.
     [Fact]
     public Task ChainThroughAHelperMethod()
-        => new PhasewareAnalyzerTest<PassGatePathAnalyzer>("""
+        => new PhasewardAnalyzerTest<PassGatePathAnalyzer>("""
             using Phaseward;
 
             public sealed class Relay : Design
@@ -208,7 +208,7 @@ public class PW2001Tests
     [Fact]
     public Task ChainIntoAHelperInAnotherFile()
     {
-        var test = new PhasewareAnalyzerTest<PassGatePathAnalyzer>("""
+        var test = new PhasewardAnalyzerTest<PassGatePathAnalyzer>("""
             using Phaseward;
 
             public sealed class Relay : Design
@@ -258,7 +258,7 @@ public class PW2001Tests
             """;
         var expected = reported ? new[] { PW2001.WithLocation(0).WithLocation(0) } : System.Array.Empty<DiagnosticResult>();
         if (!reported) source = source.Replace("{|#0:", string.Empty).Replace("|}", string.Empty);
-        return new PhasewareAnalyzerTest<PassGatePathAnalyzer>(source, expected)
+        return new PhasewardAnalyzerTest<PassGatePathAnalyzer>(source, expected)
             .WithEditorConfig("phaseward.max_series_pass_gates = " + limit)
             .RunAsync();
     }
@@ -266,7 +266,7 @@ public class PW2001Tests
     // An option above the optimum: the limit is 4, the restoring spacing offered stays the process optimum (2).
     [Fact]
     public Task TheMessageCarriesTheConfiguredLimit()
-        => new PhasewareAnalyzerTest<PassGatePathAnalyzer>("""
+        => new PhasewardAnalyzerTest<PassGatePathAnalyzer>("""
             using Phaseward;
 
             public sealed class Row : Design
@@ -306,26 +306,26 @@ public class PW2001Tests
     [InlineData("10001")]
     public Task AnInvalidLimitIsReportedAndTheComputedLimitApplies(string value)
         => Task.WhenAll(
-            new PhasewareAnalyzerTest<ElaborationAnalyzer>(ThreeGates.Replace("{|#0:", "").Replace("{|#1:", "").Replace(")|}", ")"),
+            new PhasewardAnalyzerTest<ElaborationAnalyzer>(ThreeGates.Replace("{|#0:", "").Replace("{|#1:", "").Replace(")|}", ")"),
                     new DiagnosticResult(RuleIds.InvalidOption, DiagnosticSeverity.Warning).WithLocation(9)
                         .WithArguments("phaseward.max_series_pass_gates", value, "a whole number from 1 to 10000", "computed by the rule"))
                 .WithEditorConfig("phaseward.max_series_pass_gates = " + value)
                 .RunAsync(),
-            new PhasewareAnalyzerTest<PassGatePathAnalyzer>(ThreeGates.Replace("{|#9:Describe|}", "Describe"),
+            new PhasewardAnalyzerTest<PassGatePathAnalyzer>(ThreeGates.Replace("{|#9:Describe|}", "Describe"),
                     PW2001.WithLocation(1).WithLocation(0).WithArguments("3", "2", "188 ps", "130 ps", "2", "95 ps"))
                 .WithEditorConfig("phaseward.max_series_pass_gates = " + value)
                 .RunAsync());
 
     [Fact]
     public Task SeverityIsConfigurable()
-        => new PhasewareAnalyzerTest<PassGatePathAnalyzer>(ThreeGates.Replace("{|#9:Describe|}", "Describe"),
+        => new PhasewardAnalyzerTest<PassGatePathAnalyzer>(ThreeGates.Replace("{|#9:Describe|}", "Describe"),
                 new DiagnosticResult(RuleIds.SeriesPassGates, DiagnosticSeverity.Info).WithLocation(1).WithLocation(0))
             .WithEditorConfig("dotnet_diagnostic.PW2001.severity = suggestion")
             .RunAsync();
 
     [Fact]
     public Task SeverityNoneSilencesTheRule()
-        => new PhasewareAnalyzerTest<PassGatePathAnalyzer>(ThreeGates.Replace("{|#9:Describe|}", "Describe").Replace("{|#0:", "").Replace("{|#1:", "").Replace(")|}", ")"))
+        => new PhasewardAnalyzerTest<PassGatePathAnalyzer>(ThreeGates.Replace("{|#9:Describe|}", "Describe").Replace("{|#0:", "").Replace("{|#1:", "").Replace(")|}", ")"))
             .WithEditorConfig("dotnet_diagnostic.PW2001.severity = none")
             .RunAsync();
 }

@@ -33,7 +33,7 @@ public class PW3001Tests
 
     [Fact]
     public Task DynamicLatchOnAGatedClockIsReportedAtItsCallWithTheGateAsAdditionalLocation()
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var capture = c.Clock("capture", 2.Nanoseconds());
                     var burst = {|#1:c.ClockGate(capture, c.Input("burst_enable"), ClockStopLevel.Low, name: "burst")|};
                     var held = {|#0:c.DynamicLatch(c.Input("wave_bit"), burst.High, "wave_hold")|};
@@ -44,7 +44,7 @@ public class PW3001Tests
 
     [Fact]
     public Task StaticLatchOnTheSameGatedClockIsNotReported()
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var capture = c.Clock("capture", 2.Nanoseconds());
                     var burst = c.ClockGate(capture, c.Input("burst_enable"), ClockStopLevel.Low, name: "burst");
                     c.Output("wave_sample", c.StaticLatch(c.Input("wave_bit"), burst.High, "wave_hold"));
@@ -53,7 +53,7 @@ public class PW3001Tests
 
     [Fact]
     public Task DynamicLatchOnTheUngatedClockIsNotReported()
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var capture = c.Clock("capture", 2.Nanoseconds());
                     c.ClockGate(capture, c.Input("burst_enable"), ClockStopLevel.Low, name: "burst");
                     c.Output("wave_sample", c.DynamicLatch(c.Input("wave_bit"), capture.High, "wave_hold"));
@@ -62,7 +62,7 @@ public class PW3001Tests
 
     [Fact]
     public Task StoppedLowHoldsTheLowPhaseOpenAndTheHighPhaseOff()
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var capture = c.Clock("capture", 2.Nanoseconds());
                     var burst = {|#1:c.ClockGate(capture, c.Input("burst_enable"), ClockStopLevel.Low, name: "burst")|};
                     var bit = c.Input("wave_bit");
@@ -74,7 +74,7 @@ public class PW3001Tests
 
     [Fact]
     public Task StoppedHighHoldsTheHighPhaseOpenAndTheLowPhaseOff()
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var capture = c.Clock("capture", 2.Nanoseconds());
                     var burst = {|#1:c.ClockGate(capture, c.Input("burst_enable"), ClockStopLevel.High, name: "burst")|};
                     var bit = c.Input("wave_bit");
@@ -88,7 +88,7 @@ public class PW3001Tests
     [InlineData("100.Microseconds()")]
     [InlineData("270.Microseconds()")] // exactly t_ret: the node just holds
     public Task DeclaredIdleTimeNoLongerThanRetentionIsSafe(string maxIdle)
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design($$"""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design($$"""
                     var capture = c.Clock("capture", 2.Nanoseconds());
                     var burst = c.ClockGate(capture, c.Input("burst_enable"), ClockStopLevel.Low, maxIdle: {{maxIdle}}, name: "burst");
                     c.Output("wave_sample", c.DynamicLatch(c.Input("wave_bit"), burst.High, "wave_hold"));
@@ -99,7 +99,7 @@ public class PW3001Tests
     [InlineData("271.Microseconds()", "271 µs")]
     [InlineData("2.Seconds()", "2 s")]
     public Task DeclaredIdleTimeLongerThanRetentionIsReportedWithIt(string maxIdle, string shown)
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design($$"""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design($$"""
                     var capture = c.Clock("capture", 2.Nanoseconds());
                     var burst = {|#1:c.ClockGate(capture, c.Input("burst_enable"), ClockStopLevel.Low, maxIdle: {{maxIdle}}, name: "burst")|};
                     c.Output("wave_sample", {|#0:c.DynamicLatch(c.Input("wave_bit"), burst.High, "wave_hold")|});
@@ -110,7 +110,7 @@ public class PW3001Tests
     [Fact]
     public Task OnlyTheSlaveOfADynamicRegisterOnAClockStoppedLowFloats()
         // Master open while the clock is low (held open), slave open while it is high (held off).
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var capture = c.Clock("capture", 2.Nanoseconds());
                     var burst = {|#1:c.ClockGate(capture, c.Input("burst_enable"), ClockStopLevel.Low, name: "burst")|};
                     c.Output("count", {|#0:c.DynamicRegister(c.Input("count_enable"), burst, "count")|});
@@ -120,7 +120,7 @@ public class PW3001Tests
 
     [Fact]
     public Task OnlyTheMasterOfADynamicRegisterOnAClockStoppedHighFloats()
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var capture = c.Clock("capture", 2.Nanoseconds());
                     var burst = {|#1:c.ClockGate(capture, c.Input("burst_enable"), ClockStopLevel.High, name: "burst")|};
                     c.Output("count", {|#0:c.DynamicRegister(c.Input("count_enable"), burst, "count")|});
@@ -130,7 +130,7 @@ public class PW3001Tests
 
     [Fact]
     public Task StaticRegisterOnAGatedClockIsNotReported()
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var capture = c.Clock("capture", 2.Nanoseconds());
                     var burst = c.ClockGate(capture, c.Input("burst_enable"), ClockStopLevel.High, name: "burst");
                     c.Output("count", c.StaticRegister(c.Input("count_enable"), burst, "count"));
@@ -140,7 +140,7 @@ public class PW3001Tests
     [Fact]
     public Task CapacitanceOverrideEntersTheFigures()
         // 3 fF × 0.3 V / 5 pA = 180 µs, shorter than the declared 200 µs.
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var capture = c.Clock("capture", 2.Nanoseconds());
                     var burst = {|#1:c.ClockGate(capture, c.Input("burst_enable"), ClockStopLevel.Low, maxIdle: 200.Microseconds(), name: "burst")|};
                     var node = c.Node("hold");
@@ -154,7 +154,7 @@ public class PW3001Tests
     [Fact]
     public Task LeakageOverrideThatStretchesRetentionPastTheIdleTimeClearsTheFinding()
         // 4.5 fF × 0.3 V / 0.1 pA = 13.5 ms, longer than the declared 10 ms.
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var capture = c.Clock("capture", 2.Nanoseconds());
                     var burst = c.ClockGate(capture, c.Input("burst_enable"), ClockStopLevel.Low, maxIdle: 10.Milliseconds(), name: "burst");
                     var node = c.Node("hold");
@@ -167,7 +167,7 @@ public class PW3001Tests
     [Fact]
     public Task LeakageOverrideThatShortensRetentionIsReportedWithIt()
         // 4.5 fF × 0.3 V / 50 pA = 27 µs, shorter than the declared 100 µs.
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var capture = c.Clock("capture", 2.Nanoseconds());
                     var burst = {|#1:c.ClockGate(capture, c.Input("burst_enable"), ClockStopLevel.Low, maxIdle: 100.Microseconds(), name: "burst")|};
                     var node = c.Node("hold");
@@ -180,7 +180,7 @@ public class PW3001Tests
 
     [Fact]
     public Task EveryLatchMadeInALoopIsReportedAtTheCallInTheLoop()
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var capture = c.Clock("capture", 2.Nanoseconds());
                     var burst = {|#1:c.ClockGate(capture, c.Input("burst_enable"), ClockStopLevel.Low, name: "burst")|};
                     for (var i = 0; i < 3; i++)
@@ -193,7 +193,7 @@ public class PW3001Tests
 
     [Fact]
     public Task ALatchMadeInAHelperOfTheSameFileIsReportedInsideTheHelperOncePerUse()
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>("""
             using Phaseward;
 
             public sealed class Capture : Design
@@ -216,7 +216,7 @@ public class PW3001Tests
     [Fact]
     public Task ALatchMadeInAHelperInAnotherFileIsReportedAtTheHelperCall()
     {
-        var test = new PhasewareAnalyzerTest<DynamicStorageAnalyzer>("""
+        var test = new PhasewardAnalyzerTest<DynamicStorageAnalyzer>("""
             using Phaseward;
 
             public sealed class Capture : Design

@@ -34,7 +34,7 @@ public class PW3002Tests
     [Fact]
     public Task SlowClockIsReportedWithTheLowestSafeFrequency()
         // Isolation 500 µs − 30 ps; f_min = 0.5 / (270 µs + 30 ps) = 1851.85 Hz → 1.86 kHz.
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var tick = {|#1:c.Clock("housekeeping", 1.Milliseconds())|};
                     c.Output("level", {|#0:c.DynamicLatch(c.Input("battery_ok"), tick.High, "level")|});
             """),
@@ -45,7 +45,7 @@ public class PW3002Tests
     [InlineData("540.Microseconds()")] // isolation 270 µs − 30 ps: just holds
     [InlineData("2.Nanoseconds()")]
     public Task FastEnoughClockIsNotReported(string period)
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design($$"""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design($$"""
                     var tick = c.Clock("housekeeping", {{period}});
                     c.Output("level", c.DynamicLatch(c.Input("battery_ok"), tick.High, "level"));
             """))
@@ -54,7 +54,7 @@ public class PW3002Tests
     [Fact]
     public Task JustTooSlowIsReported()
         // 544 µs: isolation 272 µs − 30 ps > 270 µs; f_min 1.86 kHz as above.
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var tick = {|#1:c.Clock("housekeeping", 544.Microseconds())|};
                     c.Output("level", {|#0:c.DynamicLatch(c.Input("battery_ok"), tick.High, "level")|});
             """),
@@ -63,7 +63,7 @@ public class PW3002Tests
 
     [Fact]
     public Task StaticCellsOnASlowClockAreNotReported()
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var tick = c.Clock("housekeeping", 1.Seconds());
                     var d = c.Input("battery_ok");
                     c.Output("level", c.StaticLatch(d, tick.High, "level"));
@@ -73,7 +73,7 @@ public class PW3002Tests
 
     [Fact]
     public Task BothLatchesOfEveryDynamicRegisterInALoopAreReportedAtTheCall()
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var tick = {|#1:c.Clock("housekeeping", 1.Milliseconds())|};
                     var carry = c.Input("count_enable");
                     for (var bit = 0; bit < 2; bit++)
@@ -93,7 +93,7 @@ public class PW3002Tests
     [Fact]
     public Task LeakageOverrideMakesAFastClockTooSlow()
         // 4.5 fF × 0.3 V / 2 nA = 675 ns < 5 µs − 30 ps; f_min = 0.5 / (675 ns + 30 ps) = 740.71 kHz → 741 kHz.
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var tick = {|#1:c.Clock("housekeeping", 10.Microseconds())|};
                     var node = c.Node("level");
                     {|#0:c.TransmissionGate(c.Input("battery_ok"), tick.High, node)|};
@@ -106,7 +106,7 @@ public class PW3002Tests
     [Fact]
     public Task CapacitanceOverrideMakesASlowClockSafe()
         // 10 fF × 0.3 V / 5 pA = 600 µs > 500 µs − 30 ps.
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var tick = c.Clock("housekeeping", 1.Milliseconds());
                     var node = c.Node("level");
                     c.TransmissionGate(c.Input("battery_ok"), tick.High, node);
@@ -117,7 +117,7 @@ public class PW3002Tests
 
     [Fact]
     public Task ARegisterMadeInAHelperIsReportedInsideTheHelper()
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>("""
             using Phaseward;
 
             public sealed class Housekeeping : Design

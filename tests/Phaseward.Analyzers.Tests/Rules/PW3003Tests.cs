@@ -30,7 +30,7 @@ public class PW3003Tests
     public Task TwoDynamicNodesInSeriesShareCharge()
         // a: wire 1 + two pass-gate terminals 2 × 1.5 = 4 fF; b: wire 1 + one terminal 1.5 + inverter gate 2 = 4.5 fF.
         // Droop 1.2 V × 4.5 / 8.5 = 635.3 mV; settles at 1.2 V × 4 / 8.5 = 564.7 mV.
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var clk = c.Clock("clk", 10.Nanoseconds());
                     var a = {|#1:c.TransmissionGate(c.Input("d"), clk.Low, "a")|};
                     var b = {|#0:c.TransmissionGate(a, clk.High, "b")|};
@@ -44,7 +44,7 @@ public class PW3003Tests
     [InlineData("13.6.Femtofarads()")] // 1.2 × 4.5 / 18.1 = 298.3 mV
     [InlineData("100.Femtofarads()")]  // 1.2 × 4.5 / 104.5 = 51.7 mV
     public Task ABigEnoughStorageCapacitorAbsorbsTheSharing(string capacitance)
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design($$"""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design($$"""
                     var clk = c.Clock("clk", 10.Nanoseconds());
                     var a = c.TransmissionGate(c.Input("d"), clk.Low, "a");
                     c.SetCapacitance(a, {{capacitance}});
@@ -55,7 +55,7 @@ public class PW3003Tests
     [Fact]
     public Task JustTooSmallAStorageCapacitorIsReportedWithIt()
         // 1.2 × 4.5 / 17.5 = 308.6 mV droop; settles at 1.2 × 13 / 17.5 = 891.4 mV.
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var clk = c.Clock("clk", 10.Nanoseconds());
                     var a = {|#1:c.TransmissionGate(c.Input("d"), clk.Low, "a")|};
                     c.SetCapacitance(a, 13.Femtofarads());
@@ -67,7 +67,7 @@ public class PW3003Tests
 
     [Fact]
     public Task LatchesFeedRestoredOutputsAndDoNotShare()
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var clk = c.Clock("clk", 10.Nanoseconds());
                     var held = c.DynamicLatch(c.Input("d"), clk.Low, "first");
                     c.Output("q", c.DynamicLatch(held, clk.High, "second"));
@@ -77,7 +77,7 @@ public class PW3003Tests
     [Fact]
     public Task AChainBuiltInALoopIsReportedOncePerSharingGate()
         // n0 → n1: 4 fF with 4 fF, droop 1.2 × 4 / 8 = 600 mV. n1 → n2: 4 fF with 4.5 fF, droop 635 mV as above.
-        => new PhasewareAnalyzerTest<DynamicStorageAnalyzer>(Design("""
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design("""
                     var clk = c.Clock("clk", 10.Nanoseconds());
                     var n = c.Input("d");
                     for (var i = 0; i < 3; i++)

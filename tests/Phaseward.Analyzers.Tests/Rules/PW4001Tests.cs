@@ -30,29 +30,29 @@ public class PW4001Tests
     [Fact]
     public Task WorkedExample_PathBuiltInALoopMissesA280PsPeriod()
         // 289.8 ps in 280 ps: slack −9.8 ps.
-        => new PhasewareAnalyzerTest<TimingAnalyzer>(Pipeline("Tight", 280), Pw4001("280 ps", "-9.8 ps")).RunAsync();
+        => new PhasewardAnalyzerTest<TimingAnalyzer>(Pipeline("Tight", 280), Pw4001("280 ps", "-9.8 ps")).RunAsync();
 
     [Fact]
     public Task TheSamePathFitsA300PsPeriod()
-        => new PhasewareAnalyzerTest<TimingAnalyzer>(Pipeline("Fits", 300).Replace("{|#0:", "").Replace("{|#1:", "").Replace("|}", "")).RunAsync();
+        => new PhasewardAnalyzerTest<TimingAnalyzer>(Pipeline("Fits", 300).Replace("{|#0:", "").Replace("{|#1:", "").Replace("|}", "")).RunAsync();
 
     [Fact]
     public Task MinTimingSlackOptionReportsASmallPositiveSlack()
         // Slack +10.2 ps against a required 15 ps.
-        => new PhasewareAnalyzerTest<TimingAnalyzer>(Pipeline("Required", 300), Pw4001("300 ps", "10.2 ps"))
+        => new PhasewardAnalyzerTest<TimingAnalyzer>(Pipeline("Required", 300), Pw4001("300 ps", "10.2 ps"))
             .WithEditorConfig("phaseward.min_timing_slack = 15ps")
             .RunAsync();
 
     [Fact]
     public Task SeverityFromEditorConfig()
-        => new PhasewareAnalyzerTest<TimingAnalyzer>(Pipeline("Mild", 280), Pw4001("280 ps", "-9.8 ps", DiagnosticSeverity.Info))
+        => new PhasewardAnalyzerTest<TimingAnalyzer>(Pipeline("Mild", 280), Pw4001("280 ps", "-9.8 ps", DiagnosticSeverity.Info))
             .WithEditorConfig("dotnet_diagnostic.PW4001.severity = suggestion")
             .RunAsync();
 
     [Fact]
     public Task RegistersFromAHelperInAnotherFileAreReportedAtTheCallsInDescribe()
     {
-        var test = new PhasewareAnalyzerTest<TimingAnalyzer>(Design("Helper", """
+        var test = new PhasewardAnalyzerTest<TimingAnalyzer>(Design("Helper", """
             var clk = c.Clock("clk", 280.Picoseconds(), 0.5, 30.Picoseconds());
             var net = {|#1:Cells.Register(c, c.Input("d"), clk, "R1")|};
             for (var i = 0; i < 6; i++)

@@ -29,29 +29,29 @@ public class PW4002Tests
     [Fact]
     public Task WorkedExample_ALateBufferedCaptureClockBreaksHold()
         // 89.7 − (30 + 70) = −10.3 ps.
-        => new PhasewareAnalyzerTest<TimingAnalyzer>(Pipeline("Late", 70), Pw4002("70 ps", "-10.3 ps")).RunAsync();
+        => new PhasewardAnalyzerTest<TimingAnalyzer>(Pipeline("Late", 70), Pw4002("70 ps", "-10.3 ps")).RunAsync();
 
     [Fact]
     public Task ASmallerSkewHolds()
         // 89.7 − (30 + 50) = +9.7 ps.
-        => new PhasewareAnalyzerTest<TimingAnalyzer>(Pipeline("Holds", 50).Replace("{|#0:", "").Replace("{|#1:", "").Replace("|}", "")).RunAsync();
+        => new PhasewardAnalyzerTest<TimingAnalyzer>(Pipeline("Holds", 50).Replace("{|#0:", "").Replace("{|#1:", "").Replace("|}", "")).RunAsync();
 
     [Fact]
     public Task MinTimingSlackOptionReportsASmallPositiveSlack()
-        => new PhasewareAnalyzerTest<TimingAnalyzer>(Pipeline("Required", 50), Pw4002("50 ps", "9.7 ps"))
+        => new PhasewardAnalyzerTest<TimingAnalyzer>(Pipeline("Required", 50), Pw4002("50 ps", "9.7 ps"))
             .WithEditorConfig("phaseward.min_timing_slack = 10ps")
             .RunAsync();
 
     [Fact]
     public Task SeverityNoneSilencesTheRule()
-        => new PhasewareAnalyzerTest<TimingAnalyzer>(Pipeline("Silenced", 70).Replace("{|#0:", "").Replace("{|#1:", "").Replace("|}", ""))
+        => new PhasewardAnalyzerTest<TimingAnalyzer>(Pipeline("Silenced", 70).Replace("{|#0:", "").Replace("{|#1:", "").Replace("|}", ""))
             .WithEditorConfig("dotnet_diagnostic.PW4002.severity = none")
             .RunAsync();
 
     [Fact]
     public Task GatedCaptureClockOnABufferedCopy()
         // Gating adds no delay: the skew is still the buffer's 70 ps.
-        => new PhasewareAnalyzerTest<TimingAnalyzer>(Design("Gated", """
+        => new PhasewardAnalyzerTest<TimingAnalyzer>(Design("Gated", """
             var clk = c.Clock("clk", 1.Nanoseconds(), 0.5, 30.Picoseconds());
             var gated = c.ClockGate(c.BufferedClock(clk, 70.Picoseconds(), "late"), c.Input("en"), name: "gated");
             var q1 = {|#1:c.DynamicRegister(c.Input("d"), clk, "R1")|};

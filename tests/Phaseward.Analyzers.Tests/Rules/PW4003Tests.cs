@@ -33,22 +33,22 @@ public class PW4003Tests
     [Fact]
     public Task WorkedExample_BorrowedTimeIsCarriedToTheNextStage()
         // L1→L2: 34.5 + 21 · 27.6 − 500 = 114.1 ps borrowed; L2→L3: 34.5 + 114.1 + 30 · 27.6 − 500 = 476.6 ps > 465.5 ps.
-        => new PhasewareAnalyzerTest<TimingAnalyzer>(Chain("Borrow", 20, 29), Pw4003("477 ps", "-11.1 ps")).RunAsync();
+        => new PhasewardAnalyzerTest<TimingAnalyzer>(Chain("Borrow", 20, 29), Pw4003("477 ps", "-11.1 ps")).RunAsync();
 
     [Fact]
     public Task OneInverterLessFits()
         // 34.5 + 114.1 + 29 · 27.6 − 500 = 449.0 ps ≤ 465.5 ps: slack +16.5 ps.
-        => new PhasewareAnalyzerTest<TimingAnalyzer>(Chain("Fits", 20, 28).Replace("{|#0:", "").Replace("{|#1:", "").Replace("|}", "")).RunAsync();
+        => new PhasewardAnalyzerTest<TimingAnalyzer>(Chain("Fits", 20, 28).Replace("{|#0:", "").Replace("{|#1:", "").Replace("|}", "")).RunAsync();
 
     [Fact]
     public Task MinTimingSlackOptionReportsASmallPositiveSlack()
-        => new PhasewareAnalyzerTest<TimingAnalyzer>(Chain("Required", 20, 28), Pw4003("449 ps", "16.5 ps"))
+        => new PhasewardAnalyzerTest<TimingAnalyzer>(Chain("Required", 20, 28), Pw4003("449 ps", "16.5 ps"))
             .WithEditorConfig("phaseward.min_timing_slack = 20ps")
             .RunAsync();
 
     [Fact]
     public Task SeverityFromEditorConfig()
-        => new PhasewareAnalyzerTest<TimingAnalyzer>(Chain("Mild", 20, 29), Pw4003("477 ps", "-11.1 ps", DiagnosticSeverity.Info))
+        => new PhasewardAnalyzerTest<TimingAnalyzer>(Chain("Mild", 20, 29), Pw4003("477 ps", "-11.1 ps", DiagnosticSeverity.Info))
             .WithEditorConfig("dotnet_diagnostic.PW4003.severity = suggestion")
             .RunAsync();
 
@@ -57,7 +57,7 @@ public class PW4003Tests
         // Stage i latches on clk.High for even i, clk.Low for odd i, after 30 inverters: with no borrowing before,
         // 34.5 + 31 · 27.6 − 500 = 390.1 ps ≤ 465.5 ps into the second latch (it borrows 390.1 ps); the third then
         // gets 34.5 + 390.1 + 855.6 − 500 = 780.2 ps: slack 465.5 − 780.2 = −314.7 ps.
-        => new PhasewareAnalyzerTest<TimingAnalyzer>(Design("Stages", """
+        => new PhasewardAnalyzerTest<TimingAnalyzer>(Design("Stages", """
             var clk = c.Clock("clk", 1.Nanoseconds(), 0.5, 0.Picoseconds());
             var net = c.Input("d");
             for (var i = 0; i < 3; i++)

@@ -19,7 +19,7 @@ using static Phaseward.Analyzers.Tests.Rules.RuleSources;
 namespace Phaseward.Analyzers.Tests.Verifiers;
 
 /// <summary>
-/// Tests of the code-fix verifier itself (<see cref="PhasewareCodeFixTest{TAnalyzer, TCodeFix}"/>): every code-fix test
+/// Tests of the code-fix verifier itself (<see cref="PhasewardCodeFixTest{TAnalyzer, TCodeFix}"/>): every code-fix test
 /// relies on it to reject a fix whose source does not compile, drops a comment or changes code it was not asked to
 /// change. Each failure is provoked by a test-only provider that applies the real PW1001 fix and then spoils the result
 /// in one way; the control runs the same harness with the real fix. A sweep checks that no code-fix test switches the
@@ -53,7 +53,7 @@ public class CodeFixVerifierTests
     private static readonly DiagnosticResult Pw1001 = new DiagnosticResult(RuleIds.SameWindowLatches, DiagnosticSeverity.Warning)
         .WithLocation(0).WithLocation(1).WithArguments("shape", "hold", "sample.High");
 
-    private static PhasewareCodeFixTest<ClockPhaseAnalyzer, TFix> Test<TFix>(string fixedSource)
+    private static PhasewardCodeFixTest<ClockPhaseAnalyzer, TFix> Test<TFix>(string fixedSource)
         where TFix : CodeFixProvider, new()
         => new(Source, fixedSource, Pw1001);
 
@@ -160,7 +160,7 @@ public class CodeFixVerifierTests
 
         // The sweep must see what it is meant to check: every code-fix test class and the verifier.
         var expectedFiles = Directory.GetFiles(Path.Combine(testsRoot, "CodeFixes"), "*.cs")
-            .Append(Path.Combine(testsRoot, "Verifiers", "PhasewareCodeFixTest.cs"));
+            .Append(Path.Combine(testsRoot, "Verifiers", "PhasewardCodeFixTest.cs"));
         var missed = expectedFiles.Except(codeFixTestFiles).Select(path => Path.GetRelativePath(testsRoot, path)).ToList();
         Assert.True(missed.Count == 0, "The sweep did not recognise these code-fix test files: " + string.Join(", ", missed));
 

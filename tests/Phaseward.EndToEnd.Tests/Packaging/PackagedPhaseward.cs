@@ -133,7 +133,7 @@ public sealed class PackagedPhaseward : IDisposable
 }
 
 [CollectionDefinition(Name)]
-public sealed class PackagedPhasewareCollection : ICollectionFixture<PackagedPhaseward>
+public sealed class PackagedPhasewardCollection : ICollectionFixture<PackagedPhaseward>
 {
     public const string Name = "Packaged Phaseward";
 }
@@ -147,7 +147,7 @@ public sealed record BuildResult(int ExitCode, string Output, string SarifPath)
         RegexOptions.Multiline);
 
     /// <summary>Phaseward's messages in the console output, each once (MSBuild repeats them in its summary).</summary>
-    public IReadOnlyList<CompilerMessageLine> PhasewareMessages => CompilerMessage.Matches(Output)
+    public IReadOnlyList<CompilerMessageLine> PhasewardMessages => CompilerMessage.Matches(Output)
         .Select(m => new CompilerMessageLine(m.Groups["file"].Value.Trim(), int.Parse(m.Groups["line"].Value, System.Globalization.CultureInfo.InvariantCulture),
             int.Parse(m.Groups["column"].Value, System.Globalization.CultureInfo.InvariantCulture), m.Groups["severity"].Value, m.Groups["id"].Value,
             m.Groups["message"].Value, m.Groups["help"].Value))

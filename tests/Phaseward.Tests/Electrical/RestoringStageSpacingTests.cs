@@ -1,92 +1,91 @@
 using System;
 
-namespace Phaseward.Tests.Electrical
+namespace Phaseward.Tests.Electrical;
+
+/// <summary>
+/// The buffer-spacing model against its own derivation: the minimum of t(m) = (N/m)·(ln 2·R·C·m(m+1)/2 + t_buf)
+/// found numerically (golden-section search over real m, then exhaustive search over whole m) must be where the
+/// closed form puts it. No published worked example is cited: none could be checked from here.
+/// </summary>
+public class RestoringStageSpacingTests
 {
-    /// <summary>
-    /// The buffer-spacing model against its own derivation: the minimum of t(m) = (N/m)·(ln 2·R·C·m(m+1)/2 + t_buf)
-    /// found numerically (golden-section search over real m, then exhaustive search over whole m) must be where the
-    /// closed form puts it. No published worked example is cited: none could be checked from here.
-    /// </summary>
-    public class RestoringStageSpacingTests
+    [Theory]
+    [InlineData(20e-12, 5e3, 4e-15)]      // t_buf/RC = 1
+    [InlineData(60e-12, 5e3, 4e-15)]      // 3
+    [InlineData(200e-12, 2e3, 5e-15)]     // 20
+    [InlineData(5e-12, 10e3, 10e-15)]     // 0.05
+    [InlineData(1e-9, 1e3, 1e-15)]        // 1000
+    public void Closed_form_optimum_is_the_numerical_minimum(double stageSeconds, double ohms, double farads)
     {
-        [Theory]
-        [InlineData(20e-12, 5e3, 4e-15)]      // t_buf/RC = 1
-        [InlineData(60e-12, 5e3, 4e-15)]      // 3
-        [InlineData(200e-12, 2e3, 5e-15)]     // 20
-        [InlineData(5e-12, 10e3, 10e-15)]     // 0.05
-        [InlineData(1e-9, 1e3, 1e-15)]        // 1000
-        public void Closed_form_optimum_is_the_numerical_minimum(double stageSeconds, double ohms, double farads)
+        var t = new Time(stageSeconds);
+        var r = new Resistance(ohms);
+        var c = new Capacitance(farads);
+        const int gates = 1000;
+        Func<double, double> delay = m => RestoringStageSpacing.BufferedChainDelay(gates, m, r, c, t).Seconds;
+
+        // Golden-section search on [0.01, 1000]: t(m) is convex for m > 0.
+        double a = 0.01, b = 1000, phi = (Math.Sqrt(5) - 1) / 2;
+        double x1 = b - phi * (b - a), x2 = a + phi * (b - a);
+        for (var i = 0; i < 200; i++)
         {
-            var t = new Time(stageSeconds);
-            var r = new Resistance(ohms);
-            var c = new Capacitance(farads);
-            const int gates = 1000;
-            Func<double, double> delay = m => RestoringStageSpacing.BufferedChainDelay(gates, m, r, c, t).Seconds;
-
-            // Golden-section search on [0.01, 1000]: t(m) is convex for m > 0.
-            double a = 0.01, b = 1000, phi = (Math.Sqrt(5) - 1) / 2;
-            double x1 = b - phi * (b - a), x2 = a + phi * (b - a);
-            for (var i = 0; i < 200; i++)
-            {
-                if (delay(x1) < delay(x2)) { b = x2; x2 = x1; x1 = b - phi * (b - a); }
-                else { a = x1; x1 = x2; x2 = a + phi * (b - a); }
-            }
-
-            var numeric = (a + b) / 2;
-            var closed = RestoringStageSpacing.OptimalSpacing(t, r, c);
-            Assert.Equal(numeric, closed, closed * 1e-6);
-            Assert.Equal(1.7 * Math.Sqrt(stageSeconds / (ohms * farads)), closed, closed * 0.002);
-
-            // The best whole spacing, by exhaustive search.
-            var best = 1;
-            for (var m = 2; m <= 2000; m++)
-                if (delay(m) < delay(best)) best = m;
-            Assert.Equal(best, RestoringStageSpacing.OptimalIntegerSpacing(t, r, c));
+            if (delay(x1) < delay(x2)) { b = x2; x2 = x1; x1 = b - phi * (b - a); }
+            else { a = x1; x1 = x2; x2 = a + phi * (b - a); }
         }
 
-        [Fact]
-        public void Coefficient_is_sqrt_two_over_ln_two()
-        {
-            Assert.Equal(Math.Sqrt(2 / Math.Log(2)), RestoringStageSpacing.Coefficient, 12);
-            Assert.Equal(1.70, RestoringStageSpacing.Coefficient, 2);
-        }
+        var numeric = (a + b) / 2;
+        var closed = RestoringStageSpacing.OptimalSpacing(t, r, c);
+        Assert.Equal(numeric, closed, closed * 1e-6);
+        Assert.Equal(1.7 * Math.Sqrt(stageSeconds / (ohms * farads)), closed, closed * 0.002);
 
-        // One segment (m = N) is the unrestored ladder's ln 2 × N(N+1)/2·RC plus one stage delay; the optimum makes the
-        // delay linear in N: t(m_opt)/N = ln 2·RC/2 + sqrt(2·ln 2·RC·t_buf) (the derivation in RestoringStageSpacing).
-        [Fact]
-        public void Segments_and_optimum_follow_the_model()
-        {
-            var r = 5.Kiloohms();
-            var c = 4.Femtofarads();
-            var t = 20.Picoseconds();
-            var rc = (r * c).Seconds;
-            var single = RestoringStageSpacing.BufferedChainDelay(10, 10, r, c, t).Seconds;
-            Assert.Equal(Math.Log(2) * 55 * rc + 20e-12, single, 1e-20);
+        // The best whole spacing, by exhaustive search.
+        var best = 1;
+        for (var m = 2; m <= 2000; m++)
+            if (delay(m) < delay(best)) best = m;
+        Assert.Equal(best, RestoringStageSpacing.OptimalIntegerSpacing(t, r, c));
+    }
 
-            var m = RestoringStageSpacing.OptimalSpacing(t, r, c);
-            var atOptimum = RestoringStageSpacing.BufferedChainDelay(1000, m, r, c, t).Seconds;
-            var k = Math.Log(2);
-            Assert.Equal(1000 * (k * rc / 2 + Math.Sqrt(2 * k * rc * t.Seconds)), atOptimum, atOptimum * 1e-12);
+    [Fact]
+    public void Coefficient_is_sqrt_two_over_ln_two()
+    {
+        Assert.Equal(Math.Sqrt(2 / Math.Log(2)), RestoringStageSpacing.Coefficient, 12);
+        Assert.Equal(1.70, RestoringStageSpacing.Coefficient, 2);
+    }
 
-            // With these (illustrative) figures t_buf/RC = 1: m_opt = 1.70, the whole optimum is 2 gates.
-            Assert.Equal(2, RestoringStageSpacing.OptimalIntegerSpacing(t, r, c));
-            var restored = RestoringStageSpacing.OptimalRestoredDelay(10, r, c, t).Seconds;
-            Assert.Equal(5 * (k * rc * 3 + 20e-12), restored, 1e-20);
-            // A chain no longer than the optimum stays one segment.
-            Assert.Equal(RestoringStageSpacing.BufferedChainDelay(1, 1, r, c, t), RestoringStageSpacing.OptimalRestoredDelay(1, r, c, t));
-        }
+    // One segment (m = N) is the unrestored ladder's ln 2 × N(N+1)/2·RC plus one stage delay; the optimum makes the
+    // delay linear in N: t(m_opt)/N = ln 2·RC/2 + sqrt(2·ln 2·RC·t_buf) (the derivation in RestoringStageSpacing).
+    [Fact]
+    public void Segments_and_optimum_follow_the_model()
+    {
+        var r = 5.Kiloohms();
+        var c = 4.Femtofarads();
+        var t = 20.Picoseconds();
+        var rc = (r * c).Seconds;
+        var single = RestoringStageSpacing.BufferedChainDelay(10, 10, r, c, t).Seconds;
+        Assert.Equal(Math.Log(2) * 55 * rc + 20e-12, single, 1e-20);
 
-        [Fact]
-        public void Bad_input_names_the_argument_and_the_value()
-        {
-            var zeroGates = Assert.Throws<ArgumentOutOfRangeException>(() => RestoringStageSpacing.BufferedChainDelay(0, 2, 1.Kiloohms(), 1.Femtofarads(), 1.Picoseconds()));
-            Assert.Equal("gates", zeroGates.ParamName);
-            Assert.Contains("was 0", zeroGates.Message);
-            var spacing = Assert.Throws<ArgumentOutOfRangeException>(() => RestoringStageSpacing.BufferedChainDelay(4, -1, 1.Kiloohms(), 1.Femtofarads(), 1.Picoseconds()));
-            Assert.Equal("spacing", spacing.ParamName);
-            var stage = Assert.Throws<ArgumentException>(() => RestoringStageSpacing.OptimalSpacing(Time.Zero, 1.Kiloohms(), 1.Femtofarads()));
-            Assert.Equal("stageDelay", stage.ParamName);
-            Assert.Contains("0 s", stage.Message);
-        }
+        var m = RestoringStageSpacing.OptimalSpacing(t, r, c);
+        var atOptimum = RestoringStageSpacing.BufferedChainDelay(1000, m, r, c, t).Seconds;
+        var k = Math.Log(2);
+        Assert.Equal(1000 * (k * rc / 2 + Math.Sqrt(2 * k * rc * t.Seconds)), atOptimum, atOptimum * 1e-12);
+
+        // With these (illustrative) figures t_buf/RC = 1: m_opt = 1.70, the whole optimum is 2 gates.
+        Assert.Equal(2, RestoringStageSpacing.OptimalIntegerSpacing(t, r, c));
+        var restored = RestoringStageSpacing.OptimalRestoredDelay(10, r, c, t).Seconds;
+        Assert.Equal(5 * (k * rc * 3 + 20e-12), restored, 1e-20);
+        // A chain no longer than the optimum stays one segment.
+        Assert.Equal(RestoringStageSpacing.BufferedChainDelay(1, 1, r, c, t), RestoringStageSpacing.OptimalRestoredDelay(1, r, c, t));
+    }
+
+    [Fact]
+    public void Bad_input_names_the_argument_and_the_value()
+    {
+        var zeroGates = Assert.Throws<ArgumentOutOfRangeException>(() => RestoringStageSpacing.BufferedChainDelay(0, 2, 1.Kiloohms(), 1.Femtofarads(), 1.Picoseconds()));
+        Assert.Equal("gates", zeroGates.ParamName);
+        Assert.Contains("was 0", zeroGates.Message);
+        var spacing = Assert.Throws<ArgumentOutOfRangeException>(() => RestoringStageSpacing.BufferedChainDelay(4, -1, 1.Kiloohms(), 1.Femtofarads(), 1.Picoseconds()));
+        Assert.Equal("spacing", spacing.ParamName);
+        var stage = Assert.Throws<ArgumentException>(() => RestoringStageSpacing.OptimalSpacing(Time.Zero, 1.Kiloohms(), 1.Femtofarads()));
+        Assert.Equal("stageDelay", stage.ParamName);
+        Assert.Contains("0 s", stage.Message);
     }
 }

@@ -4,456 +4,455 @@ using System.Globalization;
 using System.Linq;
 using Phaseward.Tests.Reference;
 
-namespace Phaseward.Tests.Rules
+namespace Phaseward.Tests.Rules;
+
+// Scenario (invented): the telemetry front end of a drifting ocean buoy — sensor channels multiplexed through pass
+// gates onto a shared sample bus. Process figures are Phaseward's illustrative defaults unless a test sets its own.
+public class PassGateChainRuleTests
 {
-    // Scenario (invented): the telemetry front end of a drifting ocean buoy — sensor channels multiplexed through pass
-    // gates onto a shared sample bus. Process figures are Phaseward's illustrative defaults unless a test sets its own.
-    public class PassGateChainRuleTests
+    private static readonly PassGateChainRule Rule = new();
+
+    private static IReadOnlyList<Finding> Check(Circuit c, int? limit = null)
+        => Rule.Check(new RuleContext(c.ToNetlist(), limit is { } l ? new RulePolicy { MaxSeriesPassGates = l } : RulePolicy.Default)).ToList();
+
+    // in → TG × n → out (clock-controlled); returns the gates' output nets.
+    private static List<Net> Chain(Circuit c, Net from, Phase phase, int gates, string prefix)
     {
-        private static readonly PassGateChainRule Rule = new();
-
-        private static IReadOnlyList<Finding> Check(Circuit c, int? limit = null)
-            => Rule.Check(new RuleContext(c.ToNetlist(), limit is { } l ? new RulePolicy { MaxSeriesPassGates = l } : RulePolicy.Default)).ToList();
-
-        // in → TG × n → out (clock-controlled); returns the gates' output nets.
-        private static List<Net> Chain(Circuit c, Net from, Phase phase, int gates, string prefix)
+        var nets = new List<Net>();
+        var net = from;
+        for (var i = 1; i <= gates; i++)
         {
-            var nets = new List<Net>();
-            var net = from;
-            for (var i = 1; i <= gates; i++)
-            {
-                net = c.TransmissionGate(net, phase, prefix + i);
-                nets.Add(net);
-            }
-
-            return nets;
+            net = c.TransmissionGate(net, phase, prefix + i);
+            nets.Add(net);
         }
 
-        [Theory]
-        [InlineData(3, 3, 0)]
-        [InlineData(2, 3, 0)]
-        [InlineData(4, 3, 1)]
-        [InlineData(9, 3, 1)]
-        [InlineData(2, 1, 1)]
-        public void Straight_chain_is_reported_only_beyond_the_limit(int gates, int limit, int expected)
-        {
-            var c = new Circuit("Buoy");
-            var clock = c.Clock("sample", 10.Nanoseconds());
-            Chain(c, c.Input("sensor"), clock.High, gates, "hop");
-            var findings = Check(c, limit);
-            Assert.Equal(expected, findings.Count);
-            if (expected == 0) return;
-
-            var finding = findings[0];
-            Assert.Equal("PW2001", finding.RuleId);
-            Assert.Equal(gates.ToString(CultureInfo.InvariantCulture), finding.Properties["chainLength"]);
-            Assert.Equal(limit.ToString(CultureInfo.InvariantCulture), finding.Properties["limit"]);
-            Assert.Equal("hop" + (limit + 1), Name(c, finding.Properties["reportedGateId"]));
-            Assert.Equal("hop1", finding.Properties["firstGate"]);
-        }
-
-        // The figures of a straight chain, worked by hand with the illustrative process (wire 1 fF, diffusion 1.5 fF,
-        // gate 2 fF, pass gate 5 kΩ, driver 4 kΩ, stage delay 20 ps — invented defaults, see Process):
-        //   sensor (input, one TG load):      C = 1 + 1.5         = 2.5 fF
-        //   hop1..hop4 (TG in, TG out):        C = 1 + 1.5·2       = 4 fF
-        //   hop5 (end, TG driver only):        C = 1 + 1.5         = 2.5 fF
-        //   downstream: hop5 2.5, hop4 6.5, hop3 10.5, hop2 14.5, hop1 18.5, sensor 21 fF
-        //   Elmore(hop5) = 4k·21f + 5k·(18.5 + 14.5 + 10.5 + 6.5 + 2.5)f = 84 ps + 262.5 ps = 346.5 ps
-        // Limit: m_opt = 1.70·sqrt(20 ps/(5 kΩ·4 fF)) = 1.70 → best whole spacing 2 → limit max(2, 2) = 2.
-        // Restored: mean R 5 kΩ, mean node C (4·4 + 2.5)/5 = 3.7 fF, RC = 18.5 ps; t = (5/2)·(ln 2·18.5 ps·3 + 20 ps) = 146 ps.
-        [Fact]
-        public void Figures_of_a_five_gate_chain_under_the_process_limit()
-        {
-            var c = new Circuit("Buoy");
-            var clock = c.Clock("sample", 10.Nanoseconds());
-            Chain(c, c.Input("sensor"), clock.High, 5, "hop");
-
-            Assert.Equal(2, PassGateChainRule.LimitFor(c.Process, RulePolicy.Default));
-            var finding = Assert.Single(Check(c));
-            Assert.Equal("5", finding.Properties["chainLength"]);
-            Assert.Equal("2", finding.Properties["limit"]);
-            Assert.Equal("2", finding.Properties["optimalSpacing"]);
-            var elmore = double.Parse(finding.Properties["elmoreDelaySeconds"], CultureInfo.InvariantCulture);
-            Assert.Equal(346.5e-12, elmore, 1e-21);
-            Assert.Equal(Math.Log(2) * 346.5e-12, double.Parse(finding.Properties["fiftyPercentDelaySeconds"], CultureInfo.InvariantCulture), 1e-21);
-            var restored = double.Parse(finding.Properties["restoredDelaySeconds"], CultureInfo.InvariantCulture);
-            Assert.Equal(2.5 * (Math.Log(2) * 18.5e-12 * 3 + 20e-12), restored, 1e-21);
-            // Split after hop2 and hop4: segments of 2, 2, 1.
-            Assert.Equal("2", finding.Properties["splitPointCount"]);
-            Assert.Equal("hop2\nhop4", finding.Properties["splitAfterDevices"]);
-            Assert.Equal("false", finding.Properties["splitPointsTruncated"]);
-            Assert.Equal("5 pass gates in series without a restoring stage (limit 2): Elmore delay 347 ps (50% estimate 240 ps); "
-                         + "a restoring stage every 2 gates would give about 146 ps", finding.Message);
-            Assert.Equal(c.ToNetlist().Devices.Single(d => d.Name == "hop1").Span, Assert.Single(finding.RelatedLocations));
-            Assert.Equal(c.ToNetlist().Devices.Single(d => d.Name == "hop3").Span, finding.Location);
-        }
-
-        [Fact]
-        public void A_larger_stage_delay_raises_the_computed_limit()
-        {
-            var c = new Circuit("Buoy");
-            // Invented figures: t_buf/RC = 200 ps/(5 kΩ·4 fF) = 10 → m_opt = 1.70·sqrt(10) = 5.37 → whole optimum 5.
-            c.UseProcess(new Process { StageDelay = 200.Picoseconds() });
-            var clock = c.Clock("sample", 10.Nanoseconds());
-            Chain(c, c.Input("sensor"), clock.High, 5, "hop");
-            Assert.Equal(5, PassGateChainRule.LimitFor(c.Process, RulePolicy.Default));
-            Assert.Empty(Check(c));
-            Chain(c, c.Input("sensor2"), clock.High, 6, "leg");
-            Assert.Equal("leg6", Name(c, Assert.Single(Check(c)).Properties["reportedGateId"]));
-        }
-
-        [Fact]
-        public void Policy_limit_must_be_at_least_one()
-        {
-            var error = Assert.Throws<ArgumentException>(() => new RulePolicy { MaxSeriesPassGates = 0 });
-            Assert.Equal("MaxSeriesPassGates", error.ParamName);
-            Assert.Contains("was 0", error.Message);
-            Assert.Throws<ArgumentException>(() => new RulePolicy { MaxSeriesPassGates = -3 });
-            Assert.Null(new RulePolicy().MaxSeriesPassGates);
-        }
-
-        // A 16:1 mux tree of data-controlled gates: 4 levels, every input-to-output path 4 gates long. With limit 2 the
-        // first gate beyond the limit is a level-3 gate: 4 of them, one finding each (not one per input: 16 paths).
-        [Theory]
-        [InlineData(2, 4)]
-        [InlineData(3, 2)]
-        [InlineData(4, 0)]
-        public void Mux_tree_is_reported_once_per_gate_where_paths_cross_the_limit(int limit, int expected)
-        {
-            var c = new Circuit("BuoyMux");
-            var level = Enumerable.Range(0, 16).Select(i => c.Input("ch" + i)).ToList();
-            for (var depth = 0; level.Count > 1; depth++)
-            {
-                var select = c.Input("sel" + depth);
-                var selectBar = c.Inverter(select, "sel" + depth + "_n");
-                var nextLevel = new List<Net>();
-                for (var i = 0; i < level.Count; i += 2)
-                {
-                    var merged = c.Node($"m{depth}_{i / 2}");
-                    c.TransmissionGate(level[i], selectBar, merged);
-                    c.TransmissionGate(level[i + 1], select, merged);
-                    nextLevel.Add(merged);
-                }
-
-                level = nextLevel;
-            }
-
-            var findings = Check(c, limit);
-            Assert.Equal(expected, findings.Count);
-            Assert.All(findings, f => Assert.Equal("4", f.Properties["chainLength"]));
-            Assert.Equal(findings.Count, findings.Select(f => f.Properties["reportedGateId"]).Distinct().Count());
-        }
-
-        // Branching out: a long shared trunk is reported once, at the trunk (not once per branch), with the longest
-        // branch; a short trunk whose branches each cross the limit gives one finding per branch.
-        [Fact]
-        public void Fan_out_tree_is_reported_at_the_trunk_once_or_per_branch()
-        {
-            var c = new Circuit("BuoyBroadcast");
-            var clock = c.Clock("sample", 10.Nanoseconds());
-            var trunk = Chain(c, c.Input("beacon"), clock.High, 5, "trunk");
-            for (var b = 0; b < 3; b++)
-                Chain(c, trunk[^1], clock.High, 2 + b, "branch" + b + "_");
-            var finding = Assert.Single(Check(c, 3));
-            Assert.Equal("9", finding.Properties["chainLength"]);
-            Assert.Equal("trunk4", Name(c, finding.Properties["reportedGateId"]));
-
-            var d = new Circuit("BuoyBroadcast2");
-            var clock2 = d.Clock("sample", 10.Nanoseconds());
-            var stub = Chain(d, d.Input("beacon"), clock2.High, 2, "trunk");
-            for (var b = 0; b < 3; b++)
-                Chain(d, stub[^1], clock2.High, 3, "branch" + b + "_");
-            var findings = Check(d, 3);
-            Assert.Equal(new[] { "branch0_2", "branch1_2", "branch2_2" }, findings.Select(f => Name(d, f.Properties["reportedGateId"])));
-            Assert.All(findings, f => Assert.Equal("5", f.Properties["chainLength"]));
-            Assert.All(findings, f => Assert.Equal("trunk1", f.Properties["firstGate"]));
-        }
-
-        // A branched chain built with the DSL to match reference tree A (tests/reference/ngspice/rc_tree_a.cir): the input's
-        // driver is the 2 kΩ first section, every pass gate's on-resistance and every net's capacitance set as in the
-        // netlist. The rule's Elmore delays must be the hand-worked 876 ps (leaf a2) and 1368 ps (leaf b4) — see
-        // ElmoreDelayTests — and bound ngspice's t50 at those leaves.
-        [Fact]
-        public void Branched_chain_delay_is_the_RC_tree_Elmore_delay()
-        {
-            var c = new Circuit("BuoyTreeA");
-            c.UseProcess(new Process { DriverResistance = 2.Kiloohms() });
-            var clock = c.Clock("sample", 10.Nanoseconds());
-            var t1 = c.Input("t1");
-            Net Gate(Net from, string name, double kiloohms, double femtofarads)
-            {
-                var net = c.TransmissionGate(from, clock.High, name, kiloohms.Kiloohms());
-                c.SetCapacitance(net, femtofarads.Femtofarads());
-                return net;
-            }
-
-            c.SetCapacitance(t1, 5.Femtofarads());
-            var t3 = Gate(Gate(t1, "t2", 3, 8), "t3", 4, 6);
-            Gate(Gate(t3, "a1", 10, 4), "a2", 15, 12);
-            Gate(Gate(Gate(Gate(t3, "b1", 6, 3), "b2", 8, 5), "b3", 7, 4), "b4", 12, 20);
-
-            var findings = Check(c, 2);
-            Assert.Equal(new[] { "a1", "b1" }, findings.Select(f => Name(c, f.Properties["reportedGateId"])));
-            var a = double.Parse(findings[0].Properties["elmoreDelaySeconds"], CultureInfo.InvariantCulture);
-            var b = double.Parse(findings[1].Properties["elmoreDelaySeconds"], CultureInfo.InvariantCulture);
-            Assert.Equal(876e-12, a, 1e-20);
-            Assert.Equal(1368e-12, b, 1e-20);
-            Assert.Equal("4", findings[0].Properties["chainLength"]);
-            Assert.Equal("6", findings[1].Properties["chainLength"]);
-            Assert.True(a >= NgspiceReference.TreeT50("rc_tree_a", "a2"));
-            Assert.True(b >= NgspiceReference.TreeT50("rc_tree_a", "b4"));
-        }
-
-        // A dynamic latch's transmission gate is a pass device in series with the gates before it; its inverter restores.
-        [Fact]
-        public void Chain_runs_into_a_latch_cell_and_stops_at_its_inverter()
-        {
-            var c = new Circuit("BuoyLatch");
-            var clock = c.Clock("sample", 10.Nanoseconds());
-            var hops = Chain(c, c.Input("sensor"), clock.High, 2, "hop");
-            var held = c.DynamicLatch(hops[^1], clock.Low, "hold");
-            Chain(c, held, clock.High, 2, "after");
-
-            var finding = Assert.Single(Check(c, 2));
-            Assert.Equal("hold.pass", Name(c, finding.Properties["reportedGateId"]));
-            Assert.Equal("3", finding.Properties["chainLength"]);
-            Assert.Empty(Check(c, 3));
-        }
-
-        // Static latches: the feedback gate drives the storage node from the feedback inverter (restored), so it starts a
-        // run of its own; registers of static latches in series never form a pass chain, and nothing loops forever.
-        [Fact]
-        public void Static_latch_feedback_gives_no_finding_and_terminates()
-        {
-            var c = new Circuit("BuoyStatic");
-            var clock = c.Clock("sample", 10.Nanoseconds());
-            var net = c.Input("sensor");
-            for (var i = 0; i < 50; i++)
-                net = c.StaticRegister(net, clock, "r" + i);
-            Assert.Empty(Check(c, 1));
-
-            var d = new Circuit("BuoyStatic2");
-            var clock2 = d.Clock("sample", 10.Nanoseconds());
-            var hop = d.TransmissionGate(d.Input("sensor"), clock2.High, "hop");
-            d.StaticLatch(hop, clock2.Low, "keep");
-            var finding = Assert.Single(Check(d, 1));
-            Assert.Equal("keep.pass", Name(d, finding.Properties["reportedGateId"]));
-            Assert.Equal("2", finding.Properties["chainLength"]);
-        }
-
-        // A loop of pass gates (a designer's mistake, or a ring written on purpose) must not hang the rule. The edge that
-        // closes the loop is dropped, so sensor → ring.a → ring.b is a run of 3 (entry, then each loop gate once).
-        [Fact]
-        public void Loops_of_pass_gates_terminate()
-        {
-            var c = new Circuit("BuoyRing");
-            var clock = c.Clock("sample", 10.Nanoseconds());
-            var n1 = c.Node("n1");
-            var n2 = c.Node("n2");
-            c.TransmissionGate(c.Input("sensor"), clock.High, n1);
-            c.TransmissionGate(n1, clock.Low, n2);
-            c.TransmissionGate(n2, clock.High, n1);
-            var finding = Assert.Single(Check(c, 2));
-            Assert.Equal("3", finding.Properties["chainLength"]);
-            Assert.Empty(Check(c, 3));
-
-            // A loop with no way in at all.
-            var d = new Circuit("BuoyRing2");
-            var clock2 = d.Clock("sample", 10.Nanoseconds());
-            var m1 = d.Node("m1");
-            var m2 = d.Node("m2");
-            var m3 = d.Node("m3");
-            d.TransmissionGate(m1, clock2.High, m2);
-            d.TransmissionGate(m2, clock2.High, m3);
-            d.TransmissionGate(m3, clock2.High, m1);
-            Assert.Empty(Check(d, 3));
-            Assert.Single(Check(d, 2));
-        }
-
-        // A keeper holds a node's level but drives it weakly: it does not restore the edge, so the run goes on.
-        [Fact]
-        public void A_weak_keeper_does_not_restore_but_a_buffer_does()
-        {
-            var c = new Circuit("BuoyKeeper");
-            var clock = c.Clock("sample", 10.Nanoseconds());
-            var hops = Chain(c, c.Input("sensor"), clock.High, 2, "hop");
-            c.Keeper(hops[^1]);
-            Chain(c, hops[^1], clock.High, 2, "more");
-            Assert.Equal("4", Assert.Single(Check(c, 3)).Properties["chainLength"]);
-
-            var d = new Circuit("BuoyBuffered");
-            var clock2 = d.Clock("sample", 10.Nanoseconds());
-            var first = Chain(d, d.Input("sensor"), clock2.High, 3, "hop");
-            Chain(d, d.Buffer(first[^1], "restore"), clock2.High, 3, "more");
-            Assert.Empty(Check(d, 3));
-        }
-
-        // Fan-out to a restoring load does not restore the chain (the inverter hangs off the side of the node).
-        [Fact]
-        public void Fan_out_to_an_inverter_does_not_break_the_chain()
-        {
-            var c = new Circuit("BuoyTap");
-            var clock = c.Clock("sample", 10.Nanoseconds());
-            var hops = Chain(c, c.Input("sensor"), clock.High, 2, "hop");
-            c.Inverter(hops[^1], "tap");
-            Chain(c, hops[^1], clock.High, 2, "more");
-            Assert.Equal("4", Assert.Single(Check(c, 3)).Properties["chainLength"]);
-        }
-
-        // 200 000 gates in one chain: the rule must finish (no timing asserted; speed lives in the benchmark) and list a
-        // bounded number of split points.
-        [Fact]
-        public void Very_long_chain_completes()
-        {
-            var c = new Circuit("BuoyLong");
-            var clock = c.Clock("sample", 10.Nanoseconds());
-            var net = c.Input("sensor");
-            for (var i = 0; i < 200_000; i++)
-                net = c.TransmissionGate(net, clock.High);
-            var finding = Assert.Single(Check(c));
-            Assert.Equal("200000", finding.Properties["chainLength"]);
-            Assert.Equal("99999", finding.Properties["splitPointCount"]);
-            Assert.Equal("true", finding.Properties["splitPointsTruncated"]);
-            Assert.Equal(PassGateChainRule.MaxListedSplitPoints, finding.Properties["splitAfterDeviceIds"].Split(',').Length);
-        }
-
-        private sealed class TelemetryMux : Design
-        {
-            protected override void Describe(Circuit c)
-            {
-                var clock = c.Clock("frame", 20.Nanoseconds());
-                var net = c.Input("salinity");
-                for (var i = 0; i < 6; i++)
-                    net = c.TransmissionGate(net, clock.High, "leg" + i);
-                c.Output("bus", c.Inverter(net));
-            }
-        }
-
-        [Fact]
-        public void Design_check_reports_the_finding_at_run_time()
-        {
-            var report = new TelemetryMux().Check(new RulePolicy { MaxSeriesPassGates = 4 });
-            var finding = Assert.Single(report.Findings, f => f.RuleId == RuleIds.SeriesPassGates);
-            Assert.Equal("6", finding.Properties["chainLength"]);
-            Assert.StartsWith("6 pass gates in series without a restoring stage (limit 4): Elmore delay ", finding.Message);
-            Assert.Contains(" ps", finding.Message);
-            Assert.True(finding.Location.IsKnown);
-            Assert.Contains(RuleCatalog.SeriesPassGates, RuleCatalog.All);
-            Assert.Contains(RuleSet.All, r => r is PassGateChainRule);
-            Assert.DoesNotContain(new TelemetryMux().Check(new RulePolicy { MaxSeriesPassGates = 6 }).Findings, f => f.RuleId == RuleIds.SeriesPassGates);
-        }
-
-        // The example and its fix in docs/rules/PW2001.md (keep them in step). By hand: as the five-gate chain above,
-        // but hop5 also drives an inverter (+2 fF gate load): hop5 4.5 fF, downstream +2 fF on every net:
-        //   Elmore = 4 kΩ·23 fF + 5 kΩ·(20.5 + 16.5 + 12.5 + 8.5 + 4.5) fF = 92 + 312.5 = 404.5 ps; ln 2 × = 280 ps;
-        //   restored: mean C (4·4 + 4.5)/5 = 4.1 fF, RC = 20.5 ps, t = 2.5·(ln 2·20.5 ps·3 + 20 ps) = 157 ps.
-        private sealed class TelemetryBus : Design
-        {
-            private readonly bool restored;
-
-            public TelemetryBus(bool restored) => this.restored = restored;
-
-            protected override void Describe(Circuit c)
-            {
-                var frame = c.Clock("frame", 20.Nanoseconds());
-                var sample = c.Input("salinity");
-                var hop1 = c.TransmissionGate(sample, frame.High, "hop1");
-                var hop2 = c.TransmissionGate(hop1, frame.High, "hop2");
-                var hop3 = c.TransmissionGate(restored ? c.Buffer(hop2, "fresh") : hop2, frame.High, "hop3");
-                var hop4 = c.TransmissionGate(hop3, frame.High, "hop4");
-                var hop5 = c.TransmissionGate(restored ? c.Buffer(hop4, "again") : hop4, frame.High, "hop5");
-                c.Output("bus", c.Inverter(hop5));
-            }
-        }
-
-        [Fact]
-        public void Documented_example_and_its_fix()
-        {
-            var finding = Assert.Single(new TelemetryBus(restored: false).Check().Findings, f => f.RuleId == RuleIds.SeriesPassGates);
-            Assert.Equal("5 pass gates in series without a restoring stage (limit 2): Elmore delay 405 ps (50% estimate 280 ps); "
-                         + "a restoring stage every 2 gates would give about 157 ps", finding.Message);
-            Assert.Equal("hop2\nhop4", finding.Properties["splitAfterDevices"]);
-            Assert.DoesNotContain(new TelemetryBus(restored: true).Check().Findings, f => f.RuleId == RuleIds.SeriesPassGates);
-        }
-
-        // The split sites a code fix needs (splitSites): a straight run of five separate calls, then a loop-like call that
-        // makes four gates in a row, then one call through a helper. Spans are set as the compile-time elaborator sets them.
-        // Chain positions: hop1..hop5 at calls 100..140, loop0..loop3 at call 200, last at call 300 (via a helper call 50).
-        // Limit 2, spacing 2: splits after positions 2, 4, 6, 8 (count (10 - 1) / 2 = 4), next gates at 3, 5, 7, 9.
-        [Fact]
-        public void Split_sites_name_the_call_after_each_split_and_the_run_made_there()
-        {
-            var c = new Circuit("Buoy");
-            var clock = c.Clock("sample", 10.Nanoseconds());
-            SourceSpan? site = null;
-            c.SourceSiteProvider = () => site ?? SourceSpan.Unknown;
-            var net = c.Input("sensor");
-            for (var i = 1; i <= 5; i++)
-            {
-                site = new SourceSpan("/src/Buoy.cs", 10 + i, 9, 100 + 10 * (i - 1), 8);
-                net = c.TransmissionGate(net, clock.High, "hop" + i);
-            }
-
-            site = new SourceSpan("/src/Buoy.cs", 20, 13, 200, 30);
-            for (var i = 0; i < 4; i++)
-                net = c.TransmissionGate(net, clock.High, "loop" + i);
-
-            site = new SourceSpan("/src/Lib.cs", 3, 9, 300, 12, new[] { new SourceSpan("/src/Buoy.cs", 25, 9, 50, 20) });
-            net = c.TransmissionGate(net, clock.High, "last");
-            site = new SourceSpan("/src/Buoy.cs", 26, 9, 400, 10);
-            c.Output("bus", c.Inverter(net));
-
-            var finding = Assert.Single(Check(c));
-            Assert.Equal("10", finding.Properties["chainLength"]);
-            Assert.Equal("hop2\nhop4\nloop0\nloop2", finding.Properties["splitAfterDevices"]);
-            var sites = finding.Properties[PassGateChainRule.SplitSitesProperty].Split('\n');
-            Assert.Equal(new[]
-            {
-                "3|3|1|1|false|120|8|/src/Buoy.cs",   // hop3: its own call
-                "5|5|1|1|false|140|8|/src/Buoy.cs",   // hop5
-                "7|6|4|4|false|200|30|/src/Buoy.cs",  // loop1 (split after loop0): run of four at call 200 from position 6
-                "9|6|4|4|false|200|30|/src/Buoy.cs",  // loop3
-            }, sites);
-
-            // Limit 1 (spacing 1): split before every gate from position 2 on; the helper's gate reports its caller.
-            var strict = Assert.Single(Check(c, limit: 1));
-            var last = strict.Properties[PassGateChainRule.SplitSitesProperty].Split('\n').Last();
-            Assert.Equal("10|10|1|1|true|300|12|/src/Lib.cs", last);
-        }
-
-        [Fact]
-        public void Split_sites_count_every_gate_a_call_makes_even_off_the_chain()
-        {
-            // One call makes two gates: one on the chain, one on a side branch. A fix at that call would touch both.
-            var c = new Circuit("Buoy");
-            var clock = c.Clock("sample", 10.Nanoseconds());
-            SourceSpan? site = null;
-            c.SourceSiteProvider = () => site ?? SourceSpan.Unknown;
-            var net = c.Input("sensor");
-            site = new SourceSpan("/src/Buoy.cs", 1, 1, 10, 5);
-            net = c.TransmissionGate(net, clock.High, "a");
-            site = new SourceSpan("/src/Buoy.cs", 2, 1, 20, 5);
-            net = c.TransmissionGate(net, clock.High, "b");
-            site = new SourceSpan("/src/Buoy.cs", 3, 1, 30, 5);
-            var side = c.TransmissionGate(c.Input("other"), clock.High, "side");
-            net = c.TransmissionGate(net, clock.High, "c");
-            c.Output("y", c.Inverter(net));
-            c.Output("z", c.Inverter(side));
-
-            var finding = Assert.Single(Check(c));
-            Assert.Equal("3|3|1|2|false|30|5|/src/Buoy.cs", finding.Properties[PassGateChainRule.SplitSitesProperty]);
-        }
-
-        [Fact]
-        public void Split_sites_at_run_time_have_no_character_span()
-        {
-            var c = new Circuit("Buoy");
-            var clock = c.Clock("sample", 10.Nanoseconds());
-            Chain(c, c.Input("sensor"), clock.High, 3, "hop");
-            var line = Assert.Single(Check(c)).Properties[PassGateChainRule.SplitSitesProperty];
-            Assert.StartsWith("3|3|1|1|false|-1|0|", line, StringComparison.Ordinal);
-        }
-
-        private static string Name(Circuit c, string id) => c.ToNetlist().Devices[int.Parse(id, CultureInfo.InvariantCulture)].Name;
+        return nets;
     }
+
+    [Theory]
+    [InlineData(3, 3, 0)]
+    [InlineData(2, 3, 0)]
+    [InlineData(4, 3, 1)]
+    [InlineData(9, 3, 1)]
+    [InlineData(2, 1, 1)]
+    public void Straight_chain_is_reported_only_beyond_the_limit(int gates, int limit, int expected)
+    {
+        var c = new Circuit("Buoy");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        Chain(c, c.Input("sensor"), clock.High, gates, "hop");
+        var findings = Check(c, limit);
+        Assert.Equal(expected, findings.Count);
+        if (expected == 0) return;
+
+        var finding = findings[0];
+        Assert.Equal("PW2001", finding.RuleId);
+        Assert.Equal(gates.ToString(CultureInfo.InvariantCulture), finding.Properties["chainLength"]);
+        Assert.Equal(limit.ToString(CultureInfo.InvariantCulture), finding.Properties["limit"]);
+        Assert.Equal("hop" + (limit + 1), Name(c, finding.Properties["reportedGateId"]));
+        Assert.Equal("hop1", finding.Properties["firstGate"]);
+    }
+
+    // The figures of a straight chain, worked by hand with the illustrative process (wire 1 fF, diffusion 1.5 fF,
+    // gate 2 fF, pass gate 5 kΩ, driver 4 kΩ, stage delay 20 ps — invented defaults, see Process):
+    //   sensor (input, one TG load):      C = 1 + 1.5         = 2.5 fF
+    //   hop1..hop4 (TG in, TG out):        C = 1 + 1.5·2       = 4 fF
+    //   hop5 (end, TG driver only):        C = 1 + 1.5         = 2.5 fF
+    //   downstream: hop5 2.5, hop4 6.5, hop3 10.5, hop2 14.5, hop1 18.5, sensor 21 fF
+    //   Elmore(hop5) = 4k·21f + 5k·(18.5 + 14.5 + 10.5 + 6.5 + 2.5)f = 84 ps + 262.5 ps = 346.5 ps
+    // Limit: m_opt = 1.70·sqrt(20 ps/(5 kΩ·4 fF)) = 1.70 → best whole spacing 2 → limit max(2, 2) = 2.
+    // Restored: mean R 5 kΩ, mean node C (4·4 + 2.5)/5 = 3.7 fF, RC = 18.5 ps; t = (5/2)·(ln 2·18.5 ps·3 + 20 ps) = 146 ps.
+    [Fact]
+    public void Figures_of_a_five_gate_chain_under_the_process_limit()
+    {
+        var c = new Circuit("Buoy");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        Chain(c, c.Input("sensor"), clock.High, 5, "hop");
+
+        Assert.Equal(2, PassGateChainRule.LimitFor(c.Process, RulePolicy.Default));
+        var finding = Assert.Single(Check(c));
+        Assert.Equal("5", finding.Properties["chainLength"]);
+        Assert.Equal("2", finding.Properties["limit"]);
+        Assert.Equal("2", finding.Properties["optimalSpacing"]);
+        var elmore = double.Parse(finding.Properties["elmoreDelaySeconds"], CultureInfo.InvariantCulture);
+        Assert.Equal(346.5e-12, elmore, 1e-21);
+        Assert.Equal(Math.Log(2) * 346.5e-12, double.Parse(finding.Properties["fiftyPercentDelaySeconds"], CultureInfo.InvariantCulture), 1e-21);
+        var restored = double.Parse(finding.Properties["restoredDelaySeconds"], CultureInfo.InvariantCulture);
+        Assert.Equal(2.5 * (Math.Log(2) * 18.5e-12 * 3 + 20e-12), restored, 1e-21);
+        // Split after hop2 and hop4: segments of 2, 2, 1.
+        Assert.Equal("2", finding.Properties["splitPointCount"]);
+        Assert.Equal("hop2\nhop4", finding.Properties["splitAfterDevices"]);
+        Assert.Equal("false", finding.Properties["splitPointsTruncated"]);
+        Assert.Equal("5 pass gates in series without a restoring stage (limit 2): Elmore delay 347 ps (50% estimate 240 ps); "
+                     + "a restoring stage every 2 gates would give about 146 ps", finding.Message);
+        Assert.Equal(c.ToNetlist().Devices.Single(d => d.Name == "hop1").Span, Assert.Single(finding.RelatedLocations));
+        Assert.Equal(c.ToNetlist().Devices.Single(d => d.Name == "hop3").Span, finding.Location);
+    }
+
+    [Fact]
+    public void A_larger_stage_delay_raises_the_computed_limit()
+    {
+        var c = new Circuit("Buoy");
+        // Invented figures: t_buf/RC = 200 ps/(5 kΩ·4 fF) = 10 → m_opt = 1.70·sqrt(10) = 5.37 → whole optimum 5.
+        c.UseProcess(new Process { StageDelay = 200.Picoseconds() });
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        Chain(c, c.Input("sensor"), clock.High, 5, "hop");
+        Assert.Equal(5, PassGateChainRule.LimitFor(c.Process, RulePolicy.Default));
+        Assert.Empty(Check(c));
+        Chain(c, c.Input("sensor2"), clock.High, 6, "leg");
+        Assert.Equal("leg6", Name(c, Assert.Single(Check(c)).Properties["reportedGateId"]));
+    }
+
+    [Fact]
+    public void Policy_limit_must_be_at_least_one()
+    {
+        var error = Assert.Throws<ArgumentException>(() => new RulePolicy { MaxSeriesPassGates = 0 });
+        Assert.Equal("MaxSeriesPassGates", error.ParamName);
+        Assert.Contains("was 0", error.Message);
+        Assert.Throws<ArgumentException>(() => new RulePolicy { MaxSeriesPassGates = -3 });
+        Assert.Null(new RulePolicy().MaxSeriesPassGates);
+    }
+
+    // A 16:1 mux tree of data-controlled gates: 4 levels, every input-to-output path 4 gates long. With limit 2 the
+    // first gate beyond the limit is a level-3 gate: 4 of them, one finding each (not one per input: 16 paths).
+    [Theory]
+    [InlineData(2, 4)]
+    [InlineData(3, 2)]
+    [InlineData(4, 0)]
+    public void Mux_tree_is_reported_once_per_gate_where_paths_cross_the_limit(int limit, int expected)
+    {
+        var c = new Circuit("BuoyMux");
+        var level = Enumerable.Range(0, 16).Select(i => c.Input("ch" + i)).ToList();
+        for (var depth = 0; level.Count > 1; depth++)
+        {
+            var select = c.Input("sel" + depth);
+            var selectBar = c.Inverter(select, "sel" + depth + "_n");
+            var nextLevel = new List<Net>();
+            for (var i = 0; i < level.Count; i += 2)
+            {
+                var merged = c.Node($"m{depth}_{i / 2}");
+                c.TransmissionGate(level[i], selectBar, merged);
+                c.TransmissionGate(level[i + 1], select, merged);
+                nextLevel.Add(merged);
+            }
+
+            level = nextLevel;
+        }
+
+        var findings = Check(c, limit);
+        Assert.Equal(expected, findings.Count);
+        Assert.All(findings, f => Assert.Equal("4", f.Properties["chainLength"]));
+        Assert.Equal(findings.Count, findings.Select(f => f.Properties["reportedGateId"]).Distinct().Count());
+    }
+
+    // Branching out: a long shared trunk is reported once, at the trunk (not once per branch), with the longest
+    // branch; a short trunk whose branches each cross the limit gives one finding per branch.
+    [Fact]
+    public void Fan_out_tree_is_reported_at_the_trunk_once_or_per_branch()
+    {
+        var c = new Circuit("BuoyBroadcast");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        var trunk = Chain(c, c.Input("beacon"), clock.High, 5, "trunk");
+        for (var b = 0; b < 3; b++)
+            Chain(c, trunk[^1], clock.High, 2 + b, "branch" + b + "_");
+        var finding = Assert.Single(Check(c, 3));
+        Assert.Equal("9", finding.Properties["chainLength"]);
+        Assert.Equal("trunk4", Name(c, finding.Properties["reportedGateId"]));
+
+        var d = new Circuit("BuoyBroadcast2");
+        var clock2 = d.Clock("sample", 10.Nanoseconds());
+        var stub = Chain(d, d.Input("beacon"), clock2.High, 2, "trunk");
+        for (var b = 0; b < 3; b++)
+            Chain(d, stub[^1], clock2.High, 3, "branch" + b + "_");
+        var findings = Check(d, 3);
+        Assert.Equal(new[] { "branch0_2", "branch1_2", "branch2_2" }, findings.Select(f => Name(d, f.Properties["reportedGateId"])));
+        Assert.All(findings, f => Assert.Equal("5", f.Properties["chainLength"]));
+        Assert.All(findings, f => Assert.Equal("trunk1", f.Properties["firstGate"]));
+    }
+
+    // A branched chain built with the DSL to match reference tree A (tests/reference/ngspice/rc_tree_a.cir): the input's
+    // driver is the 2 kΩ first section, every pass gate's on-resistance and every net's capacitance set as in the
+    // netlist. The rule's Elmore delays must be the hand-worked 876 ps (leaf a2) and 1368 ps (leaf b4) — see
+    // ElmoreDelayTests — and bound ngspice's t50 at those leaves.
+    [Fact]
+    public void Branched_chain_delay_is_the_RC_tree_Elmore_delay()
+    {
+        var c = new Circuit("BuoyTreeA");
+        c.UseProcess(new Process { DriverResistance = 2.Kiloohms() });
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        var t1 = c.Input("t1");
+        Net Gate(Net from, string name, double kiloohms, double femtofarads)
+        {
+            var net = c.TransmissionGate(from, clock.High, name, kiloohms.Kiloohms());
+            c.SetCapacitance(net, femtofarads.Femtofarads());
+            return net;
+        }
+
+        c.SetCapacitance(t1, 5.Femtofarads());
+        var t3 = Gate(Gate(t1, "t2", 3, 8), "t3", 4, 6);
+        Gate(Gate(t3, "a1", 10, 4), "a2", 15, 12);
+        Gate(Gate(Gate(Gate(t3, "b1", 6, 3), "b2", 8, 5), "b3", 7, 4), "b4", 12, 20);
+
+        var findings = Check(c, 2);
+        Assert.Equal(new[] { "a1", "b1" }, findings.Select(f => Name(c, f.Properties["reportedGateId"])));
+        var a = double.Parse(findings[0].Properties["elmoreDelaySeconds"], CultureInfo.InvariantCulture);
+        var b = double.Parse(findings[1].Properties["elmoreDelaySeconds"], CultureInfo.InvariantCulture);
+        Assert.Equal(876e-12, a, 1e-20);
+        Assert.Equal(1368e-12, b, 1e-20);
+        Assert.Equal("4", findings[0].Properties["chainLength"]);
+        Assert.Equal("6", findings[1].Properties["chainLength"]);
+        Assert.True(a >= NgspiceReference.TreeT50("rc_tree_a", "a2"));
+        Assert.True(b >= NgspiceReference.TreeT50("rc_tree_a", "b4"));
+    }
+
+    // A dynamic latch's transmission gate is a pass device in series with the gates before it; its inverter restores.
+    [Fact]
+    public void Chain_runs_into_a_latch_cell_and_stops_at_its_inverter()
+    {
+        var c = new Circuit("BuoyLatch");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        var hops = Chain(c, c.Input("sensor"), clock.High, 2, "hop");
+        var held = c.DynamicLatch(hops[^1], clock.Low, "hold");
+        Chain(c, held, clock.High, 2, "after");
+
+        var finding = Assert.Single(Check(c, 2));
+        Assert.Equal("hold.pass", Name(c, finding.Properties["reportedGateId"]));
+        Assert.Equal("3", finding.Properties["chainLength"]);
+        Assert.Empty(Check(c, 3));
+    }
+
+    // Static latches: the feedback gate drives the storage node from the feedback inverter (restored), so it starts a
+    // run of its own; registers of static latches in series never form a pass chain, and nothing loops forever.
+    [Fact]
+    public void Static_latch_feedback_gives_no_finding_and_terminates()
+    {
+        var c = new Circuit("BuoyStatic");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        var net = c.Input("sensor");
+        for (var i = 0; i < 50; i++)
+            net = c.StaticRegister(net, clock, "r" + i);
+        Assert.Empty(Check(c, 1));
+
+        var d = new Circuit("BuoyStatic2");
+        var clock2 = d.Clock("sample", 10.Nanoseconds());
+        var hop = d.TransmissionGate(d.Input("sensor"), clock2.High, "hop");
+        d.StaticLatch(hop, clock2.Low, "keep");
+        var finding = Assert.Single(Check(d, 1));
+        Assert.Equal("keep.pass", Name(d, finding.Properties["reportedGateId"]));
+        Assert.Equal("2", finding.Properties["chainLength"]);
+    }
+
+    // A loop of pass gates (a designer's mistake, or a ring written on purpose) must not hang the rule. The edge that
+    // closes the loop is dropped, so sensor → ring.a → ring.b is a run of 3 (entry, then each loop gate once).
+    [Fact]
+    public void Loops_of_pass_gates_terminate()
+    {
+        var c = new Circuit("BuoyRing");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        var n1 = c.Node("n1");
+        var n2 = c.Node("n2");
+        c.TransmissionGate(c.Input("sensor"), clock.High, n1);
+        c.TransmissionGate(n1, clock.Low, n2);
+        c.TransmissionGate(n2, clock.High, n1);
+        var finding = Assert.Single(Check(c, 2));
+        Assert.Equal("3", finding.Properties["chainLength"]);
+        Assert.Empty(Check(c, 3));
+
+        // A loop with no way in at all.
+        var d = new Circuit("BuoyRing2");
+        var clock2 = d.Clock("sample", 10.Nanoseconds());
+        var m1 = d.Node("m1");
+        var m2 = d.Node("m2");
+        var m3 = d.Node("m3");
+        d.TransmissionGate(m1, clock2.High, m2);
+        d.TransmissionGate(m2, clock2.High, m3);
+        d.TransmissionGate(m3, clock2.High, m1);
+        Assert.Empty(Check(d, 3));
+        Assert.Single(Check(d, 2));
+    }
+
+    // A keeper holds a node's level but drives it weakly: it does not restore the edge, so the run goes on.
+    [Fact]
+    public void A_weak_keeper_does_not_restore_but_a_buffer_does()
+    {
+        var c = new Circuit("BuoyKeeper");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        var hops = Chain(c, c.Input("sensor"), clock.High, 2, "hop");
+        c.Keeper(hops[^1]);
+        Chain(c, hops[^1], clock.High, 2, "more");
+        Assert.Equal("4", Assert.Single(Check(c, 3)).Properties["chainLength"]);
+
+        var d = new Circuit("BuoyBuffered");
+        var clock2 = d.Clock("sample", 10.Nanoseconds());
+        var first = Chain(d, d.Input("sensor"), clock2.High, 3, "hop");
+        Chain(d, d.Buffer(first[^1], "restore"), clock2.High, 3, "more");
+        Assert.Empty(Check(d, 3));
+    }
+
+    // Fan-out to a restoring load does not restore the chain (the inverter hangs off the side of the node).
+    [Fact]
+    public void Fan_out_to_an_inverter_does_not_break_the_chain()
+    {
+        var c = new Circuit("BuoyTap");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        var hops = Chain(c, c.Input("sensor"), clock.High, 2, "hop");
+        c.Inverter(hops[^1], "tap");
+        Chain(c, hops[^1], clock.High, 2, "more");
+        Assert.Equal("4", Assert.Single(Check(c, 3)).Properties["chainLength"]);
+    }
+
+    // 200 000 gates in one chain: the rule must finish (no timing asserted; speed lives in the benchmark) and list a
+    // bounded number of split points.
+    [Fact]
+    public void Very_long_chain_completes()
+    {
+        var c = new Circuit("BuoyLong");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        var net = c.Input("sensor");
+        for (var i = 0; i < 200_000; i++)
+            net = c.TransmissionGate(net, clock.High);
+        var finding = Assert.Single(Check(c));
+        Assert.Equal("200000", finding.Properties["chainLength"]);
+        Assert.Equal("99999", finding.Properties["splitPointCount"]);
+        Assert.Equal("true", finding.Properties["splitPointsTruncated"]);
+        Assert.Equal(PassGateChainRule.MaxListedSplitPoints, finding.Properties["splitAfterDeviceIds"].Split(',').Length);
+    }
+
+    private sealed class TelemetryMux : Design
+    {
+        protected override void Describe(Circuit c)
+        {
+            var clock = c.Clock("frame", 20.Nanoseconds());
+            var net = c.Input("salinity");
+            for (var i = 0; i < 6; i++)
+                net = c.TransmissionGate(net, clock.High, "leg" + i);
+            c.Output("bus", c.Inverter(net));
+        }
+    }
+
+    [Fact]
+    public void Design_check_reports_the_finding_at_run_time()
+    {
+        var report = new TelemetryMux().Check(new RulePolicy { MaxSeriesPassGates = 4 });
+        var finding = Assert.Single(report.Findings, f => f.RuleId == RuleIds.SeriesPassGates);
+        Assert.Equal("6", finding.Properties["chainLength"]);
+        Assert.StartsWith("6 pass gates in series without a restoring stage (limit 4): Elmore delay ", finding.Message);
+        Assert.Contains(" ps", finding.Message);
+        Assert.True(finding.Location.IsKnown);
+        Assert.Contains(RuleCatalog.SeriesPassGates, RuleCatalog.All);
+        Assert.Contains(RuleSet.All, r => r is PassGateChainRule);
+        Assert.DoesNotContain(new TelemetryMux().Check(new RulePolicy { MaxSeriesPassGates = 6 }).Findings, f => f.RuleId == RuleIds.SeriesPassGates);
+    }
+
+    // The example and its fix in docs/rules/PW2001.md (keep them in step). By hand: as the five-gate chain above,
+    // but hop5 also drives an inverter (+2 fF gate load): hop5 4.5 fF, downstream +2 fF on every net:
+    //   Elmore = 4 kΩ·23 fF + 5 kΩ·(20.5 + 16.5 + 12.5 + 8.5 + 4.5) fF = 92 + 312.5 = 404.5 ps; ln 2 × = 280 ps;
+    //   restored: mean C (4·4 + 4.5)/5 = 4.1 fF, RC = 20.5 ps, t = 2.5·(ln 2·20.5 ps·3 + 20 ps) = 157 ps.
+    private sealed class TelemetryBus : Design
+    {
+        private readonly bool restored;
+
+        public TelemetryBus(bool restored) => this.restored = restored;
+
+        protected override void Describe(Circuit c)
+        {
+            var frame = c.Clock("frame", 20.Nanoseconds());
+            var sample = c.Input("salinity");
+            var hop1 = c.TransmissionGate(sample, frame.High, "hop1");
+            var hop2 = c.TransmissionGate(hop1, frame.High, "hop2");
+            var hop3 = c.TransmissionGate(restored ? c.Buffer(hop2, "fresh") : hop2, frame.High, "hop3");
+            var hop4 = c.TransmissionGate(hop3, frame.High, "hop4");
+            var hop5 = c.TransmissionGate(restored ? c.Buffer(hop4, "again") : hop4, frame.High, "hop5");
+            c.Output("bus", c.Inverter(hop5));
+        }
+    }
+
+    [Fact]
+    public void Documented_example_and_its_fix()
+    {
+        var finding = Assert.Single(new TelemetryBus(restored: false).Check().Findings, f => f.RuleId == RuleIds.SeriesPassGates);
+        Assert.Equal("5 pass gates in series without a restoring stage (limit 2): Elmore delay 405 ps (50% estimate 280 ps); "
+                     + "a restoring stage every 2 gates would give about 157 ps", finding.Message);
+        Assert.Equal("hop2\nhop4", finding.Properties["splitAfterDevices"]);
+        Assert.DoesNotContain(new TelemetryBus(restored: true).Check().Findings, f => f.RuleId == RuleIds.SeriesPassGates);
+    }
+
+    // The split sites a code fix needs (splitSites): a straight run of five separate calls, then a loop-like call that
+    // makes four gates in a row, then one call through a helper. Spans are set as the compile-time elaborator sets them.
+    // Chain positions: hop1..hop5 at calls 100..140, loop0..loop3 at call 200, last at call 300 (via a helper call 50).
+    // Limit 2, spacing 2: splits after positions 2, 4, 6, 8 (count (10 - 1) / 2 = 4), next gates at 3, 5, 7, 9.
+    [Fact]
+    public void Split_sites_name_the_call_after_each_split_and_the_run_made_there()
+    {
+        var c = new Circuit("Buoy");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        SourceSpan? site = null;
+        c.SourceSiteProvider = () => site ?? SourceSpan.Unknown;
+        var net = c.Input("sensor");
+        for (var i = 1; i <= 5; i++)
+        {
+            site = new SourceSpan("/src/Buoy.cs", 10 + i, 9, 100 + 10 * (i - 1), 8);
+            net = c.TransmissionGate(net, clock.High, "hop" + i);
+        }
+
+        site = new SourceSpan("/src/Buoy.cs", 20, 13, 200, 30);
+        for (var i = 0; i < 4; i++)
+            net = c.TransmissionGate(net, clock.High, "loop" + i);
+
+        site = new SourceSpan("/src/Lib.cs", 3, 9, 300, 12, new[] { new SourceSpan("/src/Buoy.cs", 25, 9, 50, 20) });
+        net = c.TransmissionGate(net, clock.High, "last");
+        site = new SourceSpan("/src/Buoy.cs", 26, 9, 400, 10);
+        c.Output("bus", c.Inverter(net));
+
+        var finding = Assert.Single(Check(c));
+        Assert.Equal("10", finding.Properties["chainLength"]);
+        Assert.Equal("hop2\nhop4\nloop0\nloop2", finding.Properties["splitAfterDevices"]);
+        var sites = finding.Properties[PassGateChainRule.SplitSitesProperty].Split('\n');
+        Assert.Equal(new[]
+        {
+            "3|3|1|1|false|120|8|/src/Buoy.cs",   // hop3: its own call
+            "5|5|1|1|false|140|8|/src/Buoy.cs",   // hop5
+            "7|6|4|4|false|200|30|/src/Buoy.cs",  // loop1 (split after loop0): run of four at call 200 from position 6
+            "9|6|4|4|false|200|30|/src/Buoy.cs",  // loop3
+        }, sites);
+
+        // Limit 1 (spacing 1): split before every gate from position 2 on; the helper's gate reports its caller.
+        var strict = Assert.Single(Check(c, limit: 1));
+        var last = strict.Properties[PassGateChainRule.SplitSitesProperty].Split('\n').Last();
+        Assert.Equal("10|10|1|1|true|300|12|/src/Lib.cs", last);
+    }
+
+    [Fact]
+    public void Split_sites_count_every_gate_a_call_makes_even_off_the_chain()
+    {
+        // One call makes two gates: one on the chain, one on a side branch. A fix at that call would touch both.
+        var c = new Circuit("Buoy");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        SourceSpan? site = null;
+        c.SourceSiteProvider = () => site ?? SourceSpan.Unknown;
+        var net = c.Input("sensor");
+        site = new SourceSpan("/src/Buoy.cs", 1, 1, 10, 5);
+        net = c.TransmissionGate(net, clock.High, "a");
+        site = new SourceSpan("/src/Buoy.cs", 2, 1, 20, 5);
+        net = c.TransmissionGate(net, clock.High, "b");
+        site = new SourceSpan("/src/Buoy.cs", 3, 1, 30, 5);
+        var side = c.TransmissionGate(c.Input("other"), clock.High, "side");
+        net = c.TransmissionGate(net, clock.High, "c");
+        c.Output("y", c.Inverter(net));
+        c.Output("z", c.Inverter(side));
+
+        var finding = Assert.Single(Check(c));
+        Assert.Equal("3|3|1|2|false|30|5|/src/Buoy.cs", finding.Properties[PassGateChainRule.SplitSitesProperty]);
+    }
+
+    [Fact]
+    public void Split_sites_at_run_time_have_no_character_span()
+    {
+        var c = new Circuit("Buoy");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        Chain(c, c.Input("sensor"), clock.High, 3, "hop");
+        var line = Assert.Single(Check(c)).Properties[PassGateChainRule.SplitSitesProperty];
+        Assert.StartsWith("3|3|1|1|false|-1|0|", line, StringComparison.Ordinal);
+    }
+
+    private static string Name(Circuit c, string id) => c.ToNetlist().Devices[int.Parse(id, CultureInfo.InvariantCulture)].Name;
 }

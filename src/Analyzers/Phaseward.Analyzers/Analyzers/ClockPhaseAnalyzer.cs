@@ -2,12 +2,11 @@ using System.Collections.Generic;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 
-namespace Phaseward.Analyzers
+namespace Phaseward.Analyzers;
+
+/// <summary>PW1xxx: latches transparent in the same window in series, and overlap races.</summary>
+[DiagnosticAnalyzer(LanguageNames.CSharp)]
+public sealed class ClockPhaseAnalyzer : FindingAnalyzer
 {
-    /// <summary>PW1xxx: latches transparent in the same window in series, and overlap races.</summary>
-    [DiagnosticAnalyzer(LanguageNames.CSharp)]
-    public sealed class ClockPhaseAnalyzer : FindingAnalyzer
-    {
-        protected override IReadOnlyList<Rule> Rules { get; } = new Rule[] { new SameWindowLatchesRule(), new OverlapRaceRule() };
-    }
+    protected override IReadOnlyList<Rule> Rules { get; } = new Rule[] { new SameWindowLatchesRule(), new OverlapRaceRule() };
 }

@@ -2,17 +2,16 @@ using System.Collections.Generic;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 
-namespace Phaseward.Analyzers
+namespace Phaseward.Analyzers;
+
+/// <summary>PW3xxx: dynamic nodes on gatable clocks, clocks too slow for dynamic storage, charge sharing.</summary>
+[DiagnosticAnalyzer(LanguageNames.CSharp)]
+public sealed class DynamicStorageAnalyzer : FindingAnalyzer
 {
-    /// <summary>PW3xxx: dynamic nodes on gatable clocks, clocks too slow for dynamic storage, charge sharing.</summary>
-    [DiagnosticAnalyzer(LanguageNames.CSharp)]
-    public sealed class DynamicStorageAnalyzer : FindingAnalyzer
+    protected override IReadOnlyList<Rule> Rules { get; } = new Rule[]
     {
-        protected override IReadOnlyList<Rule> Rules { get; } = new Rule[]
-        {
-            new DynamicNodeOnGatedClockRule(),
-            new ClockTooSlowForDynamicStorageRule(),
-            new ChargeSharingRule(),
-        };
-    }
+        new DynamicNodeOnGatedClockRule(),
+        new ClockTooSlowForDynamicStorageRule(),
+        new ChargeSharingRule(),
+    };
 }

@@ -2,12 +2,11 @@ using System.Collections.Generic;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 
-namespace Phaseward.Analyzers
+namespace Phaseward.Analyzers;
+
+/// <summary>PW2xxx: pass gates in series without a restoring stage.</summary>
+[DiagnosticAnalyzer(LanguageNames.CSharp)]
+public sealed class PassGatePathAnalyzer : FindingAnalyzer
 {
-    /// <summary>PW2xxx: pass gates in series without a restoring stage.</summary>
-    [DiagnosticAnalyzer(LanguageNames.CSharp)]
-    public sealed class PassGatePathAnalyzer : FindingAnalyzer
-    {
-        protected override IReadOnlyList<Rule> Rules { get; } = new Rule[] { new PassGateChainRule() };
-    }
+    protected override IReadOnlyList<Rule> Rules { get; } = new Rule[] { new PassGateChainRule() };
 }

@@ -2,12 +2,11 @@ using System.Collections.Generic;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 
-namespace Phaseward.Analyzers
+namespace Phaseward.Analyzers;
+
+/// <summary>PW4xxx: register setup and hold, two-phase latch paths with time borrowing.</summary>
+[DiagnosticAnalyzer(LanguageNames.CSharp)]
+public sealed class TimingAnalyzer : FindingAnalyzer
 {
-    /// <summary>PW4xxx: register setup and hold, two-phase latch paths with time borrowing.</summary>
-    [DiagnosticAnalyzer(LanguageNames.CSharp)]
-    public sealed class TimingAnalyzer : FindingAnalyzer
-    {
-        protected override IReadOnlyList<Rule> Rules { get; } = new Rule[] { new RegisterTimingRule(), new LatchBorrowingRule() };
-    }
+    protected override IReadOnlyList<Rule> Rules { get; } = new Rule[] { new RegisterTimingRule(), new LatchBorrowingRule() };
 }

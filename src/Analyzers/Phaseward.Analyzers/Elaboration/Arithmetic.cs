@@ -3,235 +3,315 @@ using System.Globalization;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Operations;
 
-namespace Phaseward.Analyzers.Elaboration
+namespace Phaseward.Analyzers.Elaboration;
+
+/// <summary>
+/// C#'s built-in operators on the primitive types designs compute with (int, long, double, float, bool, string, char),
+/// with C#'s overflow rules: checked arithmetic throws <see cref="OverflowException"/>, unchecked wraps.
+/// Returns null when the operator/type pair is outside the subset.
+/// </summary>
+internal static class Arithmetic
 {
-    /// <summary>
-    /// C#'s built-in operators on the primitive types designs compute with (int, long, double, float, bool, string, char),
-    /// with C#'s overflow rules: checked arithmetic throws <see cref="OverflowException"/>, unchecked wraps.
-    /// Returns null when the operator/type pair is outside the subset.
-    /// </summary>
-    internal static class Arithmetic
+    public static object? Binary(BinaryOperatorKind kind, object left, object right, ITypeSymbol operandType, bool isChecked)
     {
-        public static object? Binary(BinaryOperatorKind kind, object left, object right, ITypeSymbol operandType, bool isChecked)
+        // In code that does not compile yet an operand can be a value of another type (a net where a number belongs):
+        // such an operation is outside the subset, like any other the elaborator does not handle.
+        try
         {
-            // In code that does not compile yet an operand can be a value of another type (a net where a number belongs):
-            // such an operation is outside the subset, like any other the elaborator does not handle.
-            try
-            {
-                return BinaryOf(kind, left, right, operandType, isChecked);
-            }
-            catch (InvalidCastException)
-            {
-                return null;
-            }
+            return BinaryOf(kind, left, right, operandType, isChecked);
         }
-
-        private static object? BinaryOf(BinaryOperatorKind kind, object left, object right, ITypeSymbol operandType, bool isChecked)
+        catch (InvalidCastException)
         {
-            if (operandType.TypeKind == TypeKind.Enum)
-                return Enum(kind, left, right);
-            switch (operandType.SpecialType)
+            return null;
+        }
+    }
+
+    private static object? BinaryOf(BinaryOperatorKind kind, object left, object right, ITypeSymbol operandType, bool isChecked)
+    {
+        if (operandType.TypeKind == TypeKind.Enum)
+            return Enum(kind, left, right);
+        switch (operandType.SpecialType)
+        {
+            case SpecialType.System_Int32:
+                return isChecked ? CheckedInt(kind, Convert.ToInt32(left, CultureInfo.InvariantCulture), Convert.ToInt32(right, CultureInfo.InvariantCulture))
+                    : UncheckedInt(kind, Convert.ToInt32(left, CultureInfo.InvariantCulture), Convert.ToInt32(right, CultureInfo.InvariantCulture));
+            case SpecialType.System_Int64:
+                return Long(kind, Convert.ToInt64(left, CultureInfo.InvariantCulture), Convert.ToInt64(right, CultureInfo.InvariantCulture), isChecked);
+            case SpecialType.System_Double:
+                return Double(kind, Convert.ToDouble(left, CultureInfo.InvariantCulture), Convert.ToDouble(right, CultureInfo.InvariantCulture));
+            case SpecialType.System_Single:
+                return Single(kind, Convert.ToSingle(left, CultureInfo.InvariantCulture), Convert.ToSingle(right, CultureInfo.InvariantCulture));
+            case SpecialType.System_Boolean:
+                return Boolean(kind, (bool)left, (bool)right);
+            case SpecialType.System_String:
+                return kind switch
+                {
+                    BinaryOperatorKind.Equals => string.Equals(left as string, right as string, StringComparison.Ordinal),
+                    BinaryOperatorKind.NotEquals => !string.Equals(left as string, right as string, StringComparison.Ordinal),
+                    _ => null,
+                };
+            default:
+                return null;
+        }
+    }
+
+    /// <summary><c>a + b</c> where either side is a string: C# calls ToString() on the other side (null gives "").</summary>
+    public static string Concatenate(object? left, object? right) => Text(left) + Text(right);
+
+    /// <summary>
+    /// The text C# would produce for a value in a concatenation or an interpolation hole. Formatted with the invariant
+    /// culture: the culture the design will run under is not known at compile time (analyzers must not depend on the
+    /// compiler's culture), and integers, the usual content of generated names, read the same in every culture.
+    /// </summary>
+    public static string Text(object? value) => value switch
+    {
+        null => string.Empty,
+        string s => s,
+        bool b => b ? "True" : "False",
+        IFormattable f => f.ToString(null, CultureInfo.InvariantCulture),
+        _ => value.ToString() ?? string.Empty,
+    };
+
+    public static object? Unary(UnaryOperatorKind kind, object operand, ITypeSymbol type, bool isChecked)
+    {
+        try
+        {
+            return UnaryOf(kind, operand, type, isChecked);
+        }
+        catch (InvalidCastException)
+        {
+            return null;
+        }
+    }
+
+    private static object? UnaryOf(UnaryOperatorKind kind, object operand, ITypeSymbol type, bool isChecked)
+    {
+        switch (type.SpecialType)
+        {
+            case SpecialType.System_Int32:
+                var i = Convert.ToInt32(operand, CultureInfo.InvariantCulture);
+                return kind switch
+                {
+                    UnaryOperatorKind.Minus => isChecked ? checked(-i) : unchecked(-i),
+                    UnaryOperatorKind.Plus => i,
+                    UnaryOperatorKind.BitwiseNegation => ~i,
+                    _ => null,
+                };
+            case SpecialType.System_Int64:
+                var l = Convert.ToInt64(operand, CultureInfo.InvariantCulture);
+                return kind switch
+                {
+                    UnaryOperatorKind.Minus => isChecked ? checked(-l) : unchecked(-l),
+                    UnaryOperatorKind.Plus => l,
+                    UnaryOperatorKind.BitwiseNegation => ~l,
+                    _ => null,
+                };
+            case SpecialType.System_Double:
+                var d = Convert.ToDouble(operand, CultureInfo.InvariantCulture);
+                return kind switch { UnaryOperatorKind.Minus => -d, UnaryOperatorKind.Plus => d, _ => null };
+            case SpecialType.System_Single:
+                var f = Convert.ToSingle(operand, CultureInfo.InvariantCulture);
+                return kind switch { UnaryOperatorKind.Minus => -f, UnaryOperatorKind.Plus => f, _ => null };
+            case SpecialType.System_Boolean:
+                return kind == UnaryOperatorKind.Not ? !(bool)operand : null;
+            default:
+                return null;
+        }
+    }
+
+    /// <summary>A numeric conversion to the given special type, as C# does it (checked or not).</summary>
+    public static object? ConvertNumber(object value, SpecialType target, bool isChecked)
+    {
+        if (value is bool || value is string)
+            return null;
+        try
+        {
+            return isChecked ? CheckedConvert(value, target) : UncheckedConvert(value, target);
+        }
+        catch (InvalidCastException)
+        {
+            return null;
+        }
+    }
+
+    private static object? CheckedConvert(object value, SpecialType target)
+    {
+        checked
+        {
+            switch (value)
             {
-                case SpecialType.System_Int32:
-                    return isChecked ? CheckedInt(kind, Convert.ToInt32(left, CultureInfo.InvariantCulture), Convert.ToInt32(right, CultureInfo.InvariantCulture))
-                        : UncheckedInt(kind, Convert.ToInt32(left, CultureInfo.InvariantCulture), Convert.ToInt32(right, CultureInfo.InvariantCulture));
-                case SpecialType.System_Int64:
-                    return Long(kind, Convert.ToInt64(left, CultureInfo.InvariantCulture), Convert.ToInt64(right, CultureInfo.InvariantCulture), isChecked);
-                case SpecialType.System_Double:
-                    return Double(kind, Convert.ToDouble(left, CultureInfo.InvariantCulture), Convert.ToDouble(right, CultureInfo.InvariantCulture));
-                case SpecialType.System_Single:
-                    return Single(kind, Convert.ToSingle(left, CultureInfo.InvariantCulture), Convert.ToSingle(right, CultureInfo.InvariantCulture));
-                case SpecialType.System_Boolean:
-                    return Boolean(kind, (bool)left, (bool)right);
-                case SpecialType.System_String:
-                    return kind switch
+                case double d:
+                    return target switch
                     {
-                        BinaryOperatorKind.Equals => string.Equals(left as string, right as string, StringComparison.Ordinal),
-                        BinaryOperatorKind.NotEquals => !string.Equals(left as string, right as string, StringComparison.Ordinal),
+                        SpecialType.System_Int32 => (object)(int)d,
+                        SpecialType.System_Int64 => (long)d,
+                        SpecialType.System_Double => d,
+                        SpecialType.System_Single => (float)d,
+                        _ => null,
+                    };
+                case float f:
+                    return target switch
+                    {
+                        SpecialType.System_Int32 => (object)(int)f,
+                        SpecialType.System_Int64 => (long)f,
+                        SpecialType.System_Double => (double)f,
+                        SpecialType.System_Single => f,
                         _ => null,
                     };
                 default:
-                    return null;
-            }
-        }
-
-        /// <summary><c>a + b</c> where either side is a string: C# calls ToString() on the other side (null gives "").</summary>
-        public static string Concatenate(object? left, object? right) => Text(left) + Text(right);
-
-        /// <summary>
-        /// The text C# would produce for a value in a concatenation or an interpolation hole. Formatted with the invariant
-        /// culture: the culture the design will run under is not known at compile time (analyzers must not depend on the
-        /// compiler's culture), and integers, the usual content of generated names, read the same in every culture.
-        /// </summary>
-        public static string Text(object? value) => value switch
-        {
-            null => string.Empty,
-            string s => s,
-            bool b => b ? "True" : "False",
-            IFormattable f => f.ToString(null, CultureInfo.InvariantCulture),
-            _ => value.ToString() ?? string.Empty,
-        };
-
-        public static object? Unary(UnaryOperatorKind kind, object operand, ITypeSymbol type, bool isChecked)
-        {
-            try
-            {
-                return UnaryOf(kind, operand, type, isChecked);
-            }
-            catch (InvalidCastException)
-            {
-                return null;
-            }
-        }
-
-        private static object? UnaryOf(UnaryOperatorKind kind, object operand, ITypeSymbol type, bool isChecked)
-        {
-            switch (type.SpecialType)
-            {
-                case SpecialType.System_Int32:
-                    var i = Convert.ToInt32(operand, CultureInfo.InvariantCulture);
-                    return kind switch
+                    var l = System.Convert.ToInt64(value, CultureInfo.InvariantCulture);
+                    return target switch
                     {
-                        UnaryOperatorKind.Minus => isChecked ? checked(-i) : unchecked(-i),
-                        UnaryOperatorKind.Plus => i,
-                        UnaryOperatorKind.BitwiseNegation => ~i,
+                        SpecialType.System_Int32 => (object)(int)l,
+                        SpecialType.System_Int64 => l,
+                        SpecialType.System_Double => (double)l,
+                        SpecialType.System_Single => (float)l,
+                        SpecialType.System_Char => (char)l,
                         _ => null,
                     };
-                case SpecialType.System_Int64:
-                    var l = Convert.ToInt64(operand, CultureInfo.InvariantCulture);
-                    return kind switch
+            }
+        }
+    }
+
+    private static object? UncheckedConvert(object value, SpecialType target)
+    {
+        unchecked
+        {
+            switch (value)
+            {
+                case double d:
+                    return target switch
                     {
-                        UnaryOperatorKind.Minus => isChecked ? checked(-l) : unchecked(-l),
-                        UnaryOperatorKind.Plus => l,
-                        UnaryOperatorKind.BitwiseNegation => ~l,
+                        SpecialType.System_Int32 => (object)(int)d,
+                        SpecialType.System_Int64 => (long)d,
+                        SpecialType.System_Double => d,
+                        SpecialType.System_Single => (float)d,
                         _ => null,
                     };
-                case SpecialType.System_Double:
-                    var d = Convert.ToDouble(operand, CultureInfo.InvariantCulture);
-                    return kind switch { UnaryOperatorKind.Minus => -d, UnaryOperatorKind.Plus => d, _ => null };
-                case SpecialType.System_Single:
-                    var f = Convert.ToSingle(operand, CultureInfo.InvariantCulture);
-                    return kind switch { UnaryOperatorKind.Minus => -f, UnaryOperatorKind.Plus => f, _ => null };
-                case SpecialType.System_Boolean:
-                    return kind == UnaryOperatorKind.Not ? !(bool)operand : null;
+                case float f:
+                    return target switch
+                    {
+                        SpecialType.System_Int32 => (object)(int)f,
+                        SpecialType.System_Int64 => (long)f,
+                        SpecialType.System_Double => (double)f,
+                        SpecialType.System_Single => f,
+                        _ => null,
+                    };
                 default:
-                    return null;
+                    var l = System.Convert.ToInt64(value, CultureInfo.InvariantCulture);
+                    return target switch
+                    {
+                        SpecialType.System_Int32 => (object)(int)l,
+                        SpecialType.System_Int64 => l,
+                        SpecialType.System_Double => (double)l,
+                        SpecialType.System_Single => (float)l,
+                        SpecialType.System_Char => (char)l,
+                        _ => null,
+                    };
             }
         }
+    }
 
-        /// <summary>A numeric conversion to the given special type, as C# does it (checked or not).</summary>
-        public static object? ConvertNumber(object value, SpecialType target, bool isChecked)
-        {
-            if (value is bool || value is string)
-                return null;
-            try
-            {
-                return isChecked ? CheckedConvert(value, target) : UncheckedConvert(value, target);
-            }
-            catch (InvalidCastException)
-            {
-                return null;
-            }
-        }
+    private static object? CheckedInt(BinaryOperatorKind kind, int a, int b) => kind switch
+    {
+        BinaryOperatorKind.Add => checked(a + b),
+        BinaryOperatorKind.Subtract => checked(a - b),
+        BinaryOperatorKind.Multiply => checked(a * b),
+        _ => UncheckedInt(kind, a, b),
+    };
 
-        private static object? CheckedConvert(object value, SpecialType target)
-        {
-            checked
-            {
-                switch (value)
-                {
-                    case double d:
-                        return target switch
-                        {
-                            SpecialType.System_Int32 => (object)(int)d,
-                            SpecialType.System_Int64 => (long)d,
-                            SpecialType.System_Double => d,
-                            SpecialType.System_Single => (float)d,
-                            _ => null,
-                        };
-                    case float f:
-                        return target switch
-                        {
-                            SpecialType.System_Int32 => (object)(int)f,
-                            SpecialType.System_Int64 => (long)f,
-                            SpecialType.System_Double => (double)f,
-                            SpecialType.System_Single => f,
-                            _ => null,
-                        };
-                    default:
-                        var l = System.Convert.ToInt64(value, CultureInfo.InvariantCulture);
-                        return target switch
-                        {
-                            SpecialType.System_Int32 => (object)(int)l,
-                            SpecialType.System_Int64 => l,
-                            SpecialType.System_Double => (double)l,
-                            SpecialType.System_Single => (float)l,
-                            SpecialType.System_Char => (char)l,
-                            _ => null,
-                        };
-                }
-            }
-        }
+    private static object? UncheckedInt(BinaryOperatorKind kind, int a, int b) => kind switch
+    {
+        BinaryOperatorKind.Add => unchecked(a + b),
+        BinaryOperatorKind.Subtract => unchecked(a - b),
+        BinaryOperatorKind.Multiply => unchecked(a * b),
+        BinaryOperatorKind.Divide => a / b,
+        BinaryOperatorKind.Remainder => a % b,
+        BinaryOperatorKind.And => a & b,
+        BinaryOperatorKind.Or => a | b,
+        BinaryOperatorKind.ExclusiveOr => a ^ b,
+        BinaryOperatorKind.LeftShift => a << b,
+        BinaryOperatorKind.RightShift => a >> b,
+        BinaryOperatorKind.Equals => a == b,
+        BinaryOperatorKind.NotEquals => a != b,
+        BinaryOperatorKind.LessThan => a < b,
+        BinaryOperatorKind.LessThanOrEqual => a <= b,
+        BinaryOperatorKind.GreaterThan => a > b,
+        BinaryOperatorKind.GreaterThanOrEqual => a >= b,
+        _ => null,
+    };
 
-        private static object? UncheckedConvert(object value, SpecialType target)
-        {
-            unchecked
-            {
-                switch (value)
-                {
-                    case double d:
-                        return target switch
-                        {
-                            SpecialType.System_Int32 => (object)(int)d,
-                            SpecialType.System_Int64 => (long)d,
-                            SpecialType.System_Double => d,
-                            SpecialType.System_Single => (float)d,
-                            _ => null,
-                        };
-                    case float f:
-                        return target switch
-                        {
-                            SpecialType.System_Int32 => (object)(int)f,
-                            SpecialType.System_Int64 => (long)f,
-                            SpecialType.System_Double => (double)f,
-                            SpecialType.System_Single => f,
-                            _ => null,
-                        };
-                    default:
-                        var l = System.Convert.ToInt64(value, CultureInfo.InvariantCulture);
-                        return target switch
-                        {
-                            SpecialType.System_Int32 => (object)(int)l,
-                            SpecialType.System_Int64 => l,
-                            SpecialType.System_Double => (double)l,
-                            SpecialType.System_Single => (float)l,
-                            SpecialType.System_Char => (char)l,
-                            _ => null,
-                        };
-                }
-            }
-        }
+    private static object? Long(BinaryOperatorKind kind, long a, long b, bool isChecked) => kind switch
+    {
+        BinaryOperatorKind.Add => isChecked ? checked(a + b) : unchecked(a + b),
+        BinaryOperatorKind.Subtract => isChecked ? checked(a - b) : unchecked(a - b),
+        BinaryOperatorKind.Multiply => isChecked ? checked(a * b) : unchecked(a * b),
+        BinaryOperatorKind.Divide => a / b,
+        BinaryOperatorKind.Remainder => a % b,
+        BinaryOperatorKind.And => a & b,
+        BinaryOperatorKind.Or => a | b,
+        BinaryOperatorKind.ExclusiveOr => a ^ b,
+        BinaryOperatorKind.LeftShift => a << (int)b,
+        BinaryOperatorKind.RightShift => a >> (int)b,
+        BinaryOperatorKind.Equals => a == b,
+        BinaryOperatorKind.NotEquals => a != b,
+        BinaryOperatorKind.LessThan => a < b,
+        BinaryOperatorKind.LessThanOrEqual => a <= b,
+        BinaryOperatorKind.GreaterThan => a > b,
+        BinaryOperatorKind.GreaterThanOrEqual => a >= b,
+        _ => null,
+    };
 
-        private static object? CheckedInt(BinaryOperatorKind kind, int a, int b) => kind switch
-        {
-            BinaryOperatorKind.Add => checked(a + b),
-            BinaryOperatorKind.Subtract => checked(a - b),
-            BinaryOperatorKind.Multiply => checked(a * b),
-            _ => UncheckedInt(kind, a, b),
-        };
+    private static object? Double(BinaryOperatorKind kind, double a, double b) => kind switch
+    {
+        BinaryOperatorKind.Add => a + b,
+        BinaryOperatorKind.Subtract => a - b,
+        BinaryOperatorKind.Multiply => a * b,
+        BinaryOperatorKind.Divide => a / b,
+        BinaryOperatorKind.Remainder => a % b,
+        BinaryOperatorKind.Equals => a == b,
+        BinaryOperatorKind.NotEquals => a != b,
+        BinaryOperatorKind.LessThan => a < b,
+        BinaryOperatorKind.LessThanOrEqual => a <= b,
+        BinaryOperatorKind.GreaterThan => a > b,
+        BinaryOperatorKind.GreaterThanOrEqual => a >= b,
+        _ => null,
+    };
 
-        private static object? UncheckedInt(BinaryOperatorKind kind, int a, int b) => kind switch
+    private static object? Single(BinaryOperatorKind kind, float a, float b) => kind switch
+    {
+        BinaryOperatorKind.Add => a + b,
+        BinaryOperatorKind.Subtract => a - b,
+        BinaryOperatorKind.Multiply => a * b,
+        BinaryOperatorKind.Divide => a / b,
+        BinaryOperatorKind.Remainder => a % b,
+        BinaryOperatorKind.Equals => a == b,
+        BinaryOperatorKind.NotEquals => a != b,
+        BinaryOperatorKind.LessThan => a < b,
+        BinaryOperatorKind.LessThanOrEqual => a <= b,
+        BinaryOperatorKind.GreaterThan => a > b,
+        BinaryOperatorKind.GreaterThanOrEqual => a >= b,
+        _ => null,
+    };
+
+    private static object? Boolean(BinaryOperatorKind kind, bool a, bool b) => kind switch
+    {
+        BinaryOperatorKind.And => a & b,
+        BinaryOperatorKind.Or => a | b,
+        BinaryOperatorKind.ExclusiveOr => a ^ b,
+        BinaryOperatorKind.ConditionalAnd => a && b,
+        BinaryOperatorKind.ConditionalOr => a || b,
+        BinaryOperatorKind.Equals => a == b,
+        BinaryOperatorKind.NotEquals => a != b,
+        _ => null,
+    };
+
+    private static object? Enum(BinaryOperatorKind kind, object left, object right)
+    {
+        var a = System.Convert.ToInt64(left, CultureInfo.InvariantCulture);
+        var b = System.Convert.ToInt64(right, CultureInfo.InvariantCulture);
+        return kind switch
         {
-            BinaryOperatorKind.Add => unchecked(a + b),
-            BinaryOperatorKind.Subtract => unchecked(a - b),
-            BinaryOperatorKind.Multiply => unchecked(a * b),
-            BinaryOperatorKind.Divide => a / b,
-            BinaryOperatorKind.Remainder => a % b,
-            BinaryOperatorKind.And => a & b,
-            BinaryOperatorKind.Or => a | b,
-            BinaryOperatorKind.ExclusiveOr => a ^ b,
-            BinaryOperatorKind.LeftShift => a << b,
-            BinaryOperatorKind.RightShift => a >> b,
             BinaryOperatorKind.Equals => a == b,
             BinaryOperatorKind.NotEquals => a != b,
             BinaryOperatorKind.LessThan => a < b,
@@ -240,86 +320,5 @@ namespace Phaseward.Analyzers.Elaboration
             BinaryOperatorKind.GreaterThanOrEqual => a >= b,
             _ => null,
         };
-
-        private static object? Long(BinaryOperatorKind kind, long a, long b, bool isChecked) => kind switch
-        {
-            BinaryOperatorKind.Add => isChecked ? checked(a + b) : unchecked(a + b),
-            BinaryOperatorKind.Subtract => isChecked ? checked(a - b) : unchecked(a - b),
-            BinaryOperatorKind.Multiply => isChecked ? checked(a * b) : unchecked(a * b),
-            BinaryOperatorKind.Divide => a / b,
-            BinaryOperatorKind.Remainder => a % b,
-            BinaryOperatorKind.And => a & b,
-            BinaryOperatorKind.Or => a | b,
-            BinaryOperatorKind.ExclusiveOr => a ^ b,
-            BinaryOperatorKind.LeftShift => a << (int)b,
-            BinaryOperatorKind.RightShift => a >> (int)b,
-            BinaryOperatorKind.Equals => a == b,
-            BinaryOperatorKind.NotEquals => a != b,
-            BinaryOperatorKind.LessThan => a < b,
-            BinaryOperatorKind.LessThanOrEqual => a <= b,
-            BinaryOperatorKind.GreaterThan => a > b,
-            BinaryOperatorKind.GreaterThanOrEqual => a >= b,
-            _ => null,
-        };
-
-        private static object? Double(BinaryOperatorKind kind, double a, double b) => kind switch
-        {
-            BinaryOperatorKind.Add => a + b,
-            BinaryOperatorKind.Subtract => a - b,
-            BinaryOperatorKind.Multiply => a * b,
-            BinaryOperatorKind.Divide => a / b,
-            BinaryOperatorKind.Remainder => a % b,
-            BinaryOperatorKind.Equals => a == b,
-            BinaryOperatorKind.NotEquals => a != b,
-            BinaryOperatorKind.LessThan => a < b,
-            BinaryOperatorKind.LessThanOrEqual => a <= b,
-            BinaryOperatorKind.GreaterThan => a > b,
-            BinaryOperatorKind.GreaterThanOrEqual => a >= b,
-            _ => null,
-        };
-
-        private static object? Single(BinaryOperatorKind kind, float a, float b) => kind switch
-        {
-            BinaryOperatorKind.Add => a + b,
-            BinaryOperatorKind.Subtract => a - b,
-            BinaryOperatorKind.Multiply => a * b,
-            BinaryOperatorKind.Divide => a / b,
-            BinaryOperatorKind.Remainder => a % b,
-            BinaryOperatorKind.Equals => a == b,
-            BinaryOperatorKind.NotEquals => a != b,
-            BinaryOperatorKind.LessThan => a < b,
-            BinaryOperatorKind.LessThanOrEqual => a <= b,
-            BinaryOperatorKind.GreaterThan => a > b,
-            BinaryOperatorKind.GreaterThanOrEqual => a >= b,
-            _ => null,
-        };
-
-        private static object? Boolean(BinaryOperatorKind kind, bool a, bool b) => kind switch
-        {
-            BinaryOperatorKind.And => a & b,
-            BinaryOperatorKind.Or => a | b,
-            BinaryOperatorKind.ExclusiveOr => a ^ b,
-            BinaryOperatorKind.ConditionalAnd => a && b,
-            BinaryOperatorKind.ConditionalOr => a || b,
-            BinaryOperatorKind.Equals => a == b,
-            BinaryOperatorKind.NotEquals => a != b,
-            _ => null,
-        };
-
-        private static object? Enum(BinaryOperatorKind kind, object left, object right)
-        {
-            var a = System.Convert.ToInt64(left, CultureInfo.InvariantCulture);
-            var b = System.Convert.ToInt64(right, CultureInfo.InvariantCulture);
-            return kind switch
-            {
-                BinaryOperatorKind.Equals => a == b,
-                BinaryOperatorKind.NotEquals => a != b,
-                BinaryOperatorKind.LessThan => a < b,
-                BinaryOperatorKind.LessThanOrEqual => a <= b,
-                BinaryOperatorKind.GreaterThan => a > b,
-                BinaryOperatorKind.GreaterThanOrEqual => a >= b,
-                _ => null,
-            };
-        }
     }
 }

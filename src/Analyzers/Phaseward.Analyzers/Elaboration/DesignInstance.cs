@@ -1,29 +1,28 @@
 using System.Collections.Generic;
 using Microsoft.CodeAnalysis;
 
-namespace Phaseward.Analyzers.Elaboration
+namespace Phaseward.Analyzers.Elaboration;
+
+/// <summary>
+/// The interpreted design object: its concrete type, the values of its fields and auto-properties, and the
+/// parameters of a primary constructor (which C# lets the whole class read).
+/// </summary>
+internal sealed class DesignInstance
 {
-    /// <summary>
-    /// The interpreted design object: its concrete type, the values of its fields and auto-properties, and the
-    /// parameters of a primary constructor (which C# lets the whole class read).
-    /// </summary>
-    internal sealed class DesignInstance
+    private readonly Dictionary<ISymbol, Variable> members = new(SymbolEqualityComparer.Default);
+
+    public DesignInstance(INamedTypeSymbol type) => Type = type;
+
+    public INamedTypeSymbol Type { get; }
+
+    public Variable? Find(ISymbol member) => members.TryGetValue(member.OriginalDefinition, out var variable) ? variable : null;
+
+    public Variable GetOrAdd(ISymbol member)
     {
-        private readonly Dictionary<ISymbol, Variable> members = new(SymbolEqualityComparer.Default);
-
-        public DesignInstance(INamedTypeSymbol type) => Type = type;
-
-        public INamedTypeSymbol Type { get; }
-
-        public Variable? Find(ISymbol member) => members.TryGetValue(member.OriginalDefinition, out var variable) ? variable : null;
-
-        public Variable GetOrAdd(ISymbol member)
-        {
-            if (!members.TryGetValue(member.OriginalDefinition, out var variable))
-                members[member.OriginalDefinition] = variable = new Variable(null);
-            return variable;
-        }
-
-        public override string ToString() => Type.Name;
+        if (!members.TryGetValue(member.OriginalDefinition, out var variable))
+            members[member.OriginalDefinition] = variable = new Variable(null);
+        return variable;
     }
+
+    public override string ToString() => Type.Name;
 }

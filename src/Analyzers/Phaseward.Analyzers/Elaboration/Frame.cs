@@ -1,58 +1,57 @@
 using System.Collections.Generic;
 using Microsoft.CodeAnalysis;
 
-namespace Phaseward.Analyzers.Elaboration
+namespace Phaseward.Analyzers.Elaboration;
+
+/// <summary>
+/// The variables of one interpreted call. A local function's frame points at the frame of the method that declares it
+/// (its lexical parent), so that it sees the locals it captures.
+/// </summary>
+internal sealed class Frame
 {
-    /// <summary>
-    /// The variables of one interpreted call. A local function's frame points at the frame of the method that declares it
-    /// (its lexical parent), so that it sees the locals it captures.
-    /// </summary>
-    internal sealed class Frame
+    private readonly Dictionary<ISymbol, Variable> variables;
+
+    /// <param name="capacity">How many variables the frame is expected to hold (it grows beyond if need be).</param>
+    public Frame(IMethodSymbol? method, Frame? lexicalParent, DesignInstance? instance, int capacity = 0)
     {
-        private readonly Dictionary<ISymbol, Variable> variables;
+        variables = new Dictionary<ISymbol, Variable>(capacity, SymbolEqualityComparer.Default);
+        Method = method;
+        LexicalParent = lexicalParent;
+        Instance = instance;
+    }
 
-        /// <param name="capacity">How many variables the frame is expected to hold (it grows beyond if need be).</param>
-        public Frame(IMethodSymbol? method, Frame? lexicalParent, DesignInstance? instance, int capacity = 0)
-        {
-            variables = new Dictionary<ISymbol, Variable>(capacity, SymbolEqualityComparer.Default);
-            Method = method;
-            LexicalParent = lexicalParent;
-            Instance = instance;
-        }
+    public IMethodSymbol? Method { get; }
 
-        public IMethodSymbol? Method { get; }
+    public Frame? LexicalParent { get; }
 
-        public Frame? LexicalParent { get; }
+    /// <summary>The design object <c>this</c> refers to (null in static code).</summary>
+    public DesignInstance? Instance { get; }
 
-        /// <summary>The design object <c>this</c> refers to (null in static code).</summary>
-        public DesignInstance? Instance { get; }
+    /// <summary>How many variables the frame holds.</summary>
+    public int Count => variables.Count;
 
-        /// <summary>How many variables the frame holds.</summary>
-        public int Count => variables.Count;
+    /// <summary>Set by <c>return</c>.</summary>
+    public object? ReturnValue { get; set; }
 
-        /// <summary>Set by <c>return</c>.</summary>
-        public object? ReturnValue { get; set; }
+    public void Declare(ISymbol symbol, object? value) => variables[symbol] = new Variable(value);
 
-        public void Declare(ISymbol symbol, object? value) => variables[symbol] = new Variable(value);
+    public void Bind(ISymbol symbol, Variable variable) => variables[symbol] = variable;
 
-        public void Bind(ISymbol symbol, Variable variable) => variables[symbol] = variable;
+    /// <summary>Finds a local or parameter here or in an enclosing method's frame (captured variables).</summary>
+    public Variable? Find(ISymbol symbol)
+    {
+        for (var frame = this; frame is not null; frame = frame.LexicalParent)
+            if (frame.variables.TryGetValue(symbol, out var variable))
+                return variable;
+        return null;
+    }
 
-        /// <summary>Finds a local or parameter here or in an enclosing method's frame (captured variables).</summary>
-        public Variable? Find(ISymbol symbol)
-        {
-            for (var frame = this; frame is not null; frame = frame.LexicalParent)
-                if (frame.variables.TryGetValue(symbol, out var variable))
-                    return variable;
-            return null;
-        }
-
-        /// <summary>The frame (this one or a lexical parent) that runs <paramref name="method"/>.</summary>
-        public Frame? FrameOf(IMethodSymbol method)
-        {
-            for (var frame = this; frame is not null; frame = frame.LexicalParent)
-                if (frame.Method is not null && SymbolEqualityComparer.Default.Equals(frame.Method.OriginalDefinition, method.OriginalDefinition))
-                    return frame;
-            return null;
-        }
+    /// <summary>The frame (this one or a lexical parent) that runs <paramref name="method"/>.</summary>
+    public Frame? FrameOf(IMethodSymbol method)
+    {
+        for (var frame = this; frame is not null; frame = frame.LexicalParent)
+            if (frame.Method is not null && SymbolEqualityComparer.Default.Equals(frame.Method.OriginalDefinition, method.OriginalDefinition))
+                return frame;
+        return null;
     }
 }

@@ -4,214 +4,213 @@ using System.Globalization;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Operations;
 
-namespace Phaseward.Analyzers.Elaboration
+namespace Phaseward.Analyzers.Elaboration;
+
+internal sealed partial class Interpreter
 {
-    internal sealed partial class Interpreter
+    /// <summary>Somewhere a value can be stored: a variable, an array or list slot, a property of a DSL object.</summary>
+    private readonly struct Place
     {
-        /// <summary>Somewhere a value can be stored: a variable, an array or list slot, a property of a DSL object.</summary>
-        private readonly struct Place
+        private readonly Func<object?> get;
+        private readonly Action<object?> set;
+
+        public Place(Func<object?> get, Action<object?> set)
         {
-            private readonly Func<object?> get;
-            private readonly Action<object?> set;
-
-            public Place(Func<object?> get, Action<object?> set)
-            {
-                this.get = get;
-                this.set = set;
-            }
-
-            public bool IsKnown => get is not null;
-
-            public object? Get() => get();
-
-            public void Set(object? value) => set(value);
-
-            public static Place Of(Variable variable) => new(() => variable.Value, v => variable.Value = v);
+            this.get = get;
+            this.set = set;
         }
 
-        private object? Assign(ISimpleAssignmentOperation assignment, Frame frame)
+        public bool IsKnown => get is not null;
+
+        public object? Get() => get();
+
+        public void Set(object? value) => set(value);
+
+        public static Place Of(Variable variable) => new(() => variable.Value, v => variable.Value = v);
+    }
+
+    private object? Assign(ISimpleAssignmentOperation assignment, Frame frame)
+    {
+        var place = PlaceOf(assignment.Target, frame);
+        var value = Evaluate(assignment.Value, frame);
+        if (!place.IsKnown) return Unknown.Value;
+        place.Set(value);
+        return value;
+    }
+
+    private object? CompoundAssign(ICompoundAssignmentOperation assignment, Frame frame)
+    {
+        var place = PlaceOf(assignment.Target, frame);
+        if (!place.IsKnown) return Unknown.Value;
+        var current = place.Get();
+        var operand = Evaluate(assignment.Value, frame);
+        object? result;
+        if (Unknown.Is(current) || Unknown.Is(operand))
+            result = Unknown.Value;
+        else if (assignment.OperatorMethod is { } method)
+            result = CallOperator(assignment, method, new[] { current, operand }, frame);
+        else if (assignment.OperatorKind == BinaryOperatorKind.Add && assignment.Target.Type?.SpecialType == SpecialType.System_String)
+            result = Arithmetic.Concatenate(current, operand);
+        else if (current is null || operand is null || assignment.Target.Type is null)
+            result = Unsupported(assignment, "this compound assignment", "its operands are not known");
+        else
+            result = BinaryValue(assignment, assignment.OperatorKind, current, operand, assignment.Target.Type, assignment.IsChecked);
+        place.Set(result);
+        return result;
+    }
+
+    private object? CoalesceAssign(ICoalesceAssignmentOperation assignment, Frame frame)
+    {
+        var place = PlaceOf(assignment.Target, frame);
+        if (!place.IsKnown) return Unknown.Value;
+        var current = place.Get();
+        if (current is not null) return current;
+        var value = Evaluate(assignment.Value, frame);
+        place.Set(value);
+        return value;
+    }
+
+    private object? IncrementOrDecrement(IIncrementOrDecrementOperation operation, Frame frame)
+    {
+        var place = PlaceOf(operation.Target, frame);
+        if (!place.IsKnown) return Unknown.Value;
+        var before = place.Get();
+        if (Unknown.Is(before)) return before;
+        var kind = operation.Kind == OperationKind.Increment ? BinaryOperatorKind.Add : BinaryOperatorKind.Subtract;
+        object? after;
+        if (operation.OperatorMethod is { } method)
+            after = CallOperator(operation, method, new[] { before }, frame);
+        else if (before is null || operation.Target.Type is null)
+            after = Unsupported(operation, "this increment", "its operand is not known");
+        else
+            after = BinaryValue(operation, kind, before, 1, operation.Target.Type, operation.IsChecked);
+        place.Set(after);
+        return operation.IsPostfix ? before : after;
+    }
+
+    private object? BinaryValue(IOperation site, BinaryOperatorKind kind, object left, object right, ITypeSymbol type, bool isChecked)
+    {
+        try
         {
-            var place = PlaceOf(assignment.Target, frame);
-            var value = Evaluate(assignment.Value, frame);
-            if (!place.IsKnown) return Unknown.Value;
-            place.Set(value);
-            return value;
+            return Arithmetic.Binary(kind, left, right, type, isChecked)
+                ?? Unsupported(site, "operator " + kind + " on " + type.ToDisplayString(), "it is outside the subset");
         }
-
-        private object? CompoundAssign(ICompoundAssignmentOperation assignment, Frame frame)
+        catch (ArithmeticException e)
         {
-            var place = PlaceOf(assignment.Target, frame);
-            if (!place.IsKnown) return Unknown.Value;
-            var current = place.Get();
-            var operand = Evaluate(assignment.Value, frame);
-            object? result;
-            if (Unknown.Is(current) || Unknown.Is(operand))
-                result = Unknown.Value;
-            else if (assignment.OperatorMethod is { } method)
-                result = CallOperator(assignment, method, new[] { current, operand }, frame);
-            else if (assignment.OperatorKind == BinaryOperatorKind.Add && assignment.Target.Type?.SpecialType == SpecialType.System_String)
-                result = Arithmetic.Concatenate(current, operand);
-            else if (current is null || operand is null || assignment.Target.Type is null)
-                result = Unsupported(assignment, "this compound assignment", "its operands are not known");
-            else
-                result = BinaryValue(assignment, assignment.OperatorKind, current, operand, assignment.Target.Type, assignment.IsChecked);
-            place.Set(result);
-            return result;
+            Throws(site.Syntax, e.GetType().Name + ": " + e.Message);
+            return Unknown.Value;
         }
+    }
 
-        private object? CoalesceAssign(ICoalesceAssignmentOperation assignment, Frame frame)
+    /// <summary>Assigns the parts of a tuple value to the targets of a deconstruction (<c>var (a, b) = ...</c>).</summary>
+    private void Deconstruct(IOperation target, object? value, Frame frame)
+    {
+        switch (target)
         {
-            var place = PlaceOf(assignment.Target, frame);
-            if (!place.IsKnown) return Unknown.Value;
-            var current = place.Get();
-            if (current is not null) return current;
-            var value = Evaluate(assignment.Value, frame);
-            place.Set(value);
-            return value;
-        }
-
-        private object? IncrementOrDecrement(IIncrementOrDecrementOperation operation, Frame frame)
-        {
-            var place = PlaceOf(operation.Target, frame);
-            if (!place.IsKnown) return Unknown.Value;
-            var before = place.Get();
-            if (Unknown.Is(before)) return before;
-            var kind = operation.Kind == OperationKind.Increment ? BinaryOperatorKind.Add : BinaryOperatorKind.Subtract;
-            object? after;
-            if (operation.OperatorMethod is { } method)
-                after = CallOperator(operation, method, new[] { before }, frame);
-            else if (before is null || operation.Target.Type is null)
-                after = Unsupported(operation, "this increment", "its operand is not known");
-            else
-                after = BinaryValue(operation, kind, before, 1, operation.Target.Type, operation.IsChecked);
-            place.Set(after);
-            return operation.IsPostfix ? before : after;
-        }
-
-        private object? BinaryValue(IOperation site, BinaryOperatorKind kind, object left, object right, ITypeSymbol type, bool isChecked)
-        {
-            try
-            {
-                return Arithmetic.Binary(kind, left, right, type, isChecked)
-                    ?? Unsupported(site, "operator " + kind + " on " + type.ToDisplayString(), "it is outside the subset");
-            }
-            catch (ArithmeticException e)
-            {
-                Throws(site.Syntax, e.GetType().Name + ": " + e.Message);
-                return Unknown.Value;
-            }
-        }
-
-        /// <summary>Assigns the parts of a tuple value to the targets of a deconstruction (<c>var (a, b) = ...</c>).</summary>
-        private void Deconstruct(IOperation target, object? value, Frame frame)
-        {
-            switch (target)
-            {
-                case IDeclarationExpressionOperation declaration:
-                    Deconstruct(declaration.Expression, value, frame);
-                    return;
-                case ITupleOperation tuple:
-                    var items = value as TupleValue;
-                    if (items is null && !Unknown.Is(value))
-                    {
-                        Unsupported(target, "this deconstruction", "only tuples are deconstructed");
-                        value = Unknown.Value;
-                    }
-
-                    for (var i = 0; i < tuple.Elements.Length; i++)
-                        Deconstruct(tuple.Elements[i], items is not null && i < items.Items.Length ? items.Items[i] : Unknown.Value, frame);
-                    return;
-                default:
-                    var place = PlaceOf(target, frame);
-                    if (place.IsKnown) place.Set(value);
-                    return;
-            }
-        }
-
-        /// <summary>The storage an assignment target denotes; a default (unknown) place when it cannot be written.</summary>
-        private Place PlaceOf(IOperation target, Frame frame)
-        {
-            switch (target)
-            {
-                case ILocalReferenceOperation local:
-                    if (local.IsDeclaration || frame.Find(local.Local) is null)
-                        frame.Declare(local.Local, DefaultOf(local.Local.Type));
-                    return Place.Of(frame.Find(local.Local)!);
-
-                case IDeclarationExpressionOperation declaration:
-                    return PlaceOf(declaration.Expression, frame);
-
-                case IDiscardOperation:
-                    return new Place(() => null, _ => { });
-
-                case IParameterReferenceOperation or IFieldReferenceOperation when VariableOf(target, frame) is { } variable:
-                    return Place.Of(variable);
-
-                case IArrayElementReferenceOperation element when element.Indices.Length == 1:
-                    var array = Evaluate(element.ArrayReference, frame);
-                    var index = Evaluate(element.Indices[0], frame);
-                    if (Unknown.Is(array) || Unknown.Is(index)) return default;
-                    if (array is not object?[] items) break;
-                    if (index is not (int or long or short or byte or sbyte or ushort or uint or ulong or char)) break; // broken code
-                    var i = System.Convert.ToInt32(index, CultureInfo.InvariantCulture);
-                    if (i < 0 || i >= items.Length)
-                    {
-                        Throws(element.Syntax, $"IndexOutOfRangeException: index {i} is outside the bounds of an array of length {items.Length}");
-                        return default;
-                    }
-
-                    return new Place(() => items[i], v => items[i] = v);
-
-                case IPropertyReferenceOperation property:
-                    return PropertyPlace(property, frame);
-            }
-
-            Unsupported(target, "this assignment target", "only locals, parameters, fields and properties of the design, array and list elements are assigned");
-            return default;
-        }
-
-        private Place PropertyPlace(IPropertyReferenceOperation reference, Frame frame)
-        {
-            var property = reference.Property;
-            var receiver = reference.Instance is null ? null : Evaluate(reference.Instance, frame);
-            if (Unknown.Is(receiver)) return default;
-
-            if (receiver is List<object?> list && property.IsIndexer)
-            {
-                var index = Evaluate(reference.Arguments[0].Value, frame);
-                if (Unknown.Is(index)) return default;
-                var i = System.Convert.ToInt32(index, CultureInfo.InvariantCulture);
-                if (i < 0 || i >= list.Count)
+            case IDeclarationExpressionOperation declaration:
+                Deconstruct(declaration.Expression, value, frame);
+                return;
+            case ITupleOperation tuple:
+                var items = value as TupleValue;
+                if (items is null && !Unknown.Is(value))
                 {
-                    Throws(reference.Syntax, $"ArgumentOutOfRangeException: index {i} is outside a list of {list.Count} elements");
+                    Unsupported(target, "this deconstruction", "only tuples are deconstructed");
+                    value = Unknown.Value;
+                }
+
+                for (var i = 0; i < tuple.Elements.Length; i++)
+                    Deconstruct(tuple.Elements[i], items is not null && i < items.Items.Length ? items.Items[i] : Unknown.Value, frame);
+                return;
+            default:
+                var place = PlaceOf(target, frame);
+                if (place.IsKnown) place.Set(value);
+                return;
+        }
+    }
+
+    /// <summary>The storage an assignment target denotes; a default (unknown) place when it cannot be written.</summary>
+    private Place PlaceOf(IOperation target, Frame frame)
+    {
+        switch (target)
+        {
+            case ILocalReferenceOperation local:
+                if (local.IsDeclaration || frame.Find(local.Local) is null)
+                    frame.Declare(local.Local, DefaultOf(local.Local.Type));
+                return Place.Of(frame.Find(local.Local)!);
+
+            case IDeclarationExpressionOperation declaration:
+                return PlaceOf(declaration.Expression, frame);
+
+            case IDiscardOperation:
+                return new Place(() => null, _ => { });
+
+            case IParameterReferenceOperation or IFieldReferenceOperation when VariableOf(target, frame) is { } variable:
+                return Place.Of(variable);
+
+            case IArrayElementReferenceOperation element when element.Indices.Length == 1:
+                var array = Evaluate(element.ArrayReference, frame);
+                var index = Evaluate(element.Indices[0], frame);
+                if (Unknown.Is(array) || Unknown.Is(index)) return default;
+                if (array is not object?[] items) break;
+                if (index is not (int or long or short or byte or sbyte or ushort or uint or ulong or char)) break; // broken code
+                var i = System.Convert.ToInt32(index, CultureInfo.InvariantCulture);
+                if (i < 0 || i >= items.Length)
+                {
+                    Throws(element.Syntax, $"IndexOutOfRangeException: index {i} is outside the bounds of an array of length {items.Length}");
                     return default;
                 }
 
-                return new Place(() => list[i], v => list[i] = v);
-            }
+                return new Place(() => items[i], v => items[i] = v);
 
-            if (receiver is DesignInstance instance || (receiver is null && property.IsStatic && session.IsInSource(property)))
-            {
-                var designInstance = receiver as DesignInstance;
-                if (designInstance is not null && FindOverride(designInstance.Type, property) is { } overriding)
-                    property = overriding;
-                if (IsAutoProperty(property))
-                    return Place.Of(property.IsStatic ? StaticVariable(property, frame) : designInstance!.GetOrAdd(property));
-                if (property.SetMethod is { } setter && session.IsInSource(setter))
-                    return new Place(() => CallGetter(reference, property, designInstance, frame),
-                        v => InvokeUser(setter, designInstance, new[] { v }, new Variable?[1], reference, frame));
-            }
-            else if (receiver is not null && ClrTypes.IsDsl(property) && property.SetMethod is { } dslSetter)
-            {
-                // Object initializers of DSL objects: new Process { PassGateResistance = ... } calls the real init accessor.
-                return new Place(() => null, v =>
-                {
-                    if (!Unknown.Is(v)) CallClr(reference.Parent ?? reference, dslSetter, receiver, new[] { v });
-                });
-            }
-
-            Unsupported(reference, "the assignment of " + Describe(property), "only properties of the design and of Phaseward objects being initialized are assigned");
-            return default;
+            case IPropertyReferenceOperation property:
+                return PropertyPlace(property, frame);
         }
+
+        Unsupported(target, "this assignment target", "only locals, parameters, fields and properties of the design, array and list elements are assigned");
+        return default;
+    }
+
+    private Place PropertyPlace(IPropertyReferenceOperation reference, Frame frame)
+    {
+        var property = reference.Property;
+        var receiver = reference.Instance is null ? null : Evaluate(reference.Instance, frame);
+        if (Unknown.Is(receiver)) return default;
+
+        if (receiver is List<object?> list && property.IsIndexer)
+        {
+            var index = Evaluate(reference.Arguments[0].Value, frame);
+            if (Unknown.Is(index)) return default;
+            var i = System.Convert.ToInt32(index, CultureInfo.InvariantCulture);
+            if (i < 0 || i >= list.Count)
+            {
+                Throws(reference.Syntax, $"ArgumentOutOfRangeException: index {i} is outside a list of {list.Count} elements");
+                return default;
+            }
+
+            return new Place(() => list[i], v => list[i] = v);
+        }
+
+        if (receiver is DesignInstance instance || (receiver is null && property.IsStatic && session.IsInSource(property)))
+        {
+            var designInstance = receiver as DesignInstance;
+            if (designInstance is not null && FindOverride(designInstance.Type, property) is { } overriding)
+                property = overriding;
+            if (IsAutoProperty(property))
+                return Place.Of(property.IsStatic ? StaticVariable(property, frame) : designInstance!.GetOrAdd(property));
+            if (property.SetMethod is { } setter && session.IsInSource(setter))
+                return new Place(() => CallGetter(reference, property, designInstance, frame),
+                    v => InvokeUser(setter, designInstance, new[] { v }, new Variable?[1], reference, frame));
+        }
+        else if (receiver is not null && ClrTypes.IsDsl(property) && property.SetMethod is { } dslSetter)
+        {
+            // Object initializers of DSL objects: new Process { PassGateResistance = ... } calls the real init accessor.
+            return new Place(() => null, v =>
+            {
+                if (!Unknown.Is(v)) CallClr(reference.Parent ?? reference, dslSetter, receiver, new[] { v });
+            });
+        }
+
+        Unsupported(reference, "the assignment of " + Describe(property), "only properties of the design and of Phaseward objects being initialized are assigned");
+        return default;
     }
 }

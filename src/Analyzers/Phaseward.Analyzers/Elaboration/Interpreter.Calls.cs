@@ -7,425 +7,424 @@ using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Operations;
 
-namespace Phaseward.Analyzers.Elaboration
+namespace Phaseward.Analyzers.Elaboration;
+
+internal sealed partial class Interpreter
 {
-    internal sealed partial class Interpreter
+    private object? Invoke(IInvocationOperation invocation, Frame frame)
     {
-        private object? Invoke(IInvocationOperation invocation, Frame frame)
+        Step(invocation);
+        var method = invocation.TargetMethod;
+        var receiver = invocation.Instance is null ? null : Evaluate(invocation.Instance, frame);
+        if (Unknown.Is(receiver)) return receiver;
+
+        if (session.IsInSource(method) && (method.MethodKind is MethodKind.Ordinary or MethodKind.LocalFunction))
         {
-            Step(invocation);
-            var method = invocation.TargetMethod;
-            var receiver = invocation.Instance is null ? null : Evaluate(invocation.Instance, frame);
-            if (Unknown.Is(receiver)) return receiver;
-
-            if (session.IsInSource(method) && (method.MethodKind is MethodKind.Ordinary or MethodKind.LocalFunction))
-            {
-                if (invocation.IsVirtual && receiver is DesignInstance instance)
-                    method = FindOverride(instance.Type, method) ?? method;
-                var (arguments, references) = Arguments(invocation.Arguments, method, frame);
-                if (arguments is null) return Unknown.Value;
-                return InvokeUser(method, receiver as DesignInstance ?? (method.IsStatic ? null : frame.Instance), arguments, references, invocation, frame);
-            }
-
-            if (receiver is List<object?> list)
-                return ListMethod(invocation, list, frame);
-            if (receiver is DesignInstance)
-                return Unsupported(invocation, "the call to " + Describe(method), "the design's inherited Phaseward members are not called at compile time");
-
-            var allowed = ClrTypes.IsDsl(method)
-                || method.ContainingType?.ToDisplayString() == "System.Math"
-                || (method.Name == "ToString" && receiver is not null && (IsNumericValue(receiver) || receiver is string or bool));
-            if (!allowed)
-                return Unsupported(invocation, "the call to " + Describe(method),
-                    "only the Phaseward DSL, System.Math, List<T> and methods declared in this compilation are elaborated");
-
-            var (values, _) = Arguments(invocation.Arguments, method, frame);
-            if (values is null) return Unknown.Value;
-            return CallClr(invocation, method, receiver, values);
+            if (invocation.IsVirtual && receiver is DesignInstance instance)
+                method = FindOverride(instance.Type, method) ?? method;
+            var (arguments, references) = Arguments(invocation.Arguments, method, frame);
+            if (arguments is null) return Unknown.Value;
+            return InvokeUser(method, receiver as DesignInstance ?? (method.IsStatic ? null : frame.Instance), arguments, references, invocation, frame);
         }
 
-        /// <summary>
-        /// Calls the real DSL (or library) member behind <paramref name="method"/>, telling the circuit where the call is.
-        /// <paramref name="arguments"/> is converted in place to the member's parameter types.
-        /// </summary>
-        private object? CallClr(IOperation site, IMethodSymbol method, object? receiver, object?[] arguments)
+        if (receiver is List<object?> list)
+            return ListMethod(invocation, list, frame);
+        if (receiver is DesignInstance)
+            return Unsupported(invocation, "the call to " + Describe(method), "the design's inherited Phaseward members are not called at compile time");
+
+        var allowed = ClrTypes.IsDsl(method)
+            || method.ContainingType?.ToDisplayString() == "System.Math"
+            || (method.Name == "ToString" && receiver is not null && (IsNumericValue(receiver) || receiver is string or bool));
+        if (!allowed)
+            return Unsupported(invocation, "the call to " + Describe(method),
+                "only the Phaseward DSL, System.Math, List<T> and methods declared in this compilation are elaborated");
+
+        var (values, _) = Arguments(invocation.Arguments, method, frame);
+        if (values is null) return Unknown.Value;
+        return CallClr(invocation, method, receiver, values);
+    }
+
+    /// <summary>
+    /// Calls the real DSL (or library) member behind <paramref name="method"/>, telling the circuit where the call is.
+    /// <paramref name="arguments"/> is converted in place to the member's parameter types.
+    /// </summary>
+    private object? CallClr(IOperation site, IMethodSymbol method, object? receiver, object?[] arguments)
+    {
+        var member = session.MemberOf(method);
+        if (member is null)
+            return Unsupported(site, "the call to " + Describe(method),
+                "the Phaseward assembly loaded by the compiler has no such member (is it older than the one the project references?)");
+        if (receiver is not null && IsNumericValue(receiver) && member.DeclaringType != receiver.GetType())
+            return Unsupported(site, "the call to " + Describe(method), "it is outside the subset");
+
+        // Converted in place: every caller hands over an array it made for this call (one array per call, not two).
+        var parameterTypes = session.ParameterTypesOf(member);
+        if (arguments.Length != parameterTypes.Length)
+            return Unsupported(site, "the call to " + Describe(method), "its arguments could not be passed (the run-time member takes " + parameterTypes.Length + ")");
+        var clrArguments = arguments;
+        for (var i = 0; i < parameterTypes.Length; i++)
+            clrArguments[i] = ToClr(arguments[i], parameterTypes[i]);
+
+        var circuit = Circuit;
+        if (circuit is not null)
         {
-            var member = session.MemberOf(method);
-            if (member is null)
-                return Unsupported(site, "the call to " + Describe(method),
-                    "the Phaseward assembly loaded by the compiler has no such member (is it older than the one the project references?)");
-            if (receiver is not null && IsNumericValue(receiver) && member.DeclaringType != receiver.GetType())
-                return Unsupported(site, "the call to " + Describe(method), "it is outside the subset");
+            // One delegate per interpreter (not a closure per call): the DSL asks for the site synchronously, during
+            // this call, and a DSL member never calls back into the interpreter.
+            clrSite = site;
+            clrSiteCallers = callers;
+            circuit.SourceSiteProvider = clrSiteProvider ??= CurrentClrSite;
+        }
 
-            // Converted in place: every caller hands over an array it made for this call (one array per call, not two).
-            var parameterTypes = session.ParameterTypesOf(member);
-            if (arguments.Length != parameterTypes.Length)
-                return Unsupported(site, "the call to " + Describe(method), "its arguments could not be passed (the run-time member takes " + parameterTypes.Length + ")");
-            var clrArguments = arguments;
-            for (var i = 0; i < parameterTypes.Length; i++)
-                clrArguments[i] = ToClr(arguments[i], parameterTypes[i]);
+        try
+        {
+            var result = member is ConstructorInfo constructor ? constructor.Invoke(clrArguments) : member.Invoke(receiver, clrArguments);
+            if (circuit is not null && (circuit.DeviceCount > limits.DeviceBudget || circuit.NetCount > limits.DeviceBudget))
+            {
+                Report(RuleIds.ElaborationBudgetExceeded, loops.Count > 0 ? loops.Peek().Syntax : site.Syntax, DesignName,
+                    $"the device budget of {limits.DeviceBudget} devices (or nets; phaseward.elaboration_device_budget) is used up");
+                throw new ElaborationStopped();
+            }
 
-            var circuit = Circuit;
+            return FromClr(result);
+        }
+        catch (TargetInvocationException e) when (e.InnerException is { } inner && inner is not OperationCanceledException)
+        {
+            Throws(site.Syntax, inner.Message);
+            return Unknown.Value;
+        }
+        catch (Exception e) when (e is ArgumentException or TargetParameterCountException or InvalidCastException or MemberAccessException or TargetException)
+        {
+            return Unsupported(site, "the call to " + Describe(method), "its arguments could not be passed (" + e.Message + ")");
+        }
+        finally
+        {
             if (circuit is not null)
-            {
-                // One delegate per interpreter (not a closure per call): the DSL asks for the site synchronously, during
-                // this call, and a DSL member never calls back into the interpreter.
-                clrSite = site;
-                clrSiteCallers = callers;
-                circuit.SourceSiteProvider = clrSiteProvider ??= CurrentClrSite;
-            }
+                circuit.SourceSiteProvider = null;
+        }
+    }
 
-            try
+    // The most variables a call of each method body has held: the next call's frame starts that large instead of
+    // growing its table step by step (a helper called once per loop iteration would otherwise regrow it every time).
+    private readonly Dictionary<IOperation, int> frameSizes = new();
+
+    private IOperation? clrSite;
+    private SourceSpan[] clrSiteCallers = Array.Empty<SourceSpan>();
+    private Func<SourceSpan>? clrSiteProvider;
+
+    // Inside a loop the same call is made with the same caller chain (chains are interned, see PushCaller) on every
+    // iteration: its span is built once and shared by every device made there. Straight-line code makes each call
+    // once, so nothing is cached for it.
+    private readonly Dictionary<(SyntaxNode Site, SourceSpan[] Callers), SourceSpan> loopSites = new();
+
+    private SourceSpan CurrentClrSite()
+    {
+        var syntax = clrSite!.Syntax;
+        if (loops.Count == 0)
+            return SourceSites.For(syntax, clrSiteCallers);
+        if (!loopSites.TryGetValue((syntax, clrSiteCallers), out var span))
+            loopSites.Add((syntax, clrSiteCallers), span = SourceSites.For(syntax, clrSiteCallers));
+        return span;
+    }
+
+    private object? CallOperator(IOperation site, IMethodSymbol method, object?[] operands, Frame frame)
+    {
+        if (operands.Any(Unknown.Is)) return Unknown.Value;
+        Step(site);
+        if (session.IsInSource(method))
+            return InvokeUser(method, null, operands, new Variable?[operands.Length], site, frame);
+        if (ClrTypes.IsDsl(method))
+            return CallClr(site, method, null, operands);
+        return Unsupported(site, "operator " + Describe(method), "only operators of the Phaseward DSL and of this compilation are elaborated");
+    }
+
+    /// <summary>
+    /// Evaluates arguments into parameter order. Returns null values when an argument is unknown (the call is then skipped
+    /// without a report: the unknown value was reported where it arose).
+    /// </summary>
+    private (object?[]? Values, Variable?[] References) Arguments(ImmutableArray<IArgumentOperation> arguments, IMethodSymbol method, Frame frame)
+    {
+        var values = new object?[method.Parameters.Length];
+        // Allocated only when a ref/out argument needs it (DSL calls never do); an empty array means none.
+        Variable?[]? references = null;
+        var unknown = false;
+        foreach (var argument in arguments)
+        {
+            var ordinal = argument.Parameter?.Ordinal ?? -1;
+            if (ordinal < 0 || ordinal >= values.Length)
+                continue;
+            if (argument.Parameter!.RefKind is RefKind.Ref or RefKind.Out)
             {
-                var result = member is ConstructorInfo constructor ? constructor.Invoke(clrArguments) : member.Invoke(receiver, clrArguments);
-                if (circuit is not null && (circuit.DeviceCount > limits.DeviceBudget || circuit.NetCount > limits.DeviceBudget))
+                var variable = VariableOf(argument.Value, frame);
+                if (variable is null)
                 {
-                    Report(RuleIds.ElaborationBudgetExceeded, loops.Count > 0 ? loops.Peek().Syntax : site.Syntax, DesignName,
-                        $"the device budget of {limits.DeviceBudget} devices (or nets; phaseward.elaboration_device_budget) is used up");
-                    throw new ElaborationStopped();
-                }
-
-                return FromClr(result);
-            }
-            catch (TargetInvocationException e) when (e.InnerException is { } inner && inner is not OperationCanceledException)
-            {
-                Throws(site.Syntax, inner.Message);
-                return Unknown.Value;
-            }
-            catch (Exception e) when (e is ArgumentException or TargetParameterCountException or InvalidCastException or MemberAccessException or TargetException)
-            {
-                return Unsupported(site, "the call to " + Describe(method), "its arguments could not be passed (" + e.Message + ")");
-            }
-            finally
-            {
-                if (circuit is not null)
-                    circuit.SourceSiteProvider = null;
-            }
-        }
-
-        // The most variables a call of each method body has held: the next call's frame starts that large instead of
-        // growing its table step by step (a helper called once per loop iteration would otherwise regrow it every time).
-        private readonly Dictionary<IOperation, int> frameSizes = new();
-
-        private IOperation? clrSite;
-        private SourceSpan[] clrSiteCallers = Array.Empty<SourceSpan>();
-        private Func<SourceSpan>? clrSiteProvider;
-
-        // Inside a loop the same call is made with the same caller chain (chains are interned, see PushCaller) on every
-        // iteration: its span is built once and shared by every device made there. Straight-line code makes each call
-        // once, so nothing is cached for it.
-        private readonly Dictionary<(SyntaxNode Site, SourceSpan[] Callers), SourceSpan> loopSites = new();
-
-        private SourceSpan CurrentClrSite()
-        {
-            var syntax = clrSite!.Syntax;
-            if (loops.Count == 0)
-                return SourceSites.For(syntax, clrSiteCallers);
-            if (!loopSites.TryGetValue((syntax, clrSiteCallers), out var span))
-                loopSites.Add((syntax, clrSiteCallers), span = SourceSites.For(syntax, clrSiteCallers));
-            return span;
-        }
-
-        private object? CallOperator(IOperation site, IMethodSymbol method, object?[] operands, Frame frame)
-        {
-            if (operands.Any(Unknown.Is)) return Unknown.Value;
-            Step(site);
-            if (session.IsInSource(method))
-                return InvokeUser(method, null, operands, new Variable?[operands.Length], site, frame);
-            if (ClrTypes.IsDsl(method))
-                return CallClr(site, method, null, operands);
-            return Unsupported(site, "operator " + Describe(method), "only operators of the Phaseward DSL and of this compilation are elaborated");
-        }
-
-        /// <summary>
-        /// Evaluates arguments into parameter order. Returns null values when an argument is unknown (the call is then skipped
-        /// without a report: the unknown value was reported where it arose).
-        /// </summary>
-        private (object?[]? Values, Variable?[] References) Arguments(ImmutableArray<IArgumentOperation> arguments, IMethodSymbol method, Frame frame)
-        {
-            var values = new object?[method.Parameters.Length];
-            // Allocated only when a ref/out argument needs it (DSL calls never do); an empty array means none.
-            Variable?[]? references = null;
-            var unknown = false;
-            foreach (var argument in arguments)
-            {
-                var ordinal = argument.Parameter?.Ordinal ?? -1;
-                if (ordinal < 0 || ordinal >= values.Length)
-                    continue;
-                if (argument.Parameter!.RefKind is RefKind.Ref or RefKind.Out)
-                {
-                    var variable = VariableOf(argument.Value, frame);
-                    if (variable is null)
-                    {
-                        Unsupported(argument, "this ref/out argument", "only locals, parameters and fields of the design are passed by reference");
-                        unknown = true;
-                        continue;
-                    }
-
-                    (references ??= new Variable?[method.Parameters.Length])[ordinal] = variable;
-                    values[ordinal] = variable.Value;
-                    continue;
-                }
-
-                var value = Evaluate(argument.Value, frame);
-                if (Unknown.Is(value))
+                    Unsupported(argument, "this ref/out argument", "only locals, parameters and fields of the design are passed by reference");
                     unknown = true;
-                values[ordinal] = value;
-            }
-
-            return (unknown ? null : values, references ?? Array.Empty<Variable?>());
-        }
-
-        /// <summary>Runs a method, local function or accessor declared in this compilation.</summary>
-        private object? InvokeUser(IMethodSymbol method, DesignInstance? instance, object?[] arguments, Variable?[] references, IOperation site, Frame caller)
-        {
-            var body = session.BodyOf(method, m => BodyOf((IMethodSymbol)m));
-            if (body is null)
-                return Unsupported(site, "the call to " + Describe(method), "its body could not be found (abstract, partial or extern)");
-
-            Frame? parent = null;
-            if (method.MethodKind == MethodKind.LocalFunction && method.ContainingSymbol is IMethodSymbol container)
-            {
-                parent = caller.FrameOf(container);
-                if (parent is null)
-                    return Unsupported(site, "the call to " + Describe(method), "its enclosing method is not running");
-                instance ??= parent.Instance;
-            }
-
-            EnterCall(site);
-            var outerCallers = callers;
-            PushCaller(site.Syntax);
-            try
-            {
-                frameSizes.TryGetValue(body, out var expectedVariables);
-                var frame = new Frame(method.OriginalDefinition, parent, method.IsStatic && method.MethodKind != MethodKind.LocalFunction ? null : instance, expectedVariables);
-                var parameters = method.OriginalDefinition.Parameters;
-                for (var i = 0; i < parameters.Length && i < arguments.Length; i++)
-                {
-                    if (i < references.Length && references[i] is { } variable)
-                        frame.Bind(parameters[i], variable);
-                    else
-                        frame.Declare(parameters[i], arguments[i]);
+                    continue;
                 }
 
-                Execute(body, frame);
-                if (frame.Count > expectedVariables)
-                    frameSizes[body] = frame.Count;
-                return frame.ReturnValue;
+                (references ??= new Variable?[method.Parameters.Length])[ordinal] = variable;
+                values[ordinal] = variable.Value;
+                continue;
             }
-            finally
-            {
-                // The caller chains are never mutated once built, so the outer chain is restored as it was.
-                callers = outerCallers;
-                LeaveCall();
-            }
+
+            var value = Evaluate(argument.Value, frame);
+            if (Unknown.Is(value))
+                unknown = true;
+            values[ordinal] = value;
         }
 
-        private IOperation? BodyOf(IMethodSymbol method)
-        {
-            var syntax = method.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken);
-            if (syntax is null)
-                return null;
-            // A partial method's implementation is the part with a body.
-            if (method.PartialImplementationPart is { } implementation)
-                syntax = implementation.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken) ?? syntax;
+        return (unknown ? null : values, references ?? Array.Empty<Variable?>());
+    }
 
-            var operation = ModelOf(syntax).GetOperation(syntax, cancellationToken);
-            return operation switch
-            {
-                IMethodBodyOperation body => (IOperation?)body.BlockBody ?? body.ExpressionBody,
-                ILocalFunctionOperation local => (IOperation?)local.Body ?? local.IgnoredBody,
-                IBlockOperation block => block,
-                // An expression-bodied property or indexer getter ('=> value').
-                { } expression when syntax is ArrowExpressionClauseSyntax => expression,
-                _ => null,
-            };
+    /// <summary>Runs a method, local function or accessor declared in this compilation.</summary>
+    private object? InvokeUser(IMethodSymbol method, DesignInstance? instance, object?[] arguments, Variable?[] references, IOperation site, Frame caller)
+    {
+        var body = session.BodyOf(method, m => BodyOf((IMethodSymbol)m));
+        if (body is null)
+            return Unsupported(site, "the call to " + Describe(method), "its body could not be found (abstract, partial or extern)");
+
+        Frame? parent = null;
+        if (method.MethodKind == MethodKind.LocalFunction && method.ContainingSymbol is IMethodSymbol container)
+        {
+            parent = caller.FrameOf(container);
+            if (parent is null)
+                return Unsupported(site, "the call to " + Describe(method), "its enclosing method is not running");
+            instance ??= parent.Instance;
         }
 
-        private static IMethodSymbol? FindOverride(INamedTypeSymbol type, IMethodSymbol method)
+        EnterCall(site);
+        var outerCallers = callers;
+        PushCaller(site.Syntax);
+        try
         {
-            for (var current = type; current is not null; current = current.BaseType)
-                foreach (var member in current.GetMembers(method.Name))
-                    if (member is IMethodSymbol candidate)
-                        for (var m = candidate; m is not null; m = m.OverriddenMethod)
-                            if (SymbolEqualityComparer.Default.Equals(m.OriginalDefinition, method.OriginalDefinition))
-                                return candidate;
+            frameSizes.TryGetValue(body, out var expectedVariables);
+            var frame = new Frame(method.OriginalDefinition, parent, method.IsStatic && method.MethodKind != MethodKind.LocalFunction ? null : instance, expectedVariables);
+            var parameters = method.OriginalDefinition.Parameters;
+            for (var i = 0; i < parameters.Length && i < arguments.Length; i++)
+            {
+                if (i < references.Length && references[i] is { } variable)
+                    frame.Bind(parameters[i], variable);
+                else
+                    frame.Declare(parameters[i], arguments[i]);
+            }
+
+            Execute(body, frame);
+            if (frame.Count > expectedVariables)
+                frameSizes[body] = frame.Count;
+            return frame.ReturnValue;
+        }
+        finally
+        {
+            // The caller chains are never mutated once built, so the outer chain is restored as it was.
+            callers = outerCallers;
+            LeaveCall();
+        }
+    }
+
+    private IOperation? BodyOf(IMethodSymbol method)
+    {
+        var syntax = method.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken);
+        if (syntax is null)
             return null;
-        }
+        // A partial method's implementation is the part with a body.
+        if (method.PartialImplementationPart is { } implementation)
+            syntax = implementation.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken) ?? syntax;
 
-        private static IPropertySymbol? FindOverride(INamedTypeSymbol type, IPropertySymbol property)
+        var operation = ModelOf(syntax).GetOperation(syntax, cancellationToken);
+        return operation switch
         {
-            for (var current = type; current is not null; current = current.BaseType)
-                foreach (var member in current.GetMembers(property.Name))
-                    if (member is IPropertySymbol candidate)
-                        for (var p = candidate; p is not null; p = p.OverriddenProperty)
-                            if (SymbolEqualityComparer.Default.Equals(p.OriginalDefinition, property.OriginalDefinition))
-                                return candidate;
-            return null;
-        }
-
-        private object? ReadProperty(IPropertyReferenceOperation reference, Frame frame)
-        {
-            var property = reference.Property;
-            var receiver = reference.Instance is null ? null : Evaluate(reference.Instance, frame);
-            if (Unknown.Is(receiver)) return receiver;
-
-            switch (receiver)
-            {
-                case object?[] array when property.Name == "Length":
-                    return array.Length;
-                case List<object?> list when property.Name == "Count":
-                    return list.Count;
-                case List<object?> list when property.IsIndexer:
-                    var index = Evaluate(reference.Arguments[0].Value, frame);
-                    if (Unknown.Is(index)) return index;
-                    var i = System.Convert.ToInt32(index, System.Globalization.CultureInfo.InvariantCulture);
-                    if (i >= 0 && i < list.Count) return list[i];
-                    Throws(reference.Syntax, $"ArgumentOutOfRangeException: index {i} is outside a list of {list.Count} elements");
-                    return Unknown.Value;
-                case string text when property.Name == "Length":
-                    return text.Length;
-                case DesignInstance instance:
-                    return ReadDesignProperty(reference, instance, frame);
-            }
-
-            if (session.IsInSource(property))
-            {
-                if (property.IsStatic)
-                    return IsAutoProperty(property) ? StaticVariable(property, frame).Value : CallGetter(reference, property, null, frame);
-                return Unsupported(reference, "property " + Describe(property), "only properties of the design and static properties are elaborated");
-            }
-
-            if (!ClrTypes.IsDsl(property) || property.GetMethod is not { } getter)
-                return Unsupported(reference, "property " + Describe(property),
-                    "only the Phaseward DSL, arrays, List<T> and members declared in this compilation are elaborated");
-
-            var (arguments, _) = Arguments(reference.Arguments, getter, frame);
-            return arguments is null ? Unknown.Value : CallClr(reference, getter, receiver, arguments);
-        }
-
-        private object? ReadDesignProperty(IPropertyReferenceOperation reference, DesignInstance instance, Frame frame)
-        {
-            var property = reference.Property;
-            if (FindOverride(instance.Type, property) is { } overriding)
-                property = overriding;
-            if (ClrTypes.IsDsl(property))
-                return property.Name == nameof(Design.Name)
-                    ? DesignName
-                    : Unsupported(reference, "property " + Describe(property), "the design's inherited Phaseward members are not read at compile time");
-            if (IsAutoProperty(property))
-                return instance.GetOrAdd(property).Value;
-            return CallGetter(reference, property, instance, frame);
-        }
-
-        private object? CallGetter(IPropertyReferenceOperation reference, IPropertySymbol property, DesignInstance? instance, Frame frame)
-        {
-            if (property.GetMethod is not { } getter)
-                return Unsupported(reference, "property " + Describe(property), "it has no getter");
-            Step(reference);
-            var (arguments, references) = Arguments(reference.Arguments, getter, frame);
-            return arguments is null ? Unknown.Value : InvokeUser(getter, instance, arguments, references, reference, frame);
-        }
-
-        private static bool IsAutoProperty(IPropertySymbol property)
-            => property.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax() is PropertyDeclarationSyntax { ExpressionBody: null, AccessorList: { } accessors }
-               && accessors.Accessors.All(a => a.Body is null && a.ExpressionBody is null);
-
-        /// <summary>A static field or auto-property of this compilation, initialized from its initializer on first use.</summary>
-        private Variable StaticVariable(ISymbol member, Frame frame)
-        {
-            if (statics.TryGetValue(member.OriginalDefinition, out var variable))
-                return variable;
-            var type = member is IFieldSymbol f ? f.Type : ((IPropertySymbol)member).Type;
-            statics[member.OriginalDefinition] = variable = new Variable(DefaultOf(type));
-            var initializer = InitializerOf(member);
-            if (initializer is not null)
-                variable.Value = Evaluate(initializer, new Frame(null, null, null));
-            return variable;
-        }
-
-        /// <summary>The value operation of a field's or property's initializer (<c>= value</c>), if it has one.</summary>
-        private IOperation? InitializerOf(ISymbol member)
-        {
-            var syntax = member.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken);
-            EqualsValueClauseSyntax? clause = syntax switch
-            {
-                VariableDeclaratorSyntax declarator => declarator.Initializer,
-                PropertyDeclarationSyntax property => property.Initializer,
-                _ => null,
-            };
-            if (clause is null)
-                return null;
-            return ModelOf(clause).GetOperation(clause, cancellationToken) switch
-            {
-                IFieldInitializerOperation field => field.Value,
-                IPropertyInitializerOperation property => property.Value,
-                _ => null,
-            };
-        }
-
-        /// <summary>The variable an operation denotes (for ref/out arguments), declaring 'out var' locals.</summary>
-        private Variable? VariableOf(IOperation operation, Frame frame)
-        {
-            switch (operation)
-            {
-                case IDeclarationExpressionOperation { Expression: ILocalReferenceOperation local }:
-                    frame.Declare(local.Local, DefaultOf(local.Local.Type));
-                    return frame.Find(local.Local);
-                case ILocalReferenceOperation local:
-                    return frame.Find(local.Local);
-                case IParameterReferenceOperation parameter:
-                    return frame.Find(parameter.Parameter) ?? frame.Instance?.Find(parameter.Parameter);
-                case IDiscardOperation:
-                    return new Variable(null);
-                case IFieldReferenceOperation field when session.IsInSource(field.Field):
-                    if (field.Field.IsStatic) return StaticVariable(field.Field, frame);
-                    return (field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame)) is DesignInstance instance ? instance.GetOrAdd(field.Field) : null;
-                default:
-                    return null;
-            }
-        }
-
-        /// <summary>Converts an interpreted value into what a DSL parameter of the given run-time type accepts.</summary>
-        private static object? ToClr(object? value, Type type)
-        {
-            if (type.IsByRef) type = type.GetElementType()!;
-            var underlying = Nullable.GetUnderlyingType(type) ?? type;
-            switch (value)
-            {
-                case null:
-                    return null;
-                case object?[] items when type.IsArray:
-                    return TypedArray(items, type.GetElementType()!);
-                case List<object?> list when type.IsArray:
-                    return TypedArray(list.ToArray(), type.GetElementType()!);
-                case object?[] or List<object?> when type.IsGenericType && type.GetGenericArguments().Length == 1:
-                    var elements = value is List<object?> l ? l.ToArray() : (object?[])value;
-                    var elementType = type.GetGenericArguments()[0];
-                    var array = TypedArray(elements, elementType);
-                    return type.IsAssignableFrom(array.GetType()) ? array : Activator.CreateInstance(typeof(List<>).MakeGenericType(elementType), array);
-            }
-
-            if (underlying.IsEnum && !(value is Enum))
-                return Enum.ToObject(underlying, value);
-            if (underlying.IsPrimitive && value.GetType() != underlying && value is IConvertible)
-                return System.Convert.ChangeType(value, underlying, System.Globalization.CultureInfo.InvariantCulture);
-            return value;
-        }
-
-        private static Array TypedArray(object?[] items, Type elementType)
-        {
-            var array = Array.CreateInstance(elementType, items.Length);
-            for (var i = 0; i < items.Length; i++)
-                array.SetValue(ToClr(items[i], elementType), i);
-            return array;
-        }
-
-        /// <summary>Arrays the DSL returns become interpreter arrays (so indexing and foreach treat them alike).</summary>
-        private static object? FromClr(object? value) => value switch
-        {
-            Array array when array is not object?[] && array.Rank == 1 => array.Cast<object?>().ToArray(),
-            _ => value,
+            IMethodBodyOperation body => (IOperation?)body.BlockBody ?? body.ExpressionBody,
+            ILocalFunctionOperation local => (IOperation?)local.Body ?? local.IgnoredBody,
+            IBlockOperation block => block,
+            // An expression-bodied property or indexer getter ('=> value').
+            { } expression when syntax is ArrowExpressionClauseSyntax => expression,
+            _ => null,
         };
     }
+
+    private static IMethodSymbol? FindOverride(INamedTypeSymbol type, IMethodSymbol method)
+    {
+        for (var current = type; current is not null; current = current.BaseType)
+            foreach (var member in current.GetMembers(method.Name))
+                if (member is IMethodSymbol candidate)
+                    for (var m = candidate; m is not null; m = m.OverriddenMethod)
+                        if (SymbolEqualityComparer.Default.Equals(m.OriginalDefinition, method.OriginalDefinition))
+                            return candidate;
+        return null;
+    }
+
+    private static IPropertySymbol? FindOverride(INamedTypeSymbol type, IPropertySymbol property)
+    {
+        for (var current = type; current is not null; current = current.BaseType)
+            foreach (var member in current.GetMembers(property.Name))
+                if (member is IPropertySymbol candidate)
+                    for (var p = candidate; p is not null; p = p.OverriddenProperty)
+                        if (SymbolEqualityComparer.Default.Equals(p.OriginalDefinition, property.OriginalDefinition))
+                            return candidate;
+        return null;
+    }
+
+    private object? ReadProperty(IPropertyReferenceOperation reference, Frame frame)
+    {
+        var property = reference.Property;
+        var receiver = reference.Instance is null ? null : Evaluate(reference.Instance, frame);
+        if (Unknown.Is(receiver)) return receiver;
+
+        switch (receiver)
+        {
+            case object?[] array when property.Name == "Length":
+                return array.Length;
+            case List<object?> list when property.Name == "Count":
+                return list.Count;
+            case List<object?> list when property.IsIndexer:
+                var index = Evaluate(reference.Arguments[0].Value, frame);
+                if (Unknown.Is(index)) return index;
+                var i = System.Convert.ToInt32(index, System.Globalization.CultureInfo.InvariantCulture);
+                if (i >= 0 && i < list.Count) return list[i];
+                Throws(reference.Syntax, $"ArgumentOutOfRangeException: index {i} is outside a list of {list.Count} elements");
+                return Unknown.Value;
+            case string text when property.Name == "Length":
+                return text.Length;
+            case DesignInstance instance:
+                return ReadDesignProperty(reference, instance, frame);
+        }
+
+        if (session.IsInSource(property))
+        {
+            if (property.IsStatic)
+                return IsAutoProperty(property) ? StaticVariable(property, frame).Value : CallGetter(reference, property, null, frame);
+            return Unsupported(reference, "property " + Describe(property), "only properties of the design and static properties are elaborated");
+        }
+
+        if (!ClrTypes.IsDsl(property) || property.GetMethod is not { } getter)
+            return Unsupported(reference, "property " + Describe(property),
+                "only the Phaseward DSL, arrays, List<T> and members declared in this compilation are elaborated");
+
+        var (arguments, _) = Arguments(reference.Arguments, getter, frame);
+        return arguments is null ? Unknown.Value : CallClr(reference, getter, receiver, arguments);
+    }
+
+    private object? ReadDesignProperty(IPropertyReferenceOperation reference, DesignInstance instance, Frame frame)
+    {
+        var property = reference.Property;
+        if (FindOverride(instance.Type, property) is { } overriding)
+            property = overriding;
+        if (ClrTypes.IsDsl(property))
+            return property.Name == nameof(Design.Name)
+                ? DesignName
+                : Unsupported(reference, "property " + Describe(property), "the design's inherited Phaseward members are not read at compile time");
+        if (IsAutoProperty(property))
+            return instance.GetOrAdd(property).Value;
+        return CallGetter(reference, property, instance, frame);
+    }
+
+    private object? CallGetter(IPropertyReferenceOperation reference, IPropertySymbol property, DesignInstance? instance, Frame frame)
+    {
+        if (property.GetMethod is not { } getter)
+            return Unsupported(reference, "property " + Describe(property), "it has no getter");
+        Step(reference);
+        var (arguments, references) = Arguments(reference.Arguments, getter, frame);
+        return arguments is null ? Unknown.Value : InvokeUser(getter, instance, arguments, references, reference, frame);
+    }
+
+    private static bool IsAutoProperty(IPropertySymbol property)
+        => property.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax() is PropertyDeclarationSyntax { ExpressionBody: null, AccessorList: { } accessors }
+           && accessors.Accessors.All(a => a.Body is null && a.ExpressionBody is null);
+
+    /// <summary>A static field or auto-property of this compilation, initialized from its initializer on first use.</summary>
+    private Variable StaticVariable(ISymbol member, Frame frame)
+    {
+        if (statics.TryGetValue(member.OriginalDefinition, out var variable))
+            return variable;
+        var type = member is IFieldSymbol f ? f.Type : ((IPropertySymbol)member).Type;
+        statics[member.OriginalDefinition] = variable = new Variable(DefaultOf(type));
+        var initializer = InitializerOf(member);
+        if (initializer is not null)
+            variable.Value = Evaluate(initializer, new Frame(null, null, null));
+        return variable;
+    }
+
+    /// <summary>The value operation of a field's or property's initializer (<c>= value</c>), if it has one.</summary>
+    private IOperation? InitializerOf(ISymbol member)
+    {
+        var syntax = member.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken);
+        EqualsValueClauseSyntax? clause = syntax switch
+        {
+            VariableDeclaratorSyntax declarator => declarator.Initializer,
+            PropertyDeclarationSyntax property => property.Initializer,
+            _ => null,
+        };
+        if (clause is null)
+            return null;
+        return ModelOf(clause).GetOperation(clause, cancellationToken) switch
+        {
+            IFieldInitializerOperation field => field.Value,
+            IPropertyInitializerOperation property => property.Value,
+            _ => null,
+        };
+    }
+
+    /// <summary>The variable an operation denotes (for ref/out arguments), declaring 'out var' locals.</summary>
+    private Variable? VariableOf(IOperation operation, Frame frame)
+    {
+        switch (operation)
+        {
+            case IDeclarationExpressionOperation { Expression: ILocalReferenceOperation local }:
+                frame.Declare(local.Local, DefaultOf(local.Local.Type));
+                return frame.Find(local.Local);
+            case ILocalReferenceOperation local:
+                return frame.Find(local.Local);
+            case IParameterReferenceOperation parameter:
+                return frame.Find(parameter.Parameter) ?? frame.Instance?.Find(parameter.Parameter);
+            case IDiscardOperation:
+                return new Variable(null);
+            case IFieldReferenceOperation field when session.IsInSource(field.Field):
+                if (field.Field.IsStatic) return StaticVariable(field.Field, frame);
+                return (field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame)) is DesignInstance instance ? instance.GetOrAdd(field.Field) : null;
+            default:
+                return null;
+        }
+    }
+
+    /// <summary>Converts an interpreted value into what a DSL parameter of the given run-time type accepts.</summary>
+    private static object? ToClr(object? value, Type type)
+    {
+        if (type.IsByRef) type = type.GetElementType()!;
+        var underlying = Nullable.GetUnderlyingType(type) ?? type;
+        switch (value)
+        {
+            case null:
+                return null;
+            case object?[] items when type.IsArray:
+                return TypedArray(items, type.GetElementType()!);
+            case List<object?> list when type.IsArray:
+                return TypedArray(list.ToArray(), type.GetElementType()!);
+            case object?[] or List<object?> when type.IsGenericType && type.GetGenericArguments().Length == 1:
+                var elements = value is List<object?> l ? l.ToArray() : (object?[])value;
+                var elementType = type.GetGenericArguments()[0];
+                var array = TypedArray(elements, elementType);
+                return type.IsAssignableFrom(array.GetType()) ? array : Activator.CreateInstance(typeof(List<>).MakeGenericType(elementType), array);
+        }
+
+        if (underlying.IsEnum && !(value is Enum))
+            return Enum.ToObject(underlying, value);
+        if (underlying.IsPrimitive && value.GetType() != underlying && value is IConvertible)
+            return System.Convert.ChangeType(value, underlying, System.Globalization.CultureInfo.InvariantCulture);
+        return value;
+    }
+
+    private static Array TypedArray(object?[] items, Type elementType)
+    {
+        var array = Array.CreateInstance(elementType, items.Length);
+        for (var i = 0; i < items.Length; i++)
+            array.SetValue(ToClr(items[i], elementType), i);
+        return array;
+    }
+
+    /// <summary>Arrays the DSL returns become interpreter arrays (so indexing and foreach treat them alike).</summary>
+    private static object? FromClr(object? value) => value switch
+    {
+        Array array when array is not object?[] && array.Rank == 1 => array.Cast<object?>().ToArray(),
+        _ => value,
+    };
 }

@@ -3,138 +3,137 @@ using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Operations;
 
-namespace Phaseward.Analyzers.Elaboration
+namespace Phaseward.Analyzers.Elaboration;
+
+// Building the design object the way C# does: field and property initializers of a class run before its base
+// constructor, then the constructor body; ': this(...)' skips the initializers of the delegating constructor.
+internal sealed partial class Interpreter
 {
-    // Building the design object the way C# does: field and property initializers of a class run before its base
-    // constructor, then the constructor body; ': this(...)' skips the initializers of the delegating constructor.
-    internal sealed partial class Interpreter
+    public DesignInstance NewDesign(INamedTypeSymbol type)
     {
-        public DesignInstance NewDesign(INamedTypeSymbol type)
+        var instance = new DesignInstance(type);
+        for (var current = type; current is not null && session.IsInSource(current); current = current.BaseType)
+            foreach (var member in current.GetMembers())
+            {
+                if (member is IFieldSymbol { IsStatic: false, IsConst: false } field && !field.IsImplicitlyDeclared)
+                    instance.GetOrAdd(field).Value = DefaultOf(field.Type);
+                else if (member is IPropertySymbol { IsStatic: false } property && IsAutoProperty(property))
+                    instance.GetOrAdd(property).Value = DefaultOf(property.Type);
+            }
+
+        return instance;
+    }
+
+    public void Construct(DesignInstance instance, IMethodSymbol constructor, object?[] arguments, IOperation? site)
+    {
+        var type = constructor.ContainingType;
+        if (!session.IsInSource(type))
+            return; // Phaseward.Design's constructor sets nothing the elaborator needs.
+
+        cancellationToken.ThrowIfCancellationRequested();
+        var syntax = constructor.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken);
+        switch (syntax)
         {
-            var instance = new DesignInstance(type);
-            for (var current = type; current is not null && session.IsInSource(current); current = current.BaseType)
-                foreach (var member in current.GetMembers())
+            case ConstructorDeclarationSyntax declaration when ModelOf(declaration).GetOperation(declaration, cancellationToken) is IConstructorBodyOperation body:
+                var frame = new Frame(constructor, null, instance);
+                for (var i = 0; i < constructor.Parameters.Length && i < arguments.Length; i++)
+                    frame.Declare(constructor.Parameters[i], arguments[i]);
+                var chained = body.Initializer switch
                 {
-                    if (member is IFieldSymbol { IsStatic: false, IsConst: false } field && !field.IsImplicitlyDeclared)
-                        instance.GetOrAdd(field).Value = DefaultOf(field.Type);
-                    else if (member is IPropertySymbol { IsStatic: false } property && IsAutoProperty(property))
-                        instance.GetOrAdd(property).Value = DefaultOf(property.Type);
+                    IExpressionStatementOperation { Operation: IInvocationOperation invocation } => invocation,
+                    IInvocationOperation invocation => invocation,
+                    _ => null,
+                };
+                if (chained is null || !SymbolEqualityComparer.Default.Equals(chained.TargetMethod.ContainingType, type))
+                    RunInitializers(instance, type);
+                if (chained is not null)
+                {
+                    var (values, _) = Arguments(chained.Arguments, chained.TargetMethod, frame);
+                    // ': this(...)' chains can loop in code that does not compile yet (a constructor calling itself):
+                    // each link counts against the recursion limit, so the elaborator stops instead of overflowing the stack.
+                    EnterCall(chained);
+                    try
+                    {
+                        Construct(instance, chained.TargetMethod, values ?? new object?[chained.TargetMethod.Parameters.Length], chained);
+                    }
+                    finally
+                    {
+                        LeaveCall();
+                    }
+                }
+                else
+                {
+                    ConstructBase(instance, type);
                 }
 
-            return instance;
-        }
-
-        public void Construct(DesignInstance instance, IMethodSymbol constructor, object?[] arguments, IOperation? site)
-        {
-            var type = constructor.ContainingType;
-            if (!session.IsInSource(type))
-                return; // Phaseward.Design's constructor sets nothing the elaborator needs.
-
-            cancellationToken.ThrowIfCancellationRequested();
-            var syntax = constructor.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken);
-            switch (syntax)
-            {
-                case ConstructorDeclarationSyntax declaration when ModelOf(declaration).GetOperation(declaration, cancellationToken) is IConstructorBodyOperation body:
-                    var frame = new Frame(constructor, null, instance);
-                    for (var i = 0; i < constructor.Parameters.Length && i < arguments.Length; i++)
-                        frame.Declare(constructor.Parameters[i], arguments[i]);
-                    var chained = body.Initializer switch
-                    {
-                        IExpressionStatementOperation { Operation: IInvocationOperation invocation } => invocation,
-                        IInvocationOperation invocation => invocation,
-                        _ => null,
-                    };
-                    if (chained is null || !SymbolEqualityComparer.Default.Equals(chained.TargetMethod.ContainingType, type))
-                        RunInitializers(instance, type);
-                    if (chained is not null)
-                    {
-                        var (values, _) = Arguments(chained.Arguments, chained.TargetMethod, frame);
-                        // ': this(...)' chains can loop in code that does not compile yet (a constructor calling itself):
-                        // each link counts against the recursion limit, so the elaborator stops instead of overflowing the stack.
-                        EnterCall(chained);
-                        try
-                        {
-                            Construct(instance, chained.TargetMethod, values ?? new object?[chained.TargetMethod.Parameters.Length], chained);
-                        }
-                        finally
-                        {
-                            LeaveCall();
-                        }
-                    }
-                    else
-                    {
-                        ConstructBase(instance, type);
-                    }
-
-                    var statements = (IOperation?)body.BlockBody ?? body.ExpressionBody;
-                    if (statements is not null)
-                        Execute(statements, frame);
-                    return;
-
-                case TypeDeclarationSyntax:
-                    // A primary constructor: its parameters are readable throughout the class.
-                    for (var i = 0; i < constructor.Parameters.Length && i < arguments.Length; i++)
-                        instance.GetOrAdd(constructor.Parameters[i]).Value = arguments[i];
-                    RunInitializers(instance, type);
-                    ConstructBase(instance, type);
-                    return;
-
-                default:
-                    // The implicit parameterless constructor.
-                    RunInitializers(instance, type);
-                    ConstructBase(instance, type);
-                    return;
-            }
-        }
-
-        private void ConstructBase(DesignInstance instance, INamedTypeSymbol type)
-        {
-            if (type.BaseType is not { } baseType || !session.IsInSource(baseType))
+                var statements = (IOperation?)body.BlockBody ?? body.ExpressionBody;
+                if (statements is not null)
+                    Execute(statements, frame);
                 return;
-            var primaryBase = type.DeclaringSyntaxReferences.Select(r => r.GetSyntax(cancellationToken)).OfType<TypeDeclarationSyntax>()
-                .SelectMany(t => t.BaseList?.Types ?? default).OfType<PrimaryConstructorBaseTypeSyntax>().FirstOrDefault();
-            if (primaryBase is not null && ModelOf(primaryBase).GetOperation(primaryBase, cancellationToken) is IInvocationOperation call)
-            {
-                var frame = new Frame(null, null, instance);
-                var (values, _) = Arguments(call.Arguments, call.TargetMethod, frame);
-                Construct(instance, call.TargetMethod, values ?? new object?[call.TargetMethod.Parameters.Length], call);
+
+            case TypeDeclarationSyntax:
+                // A primary constructor: its parameters are readable throughout the class.
+                for (var i = 0; i < constructor.Parameters.Length && i < arguments.Length; i++)
+                    instance.GetOrAdd(constructor.Parameters[i]).Value = arguments[i];
+                RunInitializers(instance, type);
+                ConstructBase(instance, type);
                 return;
-            }
 
-            var parameterless = baseType.InstanceConstructors.FirstOrDefault(c => c.Parameters.All(p => p.IsOptional));
-            if (parameterless is not null)
-                Construct(instance, parameterless, parameterless.Parameters.Select(p => p.HasExplicitDefaultValue ? p.ExplicitDefaultValue : null).ToArray(), null);
+            default:
+                // The implicit parameterless constructor.
+                RunInitializers(instance, type);
+                ConstructBase(instance, type);
+                return;
         }
+    }
 
-        private void RunInitializers(DesignInstance instance, INamedTypeSymbol type)
+    private void ConstructBase(DesignInstance instance, INamedTypeSymbol type)
+    {
+        if (type.BaseType is not { } baseType || !session.IsInSource(baseType))
+            return;
+        var primaryBase = type.DeclaringSyntaxReferences.Select(r => r.GetSyntax(cancellationToken)).OfType<TypeDeclarationSyntax>()
+            .SelectMany(t => t.BaseList?.Types ?? default).OfType<PrimaryConstructorBaseTypeSyntax>().FirstOrDefault();
+        if (primaryBase is not null && ModelOf(primaryBase).GetOperation(primaryBase, cancellationToken) is IInvocationOperation call)
         {
             var frame = new Frame(null, null, instance);
-            foreach (var member in type.GetMembers())
-            {
-                if (member.IsStatic || member is not (IFieldSymbol or IPropertySymbol))
-                    continue;
-                if (InitializerOf(member is IFieldSymbol { AssociatedSymbol: IPropertySymbol auto } ? auto : member) is { } initializer)
-                    instance.GetOrAdd(member is IFieldSymbol { AssociatedSymbol: IPropertySymbol p } ? p : member).Value = Evaluate(initializer, frame);
-            }
+            var (values, _) = Arguments(call.Arguments, call.TargetMethod, frame);
+            Construct(instance, call.TargetMethod, values ?? new object?[call.TargetMethod.Parameters.Length], call);
+            return;
         }
 
-        /// <summary>The design's Name: the class name, unless the design overrides Name (then its getter is interpreted).</summary>
-        public string ComputeName(DesignInstance instance, IOperation site)
+        var parameterless = baseType.InstanceConstructors.FirstOrDefault(c => c.Parameters.All(p => p.IsOptional));
+        if (parameterless is not null)
+            Construct(instance, parameterless, parameterless.Parameters.Select(p => p.HasExplicitDefaultValue ? p.ExplicitDefaultValue : null).ToArray(), null);
+    }
+
+    private void RunInitializers(DesignInstance instance, INamedTypeSymbol type)
+    {
+        var frame = new Frame(null, null, instance);
+        foreach (var member in type.GetMembers())
         {
-            var name = instance.Type.MetadataName;
-            var overriding = instance.Type.GetMembers("Name").OfType<IPropertySymbol>().FirstOrDefault();
-            for (var current = instance.Type; overriding is null && current?.BaseType is { } next && session.IsInSource(next); current = next)
-                overriding = next.GetMembers("Name").OfType<IPropertySymbol>().FirstOrDefault(p => p.IsOverride);
-            if (overriding is null || !overriding.IsOverride || overriding.GetMethod is null)
-                return name;
-            var value = IsAutoProperty(overriding)
-                ? instance.GetOrAdd(overriding).Value
-                : InvokeUser(overriding.GetMethod, instance, System.Array.Empty<object?>(), System.Array.Empty<Variable?>(), site, new Frame(null, null, instance));
-            if (value is string text)
-                return text;
-            if (!Unknown.Is(value))
-                Unsupported(site, "the design's Name", "its getter did not give a string");
-            return name;
+            if (member.IsStatic || member is not (IFieldSymbol or IPropertySymbol))
+                continue;
+            if (InitializerOf(member is IFieldSymbol { AssociatedSymbol: IPropertySymbol auto } ? auto : member) is { } initializer)
+                instance.GetOrAdd(member is IFieldSymbol { AssociatedSymbol: IPropertySymbol p } ? p : member).Value = Evaluate(initializer, frame);
         }
+    }
+
+    /// <summary>The design's Name: the class name, unless the design overrides Name (then its getter is interpreted).</summary>
+    public string ComputeName(DesignInstance instance, IOperation site)
+    {
+        var name = instance.Type.MetadataName;
+        var overriding = instance.Type.GetMembers("Name").OfType<IPropertySymbol>().FirstOrDefault();
+        for (var current = instance.Type; overriding is null && current?.BaseType is { } next && session.IsInSource(next); current = next)
+            overriding = next.GetMembers("Name").OfType<IPropertySymbol>().FirstOrDefault(p => p.IsOverride);
+        if (overriding is null || !overriding.IsOverride || overriding.GetMethod is null)
+            return name;
+        var value = IsAutoProperty(overriding)
+            ? instance.GetOrAdd(overriding).Value
+            : InvokeUser(overriding.GetMethod, instance, System.Array.Empty<object?>(), System.Array.Empty<Variable?>(), site, new Frame(null, null, instance));
+        if (value is string text)
+            return text;
+        if (!Unknown.Is(value))
+            Unsupported(site, "the design's Name", "its getter did not give a string");
+        return name;
     }
 }

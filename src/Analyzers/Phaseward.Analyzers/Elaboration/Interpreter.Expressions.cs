@@ -6,458 +6,460 @@ using System.Text;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Operations;
 
-namespace Phaseward.Analyzers.Elaboration
+namespace Phaseward.Analyzers.Elaboration;
+
+internal sealed partial class Interpreter
 {
-    internal sealed partial class Interpreter
+    public object? Evaluate(IOperation operation, Frame frame)
     {
-        public object? Evaluate(IOperation operation, Frame frame)
+        if (MayBeConstant(operation) && operation.ConstantValue is { HasValue: true } constant)
+            return FromConstant(constant.Value, operation.Type);
+
+        // By kind, not by type test: one jump instead of a chain of interface casts for every operation evaluated.
+        switch (operation.Kind)
         {
-            if (MayBeConstant(operation) && operation.ConstantValue is { HasValue: true } constant)
-                return FromConstant(constant.Value, operation.Type);
+            case OperationKind.Invalid:
+                // Code that does not compile: the compiler reports it; the elaborator only skips what depends on it.
+                return Unknown.Value;
 
-            // By kind, not by type test: one jump instead of a chain of interface casts for every operation evaluated.
-            switch (operation.Kind)
-            {
-                case OperationKind.Invalid:
-                    // Code that does not compile: the compiler reports it; the elaborator only skips what depends on it.
-                    return Unknown.Value;
+            case OperationKind.Conversion:
+                var conversion = (IConversionOperation)operation;
+                return Convert(conversion, Evaluate(conversion.Operand, frame), frame);
 
-                case OperationKind.Conversion:
-                    var conversion = (IConversionOperation)operation;
-                    return Convert(conversion, Evaluate(conversion.Operand, frame), frame);
+            case OperationKind.LocalReference:
+                var local = (ILocalReferenceOperation)operation;
+                return frame.Find(local.Local) is { } variable
+                    ? variable.Value
+                    : Unsupported(operation, "local " + Describe(local.Local), "it is read before the elaborator saw it assigned");
 
-                case OperationKind.LocalReference:
-                    var local = (ILocalReferenceOperation)operation;
-                    return frame.Find(local.Local) is { } variable
-                        ? variable.Value
-                        : Unsupported(operation, "local " + Describe(local.Local), "it is read before the elaborator saw it assigned");
+            case OperationKind.ParameterReference:
+                var parameter = (IParameterReferenceOperation)operation;
+                return (frame.Find(parameter.Parameter) ?? frame.Instance?.Find(parameter.Parameter)) is { } argument
+                    ? argument.Value
+                    : Unsupported(operation, "parameter " + Describe(parameter.Parameter), "its value is not known here");
 
-                case OperationKind.ParameterReference:
-                    var parameter = (IParameterReferenceOperation)operation;
-                    return (frame.Find(parameter.Parameter) ?? frame.Instance?.Find(parameter.Parameter)) is { } argument
-                        ? argument.Value
-                        : Unsupported(operation, "parameter " + Describe(parameter.Parameter), "its value is not known here");
+            case OperationKind.FieldReference:
+                var field = (IFieldReferenceOperation)operation;
+                return ReadField(field, frame);
 
-                case OperationKind.FieldReference:
-                    var field = (IFieldReferenceOperation)operation;
-                    return ReadField(field, frame);
+            case OperationKind.PropertyReference:
+                var property = (IPropertyReferenceOperation)operation;
+                return ReadProperty(property, frame);
 
-                case OperationKind.PropertyReference:
-                    var property = (IPropertyReferenceOperation)operation;
-                    return ReadProperty(property, frame);
+            case OperationKind.Invocation:
+                var invocation = (IInvocationOperation)operation;
+                return Invoke(invocation, frame);
 
-                case OperationKind.Invocation:
-                    var invocation = (IInvocationOperation)operation;
-                    return Invoke(invocation, frame);
+            case OperationKind.ObjectCreation:
+                var creation = (IObjectCreationOperation)operation;
+                return Create(creation, frame);
 
-                case OperationKind.ObjectCreation:
-                    var creation = (IObjectCreationOperation)operation;
-                    return Create(creation, frame);
+            case OperationKind.ArrayCreation:
+                var array = (IArrayCreationOperation)operation;
+                return CreateArray(array, frame);
 
-                case OperationKind.ArrayCreation:
-                    var array = (IArrayCreationOperation)operation;
-                    return CreateArray(array, frame);
+            case OperationKind.ArrayElementReference:
+                var element = (IArrayElementReferenceOperation)operation;
+                return ReadElement(element, frame);
 
-                case OperationKind.ArrayElementReference:
-                    var element = (IArrayElementReferenceOperation)operation;
-                    return ReadElement(element, frame);
+            case OperationKind.CollectionExpression:
+                var collection = (ICollectionExpressionOperation)operation;
+                return CreateCollection(collection, frame);
 
-                case OperationKind.CollectionExpression:
-                    var collection = (ICollectionExpressionOperation)operation;
-                    return CreateCollection(collection, frame);
+            case OperationKind.Tuple:
+                var tuple = (ITupleOperation)operation;
+                return CreateTuple(tuple, frame);
 
-                case OperationKind.Tuple:
-                    var tuple = (ITupleOperation)operation;
-                    return CreateTuple(tuple, frame);
+            case OperationKind.InterpolatedString:
+                var interpolated = (IInterpolatedStringOperation)operation;
+                return Interpolate(interpolated, frame);
 
-                case OperationKind.InterpolatedString:
-                    var interpolated = (IInterpolatedStringOperation)operation;
-                    return Interpolate(interpolated, frame);
+            case OperationKind.Binary:
+                var binary = (IBinaryOperation)operation;
+                return Binary(binary, frame);
 
-                case OperationKind.Binary:
-                    var binary = (IBinaryOperation)operation;
-                    return Binary(binary, frame);
+            case OperationKind.Unary:
+                var unary = (IUnaryOperation)operation;
+                return Unary(unary, frame);
 
-                case OperationKind.Unary:
-                    var unary = (IUnaryOperation)operation;
-                    return Unary(unary, frame);
+            case OperationKind.Conditional:
+                var conditional = (IConditionalOperation)operation;
+                return Condition(conditional.Condition, frame) switch
+                {
+                    true => Evaluate(conditional.WhenTrue, frame),
+                    false => conditional.WhenFalse is null ? null : Evaluate(conditional.WhenFalse, frame),
+                    _ => Unknown.Value,
+                };
 
-                case OperationKind.Conditional:
-                    var conditional = (IConditionalOperation)operation;
-                    return Condition(conditional.Condition, frame) switch
-                    {
-                        true => Evaluate(conditional.WhenTrue, frame),
-                        false => conditional.WhenFalse is null ? null : Evaluate(conditional.WhenFalse, frame),
-                        _ => Unknown.Value,
-                    };
+            case OperationKind.Coalesce:
+                var coalesce = (ICoalesceOperation)operation;
+                var tested = Evaluate(coalesce.Value, frame);
+                return Unknown.Is(tested) ? tested : tested ?? Evaluate(coalesce.WhenNull, frame);
 
-                case OperationKind.Coalesce:
-                    var coalesce = (ICoalesceOperation)operation;
-                    var tested = Evaluate(coalesce.Value, frame);
-                    return Unknown.Is(tested) ? tested : tested ?? Evaluate(coalesce.WhenNull, frame);
+            case OperationKind.SimpleAssignment:
+                var assignment = (ISimpleAssignmentOperation)operation;
+                return Assign(assignment, frame);
 
-                case OperationKind.SimpleAssignment:
-                    var assignment = (ISimpleAssignmentOperation)operation;
-                    return Assign(assignment, frame);
+            case OperationKind.CompoundAssignment:
+                var compound = (ICompoundAssignmentOperation)operation;
+                return CompoundAssign(compound, frame);
 
-                case OperationKind.CompoundAssignment:
-                    var compound = (ICompoundAssignmentOperation)operation;
-                    return CompoundAssign(compound, frame);
+            case OperationKind.CoalesceAssignment:
+                var coalesceAssignment = (ICoalesceAssignmentOperation)operation;
+                return CoalesceAssign(coalesceAssignment, frame);
 
-                case OperationKind.CoalesceAssignment:
-                    var coalesceAssignment = (ICoalesceAssignmentOperation)operation;
-                    return CoalesceAssign(coalesceAssignment, frame);
+            case OperationKind.Increment:
+            case OperationKind.Decrement:
+                var increment = (IIncrementOrDecrementOperation)operation;
+                return IncrementOrDecrement(increment, frame);
 
-                case OperationKind.Increment:
-                case OperationKind.Decrement:
-                    var increment = (IIncrementOrDecrementOperation)operation;
-                    return IncrementOrDecrement(increment, frame);
+            case OperationKind.DeconstructionAssignment:
+                var deconstruction = (IDeconstructionAssignmentOperation)operation;
+                var value = Evaluate(deconstruction.Value, frame);
+                Deconstruct(deconstruction.Target, value, frame);
+                return value;
 
-                case OperationKind.DeconstructionAssignment:
-                    var deconstruction = (IDeconstructionAssignmentOperation)operation;
-                    var value = Evaluate(deconstruction.Value, frame);
-                    Deconstruct(deconstruction.Target, value, frame);
-                    return value;
+            case OperationKind.InstanceReference when ((IInstanceReferenceOperation)operation).ReferenceKind == InstanceReferenceKind.ImplicitReceiver:
+                return implicitReceivers.Count > 0 ? implicitReceivers.Peek() : Unsupported(operation, "this receiver", "it has no value here");
 
-                case OperationKind.InstanceReference when ((IInstanceReferenceOperation)operation).ReferenceKind == InstanceReferenceKind.ImplicitReceiver:
-                    return implicitReceivers.Count > 0 ? implicitReceivers.Peek() : Unsupported(operation, "this receiver", "it has no value here");
+            case OperationKind.InstanceReference:
+                return (object?)frame.Instance ?? Unsupported(operation, "'this'", "it is only known inside the design being elaborated");
 
-                case OperationKind.InstanceReference:
-                    return (object?)frame.Instance ?? Unsupported(operation, "'this'", "it is only known inside the design being elaborated");
+            case OperationKind.DefaultValue:
+                return operation.Type is null ? null : DefaultOf(operation.Type);
 
-                case OperationKind.DefaultValue:
-                    return operation.Type is null ? null : DefaultOf(operation.Type);
+            case OperationKind.SwitchExpression:
+                var switchExpression = (ISwitchExpressionOperation)operation;
+                return SwitchExpression(switchExpression, frame);
 
-                case OperationKind.SwitchExpression:
-                    var switchExpression = (ISwitchExpressionOperation)operation;
-                    return SwitchExpression(switchExpression, frame);
+            case OperationKind.IsPattern:
+                var isPattern = (IIsPatternOperation)operation;
+                var subject = Evaluate(isPattern.Value, frame);
+                return Unknown.Is(subject) ? subject : (object?)Match(isPattern.Pattern, subject, frame) ?? Unknown.Value;
 
-                case OperationKind.IsPattern:
-                    var isPattern = (IIsPatternOperation)operation;
-                    var subject = Evaluate(isPattern.Value, frame);
-                    return Unknown.Is(subject) ? subject : (object?)Match(isPattern.Pattern, subject, frame) ?? Unknown.Value;
+            case OperationKind.DeclarationExpression:
+                var declaration = (IDeclarationExpressionOperation)operation;
+                return Evaluate(declaration.Expression, frame);
 
-                case OperationKind.DeclarationExpression:
-                    var declaration = (IDeclarationExpressionOperation)operation;
-                    return Evaluate(declaration.Expression, frame);
+            case OperationKind.Throw:
+                var thrown = (IThrowOperation)operation;
+                Throws(thrown.Syntax, DescribeThrow(thrown, frame));
+                throw new ElaborationStopped();
 
-                case OperationKind.Throw:
-                    var thrown = (IThrowOperation)operation;
-                    Throws(thrown.Syntax, DescribeThrow(thrown, frame));
-                    throw new ElaborationStopped();
+            case OperationKind.Parenthesized:
+                var parenthesized = (IParenthesizedOperation)operation;
+                return Evaluate(parenthesized.Operand, frame);
 
-                case OperationKind.Parenthesized:
-                    var parenthesized = (IParenthesizedOperation)operation;
-                    return Evaluate(parenthesized.Operand, frame);
+            case OperationKind.AnonymousFunction:
+            case OperationKind.DelegateCreation:
+                return Unsupported(operation, "a lambda or delegate", "lambdas and delegates are outside the subset the elaborator interprets");
 
-                case OperationKind.AnonymousFunction:
-                case OperationKind.DelegateCreation:
-                    return Unsupported(operation, "a lambda or delegate", "lambdas and delegates are outside the subset the elaborator interprets");
+            case OperationKind.ConditionalAccess:
+                return Unsupported(operation, "a null-conditional access ('?.')", "it is outside the subset the elaborator interprets");
 
-                case OperationKind.ConditionalAccess:
-                    return Unsupported(operation, "a null-conditional access ('?.')", "it is outside the subset the elaborator interprets");
+            case OperationKind.AnonymousObjectCreation:
+                return Unsupported(operation, "an anonymous object", "anonymous types are outside the subset the elaborator interprets");
 
-                case OperationKind.AnonymousObjectCreation:
-                    return Unsupported(operation, "an anonymous object", "anonymous types are outside the subset the elaborator interprets");
+            case OperationKind.TypeOf:
+            case OperationKind.IsType:
+                return Unsupported(operation, "a run-time type test", "reflection and type tests are outside the subset the elaborator interprets");
 
-                case OperationKind.TypeOf:
-                case OperationKind.IsType:
-                    return Unsupported(operation, "a run-time type test", "reflection and type tests are outside the subset the elaborator interprets");
+            case OperationKind.Await:
+                return Unsupported(operation, "an await", "asynchronous code is outside the subset the elaborator interprets");
 
-                case OperationKind.Await:
-                    return Unsupported(operation, "an await", "asynchronous code is outside the subset the elaborator interprets");
-
-                default:
-                    return Unsupported(operation, "this " + KindName(operation), "it is outside the subset the elaborator interprets");
-            }
+            default:
+                return Unsupported(operation, "this " + KindName(operation), "it is outside the subset the elaborator interprets");
         }
+    }
 
-        /// <summary>
-        /// False for the kinds of operation that never carry a compile-time constant: reading ConstantValue allocates, and
-        /// these (calls, creations, parameters, assignments, non-const locals) are most of what a design evaluates.
-        /// </summary>
-        private static bool MayBeConstant(IOperation operation) => operation.Kind switch
-        {
-            OperationKind.Invocation or OperationKind.ObjectCreation or OperationKind.ParameterReference or OperationKind.PropertyReference
-                or OperationKind.SimpleAssignment or OperationKind.CompoundAssignment or OperationKind.Increment or OperationKind.Decrement
-                or OperationKind.InstanceReference or OperationKind.ArrayElementReference or OperationKind.ArrayCreation => false,
-            OperationKind.LocalReference => ((ILocalReferenceOperation)operation).Local.IsConst,
-            _ => true,
-        };
+    /// <summary>
+    /// False for the kinds of operation that never carry a compile-time constant: reading ConstantValue allocates, and
+    /// these (calls, creations, parameters, assignments, non-const locals) are most of what a design evaluates.
+    /// </summary>
+    private static bool MayBeConstant(IOperation operation) => operation.Kind switch
+    {
+        OperationKind.Invocation or OperationKind.ObjectCreation or OperationKind.ParameterReference or OperationKind.PropertyReference
+            or OperationKind.SimpleAssignment or OperationKind.CompoundAssignment or OperationKind.Increment or OperationKind.Decrement
+            or OperationKind.InstanceReference or OperationKind.ArrayElementReference or OperationKind.ArrayCreation => false,
+        OperationKind.LocalReference => ((ILocalReferenceOperation)operation).Local.IsConst,
+        _ => true,
+    };
 
-        private object? Convert(IConversionOperation conversion, object? value, Frame frame)
-        {
-            if (Unknown.Is(value))
-                return value;
-            if (conversion.OperatorMethod is { } method)
-                return CallOperator(conversion, method, new[] { value }, frame);
-            var target = conversion.Type;
-            if (target is null || value is null)
-                return value;
-            if (target is INamedTypeSymbol { OriginalDefinition.SpecialType: SpecialType.System_Nullable_T } nullable)
-                target = nullable.TypeArguments[0];
-            if (target.TypeKind == TypeKind.Enum)
-                return ToEnum(value, target);
-            if (IsNumeric(target) && (IsNumericValue(value) || value is Enum))
-            {
-                var number = value is Enum ? System.Convert.ToInt64(value, CultureInfo.InvariantCulture) : value;
-                return Arithmetic.ConvertNumber(number, target.SpecialType, conversion.IsChecked)
-                    ?? Unsupported(conversion, "this numeric conversion", "the elaborator handles int, long, float, double and char");
-            }
-
+    private object? Convert(IConversionOperation conversion, object? value, Frame frame)
+    {
+        if (Unknown.Is(value))
             return value;
+        // Code that does not compile (half-typed, or a type that does not convert) is never given a meaning.
+        if (!conversion.Conversion.Exists)
+            return Unsupported(conversion, "this conversion", "it does not compile");
+        if (conversion.OperatorMethod is { } method)
+            return CallOperator(conversion, method, new[] { value }, frame);
+        var target = conversion.Type;
+        if (target is null || value is null)
+            return value;
+        if (target is INamedTypeSymbol { OriginalDefinition.SpecialType: SpecialType.System_Nullable_T } nullable)
+            target = nullable.TypeArguments[0];
+        if (target.TypeKind == TypeKind.Enum)
+            return ToEnum(value, target);
+        if (IsNumeric(target) && (IsNumericValue(value) || value is Enum))
+        {
+            var number = value is Enum ? System.Convert.ToInt64(value, CultureInfo.InvariantCulture) : value;
+            return Arithmetic.ConvertNumber(number, target.SpecialType, conversion.IsChecked)
+                ?? Unsupported(conversion, "this numeric conversion", "the elaborator handles int, long, float, double and char");
         }
 
-        private object? ReadField(IFieldReferenceOperation field, Frame frame)
+        return value;
+    }
+
+    private object? ReadField(IFieldReferenceOperation field, Frame frame)
+    {
+        var symbol = field.Field;
+        if (symbol.ContainingType?.IsTupleType == true)
         {
-            var symbol = field.Field;
-            if (symbol.ContainingType?.IsTupleType == true)
-            {
-                var tuple = field.Instance is null ? null : Evaluate(field.Instance, frame);
-                if (Unknown.Is(tuple)) return tuple;
-                return tuple is TupleValue t && TupleIndex(symbol) is { } index && index < t.Items.Length
-                    ? t.Items[index]
-                    : Unsupported(field, "tuple element " + Describe(symbol), "tuples of more than seven elements are outside the subset");
-            }
-
-            if (ClrTypes.IsDsl(symbol) && symbol.IsStatic)
-            {
-                var type = symbol.ContainingType is null ? null : ClrTypes.Resolve(symbol.ContainingType);
-                var info = type?.GetField(symbol.Name, System.Reflection.BindingFlags.Public | System.Reflection.BindingFlags.NonPublic | System.Reflection.BindingFlags.Static);
-                return info is null ? Unsupported(field, "field " + Describe(symbol), "it was not found in the Phaseward assembly") : FromClr(info.GetValue(null));
-            }
-
-            if (!session.IsInSource(symbol))
-                return Unsupported(field, "field " + Describe(symbol), "only fields declared in this compilation or the Phaseward DSL are read");
-
-            if (symbol.IsStatic)
-                return StaticVariable(symbol, frame).Value;
-
-            var owner = field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame);
-            if (Unknown.Is(owner)) return owner;
-            return owner is DesignInstance instance
-                ? instance.GetOrAdd(symbol).Value
-                : Unsupported(field, "field " + Describe(symbol), "only fields of the design itself are elaborated");
+            var tuple = field.Instance is null ? null : Evaluate(field.Instance, frame);
+            if (Unknown.Is(tuple)) return tuple;
+            return tuple is TupleValue t && TupleIndex(symbol) is { } index && index < t.Items.Length
+                ? t.Items[index]
+                : Unsupported(field, "tuple element " + Describe(symbol), "tuples of more than seven elements are outside the subset");
         }
 
-        private static int? TupleIndex(IFieldSymbol field)
+        if (ClrTypes.IsDsl(symbol) && symbol.IsStatic)
         {
-            var name = (field.CorrespondingTupleField ?? field).Name;
-            return name.StartsWith("Item", StringComparison.Ordinal) && int.TryParse(name.Substring(4), NumberStyles.None, CultureInfo.InvariantCulture, out var n)
-                ? n - 1
+            var type = symbol.ContainingType is null ? null : ClrTypes.Resolve(symbol.ContainingType);
+            var info = type?.GetField(symbol.Name, System.Reflection.BindingFlags.Public | System.Reflection.BindingFlags.NonPublic | System.Reflection.BindingFlags.Static);
+            return info is null ? Unsupported(field, "field " + Describe(symbol), "it was not found in the Phaseward assembly") : FromClr(info.GetValue(null));
+        }
+
+        if (!session.IsInSource(symbol))
+            return Unsupported(field, "field " + Describe(symbol), "only fields declared in this compilation or the Phaseward DSL are read");
+
+        if (symbol.IsStatic)
+            return StaticVariable(symbol, frame).Value;
+
+        var owner = field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame);
+        if (Unknown.Is(owner)) return owner;
+        return owner is DesignInstance instance
+            ? instance.GetOrAdd(symbol).Value
+            : Unsupported(field, "field " + Describe(symbol), "only fields of the design itself are elaborated");
+    }
+
+    private static int? TupleIndex(IFieldSymbol field)
+    {
+        var name = (field.CorrespondingTupleField ?? field).Name;
+        return name.StartsWith("Item", StringComparison.Ordinal) && int.TryParse(name.Substring(4), NumberStyles.None, CultureInfo.InvariantCulture, out var n)
+            ? n - 1
+            : null;
+    }
+
+    private object? ReadElement(IArrayElementReferenceOperation element, Frame frame)
+    {
+        var array = Evaluate(element.ArrayReference, frame);
+        if (Unknown.Is(array)) return array;
+        if (element.Indices.Length != 1)
+            return Unsupported(element, "a multi-dimensional array", "only one-dimensional arrays are elaborated");
+        var index = Evaluate(element.Indices[0], frame);
+        if (Unknown.Is(index)) return index;
+        if (array is not object?[] items)
+            return Unsupported(element, "this array", "it does not come from the design's code");
+        // In code that does not compile yet the index can be a value of another type (a net, a string).
+        if (index is not (int or long or short or byte or sbyte or ushort or uint or ulong or char))
+            return Unsupported(element, "this array index", "it is not a whole number");
+        var i = System.Convert.ToInt32(index, CultureInfo.InvariantCulture);
+        if (i < 0 || i >= items.Length)
+        {
+            Throws(element.Syntax, $"IndexOutOfRangeException: index {i} is outside the bounds of an array of length {items.Length}");
+            return Unknown.Value;
+        }
+
+        return items[i];
+    }
+
+    private object? Interpolate(IInterpolatedStringOperation interpolated, Frame frame)
+    {
+        var text = new StringBuilder();
+        foreach (var part in interpolated.Parts)
+        {
+            switch (part)
+            {
+                case IInterpolatedStringTextOperation literal:
+                    text.Append(literal.Text.ConstantValue.Value as string);
+                    break;
+                case IInterpolationOperation hole:
+                    var value = Evaluate(hole.Expression, frame);
+                    if (Unknown.Is(value)) return value;
+                    var alignment = hole.Alignment is null ? null : Evaluate(hole.Alignment, frame);
+                    var format = hole.FormatString is null ? null : Evaluate(hole.FormatString, frame) as string;
+                    if (Unknown.Is(alignment)) return alignment;
+                    var composite = "{0" + (alignment is null ? "" : "," + System.Convert.ToInt32(alignment, CultureInfo.InvariantCulture).ToString(CultureInfo.InvariantCulture))
+                        + (format is null ? "" : ":" + format) + "}";
+                    text.Append(string.Format(CultureInfo.InvariantCulture, composite, value is bool b ? (b ? "True" : "False") : value));
+                    break;
+                default:
+                    return Unsupported(part, "this interpolated string", "interpolated string handlers are outside the subset");
+            }
+        }
+
+        return text.ToString();
+    }
+
+    private object? Binary(IBinaryOperation binary, Frame frame)
+    {
+        var left = Evaluate(binary.LeftOperand, frame);
+        if (Unknown.Is(left)) return left;
+
+        if (binary.OperatorKind is BinaryOperatorKind.ConditionalAnd or BinaryOperatorKind.ConditionalOr && binary.OperatorMethod is null)
+        {
+            if (left is not bool l) return Unsupported(binary, "this logical operator", "its operands are not bool");
+            if (binary.OperatorKind == BinaryOperatorKind.ConditionalAnd ? !l : l) return l;
+            var rightValue = Evaluate(binary.RightOperand, frame);
+            return Unknown.Is(rightValue) || rightValue is bool ? rightValue : Unsupported(binary, "this logical operator", "its operands are not bool");
+        }
+
+        var right = Evaluate(binary.RightOperand, frame);
+        if (Unknown.Is(right)) return right;
+
+        if (binary.OperatorMethod is { } method)
+            return CallOperator(binary, method, new[] { left, right }, frame);
+        if (binary.IsLifted)
+            return Unsupported(binary, "an operator on nullable values", "lifted operators are outside the subset");
+
+        var leftType = binary.LeftOperand.Type;
+        var rightType = binary.RightOperand.Type;
+        if (binary.OperatorKind == BinaryOperatorKind.Add
+            && (leftType?.SpecialType == SpecialType.System_String || rightType?.SpecialType == SpecialType.System_String))
+            return Arithmetic.Concatenate(left, right);
+
+        if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals
+            && (left is null || right is null || (leftType?.IsReferenceType == true && leftType.SpecialType != SpecialType.System_String)))
+        {
+            var same = left is null || right is null ? left is null && right is null : ReferenceEquals(left, right);
+            return binary.OperatorKind == BinaryOperatorKind.Equals ? same : !same;
+        }
+
+        if (leftType is null || left is null || right is null)
+            return Unsupported(binary, "this operator", "its operand types are not known");
+        try
+        {
+            return Arithmetic.Binary(binary.OperatorKind, left, right, leftType, binary.IsChecked)
+                ?? Unsupported(binary, "operator " + binary.OperatorKind + " on " + leftType.ToDisplayString(), "the elaborator handles arithmetic, comparisons and logic on int, long, float, double, bool, string and enums");
+        }
+        catch (ArithmeticException e)
+        {
+            Throws(binary.Syntax, e.GetType().Name + ": " + e.Message);
+            return Unknown.Value;
+        }
+    }
+
+    private object? Unary(IUnaryOperation unary, Frame frame)
+    {
+        var operand = Evaluate(unary.Operand, frame);
+        if (Unknown.Is(operand)) return operand;
+        if (unary.OperatorMethod is { } method)
+            return CallOperator(unary, method, new[] { operand }, frame);
+        if (operand is null || unary.Operand.Type is null || unary.IsLifted)
+            return Unsupported(unary, "this operator", "operators on nullable values are outside the subset");
+        try
+        {
+            return Arithmetic.Unary(unary.OperatorKind, operand, unary.Operand.Type, unary.IsChecked)
+                ?? Unsupported(unary, "operator " + unary.OperatorKind + " on " + unary.Operand.Type.ToDisplayString(), "it is outside the subset");
+        }
+        catch (ArithmeticException e)
+        {
+            Throws(unary.Syntax, e.GetType().Name + ": " + e.Message);
+            return Unknown.Value;
+        }
+    }
+
+    private object? SwitchExpression(ISwitchExpressionOperation switchExpression, Frame frame)
+    {
+        var value = Evaluate(switchExpression.Value, frame);
+        if (Unknown.Is(value)) return value;
+        foreach (var arm in switchExpression.Arms)
+        {
+            var matches = Match(arm.Pattern, value, frame);
+            if (matches is null) return Unknown.Value;
+            if (!matches.Value) continue;
+            if (arm.Guard is not null)
+            {
+                var guard = Condition(arm.Guard, frame);
+                if (guard is null) return Unknown.Value;
+                if (!guard.Value) continue;
+            }
+
+            return Evaluate(arm.Value, frame);
+        }
+
+        Throws(switchExpression.Syntax, "SwitchExpressionException: no arm of the switch expression matches the value " + Arithmetic.Text(value));
+        return Unknown.Value;
+    }
+
+    private string DescribeThrow(IThrowOperation thrown, Frame frame)
+    {
+        if (thrown.Exception is IConversionOperation { Operand: IObjectCreationOperation creation } || thrown.Exception is IObjectCreationOperation)
+        {
+            creation = thrown.Exception as IObjectCreationOperation ?? (IObjectCreationOperation)((IConversionOperation)thrown.Exception!).Operand;
+            var message = creation.Arguments.FirstOrDefault(a => a.Parameter?.Name == "message") is { } argument
+                ? Evaluate(argument.Value, frame) as string
                 : null;
+            return creation.Type?.Name + (message is null ? string.Empty : ": " + message);
         }
 
-        private object? ReadElement(IArrayElementReferenceOperation element, Frame frame)
+        return "the design's code throws an exception";
+    }
+
+    private object? FromConstant(object? value, ITypeSymbol? type)
+    {
+        if (value is null || type is null)
+            return value;
+        return type.TypeKind == TypeKind.Enum ? ToEnum(value, type) : value;
+    }
+
+    /// <summary>DSL enums become real enum values (the DSL's methods need them); the design's own enums stay integers.</summary>
+    private static object ToEnum(object value, ITypeSymbol type)
+    {
+        var clr = ClrTypes.IsDsl(type) ? ClrTypes.Resolve(type) : null;
+        var number = System.Convert.ToInt64(value, CultureInfo.InvariantCulture);
+        return clr is { IsEnum: true } ? Enum.ToObject(clr, number) : System.Convert.ToInt32(number, CultureInfo.InvariantCulture);
+    }
+
+    private object? DefaultOf(ITypeSymbol type)
+    {
+        switch (type.SpecialType)
         {
-            var array = Evaluate(element.ArrayReference, frame);
-            if (Unknown.Is(array)) return array;
-            if (element.Indices.Length != 1)
-                return Unsupported(element, "a multi-dimensional array", "only one-dimensional arrays are elaborated");
-            var index = Evaluate(element.Indices[0], frame);
-            if (Unknown.Is(index)) return index;
-            if (array is not object?[] items)
-                return Unsupported(element, "this array", "it does not come from the design's code");
-            // In code that does not compile yet the index can be a value of another type (a net, a string).
-            if (index is not (int or long or short or byte or sbyte or ushort or uint or ulong or char))
-                return Unsupported(element, "this array index", "it is not a whole number");
-            var i = System.Convert.ToInt32(index, CultureInfo.InvariantCulture);
-            if (i < 0 || i >= items.Length)
-            {
-                Throws(element.Syntax, $"IndexOutOfRangeException: index {i} is outside the bounds of an array of length {items.Length}");
-                return Unknown.Value;
-            }
-
-            return items[i];
+            case SpecialType.System_Int32: return 0;
+            case SpecialType.System_Int64: return 0L;
+            case SpecialType.System_Double: return 0.0;
+            case SpecialType.System_Single: return 0f;
+            case SpecialType.System_Boolean: return false;
+            case SpecialType.System_Char: return '\0';
         }
 
-        private object? Interpolate(IInterpolatedStringOperation interpolated, Frame frame)
+        if (type.TypeKind == TypeKind.Enum)
+            return ToEnum(0, type);
+        if (type.IsTupleType && type is INamedTypeSymbol tuple)
+            return new TupleValue(tuple.TupleElements.Select(e => DefaultOf(e.Type)).ToArray());
+        if (!type.IsValueType || type.OriginalDefinition.SpecialType == SpecialType.System_Nullable_T)
+            return null;
+        if (ClrTypes.IsDsl(type) && ClrTypes.Resolve(type) is { } clr)
+            return Activator.CreateInstance(clr);
+        return Unknown.Value;
+    }
+
+    private static bool IsNumeric(ITypeSymbol type) => type.SpecialType is SpecialType.System_Int32 or SpecialType.System_Int64
+        or SpecialType.System_Double or SpecialType.System_Single or SpecialType.System_Char;
+
+    private static bool IsNumericValue(object value) => value is int or long or double or float or char or short or byte or uint or ulong;
+
+    private static string KindName(IOperation operation)
+    {
+        var kind = operation.Kind.ToString();
+        var text = new StringBuilder();
+        foreach (var c in kind)
         {
-            var text = new StringBuilder();
-            foreach (var part in interpolated.Parts)
-            {
-                switch (part)
-                {
-                    case IInterpolatedStringTextOperation literal:
-                        text.Append(literal.Text.ConstantValue.Value as string);
-                        break;
-                    case IInterpolationOperation hole:
-                        var value = Evaluate(hole.Expression, frame);
-                        if (Unknown.Is(value)) return value;
-                        var alignment = hole.Alignment is null ? null : Evaluate(hole.Alignment, frame);
-                        var format = hole.FormatString is null ? null : Evaluate(hole.FormatString, frame) as string;
-                        if (Unknown.Is(alignment)) return alignment;
-                        var composite = "{0" + (alignment is null ? "" : "," + System.Convert.ToInt32(alignment, CultureInfo.InvariantCulture).ToString(CultureInfo.InvariantCulture))
-                            + (format is null ? "" : ":" + format) + "}";
-                        text.Append(string.Format(CultureInfo.InvariantCulture, composite, value is bool b ? (b ? "True" : "False") : value));
-                        break;
-                    default:
-                        return Unsupported(part, "this interpolated string", "interpolated string handlers are outside the subset");
-                }
-            }
-
-            return text.ToString();
+            if (char.IsUpper(c) && text.Length > 0) text.Append(' ');
+            text.Append(char.ToLowerInvariant(c));
         }
 
-        private object? Binary(IBinaryOperation binary, Frame frame)
-        {
-            var left = Evaluate(binary.LeftOperand, frame);
-            if (Unknown.Is(left)) return left;
-
-            if (binary.OperatorKind is BinaryOperatorKind.ConditionalAnd or BinaryOperatorKind.ConditionalOr && binary.OperatorMethod is null)
-            {
-                if (left is not bool l) return Unsupported(binary, "this logical operator", "its operands are not bool");
-                if (binary.OperatorKind == BinaryOperatorKind.ConditionalAnd ? !l : l) return l;
-                var rightValue = Evaluate(binary.RightOperand, frame);
-                return Unknown.Is(rightValue) || rightValue is bool ? rightValue : Unsupported(binary, "this logical operator", "its operands are not bool");
-            }
-
-            var right = Evaluate(binary.RightOperand, frame);
-            if (Unknown.Is(right)) return right;
-
-            if (binary.OperatorMethod is { } method)
-                return CallOperator(binary, method, new[] { left, right }, frame);
-            if (binary.IsLifted)
-                return Unsupported(binary, "an operator on nullable values", "lifted operators are outside the subset");
-
-            var leftType = binary.LeftOperand.Type;
-            var rightType = binary.RightOperand.Type;
-            if (binary.OperatorKind == BinaryOperatorKind.Add
-                && (leftType?.SpecialType == SpecialType.System_String || rightType?.SpecialType == SpecialType.System_String))
-                return Arithmetic.Concatenate(left, right);
-
-            if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals
-                && (left is null || right is null || (leftType?.IsReferenceType == true && leftType.SpecialType != SpecialType.System_String)))
-            {
-                var same = left is null || right is null ? left is null && right is null : ReferenceEquals(left, right);
-                return binary.OperatorKind == BinaryOperatorKind.Equals ? same : !same;
-            }
-
-            if (leftType is null || left is null || right is null)
-                return Unsupported(binary, "this operator", "its operand types are not known");
-            try
-            {
-                return Arithmetic.Binary(binary.OperatorKind, left, right, leftType, binary.IsChecked)
-                    ?? Unsupported(binary, "operator " + binary.OperatorKind + " on " + leftType.ToDisplayString(), "the elaborator handles arithmetic, comparisons and logic on int, long, float, double, bool, string and enums");
-            }
-            catch (ArithmeticException e)
-            {
-                Throws(binary.Syntax, e.GetType().Name + ": " + e.Message);
-                return Unknown.Value;
-            }
-        }
-
-        private object? Unary(IUnaryOperation unary, Frame frame)
-        {
-            var operand = Evaluate(unary.Operand, frame);
-            if (Unknown.Is(operand)) return operand;
-            if (unary.OperatorMethod is { } method)
-                return CallOperator(unary, method, new[] { operand }, frame);
-            if (operand is null || unary.Operand.Type is null || unary.IsLifted)
-                return Unsupported(unary, "this operator", "operators on nullable values are outside the subset");
-            try
-            {
-                return Arithmetic.Unary(unary.OperatorKind, operand, unary.Operand.Type, unary.IsChecked)
-                    ?? Unsupported(unary, "operator " + unary.OperatorKind + " on " + unary.Operand.Type.ToDisplayString(), "it is outside the subset");
-            }
-            catch (ArithmeticException e)
-            {
-                Throws(unary.Syntax, e.GetType().Name + ": " + e.Message);
-                return Unknown.Value;
-            }
-        }
-
-        private object? SwitchExpression(ISwitchExpressionOperation switchExpression, Frame frame)
-        {
-            var value = Evaluate(switchExpression.Value, frame);
-            if (Unknown.Is(value)) return value;
-            foreach (var arm in switchExpression.Arms)
-            {
-                var matches = Match(arm.Pattern, value, frame);
-                if (matches is null) return Unknown.Value;
-                if (!matches.Value) continue;
-                if (arm.Guard is not null)
-                {
-                    var guard = Condition(arm.Guard, frame);
-                    if (guard is null) return Unknown.Value;
-                    if (!guard.Value) continue;
-                }
-
-                return Evaluate(arm.Value, frame);
-            }
-
-            Throws(switchExpression.Syntax, "SwitchExpressionException: no arm of the switch expression matches the value " + Arithmetic.Text(value));
-            return Unknown.Value;
-        }
-
-        private string DescribeThrow(IThrowOperation thrown, Frame frame)
-        {
-            if (thrown.Exception is IConversionOperation { Operand: IObjectCreationOperation creation } || thrown.Exception is IObjectCreationOperation)
-            {
-                creation = thrown.Exception as IObjectCreationOperation ?? (IObjectCreationOperation)((IConversionOperation)thrown.Exception!).Operand;
-                var message = creation.Arguments.FirstOrDefault(a => a.Parameter?.Name == "message") is { } argument
-                    ? Evaluate(argument.Value, frame) as string
-                    : null;
-                return creation.Type?.Name + (message is null ? string.Empty : ": " + message);
-            }
-
-            return "the design's code throws an exception";
-        }
-
-        private object? FromConstant(object? value, ITypeSymbol? type)
-        {
-            if (value is null || type is null)
-                return value;
-            return type.TypeKind == TypeKind.Enum ? ToEnum(value, type) : value;
-        }
-
-        /// <summary>DSL enums become real enum values (the DSL's methods need them); the design's own enums stay integers.</summary>
-        private static object ToEnum(object value, ITypeSymbol type)
-        {
-            var clr = ClrTypes.IsDsl(type) ? ClrTypes.Resolve(type) : null;
-            var number = System.Convert.ToInt64(value, CultureInfo.InvariantCulture);
-            return clr is { IsEnum: true } ? Enum.ToObject(clr, number) : System.Convert.ToInt32(number, CultureInfo.InvariantCulture);
-        }
-
-        private object? DefaultOf(ITypeSymbol type)
-        {
-            switch (type.SpecialType)
-            {
-                case SpecialType.System_Int32: return 0;
-                case SpecialType.System_Int64: return 0L;
-                case SpecialType.System_Double: return 0.0;
-                case SpecialType.System_Single: return 0f;
-                case SpecialType.System_Boolean: return false;
-                case SpecialType.System_Char: return '\0';
-            }
-
-            if (type.TypeKind == TypeKind.Enum)
-                return ToEnum(0, type);
-            if (type.IsTupleType && type is INamedTypeSymbol tuple)
-                return new TupleValue(tuple.TupleElements.Select(e => DefaultOf(e.Type)).ToArray());
-            if (!type.IsValueType || type.OriginalDefinition.SpecialType == SpecialType.System_Nullable_T)
-                return null;
-            if (ClrTypes.IsDsl(type) && ClrTypes.Resolve(type) is { } clr)
-                return Activator.CreateInstance(clr);
-            return Unknown.Value;
-        }
-
-        private static bool IsNumeric(ITypeSymbol type) => type.SpecialType is SpecialType.System_Int32 or SpecialType.System_Int64
-            or SpecialType.System_Double or SpecialType.System_Single or SpecialType.System_Char;
-
-        private static bool IsNumericValue(object value) => value is int or long or double or float or char or short or byte or uint or ulong;
-
-        private static string KindName(IOperation operation)
-        {
-            var kind = operation.Kind.ToString();
-            var text = new StringBuilder();
-            foreach (var c in kind)
-            {
-                if (char.IsUpper(c) && text.Length > 0) text.Append(' ');
-                text.Append(char.ToLowerInvariant(c));
-            }
-
-            return text.ToString();
-        }
+        return text.ToString();
     }
 }

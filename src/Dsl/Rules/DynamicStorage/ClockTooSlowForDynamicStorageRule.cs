@@ -1,50 +1,49 @@
 using System.Collections.Generic;
 
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>
+/// PW3002: with its clocks running, a storage node floats for longer per period than its retention time (see
+/// <see cref="StorageIsolation.WhileRunning"/>); reports the lowest safe clock frequency.
+/// </summary>
+public sealed class ClockTooSlowForDynamicStorageRule : Rule
 {
-    /// <summary>
-    /// PW3002: with its clocks running, a storage node floats for longer per period than its retention time (see
-    /// <see cref="StorageIsolation.WhileRunning"/>); reports the lowest safe clock frequency.
-    /// </summary>
-    public sealed class ClockTooSlowForDynamicStorageRule : Rule
+    public override IReadOnlyList<RuleDescriptor> Descriptors { get; } = new[] { RuleCatalog.ClockTooSlowForDynamicStorage };
+
+    public override IEnumerable<Finding> Check(RuleContext context)
     {
-        public override IReadOnlyList<RuleDescriptor> Descriptors { get; } = new[] { RuleCatalog.ClockTooSlowForDynamicStorage };
-
-        public override IEnumerable<Finding> Check(RuleContext context)
+        var buffers = new ArcBuffers();
+        foreach (var node in StorageNodes.Of(context.Netlist))
         {
-            var buffers = new ArcBuffers();
-            foreach (var node in StorageNodes.Of(context.Netlist))
+            context.CancellationToken.ThrowIfCancellationRequested();
+            if (StorageIsolation.WhileRunning(node, buffers) is not { } running)
+                continue;
+            var retention = node.Retention;
+            if (running.LowestSafeFrequency(retention.Time) is not { } minimum)
+                continue;
+
+            var root = running.Root;
+            var (isolation, retained) = Engineering.FormatApart(running.Longest.Seconds, retention.Time.Seconds, "s");
+            var properties = new Dictionary<string, string>
             {
-                context.CancellationToken.ThrowIfCancellationRequested();
-                if (StorageIsolation.WhileRunning(node, buffers) is not { } running)
-                    continue;
-                var retention = node.Retention;
-                if (running.LowestSafeFrequency(retention.Time) is not { } minimum)
-                    continue;
+                [DynamicStorageProperties.Node] = node.Net.Name,
+                [DynamicStorageProperties.RootClock] = root.Name,
+                [DynamicStorageProperties.RetentionSeconds] = DynamicStorageProperties.Number(retention.Time.Seconds),
+                [DynamicStorageProperties.IsolationSeconds] = DynamicStorageProperties.Number(running.Longest.Seconds),
+                [DynamicStorageProperties.MinimumFrequencyHertz] = DynamicStorageProperties.Number(minimum.Hertz),
+            };
+            CellProperties.Add(properties, node);
 
-                var root = running.Root;
-                var (isolation, retained) = Engineering.FormatApart(running.Longest.Seconds, retention.Time.Seconds, "s");
-                var properties = new Dictionary<string, string>
+            yield return new Finding(
+                RuleCatalog.ClockTooSlowForDynamicStorage,
+                node.PrimaryDriver.Span,
+                new object[]
                 {
-                    [DynamicStorageProperties.Node] = node.Net.Name,
-                    [DynamicStorageProperties.RootClock] = root.Name,
-                    [DynamicStorageProperties.RetentionSeconds] = DynamicStorageProperties.Number(retention.Time.Seconds),
-                    [DynamicStorageProperties.IsolationSeconds] = DynamicStorageProperties.Number(running.Longest.Seconds),
-                    [DynamicStorageProperties.MinimumFrequencyHertz] = DynamicStorageProperties.Number(minimum.Hertz),
-                };
-                CellProperties.Add(properties, node);
-
-                yield return new Finding(
-                    RuleCatalog.ClockTooSlowForDynamicStorage,
-                    node.PrimaryDriver.Span,
-                    new object[]
-                    {
-                        node.Net.Name, isolation, root.Period, root.Name,
-                        retained, retention.Capacitance, retention.ToleratedDroop, retention.Leakage, minimum,
-                    },
-                    new[] { root.Span },
-                    properties);
-            }
+                    node.Net.Name, isolation, root.Period, root.Name,
+                    retained, retention.Capacitance, retention.ToleratedDroop, retention.Leakage, minimum,
+                },
+                new[] { root.Span },
+                properties);
         }
     }
 }

@@ -1,87 +1,86 @@
 using System.Collections.Generic;
 
-namespace Phaseward
+namespace Phaseward;
+
+/// <summary>
+/// PW3001: a storage node that floats while a gated clock is stopped (see <see cref="StorageIsolation.WhileStopped"/>)
+/// when the gates declare no maximum idle time, or one longer than the node's retention time.
+/// </summary>
+public sealed class DynamicNodeOnGatedClockRule : Rule
 {
-    /// <summary>
-    /// PW3001: a storage node that floats while a gated clock is stopped (see <see cref="StorageIsolation.WhileStopped"/>)
-    /// when the gates declare no maximum idle time, or one longer than the node's retention time.
-    /// </summary>
-    public sealed class DynamicNodeOnGatedClockRule : Rule
+    public override IReadOnlyList<RuleDescriptor> Descriptors { get; } = new[] { RuleCatalog.DynamicNodeOnGatedClock };
+
+    public override IEnumerable<Finding> Check(RuleContext context)
     {
-        public override IReadOnlyList<RuleDescriptor> Descriptors { get; } = new[] { RuleCatalog.DynamicNodeOnGatedClock };
-
-        public override IEnumerable<Finding> Check(RuleContext context)
+        foreach (var node in StorageNodes.Of(context.Netlist))
         {
-            foreach (var node in StorageNodes.Of(context.Netlist))
+            context.CancellationToken.ThrowIfCancellationRequested();
+            if (StorageIsolation.WhileStopped(node) is not { } stopped)
+                continue;
+            var retention = node.Retention;
+            if (stopped.IdleBound is { } idle && idle <= retention.Time)
+                continue;
+
+            var gate = stopped.Gate;
+            var (idleText, retainedText) = stopped.IdleBound is { } idleShown
+                ? Engineering.FormatApart(idleShown.Seconds, retention.Time.Seconds, "s")
+                : (DynamicStorageProperties.Unbounded, retention.Time.ToString());
+            var related = new List<SourceSpan>(stopped.Gates.Count);
+            foreach (var g in stopped.Gates)
+                related.Add(g.Span);
+
+            var properties = new Dictionary<string, string>
             {
-                context.CancellationToken.ThrowIfCancellationRequested();
-                if (StorageIsolation.WhileStopped(node) is not { } stopped)
-                    continue;
-                var retention = node.Retention;
-                if (stopped.IdleBound is { } idle && idle <= retention.Time)
-                    continue;
+                [DynamicStorageProperties.Node] = node.Net.Name,
+                [DynamicStorageProperties.GatedClock] = gate.Name,
+                [DynamicStorageProperties.RootClock] = gate.Root.Name,
+                [DynamicStorageProperties.RetentionSeconds] = DynamicStorageProperties.Number(retention.Time.Seconds),
+                [DynamicStorageProperties.IdleSeconds] = stopped.IdleBound is { } bound
+                    ? DynamicStorageProperties.Number(bound.Seconds)
+                    : DynamicStorageProperties.Unbounded,
+            };
+            if (UngatedSource(gate) is { } ungated)
+                properties[DynamicStorageProperties.UngatedClock] = ungated.Name;
+            CellProperties.Add(properties, node);
 
-                var gate = stopped.Gate;
-                var (idleText, retainedText) = stopped.IdleBound is { } idleShown
-                    ? Engineering.FormatApart(idleShown.Seconds, retention.Time.Seconds, "s")
-                    : (DynamicStorageProperties.Unbounded, retention.Time.ToString());
-                var related = new List<SourceSpan>(stopped.Gates.Count);
-                foreach (var g in stopped.Gates)
-                    related.Add(g.Span);
-
-                var properties = new Dictionary<string, string>
+            yield return new Finding(
+                RuleCatalog.DynamicNodeOnGatedClock,
+                node.PrimaryDriver.Span,
+                new object[]
                 {
-                    [DynamicStorageProperties.Node] = node.Net.Name,
-                    [DynamicStorageProperties.GatedClock] = gate.Name,
-                    [DynamicStorageProperties.RootClock] = gate.Root.Name,
-                    [DynamicStorageProperties.RetentionSeconds] = DynamicStorageProperties.Number(retention.Time.Seconds),
-                    [DynamicStorageProperties.IdleSeconds] = stopped.IdleBound is { } bound
-                        ? DynamicStorageProperties.Number(bound.Seconds)
-                        : DynamicStorageProperties.Unbounded,
-                };
-                if (UngatedSource(gate) is { } ungated)
-                    properties[DynamicStorageProperties.UngatedClock] = ungated.Name;
-                CellProperties.Add(properties, node);
-
-                yield return new Finding(
-                    RuleCatalog.DynamicNodeOnGatedClock,
-                    node.PrimaryDriver.Span,
-                    new object[]
-                    {
-                        node.Net.Name, gate.Name, gate.StopLevel == ClockStopLevel.High ? "high" : "low", idleText,
-                        retainedText, retention.Capacitance, retention.ToleratedDroop, retention.Leakage,
-                    },
-                    related,
-                    properties);
-            }
-        }
-
-        // The nearest clock upstream of the gate that cannot stop: clocking the node from it removes the hazard.
-        private static Clock? UngatedSource(Clock gate)
-        {
-            for (var clock = gate.Source; clock is not null; clock = clock.Source)
-                if (!clock.CanStop)
-                    return clock;
-            return null;
+                    node.Net.Name, gate.Name, gate.StopLevel == ClockStopLevel.High ? "high" : "low", idleText,
+                    retainedText, retention.Capacitance, retention.ToleratedDroop, retention.Leakage,
+                },
+                related,
+                properties);
         }
     }
 
-    internal static class CellProperties
+    // The nearest clock upstream of the gate that cannot stop: clocking the node from it removes the hazard.
+    private static Clock? UngatedSource(Clock gate)
     {
-        // Records the library cell that made the node, and its static counterpart where a drop-in one exists.
-        public static void Add(Dictionary<string, string> properties, StorageNode node)
+        for (var clock = gate.Source; clock is not null; clock = clock.Source)
+            if (!clock.CanStop)
+                return clock;
+        return null;
+    }
+}
+
+internal static class CellProperties
+{
+    // Records the library cell that made the node, and its static counterpart where a drop-in one exists.
+    public static void Add(Dictionary<string, string> properties, StorageNode node)
+    {
+        if (node.Cell is not { } cell) return;
+        properties[DynamicStorageProperties.Cell] = cell.Kind.ToString();
+        properties[DynamicStorageProperties.CellName] = cell.Name;
+        var replacement = cell.Kind switch
         {
-            if (node.Cell is not { } cell) return;
-            properties[DynamicStorageProperties.Cell] = cell.Kind.ToString();
-            properties[DynamicStorageProperties.CellName] = cell.Name;
-            var replacement = cell.Kind switch
-            {
-                MacroKind.DynamicLatch => nameof(MacroKind.StaticLatch),
-                MacroKind.DynamicRegister => nameof(MacroKind.StaticRegister),
-                _ => null,
-            };
-            if (replacement is not null)
-                properties[DynamicStorageProperties.StaticReplacement] = replacement;
-        }
+            MacroKind.DynamicLatch => nameof(MacroKind.StaticLatch),
+            MacroKind.DynamicRegister => nameof(MacroKind.StaticRegister),
+            _ => null,
+        };
+        if (replacement is not null)
+            properties[DynamicStorageProperties.StaticReplacement] = replacement;
     }
 }

@@ -154,21 +154,21 @@ public class SameWindowLatchesPropertyTests
                     output = c.Inverter(c.TransmissionGate(d, phase, name));
                     break;
                 case Style.HandKeeper:
-                {
-                    var x = c.TransmissionGate(d, phase, name);
-                    output = c.Inverter(x);
-                    c.Keeper(x);
-                    break;
-                }
+                    {
+                        var x = c.TransmissionGate(d, phase, name);
+                        output = c.Inverter(x);
+                        c.Keeper(x);
+                        break;
+                    }
 
                 case Style.HandStatic:
-                {
-                    var x = c.Node(name);
-                    c.TransmissionGate(d, phase, x);
-                    output = c.Inverter(x);
-                    c.TransmissionGate(c.Inverter(output), phase.Complement, x);
-                    break;
-                }
+                    {
+                        var x = c.Node(name);
+                        c.TransmissionGate(d, phase, x);
+                        output = c.Inverter(x);
+                        c.TransmissionGate(c.Inverter(output), phase.Complement, x);
+                        break;
+                    }
 
                 default:
                     output = style == Style.DynamicRegister ? c.DynamicRegister(d, clock, name) : c.StaticRegister(d, clock, name);
@@ -210,20 +210,20 @@ public class SameWindowLatchesPropertyTests
                         signal = AddGate(GateKind.Buffer, signal);
                         break;
                     case GateKind.Nand:
-                    {
-                        var (other, otherSignal) = PickSource();
-                        net = c.Nand(net, other);
-                        signal = AddGate(GateKind.Nand, signal, otherSignal);
-                        break;
-                    }
+                        {
+                            var (other, otherSignal) = PickSource();
+                            net = c.Nand(net, other);
+                            signal = AddGate(GateKind.Nand, signal, otherSignal);
+                            break;
+                        }
 
                     default:
-                    {
-                        var (control, controlSignal) = PickSource();
-                        net = c.TransmissionGate(net, control);
-                        signal = AddGate(GateKind.DataPass, signal, controlSignal);
-                        break;
-                    }
+                        {
+                            var (control, controlSignal) = PickSource();
+                            net = c.TransmissionGate(net, control);
+                            signal = AddGate(GateKind.DataPass, signal, controlSignal);
+                            break;
+                        }
                 }
             }
 

@@ -7,7 +7,7 @@ using Microsoft.CodeAnalysis.Testing;
 namespace Phaseward.Analyzers.Tests.Verifiers;
 
 /// <summary>Shared set-up for analyzer tests: offline reference assemblies plus the Phaseward DSL.</summary>
-internal static class PhasewareTest
+internal static class PhasewardTest
 {
     /// <summary>net8.0 reference assemblies from a package, never downloaded.</summary>
     public static ReferenceAssemblies ReferenceAssemblies { get; } = new("net8.0");
@@ -27,20 +27,20 @@ internal static class PhasewareTest
 }
 
 /// <summary>Analyzer test for one analyzer type, with the Phaseward set-up applied.</summary>
-public sealed class PhasewareAnalyzerTest<TAnalyzer> : CSharpAnalyzerTest<TAnalyzer, DefaultVerifier>
+public sealed class PhasewardAnalyzerTest<TAnalyzer> : CSharpAnalyzerTest<TAnalyzer, DefaultVerifier>
     where TAnalyzer : DiagnosticAnalyzer, new()
 {
-    public PhasewareAnalyzerTest(string source, params DiagnosticResult[] expected)
+    public PhasewardAnalyzerTest(string source, params DiagnosticResult[] expected)
     {
-        ReferenceAssemblies = PhasewareTest.ReferenceAssemblies;
-        PhasewareTest.Configure(TestState);
+        ReferenceAssemblies = PhasewardTest.ReferenceAssemblies;
+        PhasewardTest.Configure(TestState);
         TestState.Sources.Add(source);
         ExpectedDiagnostics.AddRange(expected);
     }
 
-    public PhasewareAnalyzerTest<TAnalyzer> WithEditorConfig(string lines)
+    public PhasewardAnalyzerTest<TAnalyzer> WithEditorConfig(string lines)
     {
-        TestState.AnalyzerConfigFiles.Add(PhasewareTest.EditorConfig(lines));
+        TestState.AnalyzerConfigFiles.Add(PhasewardTest.EditorConfig(lines));
         return this;
     }
 }

@@ -18,38 +18,38 @@ namespace Phaseward.Analyzers.Tests.Verifiers;
 /// expected fixed source, which the framework requires the fix's output to equal, so together they hold for the output
 /// (CodeFixVerifierTests provokes each failure).
 /// </summary>
-public sealed class PhasewareCodeFixTest<TAnalyzer, TCodeFix> : CSharpCodeFixTest<TAnalyzer, TCodeFix, DefaultVerifier>
+public sealed class PhasewardCodeFixTest<TAnalyzer, TCodeFix> : CSharpCodeFixTest<TAnalyzer, TCodeFix, DefaultVerifier>
     where TAnalyzer : DiagnosticAnalyzer, new()
     where TCodeFix : CodeFixProvider, new()
 {
     private readonly string source;
     private readonly string fixedSource;
 
-    public PhasewareCodeFixTest(string source, string fixedSource, params DiagnosticResult[] expected)
+    public PhasewardCodeFixTest(string source, string fixedSource, params DiagnosticResult[] expected)
     {
         this.source = source;
         this.fixedSource = fixedSource;
-        ReferenceAssemblies = PhasewareTest.ReferenceAssemblies;
+        ReferenceAssemblies = PhasewardTest.ReferenceAssemblies;
         // The framework's default, stated here because it is a promise of every code-fix test: a compiler error in the
         // original or the fixed source is an unexpected diagnostic and fails the test. CodeFixVerifierTests shows that it
         // does and that no code-fix test switches it off.
         CompilerDiagnostics = CompilerDiagnostics.Errors;
-        PhasewareTest.Configure(TestState);
-        PhasewareTest.Configure(FixedState);
-        PhasewareTest.Configure(BatchFixedState);
+        PhasewardTest.Configure(TestState);
+        PhasewardTest.Configure(FixedState);
+        PhasewardTest.Configure(BatchFixedState);
         TestCode = source;
         FixedCode = fixedSource;
         ExpectedDiagnostics.AddRange(expected);
     }
 
-    public PhasewareCodeFixTest<TAnalyzer, TCodeFix> WithEditorConfig(string lines)
+    public PhasewardCodeFixTest<TAnalyzer, TCodeFix> WithEditorConfig(string lines)
     {
-        TestState.AnalyzerConfigFiles.Add(PhasewareTest.EditorConfig(lines));
+        TestState.AnalyzerConfigFiles.Add(PhasewardTest.EditorConfig(lines));
         return this;
     }
 
     /// <summary>Chooses which of the offered code actions to apply (by equivalence key).</summary>
-    public PhasewareCodeFixTest<TAnalyzer, TCodeFix> Choosing(string equivalenceKey)
+    public PhasewardCodeFixTest<TAnalyzer, TCodeFix> Choosing(string equivalenceKey)
     {
         CodeActionEquivalenceKey = equivalenceKey;
         return this;
