@@ -3,6 +3,10 @@ using System.IO;
 using System.Linq;
 using Phaseward.Cli.Model;
 using Phaseward.Cli.Policy;
+using Phaseward.Clocking;
+using Phaseward.Netlists;
+using Phaseward.Sequencing;
+using Phaseward.Storage;
 
 namespace Phaseward.Cli.Output;
 

@@ -1,7 +1,8 @@
 using System;
 using System.Collections.Generic;
+using Phaseward.Storage;
 
-namespace Phaseward;
+namespace Phaseward.Clocking;
 
 /// <summary>
 /// When a pass gate on a phase conducts, within one period of its root clock (time 0 = the root clock's rising edge).

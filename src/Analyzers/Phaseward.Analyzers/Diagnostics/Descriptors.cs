@@ -1,6 +1,9 @@
 using System.Collections.Generic;
 using System.Collections.Immutable;
 using Microsoft.CodeAnalysis;
+using Phaseward.Checking;
+using Phaseward.Rules.Timing;
+using Phaseward.Storage;
 
 namespace Phaseward.Analyzers.Diagnostics;
 

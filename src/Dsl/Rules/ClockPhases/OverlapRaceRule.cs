@@ -2,8 +2,11 @@ using System;
 using System.Collections.Generic;
 using System.Globalization;
 using System.Threading;
+using Phaseward.Checking;
+using Phaseward.Clocking;
+using Phaseward.Sequencing;
 
-namespace Phaseward;
+namespace Phaseward.Rules.ClockPhases;
 
 /// <summary>
 /// PW1002: for latch A feeding latch B on the complementary phase of the same root clock, the fastest data entering

@@ -1,7 +1,11 @@
 using System.Collections.Generic;
 using System.Globalization;
+using Phaseward.Checking;
+using Phaseward.Clocking;
+using Phaseward.Rules.ClockPhases;
+using Phaseward.Sequencing;
 
-namespace Phaseward;
+namespace Phaseward.Rules.Timing;
 
 /// <summary>
 /// PW4003: two-phase latch paths with time borrowing. Each latch L has a window of length W_L (its phase's window,
