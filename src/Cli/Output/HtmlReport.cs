@@ -8,8 +8,6 @@ using Phaseward.Cli.Loading;
 using Phaseward.Cli.Model;
 using Phaseward.Cli.Policy;
 using Phaseward.Clocking;
-using Phaseward.Netlists;
-using Phaseward.Sequencing;
 using Phaseward.Storage;
 
 namespace Phaseward.Cli.Output;

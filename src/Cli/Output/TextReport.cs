@@ -4,8 +4,6 @@ using System.Linq;
 using Phaseward.Cli.Model;
 using Phaseward.Cli.Policy;
 using Phaseward.Clocking;
-using Phaseward.Netlists;
-using Phaseward.Sequencing;
 using Phaseward.Storage;
 
 namespace Phaseward.Cli.Output;

@@ -1,7 +1,6 @@
 using System.Collections.Generic;
 using System.Linq;
-using Phaseward.Rules.Timing;
-using Phaseward.Storage;
+using Phaseward.Rules.ClockPhases;
 
 namespace Phaseward.Checking;
 

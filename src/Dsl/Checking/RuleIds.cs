@@ -1,5 +1,4 @@
-using Phaseward.Rules.Timing;
-using Phaseward.Storage;
+using Phaseward.Rules.ClockPhases;
 
 namespace Phaseward.Checking;
 

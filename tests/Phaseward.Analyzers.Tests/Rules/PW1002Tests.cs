@@ -3,7 +3,6 @@ using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Testing;
 using Phaseward.Analyzers.Tests.Verifiers;
 using Phaseward.Checking;
-using Phaseward.Sequencing;
 using static Phaseward.Analyzers.Tests.Rules.RuleSources;
 
 namespace Phaseward.Analyzers.Tests.Rules;

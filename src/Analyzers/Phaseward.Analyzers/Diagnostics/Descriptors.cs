@@ -2,8 +2,7 @@ using System.Collections.Generic;
 using System.Collections.Immutable;
 using Microsoft.CodeAnalysis;
 using Phaseward.Checking;
-using Phaseward.Rules.Timing;
-using Phaseward.Storage;
+using Phaseward.Rules.ClockPhases;
 
 namespace Phaseward.Analyzers.Diagnostics;
 
