@@ -1,7 +1,7 @@
 using System;
+using Phaseward.Netlists;
 using Phaseward.Tests.BadInput;
 using Phaseward.Tests.Support;
-using Phaseward.Netlists;
 
 namespace Phaseward.Tests.Dsl;
 
