@@ -1,7 +1,7 @@
-using Phaseward.Tests.Support;
 using System;
 using System.Globalization;
 using System.Linq;
+using Phaseward.Tests.Support;
 
 namespace Phaseward.Tests.Rules.ClockPhases;
 
