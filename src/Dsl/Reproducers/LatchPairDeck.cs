@@ -43,7 +43,7 @@ internal static class LatchPairDeck
         var period = windowA.Period;
         var edge = ClockWaveforms.EdgeTime(phaseA.Clock);
         var dataAt = ClockWaveforms.NextOpening(phaseA, period) + edge * 2;
-        var fastest = OverlapRaceRule.FastestEntry(model, a) + path.MinDelay + model.StageDelay(entryB);
+        var fastest = model.FastestEntryDelay(a) + path.MinDelay + model.StageDelay(entryB);
         // The window the race must beat: for PW1001 the shared window (until the second latch closes); for PW1002 the
         // overlap, until the second latch (open before the first) closes.
         // PW1001: the phase ends where its complement opens (the window's tail is the complement skew, which a fixed
