@@ -24,6 +24,8 @@ public static class Program
             new WakeLogicRegistered(),
             new MooringHold(),
             new MooringHoldWeakKeeper(),
+            new TelemetryBus(),
+            new TelemetryBusSelected(),
         };
 
         var findings = 0;

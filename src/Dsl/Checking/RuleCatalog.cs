@@ -55,6 +55,10 @@ public static class RuleCatalog
         RuleIds.ChargeSharing, RuleTexts.ChargeSharingTitle, RuleTexts.ChargeSharingMessage,
         RuleCategories.DynamicStorage, Severity.Warning, RuleTexts.ChargeSharingDescription);
 
+    public static RuleDescriptor FightingDrivers { get; } = new(
+        RuleIds.FightingDrivers, RuleTexts.FightingDriversTitle, RuleTexts.FightingDriversMessage,
+        RuleCategories.DynamicStorage, Severity.Warning, RuleTexts.FightingDriversDescription);
+
     public static RuleDescriptor KeeperTooStrong { get; } = new(
         RuleIds.KeeperTooStrong, RuleTexts.KeeperTooStrongTitle, RuleTexts.KeeperTooStrongMessage,
         RuleCategories.DynamicStorage, Severity.Warning, RuleTexts.KeeperTooStrongDescription);
@@ -71,6 +75,7 @@ public static class RuleCatalog
         DynamicNodeOnGatedClock,
         ClockTooSlowForDynamicStorage,
         ChargeSharing,
+        FightingDrivers,
         KeeperTooStrong,
         NotElaborated,
         ElaborationBudgetExceeded,

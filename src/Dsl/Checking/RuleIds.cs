@@ -35,6 +35,9 @@ public static class RuleIds
     /// <summary>A pass device joins a charged floating node to another floating node and the shared level droops too far.</summary>
     public const string ChargeSharing = "PW3003";
 
+    /// <summary>Two or more conducting paths drive one net at the same time.</summary>
+    public const string FightingDrivers = "PW3004";
+
     /// <summary>A keeper stronger than the write path of its node: a write cannot flip it.</summary>
     public const string KeeperTooStrong = "PW3005";
     /// <summary>Part of a design could not be elaborated at compile time (outside the supported subset).</summary>

@@ -16,6 +16,7 @@ public static class RuleSet
         new DynamicNodeOnGatedClockRule(),
         new ClockTooSlowForDynamicStorageRule(),
         new ChargeSharingRule(),
+        new FightingDriversRule(),
         new KeeperTooStrongRule(),
     };
 }

@@ -57,6 +57,19 @@ public static class RuleTexts
         "When '{0}' conducts, floating node '{1}' (C1 = {2}) shares its charge with floating node '{3}' (C2 = {4}): a {5} level settles at {6}, a droop of {7}, more than the tolerated {8}";
     public const string ChargeSharingDescription =
         "A pass device that opens between a charged floating node and another floating node shares the charge between them: the level settles at V·C1/(C1+C2), a droop of V·C2/(C1+C2) in the worst case (the other node at the opposite level). First-order estimate by conservation of charge.";
+    public const string FightingDriversTitle = "Drivers fight on one node";
+    public const string FightingDriversMessage =
+        "'{0}' ({1}) and '{2}' ({3}) drive node '{4}' together {5}: when they disagree the node sits at {6} (divider, '{0}' pulling up) and {7} flows from rail to rail";
+    public const string FightingDriversAlways = "all the time (two restoring stages)";
+    public const string FightingDriversWhilePhase = "while {0} conducts ({1} per period)";
+    public const string FightingDriversWhileControl = "whenever '{0}' is high";
+    public const string FightingDriversWhileBothControls = "whenever '{0}' and '{1}' are both high (not stated exclusive)";
+    public const string FightingDriversOverlap = "for {0} per period ({1} and {2} overlap)";
+    public const string FightingDriversUnrelatedClocks = "whenever {0} and {1} conduct together (unrelated clocks)";
+    public const string FightingDriversPhaseAndControl = "whenever '{1}' is high while {0} conducts";
+    public const string FightingDriversDescription =
+        "Two drivers that can conduct at the same time onto one net fight when they disagree: static current flows from rail to rail and the node settles at a divider of the two paths' resistances, an undefined level that may read either way. Counted: two restoring stages; a stage and a pass gate; clocked gates whose windows overlap; data-controlled gates whose controls are not provably exclusive (Circuit.Exclusive, or a control and its inverse). First-order estimate.";
+
     public const string KeeperTooStrongTitle = "Keeper too strong for its write path";
     public const string KeeperTooStrongMessage =
         "Keeper '{0}' ({1}) is too strong for the write path through '{2}' ({3}): writing a 0 against it pulls node '{4}' only down to {5}, above the {6} it must reach (switching point {7} less a {8} margin; a 1 mirrors this)";

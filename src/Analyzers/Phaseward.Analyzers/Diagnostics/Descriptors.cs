@@ -45,6 +45,10 @@ internal static class Descriptors
         RuleIds.ChargeSharing, RuleTexts.ChargeSharingTitle, RuleTexts.ChargeSharingMessage,
         RuleCategories.DynamicStorage, DiagnosticSeverity.Warning, RuleTexts.ChargeSharingDescription);
 
+    public static readonly DiagnosticDescriptor FightingDrivers = DescriptorFactory.Create(
+        RuleIds.FightingDrivers, RuleTexts.FightingDriversTitle, RuleTexts.FightingDriversMessage,
+        RuleCategories.DynamicStorage, DiagnosticSeverity.Warning, RuleTexts.FightingDriversDescription);
+
     public static readonly DiagnosticDescriptor KeeperTooStrong = DescriptorFactory.Create(
         RuleIds.KeeperTooStrong, RuleTexts.KeeperTooStrongTitle, RuleTexts.KeeperTooStrongMessage,
         RuleCategories.DynamicStorage, DiagnosticSeverity.Warning, RuleTexts.KeeperTooStrongDescription);
@@ -75,6 +79,7 @@ internal static class Descriptors
         DynamicNodeOnGatedClock,
         ClockTooSlowForDynamicStorage,
         ChargeSharing,
+        FightingDrivers,
         KeeperTooStrong,
         RegisterSetup,
         RegisterHold,
