@@ -28,6 +28,9 @@ public static class RuleCatalog
     public static RuleDescriptor OverlapRace { get; } = new(
         RuleIds.OverlapRace, RuleTexts.OverlapRaceTitle, RuleTexts.OverlapRaceMessage, RuleCategories.ClockPhases, Severity.Warning, RuleTexts.OverlapRaceDescription);
 
+    public static RuleDescriptor ClockCrossing { get; } = new(
+        RuleIds.ClockCrossing, RuleTexts.ClockCrossingTitle, RuleTexts.ClockCrossingMessage, RuleCategories.ClockPhases, Severity.Warning, RuleTexts.ClockCrossingDescription);
+
     public static RuleDescriptor RegisterSetup { get; } = new(
         RuleIds.RegisterSetup, RuleTexts.RegisterSetupTitle, RuleTexts.RegisterSetupMessage, RuleCategories.Timing, Severity.Warning, RuleTexts.RegisterSetupDescription);
 
@@ -36,6 +39,9 @@ public static class RuleCatalog
 
     public static RuleDescriptor LatchBorrowing { get; } = new(
         RuleIds.LatchBorrowing, RuleTexts.LatchBorrowingTitle, RuleTexts.LatchBorrowingMessage, RuleCategories.Timing, Severity.Warning, RuleTexts.LatchBorrowingDescription);
+
+    public static RuleDescriptor LatchLoop { get; } = new(
+        RuleIds.LatchLoop, RuleTexts.LatchLoopTitle, RuleTexts.LatchLoopMessage, RuleCategories.Timing, Severity.Warning, RuleTexts.LatchLoopDescription);
     public static RuleDescriptor SeriesPassGates { get; } = new(
         RuleIds.SeriesPassGates, RuleTexts.SeriesPassGatesTitle, RuleTexts.SeriesPassGatesMessage, RuleCategories.PassGatePaths, Severity.Warning,
         RuleTexts.SeriesPassGatesDescription);
@@ -56,9 +62,11 @@ public static class RuleCatalog
         SeriesPassGates,
         SameWindowLatches,
         OverlapRace,
+        ClockCrossing,
         RegisterSetup,
         RegisterHold,
         LatchBorrowing,
+        LatchLoop,
         DynamicNodeOnGatedClock,
         ClockTooSlowForDynamicStorage,
         ChargeSharing,

@@ -13,6 +13,9 @@ public static class RuleIds
     /// <summary>A latch pair on complementary phases races through the clock overlap.</summary>
     public const string OverlapRace = "PW1002";
 
+    /// <summary>Data crosses between clocks with no fixed time relation without a synchronizer.</summary>
+    public const string ClockCrossing = "PW1003";
+
     /// <summary>A register-to-register path misses the capturing register's setup time.</summary>
     public const string RegisterSetup = "PW4001";
 
@@ -21,6 +24,9 @@ public static class RuleIds
 
     /// <summary>A two-phase latch path arrives after the capturing latch closes, even with time borrowing.</summary>
     public const string LatchBorrowing = "PW4003";
+
+    /// <summary>A loop of latches whose delays exceed the time its phases give it: borrowing grows every cycle.</summary>
+    public const string LatchLoop = "PW4005";
     /// <summary>Pass gates in series without a restoring stage.</summary>
     public const string SeriesPassGates = "PW2001";
     /// <summary>A dynamic storage node floats while its gated clock is stopped, for longer than it retains its level.</summary>

@@ -9,6 +9,7 @@ public static class RuleSet
     {
         new SameWindowLatchesRule(),
         new OverlapRaceRule(),
+        new ClockCrossingRule(),
         new RegisterTimingRule(),
         new LatchBorrowingRule(),
         new PassGateChainRule(),

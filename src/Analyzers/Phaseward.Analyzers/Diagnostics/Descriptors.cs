@@ -15,6 +15,10 @@ internal static class Descriptors
         RuleIds.OverlapRace, RuleTexts.OverlapRaceTitle, RuleTexts.OverlapRaceMessage, RuleCategories.ClockPhases,
         DiagnosticSeverity.Warning, RuleTexts.OverlapRaceDescription);
 
+    public static readonly DiagnosticDescriptor ClockCrossing = DescriptorFactory.Create(
+        RuleIds.ClockCrossing, RuleTexts.ClockCrossingTitle, RuleTexts.ClockCrossingMessage, RuleCategories.ClockPhases,
+        DiagnosticSeverity.Warning, RuleTexts.ClockCrossingDescription);
+
     public static readonly DiagnosticDescriptor RegisterSetup = DescriptorFactory.Create(
         RuleIds.RegisterSetup, RuleTexts.RegisterSetupTitle, RuleTexts.RegisterSetupMessage, RuleCategories.Timing,
         DiagnosticSeverity.Warning, RuleTexts.RegisterSetupDescription);
@@ -26,6 +30,10 @@ internal static class Descriptors
     public static readonly DiagnosticDescriptor LatchBorrowing = DescriptorFactory.Create(
         RuleIds.LatchBorrowing, RuleTexts.LatchBorrowingTitle, RuleTexts.LatchBorrowingMessage, RuleCategories.Timing,
         DiagnosticSeverity.Warning, RuleTexts.LatchBorrowingDescription);
+
+    public static readonly DiagnosticDescriptor LatchLoop = DescriptorFactory.Create(
+        RuleIds.LatchLoop, RuleTexts.LatchLoopTitle, RuleTexts.LatchLoopMessage, RuleCategories.Timing,
+        DiagnosticSeverity.Warning, RuleTexts.LatchLoopDescription);
     public static readonly DiagnosticDescriptor SeriesPassGates = DescriptorFactory.Create(
         RuleIds.SeriesPassGates, RuleTexts.SeriesPassGatesTitle, RuleTexts.SeriesPassGatesMessage, RuleCategories.PassGatePaths,
         DiagnosticSeverity.Warning, RuleTexts.SeriesPassGatesDescription);
@@ -61,6 +69,7 @@ internal static class Descriptors
     {
         SameWindowLatches,
         OverlapRace,
+        ClockCrossing,
         SeriesPassGates,
         DynamicNodeOnGatedClock,
         ClockTooSlowForDynamicStorage,
@@ -68,6 +77,7 @@ internal static class Descriptors
         RegisterSetup,
         RegisterHold,
         LatchBorrowing,
+        LatchLoop,
         NotElaborated,
         ElaborationBudgetExceeded,
         DesignThrows,

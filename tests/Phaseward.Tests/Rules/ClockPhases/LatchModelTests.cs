@@ -34,7 +34,7 @@ public class LatchModelTests
         // window's first phase when the node holds more than one; a buffered copy of a phase opens in the same window.
         var c = Figures.NewCircuit("windows");
         var clk = c.Clock("clk", 1.Nanoseconds());
-        var other = c.Clock("other", 3.Nanoseconds());
+        var other = c.Clock("other", 3.Nanoseconds(), independent: true);
         var late = c.BufferedClock(clk, 50.Picoseconds());
         var d = c.Input("d");
         var e = c.Input("e");
