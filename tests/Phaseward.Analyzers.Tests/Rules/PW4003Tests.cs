@@ -26,7 +26,7 @@ public class PW4003Tests
 
     private static DiagnosticResult Pw4003(string arrival, string slack, DiagnosticSeverity severity = DiagnosticSeverity.Warning)
         => new DiagnosticResult(RuleIds.LatchBorrowing, severity)
-            .WithMessage($"Data from latch 'L2' reaches latch 'L3' {arrival} after 'L3' opens, but its window (500 ps) less its setup time (34.5 ps) " +
+            .WithMessage($"Data from latch 'L2' reaches latch 'L3' {arrival} after 'L3' opens, but its phase (500 ps) less its setup time and clock skew (34.5 ps) " +
                          $"allows only 466 ps (slack {slack}; 'L2' had borrowed 114 ps)")
             .WithLocation(0).WithLocation(1);
 
