@@ -31,6 +31,10 @@ public static class RuleCatalog
     public static RuleDescriptor ClockCrossing { get; } = new(
         RuleIds.ClockCrossing, RuleTexts.ClockCrossingTitle, RuleTexts.ClockCrossingMessage, RuleCategories.ClockPhases, Severity.Warning, RuleTexts.ClockCrossingDescription);
 
+    public static RuleDescriptor LoopWithoutStorage { get; } = new(
+        RuleIds.LoopWithoutStorage, RuleTexts.LoopWithoutStorageTitle, RuleTexts.LoopWithoutStorageMessage, RuleCategories.ClockPhases, Severity.Warning,
+        RuleTexts.LoopWithoutStorageDescription);
+
     public static RuleDescriptor RegisterSetup { get; } = new(
         RuleIds.RegisterSetup, RuleTexts.RegisterSetupTitle, RuleTexts.RegisterSetupMessage, RuleCategories.Timing, Severity.Warning, RuleTexts.RegisterSetupDescription);
 
@@ -57,12 +61,17 @@ public static class RuleCatalog
         RuleIds.ChargeSharing, RuleTexts.ChargeSharingTitle, RuleTexts.ChargeSharingMessage,
         RuleCategories.DynamicStorage, Severity.Warning, RuleTexts.ChargeSharingDescription);
 
+    public static RuleDescriptor KeeperTooStrong { get; } = new(
+        RuleIds.KeeperTooStrong, RuleTexts.KeeperTooStrongTitle, RuleTexts.KeeperTooStrongMessage,
+        RuleCategories.DynamicStorage, Severity.Warning, RuleTexts.KeeperTooStrongDescription);
+
     public static IReadOnlyList<RuleDescriptor> All { get; } = new[]
     {
         SeriesPassGates,
         SameWindowLatches,
         OverlapRace,
         ClockCrossing,
+        LoopWithoutStorage,
         RegisterSetup,
         RegisterHold,
         LatchBorrowing,
@@ -70,6 +79,7 @@ public static class RuleCatalog
         DynamicNodeOnGatedClock,
         ClockTooSlowForDynamicStorage,
         ChargeSharing,
+        KeeperTooStrong,
         NotElaborated,
         ElaborationBudgetExceeded,
         DesignThrows,

@@ -10,11 +10,13 @@ public static class RuleSet
         new SameWindowLatchesRule(),
         new OverlapRaceRule(),
         new ClockCrossingRule(),
+        new LoopWithoutStorageRule(),
         new RegisterTimingRule(),
         new LatchBorrowingRule(),
         new PassGateChainRule(),
         new DynamicNodeOnGatedClockRule(),
         new ClockTooSlowForDynamicStorageRule(),
         new ChargeSharingRule(),
+        new KeeperTooStrongRule(),
     };
 }

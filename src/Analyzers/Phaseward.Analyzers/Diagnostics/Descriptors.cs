@@ -19,6 +19,10 @@ internal static class Descriptors
         RuleIds.ClockCrossing, RuleTexts.ClockCrossingTitle, RuleTexts.ClockCrossingMessage, RuleCategories.ClockPhases,
         DiagnosticSeverity.Warning, RuleTexts.ClockCrossingDescription);
 
+    public static readonly DiagnosticDescriptor LoopWithoutStorage = DescriptorFactory.Create(
+        RuleIds.LoopWithoutStorage, RuleTexts.LoopWithoutStorageTitle, RuleTexts.LoopWithoutStorageMessage, RuleCategories.ClockPhases,
+        DiagnosticSeverity.Warning, RuleTexts.LoopWithoutStorageDescription);
+
     public static readonly DiagnosticDescriptor RegisterSetup = DescriptorFactory.Create(
         RuleIds.RegisterSetup, RuleTexts.RegisterSetupTitle, RuleTexts.RegisterSetupMessage, RuleCategories.Timing,
         DiagnosticSeverity.Warning, RuleTexts.RegisterSetupDescription);
@@ -48,6 +52,11 @@ internal static class Descriptors
     public static readonly DiagnosticDescriptor ChargeSharing = DescriptorFactory.Create(
         RuleIds.ChargeSharing, RuleTexts.ChargeSharingTitle, RuleTexts.ChargeSharingMessage,
         RuleCategories.DynamicStorage, DiagnosticSeverity.Warning, RuleTexts.ChargeSharingDescription);
+
+    public static readonly DiagnosticDescriptor KeeperTooStrong = DescriptorFactory.Create(
+        RuleIds.KeeperTooStrong, RuleTexts.KeeperTooStrongTitle, RuleTexts.KeeperTooStrongMessage,
+        RuleCategories.DynamicStorage, DiagnosticSeverity.Warning, RuleTexts.KeeperTooStrongDescription);
+
     public static readonly DiagnosticDescriptor NotElaborated = DescriptorFactory.Create(
         RuleIds.NotElaborated, RuleTexts.NotElaboratedTitle, RuleTexts.NotElaboratedMessage, RuleCategories.Elaboration,
         DiagnosticSeverity.Info, RuleTexts.NotElaboratedDescription);
@@ -70,10 +79,12 @@ internal static class Descriptors
         SameWindowLatches,
         OverlapRace,
         ClockCrossing,
+        LoopWithoutStorage,
         SeriesPassGates,
         DynamicNodeOnGatedClock,
         ClockTooSlowForDynamicStorage,
         ChargeSharing,
+        KeeperTooStrong,
         RegisterSetup,
         RegisterHold,
         LatchBorrowing,
