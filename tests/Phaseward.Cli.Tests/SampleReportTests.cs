@@ -207,5 +207,36 @@ public sealed class SampleReportTests : IDisposable
         new PressureSampler(), new BurstCapture(), new BurstCaptureStatic(), new ChannelSelect(), new ChannelSelectBuffered(),
         new TideAverager(), new TideAveragerTwoPhase(), new Housekeeping(), new HousekeepingStatic(), new StrainLanes(),
         new WakeLogic(), new WakeLogicRegistered(), new MooringHold(), new MooringHoldWeakKeeper(),
+        new TwoPhaseTally(), new RadioHandoff(), new RadioHandoffSynchronized(),
     };
+
+    [Fact]
+    public void TheNonOverlappingTwoPhaseSampleIsCleanAndTheCrossingSampleShowsPw1003AndItsFix()
+    {
+        // Two root clocks of 2 ns, 40 % high, the second offset by 1 ns: phases 200 ps apart (> the 30 ps skew).
+        Assert.Empty(new TwoPhaseTally().Check().Findings);
+        var crossing = Assert.Single(new RadioHandoff().Check().Findings);
+        Assert.Equal(RuleIds.ClockCrossing, crossing.RuleId);
+        Assert.Contains("'tx' on clock 'radio' takes data from latch 'sample.slave' on clock 'sensor'", crossing.Message);
+        Assert.Empty(new RadioHandoffSynchronized().Check().Findings);
+    }
+
+    [Fact]
+    public void RelatedRootClocksShareOneDiagramAndAnIndependentClockIsDrawnApart()
+    {
+        var tally = Assert.Single(Diagrams(nameof(TwoPhaseTally)));
+        Assert.Equal("phi1 phi2", (string?)tally.Attribute("data-root-clock"));
+        var phases = tally.Descendants(Svg + "g").Where(g => HasClass(g, "phase")).Select(g => (string?)g.Attribute("data-phase")).ToList();
+        Assert.Equal(new[] { "phi1.High", "phi1.Low", "phi2.High", "phi2.Low" }, phases);
+
+        var handoff = Diagrams(nameof(RadioHandoff));
+        Assert.Equal(new[] { "sensor", "radio" }, handoff.Select(d => (string?)d.Attribute("data-root-clock")).ToArray());
+    }
+
+    private System.Collections.Generic.List<XElement> Diagrams(string design)
+    {
+        var html = Path.Combine(directory, design + ".html");
+        Assert.Equal(0, Of(QuorvaneDll, "--design", design, "--html", html).ExitCode);
+        return ReadPage(html).Descendants(Svg + "svg").Where(s => HasClass(s, "timing-diagram")).ToList();
+    }
 }
