@@ -28,7 +28,10 @@ public static class RuleTexts
     public const string LatchBorrowingDescription = "In a two-phase latch pipeline data may arrive at a latch after it opens and pass straight through (time borrowing), but it must arrive before the latch closes, less the latch's setup time. Borrowing is carried along the chain of latches.";
     public const string SeriesPassGatesTitle = "Pass gates in series without a restoring stage";
     public const string SeriesPassGatesMessage =
-        "{0} pass gates in series without a restoring stage (limit {1}): Elmore delay {2} (50% estimate {3}); a restoring stage every {4} gates would give about {5}";
+        "{0} pass gates in series without a restoring stage (limit {1}): Elmore delay {2} (50% estimate {3}); a restoring stage every {4} gates would give about {5}{6}";
+    /// <summary>PW2001's {6} when its worst case counts branches not known to be exclusive as conducting together.</summary>
+    public const string SeriesPassGatesAssumption =
+        "; this worst case assumes that mux branches whose controls are not known to be exclusive conduct together (state Circuit.Exclusive to count them off)";
     public const string SeriesPassGatesDescription =
         "A chain of pass gates with no restoring stage is an RC ladder: its delay grows with the square of its length and its edges slow down. "
         + "The rule reports a chain longer than phaseward.max_series_pass_gates (default: the optimum restoring-stage spacing of the design's process, at least 2) "
