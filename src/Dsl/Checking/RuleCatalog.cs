@@ -40,6 +40,10 @@ public static class RuleCatalog
 
     public static RuleDescriptor LatchBorrowing { get; } = new(
         RuleIds.LatchBorrowing, RuleTexts.LatchBorrowingTitle, RuleTexts.LatchBorrowingMessage, RuleCategories.Timing, Severity.Warning, RuleTexts.LatchBorrowingDescription);
+
+    public static RuleDescriptor LatchWriteWindow { get; } = new(
+        RuleIds.LatchWriteWindow, RuleTexts.LatchWriteWindowTitle, RuleTexts.LatchWriteWindowMessage,
+        RuleCategories.Timing, Severity.Warning, RuleTexts.LatchWriteWindowDescription);
     public static RuleDescriptor SeriesPassGates { get; } = new(
         RuleIds.SeriesPassGates, RuleTexts.SeriesPassGatesTitle, RuleTexts.SeriesPassGatesMessage, RuleCategories.PassGatePaths, Severity.Warning,
         RuleTexts.SeriesPassGatesDescription);
@@ -68,6 +72,7 @@ public static class RuleCatalog
         RegisterSetup,
         RegisterHold,
         LatchBorrowing,
+        LatchWriteWindow,
         DynamicNodeOnGatedClock,
         ClockTooSlowForDynamicStorage,
         ChargeSharing,

@@ -24,6 +24,8 @@ public static class RuleIds
 
     /// <summary>A two-phase latch path arrives after the capturing latch closes, even with time borrowing.</summary>
     public const string LatchBorrowing = "PW4003";
+    /// <summary>A latch's window is too short for its entry gate to write the storage node.</summary>
+    public const string LatchWriteWindow = "PW4004";
     /// <summary>Pass gates in series without a restoring stage.</summary>
     public const string SeriesPassGates = "PW2001";
     /// <summary>A dynamic storage node floats while its gated clock is stopped, for longer than it retains its level.</summary>

@@ -33,6 +33,11 @@ public static class RuleTexts
     public const string LatchBorrowingTitle = "Latch path too slow even with time borrowing";
     public const string LatchBorrowingMessage = "Data from latch '{1}' reaches latch '{0}' {2} after '{0}' opens, but its window ({3}) less its setup time ({4}) allows only {5} (slack {6}; '{1}' had borrowed {7})";
     public const string LatchBorrowingDescription = "In a two-phase latch pipeline data may arrive at a latch after it opens and pass straight through (time borrowing), but it must arrive before the latch closes, less the latch's setup time. Borrowing is carried along the chain of latches.";
+    public const string LatchWriteWindowTitle = "Latch window too short to write its storage node";
+    public const string LatchWriteWindowMessage =
+        "Latch '{0}' cannot be written in its window: it is open {1}, {2} of it with both halves of its entry gate on (complement skew {3}), but the entry gate needs {4} to charge storage node '{5}' (0.69·R·C with R = {6}, C = {7}; margin {8})";
+    public const string LatchWriteWindowDescription =
+        "A latch's entry gate must charge its storage node while the latch is transparent. A window (less the complement skew at each end) shorter than the gate's RC delay into the node lets the latch close on its old value whatever the data's timing: a pulse latch with a short pulse and a heavy node is the usual case. First-order estimate.";
     public const string SeriesPassGatesTitle = "Pass gates in series without a restoring stage";
     public const string SeriesPassGatesMessage =
         "{0} pass gates in series without a restoring stage (limit {1}): Elmore delay {2} (50% estimate {3}); a restoring stage every {4} gates would give about {5}{6}";

@@ -30,6 +30,9 @@ internal static class Descriptors
     public static readonly DiagnosticDescriptor LatchBorrowing = DescriptorFactory.Create(
         RuleIds.LatchBorrowing, RuleTexts.LatchBorrowingTitle, RuleTexts.LatchBorrowingMessage, RuleCategories.Timing,
         DiagnosticSeverity.Warning, RuleTexts.LatchBorrowingDescription);
+    public static readonly DiagnosticDescriptor LatchWriteWindow = DescriptorFactory.Create(
+        RuleIds.LatchWriteWindow, RuleTexts.LatchWriteWindowTitle, RuleTexts.LatchWriteWindowMessage, RuleCategories.Timing,
+        DiagnosticSeverity.Warning, RuleTexts.LatchWriteWindowDescription);
     public static readonly DiagnosticDescriptor SeriesPassGates = DescriptorFactory.Create(
         RuleIds.SeriesPassGates, RuleTexts.SeriesPassGatesTitle, RuleTexts.SeriesPassGatesMessage, RuleCategories.PassGatePaths,
         DiagnosticSeverity.Warning, RuleTexts.SeriesPassGatesDescription);
@@ -79,6 +82,7 @@ internal static class Descriptors
         RegisterSetup,
         RegisterHold,
         LatchBorrowing,
+        LatchWriteWindow,
         NotElaborated,
         ElaborationBudgetExceeded,
         DesignThrows,
