@@ -24,6 +24,7 @@ public static class Program
             new WakeLogicRegistered(),
             new MooringHold(),
             new MooringHoldWeakKeeper(),
+            new PhaseAligner(),
         };
 
         var findings = 0;

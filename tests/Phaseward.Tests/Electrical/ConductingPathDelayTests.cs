@@ -124,3 +124,47 @@ public class ConductingPathDelayTests
         Assert.True(allT50 > 1.5 * t50);
     }
 }
+
+/// <summary>The one-hot barrel shifter of the PhaseAligner sample, in the shape the sample builds it: stating the
+/// decoded selects exclusive leaves one branch on each sampled bit.</summary>
+public class OneHotShifterLoadTests
+{
+    private static (Netlist Netlist, Device Gate) Shifter(bool stated)
+    {
+        var c = Figures.NewCircuit("shifter");
+        var a0 = c.Input("a0");
+        var a1 = c.Input("a1");
+        var na0 = c.Inverter(a0);
+        var na1 = c.Inverter(a1);
+        var rotate = new[] { c.Nor(a1, a0), c.Nor(a1, na0), c.Nor(na1, a0), c.Nor(na1, na0) };
+        if (stated) c.Exclusive(rotate);
+        var bits = Enumerable.Range(0, 4).Select(i => c.Inverter(c.Input("d" + i))).ToArray();
+        for (var j = 0; j < 4; j++)
+        {
+            var bit = c.Node("out" + j);
+            for (var k = 0; k < 4; k++)
+                c.TransmissionGate(bits[(j - k + 4) % 4], rotate[k], bit);
+            c.Inverter(bit);
+        }
+
+        var netlist = c.ToNetlist();
+        return (netlist, netlist.Devices.First(d => d.IsPassDevice));
+    }
+
+    [Fact]
+    public void Stated_one_hot_selects_leave_one_branch_on_each_bit()
+    {
+        // Each bit's net (10 fF, flat test figures) feeds four gates, each into an output net of 10 fF read by an
+        // inverter. Its driver sees 10 + 10 fF with one select on (the other three branches off), 10 + 4 · 10 fF when
+        // the selects are not known to be exclusive (and then says it assumes so).
+        var (stated, gate) = Shifter(stated: true);
+        var network = new PassGateNetwork(stated);
+        Assert.Equal(20.0, network.RootLoad(gate).Farads * 1e15, 9);
+        Assert.False(network.RootLoadAssumes(gate));
+
+        var (unstated, first) = Shifter(stated: false);
+        var all = new PassGateNetwork(unstated);
+        Assert.Equal(50.0, all.RootLoad(first).Farads * 1e15, 9);
+        Assert.True(all.RootLoadAssumes(first));
+    }
+}
