@@ -24,7 +24,6 @@ public static class Program
             new WakeLogicRegistered(),
             new MooringHold(),
             new MooringHoldWeakKeeper(),
-            new PhaseAligner(),
         };
 
         var findings = 0;

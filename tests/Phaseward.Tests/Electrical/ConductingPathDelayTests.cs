@@ -125,8 +125,8 @@ public class ConductingPathDelayTests
     }
 }
 
-/// <summary>The one-hot barrel shifter of the PhaseAligner sample, in the shape the sample builds it: stating the
-/// decoded selects exclusive leaves one branch on each sampled bit.</summary>
+/// <summary>A decoder-driven one-hot barrel shifter: stating the decoded selects exclusive leaves one branch on each
+/// sampled bit.</summary>
 public class OneHotShifterLoadTests
 {
     private static (Netlist Netlist, Device Gate) Shifter(bool stated)
