@@ -190,16 +190,16 @@ internal sealed partial class Interpreter
             return new Place(() => list[i], v => list[i] = v);
         }
 
-        if (receiver is DesignInstance instance || (receiver is null && property.IsStatic && session.IsInSource(property)))
+        if (receiver is InterpretedObject instance || (receiver is null && property.IsStatic && session.IsInSource(property)))
         {
-            var designInstance = receiver as DesignInstance;
-            if (designInstance is not null && FindOverride(designInstance.Type, property) is { } overriding)
+            var interpretedObject = receiver as InterpretedObject;
+            if (interpretedObject is not null && FindOverride(interpretedObject.Type, property) is { } overriding)
                 property = overriding;
             if (IsAutoProperty(property))
-                return Place.Of(property.IsStatic ? StaticVariable(property, frame) : designInstance!.GetOrAdd(property));
+                return Place.Of(property.IsStatic ? StaticVariable(property, frame) : interpretedObject!.GetOrAdd(property));
             if (property.SetMethod is { } setter && session.IsInSource(setter))
-                return new Place(() => CallGetter(reference, property, designInstance, frame),
-                    v => InvokeUser(setter, designInstance, new[] { v }, new Variable?[1], reference, frame));
+                return new Place(() => CallGetter(reference, property, interpretedObject, frame),
+                    v => InvokeUser(setter, interpretedObject, new[] { v }, new Variable?[1], reference, frame));
         }
         else if (receiver is not null && ClrTypes.IsDsl(property) && property.SetMethod is { } dslSetter)
         {

@@ -18,18 +18,25 @@ internal sealed partial class Interpreter
         var receiver = invocation.Instance is null ? null : Evaluate(invocation.Instance, frame);
         if (Unknown.Is(receiver)) return receiver;
 
-        if (session.IsInSource(method) && (method.MethodKind is MethodKind.Ordinary or MethodKind.LocalFunction))
+        if (receiver is Circuit circuit && method.Name == nameof(Circuit.Place) && ClrTypes.IsDsl(method))
+            return PlaceBlock(invocation, circuit, frame);
+
+        if (receiver is InterpretedObject target && method.ContainingType?.TypeKind == TypeKind.Interface
+            && target.Type.FindImplementationForInterfaceMember(method) is IMethodSymbol implementation)
+            method = implementation;
+
+        if (session.IsInSource(method) && (method.MethodKind is MethodKind.Ordinary or MethodKind.LocalFunction or MethodKind.ExplicitInterfaceImplementation))
         {
-            if (invocation.IsVirtual && receiver is DesignInstance instance)
+            if (invocation.IsVirtual && receiver is InterpretedObject instance)
                 method = FindOverride(instance.Type, method) ?? method;
             var (arguments, references) = Arguments(invocation.Arguments, method, frame);
             if (arguments is null) return Unknown.Value;
-            return InvokeUser(method, receiver as DesignInstance ?? (method.IsStatic ? null : frame.Instance), arguments, references, invocation, frame);
+            return InvokeUser(method, receiver as InterpretedObject ?? (method.IsStatic ? null : frame.Instance), arguments, references, invocation, frame);
         }
 
         if (receiver is List<object?> list)
             return ListMethod(invocation, list, frame);
-        if (receiver is DesignInstance)
+        if (receiver is InterpretedObject)
             return Unsupported(invocation, "the call to " + Describe(method), "the design's inherited Phaseward members are not called at compile time");
 
         var allowed = ClrTypes.IsDsl(method)
@@ -177,7 +184,7 @@ internal sealed partial class Interpreter
     }
 
     /// <summary>Runs a method, local function or accessor declared in this compilation.</summary>
-    private object? InvokeUser(IMethodSymbol method, DesignInstance? instance, object?[] arguments, Variable?[] references, IOperation site, Frame caller)
+    private object? InvokeUser(IMethodSymbol method, InterpretedObject? instance, object?[] arguments, Variable?[] references, IOperation site, Frame caller)
     {
         var body = session.BodyOf(method, m => BodyOf((IMethodSymbol)m));
         if (body is null)
@@ -285,7 +292,7 @@ internal sealed partial class Interpreter
                 return Unknown.Value;
             case string text when property.Name == "Length":
                 return text.Length;
-            case DesignInstance instance:
+            case InterpretedObject instance:
                 return ReadDesignProperty(reference, instance, frame);
         }
 
@@ -304,7 +311,7 @@ internal sealed partial class Interpreter
         return arguments is null ? Unknown.Value : CallClr(reference, getter, receiver, arguments);
     }
 
-    private object? ReadDesignProperty(IPropertyReferenceOperation reference, DesignInstance instance, Frame frame)
+    private object? ReadDesignProperty(IPropertyReferenceOperation reference, InterpretedObject instance, Frame frame)
     {
         var property = reference.Property;
         if (FindOverride(instance.Type, property) is { } overriding)
@@ -318,7 +325,7 @@ internal sealed partial class Interpreter
         return CallGetter(reference, property, instance, frame);
     }
 
-    private object? CallGetter(IPropertyReferenceOperation reference, IPropertySymbol property, DesignInstance? instance, Frame frame)
+    private object? CallGetter(IPropertyReferenceOperation reference, IPropertySymbol property, InterpretedObject? instance, Frame frame)
     {
         if (property.GetMethod is not { } getter)
             return Unsupported(reference, "property " + Describe(property), "it has no getter");
@@ -327,21 +334,77 @@ internal sealed partial class Interpreter
         return arguments is null ? Unknown.Value : InvokeUser(getter, instance, arguments, references, reference, frame);
     }
 
+    /// <summary>A property that stores its value (auto-property, or a record's positional property).</summary>
     private static bool IsAutoProperty(IPropertySymbol property)
-        => property.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax() is PropertyDeclarationSyntax { ExpressionBody: null, AccessorList: { } accessors }
-           && accessors.Accessors.All(a => a.Body is null && a.ExpressionBody is null);
+        => property.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax() switch
+        {
+            PropertyDeclarationSyntax { ExpressionBody: null, AccessorList: { } accessors } => accessors.Accessors.All(a => a.Body is null && a.ExpressionBody is null),
+            ParameterSyntax => true,
+            _ => false,
+        };
 
-    /// <summary>A static field or auto-property of this compilation, initialized from its initializer on first use.</summary>
+    /// <summary>The property a record's positional parameter declares (null when the record declares its own).</summary>
+    private static IPropertySymbol? PositionalProperty(INamedTypeSymbol record, IParameterSymbol parameter)
+        => record.GetMembers(parameter.Name).OfType<IPropertySymbol>()
+            .FirstOrDefault(p => p.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax() is ParameterSyntax);
+
+    /// <summary>
+    /// A static field or auto-property of this compilation. The first use of any static member of a type runs the type's
+    /// static initialization the way C# does: every static field and auto-property initializer in declaration order,
+    /// then the static constructor's body; values it assigns are never read as defaults.
+    /// </summary>
     private Variable StaticVariable(ISymbol member, Frame frame)
     {
-        if (statics.TryGetValue(member.OriginalDefinition, out var variable))
+        var key = member.OriginalDefinition;
+        if (statics.TryGetValue(key, out var variable))
             return variable;
-        var type = member is IFieldSymbol f ? f.Type : ((IPropertySymbol)member).Type;
-        statics[member.OriginalDefinition] = variable = new Variable(DefaultOf(type));
-        var initializer = InitializerOf(member);
-        if (initializer is not null)
-            variable.Value = Evaluate(initializer, new Frame(null, null, null));
+        if (member.ContainingType is { } type)
+            InitializeStatics(type.OriginalDefinition);
+        if (!statics.TryGetValue(key, out variable))
+            statics[key] = variable = new Variable(DefaultOf(member is IFieldSymbol f ? f.Type : ((IPropertySymbol)member).Type));
         return variable;
+    }
+
+    private void InitializeStatics(INamedTypeSymbol type)
+    {
+        if (!initializedTypes.Add(type))
+            return;
+        var storage = new List<(ISymbol Member, Variable Variable)>();
+        foreach (var member in type.GetMembers())
+        {
+            ISymbol? stored = member switch
+            {
+                IFieldSymbol { IsStatic: true, IsConst: false, AssociatedSymbol: null } field => field,
+                IPropertySymbol { IsStatic: true } property when IsAutoProperty(property) => property,
+                _ => null,
+            };
+            if (stored is null)
+                continue;
+            var variable = new Variable(DefaultOf(stored is IFieldSymbol f ? f.Type : ((IPropertySymbol)stored).Type));
+            statics[stored.OriginalDefinition] = variable;
+            storage.Add((stored, variable));
+        }
+
+        var frame = new Frame(null, null, null);
+        foreach (var (member, variable) in storage)
+            if (InitializerOf(member) is { } initializer)
+                variable.Value = Evaluate(initializer, frame);
+
+        foreach (var constructor in type.StaticConstructors)
+        {
+            var syntax = constructor.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken);
+            if (syntax is not ConstructorDeclarationSyntax declaration)
+                continue;
+            if (ModelOf(declaration).GetOperation(declaration, cancellationToken) is not IConstructorBodyOperation body)
+            {
+                Report(RuleIds.NotElaborated, declaration, "the static constructor of " + Describe(type), "its body could not be read", DesignName);
+                continue;
+            }
+
+            var statements = (IOperation?)body.BlockBody ?? body.ExpressionBody;
+            if (statements is not null)
+                Execute(statements, new Frame(constructor, null, null));
+        }
     }
 
     /// <summary>The value operation of a field's or property's initializer (<c>= value</c>), if it has one.</summary>
@@ -380,7 +443,7 @@ internal sealed partial class Interpreter
                 return new Variable(null);
             case IFieldReferenceOperation field when session.IsInSource(field.Field):
                 if (field.Field.IsStatic) return StaticVariable(field.Field, frame);
-                return (field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame)) is DesignInstance instance ? instance.GetOrAdd(field.Field) : null;
+                return (field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame)) is InterpretedObject instance ? instance.GetOrAdd(field.Field) : null;
             default:
                 return null;
         }

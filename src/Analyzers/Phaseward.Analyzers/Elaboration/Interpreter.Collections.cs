@@ -31,6 +31,9 @@ internal sealed partial class Interpreter
             return Initialize(creation, list, frame);
         }
 
+        if (type is not null && session.IsInSource(type) && creation.Constructor is { } sourceConstructor)
+            return CreateObject(creation, type, sourceConstructor, frame);
+
         if (type is null || !ClrTypes.IsDsl(type) || creation.Constructor is not { } constructor)
             return Unsupported(creation, "the creation of " + (type is null ? "this object" : Describe(type)),
                 "only Phaseward DSL objects, arrays and List<T> are created at compile time");

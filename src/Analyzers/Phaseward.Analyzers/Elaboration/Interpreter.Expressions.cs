@@ -238,7 +238,7 @@ internal sealed partial class Interpreter
 
         var owner = field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame);
         if (Unknown.Is(owner)) return owner;
-        return owner is DesignInstance instance
+        return owner is InterpretedObject instance
             ? instance.GetOrAdd(symbol).Value
             : Unsupported(field, "field " + Describe(symbol), "only fields of the design itself are elaborated");
     }

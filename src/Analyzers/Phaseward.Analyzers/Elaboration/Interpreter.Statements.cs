@@ -326,6 +326,9 @@ internal sealed partial class Interpreter
                 ILocalReferenceOperation local => frame.Find(local.Local),
                 IParameterReferenceOperation parameter => frame.Find(parameter.Parameter) ?? frame.Instance?.Find(parameter.Parameter),
                 IFieldReferenceOperation { Field.IsStatic: false } field => frame.Instance?.Find(field.Field),
+                IFieldReferenceOperation { Field.IsStatic: true } field when session.IsInSource(field.Field) => StaticVariable(field.Field, frame),
+                IPropertyReferenceOperation { Property.IsStatic: true } property when session.IsInSource(property.Property) && IsAutoProperty(property.Property)
+                    => StaticVariable(property.Property, frame),
                 IPropertyReferenceOperation { Property.IsStatic: false } property => frame.Instance?.Find(property.Property),
                 _ => null,
             };

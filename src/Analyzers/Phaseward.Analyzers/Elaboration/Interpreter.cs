@@ -21,6 +21,7 @@ internal sealed partial class Interpreter
     private readonly List<ElaborationIssue> issues = new();
     private readonly HashSet<(string Path, int Start, int OuterStart)> reportedSites = new();
     private readonly Dictionary<ISymbol, Variable> statics = new(SymbolEqualityComparer.Default);
+    private readonly HashSet<INamedTypeSymbol> initializedTypes = new(SymbolEqualityComparer.Default);
     private readonly Stack<IOperation> loops = new();
     private readonly Stack<object> implicitReceivers = new();
     private SourceSpan[] callers = Array.Empty<SourceSpan>();
@@ -41,7 +42,23 @@ internal sealed partial class Interpreter
     public Circuit? Circuit { get; set; }
 
     /// <summary>When set, nothing is reported (used to probe whether constructor arguments are known).</summary>
-    public bool Silent { get; set; }
+    public bool Silent
+    {
+        get => silent;
+        set
+        {
+            // Static state made while nothing was reported is forgotten: made again later, its problems are reported.
+            if (silent && !value)
+            {
+                statics.Clear();
+                initializedTypes.Clear();
+            }
+
+            silent = value;
+        }
+    }
+
+    private bool silent;
 
     public long Steps { get; private set; }
 
@@ -174,6 +191,11 @@ internal sealed class ElaborationSession
     public SemanticModelProvider Models { get; }
 
     public DesignCatalog Catalog { get; }
+
+    /// <summary><c>Phaseward.Block.Describe</c>, which every block overrides (null if the referenced DSL has no Block).</summary>
+    public IMethodSymbol? BlockDescribe => blockDescribe ??= Compilation.GetTypeByMetadataName("Phaseward.Block")?.GetMembers("Describe").OfType<IMethodSymbol>().FirstOrDefault();
+
+    private IMethodSymbol? blockDescribe;
 
     /// <summary>The syntax tree with the given path (null if none).</summary>
     public SyntaxTree? TreeAt(string path)

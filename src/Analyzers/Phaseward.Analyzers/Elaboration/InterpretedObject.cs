@@ -4,14 +4,15 @@ using Microsoft.CodeAnalysis;
 namespace Phaseward.Analyzers.Elaboration;
 
 /// <summary>
-/// The interpreted design object: its concrete type, the values of its fields and auto-properties, and the
-/// parameters of a primary constructor (which C# lets the whole class read).
+/// An object of a class, struct or record declared in the design's source (the design itself, a block, a stage, a
+/// configuration record), built and used only by the interpreter: its concrete type, the values of its fields and
+/// auto-properties, and the parameters of a primary constructor (which C# lets the whole class read).
 /// </summary>
-internal sealed class DesignInstance
+internal sealed class InterpretedObject
 {
     private readonly Dictionary<ISymbol, Variable> members = new(SymbolEqualityComparer.Default);
 
-    public DesignInstance(INamedTypeSymbol type) => Type = type;
+    public InterpretedObject(INamedTypeSymbol type) => Type = type;
 
     public INamedTypeSymbol Type { get; }
 
