@@ -63,15 +63,6 @@ public sealed class OverlapRaceRule : Rule
     internal static bool IsRegisterToRegister(LatchModel model, Latch a, Latch b)
         => model.RegisterOf(a) is { } from && ReferenceEquals(from.Slave, a)
            && model.RegisterOf(b) is { } to && ReferenceEquals(to.Master, b);
-
-    internal static Time FastestEntry(LatchModel model, Latch latch)
-    {
-        var gates = latch.EntryGates;
-        var fastest = model.StageDelay(gates[0]);
-        for (var i = 1; i < gates.Count; i++)
-            fastest = Time.Min(fastest, model.StageDelay(gates[i]));
-        return fastest;
-    }
 }
 
 /// <summary>The race check of one latch pair across a clock overlap (see <see cref="OverlapRaceRule"/>).</summary>
@@ -124,7 +115,7 @@ public static class OverlapRaces
             var overlap = OverlapRaceRule.OpenOverlap(windows.Of(a.Phase), windows.Of(phaseB));
             if (overlap <= Time.Zero)
                 continue;
-            var fastest = OverlapRaceRule.FastestEntry(model, a) + path.MinDelay + model.StageDelay(path.EntryGate);
+            var fastest = model.FastestEntryDelay(a) + path.MinDelay + model.StageDelay(path.EntryGate);
             var key = (a.Index, b.Index);
             if (!worst.TryGetValue(key, out var seen))
                 order.Add(key);
