@@ -33,6 +33,9 @@ internal sealed class Frame
     /// <summary>Set by <c>return</c>.</summary>
     public object? ReturnValue { get; set; }
 
+    /// <summary>What an iterator method has yielded so far (null when the method is not an iterator).</summary>
+    public List<object?>? Yielded { get; set; }
+
     public void Declare(ISymbol symbol, object? value) => variables[symbol] = new Variable(value);
 
     public void Bind(ISymbol symbol, Variable variable) => variables[symbol] = variable;

@@ -1,3 +1,4 @@
+using System.Linq;
 using System;
 using System.Collections.Generic;
 using System.Globalization;
@@ -32,7 +33,7 @@ internal sealed partial class Interpreter
     private object? Assign(ISimpleAssignmentOperation assignment, Frame frame)
     {
         var place = PlaceOf(assignment.Target, frame);
-        var value = Evaluate(assignment.Value, frame);
+        var value = CopyIfValue(Evaluate(assignment.Value, frame));
         if (!place.IsKnown) return Unknown.Value;
         place.Set(value);
         return value;
@@ -111,7 +112,7 @@ internal sealed partial class Interpreter
                 Deconstruct(declaration.Expression, value, frame);
                 return;
             case ITupleOperation tuple:
-                var items = value as TupleValue;
+                var items = value as TupleValue ?? DeconstructedParts(value);
                 if (items is null && !Unknown.Is(value))
                 {
                     Unsupported(target, "this deconstruction", "only tuples are deconstructed");
@@ -200,6 +201,22 @@ internal sealed partial class Interpreter
             if (property.SetMethod is { } setter && session.IsInSource(setter))
                 return new Place(() => CallGetter(reference, property, interpretedObject, frame),
                     v => InvokeUser(setter, interpretedObject, new[] { v }, new Variable?[1], reference, frame));
+        }
+        else if (receiver is not null && !ClrTypes.IsDsl(property) && Library.IsPure(property) && property.SetMethod is { } librarySetter)
+        {
+            // A dictionary entry, a StringBuilder's Length, an element of a library collection.
+            var (indexArguments, _) = Arguments(reference.Arguments, librarySetter, frame);
+            if (indexArguments is null) return default;
+            var getter = property.GetMethod;
+            return new Place(
+                () => getter is null ? Unknown.Value : CallClr(reference, getter, receiver, indexArguments.Take(getter.Parameters.Length).ToArray()),
+                v =>
+                {
+                    if (Unknown.Is(v)) return;
+                    var values = (object?[])indexArguments.Clone();
+                    values[values.Length - 1] = v;
+                    CallClr(reference, librarySetter, receiver, values);
+                });
         }
         else if (receiver is not null && ClrTypes.IsDsl(property) && property.SetMethod is { } dslSetter)
         {

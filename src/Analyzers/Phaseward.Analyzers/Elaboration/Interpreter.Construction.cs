@@ -11,7 +11,7 @@ internal sealed partial class Interpreter
 {
     public InterpretedObject NewObject(INamedTypeSymbol type)
     {
-        var instance = new InterpretedObject(type);
+        var instance = new InterpretedObject(type, this);
         for (var current = type; current is not null && session.IsInSource(current); current = current.BaseType)
             foreach (var member in current.GetMembers())
             {
