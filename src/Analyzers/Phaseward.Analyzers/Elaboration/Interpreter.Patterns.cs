@@ -1,6 +1,6 @@
-using Microsoft.CodeAnalysis;
 using System;
 using System.Globalization;
+using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Operations;
 
 namespace Phaseward.Analyzers.Elaboration;

@@ -122,6 +122,8 @@ internal static class Library
     private static Type? FindOpen(INamedTypeSymbol definition)
     {
         var name = ClrTypes.MetadataName(definition);
+        if (string.IsNullOrEmpty(name) || name.EndsWith(".", StringComparison.Ordinal) || definition.TypeKind == TypeKind.Error)
+            return null;
         return Type.GetType(name, throwOnError: false)
             ?? typeof(List<>).Assembly.GetType(name, throwOnError: false)
             ?? typeof(Enumerable).Assembly.GetType(name, throwOnError: false)
