@@ -20,6 +20,10 @@ public static class Program
             new Housekeeping(),
             new HousekeepingStatic(),
             new StrainLanes(),
+            new WakeLogic(),
+            new WakeLogicRegistered(),
+            new MooringHold(),
+            new MooringHoldWeakKeeper(),
         };
 
         var findings = 0;

@@ -204,5 +204,6 @@ public sealed class SampleReportTests : IDisposable
     {
         new PressureSampler(), new BurstCapture(), new BurstCaptureStatic(), new ChannelSelect(), new ChannelSelectBuffered(),
         new TideAverager(), new TideAveragerTwoPhase(), new Housekeeping(), new HousekeepingStatic(), new StrainLanes(),
+        new WakeLogic(), new WakeLogicRegistered(), new MooringHold(), new MooringHoldWeakKeeper(),
     };
 }

@@ -28,6 +28,10 @@ public static class RuleCatalog
     public static RuleDescriptor OverlapRace { get; } = new(
         RuleIds.OverlapRace, RuleTexts.OverlapRaceTitle, RuleTexts.OverlapRaceMessage, RuleCategories.ClockPhases, Severity.Warning, RuleTexts.OverlapRaceDescription);
 
+    public static RuleDescriptor LoopWithoutStorage { get; } = new(
+        RuleIds.LoopWithoutStorage, RuleTexts.LoopWithoutStorageTitle, RuleTexts.LoopWithoutStorageMessage, RuleCategories.ClockPhases, Severity.Warning,
+        RuleTexts.LoopWithoutStorageDescription);
+
     public static RuleDescriptor RegisterSetup { get; } = new(
         RuleIds.RegisterSetup, RuleTexts.RegisterSetupTitle, RuleTexts.RegisterSetupMessage, RuleCategories.Timing, Severity.Warning, RuleTexts.RegisterSetupDescription);
 
@@ -51,17 +55,23 @@ public static class RuleCatalog
         RuleIds.ChargeSharing, RuleTexts.ChargeSharingTitle, RuleTexts.ChargeSharingMessage,
         RuleCategories.DynamicStorage, Severity.Warning, RuleTexts.ChargeSharingDescription);
 
+    public static RuleDescriptor KeeperTooStrong { get; } = new(
+        RuleIds.KeeperTooStrong, RuleTexts.KeeperTooStrongTitle, RuleTexts.KeeperTooStrongMessage,
+        RuleCategories.DynamicStorage, Severity.Warning, RuleTexts.KeeperTooStrongDescription);
+
     public static IReadOnlyList<RuleDescriptor> All { get; } = new[]
     {
         SeriesPassGates,
         SameWindowLatches,
         OverlapRace,
+        LoopWithoutStorage,
         RegisterSetup,
         RegisterHold,
         LatchBorrowing,
         DynamicNodeOnGatedClock,
         ClockTooSlowForDynamicStorage,
         ChargeSharing,
+        KeeperTooStrong,
         NotElaborated,
         ElaborationBudgetExceeded,
         DesignThrows,

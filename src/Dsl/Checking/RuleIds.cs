@@ -13,6 +13,9 @@ public static class RuleIds
     /// <summary>A latch pair on complementary phases races through the clock overlap.</summary>
     public const string OverlapRace = "PW1002";
 
+    /// <summary>A feedback loop through restoring stages and data-controlled pass gates with no latch on it.</summary>
+    public const string LoopWithoutStorage = "PW1005";
+
     /// <summary>A register-to-register path misses the capturing register's setup time.</summary>
     public const string RegisterSetup = "PW4001";
 
@@ -31,6 +34,9 @@ public static class RuleIds
 
     /// <summary>A pass device joins a charged floating node to another floating node and the shared level droops too far.</summary>
     public const string ChargeSharing = "PW3003";
+
+    /// <summary>A keeper stronger than the write path of its node: a write cannot flip it.</summary>
+    public const string KeeperTooStrong = "PW3005";
     /// <summary>Part of a design could not be elaborated at compile time (outside the supported subset).</summary>
     public const string NotElaborated = "PW9001";
 

@@ -12,6 +12,7 @@ public sealed class RulePolicy
     private readonly Time minimumRaceMargin = Time.Zero;
     private readonly Time minimumTimingSlack = Time.Zero;
     private readonly int? maxSeriesPassGates;
+    private readonly double keeperWriteMargin = 0.1;
 
     public static RulePolicy Default { get; } = new();
 
@@ -33,6 +34,21 @@ public sealed class RulePolicy
     {
         get => minimumTimingSlack;
         init => minimumTimingSlack = new Time(Guard.NonNegative(value.Seconds, nameof(MinimumTimingSlack), "s"));
+    }
+
+    /// <summary>
+    /// PW3005: how far past the switching point (half the supply) a write against a keeper must pull its node, as a
+    /// fraction of the supply (default 0.1: 10 %). Key <c>phaseward.keeper_write_margin</c>. At least 0, below 0.5.
+    /// </summary>
+    public double KeeperWriteMargin
+    {
+        get => keeperWriteMargin;
+        init
+        {
+            if (double.IsNaN(value) || value < 0 || value >= 0.5)
+                throw new ArgumentException($"'{nameof(KeeperWriteMargin)}' must be at least 0 and below 0.5 of the supply (was {value.ToString("R", System.Globalization.CultureInfo.InvariantCulture)}).", nameof(KeeperWriteMargin));
+            keeperWriteMargin = value;
+        }
     }
 
     /// <summary>

@@ -9,11 +9,13 @@ public static class RuleSet
     {
         new SameWindowLatchesRule(),
         new OverlapRaceRule(),
+        new LoopWithoutStorageRule(),
         new RegisterTimingRule(),
         new LatchBorrowingRule(),
         new PassGateChainRule(),
         new DynamicNodeOnGatedClockRule(),
         new ClockTooSlowForDynamicStorageRule(),
         new ChargeSharingRule(),
+        new KeeperTooStrongRule(),
     };
 }

@@ -15,6 +15,13 @@ public static class RuleTexts
     public const string OverlapRaceMessage = "Latch '{0}' can catch data launched through latch '{1}' during the {2} overlap of clock '{3}': the fastest path takes {4} but both pass gates conduct together for {5} (margin {6})";
     public const string OverlapRaceDescription = "Two latches on complementary phases of one clock are both transparent while the clock and its late complement overlap. Data entering the first latch when it opens must not reach the second latch's storage node before the second latch closes: the shortest delay through the first latch, the path and the second latch's pass gate must exceed the overlap. For a master-slave register this is t(TG1) + t(I1) + t(TG2) against the 0-0 overlap (rising-edge register).";
 
+    public const string LoopWithoutStorageTitle = "Feedback loop with no storage element";
+    public const string LoopWithoutStorageMessage = "A feedback loop of {0} devices has no latch on it ({1}): {2}";
+    public const string LoopWithoutStorageOddLoop = "{0} inversions (odd): enabled, it oscillates with a period of about {1} (twice the loop's delay {2})";
+    public const string LoopWithoutStorageEvenLoop = "{0} inversions (even): it settles at a level nothing writes";
+    public const string LoopWithoutStorageTangledLoops = "loops that share nets, whose behaviour depends on their other inputs";
+    public const string LoopWithoutStorageDescription = "A loop of restoring stages and data-controlled pass gates that no clocked pass gate breaks holds no storage element: with an odd number of inversions it oscillates when enabled (about twice the loop's delay per period, first order), with an even number it settles at a level nothing writes, and its timing cannot be analysed. A keeper loop, a cross-coupled pair of inverting stages and a latch's own feedback (a pass gate on the inverse of the writing gate's control) are storage cells and are not reported. Break the loop with a latch, or remove the feedback.";
+
     public const string RegisterSetupTitle = "Register setup time violated";
     public const string RegisterSetupMessage = "Register '{0}' misses its setup time on the path from register '{1}': clock-to-output {2} + path {3} + setup {4} = {5} exceeds the {6} available (slack {7})";
     public const string RegisterSetupDescription = "On a register-to-register path the launching register's clock-to-output, the slowest path and the capturing register's setup time must fit in the time between the launching and the capturing edge (a clock period, corrected for clock skew).";
@@ -50,6 +57,12 @@ public static class RuleTexts
         "When '{0}' conducts, floating node '{1}' (C1 = {2}) shares its charge with floating node '{3}' (C2 = {4}): a {5} level settles at {6}, a droop of {7}, more than the tolerated {8}";
     public const string ChargeSharingDescription =
         "A pass device that opens between a charged floating node and another floating node shares the charge between them: the level settles at V·C1/(C1+C2), a droop of V·C2/(C1+C2) in the worst case (the other node at the opposite level). First-order estimate by conservation of charge.";
+    public const string KeeperTooStrongTitle = "Keeper too strong for its write path";
+    public const string KeeperTooStrongMessage =
+        "Keeper '{0}' ({1}) is too strong for the write path through '{2}' ({3}): writing a 0 against it pulls node '{4}' only down to {5}, above the {6} it must reach (switching point {7} less a {8} margin; a 1 mirrors this)";
+    public const string KeeperTooStrongDescription =
+        "A write against a keeper is a voltage divider: the node reaches V·R_w/(R_w + R_k), with R_w the write path (driver plus pass gates in series) and R_k the keeper. Unless that level gets past the switching point (half the supply) by a margin (phaseward.keeper_write_margin, default 10 % of the supply), the write does not flip the node. Make the keeper weaker (a larger resistance) or the write path stronger. First-order estimate.";
+
     public const string NotElaboratedTitle = "Part of the design could not be elaborated at compile time";
     public const string NotElaboratedMessage = "Phaseward could not elaborate {0} here: {1}; what depends on it is skipped and the rest of design '{2}' is still checked";
     public const string NotElaboratedDescription =

@@ -28,10 +28,12 @@ public sealed partial class Circuit
         => AddRegisterCell(MacroKind.StaticRegister, d, clock, name, Site(callerFile, callerLine));
 
     /// <summary>A weak keeper on <paramref name="node"/>: an inverter senses it and a weak inverter feeds it back.</summary>
+    /// <param name="resistance">The weak inverter's output resistance (default: the process's keeper resistance).</param>
     /// <returns>The keeper's internal net (the inverse of the node).</returns>
-    public Net Keeper(Net node, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
+    public Net Keeper(Net node, string? name = null, Resistance? resistance = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
     {
         CheckNet(node, nameof(node));
+        var keeperResistance = CheckResistance(resistance, nameof(resistance));
         var cellName = name is null ? ScopedOnce(node.Name + ".keeper") : Scoped(name);
         CheckNewNetName(cellName, nameof(name));
         var span = Site(callerFile, callerLine);
@@ -39,7 +41,7 @@ public sealed partial class Circuit
         var cell = AddMacro(MacroKind.Keeper, cellName, span, null);
         var sensed = NewNet(cellName);
         AddDevice(null, DeviceKind.Inverter, new[] { node }, sensed, null, null, null, false, span, cell, "sense-inverter", nameInCell: "sense");
-        AddDevice(null, DeviceKind.Inverter, new[] { sensed }, node, null, null, null, true, span, cell, "weak-feedback-inverter", nameInCell: "feedback");
+        AddDevice(null, DeviceKind.Inverter, new[] { sensed }, node, null, null, keeperResistance, true, span, cell, "weak-feedback-inverter", nameInCell: "feedback");
         return sensed;
     }
 

@@ -73,7 +73,8 @@ public sealed partial class Circuit
     /// <summary>The netlist built so far (used by <see cref="Design.Elaborate"/> and the compile-time elaborator).</summary>
     internal Netlist ToNetlist()
         => new(DesignName, Process, nets.ToArray(), devices.ToArray(), clocks.ToArray(), macros.ToArray(), inputs.ToArray(), outputs.ToArray(),
-            new Dictionary<int, Capacitance>(capacitanceOverrides), new Dictionary<int, Current>(leakageOverrides));
+            new Dictionary<int, Capacitance>(capacitanceOverrides), new Dictionary<int, Current>(leakageOverrides),
+            exclusiveGroups.ToArray());
 
     private SourceSpan Site(string callerFile, int callerLine) => SourceSiteProvider?.Invoke() ?? new SourceSpan(callerFile, callerLine);
 

@@ -17,10 +17,12 @@ public sealed class Netlist
     private readonly Capacitance[] capacitances;
     private readonly IReadOnlyDictionary<int, Current> leakageOverrides;
     private readonly bool[] isInput;
+    private readonly ExclusiveControls exclusive;
 
     internal Netlist(string designName, Process process, IReadOnlyList<Net> nets, IReadOnlyList<Device> devices,
         IReadOnlyList<Clock> clocks, IReadOnlyList<MacroInstance> macros, IReadOnlyList<Port> inputs, IReadOnlyList<Port> outputs,
-        IReadOnlyDictionary<int, Capacitance> capacitanceOverrides, IReadOnlyDictionary<int, Current> leakage)
+        IReadOnlyDictionary<int, Capacitance> capacitanceOverrides, IReadOnlyDictionary<int, Current> leakage,
+        IReadOnlyList<Net[]>? exclusiveGroups = null)
     {
         DesignName = designName;
         Process = process;
@@ -36,6 +38,8 @@ public sealed class Netlist
         drivers = NetDeviceIndex.Build(devices, nets.Count, NetConnection.Output);
         dataLoads = NetDeviceIndex.Build(devices, nets.Count, NetConnection.DataInput);
         controlLoads = NetDeviceIndex.Build(devices, nets.Count, NetConnection.Control);
+
+        exclusive = new ExclusiveControls(exclusiveGroups, nets.Count);
 
         isInput = new bool[nets.Count];
         foreach (var port in inputs)
@@ -85,6 +89,31 @@ public sealed class Netlist
     internal DeviceRange DataLoadList(Net net) => dataLoads.Of(Index(net));
 
     internal DeviceRange ControlLoadList(Net net) => controlLoads.Of(Index(net));
+
+    /// <summary>The groups of control nets stated exclusive with <see cref="Circuit.Exclusive"/>, in order of statement.</summary>
+    public IReadOnlyList<IReadOnlyList<Net>> ExclusiveGroups => exclusive.Groups;
+
+    /// <summary>
+    /// True when <paramref name="a"/> and <paramref name="b"/> are never high together: they were stated in one
+    /// <see cref="Circuit.Exclusive"/> group, or one is the other's inverse (the output of an inverter, its only
+    /// driver, whose input is the other). A net is not exclusive with itself.
+    /// </summary>
+    public bool AreExclusive(Net a, Net b)
+    {
+        Index(a);
+        Index(b);
+        if (ReferenceEquals(a, b)) return false;
+        return exclusive.StatedTogether(a, b) || ExclusiveControls.IsInverseOf(this, a, b) || ExclusiveControls.IsInverseOf(this, b, a);
+    }
+
+    /// <summary>True when exactly one of <paramref name="a"/> and <paramref name="b"/> is high at any time: one is the
+    /// other's inverse (a stated exclusive group says at most one, not exactly one).</summary>
+    public bool AreComplementary(Net a, Net b)
+    {
+        Index(a);
+        Index(b);
+        return ExclusiveControls.IsInverseOf(this, a, b) || ExclusiveControls.IsInverseOf(this, b, a);
+    }
 
     /// <summary>True for a primary input (driven from outside through the process's driver resistance).</summary>
     public bool IsInput(Net net) => isInput[Index(net)];

@@ -53,6 +53,9 @@ public static class NetlistText
             text.AppendLine();
         }
 
+        foreach (var group in netlist.ExclusiveGroups)
+            text.Append("exclusive ").Append(string.Join(",", group.Select(n => n.Name))).AppendLine();
+
         foreach (var port in netlist.Outputs)
         {
             text.Append("output ").Append(port.Name).Append(" net=").Append(port.Net.Name);

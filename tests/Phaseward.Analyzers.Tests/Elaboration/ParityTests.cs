@@ -25,6 +25,7 @@ public class ParityTests
     [InlineData("ParityDesigns.Collections")]
     [InlineData("ParityDesigns.Tuples")]
     [InlineData("ParityDesigns.RefAndOut")]
+    [InlineData("ParityDesigns.ExclusiveSelects")]
     public void TestDesignMatchesRunTime(string design) => AssertParity(TestDesigns, design);
 
     [Fact]

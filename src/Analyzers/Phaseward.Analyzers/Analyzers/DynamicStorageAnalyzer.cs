@@ -4,7 +4,7 @@ using Microsoft.CodeAnalysis.Diagnostics;
 
 namespace Phaseward.Analyzers;
 
-/// <summary>PW3xxx: dynamic nodes on gatable clocks, clocks too slow for dynamic storage, charge sharing.</summary>
+/// <summary>PW3xxx: dynamic nodes on gatable clocks, clocks too slow for dynamic storage, charge sharing, keepers too strong to write.</summary>
 [DiagnosticAnalyzer(LanguageNames.CSharp)]
 public sealed class DynamicStorageAnalyzer : FindingAnalyzer
 {
@@ -13,5 +13,6 @@ public sealed class DynamicStorageAnalyzer : FindingAnalyzer
         new DynamicNodeOnGatedClockRule(),
         new ClockTooSlowForDynamicStorageRule(),
         new ChargeSharingRule(),
+        new KeeperTooStrongRule(),
     };
 }

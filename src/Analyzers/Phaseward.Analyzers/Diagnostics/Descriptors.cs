@@ -15,6 +15,10 @@ internal static class Descriptors
         RuleIds.OverlapRace, RuleTexts.OverlapRaceTitle, RuleTexts.OverlapRaceMessage, RuleCategories.ClockPhases,
         DiagnosticSeverity.Warning, RuleTexts.OverlapRaceDescription);
 
+    public static readonly DiagnosticDescriptor LoopWithoutStorage = DescriptorFactory.Create(
+        RuleIds.LoopWithoutStorage, RuleTexts.LoopWithoutStorageTitle, RuleTexts.LoopWithoutStorageMessage, RuleCategories.ClockPhases,
+        DiagnosticSeverity.Warning, RuleTexts.LoopWithoutStorageDescription);
+
     public static readonly DiagnosticDescriptor RegisterSetup = DescriptorFactory.Create(
         RuleIds.RegisterSetup, RuleTexts.RegisterSetupTitle, RuleTexts.RegisterSetupMessage, RuleCategories.Timing,
         DiagnosticSeverity.Warning, RuleTexts.RegisterSetupDescription);
@@ -40,6 +44,11 @@ internal static class Descriptors
     public static readonly DiagnosticDescriptor ChargeSharing = DescriptorFactory.Create(
         RuleIds.ChargeSharing, RuleTexts.ChargeSharingTitle, RuleTexts.ChargeSharingMessage,
         RuleCategories.DynamicStorage, DiagnosticSeverity.Warning, RuleTexts.ChargeSharingDescription);
+
+    public static readonly DiagnosticDescriptor KeeperTooStrong = DescriptorFactory.Create(
+        RuleIds.KeeperTooStrong, RuleTexts.KeeperTooStrongTitle, RuleTexts.KeeperTooStrongMessage,
+        RuleCategories.DynamicStorage, DiagnosticSeverity.Warning, RuleTexts.KeeperTooStrongDescription);
+
     public static readonly DiagnosticDescriptor NotElaborated = DescriptorFactory.Create(
         RuleIds.NotElaborated, RuleTexts.NotElaboratedTitle, RuleTexts.NotElaboratedMessage, RuleCategories.Elaboration,
         DiagnosticSeverity.Info, RuleTexts.NotElaboratedDescription);
@@ -61,10 +70,12 @@ internal static class Descriptors
     {
         SameWindowLatches,
         OverlapRace,
+        LoopWithoutStorage,
         SeriesPassGates,
         DynamicNodeOnGatedClock,
         ClockTooSlowForDynamicStorage,
         ChargeSharing,
+        KeeperTooStrong,
         RegisterSetup,
         RegisterHold,
         LatchBorrowing,

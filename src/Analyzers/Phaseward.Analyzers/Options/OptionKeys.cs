@@ -9,4 +9,5 @@ internal static class OptionKeys
     public const string MaxSeriesPassGates = "phaseward.max_series_pass_gates";
     public const string MinimumRaceMargin = "phaseward.min_race_margin";
     public const string MinimumTimingSlack = "phaseward.min_timing_slack";
+    public const string KeeperWriteMargin = "phaseward.keeper_write_margin";
 }

@@ -57,6 +57,19 @@ internal sealed class OptionReader
         return null;
     }
 
+    /// <summary>A number in [min, maxExclusive) (decimal point allowed, invariant culture).</summary>
+    public double Number(string key, double defaultValue, double min, double maxExclusive)
+    {
+        if (!options.TryGetValue(key, out var text))
+            return defaultValue;
+        if (double.TryParse(text.Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out var value) && value >= min && value < maxExclusive)
+            return value;
+        var shown = defaultValue.ToString("R", CultureInfo.InvariantCulture);
+        problems.Add(new OptionProblem(key, text,
+            $"a number from {min.ToString("R", CultureInfo.InvariantCulture)} up to (not including) {maxExclusive.ToString("R", CultureInfo.InvariantCulture)}, such as {shown}", shown));
+        return defaultValue;
+    }
+
     /// <summary>A duration of zero or more with its unit: <c>5ps</c>, <c>0.2 ns</c>, <c>1us</c> (s, ms, us/µs, ns, ps, fs).</summary>
     public Time Duration(string key, Time defaultValue)
     {

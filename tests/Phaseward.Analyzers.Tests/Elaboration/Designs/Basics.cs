@@ -168,4 +168,28 @@ namespace ParityDesigns
             c.SetCapacitance(n, (Ratio * 2).Femtofarads());
         }
     }
+
+    // Circuit.Exclusive called in each form a designer writes it: listed nets, an array, a collection made by a loop.
+    public sealed class ExclusiveSelects : Design
+    {
+        protected override void Describe(Circuit c)
+        {
+            var a0 = c.Input("a0");
+            var a1 = c.Input("a1");
+            var na0 = c.Inverter(a0, "na0");
+            var na1 = c.Inverter(a1, "na1");
+            var selects = new[] { c.Nor(a1, a0, "s0"), c.Nor(a1, na0, "s1"), c.Nor(na1, a0, "s2"), c.Nor(na1, na0, "s3") };
+            c.Exclusive(selects);
+            c.Exclusive(selects[0], selects[3]);
+            var arms = new System.Collections.Generic.List<Net>();
+            for (var i = 0; i < 2; i++)
+                arms.Add(c.Inverter(selects[i], "arm" + i));
+            c.Exclusive(arms.ToArray());
+
+            var bit = c.Node("bit");
+            for (var i = 0; i < selects.Length; i++)
+                c.TransmissionGate(c.Input("d" + i), selects[i], bit);
+            c.Output("q", c.Inverter(bit));
+        }
+    }
 }
