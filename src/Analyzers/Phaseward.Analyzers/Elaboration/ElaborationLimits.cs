@@ -35,6 +35,9 @@ internal readonly struct ElaborationLimits : System.IEquatable<ElaborationLimits
     /// </summary>
     public const long DefaultMemoryBudget = 256L * 1024 * 1024;
 
+    /// <summary>The largest memory budget accepted (4 GiB): a larger one would let a design take the editor's memory.</summary>
+    public const long MaxMemoryBudget = 4L * 1024 * 1024 * 1024;
+
     public ElaborationLimits(long stepBudget, int recursionLimit, long deviceBudget = DefaultDeviceBudget, long memoryBudget = DefaultMemoryBudget)
     {
         StepBudget = stepBudget;

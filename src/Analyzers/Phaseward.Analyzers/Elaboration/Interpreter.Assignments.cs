@@ -51,7 +51,7 @@ internal sealed partial class Interpreter
         else if (assignment.OperatorMethod is { } method)
             result = CallOperator(assignment, method, new[] { current, operand }, frame);
         else if (assignment.OperatorKind == BinaryOperatorKind.Add && assignment.Target.Type?.SpecialType == SpecialType.System_String)
-            result = Arithmetic.Concatenate(current, operand);
+            result = Concatenate(assignment, current, operand);
         else if (current is null || operand is null || assignment.Target.Type is null)
             result = Unsupported(assignment, "this compound assignment", "its operands are not known");
         else

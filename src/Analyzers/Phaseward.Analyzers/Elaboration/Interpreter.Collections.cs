@@ -80,6 +80,7 @@ internal sealed partial class Interpreter
         }
 
         Step(creation);
+        ChargeMemory(creation, 8L * length);
         var element = ((IArrayTypeSymbol)creation.Type!).ElementType;
         var items = new object?[length];
         var initial = DefaultOf(element);
@@ -110,6 +111,7 @@ internal sealed partial class Interpreter
         }
 
         Step(collection);
+        ChargeMemory(collection, 8L * items.Count);
         return collection.Type switch
         {
             IArrayTypeSymbol => items.ToArray(),

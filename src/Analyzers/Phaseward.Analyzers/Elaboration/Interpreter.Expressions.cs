@@ -305,7 +305,36 @@ internal sealed partial class Interpreter
         return items[i];
     }
 
+    /// <summary>String concatenation (an interpreted ToString may be called), charged to the memory budget.</summary>
+    private object? Concatenate(IOperation site, object? left, object? right)
+    {
+        string joined;
+        try
+        {
+            joined = Arithmetic.Concatenate(left, right);
+        }
+        catch (UnknownValueException)
+        {
+            return Unknown.Value;
+        }
+
+        ChargeMemory(site, 2L * joined.Length);
+        return joined;
+    }
+
     private object? Interpolate(IInterpolatedStringOperation interpolated, Frame frame)
+    {
+        try
+        {
+            return InterpolateParts(interpolated, frame);
+        }
+        catch (UnknownValueException)
+        {
+            return Unknown.Value;
+        }
+    }
+
+    private object? InterpolateParts(IInterpolatedStringOperation interpolated, Frame frame)
     {
         var text = new StringBuilder();
         foreach (var part in interpolated.Parts)
@@ -330,6 +359,7 @@ internal sealed partial class Interpreter
             }
         }
 
+        ChargeMemory(interpolated, 2L * text.Length);
         return text.ToString();
     }
 
@@ -382,7 +412,9 @@ internal sealed partial class Interpreter
         var rightType = binary.RightOperand.Type;
         if (binary.OperatorKind == BinaryOperatorKind.Add
             && (leftType?.SpecialType == SpecialType.System_String || rightType?.SpecialType == SpecialType.System_String))
-            return Arithmetic.Concatenate(left, right);
+        {
+            return Concatenate(binary, left, right);
+        }
 
         if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals && left is InterpretedObject { Type.IsRecord: true } record)
         {
