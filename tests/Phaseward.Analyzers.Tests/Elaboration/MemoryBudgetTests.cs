@@ -62,6 +62,7 @@ public class MemoryBudgetTests
     public void EveryWayOfAskingForHugeMemoryStopsWithPW9002(string allocation)
     {
         var designs = new InMemoryDesigns(("/src/Greedy.cs", $$"""
+            using System.Linq;
             using Phaseward;
 
             public sealed class Greedy : Design
