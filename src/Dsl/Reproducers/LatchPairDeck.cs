@@ -135,7 +135,7 @@ internal static class LatchPairDeck
         return window.Closes + window.Period * k;
     }
 
-    private readonly struct Stage
+    internal readonly struct Stage
     {
         public Stage(Device device, Net from)
         {
@@ -149,7 +149,7 @@ internal static class LatchPairDeck
     }
 
     // The shortest chain of restoring stages and data-controlled pass gates from 'start' to 'target' (breadth first).
-    private static List<Stage>? Route(Netlist netlist, Net start, Net target)
+    internal static List<Stage>? Route(Netlist netlist, Net start, Net target)
     {
         var reached = new Dictionary<int, Stage?> { [start.Id] = null };
         var queue = new Queue<Net>();
