@@ -15,13 +15,17 @@ chains and the storage nodes.
 
 Options:
   --html <path>               also write a self-contained HTML page with a timing diagram per root clock
+  --spice <dir>               also write a SPICE deck per finding that reproduces it, <dir>/<Design>/<RuleId>-<n>.cir
+                              (first-order switch-level decks for ngspice: ngspice -b <deck>)
+  --confirm                   run every deck in ngspice (on the PATH) and print each estimate beside the simulated
+                              value; without --spice the decks go to a temporary folder
   --design <name>             only this design (class name or full name); may be repeated
   --error <IDs>               report these rules (comma-separated PWxxxx, or * for all) as errors
   --warning <IDs>, --info <IDs>, --none <IDs>
                               likewise; none leaves a rule's findings out
   --max-series-pass-gates <n> PW2001 limit (phaseward.max_series_pass_gates)
   --min-race-margin <time>    PW1002 threshold, e.g. 20ps (phaseward.min_race_margin)
-  --min-timing-slack <time>   PW4001-PW4003 threshold, e.g. 0.1ns (phaseward.min_timing_slack)
+  --min-timing-slack <time>   PW4001-PW4004 threshold, e.g. 0.1ns (phaseward.min_timing_slack)
   --no-editorconfig           ignore .editorconfig files
   --artifacts <dir>           where a project is built (default: a new temporary folder, deleted afterwards)
   -h, --help                  this text
@@ -33,6 +37,10 @@ Exit code: 0 no error-severity findings, 1 findings at error severity, 2 bad inp
     public string? Input { get; private set; }
 
     public string? HtmlPath { get; private set; }
+
+    public string? SpicePath { get; private set; }
+
+    public bool Confirm { get; private set; }
 
     public List<string> Designs { get; } = new();
 
@@ -64,6 +72,8 @@ Exit code: 0 no error-severity findings, 1 findings at error severity, 2 bad inp
                 case "-h" or "--help" or "-?": line.Help = true; break;
                 case "--html": line.HtmlPath = Value(); break;
                 case "--design": line.Designs.Add(Value()); break;
+                case "--spice": line.SpicePath = Value(); break;
+                case "--confirm": line.Confirm = true; break;
                 case "--error": line.SeverityOverrides.Add((Value(), ReportSeverity.Error)); break;
                 case "--warning": line.SeverityOverrides.Add((Value(), ReportSeverity.Warning)); break;
                 case "--info": line.SeverityOverrides.Add((Value(), ReportSeverity.Info)); break;

@@ -6,6 +6,7 @@ using Phaseward.Cli.Loading;
 using Phaseward.Cli.Model;
 using Phaseward.Cli.Output;
 using Phaseward.Cli.Policy;
+using Phaseward.Cli.Reproduction;
 
 namespace Phaseward.Cli;
 
@@ -19,6 +20,7 @@ internal static class ReportCommand
     public static int Run(IReadOnlyList<string> args, TextWriter stdout, TextWriter stderr)
     {
         string? tempArtifacts = null;
+        string? tempDecks = null;
         try
         {
             var line = CommandLine.Parse(args);
@@ -79,9 +81,21 @@ internal static class ReportCommand
             var total = reports.Sum(r => r.Findings.Count);
             stdout.WriteLine($"{reports.Count} design(s) checked, {total} finding(s), {errors} at error severity.");
 
+            IReadOnlyList<ExportedDeck> decks = Array.Empty<ExportedDeck>();
+            if (line.SpicePath is not null || line.Confirm)
+            {
+                var spice = line.SpicePath ?? (tempDecks = Path.Combine(Path.GetTempPath(), "phaseward-decks-" + Guid.NewGuid().ToString("N")));
+                decks = DeckExport.Write(spice, reports, stdout);
+                if (line.SpicePath is not null)
+                    stdout.WriteLine($"{decks.Count} SPICE deck(s) written to {Path.GetFullPath(spice)}");
+                if (line.Confirm)
+                    DeckConfirmation.Run(decks, stdout);
+            }
+
             if (line.HtmlPath is { } html)
             {
-                AtomicFile.WriteAllText(html, HtmlReport.Render(input, reports, catalog.Skipped));
+                var links = line.SpicePath is null ? null : decks;
+                AtomicFile.WriteAllText(html, HtmlReport.Render(input, reports, catalog.Skipped, links, html));
                 stdout.WriteLine($"HTML report written to {Path.GetFullPath(html)}");
             }
 
@@ -96,6 +110,8 @@ internal static class ReportCommand
         {
             if (tempArtifacts is not null)
                 TryDelete(tempArtifacts);
+            if (tempDecks is not null)
+                TryDelete(tempDecks);
         }
     }
 

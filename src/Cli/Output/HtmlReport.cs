@@ -7,6 +7,7 @@ using System.Text;
 using Phaseward.Cli.Loading;
 using Phaseward.Cli.Model;
 using Phaseward.Cli.Policy;
+using Phaseward.Cli.Reproduction;
 
 namespace Phaseward.Cli.Output;
 
@@ -16,7 +17,10 @@ namespace Phaseward.Cli.Output;
 /// </summary>
 internal static class HtmlReport
 {
-    public static string Render(string input, IReadOnlyList<DesignReport> reports, IReadOnlyList<SkippedDesign> skipped)
+    /// <param name="decks">The decks written with --spice (each finding links its deck, and shows what ngspice measured
+    /// with --confirm); null when none were written.</param>
+    public static string Render(string input, IReadOnlyList<DesignReport> reports, IReadOnlyList<SkippedDesign> skipped,
+        IReadOnlyList<ExportedDeck>? decks = null, string? pagePath = null)
     {
         var h = new StringBuilder();
         h.AppendLine("<!DOCTYPE html>");
@@ -47,13 +51,13 @@ internal static class HtmlReport
 
         h.Append("<p class=\"caution\">").Append(E(Describe.Caution)).AppendLine("</p></header>");
         foreach (var r in reports)
-            Design(h, r);
+            Design(h, r, decks, pagePath);
         h.AppendLine("</body>");
         h.AppendLine("</html>");
         return h.ToString();
     }
 
-    private static void Design(StringBuilder h, DesignReport r)
+    private static void Design(StringBuilder h, DesignReport r, IReadOnlyList<ExportedDeck>? decks, string? pagePath)
     {
         var n = r.Netlist;
         h.Append("<section class=\"design\" id=\"").Append(E(Anchor(r))).Append("\" data-design=\"").Append(E(r.Name)).AppendLine("\">");
@@ -64,10 +68,15 @@ internal static class HtmlReport
         h.AppendLine("<h3>Findings</h3>");
         if (r.Findings.Count == 0)
             h.Append("<p class=\"clean\">No findings.").Append(r.Suppressed > 0 ? $" ({r.Suppressed} left out: severity none)" : string.Empty).AppendLine("</p>");
-        else
+        else if (decks is null)
             Table(h, "findings", new[] { "severity", "rule", "location", "message" }, r.Findings.Select(f => new[]
             {
                 Chip(f.Severity), E(f.RuleId), E(Describe.Location(f.Location)), E(f.Message),
+            }), rowClass: r.Findings.Select(f => "sev-" + SeverityPolicy.Name(f.Severity)).ToList());
+        else
+            Table(h, "findings", new[] { "severity", "rule", "location", "message", "SPICE deck" }, r.Findings.Select(f => new[]
+            {
+                Chip(f.Severity), E(f.RuleId), E(Describe.Location(f.Location)), E(f.Message), DeckCell(decks.FirstOrDefault(d => ReferenceEquals(d.Finding, f)), pagePath),
             }), rowClass: r.Findings.Select(f => "sev-" + SeverityPolicy.Name(f.Severity)).ToList());
 
         h.AppendLine("<h3>Clock phases and latch windows</h3>");
@@ -155,6 +164,17 @@ internal static class HtmlReport
         }
 
         h.AppendLine("</section>");
+    }
+
+    // The finding's deck as a link relative to the page, with the simulated figures when --confirm ran it.
+    private static string DeckCell(ExportedDeck? deck, string? pagePath)
+    {
+        if (deck is null) return "<span class=\"no-deck\">none</span>";
+        var folder = pagePath is null ? null : Path.GetDirectoryName(Path.GetFullPath(pagePath));
+        var href = (folder is null ? deck.Path : Path.GetRelativePath(folder, deck.Path)).Replace('\\', '/');
+        var link = "<a class=\"deck\" href=\"" + E(string.Join("/", href.Split('/').Select(System.Uri.EscapeDataString))) + "\">" + E(Path.GetFileName(deck.Path)) + "</a>";
+        var simulated = DeckConfirmation.Summary(deck);
+        return simulated.Length == 0 ? link : link + "<br /><span class=\"simulated\">simulated: " + E(simulated) + "</span>";
     }
 
     private static void Table(StringBuilder h, string cls, string[] headers, IEnumerable<string[]> rows, int[]? numeric = null, IReadOnlyList<string>? rowClass = null)

@@ -44,6 +44,9 @@ public static class RuleCatalog
     public static RuleDescriptor LatchBorrowing { get; } = new(
         RuleIds.LatchBorrowing, RuleTexts.LatchBorrowingTitle, RuleTexts.LatchBorrowingMessage, RuleCategories.Timing, Severity.Warning, RuleTexts.LatchBorrowingDescription);
 
+    public static RuleDescriptor LatchWriteWindow { get; } = new(
+        RuleIds.LatchWriteWindow, RuleTexts.LatchWriteWindowTitle, RuleTexts.LatchWriteWindowMessage,
+        RuleCategories.Timing, Severity.Warning, RuleTexts.LatchWriteWindowDescription);
     public static RuleDescriptor LatchLoop { get; } = new(
         RuleIds.LatchLoop, RuleTexts.LatchLoopTitle, RuleTexts.LatchLoopMessage, RuleCategories.Timing, Severity.Warning, RuleTexts.LatchLoopDescription);
     public static RuleDescriptor SeriesPassGates { get; } = new(
@@ -75,6 +78,7 @@ public static class RuleCatalog
         RegisterSetup,
         RegisterHold,
         LatchBorrowing,
+        LatchWriteWindow,
         LatchLoop,
         DynamicNodeOnGatedClock,
         ClockTooSlowForDynamicStorage,

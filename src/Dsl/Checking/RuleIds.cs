@@ -27,6 +27,8 @@ public static class RuleIds
 
     /// <summary>A two-phase latch path arrives after the capturing latch closes, even with time borrowing.</summary>
     public const string LatchBorrowing = "PW4003";
+    /// <summary>A latch's window is too short for its entry gate to write the storage node.</summary>
+    public const string LatchWriteWindow = "PW4004";
 
     /// <summary>A loop of latches whose delays exceed the time its phases give it: borrowing grows every cycle.</summary>
     public const string LatchLoop = "PW4005";

@@ -13,6 +13,7 @@ public static class RuleSet
         new LoopWithoutStorageRule(),
         new RegisterTimingRule(),
         new LatchBorrowingRule(),
+        new LatchWriteWindowRule(),
         new PassGateChainRule(),
         new DynamicNodeOnGatedClockRule(),
         new ClockTooSlowForDynamicStorageRule(),

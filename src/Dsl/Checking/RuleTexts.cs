@@ -41,9 +41,18 @@ public static class RuleTexts
     public const string LatchLoopTitle = "Latch loop gains time every cycle";
     public const string LatchLoopMessage = "The latch loop {0} ({1} paths) takes {2} round but its phases give it only {3}: each latch borrows {4} more every time round until one misses its window";
     public const string LatchLoopDescription = "Data going round a loop of latches must take no longer than the time between the loop's window openings added up round the loop. If the delays exceed it, every latch on the loop borrows more each cycle and the loop has no steady state; sooner or later data misses a window. First-order estimate, slow corner.";
+
+    public const string LatchWriteWindowTitle = "Latch window too short to write its storage node";
+    public const string LatchWriteWindowMessage =
+        "Latch '{0}' cannot be written in its window: it is open {1}, {2} of it with both halves of its entry gate on (complement skew {3}), but the entry gate needs {4} to charge storage node '{5}' (0.69·R·C with R = {6}, C = {7}; margin {8})";
+    public const string LatchWriteWindowDescription =
+        "A latch's entry gate must charge its storage node while the latch is transparent. A window (less the complement skew at each end) shorter than the gate's RC delay into the node lets the latch close on its old value whatever the data's timing: a pulse latch with a short pulse and a heavy node is the usual case. First-order estimate.";
     public const string SeriesPassGatesTitle = "Pass gates in series without a restoring stage";
     public const string SeriesPassGatesMessage =
-        "{0} pass gates in series without a restoring stage (limit {1}): Elmore delay {2} (50% estimate {3}); a restoring stage every {4} gates would give about {5}";
+        "{0} pass gates in series without a restoring stage (limit {1}): Elmore delay {2} (50% estimate {3}); a restoring stage every {4} gates would give about {5}{6}";
+    /// <summary>PW2001's {6} when its worst case counts branches not known to be exclusive as conducting together.</summary>
+    public const string SeriesPassGatesAssumption =
+        "; this worst case assumes that mux branches whose controls are not known to be exclusive conduct together (state Circuit.Exclusive to count them off)";
     public const string SeriesPassGatesDescription =
         "A chain of pass gates with no restoring stage is an RC ladder: its delay grows with the square of its length and its edges slow down. "
         + "The rule reports a chain longer than phaseward.max_series_pass_gates (default: the optimum restoring-stage spacing of the design's process, at least 2) "

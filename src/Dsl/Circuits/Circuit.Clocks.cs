@@ -19,6 +19,8 @@ public sealed partial class Circuit
         bool independent = false,
         [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
     {
+        Guard.Name(name, nameof(name));
+        name = Scoped(name);
         CheckNewClockName(name, nameof(name));
         Guard.Positive(period.Seconds, nameof(period), "s");
         Guard.Fraction(duty, nameof(duty));
@@ -54,10 +56,11 @@ public sealed partial class Circuit
             throw new ArgumentException($"'{nameof(stopsAt)}' must be ClockStopLevel.Low or ClockStopLevel.High (was {(int)stopsAt}).", nameof(stopsAt));
         if (maxIdle is { } idle)
             Guard.Positive(idle.Seconds, nameof(maxIdle), "s");
+        name = ScopedOrNull(name);
         if (name is not null)
             CheckNewClockName(name, nameof(name));
 
-        return AddClock(name ?? AutoClockName(clock.Name + ".gated"), ClockKind.Gated, clock, clock.Period, clock.Duty, null, Time.Zero,
+        return AddClock(name ?? AutoClockName(ScopedOnce(clock.Name + ".gated")), ClockKind.Gated, clock, clock.Period, clock.Duty, null, Time.Zero,
             enable, stopsAt, maxIdle, Site(callerFile, callerLine));
     }
 
@@ -69,10 +72,11 @@ public sealed partial class Circuit
         CheckClock(clock, nameof(clock));
         if (delay is { } d)
             Guard.NonNegative(d.Seconds, nameof(delay), "s");
+        name = ScopedOrNull(name);
         if (name is not null)
             CheckNewClockName(name, nameof(name));
 
-        return AddClock(name ?? AutoClockName(clock.Name + ".buf"), ClockKind.Buffered, clock, clock.Period, clock.Duty, null,
+        return AddClock(name ?? AutoClockName(ScopedOnce(clock.Name + ".buf")), ClockKind.Buffered, clock, clock.Period, clock.Duty, null,
             delay, null, ClockStopLevel.Low, null, Site(callerFile, callerLine));
     }
 

@@ -34,6 +34,9 @@ internal static class Descriptors
     public static readonly DiagnosticDescriptor LatchBorrowing = DescriptorFactory.Create(
         RuleIds.LatchBorrowing, RuleTexts.LatchBorrowingTitle, RuleTexts.LatchBorrowingMessage, RuleCategories.Timing,
         DiagnosticSeverity.Warning, RuleTexts.LatchBorrowingDescription);
+    public static readonly DiagnosticDescriptor LatchWriteWindow = DescriptorFactory.Create(
+        RuleIds.LatchWriteWindow, RuleTexts.LatchWriteWindowTitle, RuleTexts.LatchWriteWindowMessage, RuleCategories.Timing,
+        DiagnosticSeverity.Warning, RuleTexts.LatchWriteWindowDescription);
 
     public static readonly DiagnosticDescriptor LatchLoop = DescriptorFactory.Create(
         RuleIds.LatchLoop, RuleTexts.LatchLoopTitle, RuleTexts.LatchLoopMessage, RuleCategories.Timing,
@@ -88,6 +91,7 @@ internal static class Descriptors
         RegisterSetup,
         RegisterHold,
         LatchBorrowing,
+        LatchWriteWindow,
         LatchLoop,
         NotElaborated,
         ElaborationBudgetExceeded,

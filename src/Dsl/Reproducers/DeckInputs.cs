@@ -1,0 +1,37 @@
+using System;
+using System.Globalization;
+
+namespace Phaseward.Reproducers;
+
+/// <summary>Reads what a deck needs from a finding's properties and the netlist, with clear errors when they do not match.</summary>
+internal static class DeckInputs
+{
+    public static string Property(Finding finding, string key)
+        => finding.Properties.TryGetValue(key, out var value) && value.Length > 0
+            ? value
+            : throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location} has no '{key}' property, which its deck needs.", nameof(finding));
+
+    public static Device DeviceById(Finding finding, Netlist netlist, string key)
+    {
+        var text = Property(finding, key);
+        if (!int.TryParse(text, NumberStyles.Integer, CultureInfo.InvariantCulture, out var id) || id < 0 || id >= netlist.Devices.Count)
+            throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location} names device {text}, which is not in the netlist of design '{netlist.DesignName}'.", nameof(netlist));
+        return netlist.Devices[id];
+    }
+
+    public static Net NetByName(Finding finding, Netlist netlist, string key)
+    {
+        var name = Property(finding, key);
+        foreach (var net in netlist.Nets)
+            if (string.Equals(net.Name, name, StringComparison.Ordinal))
+                return net;
+        throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location} names net '{name}', which is not in the netlist of design '{netlist.DesignName}'.", nameof(netlist));
+    }
+
+    public static StorageNode StorageNodeByName(Finding finding, Netlist netlist, string key)
+    {
+        var net = NetByName(finding, netlist, key);
+        return StorageNodes.Find(netlist, net)
+            ?? throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location} names '{net.Name}', which is not a storage node in design '{netlist.DesignName}'.", nameof(netlist));
+    }
+}

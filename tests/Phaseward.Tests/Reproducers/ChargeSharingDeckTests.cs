@@ -1,0 +1,34 @@
+using System.Linq;
+using Phaseward.Reproducers;
+
+namespace Phaseward.Tests.Reproducers;
+
+/// <summary>
+/// PW3003 decks. Reference: the deck run in ngspice (ngspice-39, batch mode); the estimate it is compared with is
+/// V·C1/(C1+C2) by conservation of charge (common practice).
+/// </summary>
+public class ChargeSharingDeckTests
+{
+    [Fact]
+    public void TheDeckSettlesWithinFivePercentOfTheStatedLevel()
+    {
+        var c = new Circuit("ShareTest");
+        var clk = c.Clock("clk", 10.Nanoseconds());
+        var a = c.TransmissionGate(c.Input("d"), clk.Low, "a");
+        var b = c.TransmissionGate(a, clk.High, "b");
+        c.Inverter(b, "q");
+        var report = Checker.Check(c.ToNetlist());
+        var finding = report.Findings.Single(f => f.RuleId == "PW3003");
+
+        var deck = Reproducer.Deck(finding, report.Netlist);
+        var measured = Ngspice.Run(deck);
+
+        // The message states 565 mV (1.2 V × 4 fF / 8.5 fF = 564.7 mV).
+        Assert.Contains("settles at 565 mV", finding.Message);
+        var stated = 1.2 * 4 / 8.5;
+        Assert.Equal(stated, deck.Estimates.Single(e => e.Name == "v_settled").Value, 9);
+        var settled = measured.Value("v_settled", deck);
+        Assert.InRange(settled, stated * 0.95, stated * 1.05);
+        Assert.InRange(measured.Value("droop", deck), 1.2 - stated * 1.05, 1.2 - stated * 0.95);
+    }
+}
