@@ -43,7 +43,7 @@ public class RegisterPathDeckTests
     [Fact]
     public void APw4002DeckLosesItsHoldMarginAsEstimated()
     {
-        var (netlist, finding) = Pipeline(1000, 1, 150, "PW4002");
+        var (netlist, finding) = Pipeline(1000, 1, 250, "PW4002");
         var deck = Reproducer.Deck(finding, netlist);
         var measured = Ngspice.Run(deck);
 
