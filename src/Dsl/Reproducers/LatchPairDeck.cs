@@ -85,6 +85,30 @@ internal static class LatchPairDeck
         deck.PassGate(entryA, input, storageA, controlA);
         deck.Capacitor(storageA, netlist.CapacitanceOf(a.Storage), $"'{a.Storage.Name}', storage of '{a.Name}'");
 
+        DrawStages(deck, netlist, stages);
+
+        var storageB = deck.Node(b.Storage);
+        deck.PassGate(entryB, deck.Node(entryB.Inputs[0]), storageB, controlB);
+        deck.Capacitor(storageB, netlist.CapacitanceOf(b.Storage), $"'{b.Storage.Name}', storage of '{b.Name}'");
+
+        var step = Time.Min(edge, fastest / 50);
+        deck.Transient(step, end, Time.Min(period / 200, fastest / 10));
+        var dataTime = SpiceNumbers.Of((dataAt + edge / 2).Seconds);
+        deck.Measure($".meas tran b_before FIND v({storageB}) AT={dataTime}", null);
+        deck.Measure($".meas tran b_at_close FIND v({storageB}) AT={SpiceNumbers.Of(closes)}", null);
+        deck.Measure($".meas tran t_through TRIG AT={dataTime} TARG v({storageB}) VAL={{vdd/2}} CROSS=1 TD={dataTime}",
+            new DeckEstimate("t_through", fastest.Seconds, "s", "fastest path: first latch's entry + path + second latch's entry, 0.69·R·C per stage"));
+        var expected = sameWindow ? 1.0 : (fastest < RaceModel.Overlap(model, phaseA, phaseB) ? 1.0 : 0.0);
+        deck.Measure(".meas tran race_through PARAM='abs(b_at_close - b_before) > vdd/2 ? 1 : 0'",
+            new DeckEstimate("race_through", expected, string.Empty, sameWindow
+                ? "1: data passes both latches in one window"
+                : "1 when the fastest path is shorter than the overlap"));
+        return deck.Build();
+    }
+
+    /// <summary>The path's stages as the deck draws them: restoring stages as models, data-controlled pass gates held on.</summary>
+    internal static void DrawStages(DeckWriter deck, Netlist netlist, IReadOnlyList<Stage> stages)
+    {
         string? on = null;
         foreach (var stage in stages)
         {
@@ -107,24 +131,6 @@ internal static class LatchPairDeck
 
             deck.Capacitor(output, netlist.CapacitanceOf(stage.Device.Output), $"'{stage.Device.Output.Name}'");
         }
-
-        var storageB = deck.Node(b.Storage);
-        deck.PassGate(entryB, deck.Node(entryB.Inputs[0]), storageB, controlB);
-        deck.Capacitor(storageB, netlist.CapacitanceOf(b.Storage), $"'{b.Storage.Name}', storage of '{b.Name}'");
-
-        var step = Time.Min(edge, fastest / 50);
-        deck.Transient(step, end, Time.Min(period / 200, fastest / 10));
-        var dataTime = SpiceNumbers.Of((dataAt + edge / 2).Seconds);
-        deck.Measure($".meas tran b_before FIND v({storageB}) AT={dataTime}", null);
-        deck.Measure($".meas tran b_at_close FIND v({storageB}) AT={SpiceNumbers.Of(closes)}", null);
-        deck.Measure($".meas tran t_through TRIG AT={dataTime} TARG v({storageB}) VAL={{vdd/2}} CROSS=1 TD={dataTime}",
-            new DeckEstimate("t_through", fastest.Seconds, "s", "fastest path: first latch's entry + path + second latch's entry, 0.69·R·C per stage"));
-        var expected = sameWindow ? 1.0 : (fastest < RaceModel.Overlap(model, phaseA, phaseB) ? 1.0 : 0.0);
-        deck.Measure(".meas tran race_through PARAM='abs(b_at_close - b_before) > vdd/2 ? 1 : 0'",
-            new DeckEstimate("race_through", expected, string.Empty, sameWindow
-                ? "1: data passes both latches in one window"
-                : "1 when the fastest path is shorter than the overlap"));
-        return deck.Build();
     }
 
     // The first moment after 'after' at which the phase stops conducting.

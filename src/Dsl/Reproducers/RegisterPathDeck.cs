@@ -65,28 +65,7 @@ internal static class RegisterPathDeck
         var storageA = deck.Node(a.Storage);
         deck.PassGate(entryA, input, storageA, controlA);
         deck.Capacitor(storageA, netlist.CapacitanceOf(a.Storage), $"'{a.Storage.Name}', storage of '{a.Name}'");
-        string? on = null;
-        foreach (var s in stages)
-        {
-            var output = deck.Node(s.Device.Output);
-            var from = deck.Node(s.From);
-            if (s.Device.IsRestoring)
-            {
-                deck.RestoringStage(s.Device, from, output);
-            }
-            else
-            {
-                if (on is null)
-                {
-                    on = deck.Fresh("on_data_gates");
-                    deck.Dc(on, "{vdd}", "data-controlled pass gates on the path held conducting");
-                }
-
-                deck.PassGate(s.Device, from, output, on);
-            }
-
-            deck.Capacitor(output, netlist.CapacitanceOf(s.Device.Output), $"'{s.Device.Output.Name}'");
-        }
+        LatchPairDeck.DrawStages(deck, netlist, stages);
 
         var masterInput = deck.Node(entryB.Inputs[0]);
         var storageB = deck.Node(b.Storage);
