@@ -20,10 +20,15 @@ public static class Program
             new Housekeeping(),
             new HousekeepingStatic(),
             new StrainLanes(),
+            new TwoPhaseTally(),
+            new RadioHandoff(),
+            new RadioHandoffSynchronized(),
             new WakeLogic(),
             new WakeLogicRegistered(),
             new MooringHold(),
             new MooringHoldWeakKeeper(),
+            new TelemetryBus(),
+            new TelemetryBusSelected(),
         };
 
         var findings = 0;

@@ -1,8 +1,8 @@
 using System;
 using System.IO;
 using System.Linq;
-using Phaseward.Cli.Reproduction;
 using Phaseward.Checking;
+using Phaseward.Cli.Reproduction;
 using static Phaseward.Cli.Tests.CliRun;
 
 namespace Phaseward.Cli.Tests;

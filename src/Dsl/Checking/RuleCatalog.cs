@@ -29,6 +29,9 @@ public static class RuleCatalog
     public static RuleDescriptor OverlapRace { get; } = new(
         RuleIds.OverlapRace, RuleTexts.OverlapRaceTitle, RuleTexts.OverlapRaceMessage, RuleCategories.ClockPhases, Severity.Warning, RuleTexts.OverlapRaceDescription);
 
+    public static RuleDescriptor ClockCrossing { get; } = new(
+        RuleIds.ClockCrossing, RuleTexts.ClockCrossingTitle, RuleTexts.ClockCrossingMessage, RuleCategories.ClockPhases, Severity.Warning, RuleTexts.ClockCrossingDescription);
+
     public static RuleDescriptor LoopWithoutStorage { get; } = new(
         RuleIds.LoopWithoutStorage, RuleTexts.LoopWithoutStorageTitle, RuleTexts.LoopWithoutStorageMessage, RuleCategories.ClockPhases, Severity.Warning,
         RuleTexts.LoopWithoutStorageDescription);
@@ -41,6 +44,12 @@ public static class RuleCatalog
 
     public static RuleDescriptor LatchBorrowing { get; } = new(
         RuleIds.LatchBorrowing, RuleTexts.LatchBorrowingTitle, RuleTexts.LatchBorrowingMessage, RuleCategories.Timing, Severity.Warning, RuleTexts.LatchBorrowingDescription);
+
+    public static RuleDescriptor LatchWriteWindow { get; } = new(
+        RuleIds.LatchWriteWindow, RuleTexts.LatchWriteWindowTitle, RuleTexts.LatchWriteWindowMessage,
+        RuleCategories.Timing, Severity.Warning, RuleTexts.LatchWriteWindowDescription);
+    public static RuleDescriptor LatchLoop { get; } = new(
+        RuleIds.LatchLoop, RuleTexts.LatchLoopTitle, RuleTexts.LatchLoopMessage, RuleCategories.Timing, Severity.Warning, RuleTexts.LatchLoopDescription);
     public static RuleDescriptor SeriesPassGates { get; } = new(
         RuleIds.SeriesPassGates, RuleTexts.SeriesPassGatesTitle, RuleTexts.SeriesPassGatesMessage, RuleCategories.PassGatePaths, Severity.Warning,
         RuleTexts.SeriesPassGatesDescription);
@@ -56,6 +65,10 @@ public static class RuleCatalog
         RuleIds.ChargeSharing, RuleTexts.ChargeSharingTitle, RuleTexts.ChargeSharingMessage,
         RuleCategories.DynamicStorage, Severity.Warning, RuleTexts.ChargeSharingDescription);
 
+    public static RuleDescriptor FightingDrivers { get; } = new(
+        RuleIds.FightingDrivers, RuleTexts.FightingDriversTitle, RuleTexts.FightingDriversMessage,
+        RuleCategories.DynamicStorage, Severity.Warning, RuleTexts.FightingDriversDescription);
+
     public static RuleDescriptor KeeperTooStrong { get; } = new(
         RuleIds.KeeperTooStrong, RuleTexts.KeeperTooStrongTitle, RuleTexts.KeeperTooStrongMessage,
         RuleCategories.DynamicStorage, Severity.Warning, RuleTexts.KeeperTooStrongDescription);
@@ -65,13 +78,17 @@ public static class RuleCatalog
         SeriesPassGates,
         SameWindowLatches,
         OverlapRace,
+        ClockCrossing,
         LoopWithoutStorage,
         RegisterSetup,
         RegisterHold,
         LatchBorrowing,
+        LatchWriteWindow,
+        LatchLoop,
         DynamicNodeOnGatedClock,
         ClockTooSlowForDynamicStorage,
         ChargeSharing,
+        FightingDrivers,
         KeeperTooStrong,
         NotElaborated,
         ElaborationBudgetExceeded,

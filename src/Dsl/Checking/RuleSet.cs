@@ -13,13 +13,16 @@ public static class RuleSet
     {
         new SameWindowLatchesRule(),
         new OverlapRaceRule(),
+        new ClockCrossingRule(),
         new LoopWithoutStorageRule(),
         new RegisterTimingRule(),
         new LatchBorrowingRule(),
+        new LatchWriteWindowRule(),
         new PassGateChainRule(),
         new DynamicNodeOnGatedClockRule(),
         new ClockTooSlowForDynamicStorageRule(),
         new ChargeSharingRule(),
+        new FightingDriversRule(),
         new KeeperTooStrongRule(),
     };
 }

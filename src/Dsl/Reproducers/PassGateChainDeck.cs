@@ -2,8 +2,8 @@ using System;
 using System.Collections.Generic;
 using System.Globalization;
 using Phaseward.Checking;
-using Phaseward.Netlists;
 using Phaseward.Electrical;
+using Phaseward.Netlists;
 using Phaseward.Rules.PassGatePaths;
 
 namespace Phaseward.Reproducers;

@@ -1,10 +1,10 @@
 using System;
 using System.Collections.Generic;
 using Phaseward.Checking;
-using Phaseward.Netlists;
-using Phaseward.Storage;
 using Phaseward.Clocking;
+using Phaseward.Netlists;
 using Phaseward.Rules.DynamicStorage;
+using Phaseward.Storage;
 
 namespace Phaseward.Reproducers;
 

@@ -1,8 +1,8 @@
 using System;
 using System.Linq;
-using Phaseward.Reproducers;
 using Phaseward.Checking;
 using Phaseward.Netlists;
+using Phaseward.Reproducers;
 
 namespace Phaseward.Tests.Reproducers;
 

@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Linq;
+using Phaseward.Checking;
 using Phaseward.Reproducers;
 using Phaseward.Rules.DynamicStorage;
 

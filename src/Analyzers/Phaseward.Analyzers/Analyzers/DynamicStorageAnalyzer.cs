@@ -6,7 +6,7 @@ using Phaseward.Rules.DynamicStorage;
 
 namespace Phaseward.Analyzers;
 
-/// <summary>PW3xxx: dynamic nodes on gatable clocks, clocks too slow for dynamic storage, charge sharing, keepers too strong to write.</summary>
+/// <summary>PW3xxx: dynamic nodes on gatable clocks, clocks too slow for dynamic storage, charge sharing, fighting drivers, keepers too strong to write.</summary>
 [DiagnosticAnalyzer(LanguageNames.CSharp)]
 public sealed class DynamicStorageAnalyzer : FindingAnalyzer
 {
@@ -15,6 +15,7 @@ public sealed class DynamicStorageAnalyzer : FindingAnalyzer
         new DynamicNodeOnGatedClockRule(),
         new ClockTooSlowForDynamicStorageRule(),
         new ChargeSharingRule(),
+        new FightingDriversRule(),
         new KeeperTooStrongRule(),
     };
 }

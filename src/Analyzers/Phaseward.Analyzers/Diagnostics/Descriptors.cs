@@ -17,6 +17,10 @@ internal static class Descriptors
         RuleIds.OverlapRace, RuleTexts.OverlapRaceTitle, RuleTexts.OverlapRaceMessage, RuleCategories.ClockPhases,
         DiagnosticSeverity.Warning, RuleTexts.OverlapRaceDescription);
 
+    public static readonly DiagnosticDescriptor ClockCrossing = DescriptorFactory.Create(
+        RuleIds.ClockCrossing, RuleTexts.ClockCrossingTitle, RuleTexts.ClockCrossingMessage, RuleCategories.ClockPhases,
+        DiagnosticSeverity.Warning, RuleTexts.ClockCrossingDescription);
+
     public static readonly DiagnosticDescriptor LoopWithoutStorage = DescriptorFactory.Create(
         RuleIds.LoopWithoutStorage, RuleTexts.LoopWithoutStorageTitle, RuleTexts.LoopWithoutStorageMessage, RuleCategories.ClockPhases,
         DiagnosticSeverity.Warning, RuleTexts.LoopWithoutStorageDescription);
@@ -32,6 +36,13 @@ internal static class Descriptors
     public static readonly DiagnosticDescriptor LatchBorrowing = DescriptorFactory.Create(
         RuleIds.LatchBorrowing, RuleTexts.LatchBorrowingTitle, RuleTexts.LatchBorrowingMessage, RuleCategories.Timing,
         DiagnosticSeverity.Warning, RuleTexts.LatchBorrowingDescription);
+    public static readonly DiagnosticDescriptor LatchWriteWindow = DescriptorFactory.Create(
+        RuleIds.LatchWriteWindow, RuleTexts.LatchWriteWindowTitle, RuleTexts.LatchWriteWindowMessage, RuleCategories.Timing,
+        DiagnosticSeverity.Warning, RuleTexts.LatchWriteWindowDescription);
+
+    public static readonly DiagnosticDescriptor LatchLoop = DescriptorFactory.Create(
+        RuleIds.LatchLoop, RuleTexts.LatchLoopTitle, RuleTexts.LatchLoopMessage, RuleCategories.Timing,
+        DiagnosticSeverity.Warning, RuleTexts.LatchLoopDescription);
     public static readonly DiagnosticDescriptor SeriesPassGates = DescriptorFactory.Create(
         RuleIds.SeriesPassGates, RuleTexts.SeriesPassGatesTitle, RuleTexts.SeriesPassGatesMessage, RuleCategories.PassGatePaths,
         DiagnosticSeverity.Warning, RuleTexts.SeriesPassGatesDescription);
@@ -46,6 +57,10 @@ internal static class Descriptors
     public static readonly DiagnosticDescriptor ChargeSharing = DescriptorFactory.Create(
         RuleIds.ChargeSharing, RuleTexts.ChargeSharingTitle, RuleTexts.ChargeSharingMessage,
         RuleCategories.DynamicStorage, DiagnosticSeverity.Warning, RuleTexts.ChargeSharingDescription);
+
+    public static readonly DiagnosticDescriptor FightingDrivers = DescriptorFactory.Create(
+        RuleIds.FightingDrivers, RuleTexts.FightingDriversTitle, RuleTexts.FightingDriversMessage,
+        RuleCategories.DynamicStorage, DiagnosticSeverity.Warning, RuleTexts.FightingDriversDescription);
 
     public static readonly DiagnosticDescriptor KeeperTooStrong = DescriptorFactory.Create(
         RuleIds.KeeperTooStrong, RuleTexts.KeeperTooStrongTitle, RuleTexts.KeeperTooStrongMessage,
@@ -72,15 +87,19 @@ internal static class Descriptors
     {
         SameWindowLatches,
         OverlapRace,
+        ClockCrossing,
         LoopWithoutStorage,
         SeriesPassGates,
         DynamicNodeOnGatedClock,
         ClockTooSlowForDynamicStorage,
         ChargeSharing,
+        FightingDrivers,
         KeeperTooStrong,
         RegisterSetup,
         RegisterHold,
         LatchBorrowing,
+        LatchWriteWindow,
+        LatchLoop,
         NotElaborated,
         ElaborationBudgetExceeded,
         DesignThrows,

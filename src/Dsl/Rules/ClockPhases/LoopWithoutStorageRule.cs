@@ -118,18 +118,10 @@ public sealed class LoopWithoutStorageRule : Rule
         {
             if (ReferenceEquals(other, gate) || other.DataControl is not { } otherControl)
                 continue;
-            if (IsInverseOf(netlist, otherControl, control) || IsInverseOf(netlist, control, otherControl))
+            if (netlist.AreComplementary(otherControl, control))
                 return true;
         }
 
-        return false;
-    }
-
-    private static bool IsInverseOf(Netlist netlist, Net net, Net of)
-    {
-        foreach (var driver in netlist.DriverList(net))
-            if (driver.Kind == DeviceKind.Inverter && !driver.IsWeak && ReferenceEquals(driver.Inputs[0], of))
-                return true;
         return false;
     }
 
