@@ -28,6 +28,10 @@ public static class RuleCatalog
     public static RuleDescriptor OverlapRace { get; } = new(
         RuleIds.OverlapRace, RuleTexts.OverlapRaceTitle, RuleTexts.OverlapRaceMessage, RuleCategories.ClockPhases, Severity.Warning, RuleTexts.OverlapRaceDescription);
 
+    public static RuleDescriptor ClockGateEnable { get; } = new(
+        RuleIds.ClockGateEnable, RuleTexts.ClockGateEnableTitle, RuleTexts.ClockGateEnableMessage, RuleCategories.ClockPhases, Severity.Warning,
+        RuleTexts.ClockGateEnableDescription);
+
     public static RuleDescriptor LoopWithoutStorage { get; } = new(
         RuleIds.LoopWithoutStorage, RuleTexts.LoopWithoutStorageTitle, RuleTexts.LoopWithoutStorageMessage, RuleCategories.ClockPhases, Severity.Warning,
         RuleTexts.LoopWithoutStorageDescription);
@@ -68,6 +72,7 @@ public static class RuleCatalog
         SeriesPassGates,
         SameWindowLatches,
         OverlapRace,
+        ClockGateEnable,
         LoopWithoutStorage,
         RegisterSetup,
         RegisterHold,

@@ -13,6 +13,9 @@ public static class RuleIds
     /// <summary>A latch pair on complementary phases races through the clock overlap.</summary>
     public const string OverlapRace = "PW1002";
 
+    /// <summary>A clock gate's enable can change while the gate passes the clock.</summary>
+    public const string ClockGateEnable = "PW1004";
+
     /// <summary>A feedback loop through restoring stages and data-controlled pass gates with no latch on it.</summary>
     public const string LoopWithoutStorage = "PW1005";
 

@@ -9,6 +9,7 @@ public static class RuleSet
     {
         new SameWindowLatchesRule(),
         new OverlapRaceRule(),
+        new ClockGateEnableRule(),
         new LoopWithoutStorageRule(),
         new RegisterTimingRule(),
         new LatchBorrowingRule(),

@@ -15,6 +15,15 @@ public static class RuleTexts
     public const string OverlapRaceMessage = "Latch '{0}' can catch data launched through latch '{1}' during the {2} overlap of clock '{3}': the fastest path takes {4} but both pass gates conduct together for {5} (margin {6})";
     public const string OverlapRaceDescription = "Two latches on complementary phases of one clock are both transparent while the clock and its late complement overlap. Data entering the first latch when it opens must not reach the second latch's storage node before the second latch closes: the shortest delay through the first latch, the path and the second latch's pass gate must exceed the overlap. For a master-slave register this is t(TG1) + t(I1) + t(TG2) against the 0-0 overlap (rising-edge register).";
 
+    public const string ClockGateEnableTitle = "Clock gate's enable can change while the gate passes the clock";
+    public const string ClockGateEnableMessage =
+        "Clock gate '{0}' passes clock '{1}' during {2} (while it is {3}), but its enable '{4}' can change {5}: the gated clock can be clipped or get an extra pulse";
+    public const string ClockGateEnableFromLatch = "during {0} (from latch '{1}', transparent in {2}, through a {3} path)";
+    public const string ClockGateEnableUnrelated = "at any time (from latch '{0}', transparent in {1}, whose root clock is not '{2}')";
+    public const string ClockGateEnableFromInput = "at any time (from primary input '{0}', taken as changing at any time by phaseward.clock_gate_inputs_may_change)";
+    public const string ClockGateEnableDescription =
+        "A clock gate that stops low passes its clock while the clock is high; if its enable changes then, the gated clock gets a clipped or an extra pulse. The enable must come, through logic, from storage transparent only while the clock is low, and arrive (latest data through that storage plus the path) before the clock rises; the mirror holds for a gate that stops high. Primary inputs are taken as stable unless phaseward.clock_gate_inputs_may_change is true. Latch the enable on the phase in which the gate blocks the clock.";
+
     public const string LoopWithoutStorageTitle = "Feedback loop with no storage element";
     public const string LoopWithoutStorageMessage = "A feedback loop of {0} devices has no latch on it ({1}): {2}";
     public const string LoopWithoutStorageOddLoop = "{0} inversions (odd): enabled, it oscillates with a period of about {1} (twice the loop's delay {2})";

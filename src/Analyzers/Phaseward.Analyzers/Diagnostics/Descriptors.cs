@@ -15,6 +15,10 @@ internal static class Descriptors
         RuleIds.OverlapRace, RuleTexts.OverlapRaceTitle, RuleTexts.OverlapRaceMessage, RuleCategories.ClockPhases,
         DiagnosticSeverity.Warning, RuleTexts.OverlapRaceDescription);
 
+    public static readonly DiagnosticDescriptor ClockGateEnable = DescriptorFactory.Create(
+        RuleIds.ClockGateEnable, RuleTexts.ClockGateEnableTitle, RuleTexts.ClockGateEnableMessage, RuleCategories.ClockPhases,
+        DiagnosticSeverity.Warning, RuleTexts.ClockGateEnableDescription);
+
     public static readonly DiagnosticDescriptor LoopWithoutStorage = DescriptorFactory.Create(
         RuleIds.LoopWithoutStorage, RuleTexts.LoopWithoutStorageTitle, RuleTexts.LoopWithoutStorageMessage, RuleCategories.ClockPhases,
         DiagnosticSeverity.Warning, RuleTexts.LoopWithoutStorageDescription);
@@ -74,6 +78,7 @@ internal static class Descriptors
     {
         SameWindowLatches,
         OverlapRace,
+        ClockGateEnable,
         LoopWithoutStorage,
         SeriesPassGates,
         DynamicNodeOnGatedClock,
