@@ -25,7 +25,7 @@ Options:
                               likewise; none leaves a rule's findings out
   --max-series-pass-gates <n> PW2001 limit (phaseward.max_series_pass_gates)
   --min-race-margin <time>    PW1002 threshold, e.g. 20ps (phaseward.min_race_margin)
-  --min-timing-slack <time>   PW4001-PW4003 threshold, e.g. 0.1ns (phaseward.min_timing_slack)
+  --min-timing-slack <time>   PW4001-PW4004 threshold, e.g. 0.1ns (phaseward.min_timing_slack)
   --no-editorconfig           ignore .editorconfig files
   --artifacts <dir>           where a project is built (default: a new temporary folder, deleted afterwards)
   -h, --help                  this text

@@ -9,6 +9,9 @@ public static class EquivalenceKeys
     public const string SwitchLatchPhase = Prefix + "PW1001.SwitchLatchPhase";
     public const string InsertLatchBeforeRegister = Prefix + "PW1001.InsertLatchBeforeRegister";
 
+    // PW1003
+    public const string InsertSynchronizer = Prefix + "PW1003.InsertSynchronizer";
+
     // PW2001
     public const string InsertRestoringBuffer = Prefix + "PW2001.InsertRestoringBuffer";
     public const string InsertRestoringInverter = Prefix + "PW2001.InsertRestoringInverter";

@@ -86,12 +86,15 @@ internal static class HtmlReport
         }
         else
         {
-            foreach (var root in r.RootClocks)
+            foreach (var group in TimingDiagram.TimeBaseGroups(r.RootClocks))
             {
                 h.Append("<figure class=\"diagram\">");
-                h.Append(TimingDiagram.Draw(r, root).ToString(System.Xml.Linq.SaveOptions.DisableFormatting));
-                h.Append("<figcaption>Root clock <b>").Append(E(root.Name)).Append("</b> (").Append(E(Describe.ClockKindText(root)))
-                    .AppendLine("), two periods; time 0 is its rising edge. Hover a bar or a waveform for its figures.</figcaption></figure>");
+                h.Append(TimingDiagram.Draw(r, group).ToString(System.Xml.Linq.SaveOptions.DisableFormatting));
+                var names = string.Join(", ", group.Select(root => "<b>" + E(root.Name) + "</b> (" + E(Describe.ClockKindText(root)) + ")"));
+                var independent = group[0].IsIndependent ? " It is declared independent: its own crystal, with no fixed time relation to the other clocks, so it is drawn apart." : string.Empty;
+                h.Append("<figcaption>").Append(group.Count == 1 ? "Root clock " : "Root clocks on one time base: ").Append(names)
+                    .Append(", two cycles; time 0 is the design's time base (each root rises at its offset).").Append(independent)
+                    .AppendLine(" Hover a bar or a waveform for its figures.</figcaption></figure>");
             }
 
             Table(h, "clocks", new[] { "phase", "clock", "window", "1-1 overlap", "0-0 overlap" }, n.Clocks.SelectMany(c =>

@@ -8,8 +8,9 @@ using Phaseward.Cli.Model;
 namespace Phaseward.Cli.Output;
 
 /// <summary>
-/// The SVG timing diagram of one root clock: over two periods, one row per phase of every clock derived from it (the
-/// phase's conduction window drawn as a waveform), one lane per latch under its phase's row with a bar for each
+/// The SVG timing diagram of the root clocks that share one time base (see <see cref="TimeBase"/>: related roots
+/// together, an independent clock alone): over two common cycles, one row per phase of every clock derived from them
+/// (the phase's conduction window drawn as a waveform, at its offset on the time base), one lane per latch under its phase's row with a bar for each
 /// transparency window, the 1-1 and 0-0 overlaps of each clock shaded across its rows, latches named by a finding
 /// outlined, and a legend. Hovering a bar shows the latch's figures (SVG &lt;title&gt;).
 /// </summary>
@@ -24,16 +25,17 @@ internal static class TimingDiagram
     private const double PhaseRow = 30;
     private const double Lane = 20;
     private const double ClockGap = 12;
-    private const double Periods = 2;
+    private const double Cycles = 2;
 
-    public static XElement Draw(DesignReport report, Clock root)
+    public static XElement Draw(DesignReport report, IReadOnlyList<Clock> roots)
     {
-        var period = root.Period.Seconds;
-        var span = period * Periods;
+        var root = roots[0];
+        var cycle = CommonCycle(roots);
+        var span = cycle * Cycles;
         double X(double seconds) => Left + seconds / span * PlotWidth;
 
-        var clocks = report.Netlist.Clocks.Where(c => ReferenceEquals(c.Root, root)).ToList();
-        var latches = report.Timing.Latches.Where(t => ReferenceEquals(t.Phase.Clock.Root, root)).ToList();
+        var clocks = report.Netlist.Clocks.Where(c => roots.Contains(c.Root)).ToList();
+        var latches = report.Timing.Latches.Where(t => roots.Contains(t.Phase.Clock.Root)).ToList();
         var plot = new XElement(Svg + "g", new XAttribute("class", "plot"));
         var overlaps = new XElement(Svg + "g", new XAttribute("class", "overlaps"));
         var labels = new XElement(Svg + "g", new XAttribute("class", "labels"));
@@ -48,12 +50,12 @@ internal static class TimingDiagram
                 var onPhase = latches.Where(t => ReferenceEquals(t.Phase, phase)).ToList();
                 labels.Add(Text(8, y + 19, phase.Name, "phase-label"));
                 labels.Add(Text(8 + 7.2 * phase.Name.Length + 8, y + 19, KindTag(clock), "phase-kind"));
-                plot.Add(Waveform(window, y, period, span, X, clock.CanStop));
+                plot.Add(Waveform(window, y, span, X, clock.CanStop));
                 y += PhaseRow;
                 foreach (var timing in onPhase)
                 {
                     labels.Add(Text(22, y + 14, timing.Name, "latch-label"));
-                    plot.Add(LatchBars(report, timing, y, period, span, X));
+                    plot.Add(LatchBars(report, timing, y, span, X));
                     y += Lane;
                 }
             }
@@ -62,7 +64,7 @@ internal static class TimingDiagram
             foreach (var (interval, cls, name) in new[] { (ov.OneOne, "ov11", "1-1"), (ov.ZeroZero, "ov00", "0-0") })
             {
                 var tip = $"{name} overlap of clock {clock.Name}: both phases conduct during [{interval.Start}, {interval.End}) of each period ({interval.Length})";
-                foreach (var (s, e) in Segments(interval.Start.Seconds, interval.Length.Seconds, period, span))
+                foreach (var (s, e) in Segments(interval.Start.Seconds, interval.Length.Seconds, clock.Period.Seconds, span))
                     overlaps.Add(new XElement(Svg + "rect", new XAttribute("class", "overlap " + cls), new XAttribute("data-clock", clock.Name),
                         new XAttribute("data-kind", name), Attr("x", X(s)), Attr("y", clockTop), Attr("width", Math.Max(1, X(e) - X(s))),
                         Attr("height", y - clockTop), new XElement(Svg + "title", tip)));
@@ -73,10 +75,17 @@ internal static class TimingDiagram
 
         var plotBottom = y - ClockGap;
         var grid = new XElement(Svg + "g", new XAttribute("class", "grid"));
-        for (var k = 0; k <= Periods; k++)
-            grid.Add(Line(X(k * period), Top - 6, X(k * period), plotBottom + 4, "edge rise"));
-        for (var k = 0; k < Periods; k++)
-            grid.Add(Line(X(k * period + root.Duty * period), Top, X(k * period + root.Duty * period), plotBottom, "edge fall"));
+        foreach (var r in roots)
+        {
+            var period = r.Period.Seconds;
+            for (var k = 0; r.Offset.Seconds + k * period <= span * (1 + 1e-9); k++)
+            {
+                var rise = r.Offset.Seconds + k * period;
+                grid.Add(Line(X(rise), Top - 6, X(rise), plotBottom + 4, "edge rise"));
+                if (rise + r.Duty * period < span)
+                    grid.Add(Line(X(rise + r.Duty * period), Top, X(rise + r.Duty * period), plotBottom, "edge fall"));
+            }
+        }
 
         // The time axis.
         var axis = new XElement(Svg + "g", new XAttribute("class", "axis"));
@@ -90,7 +99,7 @@ internal static class TimingDiagram
             axis.Add(Text(X(t), axisY + 18, Engineering.Format(t, "s"), "tick-label", anchor: "middle"));
         }
 
-        axis.Add(Text(Left - 10, axisY + 18, $"t ({root.Name}: {root.Period})", "axis-title", anchor: "end"));
+        axis.Add(Text(Left - 10, axisY + 18, roots.Count == 1 ? $"t ({root.Name}: {root.Period})" : $"t (cycle {new Time(cycle)})", "axis-title", anchor: "end"));
         var legendY = axisY + 34;
         var legend = Legend(legendY);
         var height = legendY + 44;
@@ -98,12 +107,13 @@ internal static class TimingDiagram
         return new XElement(Svg + "svg",
             new XAttribute("xmlns", Svg.NamespaceName),
             new XAttribute("class", "timing-diagram"),
-            new XAttribute("data-root-clock", root.Name),
+            new XAttribute("data-root-clock", string.Join(" ", roots.Select(r => r.Name))),
             new XAttribute("role", "img"),
             Attr("width", Left + PlotWidth + Right),
             Attr("height", height),
             new XAttribute("viewBox", $"0 0 {F(Left + PlotWidth + Right)} {F(height)}"),
-            new XElement(Svg + "title", $"Timing diagram of design {report.Name}, root clock {root.Name}: phase windows and latch transparency over two periods"),
+            new XElement(Svg + "title", $"Timing diagram of design {report.Name}, {(roots.Count == 1 ? "root clock " + root.Name : "root clocks " + string.Join(", ", roots.Select(r => r.Name)))}"
+                + $"{(root.IsIndependent ? " (independent)" : string.Empty)}: phase windows and latch transparency over two cycles of {new Time(cycle)}"),
             new XElement(Svg + "rect", new XAttribute("class", "plot-bg"), Attr("x", Left), Attr("y", Top - 6), Attr("width", PlotWidth), Attr("height", plotBottom - Top + 10)),
             overlaps, grid, plot, labels, axis, legend);
     }
@@ -115,13 +125,14 @@ internal static class TimingDiagram
         _ => $"buffered ← {clock.Source!.Name}, +{clock.Delay}",
     };
 
-    private static XElement Waveform(PhaseWindow window, double y, double period, double span, Func<double, double> x, bool canStop)
+    private static XElement Waveform(PhaseWindow window, double y, double span, Func<double, double> x, bool canStop)
     {
+        var period = window.Period.Seconds;
         var high = y + 6;
         var low = y + 22;
         var points = new List<(double X, double Y)> { (x(0), InWindow(0) ? high : low) };
         var edges = new List<(double T, bool Rising)>();
-        for (var k = -1; k <= Periods; k++)
+        for (var k = -1; k <= Repeats(period, span); k++)
         {
             var s = window.Opens.Seconds + k * period;
             var e = s + window.Length.Seconds;
@@ -151,8 +162,9 @@ internal static class TimingDiagram
         }
     }
 
-    private static XElement LatchBars(DesignReport report, LatchTiming timing, double y, double period, double span, Func<double, double> x)
+    private static XElement LatchBars(DesignReport report, LatchTiming timing, double y, double span, Func<double, double> x)
     {
+        var period = timing.Window.Period.Seconds;
         var latch = timing.Latch;
         var findings = report.FindingsOf(latch);
         var flagged = findings.Count > 0;
@@ -183,7 +195,7 @@ internal static class TimingDiagram
     /// <summary>The pieces of a window [start, start + length) repeated every period, clipped to [0, span).</summary>
     public static IEnumerable<(double Start, double End)> Segments(double start, double length, double period, double span)
     {
-        for (var k = -1; k <= Periods; k++)
+        for (var k = -1; k <= Repeats(period, span); k++)
         {
             var s = Math.Max(0, start + k * period);
             var e = Math.Min(span, start + k * period + length);
@@ -222,6 +234,34 @@ internal static class TimingDiagram
             new XAttribute("patternTransform", "rotate(-45)"),
             new XElement(Svg + "rect", Attr("width", 6), Attr("height", 6), new XAttribute("fill", "#c9d4f2")),
             new XElement(Svg + "line", Attr("x1", 0), Attr("y1", 0), Attr("x2", 0), Attr("y2", 6), new XAttribute("stroke", "#4a64b8"), Attr("stroke-width", 2.5)))));
+
+    /// <summary>
+    /// The root clocks of a design grouped by time base: roots related to one another (periods in a small-integer
+    /// ratio, none independent) share a diagram; an independent clock, or one unrelated to all others, is drawn apart.
+    /// </summary>
+    public static IReadOnlyList<IReadOnlyList<Clock>> TimeBaseGroups(IEnumerable<Clock> roots)
+    {
+        var groups = new List<List<Clock>>();
+        foreach (var root in roots)
+        {
+            var group = groups.FirstOrDefault(g => g.All(other => TimeBase.Related(root, other)));
+            if (group is null) groups.Add(new List<Clock> { root });
+            else group.Add(root);
+        }
+
+        return groups;
+    }
+
+    // The common cycle of related roots, in seconds.
+    private static double CommonCycle(IReadOnlyList<Clock> roots)
+    {
+        var cycle = roots[0].Period;
+        for (var i = 1; i < roots.Count; i++)
+            cycle = TimeBase.CommonMultiple(cycle, roots[i].Period) ?? cycle;
+        return cycle.Seconds;
+    }
+
+    private static int Repeats(double period, double span) => (int)Math.Ceiling(span / period - 1e-9);
 
     private static double NiceStep(double rough)
     {

@@ -28,6 +28,9 @@ public static class RuleCatalog
     public static RuleDescriptor OverlapRace { get; } = new(
         RuleIds.OverlapRace, RuleTexts.OverlapRaceTitle, RuleTexts.OverlapRaceMessage, RuleCategories.ClockPhases, Severity.Warning, RuleTexts.OverlapRaceDescription);
 
+    public static RuleDescriptor ClockCrossing { get; } = new(
+        RuleIds.ClockCrossing, RuleTexts.ClockCrossingTitle, RuleTexts.ClockCrossingMessage, RuleCategories.ClockPhases, Severity.Warning, RuleTexts.ClockCrossingDescription);
+
     public static RuleDescriptor ClockGateEnable { get; } = new(
         RuleIds.ClockGateEnable, RuleTexts.ClockGateEnableTitle, RuleTexts.ClockGateEnableMessage, RuleCategories.ClockPhases, Severity.Warning,
         RuleTexts.ClockGateEnableDescription);
@@ -44,6 +47,12 @@ public static class RuleCatalog
 
     public static RuleDescriptor LatchBorrowing { get; } = new(
         RuleIds.LatchBorrowing, RuleTexts.LatchBorrowingTitle, RuleTexts.LatchBorrowingMessage, RuleCategories.Timing, Severity.Warning, RuleTexts.LatchBorrowingDescription);
+
+    public static RuleDescriptor LatchWriteWindow { get; } = new(
+        RuleIds.LatchWriteWindow, RuleTexts.LatchWriteWindowTitle, RuleTexts.LatchWriteWindowMessage,
+        RuleCategories.Timing, Severity.Warning, RuleTexts.LatchWriteWindowDescription);
+    public static RuleDescriptor LatchLoop { get; } = new(
+        RuleIds.LatchLoop, RuleTexts.LatchLoopTitle, RuleTexts.LatchLoopMessage, RuleCategories.Timing, Severity.Warning, RuleTexts.LatchLoopDescription);
     public static RuleDescriptor SeriesPassGates { get; } = new(
         RuleIds.SeriesPassGates, RuleTexts.SeriesPassGatesTitle, RuleTexts.SeriesPassGatesMessage, RuleCategories.PassGatePaths, Severity.Warning,
         RuleTexts.SeriesPassGatesDescription);
@@ -72,11 +81,14 @@ public static class RuleCatalog
         SeriesPassGates,
         SameWindowLatches,
         OverlapRace,
+        ClockCrossing,
         ClockGateEnable,
         LoopWithoutStorage,
         RegisterSetup,
         RegisterHold,
         LatchBorrowing,
+        LatchWriteWindow,
+        LatchLoop,
         DynamicNodeOnGatedClock,
         ClockTooSlowForDynamicStorage,
         ChargeSharing,

@@ -13,6 +13,9 @@ public static class RuleIds
     /// <summary>A latch pair on complementary phases races through the clock overlap.</summary>
     public const string OverlapRace = "PW1002";
 
+    /// <summary>Data crosses between clocks with no fixed time relation without a synchronizer.</summary>
+    public const string ClockCrossing = "PW1003";
+
     /// <summary>A clock gate's enable can change while the gate passes the clock.</summary>
     public const string ClockGateEnable = "PW1004";
 
@@ -27,6 +30,11 @@ public static class RuleIds
 
     /// <summary>A two-phase latch path arrives after the capturing latch closes, even with time borrowing.</summary>
     public const string LatchBorrowing = "PW4003";
+    /// <summary>A latch's window is too short for its entry gate to write the storage node.</summary>
+    public const string LatchWriteWindow = "PW4004";
+
+    /// <summary>A loop of latches whose delays exceed the time its phases give it: borrowing grows every cycle.</summary>
+    public const string LatchLoop = "PW4005";
     /// <summary>Pass gates in series without a restoring stage.</summary>
     public const string SeriesPassGates = "PW2001";
     /// <summary>A dynamic storage node floats while its gated clock is stopped, for longer than it retains its level.</summary>

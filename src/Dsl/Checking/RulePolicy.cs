@@ -34,7 +34,7 @@ public sealed class RulePolicy
     }
 
     /// <summary>
-    /// PW4001, PW4002 and PW4003 report a path whose slack is below this (default 0: only negative slack).
+    /// PW4001, PW4002 and PW4003 report a path, PW4004 a latch write window, whose slack is below this (default 0: only negative slack).
     /// Key <c>phaseward.min_timing_slack</c>. Zero or positive.
     /// </summary>
     public Time MinimumTimingSlack

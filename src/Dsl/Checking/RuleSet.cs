@@ -9,10 +9,12 @@ public static class RuleSet
     {
         new SameWindowLatchesRule(),
         new OverlapRaceRule(),
+        new ClockCrossingRule(),
         new ClockGateEnableRule(),
         new LoopWithoutStorageRule(),
         new RegisterTimingRule(),
         new LatchBorrowingRule(),
+        new LatchWriteWindowRule(),
         new PassGateChainRule(),
         new DynamicNodeOnGatedClockRule(),
         new ClockTooSlowForDynamicStorageRule(),

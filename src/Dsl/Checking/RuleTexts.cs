@@ -9,11 +9,15 @@ public static class RuleTexts
 
     public const string SameWindowLatchesTitle = "Latches transparent in the same phase are in series";
     public const string SameWindowLatchesMessage = "Latch '{0}' takes its data from latch '{1}' and both are transparent in {2}: data can run through both in one phase";
-    public const string SameWindowLatchesDescription = "A data path runs from one latch's storage node to another latch's input through logic only, and both latches are transparent in the same window of the same root clock (gated and buffered copies included). Data launched through the first latch runs straight on through the second in the same phase, so the pair stores nothing for a cycle. Put the second latch on the complementary phase, or insert a latch of the complementary phase between them.";
+    public const string SameWindowLatchesDescription = "A data path runs from one latch's storage node to another latch's input through logic only, and both latches are transparent together, on the design's time base, for longer than the overlap allowance (a quarter of the shorter window): the same phase, a gated copy or a slightly delayed copy. Data launched through the first latch runs straight on through the second in the same phase, so the pair stores nothing for a cycle. Put the second latch on the complementary phase, or insert a latch of the complementary phase between them.";
 
     public const string OverlapRaceTitle = "Clock overlap lets data race through complementary latches";
-    public const string OverlapRaceMessage = "Latch '{0}' can catch data launched through latch '{1}' during the {2} overlap of clock '{3}': the fastest path takes {4} but both pass gates conduct together for {5} (margin {6})";
-    public const string OverlapRaceDescription = "Two latches on complementary phases of one clock are both transparent while the clock and its late complement overlap. Data entering the first latch when it opens must not reach the second latch's storage node before the second latch closes: the shortest delay through the first latch, the path and the second latch's pass gate must exceed the overlap. For a master-slave register this is t(TG1) + t(I1) + t(TG2) against the 0-0 overlap (rising-edge register).";
+    public const string OverlapRaceMessage = "Latch '{0}' races latch '{1}' through the {2} overlap of {3}: the fastest path takes {4} while both pass gates conduct together for {5}, a margin of {6}, below the required {7}";
+    public const string OverlapRaceDescription = "Two latches in series are both transparent for a short time: the 1-1 or 0-0 overlap of a clock and its late complement, or a partial overlap of shifted or different clocks on the design's time base. Data entering the first latch when it opens must not reach the second latch's storage node before the second latch closes: the shortest delay through the first latch, the path and the second latch's pass gate must exceed the overlap by at least phaseward.min_race_margin. For a master-slave register this is t(TG1) + t(I1) + t(TG2) against the 0-0 overlap (rising-edge register). First-order estimate, fast corner.";
+
+    public const string ClockCrossingTitle = "Data crosses between unrelated clocks without a synchronizer";
+    public const string ClockCrossingMessage = "'{0}' on clock '{1}' takes data from latch '{2}' on clock '{3}', which has no fixed time relation to it ({4}), without a synchronizer: it can sample the data while it changes and go metastable";
+    public const string ClockCrossingDescription = "Data launched by a latch on one clock reaches a storage stage on a clock with no fixed time relation to it (declared independent, or with a period that shares no small common cycle). The receiving stage can sample the data while it changes and go metastable. Put two registers of the receiving clock in series, with no logic between, where the data arrives (a synchronizer), and move multi-bit data with a handshake or a FIFO. Structural check; it does not estimate the mean time between failures.";
 
     public const string ClockGateEnableTitle = "Clock gate's enable can change while the gate passes the clock";
     public const string ClockGateEnableMessage =
@@ -40,11 +44,24 @@ public static class RuleTexts
     public const string RegisterHoldDescription = "New data launched by a register must not reach the next register's input before that register's master has closed: the shortest clock-to-output plus the shortest path must exceed the capturing register's hold time (the clock overlap after its edge) plus the clock skew between the two registers.";
 
     public const string LatchBorrowingTitle = "Latch path too slow even with time borrowing";
-    public const string LatchBorrowingMessage = "Data from latch '{1}' reaches latch '{0}' {2} after '{0}' opens, but its window ({3}) less its setup time ({4}) allows only {5} (slack {6}; '{1}' had borrowed {7})";
-    public const string LatchBorrowingDescription = "In a two-phase latch pipeline data may arrive at a latch after it opens and pass straight through (time borrowing), but it must arrive before the latch closes, less the latch's setup time. Borrowing is carried along the chain of latches.";
+    public const string LatchBorrowingMessage = "Data from latch '{1}' reaches latch '{0}' {2} after '{0}' opens, but its phase ({3}) less its setup time and clock skew ({4}) allows only {5} (slack {6}; '{1}' had borrowed {7})";
+    public const string LatchBorrowingDescription = "In a latch pipeline data may arrive at a latch after it opens and pass straight through (time borrowing), but it must arrive before the latch closes, less the latch's setup time and the clock skew. Borrowing is carried along the chain of latches to its steady state. First-order estimate, slow corner.";
+
+    public const string LatchLoopTitle = "Latch loop gains time every cycle";
+    public const string LatchLoopMessage = "The latch loop {0} ({1} paths) takes {2} round but its phases give it only {3}: each latch borrows {4} more every time round until one misses its window";
+    public const string LatchLoopDescription = "Data going round a loop of latches must take no longer than the time between the loop's window openings added up round the loop. If the delays exceed it, every latch on the loop borrows more each cycle and the loop has no steady state; sooner or later data misses a window. First-order estimate, slow corner.";
+
+    public const string LatchWriteWindowTitle = "Latch window too short to write its storage node";
+    public const string LatchWriteWindowMessage =
+        "Latch '{0}' cannot be written in its window: it is open {1}, {2} of it with both halves of its entry gate on (complement skew {3}), but the entry gate needs {4} to charge storage node '{5}' (0.69·R·C with R = {6}, C = {7}; margin {8})";
+    public const string LatchWriteWindowDescription =
+        "A latch's entry gate must charge its storage node while the latch is transparent. A window (less the complement skew at each end) shorter than the gate's RC delay into the node lets the latch close on its old value whatever the data's timing: a pulse latch with a short pulse and a heavy node is the usual case. First-order estimate.";
     public const string SeriesPassGatesTitle = "Pass gates in series without a restoring stage";
     public const string SeriesPassGatesMessage =
-        "{0} pass gates in series without a restoring stage (limit {1}): Elmore delay {2} (50% estimate {3}); a restoring stage every {4} gates would give about {5}";
+        "{0} pass gates in series without a restoring stage (limit {1}): Elmore delay {2} (50% estimate {3}); a restoring stage every {4} gates would give about {5}{6}";
+    /// <summary>PW2001's {6} when its worst case counts branches not known to be exclusive as conducting together.</summary>
+    public const string SeriesPassGatesAssumption =
+        "; this worst case assumes that mux branches whose controls are not known to be exclusive conduct together (state Circuit.Exclusive to count them off)";
     public const string SeriesPassGatesDescription =
         "A chain of pass gates with no restoring stage is an RC ladder: its delay grows with the square of its length and its edges slow down. "
         + "The rule reports a chain longer than phaseward.max_series_pass_gates (default: the optimum restoring-stage spacing of the design's process, at least 2) "

@@ -34,7 +34,7 @@ public sealed partial class Circuit
     {
         CheckNet(node, nameof(node));
         var keeperResistance = CheckResistance(resistance, nameof(resistance));
-        var cellName = name ?? node.Name + ".keeper";
+        var cellName = name is null ? ScopedOnce(node.Name + ".keeper") : Scoped(name);
         CheckNewNetName(cellName, nameof(name));
         var span = Site(callerFile, callerLine);
 
@@ -50,8 +50,9 @@ public sealed partial class Circuit
         CheckNet(d, nameof(d));
         CheckPhase(transparent, nameof(transparent));
         var isStatic = kind == MacroKind.StaticLatch;
+        name = ScopedOrNull(name);
         // An auto name was found free together with its internal nets; only a given name needs checking.
-        var cellName = name ?? AutoName("latch", LatchInternalNets(isStatic));
+        var cellName = name ?? AutoName(Scoped("latch"), LatchInternalNets(isStatic));
         if (name is not null)
         {
             CheckNewNetName(cellName, nameof(name));
@@ -66,7 +67,8 @@ public sealed partial class Circuit
         CheckNet(d, nameof(d));
         CheckClock(clock, nameof(clock));
         var isStatic = kind == MacroKind.StaticRegister;
-        var cellName = name ?? AutoName("reg", RegisterInternalNets(isStatic));
+        name = ScopedOrNull(name);
+        var cellName = name ?? AutoName(Scoped("reg"), RegisterInternalNets(isStatic));
         if (name is not null)
         {
             CheckNewNetName(cellName, nameof(name));

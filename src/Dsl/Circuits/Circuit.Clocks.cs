@@ -11,9 +11,16 @@ public sealed partial class Circuit
     /// <param name="period">Clock period (positive).</param>
     /// <param name="duty">Fraction of the period the clock is high, strictly between 0 and 1.</param>
     /// <param name="complementSkew">How late the complement arrives (default: the process figure).</param>
-    public Clock Clock(string name, Time period, double duty = 0.5, Time? complementSkew = null,
+    /// <param name="offset">Where the rising edge lies on the design's time base, in [0, period) (default 0). Root
+    /// clocks of a design share that time base: two clocks of one period offset by half a period are two phases.</param>
+    /// <param name="independent">True for a clock unrelated to all others (its own crystal): data crossing from or to
+    /// it needs a synchronizer (PW1003).</param>
+    public Clock Clock(string name, Time period, double duty = 0.5, Time? complementSkew = null, Time? offset = null,
+        bool independent = false,
         [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
     {
+        Guard.Name(name, nameof(name));
+        name = Scoped(name);
         CheckNewClockName(name, nameof(name));
         Guard.Positive(period.Seconds, nameof(period), "s");
         Guard.Fraction(duty, nameof(duty));
@@ -24,7 +31,15 @@ public sealed partial class Circuit
                 throw new ArgumentException($"'{nameof(complementSkew)}' ({skew}) must be shorter than the clock's shorter phase ({period * Math.Min(duty, 1 - duty)}).", nameof(complementSkew));
         }
 
-        return AddClock(name, ClockKind.Root, null, period, duty, complementSkew, Time.Zero, null, ClockStopLevel.Low, null, Site(callerFile, callerLine));
+        if (offset is { } o)
+        {
+            Guard.NonNegative(o.Seconds, nameof(offset), "s");
+            if (o >= period)
+                throw new ArgumentException($"'{nameof(offset)}' ({o}) must be shorter than the clock's period ({period}).", nameof(offset));
+        }
+
+        return AddClock(name, ClockKind.Root, null, period, duty, complementSkew, Time.Zero, null, ClockStopLevel.Low, null, Site(callerFile, callerLine),
+            offset ?? Time.Zero, independent);
     }
 
     /// <summary>
@@ -41,10 +56,11 @@ public sealed partial class Circuit
             throw new ArgumentException($"'{nameof(stopsAt)}' must be ClockStopLevel.Low or ClockStopLevel.High (was {(int)stopsAt}).", nameof(stopsAt));
         if (maxIdle is { } idle)
             Guard.Positive(idle.Seconds, nameof(maxIdle), "s");
+        name = ScopedOrNull(name);
         if (name is not null)
             CheckNewClockName(name, nameof(name));
 
-        return AddClock(name ?? AutoClockName(clock.Name + ".gated"), ClockKind.Gated, clock, clock.Period, clock.Duty, null, Time.Zero,
+        return AddClock(name ?? AutoClockName(ScopedOnce(clock.Name + ".gated")), ClockKind.Gated, clock, clock.Period, clock.Duty, null, Time.Zero,
             enable, stopsAt, maxIdle, Site(callerFile, callerLine));
     }
 
@@ -56,10 +72,11 @@ public sealed partial class Circuit
         CheckClock(clock, nameof(clock));
         if (delay is { } d)
             Guard.NonNegative(d.Seconds, nameof(delay), "s");
+        name = ScopedOrNull(name);
         if (name is not null)
             CheckNewClockName(name, nameof(name));
 
-        return AddClock(name ?? AutoClockName(clock.Name + ".buf"), ClockKind.Buffered, clock, clock.Period, clock.Duty, null,
+        return AddClock(name ?? AutoClockName(ScopedOnce(clock.Name + ".buf")), ClockKind.Buffered, clock, clock.Period, clock.Duty, null,
             delay, null, ClockStopLevel.Low, null, Site(callerFile, callerLine));
     }
 
@@ -75,9 +92,9 @@ public sealed partial class Circuit
         => NextFreeName(autoClockCounters, prefix, Array.Empty<string>(), static (circuit, _, candidate) => circuit.clockNames.Contains(candidate));
 
     private Clock AddClock(string name, ClockKind kind, Clock? source, Time period, double duty, Time? skew, Time? delay, Net? enable,
-        ClockStopLevel stopLevel, Time? maxIdle, SourceSpan span)
+        ClockStopLevel stopLevel, Time? maxIdle, SourceSpan span, Time offset = default, bool independent = false)
     {
-        var clock = new Clock(this, clocks.Count, name, kind, source, period, duty, skew, delay, enable, stopLevel, maxIdle, span);
+        var clock = new Clock(this, clocks.Count, name, kind, source, period, duty, skew, delay, enable, stopLevel, maxIdle, span, offset, independent);
         clocks.Add(clock);
         clockNames.Add(name);
         return clock;

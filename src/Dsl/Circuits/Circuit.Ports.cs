@@ -10,6 +10,7 @@ public sealed partial class Circuit
     public Net Input(string name, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
     {
         Guard.Name(name, nameof(name));
+        name = Scoped(name);
         CheckNewNetName(name, nameof(name));
         var net = NewNet(name);
         inputs.Add(new Port(name, net, Site(callerFile, callerLine)));
@@ -22,6 +23,7 @@ public sealed partial class Circuit
     {
         Guard.Name(name, nameof(name));
         CheckNet(net, nameof(net));
+        name = Scoped(name);
         if (outputNames.Contains(name))
             throw new ArgumentException($"'{nameof(name)}': an output named \"{name}\" already exists in design '{DesignName}'.", nameof(name));
         outputNames.Add(name);

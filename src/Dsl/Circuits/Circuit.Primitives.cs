@@ -12,8 +12,9 @@ public sealed partial class Circuit
     /// <summary>Declares a net that is driven later (by devices given it as their <c>output</c>).</summary>
     public Net Node(string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
     {
+        name = ScopedOrNull(name);
         CheckNewNetName(name, nameof(name));
-        return NewNet(name ?? AutoName("node"));
+        return NewNet(name ?? AutoName(Scoped("node")));
     }
 
     public Net Inverter(Net input, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)

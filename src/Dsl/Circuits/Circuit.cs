@@ -201,6 +201,7 @@ public sealed partial class Circuit
     {
         for (var i = 0; i < deviceInputs.Length; i++)
             CheckNet(deviceInputs[i], inputParameters[i]);
+        name = ScopedOrNull(name);
         if (output is not null)
         {
             CheckNet(output, nameof(output));
@@ -211,8 +212,8 @@ public sealed partial class Circuit
             CheckNewNetName(name, nameof(name));
         }
 
-        var outputNet = output ?? NewNet(name ?? AutoName(Prefix(kind)));
-        var deviceName = output is null ? outputNet.Name : AutoName(outputNet.Name + "." + Prefix(kind));
+        var outputNet = output ?? NewNet(name ?? AutoName(Scoped(Prefix(kind))));
+        var deviceName = output is null ? outputNet.Name : AutoName(ScopedOnce(outputNet.Name + "." + Prefix(kind)));
         AddDevice(deviceName, kind, deviceInputs, outputNet, clockControl, dataControl, resistance, false, span);
         return outputNet;
     }

@@ -29,10 +29,15 @@ public sealed class Clock
 {
     private readonly Time? complementSkew;
     private readonly Time? delay;
+    private readonly Time offset;
+    private readonly bool independent;
 
     internal Clock(Circuit owner, int id, string name, ClockKind kind, Clock? source, Time period, double duty,
-        Time? complementSkew, Time? delay, Net? enable, ClockStopLevel stopLevel, Time? maxIdle, SourceSpan span)
+        Time? complementSkew, Time? delay, Net? enable, ClockStopLevel stopLevel, Time? maxIdle, SourceSpan span,
+        Time offset = default, bool independent = false)
     {
+        this.offset = offset;
+        this.independent = independent;
         Owner = owner;
         Id = id;
         Name = name;
@@ -77,6 +82,18 @@ public sealed class Clock
     /// <summary>Delay this clock adds to its source (zero for root and gated clocks; a buffer without its own delay
     /// takes the stage delay of the process in force).</summary>
     public Time Delay => delay ?? Owner.Process.StageDelay;
+
+    /// <summary>Where the root clock's rising edge lies on the design's time base (a derived clock: its root's).</summary>
+    public Time Offset => Source?.Offset ?? offset;
+
+    /// <summary>
+    /// True when the root clock was declared independent (its own crystal): it has no fixed time relation to any
+    /// clock outside its own derivation tree (a derived clock: its root's).
+    /// </summary>
+    public bool IsIndependent => Source?.IsIndependent ?? independent;
+
+    /// <summary>When this clock rises on the design's time base, within its period: the root's offset plus the delay from the root.</summary>
+    public Time RisingEdge => Offset + DelayFromRoot;
 
     /// <summary>Total delay from the root clock to this one.</summary>
     public Time DelayFromRoot => Delay + (Source?.DelayFromRoot ?? Time.Zero);

@@ -4,18 +4,24 @@ using System.Collections.Generic;
 namespace Phaseward;
 
 /// <summary>
-/// When a pass gate on a phase conducts, within one period of its root clock (time 0 = the root clock's rising edge).
+/// When a pass gate on a phase conducts, on the design's time base (see <see cref="TimeBase"/>): it opens at
+/// <see cref="Opens"/> and then every <see cref="Period"/>.
 /// </summary>
 /// <remarks>
-/// Model (first order, nominal edges): a clock of period T, duty D, delay d from its root, and a complement that
-/// arrives s later than the true clock (its complement skew). A transmission gate on the High phase has its nMOS on
-/// the clock and its pMOS on the complement, so it conducts while either is on: from the clock's rise at d until the
-/// complement's rise at d + D·T + s. Likewise the Low phase conducts from d + D·T until d + T + s. The two windows
-/// therefore overlap twice per period, for s each: the 0-0 overlap after the falling edge (clock already low,
-/// complement still low) and the 1-1 overlap after the rising edge (clock already high, complement still high).
+/// Model (first order, nominal edges): a clock of period T, duty D, rising at r on the time base (its root's offset
+/// plus its delay from the root), and a complement that arrives s later than the true clock (its complement skew).
+/// A transmission gate on the High phase has its nMOS on the clock and its pMOS on the complement, so it conducts
+/// while either is on: from the clock's rise at r until the complement's rise at r + D·T + s. Likewise the Low phase
+/// conducts from r + D·T until r + T + s. The two windows of one clock therefore overlap twice per period, for s
+/// each: the 0-0 overlap after the falling edge (clock already low, complement still low) and the 1-1 overlap after
+/// the rising edge (clock already high, complement still high). Windows of two related clocks are compared over their
+/// common cycle; windows of unrelated clocks are never compared.
 /// </remarks>
 public sealed class PhaseWindow
 {
+    // Times closer than this fraction of the cycle are one instant (edges entered as decimal figures).
+    private const double Tolerance = 1e-9;
+
     private PhaseWindow(Phase phase, Time period, Time opens, Time length)
     {
         Phase = phase;
@@ -26,10 +32,10 @@ public sealed class PhaseWindow
 
     public Phase Phase { get; }
 
-    /// <summary>The root clock's period: the circle these windows live on.</summary>
+    /// <summary>The clock's period: the window opens once per period.</summary>
     public Time Period { get; }
 
-    /// <summary>When the phase starts to conduct, in [0, Period).</summary>
+    /// <summary>When the phase starts to conduct, in [0, Period) on the design's time base.</summary>
     public Time Opens { get; }
 
     /// <summary>How long it conducts per period (less than the period).</summary>
@@ -53,36 +59,57 @@ public sealed class PhaseWindow
         var period = clock.Period;
         var skew = clock.ComplementSkew;
         var highTime = period * clock.Duty;
-        var opens = phase.Polarity == ClockPolarity.High ? clock.DelayFromRoot : clock.DelayFromRoot + highTime;
+        var opens = phase.Polarity == ClockPolarity.High ? clock.RisingEdge : clock.RisingEdge + highTime;
         var length = (phase.Polarity == ClockPolarity.High ? highTime : period - highTime) + skew;
         return new Arc(Wrap(opens, period), length);
     }
 
-    /// <summary>True if both phases come from the same root clock, so their windows can be compared.</summary>
+    /// <summary>How long the phase is nominally active per period, without the complement's lateness.</summary>
+    public Time NominalLength => Length - Phase.Clock.ComplementSkew;
+
+    /// <summary>True if both phases come from the same root clock.</summary>
     public bool SharesRootWith(PhaseWindow other) => ReferenceEquals(Phase.Clock.Root, other.Phase.Clock.Root);
 
-    /// <summary>The intervals (within one period) during which both phases conduct. Empty for unrelated clocks.</summary>
+    /// <summary>The common cycle of the two windows' clocks, or null when the clocks are not related (see <see cref="TimeBase"/>).</summary>
+    public Time? CommonCycleWith(PhaseWindow other)
+    {
+        if (other is null) throw new ArgumentNullException(nameof(other));
+        return TimeBase.CommonCycle(Phase.Clock, other.Phase.Clock);
+    }
+
+    /// <summary>The intervals (within the common cycle) during which both phases conduct. Empty for unrelated clocks.</summary>
     public IReadOnlyList<TimeInterval> OverlapWith(PhaseWindow other)
     {
         if (other is null) throw new ArgumentNullException(nameof(other));
         var overlaps = new List<TimeInterval>(2);
-        if (!SharesRootWith(other))
+        if (CommonCycleWith(other) is not { } cycle)
             return overlaps;
 
-        // Compare against the other window shifted by -T, 0 and +T: windows are shorter than T, so that covers every wrap.
-        for (var shift = -1; shift <= 1; shift++)
+        var c = cycle.Seconds;
+        for (var i = 0; i < Repeats(cycle); i++)
         {
-            var start = Time.Max(Opens, other.Opens + Period * shift);
-            var end = Time.Min(Closes, other.Closes + Period * shift);
-            if (end > start)
-                overlaps.Add(new TimeInterval(Wrap(start, Period), Wrap(start, Period) + (end - start)));
+            var opens = Opens.Seconds + i * Period.Seconds;
+            for (var j = -1; j <= other.Repeats(cycle); j++)
+            {
+                var otherOpens = other.Opens.Seconds + j * other.Period.Seconds;
+                var start = Math.Max(opens, otherOpens);
+                var end = Math.Min(opens + Length.Seconds, otherOpens + other.Length.Seconds);
+                if (end - start > Tolerance * c)
+                {
+                    var wrapped = Wrap(new Time(start), cycle);
+                    overlaps.Add(new TimeInterval(wrapped, wrapped + new Time(end - start)));
+                }
+            }
         }
 
         overlaps.Sort((a, b) => a.Start.CompareTo(b.Start));
+        for (var k = overlaps.Count - 1; k > 0; k--)
+            if (Math.Abs(overlaps[k].Start.Seconds - overlaps[k - 1].Start.Seconds) <= Tolerance * c)
+                overlaps.RemoveAt(k);
         return overlaps;
     }
 
-    /// <summary>Total time per period during which both phases conduct.</summary>
+    /// <summary>Total time per common cycle during which both phases conduct.</summary>
     public Time TotalOverlapWith(PhaseWindow other)
     {
         var total = Time.Zero;
@@ -91,7 +118,66 @@ public sealed class PhaseWindow
         return total;
     }
 
-    public override string ToString() => $"{Phase.Name}: [{Opens}, {Closes}) of {Period}";
+    /// <summary>The longest stretch during which both phases conduct without a break (zero for unrelated clocks).</summary>
+    public Time LongestOverlapWith(PhaseWindow other)
+    {
+        var longest = Time.Zero;
+        foreach (var interval in OverlapWith(other))
+            longest = Time.Max(longest, interval.Length);
+        return longest;
+    }
+
+    /// <summary>
+    /// How long <paramref name="late"/> still conducts after this phase opens, the worst over the openings in the
+    /// common cycle, at most this window's length (zero when it is shut at every opening, or the clocks are not related).
+    /// </summary>
+    public Time StillOpenAfterOpening(PhaseWindow late)
+    {
+        if (late is null) throw new ArgumentNullException(nameof(late));
+        if (CommonCycleWith(late) is not { } cycle)
+            return Time.Zero;
+        var worst = 0.0;
+        for (var i = 0; i < Repeats(cycle); i++)
+        {
+            var since = Modulo(Opens.Seconds + i * Period.Seconds - late.Opens.Seconds, late.Period.Seconds, Tolerance * cycle.Seconds);
+            worst = Math.Max(worst, Math.Min(late.Length.Seconds - since, Length.Seconds));
+        }
+
+        return new Time(worst);
+    }
+
+    /// <summary>
+    /// The shortest time from an opening of this phase to the next opening of <paramref name="next"/> (a full period
+    /// of <paramref name="next"/> when they open together), over the openings in the common cycle; null when the
+    /// clocks are not related.
+    /// </summary>
+    public Time? TimeToNextOpeningOf(PhaseWindow next)
+    {
+        if (next is null) throw new ArgumentNullException(nameof(next));
+        if (CommonCycleWith(next) is not { } cycle)
+            return null;
+        var shortest = double.PositiveInfinity;
+        for (var i = 0; i < Repeats(cycle); i++)
+        {
+            var gap = Modulo(next.Opens.Seconds - (Opens.Seconds + i * Period.Seconds), next.Period.Seconds, Tolerance * cycle.Seconds);
+            shortest = Math.Min(shortest, gap == 0 ? next.Period.Seconds : gap);
+        }
+
+        return new Time(shortest);
+    }
+
+    public override string ToString() => $"{Phase.Name}: [{Opens}, {Closes}) every {Period}";
+
+    // How many times this window opens in the common cycle.
+    private int Repeats(Time cycle) => Math.Max(1, (int)Math.Round(cycle.Seconds / Period.Seconds));
+
+    // x mod m in [0, m), values within eps of 0 or m read as 0.
+    private static double Modulo(double x, double m, double eps)
+    {
+        var r = x % m;
+        if (r < 0) r += m;
+        return r <= eps || m - r <= eps ? 0 : r;
+    }
 
     private static Time Wrap(Time t, Time period)
     {

@@ -5,22 +5,33 @@ using System.Threading;
 namespace Phaseward;
 
 /// <summary>
-/// A netlist seen as RC trees of pass gates. A pass gate is a branch resistance from its input net to its output net;
-/// a net with a (non-weak) restoring driver, or a primary input, restores the signal and roots a tree through its
-/// driver's resistance. Built in O(devices + nets):
+/// A netlist seen as RC trees of pass gates, and the one pass-gate delay model every rule and report uses. A pass gate
+/// is a branch resistance from its input net to its output net; a net with a (non-weak) restoring driver, or a primary
+/// input, restores the signal and roots a tree through its driver's resistance. Built in O(devices + nets):
 /// <list type="bullet">
 /// <item>the series edges (gate → its output net → the pass gates that net feeds), walked depth-first from the
 /// restoring nets; an edge that closes a loop of pass gates (a back edge of the walk) is dropped, so what remains is
 /// acyclic and every later sweep terminates;</item>
-/// <item>the downstream capacitance of every net: its own capacitance (from <see cref="Netlist.CapacitanceOf"/>, fan-out
-/// loads included) plus that of everything its pass gates feed, assuming every pass gate downstream conducts (the
-/// worst case). It depends only on the net, not on where the signal came from, so a path's Elmore delay is the sum of
-/// R · C_down along it, whichever input of a pass-gate mux drives it.</item>
+/// <item>the load of every net: its own capacitance (from <see cref="Netlist.CapacitanceOf"/>, fan-out gate loads
+/// included) plus the side branches that may conduct with it, each a capacitive load of everything it feeds. Of
+/// branches whose controls are exclusive (<see cref="Netlist.AreExclusive"/>: stated with
+/// <see cref="Circuit.Exclusive"/>, or a net and its inverse) at most one conducts, so only the heaviest such set
+/// counts; a branch exclusive with the gate that charges the net is off. Branches on data nets not known to be
+/// exclusive are counted as conducting together (the worst case), and the model says so
+/// (<see cref="AssumesUnknownBranchesConduct"/>).</item>
 /// </list>
 /// </summary>
 /// <remarks>
-/// A net reached twice from the same net along different pass paths (gates in parallel, a diamond) is counted on
-/// each path: the downstream capacitance is then an overestimate, which keeps the delay pessimistic.
+/// <para>The delay of a conducting path is its Elmore delay (W. C. Elmore, "The Transient Response of Damped Linear
+/// Networks with Particular Regard to Wideband Amplifiers", J. Appl. Phys. 19(1), 1948): Σ over the path's
+/// resistances R_k of R_k · C_down(k). For a node on the path, a side branch adds its whole capacitance to C_down at
+/// the point where it leaves the path and nothing beyond (the resistance it shares with the path ends there), so
+/// side branches are exactly capacitive loads (J. Rubinstein, P. Penfield, M. A. Horowitz, "Signal Delay in RC Tree
+/// Networks", IEEE Trans. CAD 2(3), 1983, the shared-resistance form T_i = Σ_k R_ki C_k).</para>
+/// <para>Choosing the heaviest set of mutually non-exclusive branches is done greedily (heaviest first); it is exact
+/// when exclusive pairs form disjoint groups (one-hot groups, complementary pairs), the usual case. Nets feeding more
+/// than <see cref="MaxBranchesCompared"/> pass gates count them all. A net reached twice from the same net along
+/// different pass paths (a diamond) is counted on each path, which keeps the delay pessimistic.</para>
 /// </remarks>
 internal sealed class PassGateNetwork
 {
@@ -30,6 +41,14 @@ internal sealed class PassGateNetwork
     private readonly bool[] inputEdgeKept;
     private readonly bool[] outputEdgeKept;
     private readonly double[] downstreamFarads;
+    private readonly bool[] downstreamAssumes;
+    private readonly double[] chargedFarads;
+    private readonly bool[] chargedAssumes;
+    private readonly double[] rootFarads;
+    private readonly bool[] rootAssumes;
+    private readonly bool[] hasExclusivePartner;
+    private readonly List<(double Farads, Device Gate)> branchScratch = new();
+    private readonly List<Device> countedScratch = new();
     private readonly int[] postorder;
     private readonly int[] passLoadStart;
     private readonly int[] passLoads;
@@ -68,8 +87,36 @@ internal sealed class PassGateNetwork
                 passLoads[fill[device.Inputs[0].Id]++] = device.Id;
 
         postorder = Walk(cancellationToken);
+        hasExclusivePartner = ExclusivePartners(netlist);
+        downstreamAssumes = new bool[nets.Count];
         downstreamFarads = SumDownstream(cancellationToken);
+        chargedFarads = new double[devices.Count];
+        chargedAssumes = new bool[devices.Count];
+        rootFarads = new double[devices.Count];
+        rootAssumes = new bool[devices.Count];
+        ComputeGateLoads(cancellationToken);
     }
+
+    // Nets that may be exclusive with some other net: in a stated group, or an inverter's input or output. Branches
+    // on other nets need no comparing (and no sorting).
+    private static bool[] ExclusivePartners(Netlist netlist)
+    {
+        var partners = new bool[netlist.Nets.Count];
+        foreach (var group in netlist.ExclusiveGroups)
+            foreach (var net in group)
+                partners[net.Id] = true;
+        foreach (var device in netlist.Devices)
+            if (device.Kind == DeviceKind.Inverter && !device.IsWeak)
+            {
+                partners[device.Inputs[0].Id] = true;
+                partners[device.Output.Id] = true;
+            }
+
+        return partners;
+    }
+
+    /// <summary>Nets feeding more pass gates than this count them all, without comparing their controls.</summary>
+    public const int MaxBranchesCompared = 64;
 
     public Netlist Netlist { get; }
 
@@ -103,15 +150,153 @@ internal sealed class PassGateNetwork
     /// <summary>The pass gate at a position of the flat pass-load index.</summary>
     public Device PassLoadAt(int position) => Netlist.Devices[passLoads[position]];
 
-    /// <summary>The net's capacitance plus all capacitance its pass gates feed (F).</summary>
+    /// <summary>The net's load when it is driven with nothing known about which of its pass gates conduct: its own
+    /// capacitance plus the heaviest set of branches that may conduct together (F).</summary>
     public Capacitance DownstreamCapacitanceOf(Net net) => new(downstreamFarads[net.Id]);
 
+    /// <summary>True when <see cref="DownstreamCapacitanceOf"/> counts, somewhere downstream, two or more branches on
+    /// different data nets not known to be exclusive as conducting together.</summary>
+    public bool AssumesUnknownBranchesConduct(Net net) => downstreamAssumes[net.Id];
+
     /// <summary>
-    /// The capacitance a pass gate charges through its on-resistance: the downstream capacitance of its output net, or
-    /// only that net's own capacitance when the chain cannot continue there (a restored net, a loop).
+    /// The capacitance a pass gate charges through its on-resistance: its output net and the branches beyond that may
+    /// conduct while it does (those exclusive with it are off); only the net's own capacitance when the chain cannot
+    /// continue there (a restored net, a loop).
     /// </summary>
-    public Capacitance ChargedThrough(Device gate)
-        => outputEdgeKept[gate.Id] ? new Capacitance(downstreamFarads[gate.Output.Id]) : Netlist.CapacitanceOf(gate.Output);
+    public Capacitance ChargedThrough(Device gate) => new(chargedFarads[PassGateId(gate)]);
+
+    /// <summary>True when <see cref="ChargedThrough"/> makes the assumption of <see cref="AssumesUnknownBranchesConduct(Net)"/>.</summary>
+    public bool AssumesUnknownBranchesConduct(Device gate) => chargedAssumes[PassGateId(gate)];
+
+    /// <summary>
+    /// The load the driver of <paramref name="gate"/>'s input net sees while the gate conducts: the net, the gate's
+    /// branch, and the other branches that may conduct with it (those exclusive with the gate are off).
+    /// </summary>
+    public Capacitance RootLoad(Device gate) => new(rootFarads[PassGateId(gate)]);
+
+    /// <summary>True when <see cref="RootLoad"/> makes the assumption of <see cref="AssumesUnknownBranchesConduct(Net)"/>.</summary>
+    public bool RootLoadAssumes(Device gate) => rootAssumes[PassGateId(gate)];
+
+    /// <summary>
+    /// The Elmore term of one restoring stage or pass gate on a conducting path, in the worst case: its resistance
+    /// times everything it charges (a restoring stage: its output net and the pass-gate branches that may conduct from
+    /// it; a pass gate: <see cref="ChargedThrough"/>). Summed along a path, the terms make the path's Elmore delay with
+    /// its side loads; a 50 % estimate multiplies it by ln 2 (<see cref="FiftyPercentDelay"/>).
+    /// </summary>
+    public Time ElmoreTerm(Device device)
+    {
+        if (device is null) throw new ArgumentNullException(nameof(device));
+        var load = device.IsPassDevice ? ChargedThrough(device) : DownstreamCapacitanceOf(device.Output);
+        return Netlist.ResistanceOf(device) * load;
+    }
+
+    private int PassGateId(Device gate)
+    {
+        if (gate is null) throw new ArgumentNullException(nameof(gate));
+        if (!gate.IsPassDevice || (uint)gate.Id >= (uint)DeviceCount || !ReferenceEquals(Netlist.Devices[gate.Id], gate))
+            throw new ArgumentException($"'{nameof(gate)}' must be a pass device of design '{Netlist.DesignName}' (was {gate}).", nameof(gate));
+        return gate.Id;
+    }
+
+    // Every gate's charged and root loads, made once here so that the network is read-only (and safe to share)
+    // afterwards. A net with more branches than are compared gives every gate the same load: computed once per net.
+    private void ComputeGateLoads(CancellationToken cancellationToken)
+    {
+        var uncompared = new Dictionary<int, (double Farads, bool Assumes)>();
+        foreach (var gate in Netlist.Devices)
+        {
+            if (!gate.IsPassDevice) continue;
+            if ((gate.Id & 0xFFF) == 0) cancellationToken.ThrowIfCancellationRequested();
+            if (outputEdgeKept[gate.Id])
+                chargedFarads[gate.Id] = LoadOf(gate.Output, gate, null, uncompared, out chargedAssumes[gate.Id]);
+            else
+                chargedFarads[gate.Id] = Netlist.CapacitanceOf(gate.Output).Farads;
+            rootFarads[gate.Id] = LoadOf(gate.Inputs[0], gate, gate, uncompared, out rootAssumes[gate.Id]);
+        }
+    }
+
+    private double LoadOf(Net net, Device conducting, Device? required, Dictionary<int, (double Farads, bool Assumes)> uncompared, out bool assumes)
+    {
+        if (PassLoadEnd(net) - PassLoadStart(net) <= MaxBranchesCompared)
+            return LoadOf(downstreamFarads, net, conducting, required, out assumes);
+        if (!uncompared.TryGetValue(net.Id, out var load))
+            uncompared[net.Id] = load = (LoadOf(downstreamFarads, net, null, null, out var all), all);
+        assumes = load.Assumes;
+        return load.Farads;
+    }
+
+    // The net's capacitance plus the heaviest set of its branches that conduct together, none exclusive with
+    // 'conducting' (the gate charging the net, or the gate a path leaves it by), 'required' always included. 'sums'
+    // holds the downstream loads of the nets below (final for them when the sweep reaches this net).
+    private double LoadOf(double[] sums, Net net, Device? conducting, Device? required, out bool assumes)
+    {
+        var branches = branchScratch;
+        branches.Clear();
+        var compare = PassLoadEnd(net) - PassLoadStart(net) <= MaxBranchesCompared;
+        var anyExclusive = false;
+        assumes = false;
+        for (var position = passLoadStart[net.Id]; position < passLoadStart[net.Id + 1]; position++)
+        {
+            var load = Netlist.Devices[passLoads[position]];
+            if (!inputEdgeKept[load.Id]) continue;
+            if (compare && conducting is not null && !ReferenceEquals(load, required) && AreExclusive(load, conducting)) continue;
+            var kept = outputEdgeKept[load.Id];
+            assumes |= kept && downstreamAssumes[load.Output.Id];
+            anyExclusive |= compare && load.DataControl is { } control && hasExclusivePartner[control.Id];
+            branches.Add((kept ? sums[load.Output.Id] : 0.0, load));
+        }
+
+        return Netlist.CapacitanceOf(net).Farads + SelectConducting(branches, required, anyExclusive, ref assumes);
+    }
+
+    // Greedy, heaviest first (the required branch before all): a branch is counted unless its control is exclusive
+    // with one already counted. Two counted branches on different data nets not known to be exclusive are an assumption.
+    private double SelectConducting(List<(double Farads, Device Gate)> branches, Device? required, bool compare, ref bool assumes)
+    {
+        if (branches.Count == 0) return 0;
+        if (compare && branches.Count > 1)
+            branches.Sort(HeaviestFirst);
+        if (required is not null)
+        {
+            for (var at = 1; at < branches.Count; at++)
+            {
+                if (!ReferenceEquals(branches[at].Gate, required)) continue;
+                var item = branches[at];
+                branches.RemoveAt(at);
+                branches.Insert(0, item);
+                break;
+            }
+        }
+
+        var counted = countedScratch;
+        counted.Clear();
+        var total = 0.0;
+        foreach (var (farads, gate) in branches)
+        {
+            var keep = true;
+            if (compare)
+                foreach (var other in counted)
+                    if (AreExclusive(gate, other)) { keep = false; break; }
+            if (!keep) continue;
+            if (!assumes)
+                foreach (var other in counted)
+                    if (IsUnknownPair(gate, other)) { assumes = true; break; }
+            counted.Add(gate);
+            total += farads;
+        }
+
+        return total;
+    }
+
+    private static readonly Comparison<(double Farads, Device Gate)> HeaviestFirst
+        = static (a, b) => b.Farads != a.Farads ? b.Farads.CompareTo(a.Farads) : a.Gate.Id.CompareTo(b.Gate.Id);
+
+    private bool AreExclusive(Device a, Device b)
+        => a.DataControl is { } ca && b.DataControl is { } cb && Netlist.AreExclusive(ca, cb);
+
+    // Two branches on different data nets whose exclusivity is not known: counted together as an assumption.
+    private bool IsUnknownPair(Device a, Device b)
+        => a.DataControl is { } ca && b.DataControl is { } cb && !ReferenceEquals(ca, cb) && !Netlist.AreExclusive(ca, cb);
 
     /// <summary>
     /// The resistance that drives a tree rooted at this net: its strongest restoring driver's; the process's driver
@@ -223,16 +408,13 @@ internal sealed class PassGateNetwork
             var node = postorder[i];
             if (node < DeviceCount) continue;
             var net = nets[node - DeviceCount];
-            var total = Netlist.CapacitanceOf(net).Farads;
-            for (var position = passLoadStart[net.Id]; position < passLoadStart[net.Id + 1]; position++)
-            {
-                var load = passLoads[position];
-                if (inputEdgeKept[load] && outputEdgeKept[load])
-                    total += sums[Netlist.Devices[load].Output.Id];
-            }
-            sums[net.Id] = total;
+            // Children come first in postorder: their sums are final when the net is reached.
+            sums[net.Id] = PassLoadStart(net) == PassLoadEnd(net)
+                ? Netlist.CapacitanceOf(net).Farads
+                : LoadOf(sums, net, null, null, out downstreamAssumes[net.Id]);
         }
 
         return sums;
     }
+
 }

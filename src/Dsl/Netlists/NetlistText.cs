@@ -19,6 +19,8 @@ public static class NetlistText
             text.Append("clock ").Append(clock.Name).Append(' ').Append(clock.Kind)
                 .Append(" period=").Append(clock.Period).Append(" duty=").Append(clock.Duty.ToString("R", CultureInfo.InvariantCulture))
                 .Append(" skew=").Append(clock.ComplementSkew);
+            if (clock.Kind == ClockKind.Root && clock.Offset != Time.Zero) text.Append(" offset=").Append(clock.Offset);
+            if (clock.Kind == ClockKind.Root && clock.IsIndependent) text.Append(" independent");
             if (clock.Source is { } source) text.Append(" from=").Append(source.Name);
             if (clock.Kind == ClockKind.Buffered) text.Append(" delay=").Append(clock.Delay);
             if (clock.Enable is { } enable)

@@ -43,7 +43,7 @@ internal static class LatchPairDeck
         var period = windowA.Period;
         var edge = ClockWaveforms.EdgeTime(phaseA.Clock);
         var dataAt = ClockWaveforms.NextOpening(phaseA, period) + edge * 2;
-        var fastest = model.FastestEntryDelay(a) + path.MinDelay + model.StageDelay(entryB);
+        var fastest = RaceModel.Fastest(model, path);
         // The window the race must beat: for PW1001 the shared window (until the second latch closes); for PW1002 the
         // overlap, until the second latch (open before the first) closes.
         // PW1001: the phase ends where its complement opens (the window's tail is the complement skew, which a fixed
@@ -85,6 +85,30 @@ internal static class LatchPairDeck
         deck.PassGate(entryA, input, storageA, controlA);
         deck.Capacitor(storageA, netlist.CapacitanceOf(a.Storage), $"'{a.Storage.Name}', storage of '{a.Name}'");
 
+        DrawStages(deck, netlist, stages);
+
+        var storageB = deck.Node(b.Storage);
+        deck.PassGate(entryB, deck.Node(entryB.Inputs[0]), storageB, controlB);
+        deck.Capacitor(storageB, netlist.CapacitanceOf(b.Storage), $"'{b.Storage.Name}', storage of '{b.Name}'");
+
+        var step = Time.Min(edge, fastest / 50);
+        deck.Transient(step, end, Time.Min(period / 200, fastest / 10));
+        var dataTime = SpiceNumbers.Of((dataAt + edge / 2).Seconds);
+        deck.Measure($".meas tran b_before FIND v({storageB}) AT={dataTime}", null);
+        deck.Measure($".meas tran b_at_close FIND v({storageB}) AT={SpiceNumbers.Of(closes)}", null);
+        deck.Measure($".meas tran t_through TRIG AT={dataTime} TARG v({storageB}) VAL={{vdd/2}} CROSS=1 TD={dataTime}",
+            new DeckEstimate("t_through", fastest.Seconds, "s", "fastest path: first latch's entry + path + second latch's entry, 0.69·R·C per stage"));
+        var expected = sameWindow ? 1.0 : (fastest < RaceModel.Overlap(model, phaseA, phaseB) ? 1.0 : 0.0);
+        deck.Measure(".meas tran race_through PARAM='abs(b_at_close - b_before) > vdd/2 ? 1 : 0'",
+            new DeckEstimate("race_through", expected, string.Empty, sameWindow
+                ? "1: data passes both latches in one window"
+                : "1 when the fastest path is shorter than the overlap"));
+        return deck.Build();
+    }
+
+    /// <summary>The path's stages as the deck draws them: restoring stages as models, data-controlled pass gates held on.</summary>
+    internal static void DrawStages(DeckWriter deck, Netlist netlist, IReadOnlyList<Stage> stages)
+    {
         string? on = null;
         foreach (var stage in stages)
         {
@@ -107,24 +131,6 @@ internal static class LatchPairDeck
 
             deck.Capacitor(output, netlist.CapacitanceOf(stage.Device.Output), $"'{stage.Device.Output.Name}'");
         }
-
-        var storageB = deck.Node(b.Storage);
-        deck.PassGate(entryB, deck.Node(entryB.Inputs[0]), storageB, controlB);
-        deck.Capacitor(storageB, netlist.CapacitanceOf(b.Storage), $"'{b.Storage.Name}', storage of '{b.Name}'");
-
-        var step = Time.Min(edge, fastest / 50);
-        deck.Transient(step, end, Time.Min(period / 200, fastest / 10));
-        var dataTime = SpiceNumbers.Of((dataAt + edge / 2).Seconds);
-        deck.Measure($".meas tran b_before FIND v({storageB}) AT={dataTime}", null);
-        deck.Measure($".meas tran b_at_close FIND v({storageB}) AT={SpiceNumbers.Of(closes)}", null);
-        deck.Measure($".meas tran t_through TRIG AT={dataTime} TARG v({storageB}) VAL={{vdd/2}} CROSS=1 TD={dataTime}",
-            new DeckEstimate("t_through", fastest.Seconds, "s", "fastest path: first latch's entry + path + second latch's entry, 0.69·R·C per stage"));
-        var expected = sameWindow ? 1.0 : (fastest < OverlapRaceRule.OpenOverlap(phaseA, phaseB) ? 1.0 : 0.0);
-        deck.Measure(".meas tran race_through PARAM='abs(b_at_close - b_before) > vdd/2 ? 1 : 0'",
-            new DeckEstimate("race_through", expected, string.Empty, sameWindow
-                ? "1: data passes both latches in one window"
-                : "1 when the fastest path is shorter than the overlap"));
-        return deck.Build();
     }
 
     // The first moment after 'after' at which the phase stops conducting.
@@ -135,7 +141,7 @@ internal static class LatchPairDeck
         return window.Closes + window.Period * k;
     }
 
-    private readonly struct Stage
+    internal readonly struct Stage
     {
         public Stage(Device device, Net from)
         {
@@ -149,7 +155,7 @@ internal static class LatchPairDeck
     }
 
     // The shortest chain of restoring stages and data-controlled pass gates from 'start' to 'target' (breadth first).
-    private static List<Stage>? Route(Netlist netlist, Net start, Net target)
+    internal static List<Stage>? Route(Netlist netlist, Net start, Net target)
     {
         var reached = new Dictionary<int, Stage?> { [start.Id] = null };
         var queue = new Queue<Net>();

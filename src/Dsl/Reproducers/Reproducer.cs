@@ -18,6 +18,8 @@ public static class Reproducer
         [RuleIds.DynamicNodeOnGatedClock] = RetentionDeck.Build,
         [RuleIds.ClockTooSlowForDynamicStorage] = RetentionDeck.Build,
         [RuleIds.ChargeSharing] = ChargeSharingDeck.Build,
+        [RuleIds.RegisterSetup] = RegisterPathDeck.Build,
+        [RuleIds.RegisterHold] = RegisterPathDeck.Build,
     };
 
     /// <summary>The rule IDs whose findings have a deck.</summary>

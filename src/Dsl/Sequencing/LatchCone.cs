@@ -2,7 +2,8 @@ namespace Phaseward;
 
 /// <summary>
 /// The graph a latch's path searches walk: nets joined by the stages that carry data onwards, ending at the entry
-/// gates of the next latches. The one place that says what a step costs (<see cref="DelaySeconds"/>).
+/// gates of the next latches. The one place that says what a step costs (<see cref="DelaySeconds"/> at least,
+/// <see cref="MaxDelaySeconds"/> at most).
 /// </summary>
 /// <remarks>
 /// From a net the data goes on through restoring stages (strong ones: keepers only hold) and data-controlled pass
@@ -15,6 +16,7 @@ internal sealed class LatchCone
     private readonly Netlist netlist;
     private readonly Latch?[] entryLatchOfDevice;
     private readonly bool[] isLatchStorage;
+    private PassGateNetwork? network;
 
     public LatchCone(Netlist netlist, Latch?[] entryLatchOfDevice, bool[] isLatchStorage)
     {
@@ -50,6 +52,17 @@ internal sealed class LatchCone
         return true;
     }
 
-    /// <summary>The delay of one step through <paramref name="device"/>, in seconds.</summary>
+    /// <summary>The shortest delay of one step through <paramref name="device"/>, in seconds: it charges its own output
+    /// net only (no side branch conducts), a lower bound of the pass-gate delay model.</summary>
     public double DelaySeconds(Device device) => FirstOrderDelay.Of(netlist, device).Seconds;
+
+    /// <summary>
+    /// The longest delay of one step through <paramref name="device"/>, in seconds: the pass-gate delay model's worst
+    /// case (<see cref="PassGateNetwork.ElmoreTerm"/>), the stage charging everything that may conduct from its output
+    /// (a latch's storage node behind its open entry gate included), so that along a path the steps add up to 0.69 ×
+    /// the conducting path's Elmore delay with its side loads: the Elmore delay PW2001 reports, with the stage factor of
+    /// <see cref="FirstOrderDelay"/>.
+    /// </summary>
+    public double MaxDelaySeconds(Device device)
+        => (network ??= new PassGateNetwork(netlist)).ElmoreTerm(device).Seconds * FirstOrderDelay.Ln2;
 }

@@ -105,7 +105,7 @@ internal static class LatchFinder
         {
             var gate = clocked[i];
             var stage = loopStages[i];
-            if (stage is not null && !LatchModel.SameWindow(gate.ClockControl!, entryPhase))
+            if (stage is not null && !SameWindow(gate.ClockControl!, entryPhase))
             {
                 feedback.Add(gate);
                 feedbackStage ??= stage;
@@ -119,11 +119,16 @@ internal static class LatchFinder
         return feedbackStage;
     }
 
+    // Two phases open in the same window: transparent together for longer than the overlap allowance (a gated or
+    // slightly delayed copy of a phase counts).
+    private static bool SameWindow(Phase a, Phase b)
+        => ReferenceEquals(a, b) || WindowRelations.Of(a, b) == WindowRelation.TransparentTogether;
+
     // The first gate of the window the gate opens in, among the windows found so far, or null.
     private static Device? WindowFirstOf(List<Device> windowFirsts, Device gate)
     {
         foreach (var first in windowFirsts)
-            if (LatchModel.SameWindow(first.ClockControl!, gate.ClockControl!))
+            if (SameWindow(first.ClockControl!, gate.ClockControl!))
                 return first;
         return null;
     }
@@ -133,12 +138,12 @@ internal static class LatchFinder
     {
         var count = 0;
         foreach (var gate in entries)
-            if (LatchModel.SameWindow(first.ClockControl!, gate.ClockControl!))
+            if (SameWindow(first.ClockControl!, gate.ClockControl!))
                 count++;
         var group = new Device[count];
         count = 0;
         foreach (var gate in entries)
-            if (LatchModel.SameWindow(first.ClockControl!, gate.ClockControl!))
+            if (SameWindow(first.ClockControl!, gate.ClockControl!))
                 group[count++] = gate;
         return group;
     }

@@ -19,6 +19,8 @@ public sealed class LatchModel
 
     private readonly Latch?[] entryLatchOfDevice;
     private readonly Register?[] registerOfLatch;
+    private readonly PhaseWindowCache windows = new();
+    private readonly Dictionary<(Phase, Phase), WindowRelation> relations = new();
 
     private LatchModel(Netlist netlist)
     {
@@ -75,14 +77,22 @@ public sealed class LatchModel
         return fastest;
     }
 
+    /// <summary>The window of a latch's phase, or of any phase (made once per model).</summary>
+    public PhaseWindow WindowOf(Phase phase) => windows.Of(phase);
+
+    /// <summary>How the windows of two phases lie (see <see cref="WindowRelation"/>), computed once per pair of phases.</summary>
+    public WindowRelation Relation(Phase a, Phase b)
+    {
+        if (!relations.TryGetValue((a, b), out var relation))
+            relations[(a, b)] = relation = WindowRelations.Of(WindowOf(a), WindowOf(b));
+        return relation;
+    }
+
+    /// <summary>A path from a register's slave to a register's master: a register-to-register path (setup and hold, PW4001/PW4002).</summary>
+    public bool IsRegisterToRegister(Latch from, Latch to)
+        => RegisterOf(from) is { } launch && ReferenceEquals(launch.Slave, from)
+           && RegisterOf(to) is { } capture && ReferenceEquals(capture.Master, to);
+
     /// <summary>Delay of the latch's output stage (zero when it has none).</summary>
     public Time OutputDelay(Latch latch) => latch.OutputStage is { } stage ? StageDelay(stage) : Time.Zero;
-
-    /// <summary>Two phases open in the same window: the same root clock and the same polarity (gated and buffered copies count).</summary>
-    public static bool SameWindow(Phase a, Phase b)
-        => ReferenceEquals(a.Clock.Root, b.Clock.Root) && a.Polarity == b.Polarity;
-
-    /// <summary>Two phases of one root clock with opposite polarity.</summary>
-    public static bool Complementary(Phase a, Phase b)
-        => ReferenceEquals(a.Clock.Root, b.Clock.Root) && a.Polarity != b.Polarity;
 }

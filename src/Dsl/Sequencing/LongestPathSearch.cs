@@ -60,7 +60,7 @@ internal sealed class LongestPathSearch
 
                 if (postIndex[next.Id] >= postIndex[net.Id])
                     continue; // back edge: a combinational loop is not followed round
-                var nd = d + cone.DelaySeconds(device);
+                var nd = d + cone.MaxDelaySeconds(device);
                 if (nd > distance[next.Id])
                     distance[next.Id] = nd;
             }

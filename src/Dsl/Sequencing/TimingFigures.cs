@@ -8,14 +8,15 @@ namespace Phaseward;
 /// <summary>First-order timing figures of one latch, derived from its devices (see <see cref="TimingFigures"/>).</summary>
 public sealed class LatchTiming
 {
-    internal LatchTiming(Latch latch, Time entry, Time output, Time feedback)
+    internal LatchTiming(Latch latch, Time entry, Time fastestEntry, Time output, Time feedback)
     {
         Latch = latch;
         EntryDelay = entry;
+        FastestEntryDelay = fastestEntry;
         OutputDelay = output;
         Setup = entry + (latch.FeedbackGates.Count > 0 ? output + feedback : Time.Zero);
         DataToOutput = entry + output;
-        Window = latch.Window;
+        Window = PhaseWindow.Of(latch.Phase);
         Hold = Window.Length - (latch.Phase.Polarity == ClockPolarity.High
             ? latch.Phase.Clock.Period * latch.Phase.Clock.Duty
             : latch.Phase.Clock.Period * (1 - latch.Phase.Clock.Duty));
@@ -32,6 +33,16 @@ public sealed class LatchTiming
 
     /// <summary>t of the entry gate charging the storage node.</summary>
     public Time EntryDelay { get; }
+
+    /// <summary>t of the fastest entry gate (the race and hold checks).</summary>
+    public Time FastestEntryDelay { get; }
+
+    /// <summary>
+    /// The most a latch may borrow: its nominal window less the complement skew and its setup time,
+    /// t_borrow ≤ T_phase − (t_setup + t_skew) (Weste &amp; Harris, "CMOS VLSI Design", 4th ed., ch. 10, time borrowing;
+    /// equation number from memory). Skew shrinks what may be borrowed; it never widens it.
+    /// </summary>
+    public Time BorrowLimit => Window.NominalLength - Latch.Phase.Clock.ComplementSkew - Setup;
 
     /// <summary>t of the output stage.</summary>
     public Time OutputDelay { get; }
@@ -59,10 +70,13 @@ public sealed class RegisterTiming
     {
         Register = register;
         Setup = master.Setup;
-        ClockToOutput = slave.EntryDelay + master.OutputDelay + slave.OutputDelay;
-        ClockToOutputMin = slave.EntryDelay + slave.OutputDelay;
-        var overlaps = ClockOverlaps.Of(register.Clock);
-        Hold = register.IsPositiveEdge ? overlaps.OneOne.Length : overlaps.ZeroZero.Length;
+        // A static master's setup already waits for its output inverter (the feedback loop must hold the value), so
+        // the edge finds that inverter settled; a dynamic master's setup is its pass gate alone, so t_c-q adds it.
+        var masterOutputInSetup = master.Latch.FeedbackGates.Count > 0;
+        ClockToOutput = slave.EntryDelay + slave.OutputDelay + (masterOutputInSetup ? Time.Zero : master.OutputDelay);
+        ClockToOutputMin = slave.FastestEntryDelay + slave.OutputDelay;
+        EdgeOverlap = slave.Window.StillOpenAfterOpening(master.Window);
+        Hold = EdgeOverlap - master.FastestEntryDelay;
         MasterSlaveRace = master.EntryDelay + master.OutputDelay + slave.EntryDelay;
     }
 
@@ -75,13 +89,27 @@ public sealed class RegisterTiming
     /// <summary>Setup time before the capturing edge: the master latch's setup (dynamic: its input pass gate's delay).</summary>
     public Time Setup { get; }
 
-    /// <summary>Clock-to-output (propagation): slave pass gate + the master's and the slave's inverters.</summary>
+    /// <summary>
+    /// Clock-to-output (propagation). Static register: slave pass gate + slave inverter, t_c-q = t_T2 + t_I; dynamic
+    /// register: slave pass gate + the master's and the slave's inverters, t_c-q = t_I1 + t_T2 + t_I2 (Rabaey,
+    /// Chandrakasan, Nikolić, "Digital Integrated Circuits", 2nd ed., ch. 7, static and dynamic transmission-gate
+    /// master–slave registers; section numbers from memory).
+    /// </summary>
     public Time ClockToOutput { get; }
 
     /// <summary>Clock-to-output (contamination, data settled early): slave pass gate + the slave's inverter.</summary>
     public Time ClockToOutputMin { get; }
 
-    /// <summary>Hold time: the overlap after the capturing edge during which the master still conducts (1-1 for a rising-edge register).</summary>
+    /// <summary>How long the master still conducts after the capturing edge (the 1-1 overlap for a rising-edge register).</summary>
+    public Time EdgeOverlap { get; }
+
+    /// <summary>
+    /// Hold time: the overlap after the capturing edge during which the master still conducts, less the master pass
+    /// gate's own delay (new data must charge the master's node before the gate shuts): t_hold = t_overlap − t_T1.
+    /// The textbook condition is t_overlap1-1 &lt; t_hold for the input (Rabaey et al., 2nd ed., ch. 7, clock overlap,
+    /// from memory); crediting t_T1 is the first-order race model PW1002 uses for the same race (<see cref="RaceModel"/>).
+    /// Zero or negative: data may change at the edge.
+    /// </summary>
     public Time Hold { get; }
 
     /// <summary>t(TG1) + t(I1) + t(TG2): how long data entering the master takes to reach the slave's storage node (must exceed the other overlap).</summary>
@@ -104,7 +132,7 @@ public sealed class TimingFigures
         foreach (var latch in model.Latches)
         {
             var feedback = latch.FeedbackStage is { } stage ? model.StageDelay(stage) : Time.Zero;
-            byLatch[latch.Index] = new LatchTiming(latch, model.EntryDelay(latch), model.OutputDelay(latch), feedback);
+            byLatch[latch.Index] = new LatchTiming(latch, model.EntryDelay(latch), model.FastestEntryDelay(latch), model.OutputDelay(latch), feedback);
         }
 
         var registers = new List<RegisterTiming>();

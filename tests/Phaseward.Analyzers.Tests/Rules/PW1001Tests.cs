@@ -77,16 +77,19 @@ public class PW1001Tests
             var m = {|#3:c.DynamicLatch(b, late.Low, "M")|};
             c.Output("q", {|#2:c.DynamicLatch(m, gated.Low, "N")|});
             """),
-            Pw1001("B", "A", "clk.High and gated.High (both High of root clock clk)").WithLocation(0).WithLocation(1),
-            Pw1001("N", "M", "late.Low and gated.Low (both Low of root clock clk)").WithLocation(2).WithLocation(3));
+            Pw1001("B", "A", "clk.High and gated.High (together for 2.03 ns of every 4 ns)").WithLocation(0).WithLocation(1),
+            Pw1001("N", "M", "late.Low and gated.Low (together for 1.98 ns of every 4 ns)").WithLocation(2).WithLocation(3));
 
     [Fact]
-    public Task LatchesOnUnrelatedRootClocksAreNotCompared()
+    public Task LatchesOnIndependentClocksAreNotComparedButTheCrossingIsReported()
         => Verify(Design("TwoRoots", """
             var a = c.Clock("a", 4.Nanoseconds());
-            var b = c.Clock("b", 4.Nanoseconds());
-            c.Output("q", c.DynamicLatch(c.DynamicLatch(c.Input("d"), a.High, "A"), b.High, "B"));
-            """));
+            var b = c.Clock("b", 4.Nanoseconds(), independent: true);
+            c.Output("q", {|#0:c.DynamicLatch({|#1:c.DynamicLatch(c.Input("d"), a.High, "A")|}, b.High, "B")|});
+            """),
+            new DiagnosticResult(RuleIds.ClockCrossing, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1)
+                .WithMessage("'B' on clock 'b' takes data from latch 'A' on clock 'a', which has no fixed time relation to it ('b' is declared " +
+                             "independent), without a synchronizer: it can sample the data while it changes and go metastable"));
 
     [Fact]
     public Task ALatchFedBackToItselfInItsOwnPhase()

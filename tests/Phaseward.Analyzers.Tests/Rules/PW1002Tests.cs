@@ -14,10 +14,11 @@ namespace Phaseward.Analyzers.Tests.Rules;
 /// </summary>
 public class PW1002Tests
 {
-    private static DiagnosticResult Pw1002(string latch, string source, string overlapKind, string clock, string fastest, string overlap, string margin)
+    private static DiagnosticResult Pw1002(string latch, string source, string overlapKind, string clock, string fastest, string overlap, string margin,
+        string required = "0 s")
         => new DiagnosticResult(RuleIds.OverlapRace, DiagnosticSeverity.Warning)
-            .WithMessage($"Latch '{latch}' can catch data launched through latch '{source}' during the {overlapKind} overlap of clock '{clock}': " +
-                         $"the fastest path takes {fastest} but both pass gates conduct together for {overlap} (margin {margin})");
+            .WithMessage($"Latch '{latch}' races latch '{source}' through the {overlapKind} overlap of clock '{clock}': " +
+                         $"the fastest path takes {fastest} while both pass gates conduct together for {overlap}, a margin of {margin}, below the required {required}");
 
     private static Task Verify(string source, params DiagnosticResult[] expected)
         => new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(source, expected).RunAsync();
@@ -99,9 +100,10 @@ public class PW1002Tests
 
     [Fact]
     public Task MinRaceMarginOptionRaisesTheBar()
-        // Margin 96.6 − 80 = 16.6 ps: clean by default (see RegisterBelowTheRaceDelayIsClean), reported at 20 ps.
+        // Margin 96.6 − 80 = 16.6 ps: clean by default (see RegisterBelowTheRaceDelayIsClean), reported at 20 ps as a
+        // positive margin below the required one (not as a latch that can catch data).
         => new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(Margin166,
-                Pw1002("R.slave", "R.master", "0-0", "clk", "96.6 ps", "80 ps", "16.6 ps").WithLocation(0).WithLocation(0))
+                Pw1002("R.slave", "R.master", "0-0", "clk", "96.6 ps", "80 ps", "16.6 ps", "20 ps").WithLocation(0).WithLocation(0))
             .WithEditorConfig("phaseward.min_race_margin = 20ps")
             .RunAsync();
 
@@ -115,7 +117,7 @@ public class PW1002Tests
     public Task SeverityFromEditorConfig()
         => new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(Margin166,
                 new DiagnosticResult(RuleIds.OverlapRace, DiagnosticSeverity.Info).WithLocation(0).WithLocation(0)
-                    .WithArguments("R.slave", "R.master", "0-0", "clk", "96.6 ps", "80 ps", "16.6 ps"))
+                    .WithArguments("R.slave", "R.master", "0-0", "clock 'clk'", "96.6 ps", "80 ps", "16.6 ps", "20 ps"))
             .WithEditorConfig("phaseward.min_race_margin = 20ps\ndotnet_diagnostic.PW1002.severity = suggestion")
             .RunAsync();
 }

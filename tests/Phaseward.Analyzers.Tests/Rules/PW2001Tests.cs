@@ -41,7 +41,7 @@ public class PW2001Tests
                 }
             }
             """,
-            PW2001.WithLocation(1).WithLocation(0).WithArguments("3", "2", "188 ps", "130 ps", "2", "95 ps"))
+            PW2001.WithLocation(1).WithLocation(0).WithArguments("3", "2", "188 ps", "130 ps", "2", "95 ps", ""))
             .RunAsync();
 
     [Fact]
@@ -84,7 +84,7 @@ public class PW2001Tests
                 }
             }
             """,
-            PW2001.WithLocation(0).WithLocation(0).WithArguments("6", "2", "543 ps", "376 ps", "2", "187 ps"))
+            PW2001.WithLocation(0).WithLocation(0).WithArguments("6", "2", "543 ps", "376 ps", "2", "187 ps", ""))
             .RunAsync();
 
     [Fact]
@@ -281,7 +281,7 @@ public class PW2001Tests
                 }
             }
             """,
-            PW2001.WithLocation(0).WithLocation(0).WithArguments("6", "4", "543 ps", "376 ps", "2", "187 ps"))
+            PW2001.WithLocation(0).WithLocation(0).WithArguments("6", "4", "543 ps", "376 ps", "2", "187 ps", ""))
             .WithEditorConfig("phaseward.max_series_pass_gates = 4")
             .RunAsync();
 
@@ -312,7 +312,7 @@ public class PW2001Tests
                 .WithEditorConfig("phaseward.max_series_pass_gates = " + value)
                 .RunAsync(),
             new PhasewardAnalyzerTest<PassGatePathAnalyzer>(ThreeGates.Replace("{|#9:Describe|}", "Describe"),
-                    PW2001.WithLocation(1).WithLocation(0).WithArguments("3", "2", "188 ps", "130 ps", "2", "95 ps"))
+                    PW2001.WithLocation(1).WithLocation(0).WithArguments("3", "2", "188 ps", "130 ps", "2", "95 ps", ""))
                 .WithEditorConfig("phaseward.max_series_pass_gates = " + value)
                 .RunAsync());
 

@@ -4,9 +4,9 @@ using Microsoft.CodeAnalysis.Diagnostics;
 
 namespace Phaseward.Analyzers;
 
-/// <summary>PW4xxx: register setup and hold, two-phase latch paths with time borrowing.</summary>
+/// <summary>PW4xxx: register setup and hold, two-phase latch paths with time borrowing, latch write windows.</summary>
 [DiagnosticAnalyzer(LanguageNames.CSharp)]
 public sealed class TimingAnalyzer : FindingAnalyzer
 {
-    protected override IReadOnlyList<Rule> Rules { get; } = new Rule[] { new RegisterTimingRule(), new LatchBorrowingRule() };
+    protected override IReadOnlyList<Rule> Rules { get; } = new Rule[] { new RegisterTimingRule(), new LatchBorrowingRule(), new LatchWriteWindowRule() };
 }

@@ -15,6 +15,10 @@ internal static class Descriptors
         RuleIds.OverlapRace, RuleTexts.OverlapRaceTitle, RuleTexts.OverlapRaceMessage, RuleCategories.ClockPhases,
         DiagnosticSeverity.Warning, RuleTexts.OverlapRaceDescription);
 
+    public static readonly DiagnosticDescriptor ClockCrossing = DescriptorFactory.Create(
+        RuleIds.ClockCrossing, RuleTexts.ClockCrossingTitle, RuleTexts.ClockCrossingMessage, RuleCategories.ClockPhases,
+        DiagnosticSeverity.Warning, RuleTexts.ClockCrossingDescription);
+
     public static readonly DiagnosticDescriptor ClockGateEnable = DescriptorFactory.Create(
         RuleIds.ClockGateEnable, RuleTexts.ClockGateEnableTitle, RuleTexts.ClockGateEnableMessage, RuleCategories.ClockPhases,
         DiagnosticSeverity.Warning, RuleTexts.ClockGateEnableDescription);
@@ -34,6 +38,13 @@ internal static class Descriptors
     public static readonly DiagnosticDescriptor LatchBorrowing = DescriptorFactory.Create(
         RuleIds.LatchBorrowing, RuleTexts.LatchBorrowingTitle, RuleTexts.LatchBorrowingMessage, RuleCategories.Timing,
         DiagnosticSeverity.Warning, RuleTexts.LatchBorrowingDescription);
+    public static readonly DiagnosticDescriptor LatchWriteWindow = DescriptorFactory.Create(
+        RuleIds.LatchWriteWindow, RuleTexts.LatchWriteWindowTitle, RuleTexts.LatchWriteWindowMessage, RuleCategories.Timing,
+        DiagnosticSeverity.Warning, RuleTexts.LatchWriteWindowDescription);
+
+    public static readonly DiagnosticDescriptor LatchLoop = DescriptorFactory.Create(
+        RuleIds.LatchLoop, RuleTexts.LatchLoopTitle, RuleTexts.LatchLoopMessage, RuleCategories.Timing,
+        DiagnosticSeverity.Warning, RuleTexts.LatchLoopDescription);
     public static readonly DiagnosticDescriptor SeriesPassGates = DescriptorFactory.Create(
         RuleIds.SeriesPassGates, RuleTexts.SeriesPassGatesTitle, RuleTexts.SeriesPassGatesMessage, RuleCategories.PassGatePaths,
         DiagnosticSeverity.Warning, RuleTexts.SeriesPassGatesDescription);
@@ -78,6 +89,7 @@ internal static class Descriptors
     {
         SameWindowLatches,
         OverlapRace,
+        ClockCrossing,
         ClockGateEnable,
         LoopWithoutStorage,
         SeriesPassGates,
@@ -89,6 +101,8 @@ internal static class Descriptors
         RegisterSetup,
         RegisterHold,
         LatchBorrowing,
+        LatchWriteWindow,
+        LatchLoop,
         NotElaborated,
         ElaborationBudgetExceeded,
         DesignThrows,

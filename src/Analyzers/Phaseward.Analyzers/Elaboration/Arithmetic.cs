@@ -318,7 +318,14 @@ internal static class Arithmetic
             BinaryOperatorKind.LessThanOrEqual => a <= b,
             BinaryOperatorKind.GreaterThan => a > b,
             BinaryOperatorKind.GreaterThanOrEqual => a >= b,
+            BinaryOperatorKind.And => EnumValue(left, a & b),
+            BinaryOperatorKind.Or => EnumValue(left, a | b),
+            BinaryOperatorKind.ExclusiveOr => EnumValue(left, a ^ b),
             _ => null,
         };
     }
+
+    // A flags combination keeps the operand's representation: a DSL enum value, or the int a design's own enum is kept as.
+    private static object EnumValue(object like, long value)
+        => like is System.Enum ? System.Enum.ToObject(like.GetType(), value) : (object)System.Convert.ToInt32(value, CultureInfo.InvariantCulture);
 }

@@ -82,7 +82,10 @@ internal static class ClrTypes
     {
         if (assembly is not null && assembly.Identity.Name == DslName)
             return Dsl.GetType(name, throwOnError: false);
-        // Library types: System.Private.CoreLib / netstandard forwarders resolve by name.
+        // Library types: System.Private.CoreLib / netstandard forwarders resolve by name. (Code that does not compile
+        // yet can name a type with no name at all.)
+        if (string.IsNullOrEmpty(name) || name.StartsWith(".", StringComparison.Ordinal) || name.EndsWith(".", StringComparison.Ordinal))
+            return null;
         return Type.GetType(name, throwOnError: false)
             ?? typeof(System.Collections.Generic.List<>).Assembly.GetType(name, throwOnError: false);
     }

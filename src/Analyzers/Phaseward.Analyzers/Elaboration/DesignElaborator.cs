@@ -28,7 +28,7 @@ internal static class DesignElaborator
         Circuit? circuit = null;
         try
         {
-            var instance = interpreter.NewDesign(design.Type);
+            var instance = interpreter.NewObject(design.Type);
             if (!Construct(session, interpreter, design, instance, describeBody, cancellationToken))
                 return new ElaborationResult(interpreter.DesignName, null, interpreter.Issues, interpreter.Steps);
 
@@ -64,7 +64,7 @@ internal static class DesignElaborator
         return new ElaborationResult(interpreter.DesignName, circuit?.ToNetlist(), interpreter.Issues, interpreter.Steps);
     }
 
-    private static bool Construct(ElaborationSession session, Interpreter interpreter, DesignInfo design, DesignInstance instance,
+    private static bool Construct(ElaborationSession session, Interpreter interpreter, DesignInfo design, InterpretedObject instance,
         IOperation describeBody, CancellationToken cancellationToken)
     {
         foreach (var creation in session.Catalog.CreationsOf(design.Type, cancellationToken))

@@ -28,14 +28,28 @@ internal readonly struct ElaborationLimits : System.IEquatable<ElaborationLimits
     /// <summary>The largest recursion limit accepted: deeper nesting would risk the compiler's own stack.</summary>
     public const int MaxRecursionLimit = 512;
 
-    public ElaborationLimits(long stepBudget, int recursionLimit, long deviceBudget = DefaultDeviceBudget)
+    /// <summary>
+    /// Default memory budget in bytes for what the design's own code allocates at compile time (arrays at 8 bytes an
+    /// element, strings at 2 bytes a character, collections at 8 bytes an item; the netlist itself is bounded by the
+    /// device budget). 256 MiB: far above any design's tables of nets and names, far below what would strain an editor.
+    /// </summary>
+    public const long DefaultMemoryBudget = 256L * 1024 * 1024;
+
+    /// <summary>The largest memory budget accepted (4 GiB): a larger one would let a design take the editor's memory.</summary>
+    public const long MaxMemoryBudget = 4L * 1024 * 1024 * 1024;
+
+    public ElaborationLimits(long stepBudget, int recursionLimit, long deviceBudget = DefaultDeviceBudget, long memoryBudget = DefaultMemoryBudget)
     {
         StepBudget = stepBudget;
         RecursionLimit = recursionLimit;
         DeviceBudget = deviceBudget;
+        MemoryBudget = memoryBudget;
     }
 
-    public static ElaborationLimits Default { get; } = new(DefaultStepBudget, DefaultRecursionLimit, DefaultDeviceBudget);
+    public static ElaborationLimits Default { get; } = new(DefaultStepBudget, DefaultRecursionLimit, DefaultDeviceBudget, DefaultMemoryBudget);
+
+    /// <summary>The most bytes the design's code may allocate (see <see cref="DefaultMemoryBudget"/>).</summary>
+    public long MemoryBudget { get; }
 
     public long StepBudget { get; }
 
@@ -44,9 +58,10 @@ internal readonly struct ElaborationLimits : System.IEquatable<ElaborationLimits
     /// <summary>The most devices (and, separately, nets) one design may elaborate to.</summary>
     public long DeviceBudget { get; }
 
-    public bool Equals(ElaborationLimits other) => StepBudget == other.StepBudget && RecursionLimit == other.RecursionLimit && DeviceBudget == other.DeviceBudget;
+    public bool Equals(ElaborationLimits other) => StepBudget == other.StepBudget && RecursionLimit == other.RecursionLimit && DeviceBudget == other.DeviceBudget
+        && MemoryBudget == other.MemoryBudget;
 
     public override bool Equals(object? obj) => obj is ElaborationLimits other && Equals(other);
 
-    public override int GetHashCode() => (StepBudget.GetHashCode() * 31 + RecursionLimit) * 31 + DeviceBudget.GetHashCode();
+    public override int GetHashCode() => ((StepBudget.GetHashCode() * 31 + RecursionLimit) * 31 + DeviceBudget.GetHashCode()) * 31 + MemoryBudget.GetHashCode();
 }

@@ -12,7 +12,7 @@ internal sealed class Frame
     private readonly Dictionary<ISymbol, Variable> variables;
 
     /// <param name="capacity">How many variables the frame is expected to hold (it grows beyond if need be).</param>
-    public Frame(IMethodSymbol? method, Frame? lexicalParent, DesignInstance? instance, int capacity = 0)
+    public Frame(IMethodSymbol? method, Frame? lexicalParent, InterpretedObject? instance, int capacity = 0)
     {
         variables = new Dictionary<ISymbol, Variable>(capacity, SymbolEqualityComparer.Default);
         Method = method;
@@ -25,13 +25,16 @@ internal sealed class Frame
     public Frame? LexicalParent { get; }
 
     /// <summary>The design object <c>this</c> refers to (null in static code).</summary>
-    public DesignInstance? Instance { get; }
+    public InterpretedObject? Instance { get; }
 
     /// <summary>How many variables the frame holds.</summary>
     public int Count => variables.Count;
 
     /// <summary>Set by <c>return</c>.</summary>
     public object? ReturnValue { get; set; }
+
+    /// <summary>What an iterator method has yielded so far (null when the method is not an iterator).</summary>
+    public List<object?>? Yielded { get; set; }
 
     public void Declare(ISymbol symbol, object? value) => variables[symbol] = new Variable(value);
 

@@ -1,6 +1,7 @@
 using System;
 using System.Collections.Generic;
 using System.Globalization;
+using System.Linq;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Operations;
 
@@ -32,7 +33,7 @@ internal sealed partial class Interpreter
     private object? Assign(ISimpleAssignmentOperation assignment, Frame frame)
     {
         var place = PlaceOf(assignment.Target, frame);
-        var value = Evaluate(assignment.Value, frame);
+        var value = CopyIfValue(Evaluate(assignment.Value, frame));
         if (!place.IsKnown) return Unknown.Value;
         place.Set(value);
         return value;
@@ -50,7 +51,7 @@ internal sealed partial class Interpreter
         else if (assignment.OperatorMethod is { } method)
             result = CallOperator(assignment, method, new[] { current, operand }, frame);
         else if (assignment.OperatorKind == BinaryOperatorKind.Add && assignment.Target.Type?.SpecialType == SpecialType.System_String)
-            result = Arithmetic.Concatenate(current, operand);
+            result = Concatenate(assignment, current, operand);
         else if (current is null || operand is null || assignment.Target.Type is null)
             result = Unsupported(assignment, "this compound assignment", "its operands are not known");
         else
@@ -111,7 +112,7 @@ internal sealed partial class Interpreter
                 Deconstruct(declaration.Expression, value, frame);
                 return;
             case ITupleOperation tuple:
-                var items = value as TupleValue;
+                var items = value as TupleValue ?? DeconstructedParts(value);
                 if (items is null && !Unknown.Is(value))
                 {
                     Unsupported(target, "this deconstruction", "only tuples are deconstructed");
@@ -190,16 +191,32 @@ internal sealed partial class Interpreter
             return new Place(() => list[i], v => list[i] = v);
         }
 
-        if (receiver is DesignInstance instance || (receiver is null && property.IsStatic && session.IsInSource(property)))
+        if (receiver is InterpretedObject instance || (receiver is null && property.IsStatic && session.IsInSource(property)))
         {
-            var designInstance = receiver as DesignInstance;
-            if (designInstance is not null && FindOverride(designInstance.Type, property) is { } overriding)
+            var interpretedObject = receiver as InterpretedObject;
+            if (interpretedObject is not null && FindOverride(interpretedObject.Type, property) is { } overriding)
                 property = overriding;
             if (IsAutoProperty(property))
-                return Place.Of(property.IsStatic ? StaticVariable(property, frame) : designInstance!.GetOrAdd(property));
+                return Place.Of(property.IsStatic ? StaticVariable(property, frame) : interpretedObject!.GetOrAdd(property));
             if (property.SetMethod is { } setter && session.IsInSource(setter))
-                return new Place(() => CallGetter(reference, property, designInstance, frame),
-                    v => InvokeUser(setter, designInstance, new[] { v }, new Variable?[1], reference, frame));
+                return new Place(() => CallGetter(reference, property, interpretedObject, frame),
+                    v => InvokeUser(setter, interpretedObject, new[] { v }, new Variable?[1], reference, frame));
+        }
+        else if (receiver is not null && !ClrTypes.IsDsl(property) && Library.IsPure(property) && property.SetMethod is { } librarySetter)
+        {
+            // A dictionary entry, a StringBuilder's Length, an element of a library collection.
+            var (indexArguments, _) = Arguments(reference.Arguments, librarySetter, frame);
+            if (indexArguments is null) return default;
+            var getter = property.GetMethod;
+            return new Place(
+                () => getter is null ? Unknown.Value : CallClr(reference, getter, receiver, indexArguments.Take(getter.Parameters.Length).ToArray()),
+                v =>
+                {
+                    if (Unknown.Is(v)) return;
+                    var values = (object?[])indexArguments.Clone();
+                    values[values.Length - 1] = v;
+                    CallClr(reference, librarySetter, receiver, values);
+                });
         }
         else if (receiver is not null && ClrTypes.IsDsl(property) && property.SetMethod is { } dslSetter)
         {

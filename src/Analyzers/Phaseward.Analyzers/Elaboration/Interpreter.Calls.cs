@@ -18,44 +18,68 @@ internal sealed partial class Interpreter
         var receiver = invocation.Instance is null ? null : Evaluate(invocation.Instance, frame);
         if (Unknown.Is(receiver)) return receiver;
 
-        if (session.IsInSource(method) && (method.MethodKind is MethodKind.Ordinary or MethodKind.LocalFunction))
+        if (receiver is Circuit circuit && method.Name == nameof(Circuit.Place) && ClrTypes.IsDsl(method))
+            return PlaceBlock(invocation, circuit, frame);
+
+        if (receiver is InterpretedObject target && method.ContainingType?.TypeKind == TypeKind.Interface
+            && target.Type.FindImplementationForInterfaceMember(method) is IMethodSymbol implementation)
+            method = implementation;
+
+        if (session.IsInSource(method) && !method.IsImplicitlyDeclared && (method.MethodKind is MethodKind.Ordinary or MethodKind.LocalFunction or MethodKind.ExplicitInterfaceImplementation))
         {
-            if (invocation.IsVirtual && receiver is DesignInstance instance)
+            if (invocation.IsVirtual && receiver is InterpretedObject instance)
                 method = FindOverride(instance.Type, method) ?? method;
             var (arguments, references) = Arguments(invocation.Arguments, method, frame);
             if (arguments is null) return Unknown.Value;
-            return InvokeUser(method, receiver as DesignInstance ?? (method.IsStatic ? null : frame.Instance), arguments, references, invocation, frame);
+            return InvokeUser(method, receiver as InterpretedObject ?? (method.IsStatic ? null : frame.Instance), arguments, references, invocation, frame);
         }
 
-        if (receiver is List<object?> list)
-            return ListMethod(invocation, list, frame);
-        if (receiver is DesignInstance)
-            return Unsupported(invocation, "the call to " + Describe(method), "the design's inherited Phaseward members are not called at compile time");
+        if (method.MethodKind == MethodKind.DelegateInvoke)
+        {
+            var (delegateArguments, _) = Arguments(invocation.Arguments, method, frame);
+            if (delegateArguments is null) return Unknown.Value;
+            return receiver is Closure closure
+                ? CallClosure(closure, delegateArguments, invocation)
+                : Unsupported(invocation, "this delegate call", "the delegate was not made by the design's code");
+        }
 
-        var allowed = ClrTypes.IsDsl(method)
-            || method.ContainingType?.ToDisplayString() == "System.Math"
-            || (method.Name == "ToString" && receiver is not null && (IsNumericValue(receiver) || receiver is string or bool));
-        if (!allowed)
+        if (method.Name == "HasFlag" && receiver is int flags && invocation.Arguments.Length == 1)
+        {
+            // The design's own enums are kept as int, so Enum.HasFlag is answered here.
+            var flag = Evaluate(invocation.Arguments[0].Value, frame);
+            if (Unknown.Is(flag)) return flag;
+            var bits = System.Convert.ToInt32(flag, System.Globalization.CultureInfo.InvariantCulture);
+            return (flags & bits) == bits;
+        }
+
+        if (receiver is InterpretedObject self)
+            return CallObjectMember(invocation, self, method, frame);
+
+        if (!ClrTypes.IsDsl(method) && !Library.IsPure(method))
             return Unsupported(invocation, "the call to " + Describe(method),
-                "only the Phaseward DSL, System.Math, List<T> and methods declared in this compilation are elaborated");
+                "it is outside what compile-time elaboration runs (only the Phaseward DSL, methods of this compilation and pure library members such as string, Math, LINQ and the collections)");
 
-        var (values, _) = Arguments(invocation.Arguments, method, frame);
+        var (values, byReference) = Arguments(invocation.Arguments, method, frame);
         if (values is null) return Unknown.Value;
-        return CallClr(invocation, method, receiver, values);
+        return CallClr(invocation, method, receiver, values, byReference);
     }
 
     /// <summary>
     /// Calls the real DSL (or library) member behind <paramref name="method"/>, telling the circuit where the call is.
     /// <paramref name="arguments"/> is converted in place to the member's parameter types.
     /// </summary>
-    private object? CallClr(IOperation site, IMethodSymbol method, object? receiver, object?[] arguments)
+    private object? CallClr(IOperation site, IMethodSymbol method, object? receiver, object?[] arguments, Variable?[]? references = null)
     {
-        var member = session.MemberOf(method);
+        var isDsl = ClrTypes.IsDsl(method);
+        var member = isDsl ? session.MemberOf(method) : session.LibraryMemberOf(method);
         if (member is null)
-            return Unsupported(site, "the call to " + Describe(method),
-                "the Phaseward assembly loaded by the compiler has no such member (is it older than the one the project references?)");
-        if (receiver is not null && IsNumericValue(receiver) && member.DeclaringType != receiver.GetType())
-            return Unsupported(site, "the call to " + Describe(method), "it is outside the subset");
+            return Unsupported(site, "the call to " + Describe(method), isDsl
+                ? "the Phaseward assembly loaded by the compiler has no such member (is it older than the one the project references?)"
+                : "the library member was not found for the values at hand");
+        if (receiver is not null && member.DeclaringType is { IsPrimitive: true } primitive && receiver.GetType() != primitive)
+            receiver = ToClr(receiver, primitive);
+        if (!isDsl && !ChargeSizes(site, member, arguments))
+            return Unknown.Value;
 
         // Converted in place: every caller hands over an array it made for this call (one array per call, not two).
         var parameterTypes = session.ParameterTypesOf(member);
@@ -63,7 +87,11 @@ internal sealed partial class Interpreter
             return Unsupported(site, "the call to " + Describe(method), "its arguments could not be passed (the run-time member takes " + parameterTypes.Length + ")");
         var clrArguments = arguments;
         for (var i = 0; i < parameterTypes.Length; i++)
+        {
             clrArguments[i] = ToClr(arguments[i], parameterTypes[i]);
+            if (clrArguments[i] is Unconvertible)
+                return Unsupported(site, "the call to " + Describe(method), "argument " + (i + 1) + " cannot be passed to the library as " + parameterTypes[i].Name);
+        }
 
         var circuit = Circuit;
         if (circuit is not null)
@@ -78,6 +106,10 @@ internal sealed partial class Interpreter
         try
         {
             var result = member is ConstructorInfo constructor ? constructor.Invoke(clrArguments) : member.Invoke(receiver, clrArguments);
+            if (references is not null)
+                for (var i = 0; i < references.Length && i < clrArguments.Length; i++)
+                    if (references[i] is { } reference)
+                        reference.Value = FromClr(clrArguments[i]);
             if (circuit is not null && (circuit.DeviceCount > limits.DeviceBudget || circuit.NetCount > limits.DeviceBudget))
             {
                 Report(RuleIds.ElaborationBudgetExceeded, loops.Count > 0 ? loops.Peek().Syntax : site.Syntax, DesignName,
@@ -85,12 +117,19 @@ internal sealed partial class Interpreter
                 throw new ElaborationStopped();
             }
 
+            if (!isDsl)
+                Charge(site, result);
             return FromClr(result);
+        }
+        catch (TargetInvocationException e) when (e.InnerException is ElaborationStopped or UnknownValueException or DesignException)
+        {
+            if (e.InnerException is UnknownValueException) return Unknown.Value;
+            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e.InnerException).Throw();
+            throw;
         }
         catch (TargetInvocationException e) when (e.InnerException is { } inner && inner is not OperationCanceledException)
         {
-            Throws(site.Syntax, inner.Message);
-            return Unknown.Value;
+            return RaiseLibraryException(site, inner);
         }
         catch (Exception e) when (e is ArgumentException or TargetParameterCountException or InvalidCastException or MemberAccessException or TargetException)
         {
@@ -130,8 +169,17 @@ internal sealed partial class Interpreter
     {
         if (operands.Any(Unknown.Is)) return Unknown.Value;
         Step(site);
+        if (method.IsImplicitlyDeclared && operands.Length == 2 && operands[0] is InterpretedObject { Type.IsRecord: true } record
+            && method.Name is "op_Equality" or "op_Inequality")
+        {
+            var equal = AreEqualOrUnknown(record, operands[1]);
+            return equal is null ? Unknown.Value : method.Name == "op_Equality" ? equal.Value : !equal.Value;
+        }
+
         if (session.IsInSource(method))
             return InvokeUser(method, null, operands, new Variable?[operands.Length], site, frame);
+        if (Library.IsPure(method))
+            return CallClr(site, method, null, operands);
         if (ClrTypes.IsDsl(method))
             return CallClr(site, method, null, operands);
         return Unsupported(site, "operator " + Describe(method), "only operators of the Phaseward DSL and of this compilation are elaborated");
@@ -177,7 +225,7 @@ internal sealed partial class Interpreter
     }
 
     /// <summary>Runs a method, local function or accessor declared in this compilation.</summary>
-    private object? InvokeUser(IMethodSymbol method, DesignInstance? instance, object?[] arguments, Variable?[] references, IOperation site, Frame caller)
+    private object? InvokeUser(IMethodSymbol method, InterpretedObject? instance, object?[] arguments, Variable?[] references, IOperation site, Frame caller)
     {
         var body = session.BodyOf(method, m => BodyOf((IMethodSymbol)m));
         if (body is null)
@@ -205,13 +253,15 @@ internal sealed partial class Interpreter
                 if (i < references.Length && references[i] is { } variable)
                     frame.Bind(parameters[i], variable);
                 else
-                    frame.Declare(parameters[i], arguments[i]);
+                    frame.Declare(parameters[i], CopyIfValue(arguments[i]));
             }
 
+            if (IsIterator(body))
+                frame.Yielded = new List<object?>();
             Execute(body, frame);
             if (frame.Count > expectedVariables)
                 frameSizes[body] = frame.Count;
-            return frame.ReturnValue;
+            return frame.Yielded ?? frame.ReturnValue;
         }
         finally
         {
@@ -219,6 +269,18 @@ internal sealed partial class Interpreter
             callers = outerCallers;
             LeaveCall();
         }
+    }
+
+    // Iterators are run to completion when called, their yielded values kept in a list (see docs/elaboration.md).
+    private readonly Dictionary<IOperation, bool> iterators = new();
+
+    private bool IsIterator(IOperation body)
+    {
+        if (!iterators.TryGetValue(body, out var isIterator))
+            iterators[body] = isIterator = body.Syntax.DescendantNodes(n => n is not (Microsoft.CodeAnalysis.CSharp.Syntax.LocalFunctionStatementSyntax
+                    or Microsoft.CodeAnalysis.CSharp.Syntax.AnonymousFunctionExpressionSyntax))
+                .Any(n => n is YieldStatementSyntax);
+        return isIterator;
     }
 
     private IOperation? BodyOf(IMethodSymbol method)
@@ -285,7 +347,7 @@ internal sealed partial class Interpreter
                 return Unknown.Value;
             case string text when property.Name == "Length":
                 return text.Length;
-            case DesignInstance instance:
+            case InterpretedObject instance:
                 return ReadDesignProperty(reference, instance, frame);
         }
 
@@ -296,15 +358,18 @@ internal sealed partial class Interpreter
             return Unsupported(reference, "property " + Describe(property), "only properties of the design and static properties are elaborated");
         }
 
+        if (!ClrTypes.IsDsl(property) && Library.IsPure(property))
+            return ReadLibraryProperty(reference, property, receiver, frame);
+
         if (!ClrTypes.IsDsl(property) || property.GetMethod is not { } getter)
             return Unsupported(reference, "property " + Describe(property),
-                "only the Phaseward DSL, arrays, List<T> and members declared in this compilation are elaborated");
+                "it is outside what compile-time elaboration reads (only the Phaseward DSL, members of this compilation and pure library members)");
 
         var (arguments, _) = Arguments(reference.Arguments, getter, frame);
         return arguments is null ? Unknown.Value : CallClr(reference, getter, receiver, arguments);
     }
 
-    private object? ReadDesignProperty(IPropertyReferenceOperation reference, DesignInstance instance, Frame frame)
+    private object? ReadDesignProperty(IPropertyReferenceOperation reference, InterpretedObject instance, Frame frame)
     {
         var property = reference.Property;
         if (FindOverride(instance.Type, property) is { } overriding)
@@ -313,12 +378,16 @@ internal sealed partial class Interpreter
             return property.Name == nameof(Design.Name)
                 ? DesignName
                 : Unsupported(reference, "property " + Describe(property), "the design's inherited Phaseward members are not read at compile time");
+        if (!session.IsInSource(property))
+            return Unsupported(reference, "property " + Describe(property), "it is not declared in this compilation");
         if (IsAutoProperty(property))
-            return instance.GetOrAdd(property).Value;
+            return instance.Find(property) is { } stored
+                ? stored.Value
+                : Unsupported(reference, "property " + Describe(property), "it was not initialized by the elaborator");
         return CallGetter(reference, property, instance, frame);
     }
 
-    private object? CallGetter(IPropertyReferenceOperation reference, IPropertySymbol property, DesignInstance? instance, Frame frame)
+    private object? CallGetter(IPropertyReferenceOperation reference, IPropertySymbol property, InterpretedObject? instance, Frame frame)
     {
         if (property.GetMethod is not { } getter)
             return Unsupported(reference, "property " + Describe(property), "it has no getter");
@@ -327,21 +396,77 @@ internal sealed partial class Interpreter
         return arguments is null ? Unknown.Value : InvokeUser(getter, instance, arguments, references, reference, frame);
     }
 
+    /// <summary>A property that stores its value (auto-property, or a record's positional property).</summary>
     private static bool IsAutoProperty(IPropertySymbol property)
-        => property.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax() is PropertyDeclarationSyntax { ExpressionBody: null, AccessorList: { } accessors }
-           && accessors.Accessors.All(a => a.Body is null && a.ExpressionBody is null);
+        => property.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax() switch
+        {
+            PropertyDeclarationSyntax { ExpressionBody: null, AccessorList: { } accessors } => accessors.Accessors.All(a => a.Body is null && a.ExpressionBody is null),
+            ParameterSyntax => true,
+            _ => false,
+        };
 
-    /// <summary>A static field or auto-property of this compilation, initialized from its initializer on first use.</summary>
+    /// <summary>The property a record's positional parameter declares (null when the record declares its own).</summary>
+    private static IPropertySymbol? PositionalProperty(INamedTypeSymbol record, IParameterSymbol parameter)
+        => record.GetMembers(parameter.Name).OfType<IPropertySymbol>()
+            .FirstOrDefault(p => p.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax() is ParameterSyntax);
+
+    /// <summary>
+    /// A static field or auto-property of this compilation. The first use of any static member of a type runs the type's
+    /// static initialization the way C# does: every static field and auto-property initializer in declaration order,
+    /// then the static constructor's body; values it assigns are never read as defaults.
+    /// </summary>
     private Variable StaticVariable(ISymbol member, Frame frame)
     {
-        if (statics.TryGetValue(member.OriginalDefinition, out var variable))
+        var key = member.OriginalDefinition;
+        if (statics.TryGetValue(key, out var variable))
             return variable;
-        var type = member is IFieldSymbol f ? f.Type : ((IPropertySymbol)member).Type;
-        statics[member.OriginalDefinition] = variable = new Variable(DefaultOf(type));
-        var initializer = InitializerOf(member);
-        if (initializer is not null)
-            variable.Value = Evaluate(initializer, new Frame(null, null, null));
+        if (member.ContainingType is { } type)
+            InitializeStatics(type.OriginalDefinition);
+        if (!statics.TryGetValue(key, out variable))
+            statics[key] = variable = new Variable(DefaultOf(member is IFieldSymbol f ? f.Type : ((IPropertySymbol)member).Type));
         return variable;
+    }
+
+    private void InitializeStatics(INamedTypeSymbol type)
+    {
+        if (!initializedTypes.Add(type))
+            return;
+        var storage = new List<(ISymbol Member, Variable Variable)>();
+        foreach (var member in type.GetMembers())
+        {
+            ISymbol? stored = member switch
+            {
+                IFieldSymbol { IsStatic: true, IsConst: false, AssociatedSymbol: null } field => field,
+                IPropertySymbol { IsStatic: true } property when IsAutoProperty(property) => property,
+                _ => null,
+            };
+            if (stored is null)
+                continue;
+            var variable = new Variable(DefaultOf(stored is IFieldSymbol f ? f.Type : ((IPropertySymbol)stored).Type));
+            statics[stored.OriginalDefinition] = variable;
+            storage.Add((stored, variable));
+        }
+
+        var frame = new Frame(null, null, null);
+        foreach (var (member, variable) in storage)
+            if (InitializerOf(member) is { } initializer)
+                variable.Value = Evaluate(initializer, frame);
+
+        foreach (var constructor in type.StaticConstructors)
+        {
+            var syntax = constructor.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken);
+            if (syntax is not ConstructorDeclarationSyntax declaration)
+                continue;
+            if (ModelOf(declaration).GetOperation(declaration, cancellationToken) is not IConstructorBodyOperation body)
+            {
+                Report(RuleIds.NotElaborated, declaration, "the static constructor of " + Describe(type), "its body could not be read", DesignName);
+                continue;
+            }
+
+            var statements = (IOperation?)body.BlockBody ?? body.ExpressionBody;
+            if (statements is not null)
+                Execute(statements, new Frame(constructor, null, null));
+        }
     }
 
     /// <summary>The value operation of a field's or property's initializer (<c>= value</c>), if it has one.</summary>
@@ -380,51 +505,9 @@ internal sealed partial class Interpreter
                 return new Variable(null);
             case IFieldReferenceOperation field when session.IsInSource(field.Field):
                 if (field.Field.IsStatic) return StaticVariable(field.Field, frame);
-                return (field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame)) is DesignInstance instance ? instance.GetOrAdd(field.Field) : null;
+                return (field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame)) is InterpretedObject instance ? instance.GetOrAdd(field.Field) : null;
             default:
                 return null;
         }
     }
-
-    /// <summary>Converts an interpreted value into what a DSL parameter of the given run-time type accepts.</summary>
-    private static object? ToClr(object? value, Type type)
-    {
-        if (type.IsByRef) type = type.GetElementType()!;
-        var underlying = Nullable.GetUnderlyingType(type) ?? type;
-        switch (value)
-        {
-            case null:
-                return null;
-            case object?[] items when type.IsArray:
-                return TypedArray(items, type.GetElementType()!);
-            case List<object?> list when type.IsArray:
-                return TypedArray(list.ToArray(), type.GetElementType()!);
-            case object?[] or List<object?> when type.IsGenericType && type.GetGenericArguments().Length == 1:
-                var elements = value is List<object?> l ? l.ToArray() : (object?[])value;
-                var elementType = type.GetGenericArguments()[0];
-                var array = TypedArray(elements, elementType);
-                return type.IsAssignableFrom(array.GetType()) ? array : Activator.CreateInstance(typeof(List<>).MakeGenericType(elementType), array);
-        }
-
-        if (underlying.IsEnum && !(value is Enum))
-            return Enum.ToObject(underlying, value);
-        if (underlying.IsPrimitive && value.GetType() != underlying && value is IConvertible)
-            return System.Convert.ChangeType(value, underlying, System.Globalization.CultureInfo.InvariantCulture);
-        return value;
-    }
-
-    private static Array TypedArray(object?[] items, Type elementType)
-    {
-        var array = Array.CreateInstance(elementType, items.Length);
-        for (var i = 0; i < items.Length; i++)
-            array.SetValue(ToClr(items[i], elementType), i);
-        return array;
-    }
-
-    /// <summary>Arrays the DSL returns become interpreter arrays (so indexing and foreach treat them alike).</summary>
-    private static object? FromClr(object? value) => value switch
-    {
-        Array array when array is not object?[] && array.Rank == 1 => array.Cast<object?>().ToArray(),
-        _ => value,
-    };
 }

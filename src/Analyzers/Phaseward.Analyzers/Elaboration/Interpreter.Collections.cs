@@ -15,25 +15,15 @@ internal sealed partial class Interpreter
     private object? Create(IObjectCreationOperation creation, Frame frame)
     {
         var type = creation.Type as INamedTypeSymbol;
-        if (type is not null && IsList(type))
-        {
-            Step(creation);
-            var list = new List<object?>();
-            if (creation.Arguments.Length == 1 && creation.Arguments[0].Value.Type?.SpecialType != SpecialType.System_Int32)
-            {
-                var source = Evaluate(creation.Arguments[0].Value, frame);
-                if (Unknown.Is(source)) return source;
-                if (source is object?[] items) list.AddRange(items);
-                else if (source is List<object?> other) list.AddRange(other);
-                else return Unsupported(creation, "this list", "it is copied from a collection the elaborator does not know");
-            }
+        if (type is not null && session.IsInSource(type) && creation.Constructor is { } sourceConstructor)
+            return CreateObject(creation, type, sourceConstructor, frame);
 
-            return Initialize(creation, list, frame);
-        }
+        if (type is not null && !ClrTypes.IsDsl(type) && creation.Constructor is { } libraryConstructor && Library.IsPure(libraryConstructor))
+            return CreateLibraryObject(creation, libraryConstructor, frame);
 
         if (type is null || !ClrTypes.IsDsl(type) || creation.Constructor is not { } constructor)
             return Unsupported(creation, "the creation of " + (type is null ? "this object" : Describe(type)),
-                "only Phaseward DSL objects, arrays and List<T> are created at compile time");
+                "it is outside what compile-time elaboration runs (only the Phaseward DSL, types of this compilation and pure library types)");
 
         Step(creation);
         object? made;
@@ -90,6 +80,7 @@ internal sealed partial class Interpreter
         }
 
         Step(creation);
+        ChargeMemory(creation, 8L * length);
         var element = ((IArrayTypeSymbol)creation.Type!).ElementType;
         var items = new object?[length];
         var initial = DefaultOf(element);
@@ -120,6 +111,7 @@ internal sealed partial class Interpreter
         }
 
         Step(collection);
+        ChargeMemory(collection, 8L * items.Count);
         return collection.Type switch
         {
             IArrayTypeSymbol => items.ToArray(),
@@ -136,49 +128,61 @@ internal sealed partial class Interpreter
         return new TupleValue(items);
     }
 
-    private object? ListMethod(IInvocationOperation invocation, List<object?> list, Frame frame)
-    {
-        var method = invocation.TargetMethod;
-        var (arguments, _) = Arguments(invocation.Arguments, method, frame);
-        if (arguments is null) return Unknown.Value;
-        switch (method.Name)
-        {
-            case "Add" when arguments.Length == 1:
-                list.Add(arguments[0]);
-                return null;
-            case "AddRange" when arguments.Length == 1 && arguments[0] is object?[] or List<object?>:
-                list.AddRange(arguments[0] as IEnumerable<object?> ?? Array.Empty<object?>());
-                return null;
-            case "Insert" when arguments.Length == 2:
-                var at = System.Convert.ToInt32(arguments[0], CultureInfo.InvariantCulture);
-                if (at < 0 || at > list.Count) break;
-                list.Insert(at, arguments[1]);
-                return null;
-            case "RemoveAt" when arguments.Length == 1:
-                var index = System.Convert.ToInt32(arguments[0], CultureInfo.InvariantCulture);
-                if (index < 0 || index >= list.Count) break;
-                list.RemoveAt(index);
-                return null;
-            case "Clear" when arguments.Length == 0:
-                list.Clear();
-                return null;
-            case "Contains" when arguments.Length == 1:
-                return list.Any(item => Equal(item, arguments[0]) == true);
-            case "IndexOf" when arguments.Length == 1:
-                return list.FindIndex(item => Equal(item, arguments[0]) == true);
-            case "ToArray" when arguments.Length == 0:
-                return list.ToArray();
-            default:
-                return Unsupported(invocation, "the call to " + Describe(method), "the elaborator supports List<T>'s Add, AddRange, Insert, RemoveAt, Clear, Contains, IndexOf and ToArray");
-        }
-
-        Throws(invocation.Syntax, $"ArgumentOutOfRangeException: index {Arithmetic.Text(arguments[0])} is outside a list of {list.Count} elements");
-        return Unknown.Value;
-    }
-
     private static bool IsList(INamedTypeSymbol type) => ClrTypes.MetadataName(type.OriginalDefinition) == "System.Collections.Generic.List`1";
 
     private static bool IsListInterface(INamedTypeSymbol type) => ClrTypes.MetadataName(type.OriginalDefinition) is
         "System.Collections.Generic.IList`1" or "System.Collections.Generic.IReadOnlyList`1" or "System.Collections.Generic.IEnumerable`1"
         or "System.Collections.Generic.ICollection`1" or "System.Collections.Generic.IReadOnlyCollection`1";
+
+    private object? VisitRange(IRangeOperation range, Frame frame)
+    {
+        var start = range.LeftOperand is null ? new IndexValue(0, false) : Evaluate(range.LeftOperand, frame);
+        var end = range.RightOperand is null ? new IndexValue(0, true) : Evaluate(range.RightOperand, frame);
+        if (Unknown.Is(start) || Unknown.Is(end)) return Unknown.Value;
+        return start is IndexValue from && end is IndexValue to ? new RangeValue(from, to) : Unsupported(range, "this range", "its ends are not indices");
+    }
+
+    /// <summary><c>list[^1]</c>, <c>text[1..3]</c>: an Index or Range on a type that only has a Count/Length and an int indexer.</summary>
+    private object? VisitImplicitIndexer(IImplicitIndexerReferenceOperation reference, Frame frame)
+    {
+        var instance = Evaluate(reference.Instance, frame);
+        var argument = Evaluate(reference.Argument, frame);
+        if (Unknown.Is(instance) || Unknown.Is(argument)) return Unknown.Value;
+        System.Collections.IList? items = instance switch
+        {
+            object?[] array => array,
+            List<object?> list => list,
+            _ => null,
+        };
+        if (instance is string text)
+        {
+            if (argument is IndexValue at && at.OffsetIn(text.Length) is var i && i >= 0 && i < text.Length) return text[i];
+            if (argument is RangeValue span && Bounds(span, text.Length) is var (start, length) && length >= 0) return text.Substring(start, length);
+            return ThrowsUnknown(reference, "ArgumentOutOfRangeException: the index or range is outside a string of length " + text.Length);
+        }
+
+        return items is null ? Unsupported(reference, "this index", "only arrays, lists and strings are indexed from the end or by range") : Indexed(reference, items, argument);
+    }
+
+    private object? Indexed(IOperation site, System.Collections.IList items, object? index)
+    {
+        switch (index)
+        {
+            case IndexValue at when at.OffsetIn(items.Count) is var i && i >= 0 && i < items.Count:
+                return items[i];
+            case RangeValue span when Bounds(span, items.Count) is var (start, length) && length >= 0 && start >= 0 && start + length <= items.Count:
+                var slice = new object?[length];
+                for (var k = 0; k < length; k++) slice[k] = items[start + k];
+                ChargeMemory(site, 8L * length);
+                return items is List<object?> ? new List<object?>(slice) : slice;
+            default:
+                return ThrowsUnknown(site, $"IndexOutOfRangeException: the index or range is outside a collection of {items.Count} elements");
+        }
+    }
+
+    private static (int Start, int Length) Bounds(RangeValue range, int count)
+    {
+        var start = range.Start.OffsetIn(count);
+        return (start, range.End.OffsetIn(count) - start);
+    }
 }

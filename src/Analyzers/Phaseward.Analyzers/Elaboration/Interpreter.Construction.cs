@@ -9,9 +9,9 @@ namespace Phaseward.Analyzers.Elaboration;
 // constructor, then the constructor body; ': this(...)' skips the initializers of the delegating constructor.
 internal sealed partial class Interpreter
 {
-    public DesignInstance NewDesign(INamedTypeSymbol type)
+    public InterpretedObject NewObject(INamedTypeSymbol type)
     {
-        var instance = new DesignInstance(type);
+        var instance = new InterpretedObject(type, this);
         for (var current = type; current is not null && session.IsInSource(current); current = current.BaseType)
             foreach (var member in current.GetMembers())
             {
@@ -24,7 +24,30 @@ internal sealed partial class Interpreter
         return instance;
     }
 
-    public void Construct(DesignInstance instance, IMethodSymbol constructor, object?[] arguments, IOperation? site)
+    /// <summary><c>new T(...)</c> of a class, struct or record declared in the design's source.</summary>
+    private object? CreateObject(IObjectCreationOperation creation, INamedTypeSymbol type, IMethodSymbol constructor, Frame frame)
+    {
+        Step(creation);
+        var (arguments, _) = Arguments(creation.Arguments, constructor, frame);
+        if (arguments is null) return Unknown.Value;
+        var made = NewObject(type);
+        EnterCall(creation);
+        var outerCallers = callers;
+        PushCaller(creation.Syntax);
+        try
+        {
+            Construct(made, constructor, arguments, creation);
+        }
+        finally
+        {
+            callers = outerCallers;
+            LeaveCall();
+        }
+
+        return Initialize(creation, made, frame);
+    }
+
+    public void Construct(InterpretedObject instance, IMethodSymbol constructor, object?[] arguments, IOperation? site)
     {
         var type = constructor.ContainingType;
         if (!session.IsInSource(type))
@@ -54,7 +77,7 @@ internal sealed partial class Interpreter
                     EnterCall(chained);
                     try
                     {
-                        Construct(instance, chained.TargetMethod, values ?? new object?[chained.TargetMethod.Parameters.Length], chained);
+                        Construct(instance, chained.TargetMethod, values ?? UnknownArguments(chained.TargetMethod), chained);
                     }
                     finally
                     {
@@ -72,9 +95,15 @@ internal sealed partial class Interpreter
                 return;
 
             case TypeDeclarationSyntax:
-                // A primary constructor: its parameters are readable throughout the class.
+                // A primary constructor: its parameters are readable throughout the class; a record's positional
+                // parameters are also its properties.
                 for (var i = 0; i < constructor.Parameters.Length && i < arguments.Length; i++)
+                {
                     instance.GetOrAdd(constructor.Parameters[i]).Value = arguments[i];
+                    if (type.IsRecord && PositionalProperty(type, constructor.Parameters[i]) is { } positional)
+                        instance.GetOrAdd(positional).Value = arguments[i];
+                }
+
                 RunInitializers(instance, type);
                 ConstructBase(instance, type);
                 return;
@@ -87,7 +116,11 @@ internal sealed partial class Interpreter
         }
     }
 
-    private void ConstructBase(DesignInstance instance, INamedTypeSymbol type)
+    // An argument that is not known stays unknown in the constructor it is passed to: never read as null or zero.
+    private static object?[] UnknownArguments(IMethodSymbol constructor)
+        => Enumerable.Repeat<object?>(Unknown.Value, constructor.Parameters.Length).ToArray();
+
+    private void ConstructBase(InterpretedObject instance, INamedTypeSymbol type)
     {
         if (type.BaseType is not { } baseType || !session.IsInSource(baseType))
             return;
@@ -97,7 +130,7 @@ internal sealed partial class Interpreter
         {
             var frame = new Frame(null, null, instance);
             var (values, _) = Arguments(call.Arguments, call.TargetMethod, frame);
-            Construct(instance, call.TargetMethod, values ?? new object?[call.TargetMethod.Parameters.Length], call);
+            Construct(instance, call.TargetMethod, values ?? UnknownArguments(call.TargetMethod), call);
             return;
         }
 
@@ -106,7 +139,7 @@ internal sealed partial class Interpreter
             Construct(instance, parameterless, parameterless.Parameters.Select(p => p.HasExplicitDefaultValue ? p.ExplicitDefaultValue : null).ToArray(), null);
     }
 
-    private void RunInitializers(DesignInstance instance, INamedTypeSymbol type)
+    private void RunInitializers(InterpretedObject instance, INamedTypeSymbol type)
     {
         var frame = new Frame(null, null, instance);
         foreach (var member in type.GetMembers())
@@ -119,7 +152,7 @@ internal sealed partial class Interpreter
     }
 
     /// <summary>The design's Name: the class name, unless the design overrides Name (then its getter is interpreted).</summary>
-    public string ComputeName(DesignInstance instance, IOperation site)
+    public string ComputeName(InterpretedObject instance, IOperation site)
     {
         var name = instance.Type.MetadataName;
         var overriding = instance.Type.GetMembers("Name").OfType<IPropertySymbol>().FirstOrDefault();

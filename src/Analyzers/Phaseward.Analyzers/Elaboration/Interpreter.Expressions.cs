@@ -82,6 +82,12 @@ internal sealed partial class Interpreter
                 var unary = (IUnaryOperation)operation;
                 return Unary(unary, frame);
 
+            case OperationKind.Range:
+                return VisitRange((IRangeOperation)operation, frame);
+
+            case OperationKind.ImplicitIndexerReference:
+                return VisitImplicitIndexer((IImplicitIndexerReferenceOperation)operation, frame);
+
             case OperationKind.Conditional:
                 var conditional = (IConditionalOperation)operation;
                 return Condition(conditional.Condition, frame) switch
@@ -122,6 +128,9 @@ internal sealed partial class Interpreter
             case OperationKind.InstanceReference when ((IInstanceReferenceOperation)operation).ReferenceKind == InstanceReferenceKind.ImplicitReceiver:
                 return implicitReceivers.Count > 0 ? implicitReceivers.Peek() : Unsupported(operation, "this receiver", "it has no value here");
 
+            case OperationKind.InstanceReference when ((IInstanceReferenceOperation)operation).ReferenceKind == InstanceReferenceKind.PatternInput:
+                return patternInputs.Count > 0 ? patternInputs.Peek() : Unsupported(operation, "this pattern input", "it has no value here");
+
             case OperationKind.InstanceReference:
                 return (object?)frame.Instance ?? Unsupported(operation, "'this'", "it is only known inside the design being elaborated");
 
@@ -135,34 +144,47 @@ internal sealed partial class Interpreter
             case OperationKind.IsPattern:
                 var isPattern = (IIsPatternOperation)operation;
                 var subject = Evaluate(isPattern.Value, frame);
-                return Unknown.Is(subject) ? subject : (object?)Match(isPattern.Pattern, subject, frame) ?? Unknown.Value;
+                return Unknown.Is(subject) ? subject : (object?)Match(isPattern.Pattern, subject, frame)
+                    ?? Unsupported(isPattern.Pattern, "this pattern", "whether the value matches it cannot be decided at compile time");
 
             case OperationKind.DeclarationExpression:
                 var declaration = (IDeclarationExpressionOperation)operation;
                 return Evaluate(declaration.Expression, frame);
 
             case OperationKind.Throw:
-                var thrown = (IThrowOperation)operation;
-                Throws(thrown.Syntax, DescribeThrow(thrown, frame));
-                throw new ElaborationStopped();
+                return VisitThrow((IThrowOperation)operation, frame);
 
             case OperationKind.Parenthesized:
                 var parenthesized = (IParenthesizedOperation)operation;
                 return Evaluate(parenthesized.Operand, frame);
 
             case OperationKind.AnonymousFunction:
+                return VisitAnonymousFunction((IAnonymousFunctionOperation)operation, frame);
+
             case OperationKind.DelegateCreation:
-                return Unsupported(operation, "a lambda or delegate", "lambdas and delegates are outside the subset the elaborator interprets");
+                return VisitDelegateCreation((IDelegateCreationOperation)operation, frame);
 
             case OperationKind.ConditionalAccess:
-                return Unsupported(operation, "a null-conditional access ('?.')", "it is outside the subset the elaborator interprets");
+                return VisitConditionalAccess((IConditionalAccessOperation)operation, frame);
+
+            case OperationKind.ConditionalAccessInstance:
+                return conditionalReceivers.Count > 0 ? conditionalReceivers.Peek() : Unsupported(operation, "this '?.' receiver", "it has no value here");
+
+            case OperationKind.With:
+                return VisitWith((IWithOperation)operation, frame);
+
+            case OperationKind.ObjectOrCollectionInitializer:
+                return Unsupported(operation, "this initializer", "it is only interpreted as part of an object creation");
+
 
             case OperationKind.AnonymousObjectCreation:
                 return Unsupported(operation, "an anonymous object", "anonymous types are outside the subset the elaborator interprets");
 
-            case OperationKind.TypeOf:
             case OperationKind.IsType:
-                return Unsupported(operation, "a run-time type test", "reflection and type tests are outside the subset the elaborator interprets");
+                return VisitIsType((IIsTypeOperation)operation, frame);
+
+            case OperationKind.TypeOf:
+                return Unsupported(operation, "typeof", "reflection is outside what compile-time elaboration runs");
 
             case OperationKind.Await:
                 return Unsupported(operation, "an await", "asynchronous code is outside the subset the elaborator interprets");
@@ -192,6 +214,8 @@ internal sealed partial class Interpreter
         // Code that does not compile (half-typed, or a type that does not convert) is never given a meaning.
         if (!conversion.Conversion.Exists)
             return Unsupported(conversion, "this conversion", "it does not compile");
+        if (conversion.Type?.ToDisplayString() == "System.Index" && value is int index)
+            return new IndexValue(index, fromEnd: false);
         if (conversion.OperatorMethod is { } method)
             return CallOperator(conversion, method, new[] { value }, frame);
         var target = conversion.Type;
@@ -223,6 +247,9 @@ internal sealed partial class Interpreter
                 : Unsupported(field, "tuple element " + Describe(symbol), "tuples of more than seven elements are outside the subset");
         }
 
+        if (!ClrTypes.IsDsl(symbol) && !session.IsInSource(symbol) && Library.IsPure(symbol))
+            return ReadLibraryField(field, symbol, frame);
+
         if (ClrTypes.IsDsl(symbol) && symbol.IsStatic)
         {
             var type = symbol.ContainingType is null ? null : ClrTypes.Resolve(symbol.ContainingType);
@@ -238,9 +265,11 @@ internal sealed partial class Interpreter
 
         var owner = field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame);
         if (Unknown.Is(owner)) return owner;
-        return owner is DesignInstance instance
-            ? instance.GetOrAdd(symbol).Value
-            : Unsupported(field, "field " + Describe(symbol), "only fields of the design itself are elaborated");
+        if (owner is InterpretedObject instance && instance.Find(symbol) is { } stored)
+            return stored.Value;
+        return Unsupported(field, "field " + Describe(symbol), owner is InterpretedObject
+            ? "it was not initialized by the elaborator"
+            : "only fields of objects the design's code made are read");
     }
 
     private static int? TupleIndex(IFieldSymbol field)
@@ -261,6 +290,8 @@ internal sealed partial class Interpreter
         if (Unknown.Is(index)) return index;
         if (array is not object?[] items)
             return Unsupported(element, "this array", "it does not come from the design's code");
+        if (index is IndexValue or RangeValue)
+            return Indexed(element, items, index);
         // In code that does not compile yet the index can be a value of another type (a net, a string).
         if (index is not (int or long or short or byte or sbyte or ushort or uint or ulong or char))
             return Unsupported(element, "this array index", "it is not a whole number");
@@ -274,7 +305,36 @@ internal sealed partial class Interpreter
         return items[i];
     }
 
+    /// <summary>String concatenation (an interpreted ToString may be called), charged to the memory budget.</summary>
+    private object? Concatenate(IOperation site, object? left, object? right)
+    {
+        string joined;
+        try
+        {
+            joined = Arithmetic.Concatenate(left, right);
+        }
+        catch (UnknownValueException)
+        {
+            return Unknown.Value;
+        }
+
+        ChargeMemory(site, 2L * joined.Length);
+        return joined;
+    }
+
     private object? Interpolate(IInterpolatedStringOperation interpolated, Frame frame)
+    {
+        try
+        {
+            return InterpolateParts(interpolated, frame);
+        }
+        catch (UnknownValueException)
+        {
+            return Unknown.Value;
+        }
+    }
+
+    private object? InterpolateParts(IInterpolatedStringOperation interpolated, Frame frame)
     {
         var text = new StringBuilder();
         foreach (var part in interpolated.Parts)
@@ -299,6 +359,7 @@ internal sealed partial class Interpreter
             }
         }
 
+        ChargeMemory(interpolated, 2L * text.Length);
         return text.ToString();
     }
 
@@ -320,14 +381,46 @@ internal sealed partial class Interpreter
 
         if (binary.OperatorMethod is { } method)
             return CallOperator(binary, method, new[] { left, right }, frame);
-        if (binary.IsLifted)
-            return Unsupported(binary, "an operator on nullable values", "lifted operators are outside the subset");
+        if (binary.IsLifted && (left is null || right is null))
+            return binary.OperatorKind switch
+            {
+                BinaryOperatorKind.Equals => left is null && right is null,
+                BinaryOperatorKind.NotEquals => !(left is null && right is null),
+                BinaryOperatorKind.LessThan or BinaryOperatorKind.LessThanOrEqual or BinaryOperatorKind.GreaterThan or BinaryOperatorKind.GreaterThanOrEqual => false,
+                _ => null,
+            };
+        if (binary.IsLifted && binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals)
+        {
+            var same = Equal(left, right);
+            return same is null ? Unknown.Value : binary.OperatorKind == BinaryOperatorKind.Equals ? same.Value : !same.Value;
+        }
+
+        if (NullableUnderlying(binary.LeftOperand.Type) is { } liftedType && binary.IsLifted)
+        {
+            try
+            {
+                return Arithmetic.Binary(binary.OperatorKind, left!, right!, liftedType, binary.IsChecked)
+                    ?? Unsupported(binary, "operator " + binary.OperatorKind + " on " + liftedType.ToDisplayString(), "it is outside the subset");
+            }
+            catch (ArithmeticException e)
+            {
+                return RaiseLibraryException(binary, e);
+            }
+        }
 
         var leftType = binary.LeftOperand.Type;
         var rightType = binary.RightOperand.Type;
         if (binary.OperatorKind == BinaryOperatorKind.Add
             && (leftType?.SpecialType == SpecialType.System_String || rightType?.SpecialType == SpecialType.System_String))
-            return Arithmetic.Concatenate(left, right);
+        {
+            return Concatenate(binary, left, right);
+        }
+
+        if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals && left is InterpretedObject { Type.IsRecord: true } record)
+        {
+            var equal = AreEqualOrUnknown(record, right);
+            return equal is null ? Unknown.Value : binary.OperatorKind == BinaryOperatorKind.Equals ? equal.Value : !equal.Value;
+        }
 
         if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals
             && (left is null || right is null || (leftType?.IsReferenceType == true && leftType.SpecialType != SpecialType.System_String)))
@@ -354,6 +447,8 @@ internal sealed partial class Interpreter
     {
         var operand = Evaluate(unary.Operand, frame);
         if (Unknown.Is(operand)) return operand;
+        if (unary.OperatorKind == UnaryOperatorKind.Hat && operand is int fromEnd)
+            return new IndexValue(fromEnd, fromEnd: true);
         if (unary.OperatorMethod is { } method)
             return CallOperator(unary, method, new[] { operand }, frame);
         if (operand is null || unary.Operand.Type is null || unary.IsLifted)
@@ -377,7 +472,7 @@ internal sealed partial class Interpreter
         foreach (var arm in switchExpression.Arms)
         {
             var matches = Match(arm.Pattern, value, frame);
-            if (matches is null) return Unknown.Value;
+            if (matches is null) return Unsupported(arm.Pattern, "this pattern", "whether the value matches it cannot be decided at compile time");
             if (!matches.Value) continue;
             if (arm.Guard is not null)
             {
@@ -393,18 +488,17 @@ internal sealed partial class Interpreter
         return Unknown.Value;
     }
 
-    private string DescribeThrow(IThrowOperation thrown, Frame frame)
+    private static string DescribeThrow(IThrowOperation thrown, object? value)
     {
-        if (thrown.Exception is IConversionOperation { Operand: IObjectCreationOperation creation } || thrown.Exception is IObjectCreationOperation)
+        if (value is Exception exception)
         {
-            creation = thrown.Exception as IObjectCreationOperation ?? (IObjectCreationOperation)((IConversionOperation)thrown.Exception!).Operand;
-            var message = creation.Arguments.FirstOrDefault(a => a.Parameter?.Name == "message") is { } argument
-                ? Evaluate(argument.Value, frame) as string
-                : null;
-            return creation.Type?.Name + (message is null ? string.Empty : ": " + message);
+            // The message as written (ArgumentException's Message adds the parameter name).
+            var creation = thrown.Exception is IConversionOperation { Operand: IObjectCreationOperation c } ? c : thrown.Exception as IObjectCreationOperation;
+            var written = creation?.Arguments.FirstOrDefault(a => a.Parameter?.Name == "message")?.Value.ConstantValue;
+            return exception.GetType().Name + ": " + (written is { HasValue: true, Value: string text } ? text : exception.Message);
         }
 
-        return "the design's code throws an exception";
+        return value is InterpretedObject instance ? instance.Type.Name : "the design's code throws an exception";
     }
 
     private object? FromConstant(object? value, ITypeSymbol? type)

@@ -1,5 +1,6 @@
 using System;
 using System.Globalization;
+using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Operations;
 
 namespace Phaseward.Analyzers.Elaboration;
@@ -33,13 +34,21 @@ internal sealed partial class Interpreter
                 return true;
 
             case IDeclarationPatternOperation declaration:
-                var matches = declaration.MatchesNull || value is not null;
-                if (matches && declaration.DeclaredSymbol is { } symbol)
+                bool? matches = declaration.MatchesNull ? true
+                    : declaration.MatchedType is { } declared && !SymbolEqualityComparer.Default.Equals(declared, declaration.InputType) ? IsOfType(value, declared)
+                    : value is not null;
+                if (matches == true && declaration.DeclaredSymbol is { } symbol)
                     frame.Declare(symbol, value);
                 return matches;
 
-            case ITypePatternOperation:
-                return value is not null;
+            case ITypePatternOperation typePattern:
+                return IsOfType(value, typePattern.MatchedType);
+
+            case IRecursivePatternOperation recursive:
+                return MatchRecursive(recursive, value, frame);
+
+            case IListPatternOperation list:
+                return MatchList(list, value, frame);
 
             case INegatedPatternOperation negated:
                 return Match(negated.Pattern, value, frame) is { } inner ? !inner : null;
@@ -55,6 +64,85 @@ internal sealed partial class Interpreter
                 Unsupported(pattern, "this pattern", "the elaborator matches constant, relational, declaration, discard, 'not', 'and' and 'or' patterns");
                 return null;
         }
+    }
+
+    private bool? MatchRecursive(IRecursivePatternOperation pattern, object? value, Frame frame)
+    {
+        if (value is null) return false;
+        if (!SymbolEqualityComparer.Default.Equals(pattern.MatchedType, pattern.InputType) && IsOfType(value, pattern.MatchedType) is not true)
+            return IsOfType(value, pattern.MatchedType) is null ? null : false;
+        if (!pattern.DeconstructionSubpatterns.IsEmpty)
+        {
+            var parts = value as TupleValue ?? DeconstructedParts(value);
+            // Without a Deconstruct method C# tests for ITuple: only tuples have it among the values the elaborator makes.
+            if (parts is null) return value is InterpretedObject ? null : false;
+            if (parts.Items.Length != pattern.DeconstructionSubpatterns.Length) return false;
+            for (var i = 0; i < parts.Items.Length; i++)
+                if (Match(pattern.DeconstructionSubpatterns[i], parts.Items[i], frame) is not true and var result)
+                    return result;
+        }
+
+        foreach (var property in pattern.PropertySubpatterns)
+        {
+            patternInputs.Push(value);
+            object? member;
+            try
+            {
+                member = Evaluate(property.Member, frame);
+            }
+            finally
+            {
+                patternInputs.Pop();
+            }
+
+            if (Unknown.Is(member)) return null;
+            if (Match(property.Pattern, member, frame) is not true and var result)
+                return result;
+        }
+
+        if (pattern.DeclaredSymbol is { } symbol)
+            frame.Declare(symbol, value);
+        return true;
+    }
+
+    private bool? MatchList(IListPatternOperation pattern, object? value, Frame frame)
+    {
+        System.Collections.IList? items = value switch
+        {
+            object?[] array => array,
+            System.Collections.Generic.List<object?> list => list,
+            string text => text.ToCharArray(),
+            _ => null,
+        };
+        if (items is null) return value is null ? false : null;
+        var slice = -1;
+        for (var i = 0; i < pattern.Patterns.Length; i++)
+            if (pattern.Patterns[i] is ISlicePatternOperation) slice = i;
+        var fixedCount = pattern.Patterns.Length - (slice >= 0 ? 1 : 0);
+        if (slice < 0 ? items.Count != fixedCount : items.Count < fixedCount) return false;
+        for (var i = 0; i < pattern.Patterns.Length; i++)
+        {
+            if (i == slice)
+            {
+                if (((ISlicePatternOperation)pattern.Patterns[i]).Pattern is { } inner)
+                {
+                    var length = items.Count - fixedCount;
+                    var part = new object?[length];
+                    for (var k = 0; k < length; k++) part[k] = items[i + k];
+                    if (Match(inner, part, frame) is not true and var sliceResult) return sliceResult;
+                }
+
+                continue;
+            }
+
+            var index = slice >= 0 && i > slice ? items.Count - (pattern.Patterns.Length - i) : i;
+            if (Match(pattern.Patterns[i], items[index], frame) is not true and var result)
+                return result;
+        }
+
+        if (pattern.DeclaredSymbol is { } symbol)
+            frame.Declare(symbol, value);
+        return true;
     }
 
     /// <summary>C# equality for the values the elaborator meets: numbers by value, strings ordinally, objects by reference.</summary>

@@ -23,21 +23,14 @@ internal sealed partial class Interpreter
         switch (statement)
         {
             case IBlockOperation block:
-                foreach (var inner in block.Operations)
-                {
-                    var completion = Execute(inner, frame);
-                    if (completion != Completion.Normal)
-                        return completion;
-                }
-
-                return Completion.Normal;
+                return Block(block, frame);
 
             case IVariableDeclarationGroupOperation group:
                 foreach (var declaration in group.Declarations)
                     foreach (var declarator in declaration.Declarators)
                     {
                         var initializer = declarator.Initializer ?? declaration.Initializer;
-                        frame.Declare(declarator.Symbol, initializer is null ? DefaultOf(declarator.Symbol.Type) : Evaluate(initializer.Value, frame));
+                        frame.Declare(declarator.Symbol, initializer is null ? DefaultOf(declarator.Symbol.Type) : CopyIfValue(Evaluate(initializer.Value, frame)));
                     }
 
                 return Completion.Normal;
@@ -47,8 +40,23 @@ internal sealed partial class Interpreter
                 return Completion.Normal;
 
             case IReturnOperation { Kind: OperationKind.Return } ret:
-                frame.ReturnValue = ret.ReturnedValue is null ? null : Evaluate(ret.ReturnedValue, frame);
+                frame.ReturnValue = ret.ReturnedValue is null ? null : CopyIfValue(Evaluate(ret.ReturnedValue, frame));
                 return Completion.Return;
+
+            case IReturnOperation { Kind: OperationKind.YieldReturn } yielded:
+                return YieldReturn(yielded, frame);
+
+            case IReturnOperation { Kind: OperationKind.YieldBreak }:
+                return Completion.Return;
+
+            case ITryOperation tryStatement:
+                return Try(tryStatement, frame);
+
+            case IUsingOperation usingStatement:
+                return Using(usingStatement, frame);
+
+            case IUsingDeclarationOperation usingDeclaration:
+                return UsingDeclaration(usingDeclaration, frame);
 
             case IConditionalOperation conditional:
                 switch (Condition(conditional.Condition, frame))
@@ -82,7 +90,7 @@ internal sealed partial class Interpreter
                 return Switch(switchStatement, frame);
 
             case IThrowOperation thrown:
-                Evaluate(thrown, frame);
+                VisitThrow(thrown, frame);
                 return Completion.Normal;
 
             case IEmptyOperation:
@@ -194,13 +202,13 @@ internal sealed partial class Interpreter
             object?[] array => array,
             List<object?> list => list.ToArray(),
             string text => text,
-            IEnumerable enumerable when ClrTypes.IsDsl(loop.Collection.Type) || collection.GetType().Assembly == ClrTypes.Dsl
-                || collection is Netlist => enumerable,
+            InterpretedObject => null,
+            IEnumerable enumerable => enumerable,
             _ => null,
         };
         if (items is null)
         {
-            Unsupported(loop.Collection, "this foreach collection", "only arrays, lists and strings are enumerated");
+            Unsupported(loop.Collection, "this foreach collection", "only arrays, strings, the library's collections and sequences, and iterators are enumerated");
             Poison(loop.Body, frame);
             return Completion.Normal;
         }
@@ -261,7 +269,7 @@ internal sealed partial class Interpreter
                     ISingleValueCaseClauseOperation single => Equal(value, Evaluate(single.Value, frame)),
                     IPatternCaseClauseOperation pattern => Match(pattern.Pattern, value, frame) is { } m
                         ? m && (pattern.Guard is null || Condition(pattern.Guard, frame) == true)
-                        : false,
+                        : Unsupported(pattern.Pattern, "this pattern", "whether the value matches it cannot be decided at compile time") is null,
                     _ => false,
                 };
                 if (clause is IDefaultCaseClauseOperation)
@@ -326,6 +334,9 @@ internal sealed partial class Interpreter
                 ILocalReferenceOperation local => frame.Find(local.Local),
                 IParameterReferenceOperation parameter => frame.Find(parameter.Parameter) ?? frame.Instance?.Find(parameter.Parameter),
                 IFieldReferenceOperation { Field.IsStatic: false } field => frame.Instance?.Find(field.Field),
+                IFieldReferenceOperation { Field.IsStatic: true } field when session.IsInSource(field.Field) => StaticVariable(field.Field, frame),
+                IPropertyReferenceOperation { Property.IsStatic: true } property when session.IsInSource(property.Property) && IsAutoProperty(property.Property)
+                    => StaticVariable(property.Property, frame),
                 IPropertyReferenceOperation { Property.IsStatic: false } property => frame.Instance?.Find(property.Property),
                 _ => null,
             };

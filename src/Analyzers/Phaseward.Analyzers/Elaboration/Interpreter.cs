@@ -21,10 +21,26 @@ internal sealed partial class Interpreter
     private readonly List<ElaborationIssue> issues = new();
     private readonly HashSet<(string Path, int Start, int OuterStart)> reportedSites = new();
     private readonly Dictionary<ISymbol, Variable> statics = new(SymbolEqualityComparer.Default);
+    private readonly HashSet<INamedTypeSymbol> initializedTypes = new(SymbolEqualityComparer.Default);
     private readonly Stack<IOperation> loops = new();
     private readonly Stack<object> implicitReceivers = new();
+    private readonly Stack<object> conditionalReceivers = new();
+    private readonly Stack<object?> patternInputs = new();
     private SourceSpan[] callers = Array.Empty<SourceSpan>();
     private int depth;
+
+    // How many try statements enclose the code being interpreted: inside one, an exception is thrown for the design's
+    // catch clauses (DesignException); outside, it is PW9003 at once.
+    private int tryDepth;
+
+    // The exceptions being handled by catch clauses (innermost last), for 'throw;'.
+    private readonly Stack<object> caught = new();
+
+    // Resources of 'using var' declarations, per block that has them (innermost last): disposed when the block ends.
+    private readonly Stack<List<object?>> usingScopes = new();
+
+    // Bytes charged against the memory budget (see ChargeMemory).
+    private long allocatedBytes;
 
     public Interpreter(ElaborationSession session, string designName, ElaborationLimits limits, CancellationToken cancellationToken)
     {
@@ -41,7 +57,23 @@ internal sealed partial class Interpreter
     public Circuit? Circuit { get; set; }
 
     /// <summary>When set, nothing is reported (used to probe whether constructor arguments are known).</summary>
-    public bool Silent { get; set; }
+    public bool Silent
+    {
+        get => silent;
+        set
+        {
+            // Static state made while nothing was reported is forgotten: made again later, its problems are reported.
+            if (silent && !value)
+            {
+                statics.Clear();
+                initializedTypes.Clear();
+            }
+
+            silent = value;
+        }
+    }
+
+    private bool silent;
 
     public long Steps { get; private set; }
 
@@ -74,6 +106,8 @@ internal sealed partial class Interpreter
     /// <summary>Reports PW9003 at the site: the design throws here when it runs.</summary>
     public void Throws(SyntaxNode site, string message)
     {
+        if (tryDepth > 0)
+            throw new DesignException(ExceptionNamed(message), site);
         Report(RuleIds.DesignThrows, site, DesignName, message);
         if (++throws >= MaxThrows && !Silent)
             throw new ElaborationStopped();
@@ -175,6 +209,11 @@ internal sealed class ElaborationSession
 
     public DesignCatalog Catalog { get; }
 
+    /// <summary><c>Phaseward.Block.Describe</c>, which every block overrides (null if the referenced DSL has no Block).</summary>
+    public IMethodSymbol? BlockDescribe => blockDescribe ??= Compilation.GetTypeByMetadataName("Phaseward.Block")?.GetMembers("Describe").OfType<IMethodSymbol>().FirstOrDefault();
+
+    private IMethodSymbol? blockDescribe;
+
     /// <summary>The syntax tree with the given path (null if none).</summary>
     public SyntaxTree? TreeAt(string path)
     {
@@ -202,6 +241,9 @@ internal sealed class ElaborationSession
     /// <summary>The parameter types of a run-time member (MethodBase.GetParameters copies its array on every call).</summary>
     public Type[] ParameterTypesOf(System.Reflection.MethodBase member)
         => parameterTypes.GetOrAdd(member, m => m.GetParameters().Select(p => p.ParameterType).ToArray());
+
+    /// <summary>The run-time member behind a pure library method symbol, on its erased type (see <see cref="Library"/>).</summary>
+    public System.Reflection.MethodBase? LibraryMemberOf(IMethodSymbol method) => Library.Find(method);
 
     public IOperation? BodyOf(ISymbol method, Func<ISymbol, IOperation?> factory) => bodies.GetOrAdd(method.OriginalDefinition, factory);
 }

@@ -27,7 +27,8 @@ internal sealed class PhasewardOptions
         var limits = new ElaborationLimits(
             reader.Integer(OptionKeys.ElaborationStepBudget, ElaborationLimits.DefaultStepBudget, 1, long.MaxValue / 2),
             reader.Integer(OptionKeys.ElaborationRecursionLimit, ElaborationLimits.DefaultRecursionLimit, 1, ElaborationLimits.MaxRecursionLimit),
-            reader.Integer(OptionKeys.ElaborationDeviceBudget, ElaborationLimits.DefaultDeviceBudget, 1, int.MaxValue));
+            reader.Integer(OptionKeys.ElaborationDeviceBudget, ElaborationLimits.DefaultDeviceBudget, 1, int.MaxValue),
+            reader.Integer(OptionKeys.ElaborationMemoryBudget, ElaborationLimits.DefaultMemoryBudget, 1, ElaborationLimits.MaxMemoryBudget));
         var policy = RulePolicyReader.Read(reader);
         return new PhasewardOptions(limits, policy, problems);
     }

@@ -15,8 +15,11 @@ public static class FindingProperties
     /// <summary>The complementary phase of the same clock ("clk.Low"): what the PW1001 fix switches the latch to.</summary>
     public const string ComplementPhase = "ComplementPhase";
 
-    /// <summary>The clock of the reported latch's phase.</summary>
+    /// <summary>The clock of the reported latch's phase (PW1003: the receiving clock).</summary>
     public const string Clock = "Clock";
+
+    /// <summary>PW1003: the clock of the latch that sends the data.</summary>
+    public const string SendingClock = "SendingClock";
 
     /// <summary>"High" or "Low": the reported latch's polarity.</summary>
     public const string Polarity = "Polarity";

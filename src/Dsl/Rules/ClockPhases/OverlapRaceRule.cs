@@ -6,14 +6,15 @@ using System.Threading;
 namespace Phaseward;
 
 /// <summary>
-/// PW1002: for latch A feeding latch B on the complementary phase of the same root clock, the fastest data entering
-/// A when A opens must not reach B's storage node while B is still open:
-/// margin = t(A's entry gate) + t_min(path, A's output stage included) + t(B's entry gate) − overlap, where the
-/// overlap is how long B still conducts after A opens (the 1-1 overlap when A opens on the rising edge, the 0-0
-/// overlap on the falling edge; buffered copies shift it). Reported at B when the margin is below
-/// <see cref="RulePolicy.MinimumRaceMargin"/>. For a register's master and slave this is the condition
-/// t(TG1) + t(I1) + t(TG2) &gt; 0-0 overlap (rising-edge register). A path from one register's slave to a register's
-/// master is the capturing register's hold check (PW4002) and is left to it.
+/// PW1002: latch A feeds latch B and B is still transparent when A opens (a short overlap of their windows on the
+/// design's time base: the 1-1 or 0-0 overlap of one clock and its late complement, or a partial overlap of shifted
+/// or different clocks). The fastest data entering A when A opens must not reach B's storage node before B closes
+/// (<see cref="RaceModel"/>, the model PW4002 shares): margin = t(A's entry gate) + t_min(path, A's output stage
+/// included) + t(B's entry gate) − overlap, the overlap being how long B still conducts after A opens. Reported at B
+/// when the margin is below <see cref="RulePolicy.MinimumRaceMargin"/>. For a register's master and slave this is the
+/// condition t(TG1) + t(I1) + t(TG2) &gt; 0-0 overlap (rising-edge register). A path from one register's slave to a
+/// register's master is the capturing register's hold check (PW4002) and is left to it; windows transparent together
+/// for longer than the overlap allowance are PW1001's.
 /// </summary>
 public sealed class OverlapRaceRule : Rule
 {
@@ -25,7 +26,8 @@ public sealed class OverlapRaceRule : Rule
         foreach (var race in OverlapRaces.For(model, context.CancellationToken))
         {
             var (path, fastest, overlap, margin) = (race.Path, race.Fastest, race.Overlap, race.Margin);
-            if (margin >= context.Policy.MinimumRaceMargin)
+            var required = context.Policy.MinimumRaceMargin;
+            if (margin >= required)
                 continue;
             var a = path.From;
             var b = path.To;
@@ -41,28 +43,10 @@ public sealed class OverlapRaceRule : Rule
             if (register is not null)
                 properties[FindingProperties.Register] = register.Name;
             yield return new Finding(RuleCatalog.OverlapRace, path.EntryGate.Span,
-                new object[] { b.Name, a.Name, race.OverlapName, a.Phase.Clock.Root.Name, fastest, overlap, margin },
+                new object[] { b.Name, a.Name, race.OverlapName, race.ClocksText, fastest, overlap, margin, required },
                 new[] { a.Span }, properties);
         }
     }
-
-    /// <summary>How long a gate on <paramref name="late"/> still conducts after one on <paramref name="opening"/> opens (zero if it is shut then).</summary>
-    public static Time OpenOverlap(Phase opening, Phase late) => OpenOverlap(PhaseWindow.Of(opening), PhaseWindow.Of(late));
-
-    internal static Time OpenOverlap(PhaseWindow a, PhaseWindow b)
-    {
-        if (!a.SharesRootWith(b))
-            return Time.Zero;
-        var period = a.Period.Seconds;
-        var offset = (a.Opens.Seconds - b.Opens.Seconds) % period;
-        if (offset < 0) offset += period;
-        var remaining = b.Length.Seconds - offset;
-        return remaining <= 0 ? Time.Zero : Time.Min(new Time(remaining), a.Length);
-    }
-
-    internal static bool IsRegisterToRegister(LatchModel model, Latch a, Latch b)
-        => model.RegisterOf(a) is { } from && ReferenceEquals(from.Slave, a)
-           && model.RegisterOf(b) is { } to && ReferenceEquals(to.Master, b);
 }
 
 /// <summary>The race check of one latch pair across a clock overlap (see <see cref="OverlapRaceRule"/>).</summary>
@@ -87,12 +71,36 @@ public sealed class OverlapRace
     /// <summary>Fastest − overlap: negative when data can run through both.</summary>
     public Time Margin => Fastest - Overlap;
 
-    /// <summary>"1-1" when the launching latch opens on the rising edge, else "0-0".</summary>
-    public string OverlapName => Path.From.Phase.Polarity == ClockPolarity.High ? "1-1" : "0-0";
+    /// <summary>
+    /// "1-1" when the launching latch opens on the rising edge of a clock whose other phase the catching latch is on,
+    /// "0-0" on the falling edge, "partial" for any other overlap (shifted copies of a phase, different clocks).
+    /// </summary>
+    public string OverlapName
+    {
+        get
+        {
+            var a = Path.From.Phase;
+            var b = Path.EntryGate.ClockControl!;
+            if (!ReferenceEquals(a.Clock.Root, b.Clock.Root) || a.Polarity == b.Polarity)
+                return "partial";
+            return a.Polarity == ClockPolarity.High ? "1-1" : "0-0";
+        }
+    }
+
+    /// <summary>"clock 'clk'" when both latches run on one root clock, else "clocks 'a' and 'b'".</summary>
+    public string ClocksText
+    {
+        get
+        {
+            var a = Path.From.Phase.Clock.Root;
+            var b = Path.EntryGate.ClockControl!.Clock.Root;
+            return ReferenceEquals(a, b) ? $"clock '{a.Name}'" : $"clocks '{Path.From.Phase.Clock.Name}' and '{Path.EntryGate.ClockControl!.Clock.Name}'";
+        }
+    }
 }
 
 /// <summary>
-/// Every latch pair on complementary phases of one root clock that an overlap can race through, with its margin: the
+/// Every latch pair whose windows overlap briefly, so that an overlap can race through it, with its margin: the
 /// figures behind PW1002, passing pairs included, in the order the rule reports them (for reports).
 /// </summary>
 public static class OverlapRaces
@@ -102,20 +110,19 @@ public static class OverlapRaces
         if (model is null) throw new ArgumentNullException(nameof(model));
         var worst = new Dictionary<(int, int), OverlapRace>();
         var order = new List<(int, int)>();
-        var windows = new PhaseWindowCache();
         foreach (var path in model.Paths)
         {
             cancellationToken.ThrowIfCancellationRequested();
             var a = path.From;
             var b = path.To;
             var phaseB = path.EntryGate.ClockControl!;
-            if (!LatchModel.Complementary(a.Phase, phaseB) || OverlapRaceRule.IsRegisterToRegister(model, a, b))
+            if (model.Relation(a.Phase, phaseB) != WindowRelation.ShortOverlap || model.IsRegisterToRegister(a, b))
                 continue;
 
-            var overlap = OverlapRaceRule.OpenOverlap(windows.Of(a.Phase), windows.Of(phaseB));
+            var overlap = RaceModel.Overlap(model, a.Phase, phaseB);
             if (overlap <= Time.Zero)
                 continue;
-            var fastest = model.FastestEntryDelay(a) + path.MinDelay + model.StageDelay(path.EntryGate);
+            var fastest = RaceModel.Fastest(model, path);
             var key = (a.Index, b.Index);
             if (!worst.TryGetValue(key, out var seen))
                 order.Add(key);

@@ -4,14 +4,17 @@ namespace Phaseward;
 
 /// <summary>
 /// PW1001: latch A's storage node reaches latch B's entry gate through restoring stages and data-controlled pass
-/// gates only (no third latch between), and A and B are transparent in the same window: the same root clock and the
-/// same polarity, gated and buffered copies included. A = B (a latch feeding itself back in its own phase) counts.
-/// Reported at B's entry gate, with A as the related location.
+/// gates only (no third latch between), and A and B are transparent together, on the design's time base, for longer
+/// than the overlap allowance (<see cref="WindowRelations"/>): the same phase, a gated copy, a copy delayed by less
+/// than a quarter of the window, or a phase of another clock that covers it. A = B (a latch feeding itself back in its
+/// own phase) counts. A path from one register's slave to another register's master is a register-to-register path
+/// (a half-cycle path when the edges differ), checked for setup and hold by PW4001/PW4002, not here. Reported at B's
+/// entry gate, with A as the related location.
 /// </summary>
 /// <remarks>
 /// Linear in the netlist: the paths come from one forward search per latch over its fan-out cone, which stops at
 /// the next latches (<see cref="LatchModel"/>); no pair of latches is searched for separately. Latches on unrelated
-/// root clocks are not compared (their windows have no fixed relation).
+/// clocks are not compared (their windows have no fixed relation; PW1003 checks the crossing).
 /// </remarks>
 public sealed class SameWindowLatchesRule : Rule
 {
@@ -28,12 +31,13 @@ public sealed class SameWindowLatchesRule : Rule
             var b = path.To;
             var phaseA = a.Phase;
             var phaseB = path.EntryGate.ClockControl!;
-            if (!LatchModel.SameWindow(phaseA, phaseB) || !reported.Add((a.Index, b.Index)))
+            if (model.Relation(phaseA, phaseB) != WindowRelation.TransparentTogether || model.IsRegisterToRegister(a, b)
+                || !reported.Add((a.Index, b.Index)))
                 continue;
 
             var shared = ReferenceEquals(phaseA, phaseB)
                 ? phaseB.Name
-                : $"{phaseA.Name} and {phaseB.Name} (both {phaseB.Polarity} of root clock {phaseB.Clock.Root.Name})";
+                : SharedWindowText(model.WindowOf(phaseA), model.WindowOf(phaseB));
             var register = model.RegisterOf(b);
             var properties = new Dictionary<string, string>
             {
@@ -54,4 +58,8 @@ public sealed class SameWindowLatchesRule : Rule
                 new[] { a.Span }, properties);
         }
     }
+
+    // "clk.High and late.High (together for 470 ps of every 1 ns)".
+    private static string SharedWindowText(PhaseWindow a, PhaseWindow b)
+        => $"{a.Phase.Name} and {b.Phase.Name} (together for {a.LongestOverlapWith(b)} of every {a.CommonCycleWith(b)})";
 }

@@ -37,6 +37,7 @@ public sealed class PassGateChainRule : Rule
     public const string ElmoreDelayProperty = "elmoreDelaySeconds";
     public const string FiftyPercentDelayProperty = "fiftyPercentDelaySeconds";
     public const string RestoredDelayProperty = "restoredDelaySeconds";
+    public const string AssumesUnknownBranchesConductProperty = "assumesUnknownBranchesConduct";
     public const string SplitAfterDeviceIdsProperty = "splitAfterDeviceIds";
     public const string SplitAfterDevicesProperty = "splitAfterDevices";
     public const string SplitPointCountProperty = "splitPointCount";
@@ -148,12 +149,13 @@ public sealed class PassGateChainRule : Rule
             [SplitPointCountProperty] = Invariant(splitCount),
             [SplitPointsTruncatedProperty] = splitCount > listed ? "true" : "false",
             [SplitSitesProperty] = sites.ToString(),
+            [AssumesUnknownBranchesConductProperty] = chain.AssumesUnknownBranchesConduct ? "true" : "false",
         };
 
         return new Finding(
             RuleCatalog.SeriesPassGates,
             gate.Span,
-            new object[] { chain.Length, limit, chain.Elmore, fifty, spacing, restored },
+            new object[] { chain.Length, limit, chain.Elmore, fifty, spacing, restored, chain.AssumesUnknownBranchesConduct ? RuleTexts.SeriesPassGatesAssumption : "" },
             new[] { chain.First.Span },
             properties);
     }

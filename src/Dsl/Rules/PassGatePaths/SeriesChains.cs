@@ -10,8 +10,9 @@ namespace Phaseward;
 /// long or wide the chains.
 /// </summary>
 /// <remarks>
-/// The Elmore delay along a run is the second pass of the RC-tree algorithm (<see cref="ElmoreDelay"/>): the driver's
-/// resistance times the downstream capacitance of the run's input net, plus, for every gate on the run, its
+/// The Elmore delay along a run is the second pass of the RC-tree algorithm (<see cref="ElmoreDelay"/>) in the one
+/// pass-gate delay model (<see cref="PassGateNetwork"/>): the driver's resistance times its load while the run's first
+/// gate conducts (<see cref="PassGateNetwork.RootLoad"/>), plus, for every gate on the run, its
 /// on-resistance times the downstream capacitance it charges. Where several runs end at a gate, the longer one is
 /// kept (then the slower one, then the lower device id), so every gate has one predecessor and the runs form a tree.
 /// </remarks>
@@ -23,6 +24,7 @@ internal sealed class SeriesChains
     private readonly double[] elmoreIn;
     private readonly double[] ohmsIn;
     private readonly double[] faradsIn;
+    private readonly bool[] assumesIn;
     private readonly CancellationToken cancellationToken;
 
     // The runs continuing from each gate: the second sweep, made on first use. A rule that only needs the runs ending
@@ -32,6 +34,7 @@ internal sealed class SeriesChains
     private double[]? elmoreAfter;
     private double[]? ohmsAfter;
     private double[]? faradsAfter;
+    private bool[]? assumesAfter;
 
     public SeriesChains(PassGateNetwork network, CancellationToken cancellationToken = default)
     {
@@ -45,6 +48,7 @@ internal sealed class SeriesChains
         elmoreIn = new double[n];
         ohmsIn = new double[n];
         faradsIn = new double[n];
+        assumesIn = new bool[n];
         this.cancellationToken = cancellationToken;
 
         var netBestDriver = new int[netlist.Nets.Count];
@@ -82,9 +86,10 @@ internal sealed class SeriesChains
             {
                 depthIn[gate.Id] = 1;
                 start[gate.Id] = gate.Id;
-                elmoreIn[gate.Id] = network.RootResistanceOf(input).Ohms * network.DownstreamCapacitanceOf(input).Farads + step;
+                elmoreIn[gate.Id] = network.RootResistanceOf(input).Ohms * network.RootLoad(gate).Farads + step;
                 ohmsIn[gate.Id] = ohms;
                 faradsIn[gate.Id] = farads;
+                assumesIn[gate.Id] = network.RootLoadAssumes(gate) || network.AssumesUnknownBranchesConduct(gate);
             }
             else
             {
@@ -93,6 +98,7 @@ internal sealed class SeriesChains
                 elmoreIn[gate.Id] = elmoreIn[before] + step;
                 ohmsIn[gate.Id] = ohmsIn[before] + ohms;
                 faradsIn[gate.Id] = faradsIn[before] + farads;
+                assumesIn[gate.Id] = assumesIn[before] || network.AssumesUnknownBranchesConduct(gate);
             }
         }
     }
@@ -112,6 +118,7 @@ internal sealed class SeriesChains
         var elmoreAfter = new double[n];
         var ohmsAfter = new double[n];
         var faradsAfter = new double[n];
+        var assumesAfter = new bool[n];
         var netBestLoad = new int[netlist.Nets.Count];
         for (var i = 0; i < order.Count; i++)
         {
@@ -152,12 +159,14 @@ internal sealed class SeriesChains
             elmoreAfter[gate.Id] = netlist.ResistanceOf(afterGate).Ohms * network.ChargedThrough(afterGate).Farads + elmoreAfter[after];
             ohmsAfter[gate.Id] = netlist.ResistanceOf(afterGate).Ohms + ohmsAfter[after];
             faradsAfter[gate.Id] = netlist.CapacitanceOf(afterGate.Output).Farads + faradsAfter[after];
+            assumesAfter[gate.Id] = network.AssumesUnknownBranchesConduct(afterGate) || assumesAfter[after];
         }
 
         this.next = next;
         this.elmoreAfter = elmoreAfter;
         this.ohmsAfter = ohmsAfter;
         this.faradsAfter = faradsAfter;
+        this.assumesAfter = assumesAfter;
         this.depthOut = depthOut;
     }
 
@@ -191,14 +200,16 @@ internal sealed class SeriesChains
             depthIn[id] + depthOut![id] - 1,
             new Time(elmoreIn[id] + elmoreAfter![id]),
             new Resistance(ohmsIn[id] + ohmsAfter![id]),
-            new Capacitance(faradsIn[id] + faradsAfter![id]));
+            new Capacitance(faradsIn[id] + faradsAfter![id]),
+            assumesIn[id] || assumesAfter![id]);
     }
 
     /// <summary>A run of pass gates in series: its first gate, length, Elmore delay at its far end and its totals.</summary>
     internal readonly struct Chain
     {
-        public Chain(Device first, int length, Time elmore, Resistance totalResistance, Capacitance totalNodeCapacitance)
+        public Chain(Device first, int length, Time elmore, Resistance totalResistance, Capacitance totalNodeCapacitance, bool assumesUnknownBranchesConduct)
         {
+            AssumesUnknownBranchesConduct = assumesUnknownBranchesConduct;
             First = first;
             Length = length;
             Elmore = elmore;
@@ -215,6 +226,9 @@ internal sealed class SeriesChains
 
         /// <summary>Sum of the gates' on-resistances.</summary>
         public Resistance TotalResistance { get; }
+
+        /// <summary>The Elmore delay counts side branches on data nets not known to be exclusive as conducting together.</summary>
+        public bool AssumesUnknownBranchesConduct { get; }
 
         /// <summary>Sum of the capacitances of the gates' output nets (each net's own, fan-out loads included).</summary>
         public Capacitance TotalNodeCapacitance { get; }

@@ -6,15 +6,17 @@ using System.Threading;
 namespace Phaseward;
 
 /// <summary>
-/// PW4001 and PW4002: register-to-register paths (from one register's slave to a register's master, on one root
-/// clock), with the figures of <see cref="TimingFigures"/>.
+/// PW4001 and PW4002: register-to-register paths (from one register's slave to a register's master, on related
+/// clocks of the design's time base), with the figures of <see cref="TimingFigures"/>. A rising-edge register
+/// feeding a falling-edge one is a half-cycle path, checked here like any other.
 /// <list type="bullet">
-/// <item>Setup (PW4001): T_avail ≥ t_clk-q(launch) + t_path,max + t_setup(capture), where T_avail is the time from the
-/// launching to the capturing edge: one period plus the capture clock's extra delay for registers on the same edge,
-/// the distance to the next opposite edge otherwise. t_path is measured from the launching register's output
-/// (its output inverter is part of t_clk-q).</item>
-/// <item>Hold (PW4002): t_clk-q,min(launch) + t_path,min ≥ t_hold(capture) + (T_avail − T), i.e. the hold time plus the
-/// clock skew between the registers.</item>
+/// <item>Setup (PW4001): T_avail ≥ t_clk-q(launch) + t_path,max + t_setup(capture), where T_avail is the time from a
+/// launching edge to the next capturing edge after it (a full capture period when they coincide), the shortest over
+/// the launching edges of the common cycle. t_path is measured from the launching register's output (its output
+/// inverter is part of t_clk-q).</item>
+/// <item>Hold (PW4002): t_clk-q,min(launch) + t_path,min ≥ t_hold(capture) + (T_avail − T_capture), i.e. the hold time
+/// plus the clock skew between the registers (the capture edge before the one that setup uses). With
+/// t_hold = t_overlap − t_T1 this is the race model of PW1002 (<see cref="RaceModel"/>): one race, one model.</item>
 /// </list>
 /// Reported at the capturing register, the launching one as related location, when the slack is below
 /// <see cref="RulePolicy.MinimumTimingSlack"/>.
@@ -97,11 +99,11 @@ public static class RegisterPathChecks
         foreach (var path in model.Paths)
         {
             cancellationToken.ThrowIfCancellationRequested();
-            if (!OverlapRaceRule.IsRegisterToRegister(model, path.From, path.To))
+            if (!model.IsRegisterToRegister(path.From, path.To))
                 continue;
             var launch = model.RegisterOf(path.From)!;
             var capture = model.RegisterOf(path.To)!;
-            if (!ReferenceEquals(launch.Clock.Root, capture.Clock.Root))
+            if (!TimeBase.Related(launch.Clock, capture.Clock))
                 continue;
             var check = RegisterPathCheck.Of(model, timingOf[launch], timingOf[capture], path);
             var key = (launch, capture);
@@ -167,19 +169,27 @@ public sealed class RegisterPathCheck
         var output = model.OutputDelay(path.From);
         var pathMax = Time.Max(Time.Zero, path.MaxDelay - output);
         var pathMin = Time.Max(Time.Zero, path.MinDelay - output);
-        var period = launch.Clock.Root.Period;
-        var launchEdge = PhaseWindow.Of(launch.Register.Slave.Phase).Opens.Seconds;
-        var captureEdge = PhaseWindow.Of(capture.Register.Slave.Phase).Opens.Seconds;
-        var t = period.Seconds;
-        var offset = (captureEdge - launchEdge) % t;
-        if (offset < 0) offset += t;
-        double available;
-        if (launch.Register.IsPositiveEdge == capture.Register.IsPositiveEdge)
-            available = t + (offset > t / 2 ? offset - t : offset); // next same edge, shifted by the skew
-        else
-            available = offset == 0 ? t : offset;
+        var available = AvailableTime(model, launch.Register, capture.Register);
+        var period = capture.Clock.Period;
         return new RegisterPathCheck(launch.ClockToOutput, launch.ClockToOutputMin, pathMax, pathMin, capture.Setup, capture.Hold,
-            new Time(available), period);
+            available, period);
+    }
+
+    // From the launching edge to the capturing edge. On copies of one root clock a capture clock's extra delay is skew:
+    // registers on the same edge capture one period later, shifted by it (a copy delayed by more than half a period
+    // counts as early); on opposite edges the next capturing edge after the launch (a half-cycle path). Between
+    // different root clocks the clocks' offsets are deliberate: the next capturing edge after the launch, the
+    // shortest over the launching edges of their common cycle.
+    private static Time AvailableTime(LatchModel model, Register launch, Register capture)
+    {
+        var launchEdges = model.WindowOf(launch.Slave.Phase);
+        var captureEdges = model.WindowOf(capture.Slave.Phase);
+        if (!ReferenceEquals(launch.Clock.Root, capture.Clock.Root) || launch.IsPositiveEdge != capture.IsPositiveEdge)
+            return launchEdges.TimeToNextOpeningOf(captureEdges)!.Value;
+        var t = launch.Clock.Period.Seconds;
+        var offset = (captureEdges.Opens.Seconds - launchEdges.Opens.Seconds) % t;
+        if (offset < 0) offset += t;
+        return new Time(t + (offset > t / 2 ? offset - t : offset));
     }
 
     internal static RegisterPathCheck Worse(RegisterPathCheck a, RegisterPathCheck b)

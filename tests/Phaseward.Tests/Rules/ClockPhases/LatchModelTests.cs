@@ -34,7 +34,7 @@ public class LatchModelTests
         // window's first phase when the node holds more than one; a buffered copy of a phase opens in the same window.
         var c = Figures.NewCircuit("windows");
         var clk = c.Clock("clk", 1.Nanoseconds());
-        var other = c.Clock("other", 3.Nanoseconds());
+        var other = c.Clock("other", 3.Nanoseconds(), independent: true);
         var late = c.BufferedClock(clk, 50.Picoseconds());
         var d = c.Input("d");
         var e = c.Input("e");
@@ -127,7 +127,9 @@ public class LatchModelTests
     {
         // Stage delay 0.69·R·C: Rabaey, Chandrakasan, Nikolić, "Digital Integrated Circuits: A Design Perspective",
         // 2nd ed., ch. 5 (t_p = 0.69·R_eq·C_L; from memory). Two paths from A to B: one inverter + NAND (2 stages),
-        // or three inverters + NAND (4 stages): min 2 · 27.6 ps, max 4 · 27.6 ps.
+        // or three inverters + NAND (4 stages): min 2 · 27.6 ps (each stage its own net), max 5 · 27.6 ps: at most the NAND
+        // also charges B's storage node through B's open entry gate, 0.69 · 4 kΩ · (10 + 10) fF (a side branch is a
+        // capacitive load where it leaves the path: Elmore 1948; Rubinstein, Penfield, Horowitz, IEEE TCAD 2(3), 1983).
         var c = Figures.NewCircuit("paths");
         var clk = c.Clock("clk", 1.Nanoseconds());
         var a = c.DynamicLatch(c.Input("d"), clk.High, "A");
@@ -140,6 +142,6 @@ public class LatchModelTests
         Assert.Equal("A", path.From.Name);
         Assert.Equal("B", path.To.Name);
         Assert.Equal(2 * Figures.InvPs, Figures.Ps(path.MinDelay), 6);
-        Assert.Equal(4 * Figures.InvPs, Figures.Ps(path.MaxDelay), 6);
+        Assert.Equal(5 * Figures.InvPs, Figures.Ps(path.MaxDelay), 6);
     }
 }

@@ -25,8 +25,8 @@ public class OverlapRaceRuleTests
         var finding = Assert.Single(Figures.Run(Rule, c));
 
         Assert.Equal("PW1002", finding.RuleId);
-        Assert.Equal("Latch 'R.slave' can catch data launched through latch 'R.master' during the 0-0 overlap of clock 'clk': " +
-                     "the fastest path takes 96.6 ps but both pass gates conduct together for 120 ps (margin -23.4 ps)", finding.Message);
+        Assert.Equal("Latch 'R.slave' races latch 'R.master' through the 0-0 overlap of clock 'clk': " +
+                     "the fastest path takes 96.6 ps while both pass gates conduct together for 120 ps, a margin of -23.4 ps, below the required 0 s", finding.Message);
         Assert.Equal(-23.4e-12, double.Parse(finding.Properties[FindingProperties.MarginSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-18);
         Assert.Equal("true", finding.Properties[FindingProperties.IsRegisterStage]);
         Assert.Equal(96.6, Figures.Ps(TimingFigures.For(c.ToNetlist()).Registers.Single().MasterSlaveRace), 9);
@@ -74,7 +74,7 @@ public class OverlapRaceRuleTests
 
         Assert.Equal(reported, findings.Length == 1);
         if (reported)
-            Assert.Contains("margin -13.4 ps", findings[0].Message);
+            Assert.Contains("a margin of -13.4 ps", findings[0].Message);
     }
 
     [Fact]

@@ -1,0 +1,209 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Operations;
+
+namespace Phaseward.Analyzers.Elaboration;
+
+// Exceptions the design throws and catches itself (try/catch/finally, throw, using), blocks with 'using var', and
+// iterators. An exception inside a try is a DesignException carried to the design's catch clauses; one that no clause
+// catches is PW9003 at the throw, as an exception outside any try is.
+internal sealed partial class Interpreter
+{
+    private Completion Block(IBlockOperation block, Frame frame)
+    {
+        var hasUsing = false;
+        foreach (var inner in block.Operations)
+            hasUsing |= inner is IUsingDeclarationOperation;
+        if (hasUsing)
+            usingScopes.Push(new List<object?>());
+        var disposed = false;
+        try
+        {
+            foreach (var inner in block.Operations)
+            {
+                var completion = Execute(inner, frame);
+                if (completion != Completion.Normal)
+                    return completion;
+            }
+
+            return Completion.Normal;
+        }
+        catch (DesignException) when (hasUsing)
+        {
+            disposed = true;
+            DisposeAll(usingScopes.Pop(), block);
+            throw;
+        }
+        finally
+        {
+            if (hasUsing && !disposed && usingScopes.Count > 0)
+                DisposeAll(usingScopes.Pop(), block);
+        }
+    }
+
+    private object? VisitThrow(IThrowOperation thrown, Frame frame)
+    {
+        var value = thrown.Exception is null ? (caught.Count > 0 ? caught.Peek() : null) : Evaluate(thrown.Exception, frame);
+        if (tryDepth > 0 && value is not null && !Unknown.Is(value))
+            throw new DesignException(value, thrown.Syntax);
+        Throws(thrown.Syntax, thrown.Exception is null || Unknown.Is(value) || value is null
+            ? (value as Exception)?.GetType().Name + ": " + (value as Exception)?.Message
+            : DescribeThrow(thrown, value));
+        throw new ElaborationStopped();
+    }
+
+    private Completion Try(ITryOperation statement, Frame frame)
+    {
+        var completion = Completion.Normal;
+        DesignException? uncaught = null;
+        tryDepth++;
+        try
+        {
+            completion = Execute(statement.Body, frame);
+        }
+        catch (DesignException e)
+        {
+            uncaught = e;
+        }
+        finally
+        {
+            tryDepth--;
+        }
+
+        if (uncaught is not null)
+        {
+            var handler = statement.Catches.FirstOrDefault(clause => Catches(clause, uncaught.Thrown, frame));
+            if (handler is not null)
+            {
+                uncaught = null;
+                caught.Push(handler.ExceptionDeclarationOrExpression is null ? new object() : frame.Find(((IVariableDeclaratorOperation)handler.ExceptionDeclarationOrExpression).Symbol)!.Value!);
+                try
+                {
+                    completion = Execute(handler.Handler, frame);
+                }
+                catch (DesignException e) when (statement.Finally is not null)
+                {
+                    uncaught = e;
+                }
+                finally
+                {
+                    caught.Pop();
+                }
+            }
+        }
+
+        if (statement.Finally is not null)
+        {
+            var afterFinally = Execute(statement.Finally, frame);
+            if (afterFinally != Completion.Normal)
+                completion = afterFinally;
+        }
+
+        if (uncaught is not null)
+        {
+            if (tryDepth > 0)
+                throw uncaught;
+            Throws(uncaught.Site, uncaught.Describe());
+            throw new ElaborationStopped();
+        }
+
+        return completion;
+    }
+
+    /// <summary>Does the catch clause take this exception? (Declares its variable and evaluates its filter.)</summary>
+    private bool Catches(ICatchClauseOperation clause, object thrown, Frame frame)
+    {
+        var type = clause.ExceptionType;
+        if (type.SpecialType != SpecialType.System_Object && type.ToDisplayString() != "System.Exception" && IsOfType(thrown, type) != true)
+            return false;
+        if (clause.ExceptionDeclarationOrExpression is IVariableDeclaratorOperation declarator)
+            frame.Declare(declarator.Symbol, thrown);
+        return clause.Filter is null || Condition(clause.Filter, frame) == true;
+    }
+
+    private Completion Using(IUsingOperation statement, Frame frame)
+    {
+        var resources = new List<object?>();
+        switch (statement.Resources)
+        {
+            case IVariableDeclarationGroupOperation group:
+                Execute(group, frame);
+                foreach (var declarator in group.Declarations.SelectMany(d => d.Declarators))
+                    resources.Add(frame.Find(declarator.Symbol)?.Value);
+                break;
+            default:
+                resources.Add(Evaluate(statement.Resources, frame));
+                break;
+        }
+
+        try
+        {
+            return Execute(statement.Body, frame);
+        }
+        finally
+        {
+            DisposeAll(resources, statement);
+        }
+    }
+
+    private Completion UsingDeclaration(IUsingDeclarationOperation statement, Frame frame)
+    {
+        Execute(statement.DeclarationGroup, frame);
+        if (usingScopes.Count > 0)
+            foreach (var declarator in statement.DeclarationGroup.Declarations.SelectMany(d => d.Declarators))
+                usingScopes.Peek().Add(frame.Find(declarator.Symbol)?.Value);
+        return Completion.Normal;
+    }
+
+    /// <summary>Disposes resources in reverse order: the design's Dispose is interpreted; library resources have nothing to release.</summary>
+    private void DisposeAll(List<object?> resources, IOperation site)
+    {
+        for (var i = resources.Count - 1; i >= 0; i--)
+        {
+            if (resources[i] is not InterpretedObject resource)
+                continue;
+            var dispose = resource.Type.GetMembers("Dispose").OfType<IMethodSymbol>().FirstOrDefault(m => m.Parameters.Length == 0)
+                ?? resource.Type.AllInterfaces.SelectMany(t => t.GetMembers("Dispose")).OfType<IMethodSymbol>()
+                    .Select(m => resource.Type.FindImplementationForInterfaceMember(m)).OfType<IMethodSymbol>().FirstOrDefault();
+            if (dispose is not null && session.IsInSource(dispose))
+                InvokeUser(dispose, resource, Array.Empty<object?>(), Array.Empty<Variable?>(), site, new Frame(null, null, resource));
+        }
+    }
+
+    private Completion YieldReturn(IReturnOperation yielded, Frame frame)
+    {
+        Step(yielded);
+        var value = yielded.ReturnedValue is null ? null : CopyIfValue(Evaluate(yielded.ReturnedValue, frame));
+        var owner = frame;
+        while (owner.Yielded is null && owner.LexicalParent is not null)
+            owner = owner.LexicalParent;
+        if (owner.Yielded is null)
+        {
+            Unsupported(yielded, "this yield return", "its iterator is not running");
+            return Completion.Return;
+        }
+
+        owner.Yielded.Add(value);
+        ChargeMemory(yielded, 8);
+        return Completion.Normal;
+    }
+
+    /// <summary>A .NET exception for a message "TypeName: text" (as the interpreter words what a run would throw).</summary>
+    private static Exception ExceptionNamed(string message)
+    {
+        var colon = message.IndexOf(':');
+        if (colon > 0)
+        {
+            var name = message.Substring(0, colon);
+            var text = message.Substring(colon + 1).Trim();
+            var type = Type.GetType("System." + name, throwOnError: false) ?? typeof(List<>).Assembly.GetType("System.Collections.Generic." + name, throwOnError: false);
+            if (type is not null && typeof(Exception).IsAssignableFrom(type)
+                && type.GetConstructor(new[] { typeof(string) }) is { } constructor)
+                return (Exception)constructor.Invoke(new object[] { text });
+        }
+
+        return new InvalidOperationException(message);
+    }
+}

@@ -1,0 +1,183 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using System.Text;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Operations;
+
+namespace Phaseward.Analyzers.Elaboration;
+
+// What objects of the design's own types mean: ToString, Equals and GetHashCode (the design's overrides interpreted,
+// or the members C# generates for records and structs), struct copies, record 'with', and the members a user type
+// inherits from object.
+internal sealed partial class Interpreter : IObjectSemantics
+{
+    public string TextOf(InterpretedObject value)
+    {
+        if (UserOverride(value.Type, "ToString", 0) is { } toString)
+            return InvokeForLibrary(toString, value, Array.Empty<object?>()) is string text ? text : throw new UnknownValueException();
+        if (value.Type.IsRecord)
+        {
+            var text = new StringBuilder(value.Type.Name).Append(" { ");
+            var first = true;
+            foreach (var (name, member) in PrintedMembers(value))
+            {
+                text.Append(first ? "" : ", ").Append(name).Append(" = ").Append(Arithmetic.Text(member));
+                first = false;
+            }
+
+            return text.Append(first ? "}" : " }").ToString();
+        }
+
+        return ClrTypes.MetadataName(value.Type);
+    }
+
+    public bool AreEqual(InterpretedObject value, object? other)
+    {
+        if (UserOverride(value.Type, "Equals", 1) is { } equals)
+            return InvokeForLibrary(equals, value, new[] { other }) is bool b ? b : throw new UnknownValueException();
+        if (ReferenceEquals(value, other))
+            return true;
+        if (!value.Type.IsRecord && !value.Type.IsValueType)
+            return false;
+        if (other is not InterpretedObject that || !SymbolEqualityComparer.Default.Equals(value.Type, that.Type))
+            return false;
+        foreach (var member in value.Members)
+            if (member.Key is not IParameterSymbol && !Equals(member.Value.Value, that.Find(member.Key)?.Value))
+                return false;
+        return true;
+    }
+
+    public int HashOf(InterpretedObject value)
+    {
+        if (UserOverride(value.Type, "GetHashCode", 0) is { } hash)
+            return InvokeForLibrary(hash, value, Array.Empty<object?>()) is int h ? h : throw new UnknownValueException();
+        if (!value.Type.IsRecord && !value.Type.IsValueType)
+            return System.Runtime.CompilerServices.RuntimeHelpers.GetHashCode(value);
+        var combined = 17;
+        foreach (var member in value.Members.Where(m => m.Key is not IParameterSymbol).OrderBy(m => m.Key.Name, StringComparer.Ordinal))
+            combined = combined * 31 + (member.Value.Value?.GetHashCode() ?? 0);
+        return combined;
+    }
+
+    /// <summary>Struct values are copied when stored or passed; everything else is shared by reference.</summary>
+    private static object? CopyIfValue(object? value) => value is InterpretedObject { Type.IsValueType: true } structValue ? structValue.Copy() : value;
+
+    /// <summary>A call of a member the design's type does not declare in source: generated record members, object's members.</summary>
+    private object? CallObjectMember(IInvocationOperation invocation, InterpretedObject self, IMethodSymbol method, Frame frame)
+    {
+        var (arguments, references) = Arguments(invocation.Arguments, method, frame);
+        if (arguments is null) return Unknown.Value;
+        try
+        {
+            switch (method.Name)
+            {
+                case "ToString" when arguments.Length == 0:
+                    return TextOf(self);
+                case "Equals" when arguments.Length == 1:
+                    return AreEqual(self, arguments[0]);
+                case "GetHashCode" when arguments.Length == 0 && (self.Type.IsRecord || UserOverride(self.Type, "GetHashCode", 0) is not null):
+                    return HashOf(self);
+                case "Deconstruct" when self.Type.IsRecord && method.IsImplicitlyDeclared:
+                    var positional = PositionalValues(self);
+                    for (var i = 0; i < references.Length && i < positional.Count; i++)
+                        if (references[i] is { } variable)
+                            variable.Value = positional[i];
+                    return null;
+            }
+        }
+        catch (UnknownValueException)
+        {
+            return Unknown.Value;
+        }
+
+        return Unsupported(invocation, "the call to " + Describe(method), ClrTypes.IsDsl(method)
+            ? "the design's inherited Phaseward members are not called at compile time"
+            : "it is not declared in this compilation");
+    }
+
+    /// <summary><c>value with { P = ... }</c>: a copy, then the initializer on the copy.</summary>
+    private object? VisitWith(IWithOperation with, Frame frame)
+    {
+        var original = Evaluate(with.Operand, frame);
+        if (Unknown.Is(original)) return original;
+        if (original is not InterpretedObject source)
+            return Unsupported(with, "this 'with' expression", "only records and structs of this compilation are copied with 'with'");
+        var copy = source.Copy();
+        implicitReceivers.Push(copy);
+        try
+        {
+            foreach (var initializer in with.Initializer.Initializers)
+                if (Unknown.Is(Evaluate(initializer, frame)))
+                    return Unknown.Value;
+        }
+        finally
+        {
+            implicitReceivers.Pop();
+        }
+
+        return copy;
+    }
+
+    /// <summary>The parts a deconstruction takes from a value that is not a tuple: a KeyValuePair, a record's positional values.</summary>
+    private TupleValue? DeconstructedParts(object? value)
+    {
+        if (value is InterpretedObject { Type.IsRecord: true } record)
+            return new TupleValue(PositionalValues(record).ToArray());
+        var type = value?.GetType();
+        if (type is { IsGenericType: true } && type.GetGenericTypeDefinition() == typeof(KeyValuePair<,>))
+            return new TupleValue(new[] { type.GetProperty("Key")!.GetValue(value), type.GetProperty("Value")!.GetValue(value) });
+        return null;
+    }
+
+    /// <summary>The values of a record's positional parameters, in order (what its generated Deconstruct gives).</summary>
+    private List<object?> PositionalValues(InterpretedObject record)
+    {
+        var constructor = record.Type.InstanceConstructors.FirstOrDefault(c => c.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax() is Microsoft.CodeAnalysis.CSharp.Syntax.TypeDeclarationSyntax);
+        var values = new List<object?>();
+        if (constructor is null) return values;
+        foreach (var parameter in constructor.Parameters)
+            values.Add(PositionalProperty(record.Type, parameter) is { } property ? record.Find(property)?.Value : record.Find(parameter)?.Value);
+        return values;
+    }
+
+    /// <summary>The public fields and properties a record's generated ToString prints, base type's first.</summary>
+    private IEnumerable<(string Name, object? Value)> PrintedMembers(InterpretedObject record)
+    {
+        var chain = new List<INamedTypeSymbol>();
+        for (var type = record.Type; type is not null && session.IsInSource(type); type = type.BaseType)
+            chain.Insert(0, type);
+        foreach (var type in chain)
+            foreach (var member in type.GetMembers())
+            {
+                if (member.IsStatic || member.DeclaredAccessibility != Accessibility.Public || member.IsImplicitlyDeclared && member is not IPropertySymbol)
+                    continue;
+                if (member is IFieldSymbol field)
+                    yield return (field.Name, record.Find(field)?.Value);
+                else if (member is IPropertySymbol { IsIndexer: false, GetMethod: not null } property && property.Name != "EqualityContract")
+                    yield return (property.Name, IsAutoProperty(property) ? record.Find(property)?.Value
+                        : InvokeForLibrary(property.GetMethod!, record, Array.Empty<object?>()));
+            }
+    }
+
+    /// <summary>The design's own override of an object member (ToString, Equals, GetHashCode), if it writes one.</summary>
+    private IMethodSymbol? UserOverride(INamedTypeSymbol type, string name, int parameters)
+    {
+        for (var current = type; current is not null && session.IsInSource(current); current = current.BaseType)
+            foreach (var member in current.GetMembers(name))
+                if (member is IMethodSymbol { IsOverride: true, IsImplicitlyDeclared: false } method && method.Parameters.Length == parameters
+                    && (parameters == 0 || method.Parameters[0].Type.SpecialType == SpecialType.System_Object))
+                    return method;
+        return null;
+    }
+
+    /// <summary>Interprets a member for library code (string.Join calling ToString, a HashSet calling Equals).</summary>
+    private object? InvokeForLibrary(IMethodSymbol method, InterpretedObject self, object?[] arguments)
+    {
+        var site = clrSite ?? Current;
+        if (site is null)
+            throw new UnknownValueException();
+        var value = InvokeUser(method, self, arguments, Array.Empty<Variable?>(), site, new Frame(null, null, self));
+        return Unknown.Is(value) ? throw new UnknownValueException() : value;
+    }
+}

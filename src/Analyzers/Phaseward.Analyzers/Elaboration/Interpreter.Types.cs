@@ -1,0 +1,76 @@
+using System;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Operations;
+
+namespace Phaseward.Analyzers.Elaboration;
+
+// Run-time type tests ('is T', type patterns) and '?.'.
+internal sealed partial class Interpreter
+{
+    private object? VisitConditionalAccess(IConditionalAccessOperation access, Frame frame)
+    {
+        var receiver = Evaluate(access.Operation, frame);
+        if (Unknown.Is(receiver) || receiver is null)
+            return receiver;
+        conditionalReceivers.Push(receiver);
+        try
+        {
+            return Evaluate(access.WhenNotNull, frame);
+        }
+        finally
+        {
+            conditionalReceivers.Pop();
+        }
+    }
+
+    private object? VisitIsType(IIsTypeOperation test, Frame frame)
+    {
+        var value = Evaluate(test.ValueOperand, frame);
+        if (Unknown.Is(value)) return value;
+        var result = IsOfType(value, test.TypeOperand);
+        if (result is null) return Unsupported(test, "this type test", "the type " + test.TypeOperand.ToDisplayString() + " cannot be tested at compile time");
+        return test.IsNegated ? !result.Value : result.Value;
+    }
+
+    /// <summary>Is the (non-null) value of the given type? Null when that cannot be decided.</summary>
+    private bool? IsOfType(object? value, ITypeSymbol type)
+    {
+        if (value is null) return false;
+        if (type.SpecialType == SpecialType.System_Object) return true;
+        if (NullableUnderlying(type) is { } underlying) type = underlying;
+        if (value is InterpretedObject instance)
+        {
+            if (type.TypeKind == TypeKind.Interface)
+                return instance.Type.AllInterfaces.Contains((INamedTypeSymbol)type.OriginalDefinition, SymbolEqualityComparer.Default)
+                    || instance.Type.AllInterfaces.Contains((INamedTypeSymbol)type, SymbolEqualityComparer.Default);
+            for (var current = instance.Type; current is not null; current = current.BaseType)
+                if (SymbolEqualityComparer.Default.Equals(current.OriginalDefinition, type.OriginalDefinition))
+                    return true;
+            return false;
+        }
+
+        if (value is TupleValue tuple)
+            return type.IsTupleType ? type is INamedTypeSymbol { TupleElements.Length: var length } && length == tuple.Items.Length
+                : type.ToDisplayString() is "System.Runtime.CompilerServices.ITuple" or "System.ValueType" or "System.IComparable" ? true
+                : type.TypeKind == TypeKind.Interface ? null : false;
+        if (value is Closure) return type.TypeKind == TypeKind.Delegate ? true : type.TypeKind == TypeKind.Interface ? null : false;
+        if (session.IsInSource(type)) return false;
+        var clr = type.TypeKind == TypeKind.Enum && !ClrTypes.IsDsl(type) ? typeof(int) : Library.Erase(type);
+        return clr?.IsInstanceOfType(value);
+    }
+
+    private static ITypeSymbol? NullableUnderlying(ITypeSymbol? type)
+        => type is INamedTypeSymbol { OriginalDefinition.SpecialType: SpecialType.System_Nullable_T } nullable ? nullable.TypeArguments[0] : null;
+
+    private bool? AreEqualOrUnknown(InterpretedObject value, object? other)
+    {
+        try
+        {
+            return AreEqual(value, other);
+        }
+        catch (UnknownValueException)
+        {
+            return null;
+        }
+    }
+}

@@ -1,0 +1,93 @@
+using System.Linq;
+
+namespace Phaseward.Analyzers.Tests.Elaboration;
+
+/// <summary>
+/// Nothing the elaborator cannot evaluate is read as a default. A design takes its stage count (3) through one kind of
+/// member access per row; at compile time it is either interpreted (then the netlist equals the run-time one) or it is
+/// PW9001 at that access -- never a silent 0, false or null.
+/// </summary>
+public class MemberAccessSweepTests
+{
+    public static TheoryData<string, string, string, string, bool> Rows() => new()
+    {
+        // name, declarations beside the design, the design's members, the expression, interpreted?
+        { "const field", "", "private const int N = 3;", "N", true },
+        { "static readonly field with initializer", "", "private static readonly int N = 1 + 2;", "N", true },
+        { "static readonly field set by the static constructor", "", "private static readonly int N; static D() { N = 3; }", "N", true },
+        { "static auto-property set by the static constructor", "", "private static int N { get; set; } static D() => N = 3;", "N", true },
+        { "static field of another type set by its static constructor",
+            "public static class Plan { public static readonly int Stages; public static readonly bool Used; static Plan() { Stages = 3; Used = true; } }",
+            "", "Plan.Used ? Plan.Stages : 0", true },
+        { "static initializer reading another type's static constructor",
+            "public static class A { public static readonly int X; static A() { X = 3; } } public static class B { public static readonly int Y = A.X; }",
+            "", "B.Y", true },
+        { "static field of a generic type", "public static class Holder<T> { public static int Value; static Holder() { Value = 3; } }", "", "Holder<int>.Value", true },
+        { "static property with a getter", "", "private static int N => 1 + 2;", "N", true },
+        { "instance field with initializer", "", "private readonly int n = 3;", "n", true },
+        { "instance field set by the constructor", "", "private readonly int n; public D() { n = 3; }", "n", true },
+        { "auto-property with initializer", "", "private int N { get; } = 3;", "N", true },
+        { "get-only auto-property set by the constructor", "", "private int N { get; } public D() { N = 3; }", "N", true },
+        { "field of a base class set by its constructor", "public abstract class Base : Design { protected readonly int n; protected Base() { n = 3; } }", "", "n", true },
+        { "property of a user object", "public sealed class Config { public int Stages { get; set; } = 1; }", "", "new Config { Stages = 3 }.Stages", true },
+        { "record positional property", "public sealed record Plan(int Stages, string Name);", "", "new Plan(3, \"p\").Stages", true },
+        { "struct field", "public struct Pair { public int A; public int B; public Pair(int a, int b) { A = a; B = b; } }", "", "new Pair(1, 2).A + new Pair(1, 2).B", true },
+        { "array element left at its default", "", "", "(new int[4])[2] + 3", true },
+        { "tuple element", "", "", "(1, 3).Item2", true },
+        { "enum member", "public enum Count { One = 1, Three = 3 }", "", "(int)Count.Three", true },
+        { "default literal", "", "", "default(int) + 3", true },
+        { "nullable value", "", "", "((int?)null) ?? 3", true },
+        { "library constant", "", "", "int.MaxValue / int.MaxValue * 3", true },
+        { "library static field", "", "", "string.Empty.Length + 3", true },
+        { "captured local read by a local function", "", "", "Local(); int Local() => 3;", true },
+        { "clock of the machine", "", "", "System.DateTime.Now.Second * 0 + 3", false },
+        { "environment", "", "", "System.Environment.ProcessorCount * 0 + 3", false },
+        { "randomness", "", "", "new System.Random().Next(3, 4)", false },
+    };
+
+    [Theory]
+    [MemberData(nameof(Rows))]
+    public void AccessIsInterpretedOrReported(string kind, string declarations, string members, string expression, bool interpreted)
+    {
+        var isBlock = expression.Contains(';');
+        var value = isBlock ? expression.Substring(0, expression.IndexOf(';')) : expression;
+        var locals = isBlock ? expression.Substring(expression.IndexOf(';') + 1) : "";
+        var baseType = declarations.Contains("abstract class Base") ? "Base" : "Design";
+        var source = $$"""
+            using Phaseward;
+
+            namespace Sweep
+            {
+                {{declarations}}
+
+                public sealed class D : {{baseType}}
+                {
+                    {{members}}
+
+                    protected override void Describe(Circuit c)
+                    {
+                        var count = {{value}};
+                        var x = c.Input("x");
+                        for (var i = 0; i < count; i++)
+                            x = c.Inverter(x, "s" + i);
+                        c.Output("y", x);
+                        {{locals}}
+                    }
+                }
+            }
+            """;
+        var designs = new InMemoryDesigns(("/sweep/D.cs", source));
+        var compileTime = designs.CompileTime("Sweep.D");
+        if (interpreted)
+        {
+            ParityTests.AssertParity(designs, "Sweep.D");
+            Assert.Equal(3, designs.RunTime("Sweep.D").Devices.Count);
+        }
+        else
+        {
+            var issue = Assert.Single(compileTime.Issues);
+            Assert.True(issue.RuleId == RuleIds.NotElaborated, kind + ": " + issue);
+            Assert.Empty(compileTime.Netlist!.Devices);
+        }
+    }
+}

@@ -1,0 +1,170 @@
+using System.Linq;
+using Phaseward.Tests.Reference;
+using Phaseward.Tests.Rules.ClockPhases;
+
+namespace Phaseward.Tests.Electrical;
+
+/// <summary>
+/// The one pass-gate delay model (PassGateNetwork) on a 4-bit log rotator: two 2:1 mux stages (rotate by 1 on s0, by 2
+/// on s1), each output bit a pair of pass gates on a select and its inverse, into dynamic latches. The conducting
+/// path from a source latch's output inverter to a capturing latch's storage node is three pass gates; the other
+/// branch at each mux input is on the inverse select, so it is off.
+/// Hand computation on the "flat" test figures (every net 10 fF, restoring stages 4 kΩ, pass gates 5 kΩ), Elmore
+/// delay T = Σ_k R_k · C_down(k) (W. C. Elmore, J. Appl. Phys. 19(1), 1948), a side branch being a capacitive load
+/// where it leaves the path (J. Rubinstein, P. Penfield, M. A. Horowitz, "Signal Delay in RC Tree Networks", IEEE
+/// Trans. CAD 2(3), 1983, T_i = Σ_k R_ki C_k):
+///   driver 4 kΩ · (d0 + m1 + m2 + x = 40 fF) = 160 ps; gate 1: 5 kΩ · 30 fF = 150 ps; gate 2: 5 kΩ · 20 fF = 100 ps;
+///   entry gate: 5 kΩ · 10 fF = 50 ps; T(x) = 460 ps, T(m2) = 410 ps.
+/// With every branch conducting (selects not known to be exclusive) the driver sees 10 + 2 · 50 = 110 fF and gate 1
+/// 50 fF: T(x) = 440 + 250 + 100 + 50 = 840 ps.
+/// </summary>
+public class ConductingPathDelayTests
+{
+    private static Netlist Rotator(bool invertedSelects, bool stated = false)
+    {
+        var c = Figures.NewCircuit("rotator");
+        var clk = c.Clock("clk", 2.Nanoseconds(), 0.5, 0.Picoseconds());
+        var d = Enumerable.Range(0, 4).Select(i => c.DynamicLatch(c.Input("in" + i), clk.Low, "A" + i)).ToArray();
+        var s0 = c.Input("s0");
+        var s1 = c.Input("s1");
+        var ns0 = invertedSelects ? c.Inverter(s0, "ns0") : c.Input("ns0");
+        var ns1 = invertedSelects ? c.Inverter(s1, "ns1") : c.Input("ns1");
+        if (stated)
+        {
+            c.Exclusive(s0, ns0);
+            c.Exclusive(ns1, s1);
+        }
+
+        var m1 = Stage(c, d, 1, s0, ns0, "m1_");
+        var m2 = Stage(c, m1, 2, s1, ns1, "m2_");
+        for (var i = 0; i < 4; i++)
+            c.DynamicLatch(m2[i], clk.High, "L" + i);
+        return c.ToNetlist();
+    }
+
+    private static Net[] Stage(Circuit c, Net[] input, int shift, Net select, Net inverse, string prefix)
+    {
+        var outputs = new Net[input.Length];
+        for (var i = 0; i < input.Length; i++)
+        {
+            outputs[i] = c.Node(prefix + i);
+            c.TransmissionGate(input[i], inverse, outputs[i]);
+            c.TransmissionGate(input[(i - shift + input.Length) % input.Length], select, outputs[i]);
+        }
+
+        return outputs;
+    }
+
+    private static PassGateRun RunInto(Netlist netlist, string latch)
+        => PassGateChains.Of(netlist).Single(r => r.Last.Output.Name == latch + ".x");
+
+    [Fact]
+    public void The_conducting_path_counts_inverse_select_branches_as_off()
+    {
+        var run = RunInto(Rotator(invertedSelects: true), "L0");
+        Assert.Equal(3, run.Length);
+        Assert.Equal(460.0, Figures.Ps(run.ElmoreDelay), 9);
+    }
+
+    [Fact]
+    public void Selects_not_known_to_be_exclusive_count_every_branch_and_say_so()
+    {
+        var netlist = Rotator(invertedSelects: false);
+        Assert.Equal(840.0, Figures.Ps(RunInto(netlist, "L0").ElmoreDelay), 9);
+
+        var finding = new PassGateChainRule().Check(new RuleContext(netlist, new RulePolicy { MaxSeriesPassGates = 2 })).First();
+        Assert.EndsWith(RuleTexts.SeriesPassGatesAssumption, finding.Message);
+        Assert.Equal("true", finding.Properties[PassGateChainRule.AssumesUnknownBranchesConductProperty]);
+    }
+
+    [Fact]
+    public void Stating_the_selects_exclusive_gives_the_conducting_path_and_drops_the_assumption()
+    {
+        var netlist = Rotator(invertedSelects: false, stated: true);
+        Assert.Equal(460.0, Figures.Ps(RunInto(netlist, "L0").ElmoreDelay), 9);
+
+        var finding = new PassGateChainRule().Check(new RuleContext(netlist, new RulePolicy { MaxSeriesPassGates = 2 })).First();
+        Assert.DoesNotContain("assumes", finding.Message);
+        Assert.Equal("false", finding.Properties[PassGateChainRule.AssumesUnknownBranchesConductProperty]);
+    }
+
+    [Fact]
+    public void The_setup_path_and_the_entry_delay_add_up_to_the_same_Elmore_delay()
+    {
+        // The latch-to-latch path ends at L0's input m2_0: 0.69 · T(m2) = 0.69 · 410 ps; L0's entry (the latch table's
+        // entry delay) is 0.69 · 50 ps; together 0.69 · T(x), PW2001's figure with the stage factor of the timing rules.
+        var netlist = Rotator(invertedSelects: true);
+        var model = LatchModel.Of(netlist);
+        var path = model.Paths.Single(p => p.From.Name == "A0" && p.To.Name == "L0");
+        Assert.Equal(0.69 * 410, Figures.Ps(path.MaxDelay), 9);
+        Assert.Equal(0.69 * 50, Figures.Ps(model.EntryDelay(path.To)), 9);
+        Assert.Equal(0.69 * Figures.Ps(RunInto(netlist, "L0").ElmoreDelay), Figures.Ps(path.MaxDelay + model.EntryDelay(path.To)), 9);
+        // The shortest delay counts each stage's own net only (no side load): 0.69 · (4 kΩ + 5 kΩ + 5 kΩ) · 10 fF.
+        Assert.Equal(0.69 * 140, Figures.Ps(path.MinDelay), 9);
+    }
+
+    [Fact]
+    public void The_conducting_path_against_the_circuit_simulator()
+    {
+        // ngspice-39 on the conducting path (tests/reference/ngspice/netlists/rc_tree_rotator.cir and
+        // rc_tree_rotator_all.cir, regenerate.sh). The Elmore delay bounds the 50 % delay of an RC tree's step response
+        // from above (R. Gupta, B. Tutuianu, L. T. Pileggi, "The Elmore Delay as a Bound for RC Trees with Generalized
+        // Input Signals", IEEE Trans. CAD 16(1), 1997); the first-order 0.69 · T is within 10 % of the simulated t50.
+        var t50 = NgspiceReference.TreeT50("rc_tree_rotator", "x") * 1e12;
+        var elmore = Figures.Ps(RunInto(Rotator(invertedSelects: true), "L0").ElmoreDelay);
+        Assert.True(elmore >= t50, $"Elmore {elmore} ps below simulated t50 {t50} ps");
+        Assert.InRange(0.69 * elmore / t50, 0.90, 1.10);
+
+        // Counting the inverse-select branches as conducting describes a different, slower circuit: its own t50 is
+        // 603 ps, far from the 347 ps the rotator really has.
+        var allT50 = NgspiceReference.TreeT50("rc_tree_rotator_all", "xa") * 1e12;
+        var allElmore = Figures.Ps(RunInto(Rotator(invertedSelects: false), "L0").ElmoreDelay);
+        Assert.True(allElmore >= allT50);
+        Assert.InRange(0.69 * allElmore / allT50, 0.90, 1.10);
+        Assert.True(allT50 > 1.5 * t50);
+    }
+}
+
+/// <summary>A decoder-driven one-hot barrel shifter: stating the decoded selects exclusive leaves one branch on each
+/// sampled bit.</summary>
+public class OneHotShifterLoadTests
+{
+    private static (Netlist Netlist, Device Gate) Shifter(bool stated)
+    {
+        var c = Figures.NewCircuit("shifter");
+        var a0 = c.Input("a0");
+        var a1 = c.Input("a1");
+        var na0 = c.Inverter(a0);
+        var na1 = c.Inverter(a1);
+        var rotate = new[] { c.Nor(a1, a0), c.Nor(a1, na0), c.Nor(na1, a0), c.Nor(na1, na0) };
+        if (stated) c.Exclusive(rotate);
+        var bits = Enumerable.Range(0, 4).Select(i => c.Inverter(c.Input("d" + i))).ToArray();
+        for (var j = 0; j < 4; j++)
+        {
+            var bit = c.Node("out" + j);
+            for (var k = 0; k < 4; k++)
+                c.TransmissionGate(bits[(j - k + 4) % 4], rotate[k], bit);
+            c.Inverter(bit);
+        }
+
+        var netlist = c.ToNetlist();
+        return (netlist, netlist.Devices.First(d => d.IsPassDevice));
+    }
+
+    [Fact]
+    public void Stated_one_hot_selects_leave_one_branch_on_each_bit()
+    {
+        // Each bit's net (10 fF, flat test figures) feeds four gates, each into an output net of 10 fF read by an
+        // inverter. Its driver sees 10 + 10 fF with one select on (the other three branches off), 10 + 4 · 10 fF when
+        // the selects are not known to be exclusive (and then says it assumes so).
+        var (stated, gate) = Shifter(stated: true);
+        var network = new PassGateNetwork(stated);
+        Assert.Equal(20.0, network.RootLoad(gate).Farads * 1e15, 9);
+        Assert.False(network.RootLoadAssumes(gate));
+
+        var (unstated, first) = Shifter(stated: false);
+        var all = new PassGateNetwork(unstated);
+        Assert.Equal(50.0, all.RootLoad(first).Farads * 1e15, 9);
+        Assert.True(all.RootLoadAssumes(first));
+    }
+}
