@@ -23,7 +23,7 @@ public static class RuleTexts
     public const string ClockGateEnableMessage =
         "Clock gate '{0}' passes clock '{1}' during {2} (while it is {3}), but its enable '{4}' can change {5}: the gated clock can be clipped or get an extra pulse";
     public const string ClockGateEnableFromLatch = "during {0} (from latch '{1}', transparent in {2}, through a {3} path)";
-    public const string ClockGateEnableUnrelated = "at any time (from latch '{0}', transparent in {1}, whose root clock is not '{2}')";
+    public const string ClockGateEnableUnrelated = "at any time (from latch '{0}', transparent in {1}, whose clock has no fixed time relation to '{2}')";
     public const string ClockGateEnableFromInput = "at any time (from primary input '{0}', taken as changing at any time by phaseward.clock_gate_inputs_may_change)";
     public const string ClockGateEnableDescription =
         "A clock gate that stops low passes its clock while the clock is high; if its enable changes then, the gated clock gets a clipped or an extra pulse. The enable must come, through logic, from storage transparent only while the clock is low, and arrive (latest data through that storage plus the path) before the clock rises; the mirror holds for a gate that stops high. Primary inputs are taken as stable unless phaseward.clock_gate_inputs_may_change is true. Latch the enable on the phase in which the gate blocks the clock.";

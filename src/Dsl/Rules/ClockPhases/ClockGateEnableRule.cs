@@ -11,14 +11,14 @@ namespace Phaseward;
 /// latch opens until its data has passed (the latest arrival after opening, <see cref="LatchBorrowing"/>) plus the
 /// latch's entry delay and the slowest path to the enable; that interval must lie inside the phase in which the gate
 /// blocks the clock. Primary inputs are taken as stable unless <see cref="RulePolicy.EnablesFromInputsMayChange"/>.
-/// Storage on an unrelated root clock can change at any time.
+/// Storage on a clock with no fixed time relation to the gate's (see <see cref="TimeBase"/>) can change at any time.
 /// </summary>
 /// <remarks>
 /// The condition — latch a clock gate's enable on the phase in which the gate blocks the clock, so the enable is
 /// steady while the clock passes — is common practice for glitch-free clock gating. Windows are nominal edges on the
-/// root clock's period (time 0 = its rising edge); delays are first-order 0.69·R·C stages. One finding per gate (the
-/// first storage that breaks the condition), at the gate's call. The search of each gate's enable stops at storage and
-/// inputs: its cost is the enable's fan-in logic.
+/// design's time base, compared over the two clocks' common cycle; delays are first-order 0.69·R·C stages. One
+/// finding per gate (the first storage that breaks the condition), at the gate's call. The search of each gate's
+/// enable stops at storage and inputs: its cost is the enable's fan-in logic.
 /// </remarks>
 public sealed class ClockGateEnableRule : Rule
 {
@@ -45,9 +45,9 @@ public sealed class ClockGateEnableRule : Rule
                 if (origin.Latch is { } latch)
                 {
                     var phase = latch.Phase;
-                    if (!ReferenceEquals(phase.Clock.Root, source.Root))
+                    if (TimeBase.CommonCycle(phase.Clock, source) is not { } cycle)
                     {
-                        changes = Format(RuleTexts.ClockGateEnableUnrelated, latch.Name, phase.Name, source.Root.Name);
+                        changes = Format(RuleTexts.ClockGateEnableUnrelated, latch.Name, phase.Name, source.Name);
                     }
                     else
                     {
@@ -55,7 +55,7 @@ public sealed class ClockGateEnableRule : Rule
                         borrow.TryGetValue(latch.Index, out var late);
                         var until = opens + late + model.EntryDelay(latch) + origin.Delay;
                         change = new TimeInterval(opens, until);
-                        if (!Overlaps(change.Value, passes, source.Root.Period))
+                        if (!Overlaps(change.Value, phase.Clock.Period, passes, source.Period, cycle))
                             continue;
                         changes = Format(RuleTexts.ClockGateEnableFromLatch, Interval(change.Value), latch.Name, phase.Name, origin.Delay);
                     }
@@ -78,8 +78,10 @@ public sealed class ClockGateEnableRule : Rule
                     [ClockGateProperties.PassStartSeconds] = DynamicStorageProperties.Number(passes.Start.Seconds),
                     [ClockGateProperties.PassEndSeconds] = DynamicStorageProperties.Number(passes.End.Seconds),
                 };
-                if (origin.Latch is { } source1)
-                    properties[ClockGateProperties.Storage] = source1.Name;
+                if (origin.Latch is { } storage)
+                    properties[ClockGateProperties.Storage] = storage.Name;
+                properties[ClockGateProperties.Origin] = origin.Latch is null ? ClockGateProperties.FromInput
+                    : change is null ? ClockGateProperties.FromUnrelatedClock : ClockGateProperties.FromLatch;
                 if (change is { } c)
                 {
                     properties[ClockGateProperties.ChangeStartSeconds] = DynamicStorageProperties.Number(c.Start.Seconds);
@@ -95,27 +97,40 @@ public sealed class ClockGateEnableRule : Rule
         }
     }
 
-    /// <summary>When the gate passes its source clock, on the root's period: the source's high time for a gate that
-    /// stops low, its low time for one that stops high.</summary>
+    /// <summary>When the gate passes its source clock, on the design's time base (start within the source's period):
+    /// the source's high time for a gate that stops low, its low time for one that stops high.</summary>
     internal static TimeInterval PassInterval(Clock gate, Clock source)
     {
-        var rise = source.DelayFromRoot;
         var high = source.Period * source.Duty;
-        return gate.StopLevel == ClockStopLevel.Low ? new TimeInterval(rise, rise + high) : new TimeInterval(rise + high, rise + source.Period);
+        var start = gate.StopLevel == ClockStopLevel.Low ? source.RisingEdge : source.RisingEdge + high;
+        var length = gate.StopLevel == ClockStopLevel.Low ? high : source.Period - high;
+        var wrapped = start.Seconds % source.Period.Seconds;
+        var opens = new Time(wrapped < 0 ? wrapped + source.Period.Seconds : wrapped);
+        return new TimeInterval(opens, opens + length);
     }
 
-    /// <summary>True when the two intervals (each shorter than a period) meet on the circle of the period.</summary>
-    internal static bool Overlaps(TimeInterval a, TimeInterval b, Time period)
+    /// <summary>
+    /// True when interval <paramref name="a"/>, repeating every <paramref name="periodA"/>, meets <paramref name="b"/>,
+    /// repeating every <paramref name="periodB"/>, anywhere in their common <paramref name="cycle"/>. Intervals that
+    /// only touch do not meet (edges entered as decimal figures are compared with a small tolerance).
+    /// </summary>
+    internal static bool Overlaps(TimeInterval a, Time periodA, TimeInterval b, Time periodB, Time cycle)
     {
-        if (a.Length >= period || b.Length >= period)
+        if (a.Length >= periodA || b.Length >= periodB)
             return true;
-        var p = period.Seconds;
-        for (var shift = -2; shift <= 2; shift++)
+        var tolerance = 1e-9 * cycle.Seconds;
+        var repeatsA = System.Math.Max(1, (int)System.Math.Round(cycle.Seconds / periodA.Seconds));
+        var repeatsB = System.Math.Max(1, (int)System.Math.Round(cycle.Seconds / periodB.Seconds));
+        for (var i = -1; i <= repeatsA; i++)
         {
-            var start = System.Math.Max(a.Start.Seconds, b.Start.Seconds + shift * p);
-            var end = System.Math.Min(a.End.Seconds, b.End.Seconds + shift * p);
-            if (end > start)
-                return true;
+            var startA = a.Start.Seconds + i * periodA.Seconds;
+            var endA = startA + a.Length.Seconds;
+            for (var j = -1; j <= repeatsB; j++)
+            {
+                var startB = b.Start.Seconds + j * periodB.Seconds;
+                if (System.Math.Min(endA, startB + b.Length.Seconds) - System.Math.Max(startA, startB) > tolerance)
+                    return true;
+            }
         }
 
         return false;
@@ -249,6 +264,14 @@ public static class ClockGateProperties
 
     /// <summary>"High" or "Low": the blocking phase's polarity.</summary>
     public const string BlockingPolarity = "BlockingPolarity";
+
+    /// <summary>Where the enable comes from: <see cref="FromLatch"/>, <see cref="FromUnrelatedClock"/> (a latch whose clock
+    /// has no fixed time relation to the gate's: a synchronizer's business, not a latch's) or <see cref="FromInput"/>.</summary>
+    public const string Origin = "Origin";
+
+    public const string FromLatch = "Latch";
+    public const string FromUnrelatedClock = "UnrelatedClock";
+    public const string FromInput = "Input";
 
     public const string PassStartSeconds = "PassStartSeconds";
     public const string PassEndSeconds = "PassEndSeconds";
