@@ -42,6 +42,7 @@ public sealed class ClockGateEnableRule : Rule
             {
                 string changes;
                 TimeInterval? change = null;
+                var opensWhilePassing = false;
                 if (origin.Latch is { } latch)
                 {
                     var phase = latch.Phase;
@@ -57,6 +58,9 @@ public sealed class ClockGateEnableRule : Rule
                         change = new TimeInterval(opens, until);
                         if (!Overlaps(change.Value, phase.Clock.Period, passes, source.Period, cycle))
                             continue;
+                        // Data already waiting when the latch opens passes within its entry delay: if that falls while the
+                        // gate passes the clock, the storage is on the wrong phase (not merely slow to reach the gate).
+                        opensWhilePassing = Overlaps(new TimeInterval(opens, opens + model.EntryDelay(latch)), phase.Clock.Period, passes, source.Period, cycle);
                         changes = Format(RuleTexts.ClockGateEnableFromLatch, Interval(change.Value), latch.Name, phase.Name, origin.Delay);
                     }
                 }
@@ -82,6 +86,8 @@ public sealed class ClockGateEnableRule : Rule
                     properties[ClockGateProperties.Storage] = storage.Name;
                 properties[ClockGateProperties.Origin] = origin.Latch is null ? ClockGateProperties.FromInput
                     : change is null ? ClockGateProperties.FromUnrelatedClock : ClockGateProperties.FromLatch;
+                if (change is not null)
+                    properties[ClockGateProperties.OpensWhilePassing] = opensWhilePassing ? "true" : "false";
                 if (change is { } c)
                 {
                     properties[ClockGateProperties.ChangeStartSeconds] = DynamicStorageProperties.Number(c.Start.Seconds);
@@ -272,6 +278,10 @@ public static class ClockGateProperties
     public const string FromLatch = "Latch";
     public const string FromUnrelatedClock = "UnrelatedClock";
     public const string FromInput = "Input";
+
+    /// <summary>For an enable from a latch: "true" when the latch opens while the gate passes the clock (it is on the
+    /// wrong phase: latching the enable on the blocking phase fixes it), "false" when only the path after it is too slow.</summary>
+    public const string OpensWhilePassing = "OpensWhilePassing";
 
     public const string PassStartSeconds = "PassStartSeconds";
     public const string PassEndSeconds = "PassEndSeconds";

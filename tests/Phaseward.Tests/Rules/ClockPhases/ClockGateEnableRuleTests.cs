@@ -41,6 +41,7 @@ public class ClockGateEnableRuleTests
         Assert.Equal(netlist.Clock("gclk").Span, finding.Location);
         Assert.Equal("clk.Low", finding.Properties[ClockGateProperties.BlockingPhase]);
         Assert.Equal("en_reg.slave", finding.Properties[ClockGateProperties.Storage]);
+        Assert.Equal("true", finding.Properties[ClockGateProperties.OpensWhilePassing]);
     }
 
     [Fact]
@@ -84,6 +85,7 @@ public class ClockGateEnableRuleTests
             c.ClockGate(clk, en, name: "gclk");
         }));
         Assert.Contains("can change during [500 ps, 1.09 ns) (from latch 'en_latch', transparent in clk.Low, through a 552 ps path)", finding.Message);
+        Assert.Equal("false", finding.Properties[ClockGateProperties.OpensWhilePassing]); // the right latch: only the path is slow
     }
 
     [Fact]
