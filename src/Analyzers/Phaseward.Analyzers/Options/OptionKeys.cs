@@ -11,4 +11,5 @@ internal static class OptionKeys
     public const string MinimumRaceMargin = "phaseward.min_race_margin";
     public const string MinimumTimingSlack = "phaseward.min_timing_slack";
     public const string KeeperWriteMargin = "phaseward.keeper_write_margin";
+    public const string ClockGateInputsMayChange = "phaseward.clock_gate_inputs_may_change";
 }

@@ -16,6 +16,7 @@ internal static class RulePolicyReader
             MaxSeriesPassGates = reader.OptionalInteger(OptionKeys.MaxSeriesPassGates, 1, 10_000),
             MinimumRaceMargin = reader.Duration(OptionKeys.MinimumRaceMargin, RulePolicy.Default.MinimumRaceMargin),
             MinimumTimingSlack = reader.Duration(OptionKeys.MinimumTimingSlack, RulePolicy.Default.MinimumTimingSlack),
+            EnablesFromInputsMayChange = reader.Boolean(OptionKeys.ClockGateInputsMayChange, RulePolicy.Default.EnablesFromInputsMayChange),
             KeeperWriteMargin = reader.Number(OptionKeys.KeeperWriteMargin, RulePolicy.Default.KeeperWriteMargin, 0, 0.5),
         };
     }
