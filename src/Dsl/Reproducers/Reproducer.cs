@@ -14,14 +14,14 @@ public static class Reproducer
 {
     private static readonly Dictionary<string, Func<Finding, Netlist, SpiceDeck>> Builders = new(StringComparer.Ordinal)
     {
-        [RuleIds.SameWindowLatches] = LatchPairDeck.Build,
-        [RuleIds.OverlapRace] = LatchPairDeck.Build,
-        [RuleIds.SeriesPassGates] = PassGateChainDeck.Build,
-        [RuleIds.DynamicNodeOnGatedClock] = RetentionDeck.Build,
-        [RuleIds.ClockTooSlowForDynamicStorage] = RetentionDeck.Build,
-        [RuleIds.ChargeSharing] = ChargeSharingDeck.Build,
-        [RuleIds.RegisterSetup] = RegisterPathDeck.Build,
-        [RuleIds.RegisterHold] = RegisterPathDeck.Build,
+        [RuleCatalog.SameWindowLatches.Id] = LatchPairDeck.Build,
+        [RuleCatalog.OverlapRace.Id] = LatchPairDeck.Build,
+        [RuleCatalog.SeriesPassGates.Id] = PassGateChainDeck.Build,
+        [RuleCatalog.DynamicNodeOnGatedClock.Id] = RetentionDeck.Build,
+        [RuleCatalog.ClockTooSlowForDynamicStorage.Id] = RetentionDeck.Build,
+        [RuleCatalog.ChargeSharing.Id] = ChargeSharingDeck.Build,
+        [RuleCatalog.RegisterSetup.Id] = RegisterPathDeck.Build,
+        [RuleCatalog.RegisterHold.Id] = RegisterPathDeck.Build,
     };
 
     /// <summary>The rule IDs whose findings have a deck.</summary>

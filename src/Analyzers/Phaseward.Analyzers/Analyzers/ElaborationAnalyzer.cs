@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 using Phaseward.Analyzers.Diagnostics;
+using Phaseward.Checking;
 
 namespace Phaseward.Analyzers;
 
@@ -13,12 +14,13 @@ namespace Phaseward.Analyzers;
 public sealed class ElaborationAnalyzer : PhasewardAnalyzer
 {
     public override ImmutableArray<DiagnosticDescriptor> SupportedDiagnostics { get; } = ImmutableArray.Create(
-        Descriptors.NotElaborated, Descriptors.ElaborationBudgetExceeded, Descriptors.DesignThrows, Descriptors.InvalidOption);
+        Descriptors.Of(RuleCatalog.NotElaborated), Descriptors.Of(RuleCatalog.ElaborationBudgetExceeded),
+        Descriptors.Of(RuleCatalog.DesignThrows), Descriptors.Of(RuleCatalog.InvalidOption));
 
     internal override void AnalyzeDesign(DesignAnalysisContext context)
     {
         foreach (var problem in context.Options.Problems)
-            context.Report(Diagnostic.Create(Descriptors.InvalidOption, context.Design.AnchorLocation,
+            context.Report(Diagnostic.Create(Descriptors.Of(RuleCatalog.InvalidOption), context.Design.AnchorLocation,
                 problem.Key, problem.Value, problem.Expected, problem.DefaultValue));
 
         foreach (var issue in context.Elaboration.Issues)
