@@ -42,7 +42,7 @@ public class NotElaboratedTests
     [Fact]
     public Task EachConstructOutsideTheSubsetIsReportedOnce()
         => new PhasewardAnalyzerTest<ElaborationAnalyzer>(Source,
-                Enumerable.Range(0, 5).Select(i => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Info).WithLocation(i)).ToArray())
+                Enumerable.Range(0, 5).Select(i => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(i)).ToArray())
             .RunAsync();
 
     [Fact]
@@ -76,7 +76,7 @@ public class NotElaboratedTests
                         c.Inverter(a, {|#0:Guid.NewGuid()|}.ToString());
                 }
             }
-            """, new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Info).WithLocation(0)).RunAsync();
+            """, new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(0)).RunAsync();
 
     [Fact]
     public Task SilentWithoutTheDsl()
@@ -310,6 +310,31 @@ public class InvalidOptionTests
             """,
             new DiagnosticResult(RuleCatalog.InvalidOption.Id, DiagnosticSeverity.Warning).WithLocation(0).WithArguments(key, value, expected, fallback))
             .WithEditorConfig(key + " = " + value)
+            .RunAsync();
+
+    [Fact]
+    public Task ABadValueIsReportedOncePerFileHoweverManyDesignsItHolds()
+        => new PhasewardAnalyzerTest<ElaborationAnalyzer>("""
+            using Phaseward;
+
+            public sealed class First : Design
+            {
+                protected override void {|#0:Describe|}(Circuit c) => c.Inverter(c.Input("a"));
+            }
+
+            public sealed class Second : Design
+            {
+                protected override void Describe(Circuit c) => c.Inverter(c.Input("b"));
+            }
+
+            public sealed class Third : Design
+            {
+                protected override void Describe(Circuit c) => c.Inverter(c.Input("c"));
+            }
+            """,
+            new DiagnosticResult(RuleCatalog.InvalidOption.Id, DiagnosticSeverity.Warning).WithLocation(0)
+                .WithArguments("phaseward.elaboration_recursion_limit", "deep", "a whole number from 1 to 512 (for example 64)", "64"))
+            .WithEditorConfig("phaseward.elaboration_recursion_limit = deep")
             .RunAsync();
 
     [Fact]

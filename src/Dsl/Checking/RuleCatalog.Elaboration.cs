@@ -5,7 +5,7 @@ public static partial class RuleCatalog
 {
     /// <summary>Part of a design could not be elaborated at compile time (outside the supported subset).</summary>
     public static RuleDescriptor NotElaborated { get; } = new(
-        "PW9001", RuleFamily.Elaboration, Severity.Info,
+        "PW9001", RuleFamily.Elaboration, Severity.Warning,
         title: "Part of the design could not be elaborated at compile time",
         messageFormat: "Phaseward could not elaborate {0} here: {1}; what depends on it is skipped and the rest of design '{2}' "
             + "is still checked",
