@@ -36,7 +36,6 @@ public sealed class ClockGateEnableRule : Rule
                 continue;
 
             model ??= LatchModel.Of(netlist);
-            borrow ??= BorrowByLatch(model);
             var passes = PassInterval(gate, source);
             foreach (var origin in EnableOrigins.Of(netlist, model, enable))
             {
@@ -53,6 +52,7 @@ public sealed class ClockGateEnableRule : Rule
                     else
                     {
                         var opens = PhaseWindow.Of(phase).Opens;
+                        borrow ??= BorrowByLatch(model); // the whole design's latch timing: only once an enable comes from a latch
                         borrow.TryGetValue(latch.Index, out var late);
                         var until = opens + late + model.EntryDelay(latch) + origin.Delay;
                         change = new TimeInterval(opens, until);
