@@ -18,6 +18,8 @@ public static class Reproducer
         [RuleIds.DynamicNodeOnGatedClock] = RetentionDeck.Build,
         [RuleIds.ClockTooSlowForDynamicStorage] = RetentionDeck.Build,
         [RuleIds.ChargeSharing] = ChargeSharingDeck.Build,
+        [RuleIds.FightingDrivers] = FightingDriversDeck.Build,
+        [RuleIds.KeeperTooStrong] = KeeperWriteDeck.Build,
         [RuleIds.RegisterSetup] = RegisterPathDeck.Build,
         [RuleIds.RegisterHold] = RegisterPathDeck.Build,
     };
