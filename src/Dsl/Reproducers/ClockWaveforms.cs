@@ -65,6 +65,9 @@ internal sealed class ClockWaveforms
         return node;
     }
 
+    /// <summary>The node of the clock's own waveform (not a phase's conduction).</summary>
+    public string ClockNode(Clock clock) => Draw(clock).Clock;
+
     private (string Clock, string Complement) Draw(Clock clock)
     {
         if (drawn.TryGetValue(clock, out var nodes)) return nodes;

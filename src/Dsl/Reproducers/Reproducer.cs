@@ -14,6 +14,7 @@ public static class Reproducer
     {
         [RuleIds.SameWindowLatches] = LatchPairDeck.Build,
         [RuleIds.OverlapRace] = LatchPairDeck.Build,
+        [RuleIds.ClockGateEnable] = ClockGateDeck.Build,
         [RuleIds.LoopWithoutStorage] = LoopDeck.Build,
         [RuleIds.SeriesPassGates] = PassGateChainDeck.Build,
         [RuleIds.DynamicNodeOnGatedClock] = RetentionDeck.Build,
