@@ -24,6 +24,7 @@ public static class Reproducer
         [RuleIds.KeeperTooStrong] = KeeperWriteDeck.Build,
         [RuleIds.RegisterSetup] = RegisterPathDeck.Build,
         [RuleIds.RegisterHold] = RegisterPathDeck.Build,
+        [RuleIds.LatchWriteWindow] = LatchWriteWindowDeck.Build,
     };
 
     /// <summary>The rule IDs whose findings have a deck.</summary>
