@@ -1,4 +1,5 @@
 using System.IO;
+using Phaseward.Checking;
 using Quorvane;
 using static Phaseward.Cli.Tests.CliRun;
 

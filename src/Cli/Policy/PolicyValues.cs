@@ -1,5 +1,6 @@
 using System;
 using System.Globalization;
+using Phaseward.Checking;
 
 namespace Phaseward.Cli.Policy;
 

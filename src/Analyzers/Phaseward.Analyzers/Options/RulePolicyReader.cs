@@ -1,3 +1,5 @@
+using Phaseward.Checking;
+
 namespace Phaseward.Analyzers.Options;
 
 /// <summary>
