@@ -1,5 +1,9 @@
 using System;
 using System.Collections.Generic;
+using Phaseward.Checking;
+using Phaseward.Netlists;
+using Phaseward.Rules.ClockPhases;
+using Phaseward.Sequencing;
 
 namespace Phaseward.Reproducers;
 

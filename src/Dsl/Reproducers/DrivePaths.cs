@@ -1,4 +1,7 @@
 using System;
+using Phaseward.Checking;
+using Phaseward.Electrical;
+using Phaseward.Netlists;
 
 namespace Phaseward.Reproducers;
 

@@ -1,6 +1,9 @@
 using System;
 using System.Collections.Generic;
 using System.Globalization;
+using Phaseward.Checking;
+using Phaseward.Netlists;
+using Phaseward.Rules.ClockPhases;
 
 namespace Phaseward.Reproducers;
 
