@@ -26,6 +26,7 @@ public static class Reproducer
         [RuleIds.KeeperTooStrong] = KeeperWriteDeck.Build,
         [RuleIds.RegisterSetup] = RegisterPathDeck.Build,
         [RuleIds.RegisterHold] = RegisterPathDeck.Build,
+        [RuleIds.LatchBorrowing] = LatchBorrowingDeck.Build,
         [RuleIds.LatchWriteWindow] = LatchWriteWindowDeck.Build,
     };
 
