@@ -16,6 +16,7 @@ public static class Reproducer
     {
         [RuleIds.SameWindowLatches] = LatchPairDeck.Build,
         [RuleIds.OverlapRace] = LatchPairDeck.Build,
+        [RuleIds.ClockCrossing] = ClockCrossingDeck.Build,
         [RuleIds.ClockGateEnable] = ClockGateDeck.Build,
         [RuleIds.LoopWithoutStorage] = LoopDeck.Build,
         [RuleIds.SeriesPassGates] = PassGateChainDeck.Build,
