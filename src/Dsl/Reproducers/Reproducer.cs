@@ -29,6 +29,7 @@ public static class Reproducer
         [RuleIds.RegisterHold] = RegisterPathDeck.Build,
         [RuleIds.LatchBorrowing] = LatchBorrowingDeck.Build,
         [RuleIds.LatchWriteWindow] = LatchWriteWindowDeck.Build,
+        [RuleIds.LatchLoop] = LatchLoopDeck.Build,
     };
 
     /// <summary>The rule IDs whose findings have a deck.</summary>
