@@ -29,6 +29,8 @@ public static class Program
             new MooringHoldWeakKeeper(),
             new TelemetryBus(),
             new TelemetryBusSelected(),
+            new BurstGate(),
+            new BurstGateLatched(),
         };
 
         var findings = 0;

@@ -42,6 +42,8 @@ public sealed class OptionParityTests : IDisposable
     [InlineData("phaseward.keeper_write_margin", "0.25", "0.25")]
     [InlineData("phaseward.keeper_write_margin", "0.5", "invalid")]
     [InlineData("phaseward.keeper_write_margin", "-0.1", "invalid")]
+    [InlineData("phaseward.clock_gate_inputs_may_change", "True", "True")]
+    [InlineData("phaseward.clock_gate_inputs_may_change", "yes", "invalid")]
     public void AnalyzersAndReportReadAnOptionAlike(string key, string value, string expected)
     {
         var config = Path.Combine(directory, ".editorconfig");
@@ -101,13 +103,14 @@ public sealed class OptionParityTests : IDisposable
 
     private static string Show(RulePolicy p) => string.Join(" ", p.MaxSeriesPassGates?.ToString(CultureInfo.InvariantCulture) ?? "computed",
         p.MinimumRaceMargin.Seconds.ToString("R", CultureInfo.InvariantCulture), p.MinimumTimingSlack.Seconds.ToString("R", CultureInfo.InvariantCulture),
-        p.KeeperWriteMargin.ToString("R", CultureInfo.InvariantCulture));
+        p.KeeperWriteMargin.ToString("R", CultureInfo.InvariantCulture), p.EnablesFromInputsMayChange);
 
     private static string Read(RulePolicy p, string key) => key switch
     {
         "phaseward.max_series_pass_gates" => p.MaxSeriesPassGates?.ToString(CultureInfo.InvariantCulture) ?? "computed",
         "phaseward.min_race_margin" => p.MinimumRaceMargin.Seconds.ToString("G12", CultureInfo.InvariantCulture),
         "phaseward.min_timing_slack" => p.MinimumTimingSlack.Seconds.ToString("G12", CultureInfo.InvariantCulture),
+        "phaseward.clock_gate_inputs_may_change" => p.EnablesFromInputsMayChange.ToString(),
         _ => p.KeeperWriteMargin.ToString("R", CultureInfo.InvariantCulture),
     };
 

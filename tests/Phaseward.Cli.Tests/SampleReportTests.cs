@@ -207,7 +207,7 @@ public sealed class SampleReportTests : IDisposable
         new PressureSampler(), new BurstCapture(), new BurstCaptureStatic(), new ChannelSelect(), new ChannelSelectBuffered(),
         new TideAverager(), new TideAveragerTwoPhase(), new Housekeeping(), new HousekeepingStatic(), new StrainLanes(),
         new WakeLogic(), new WakeLogicRegistered(), new MooringHold(), new MooringHoldWeakKeeper(),
-        new TelemetryBus(), new TelemetryBusSelected(),
+        new TelemetryBus(), new TelemetryBusSelected(), new BurstGate(), new BurstGateLatched(),
         new TwoPhaseTally(), new RadioHandoff(), new RadioHandoffSynchronized(),
     };
 
@@ -220,6 +220,17 @@ public sealed class SampleReportTests : IDisposable
         Assert.Equal(RuleIds.ClockCrossing, crossing.RuleId);
         Assert.Contains("'tx' on clock 'radio' takes data from latch 'sample.slave' on clock 'sensor'", crossing.Message);
         Assert.Empty(new RadioHandoffSynchronized().Check().Findings);
+    }
+
+    [Fact]
+    public void TheBurstGateSampleShowsPw1004AndTheLatchedEnableFixesIt()
+    {
+        // The arming register's slave opens on the rising edge, while the gate passes the 10 ns sample clock (high over [0, 5 ns)).
+        var gate = Assert.Single(new BurstGate().Check().Findings);
+        Assert.Equal(RuleIds.ClockGateEnable, gate.RuleId);
+        Assert.Contains("Clock gate 'burst' passes clock 'sample' during [0 s, 5 ns) (while it is high), but its enable 'burst_armed' can change during [0 s, ", gate.Message);
+        Assert.Contains("(from latch 'burst_armed.slave', transparent in sample.High", gate.Message);
+        Assert.Empty(new BurstGateLatched().Check().Findings);
     }
 
     [Fact]

@@ -12,6 +12,9 @@ public static class EquivalenceKeys
     // PW1003
     public const string InsertSynchronizer = Prefix + "PW1003.InsertSynchronizer";
 
+    // PW1004
+    public const string LatchClockGateEnable = Prefix + "PW1004.LatchClockGateEnable";
+
     // PW2001
     public const string InsertRestoringBuffer = Prefix + "PW2001.InsertRestoringBuffer";
     public const string InsertRestoringInverter = Prefix + "PW2001.InsertRestoringInverter";

@@ -31,6 +31,10 @@ public static class RuleCatalog
     public static RuleDescriptor ClockCrossing { get; } = new(
         RuleIds.ClockCrossing, RuleTexts.ClockCrossingTitle, RuleTexts.ClockCrossingMessage, RuleCategories.ClockPhases, Severity.Warning, RuleTexts.ClockCrossingDescription);
 
+    public static RuleDescriptor ClockGateEnable { get; } = new(
+        RuleIds.ClockGateEnable, RuleTexts.ClockGateEnableTitle, RuleTexts.ClockGateEnableMessage, RuleCategories.ClockPhases, Severity.Warning,
+        RuleTexts.ClockGateEnableDescription);
+
     public static RuleDescriptor LoopWithoutStorage { get; } = new(
         RuleIds.LoopWithoutStorage, RuleTexts.LoopWithoutStorageTitle, RuleTexts.LoopWithoutStorageMessage, RuleCategories.ClockPhases, Severity.Warning,
         RuleTexts.LoopWithoutStorageDescription);
@@ -78,6 +82,7 @@ public static class RuleCatalog
         SameWindowLatches,
         OverlapRace,
         ClockCrossing,
+        ClockGateEnable,
         LoopWithoutStorage,
         RegisterSetup,
         RegisterHold,

@@ -16,6 +16,9 @@ public static class RuleIds
     /// <summary>Data crosses between clocks with no fixed time relation without a synchronizer.</summary>
     public const string ClockCrossing = "PW1003";
 
+    /// <summary>A clock gate's enable can change while the gate passes the clock.</summary>
+    public const string ClockGateEnable = "PW1004";
+
     /// <summary>A feedback loop through restoring stages and data-controlled pass gates with no latch on it.</summary>
     public const string LoopWithoutStorage = "PW1005";
 

@@ -14,6 +14,13 @@ public sealed class RulePolicy
     private readonly int? maxSeriesPassGates;
     private readonly double keeperWriteMargin = 0.1;
 
+    /// <summary>
+    /// PW1004: false (default) takes a clock gate's enable that comes from a primary input as stable (the outside world
+    /// changes it only while the gate blocks the clock); true takes it as changing at any time.
+    /// Key <c>phaseward.clock_gate_inputs_may_change</c>.
+    /// </summary>
+    public bool EnablesFromInputsMayChange { get; init; }
+
     public static RulePolicy Default { get; } = new();
 
     /// <summary>

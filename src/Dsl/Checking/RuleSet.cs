@@ -10,6 +10,7 @@ public static class RuleSet
         new SameWindowLatchesRule(),
         new OverlapRaceRule(),
         new ClockCrossingRule(),
+        new ClockGateEnableRule(),
         new LoopWithoutStorageRule(),
         new RegisterTimingRule(),
         new LatchBorrowingRule(),

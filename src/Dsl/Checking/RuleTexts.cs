@@ -19,6 +19,15 @@ public static class RuleTexts
     public const string ClockCrossingMessage = "'{0}' on clock '{1}' takes data from latch '{2}' on clock '{3}', which has no fixed time relation to it ({4}), without a synchronizer: it can sample the data while it changes and go metastable";
     public const string ClockCrossingDescription = "Data launched by a latch on one clock reaches a storage stage on a clock with no fixed time relation to it (declared independent, or with a period that shares no small common cycle). The receiving stage can sample the data while it changes and go metastable. Put two registers of the receiving clock in series, with no logic between, where the data arrives (a synchronizer), and move multi-bit data with a handshake or a FIFO. Structural check; it does not estimate the mean time between failures.";
 
+    public const string ClockGateEnableTitle = "Clock gate's enable can change while the gate passes the clock";
+    public const string ClockGateEnableMessage =
+        "Clock gate '{0}' passes clock '{1}' during {2} (while it is {3}), but its enable '{4}' can change {5}: the gated clock can be clipped or get an extra pulse";
+    public const string ClockGateEnableFromLatch = "during {0} (from latch '{1}', transparent in {2}, through a {3} path)";
+    public const string ClockGateEnableUnrelated = "at any time (from latch '{0}', transparent in {1}, whose clock has no fixed time relation to '{2}')";
+    public const string ClockGateEnableFromInput = "at any time (from primary input '{0}', taken as changing at any time by phaseward.clock_gate_inputs_may_change)";
+    public const string ClockGateEnableDescription =
+        "A clock gate that stops low passes its clock while the clock is high; if its enable changes then, the gated clock gets a clipped or an extra pulse. The enable must come, through logic, from storage transparent only while the clock is low, and arrive (latest data through that storage plus the path) before the clock rises; the mirror holds for a gate that stops high. Primary inputs are taken as stable unless phaseward.clock_gate_inputs_may_change is true. Latch the enable on the phase in which the gate blocks the clock.";
+
     public const string LoopWithoutStorageTitle = "Feedback loop with no storage element";
     public const string LoopWithoutStorageMessage = "A feedback loop of {0} devices has no latch on it ({1}): {2}";
     public const string LoopWithoutStorageOddLoop = "{0} inversions (odd): enabled, it oscillates with a period of about {1} (twice the loop's delay {2})";

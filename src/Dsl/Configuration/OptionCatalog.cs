@@ -61,10 +61,14 @@ internal static class OptionCatalog
 
     public static PhasewardOption<double> KeeperWriteMargin { get; } = NumberBelow("phaseward.keeper_write_margin", RulePolicy.Default.KeeperWriteMargin, 0, 0.5);
 
+    /// <summary>PW1004: whether a clock gate's enable that comes from a primary input may change at any time.</summary>
+    public static PhasewardOption<bool> ClockGateInputsMayChange { get; } =
+        TrueOrFalse("phaseward.clock_gate_inputs_may_change", RulePolicy.Default.EnablesFromInputsMayChange);
+
     public static IReadOnlyList<PhasewardOption> All { get; } = new PhasewardOption[]
     {
         ElaborationStepBudget, ElaborationRecursionLimit, ElaborationDeviceBudget, ElaborationMemoryBudget,
-        MaxSeriesPassGates, MinimumRaceMargin, MinimumTimingSlack, KeeperWriteMargin,
+        MaxSeriesPassGates, MinimumRaceMargin, MinimumTimingSlack, KeeperWriteMargin, ClockGateInputsMayChange,
     };
 
     /// <summary>The definition of <paramref name="key"/> (any case), or null for a key Phaseward does not know.</summary>
@@ -99,6 +103,10 @@ internal static class OptionCatalog
             text => double.TryParse(text.Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out var value) && value >= min && value < maxExclusive
                 ? (true, value)
                 : (false, defaultValue));
+
+    private static PhasewardOption<bool> TrueOrFalse(string key, bool defaultValue)
+        => new(key, defaultValue, "true or false", defaultValue ? "true" : "false",
+            text => bool.TryParse(text.Trim(), out var value) ? (true, value) : (false, defaultValue));
 
     private static string Text(long value) => value.ToString(CultureInfo.InvariantCulture);
 

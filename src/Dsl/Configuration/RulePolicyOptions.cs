@@ -17,6 +17,7 @@ internal static class RulePolicyOptions
         MaxSeriesPassGates = OptionCatalog.MaxSeriesPassGates.Read(lookup, problems),
         MinimumRaceMargin = OptionCatalog.MinimumRaceMargin.Read(lookup, problems),
         MinimumTimingSlack = OptionCatalog.MinimumTimingSlack.Read(lookup, problems),
+        EnablesFromInputsMayChange = OptionCatalog.ClockGateInputsMayChange.Read(lookup, problems),
         KeeperWriteMargin = OptionCatalog.KeeperWriteMargin.Read(lookup, problems),
     };
 }

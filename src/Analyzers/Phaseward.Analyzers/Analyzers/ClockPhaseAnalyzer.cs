@@ -4,9 +4,9 @@ using Microsoft.CodeAnalysis.Diagnostics;
 
 namespace Phaseward.Analyzers;
 
-/// <summary>PW1xxx: latches transparent in the same window in series, overlap races, unsynchronized clock crossings, loops with no storage.</summary>
+/// <summary>PW1xxx: latches transparent in the same window in series, overlap races, unsynchronized clock crossings, clock-gate enables, loops with no storage.</summary>
 [DiagnosticAnalyzer(LanguageNames.CSharp)]
 public sealed class ClockPhaseAnalyzer : FindingAnalyzer
 {
-    protected override IReadOnlyList<Rule> Rules { get; } = new Rule[] { new SameWindowLatchesRule(), new OverlapRaceRule(), new ClockCrossingRule(), new LoopWithoutStorageRule() };
+    protected override IReadOnlyList<Rule> Rules { get; } = new Rule[] { new SameWindowLatchesRule(), new OverlapRaceRule(), new ClockCrossingRule(), new ClockGateEnableRule(), new LoopWithoutStorageRule() };
 }

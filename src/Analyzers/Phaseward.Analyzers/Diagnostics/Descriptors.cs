@@ -19,6 +19,10 @@ internal static class Descriptors
         RuleIds.ClockCrossing, RuleTexts.ClockCrossingTitle, RuleTexts.ClockCrossingMessage, RuleCategories.ClockPhases,
         DiagnosticSeverity.Warning, RuleTexts.ClockCrossingDescription);
 
+    public static readonly DiagnosticDescriptor ClockGateEnable = DescriptorFactory.Create(
+        RuleIds.ClockGateEnable, RuleTexts.ClockGateEnableTitle, RuleTexts.ClockGateEnableMessage, RuleCategories.ClockPhases,
+        DiagnosticSeverity.Warning, RuleTexts.ClockGateEnableDescription);
+
     public static readonly DiagnosticDescriptor LoopWithoutStorage = DescriptorFactory.Create(
         RuleIds.LoopWithoutStorage, RuleTexts.LoopWithoutStorageTitle, RuleTexts.LoopWithoutStorageMessage, RuleCategories.ClockPhases,
         DiagnosticSeverity.Warning, RuleTexts.LoopWithoutStorageDescription);
@@ -86,6 +90,7 @@ internal static class Descriptors
         SameWindowLatches,
         OverlapRace,
         ClockCrossing,
+        ClockGateEnable,
         LoopWithoutStorage,
         SeriesPassGates,
         DynamicNodeOnGatedClock,

@@ -1,0 +1,290 @@
+using System.Collections.Generic;
+using System.Globalization;
+
+namespace Phaseward;
+
+/// <summary>
+/// PW1004: a clock gate's enable can change while the gate passes the clock. A gate that stops low passes its source
+/// clock while that clock is high, so its enable may change only while the clock is low (the mirror for a gate that
+/// stops high). The enable is traced back through restoring stages and data-controlled pass gates to the storage it
+/// comes from (latches, registers' slaves) and to primary inputs. From a latch it can change from the moment the
+/// latch opens until its data has passed (the latest arrival after opening, <see cref="LatchBorrowing"/>) plus the
+/// latch's entry delay and the slowest path to the enable; that interval must lie inside the phase in which the gate
+/// blocks the clock. Primary inputs are taken as stable unless <see cref="RulePolicy.EnablesFromInputsMayChange"/>.
+/// Storage on a clock with no fixed time relation to the gate's (see <see cref="TimeBase"/>) can change at any time.
+/// </summary>
+/// <remarks>
+/// The condition — latch a clock gate's enable on the phase in which the gate blocks the clock, so the enable is
+/// steady while the clock passes — is common practice for glitch-free clock gating. Windows are nominal edges on the
+/// design's time base, compared over the two clocks' common cycle; delays are first-order 0.69·R·C stages. One
+/// finding per gate (the first storage that breaks the condition), at the gate's call. The search of each gate's
+/// enable stops at storage and inputs: its cost is the enable's fan-in logic.
+/// </remarks>
+public sealed class ClockGateEnableRule : Rule
+{
+    public override IReadOnlyList<RuleDescriptor> Descriptors { get; } = new[] { RuleCatalog.ClockGateEnable };
+
+    public override IEnumerable<Finding> Check(RuleContext context)
+    {
+        var netlist = context.Netlist;
+        LatchModel? model = null;
+        Dictionary<int, Time>? borrow = null;
+        foreach (var gate in netlist.Clocks)
+        {
+            context.CancellationToken.ThrowIfCancellationRequested();
+            if (gate.Kind != ClockKind.Gated || gate.Enable is not { } enable || gate.Source is not { } source)
+                continue;
+
+            model ??= LatchModel.Of(netlist);
+            borrow ??= BorrowByLatch(model);
+            var passes = PassInterval(gate, source);
+            foreach (var origin in EnableOrigins.Of(netlist, model, enable))
+            {
+                string changes;
+                TimeInterval? change = null;
+                var opensWhilePassing = false;
+                if (origin.Latch is { } latch)
+                {
+                    var phase = latch.Phase;
+                    if (TimeBase.CommonCycle(phase.Clock, source) is not { } cycle)
+                    {
+                        changes = Format(RuleTexts.ClockGateEnableUnrelated, latch.Name, phase.Name, source.Name);
+                    }
+                    else
+                    {
+                        var opens = PhaseWindow.Of(phase).Opens;
+                        borrow.TryGetValue(latch.Index, out var late);
+                        var until = opens + late + model.EntryDelay(latch) + origin.Delay;
+                        change = new TimeInterval(opens, until);
+                        if (!Overlaps(change.Value, phase.Clock.Period, passes, source.Period, cycle))
+                            continue;
+                        // Data already waiting when the latch opens passes within its entry delay: if that falls while the
+                        // gate passes the clock, the storage is on the wrong phase (not merely slow to reach the gate).
+                        opensWhilePassing = Overlaps(new TimeInterval(opens, opens + model.EntryDelay(latch)), phase.Clock.Period, passes, source.Period, cycle);
+                        changes = Format(RuleTexts.ClockGateEnableFromLatch, Interval(change.Value), latch.Name, phase.Name, origin.Delay);
+                    }
+                }
+                else
+                {
+                    if (!context.Policy.EnablesFromInputsMayChange)
+                        continue;
+                    changes = Format(RuleTexts.ClockGateEnableFromInput, origin.Input!.Name);
+                }
+
+                var blocks = gate.StopLevel == ClockStopLevel.Low ? source.Low : source.High;
+                var properties = new Dictionary<string, string>
+                {
+                    [ClockGateProperties.GatedClock] = gate.Name,
+                    [ClockGateProperties.SourceClock] = source.Name,
+                    [ClockGateProperties.Enable] = enable.Name,
+                    [ClockGateProperties.BlockingPhase] = blocks.Name,
+                    [ClockGateProperties.BlockingPolarity] = blocks.Polarity.ToString(),
+                    [ClockGateProperties.PassStartSeconds] = DynamicStorageProperties.Number(passes.Start.Seconds),
+                    [ClockGateProperties.PassEndSeconds] = DynamicStorageProperties.Number(passes.End.Seconds),
+                };
+                if (origin.Latch is { } storage)
+                    properties[ClockGateProperties.Storage] = storage.Name;
+                properties[ClockGateProperties.Origin] = origin.Latch is null ? ClockGateProperties.FromInput
+                    : change is null ? ClockGateProperties.FromUnrelatedClock : ClockGateProperties.FromLatch;
+                if (change is not null)
+                    properties[ClockGateProperties.OpensWhilePassing] = opensWhilePassing ? "true" : "false";
+                if (change is { } c)
+                {
+                    properties[ClockGateProperties.ChangeStartSeconds] = DynamicStorageProperties.Number(c.Start.Seconds);
+                    properties[ClockGateProperties.ChangeEndSeconds] = DynamicStorageProperties.Number(c.End.Seconds);
+                }
+
+                var related = origin.Latch is { } l ? new[] { l.Span } : new[] { origin.InputSpan! };
+                yield return new Finding(RuleCatalog.ClockGateEnable, gate.Span,
+                    new object[] { gate.Name, source.Name, Interval(passes), gate.StopLevel == ClockStopLevel.Low ? "high" : "low", enable.Name, changes },
+                    related, properties);
+                break;
+            }
+        }
+    }
+
+    /// <summary>When the gate passes its source clock, on the design's time base (start within the source's period):
+    /// the source's high time for a gate that stops low, its low time for one that stops high.</summary>
+    internal static TimeInterval PassInterval(Clock gate, Clock source)
+    {
+        var high = source.Period * source.Duty;
+        var start = gate.StopLevel == ClockStopLevel.Low ? source.RisingEdge : source.RisingEdge + high;
+        var length = gate.StopLevel == ClockStopLevel.Low ? high : source.Period - high;
+        var wrapped = start.Seconds % source.Period.Seconds;
+        var opens = new Time(wrapped < 0 ? wrapped + source.Period.Seconds : wrapped);
+        return new TimeInterval(opens, opens + length);
+    }
+
+    /// <summary>
+    /// True when interval <paramref name="a"/>, repeating every <paramref name="periodA"/>, meets <paramref name="b"/>,
+    /// repeating every <paramref name="periodB"/>, anywhere in their common <paramref name="cycle"/>. Intervals that
+    /// only touch do not meet (edges entered as decimal figures are compared with a small tolerance).
+    /// </summary>
+    internal static bool Overlaps(TimeInterval a, Time periodA, TimeInterval b, Time periodB, Time cycle)
+    {
+        if (a.Length >= periodA || b.Length >= periodB)
+            return true;
+        var tolerance = 1e-9 * cycle.Seconds;
+        var repeatsA = System.Math.Max(1, (int)System.Math.Round(cycle.Seconds / periodA.Seconds));
+        var repeatsB = System.Math.Max(1, (int)System.Math.Round(cycle.Seconds / periodB.Seconds));
+        for (var i = -1; i <= repeatsA; i++)
+        {
+            var startA = a.Start.Seconds + i * periodA.Seconds;
+            var endA = startA + a.Length.Seconds;
+            for (var j = -1; j <= repeatsB; j++)
+            {
+                var startB = b.Start.Seconds + j * periodB.Seconds;
+                if (System.Math.Min(endA, startB + b.Length.Seconds) - System.Math.Max(startA, startB) > tolerance)
+                    return true;
+            }
+        }
+
+        return false;
+    }
+
+    private static Dictionary<int, Time> BorrowByLatch(LatchModel model)
+    {
+        var borrow = new Dictionary<int, Time>();
+        foreach (var arrival in LatchBorrowing.Compute(TimingFigures.For(model.Netlist)))
+        {
+            var index = arrival.Path.To.Index;
+            if (!borrow.TryGetValue(index, out var seen) || arrival.Borrow > seen)
+                borrow[index] = arrival.Borrow;
+        }
+
+        return borrow;
+    }
+
+    private static string Interval(TimeInterval interval) => $"[{interval.Start}, {interval.End})";
+
+    private static string Format(string format, params object[] arguments) => string.Format(CultureInfo.InvariantCulture, format, arguments);
+}
+
+/// <summary>Where a clock gate's enable comes from: a latch (with the slowest path from its storage) or a primary input.</summary>
+internal sealed class EnableOrigin
+{
+    public EnableOrigin(Latch latch, Time delay)
+    {
+        Latch = latch;
+        Delay = delay;
+    }
+
+    public EnableOrigin(Net input, SourceSpan span)
+    {
+        Input = input;
+        InputSpan = span;
+    }
+
+    public Latch? Latch { get; }
+
+    /// <summary>The slowest path from the latch's storage node to the enable (its output stage included).</summary>
+    public Time Delay { get; }
+
+    public Net? Input { get; }
+
+    public SourceSpan? InputSpan { get; }
+}
+
+/// <summary>The backward search from an enable to its storage and inputs.</summary>
+internal static class EnableOrigins
+{
+    public static List<EnableOrigin> Of(Netlist netlist, LatchModel model, Net enable)
+    {
+        // Longest delay from each net back to the enable, relaxed over the fan-in logic; a net is searched again only
+        // when a slower path to it is found, and never more than a few times (a combinational loop ends there).
+        var delay = new Dictionary<Net, double> { [enable] = 0 };
+        var visits = new Dictionary<Net, int>();
+        var work = new Stack<Net>();
+        work.Push(enable);
+        var latches = new Dictionary<Latch, double>();
+        var inputs = new List<Net>();
+        while (work.Count > 0)
+        {
+            var net = work.Pop();
+            visits.TryGetValue(net, out var seen);
+            if (seen >= 4) continue;
+            visits[net] = seen + 1;
+            var d = delay[net];
+            if (netlist.IsInput(net))
+            {
+                if (!inputs.Contains(net)) inputs.Add(net);
+                continue;
+            }
+
+            foreach (var driver in netlist.DriverList(net))
+            {
+                if (driver.IsWeak) continue;
+                if (driver.IsPassDevice && driver.ClockControl is not null)
+                {
+                    if (model.LatchEnteredBy(driver) is { } latch && (!latches.TryGetValue(latch, out var known) || d > known))
+                        latches[latch] = d;
+                    continue;
+                }
+
+                var next = d + FirstOrderDelay.Of(netlist, driver).Seconds;
+                foreach (var input in driver.Inputs)
+                    Relax(input, next);
+                if (driver.DataControl is { } control)
+                    Relax(control, next);
+            }
+        }
+
+        var origins = new List<EnableOrigin>();
+        foreach (var pair in latches)
+            origins.Add(new EnableOrigin(pair.Key, new Time(pair.Value)));
+        origins.Sort((a, b) => a.Latch!.Index.CompareTo(b.Latch!.Index));
+        foreach (var input in inputs)
+            origins.Add(new EnableOrigin(input, SpanOfInput(netlist, input)));
+        return origins;
+
+        void Relax(Net net, double value)
+        {
+            if (delay.TryGetValue(net, out var known) && known >= value)
+                return;
+            delay[net] = value;
+            work.Push(net);
+        }
+    }
+
+    private static SourceSpan SpanOfInput(Netlist netlist, Net input)
+    {
+        foreach (var port in netlist.Inputs)
+            if (ReferenceEquals(port.Net, input))
+                return port.Span;
+        return SourceSpan.Unknown;
+    }
+}
+
+/// <summary>Keys of the machine-readable properties PW1004 findings carry (times in seconds on the root clock's period).</summary>
+public static class ClockGateProperties
+{
+    public const string GatedClock = "GatedClock";
+    public const string SourceClock = "SourceClock";
+    public const string Enable = "Enable";
+
+    /// <summary>The latch the enable comes from (absent for a primary input).</summary>
+    public const string Storage = "Storage";
+
+    /// <summary>The phase in which the gate blocks the clock ("clk.Low" for a gate that stops low): what to latch the enable on.</summary>
+    public const string BlockingPhase = "BlockingPhase";
+
+    /// <summary>"High" or "Low": the blocking phase's polarity.</summary>
+    public const string BlockingPolarity = "BlockingPolarity";
+
+    /// <summary>Where the enable comes from: <see cref="FromLatch"/>, <see cref="FromUnrelatedClock"/> (a latch whose clock
+    /// has no fixed time relation to the gate's: a synchronizer's business, not a latch's) or <see cref="FromInput"/>.</summary>
+    public const string Origin = "Origin";
+
+    public const string FromLatch = "Latch";
+    public const string FromUnrelatedClock = "UnrelatedClock";
+    public const string FromInput = "Input";
+
+    /// <summary>For an enable from a latch: "true" when the latch opens while the gate passes the clock (it is on the
+    /// wrong phase: latching the enable on the blocking phase fixes it), "false" when only the path after it is too slow.</summary>
+    public const string OpensWhilePassing = "OpensWhilePassing";
+
+    public const string PassStartSeconds = "PassStartSeconds";
+    public const string PassEndSeconds = "PassEndSeconds";
+    public const string ChangeStartSeconds = "ChangeStartSeconds";
+    public const string ChangeEndSeconds = "ChangeEndSeconds";
+}
