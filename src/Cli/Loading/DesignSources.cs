@@ -69,8 +69,8 @@ internal sealed class DesignSources : IDisposable
             {
                 if (point.IsHidden || point.Document.IsNil)
                     continue;
-                var document = reader.GetDocument(point.Document);
-                return new SourceSpan(reader.GetString(document.Name), point.StartLine, point.StartColumn);
+                var path = reader.GetString(reader.GetDocument(point.Document).Name);
+                return new SourceSpan(path, NameLine(path, point.StartLine, method.Name), 0);
             }
         }
         catch (Exception e) when (e is BadImageFormatException or ArgumentException)
@@ -79,6 +79,28 @@ internal sealed class DesignSources : IDisposable
         }
 
         return null;
+    }
+
+    /// <summary>
+    /// The line of the method's name, where the analyzers put a design's own diagnostics: the first sequence point is
+    /// the body's opening brace or expression, at most a few lines below it (the source is read when it is there).
+    /// </summary>
+    private static int NameLine(string path, int bodyLine, string name)
+    {
+        try
+        {
+            if (!File.Exists(path))
+                return bodyLine;
+            var lines = File.ReadAllLines(path);
+            for (var line = Math.Min(bodyLine, lines.Length); line >= Math.Max(1, bodyLine - 4); line--)
+                if (lines[line - 1].Contains(name + "(", StringComparison.Ordinal))
+                    return line;
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+        }
+
+        return bodyLine;
     }
 
     /// <summary>The distinct folders of the given source paths.</summary>
