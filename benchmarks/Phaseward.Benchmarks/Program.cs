@@ -14,6 +14,8 @@ using Microsoft.CodeAnalysis.Diagnostics;
 using Phaseward.Analyzers;
 using Phaseward.Analyzers.Diagnostics;
 using Phaseward.Analyzers.Elaboration;
+using Phaseward.Checking;
+using RuleSet = Phaseward.Checking.RuleSet;
 
 namespace Phaseward.Benchmarks;
 

@@ -5,6 +5,7 @@ using System.Reflection;
 using Microsoft.CodeAnalysis;
 using Phaseward.Analyzers.Diagnostics;
 using Phaseward.Analyzers.Tests.Elaboration;
+using Phaseward.Checking;
 
 namespace Phaseward.Analyzers.Tests;
 

@@ -5,6 +5,7 @@ using Microsoft.CodeAnalysis.Testing;
 using Phaseward.Analyzers.Elaboration;
 using Phaseward.Analyzers.Tests.Elaboration;
 using Phaseward.Analyzers.Tests.Verifiers;
+using Phaseward.Checking;
 
 namespace Phaseward.Analyzers.Tests;
 

@@ -7,6 +7,7 @@ using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 using Phaseward.Analyzers.Elaboration;
 using Phaseward.Analyzers.Tests.Elaboration;
+using Phaseward.Checking;
 
 namespace Phaseward.Analyzers.Tests;
 

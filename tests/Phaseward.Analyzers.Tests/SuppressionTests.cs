@@ -5,6 +5,7 @@ using System.Threading.Tasks;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 using Phaseward.Analyzers.Tests.Elaboration;
+using Phaseward.Checking;
 
 namespace Phaseward.Analyzers.Tests;
 

@@ -3,6 +3,11 @@ using System.Globalization;
 using System.IO;
 using System.Linq;
 using System.Xml.Linq;
+using Phaseward.Checking;
+using Phaseward.Clocking;
+using Phaseward.Rules.PassGatePaths;
+using Phaseward.Sequencing;
+using Phaseward.Storage;
 using Quorvane;
 using static Phaseward.Cli.Tests.CliRun;
 

@@ -1,5 +1,6 @@
 using System;
 using System.IO;
+using Phaseward.Checking;
 using Quorvane;
 using static Phaseward.Cli.Tests.CliRun;
 

@@ -1,6 +1,7 @@
 using System;
 using System.IO;
 using System.Linq;
+using Phaseward.Checking;
 using Phaseward.Cli.Reproduction;
 using static Phaseward.Cli.Tests.CliRun;
 
@@ -96,7 +97,7 @@ public sealed class SpiceDeckTests : IDisposable
     {
         var catalog = Loading.DesignCatalog.Load(QuorvaneDll, new[] { "ChannelSelect" });
         var reports = catalog.Designs
-            .Select(d => Model.DesignRunner.Check(d, Model.DesignRunner.Elaborate(d, QuorvaneDll), SourceSpan.Unknown, new Policy.ReportPolicy()))
+            .Select(d => Model.DesignRunner.Check(d, Model.DesignRunner.Elaborate(d, QuorvaneDll), Netlists.SourceSpan.Unknown, new Policy.ReportPolicy()))
             .ToList();
         return DeckExport.Write(decks, reports, TextWriter.Null);
     }

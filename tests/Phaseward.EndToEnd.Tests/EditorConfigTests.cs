@@ -1,6 +1,7 @@
 using System;
 using System.IO;
 using System.Linq;
+using Phaseward.Checking;
 using Phaseward.EndToEnd.Tests.Packaging;
 
 namespace Phaseward.EndToEnd.Tests;

@@ -6,6 +6,7 @@ using System.Linq;
 using System.Threading;
 using System.Threading.Tasks;
 using System.Xml.Linq;
+using Phaseward.Checking;
 using Phaseward.EndToEnd.Tests.Packaging;
 using Phaseward.EndToEnd.Tests.Workspace;
 using Xunit.Abstractions;

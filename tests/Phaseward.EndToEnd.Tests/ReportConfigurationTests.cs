@@ -3,6 +3,7 @@ using System.Collections.Generic;
 using System.IO;
 using System.Linq;
 using System.Text.RegularExpressions;
+using Phaseward.Checking;
 using Phaseward.EndToEnd.Tests.Packaging;
 
 namespace Phaseward.EndToEnd.Tests;

@@ -2,6 +2,7 @@ using System;
 using System.IO;
 using System.Linq;
 using System.Text.Json;
+using Phaseward.Checking;
 
 namespace Phaseward.EndToEnd.Tests;
 

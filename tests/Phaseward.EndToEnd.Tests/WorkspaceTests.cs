@@ -4,6 +4,7 @@ using System.Linq;
 using System.Threading;
 using System.Threading.Tasks;
 using Microsoft.CodeAnalysis;
+using Phaseward.Checking;
 using Phaseward.EndToEnd.Tests.Packaging;
 using Phaseward.EndToEnd.Tests.Workspace;
 

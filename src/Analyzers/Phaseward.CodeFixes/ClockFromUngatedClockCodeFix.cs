@@ -12,6 +12,9 @@ using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Editing;
 using Microsoft.CodeAnalysis.Operations;
 using Microsoft.CodeAnalysis.Text;
+using Phaseward.Checking;
+using Phaseward.Netlists;
+using Phaseward.Rules.DynamicStorage;
 
 namespace Phaseward.CodeFixes;
 

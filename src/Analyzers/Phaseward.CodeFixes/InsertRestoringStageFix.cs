@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using System.Threading.Tasks;
 using Microsoft.CodeAnalysis.CodeActions;
 using Microsoft.CodeAnalysis.CodeFixes;
+using Phaseward.Checking;
 
 namespace Phaseward.CodeFixes;
 

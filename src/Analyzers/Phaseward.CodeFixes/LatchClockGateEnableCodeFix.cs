@@ -11,6 +11,8 @@ using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Editing;
 using Microsoft.CodeAnalysis.Operations;
 using Microsoft.CodeAnalysis.Text;
+using Phaseward.Checking;
+using Phaseward.Rules.ClockPhases;
 
 namespace Phaseward.CodeFixes;
 

@@ -13,6 +13,8 @@ using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Editing;
 using Microsoft.CodeAnalysis.Operations;
 using Microsoft.CodeAnalysis.Text;
+using Phaseward.Checking;
+using Phaseward.Rules.PassGatePaths;
 
 namespace Phaseward.CodeFixes;
 

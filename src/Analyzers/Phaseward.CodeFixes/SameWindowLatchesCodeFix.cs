@@ -11,6 +11,8 @@ using Microsoft.CodeAnalysis.CSharp;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Editing;
 using Microsoft.CodeAnalysis.Operations;
+using Phaseward.Checking;
+using Phaseward.Rules.ClockPhases;
 
 namespace Phaseward.CodeFixes;
 

@@ -7,6 +7,9 @@ using Microsoft.CodeAnalysis.CodeActions;
 using Microsoft.CodeAnalysis.CodeFixes;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Editing;
+using Phaseward.Checking;
+using Phaseward.Netlists;
+using Phaseward.Rules.DynamicStorage;
 
 namespace Phaseward.CodeFixes;
 

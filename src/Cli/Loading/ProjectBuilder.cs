@@ -5,6 +5,7 @@ using System.IO;
 using System.Linq;
 using System.Text;
 using System.Text.Json;
+using Phaseward.Checking;
 using Phaseward.Cli.Policy;
 
 namespace Phaseward.Cli.Loading;

@@ -1,7 +1,15 @@
 using System;
 using System.Collections.Generic;
 using System.Linq;
+using Phaseward.Checking;
 using Phaseward.Cli.Policy;
+using Phaseward.Netlists;
+using Phaseward.Rules.ClockPhases;
+using Phaseward.Rules.DynamicStorage;
+using Phaseward.Rules.PassGatePaths;
+using Phaseward.Rules.Timing;
+using Phaseward.Sequencing;
+using Phaseward.Storage;
 
 namespace Phaseward.Cli.Model;
 

@@ -2,7 +2,9 @@ using System;
 using System.Diagnostics;
 using System.Linq;
 using System.Reflection;
+using Phaseward.Checking;
 using Phaseward.Cli.Policy;
+using Phaseward.Netlists;
 
 namespace Phaseward.Cli.Model;
 

@@ -1,6 +1,9 @@
 using System.Globalization;
 using System.Linq;
 using Phaseward.Cli.Model;
+using Phaseward.Clocking;
+using Phaseward.Netlists;
+using Phaseward.Sequencing;
 
 namespace Phaseward.Cli.Output;
 

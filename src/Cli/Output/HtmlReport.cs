@@ -8,6 +8,8 @@ using Phaseward.Cli.Loading;
 using Phaseward.Cli.Model;
 using Phaseward.Cli.Policy;
 using Phaseward.Cli.Reproduction;
+using Phaseward.Clocking;
+using Phaseward.Storage;
 
 namespace Phaseward.Cli.Output;
 

@@ -3,6 +3,8 @@ using System.IO;
 using System.Linq;
 using Phaseward.Cli.Model;
 using Phaseward.Cli.Policy;
+using Phaseward.Clocking;
+using Phaseward.Storage;
 
 namespace Phaseward.Cli.Output;
 

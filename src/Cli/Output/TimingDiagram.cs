@@ -4,6 +4,8 @@ using System.Globalization;
 using System.Linq;
 using System.Xml.Linq;
 using Phaseward.Cli.Model;
+using Phaseward.Clocking;
+using Phaseward.Sequencing;
 
 namespace Phaseward.Cli.Output;
 

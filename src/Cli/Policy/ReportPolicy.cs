@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using Phaseward.Checking;
 using Phaseward.Configuration;
 
 namespace Phaseward.Cli.Policy;

@@ -1,5 +1,6 @@
 using System.Globalization;
 using Microsoft.CodeAnalysis;
+using Phaseward.Checking;
 
 namespace Phaseward.Cli.Policy;
 

@@ -1,7 +1,8 @@
 using System.Collections.Generic;
 using System.Text;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Checking;
 
 /// <summary>The result of checking a design at run time.</summary>
 public sealed class CheckReport

@@ -1,8 +1,9 @@
 using System;
 using System.Collections.Generic;
 using System.Threading;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Checking;
 
 /// <summary>Runs every rule on a netlist.</summary>
 public static class Checker

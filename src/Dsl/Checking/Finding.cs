@@ -1,8 +1,9 @@
 using System;
 using System.Collections.Generic;
 using System.Linq;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Checking;
 
 /// <summary>One hazard found by a rule: where, what, with the figures behind it.</summary>
 public sealed class Finding

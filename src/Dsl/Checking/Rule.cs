@@ -1,6 +1,6 @@
 using System.Collections.Generic;
 
-namespace Phaseward;
+namespace Phaseward.Checking;
 
 /// <summary>
 /// A rule: a pure function from a netlist and a policy to findings. Rules know nothing of Roslyn; the analyzers only

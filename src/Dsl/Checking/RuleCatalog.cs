@@ -1,7 +1,8 @@
 using System.Collections.Generic;
 using System.Linq;
+using Phaseward.Rules.ClockPhases;
 
-namespace Phaseward;
+namespace Phaseward.Checking;
 
 /// <summary>Every rule's descriptor, keyed by ID: the one source of titles and messages for both front ends.</summary>
 public static class RuleCatalog

@@ -1,4 +1,4 @@
-namespace Phaseward;
+namespace Phaseward.Checking;
 
 /// <summary>Diagnostic categories, one per rule family.</summary>
 public static class RuleCategories

@@ -1,6 +1,7 @@
 using System.Threading;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Checking;
 
 /// <summary>What a rule is given: the netlist, the lint policy and a cancellation token to honour in long loops.</summary>
 public sealed class RuleContext

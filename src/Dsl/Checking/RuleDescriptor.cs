@@ -1,7 +1,7 @@
 using System;
 using System.Globalization;
 
-namespace Phaseward;
+namespace Phaseward.Checking;
 
 /// <summary>What a rule reports: its ID, fixed title, message format (figures come in as arguments) and default severity.</summary>
 public sealed class RuleDescriptor

@@ -1,4 +1,6 @@
-namespace Phaseward;
+using Phaseward.Rules.ClockPhases;
+
+namespace Phaseward.Checking;
 
 /// <summary>
 /// The one list of Phaseward rule IDs. The first digit is the family: 1 clock phases, 2 pass-gate paths,

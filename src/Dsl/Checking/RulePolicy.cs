@@ -1,7 +1,7 @@
 using System;
 using Phaseward.Internal;
 
-namespace Phaseward;
+namespace Phaseward.Checking;
 
 /// <summary>
 /// Lint policy: thresholds that are a team's choice rather than a property of the design. The analyzers read it

@@ -1,6 +1,10 @@
 using System.Collections.Generic;
+using Phaseward.Rules.ClockPhases;
+using Phaseward.Rules.DynamicStorage;
+using Phaseward.Rules.PassGatePaths;
+using Phaseward.Rules.Timing;
 
-namespace Phaseward;
+namespace Phaseward.Checking;
 
 /// <summary>The rules Phaseward runs, in a fixed order (so reports are deterministic).</summary>
 public static class RuleSet

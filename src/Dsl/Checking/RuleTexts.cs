@@ -1,4 +1,4 @@
-namespace Phaseward;
+namespace Phaseward.Checking;
 
 /// <summary>
 /// Titles and message formats as constants, so that the analyzers' descriptors are built from compile-time constants

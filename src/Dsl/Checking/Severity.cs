@@ -1,4 +1,4 @@
-namespace Phaseward;
+namespace Phaseward.Checking;
 
 /// <summary>How serious a finding is by default (configurable per rule in .editorconfig for the analyzers).</summary>
 public enum Severity

@@ -1,4 +1,5 @@
 using System.Runtime.CompilerServices;
+using Phaseward.Netlists;
 
 namespace Phaseward;
 

@@ -1,6 +1,7 @@
 using System;
 using System.Runtime.CompilerServices;
 using Phaseward.Internal;
+using Phaseward.Netlists;
 
 namespace Phaseward;
 

@@ -2,6 +2,7 @@ using System;
 using System.Collections.Generic;
 using System.Runtime.CompilerServices;
 using Phaseward.Internal;
+using Phaseward.Netlists;
 
 namespace Phaseward;
 

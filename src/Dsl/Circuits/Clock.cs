@@ -1,3 +1,5 @@
+using Phaseward.Netlists;
+
 namespace Phaseward;
 
 /// <summary>How a clock came to be.</summary>

@@ -1,4 +1,6 @@
 using System.Threading;
+using Phaseward.Checking;
+using Phaseward.Netlists;
 
 namespace Phaseward;
 

@@ -1,4 +1,4 @@
-namespace Phaseward;
+namespace Phaseward.Clocking;
 
 /// <summary>The two overlap windows of a clock and its late complement (see <see cref="PhaseWindow"/>).</summary>
 public sealed class ClockOverlaps

@@ -1,7 +1,8 @@
 using System;
 using System.Collections.Generic;
+using Phaseward.Storage;
 
-namespace Phaseward;
+namespace Phaseward.Clocking;
 
 /// <summary>
 /// When a pass gate on a phase conducts, on the design's time base (see <see cref="TimeBase"/>): it opens at

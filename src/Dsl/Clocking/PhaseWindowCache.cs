@@ -1,6 +1,6 @@
 using System.Collections.Generic;
 
-namespace Phaseward;
+namespace Phaseward.Clocking;
 
 /// <summary>
 /// The windows of the phases one computation asks about, each made once: <see cref="PhaseWindow.Of"/> makes a new

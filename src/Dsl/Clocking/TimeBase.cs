@@ -1,6 +1,6 @@
 using System;
 
-namespace Phaseward;
+namespace Phaseward.Clocking;
 
 /// <summary>
 /// Which clocks share the design's time line, and over which common cycle they repeat together.

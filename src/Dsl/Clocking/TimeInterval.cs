@@ -1,4 +1,4 @@
-namespace Phaseward;
+namespace Phaseward.Clocking;
 
 /// <summary>A half-open interval of time [Start, End) within a clock period.</summary>
 public readonly struct TimeInterval

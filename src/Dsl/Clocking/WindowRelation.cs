@@ -1,6 +1,6 @@
 using System;
 
-namespace Phaseward;
+namespace Phaseward.Clocking;
 
 /// <summary>How the transparency windows of two phases lie on the design's time base.</summary>
 public enum WindowRelation

@@ -1,6 +1,7 @@
 using System.Collections.Generic;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Electrical;
 
 /// <summary>
 /// For every net, the resistance from a supply rail to the net along its weakest strong drive path: a primary input's

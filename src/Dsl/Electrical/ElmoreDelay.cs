@@ -1,6 +1,6 @@
 using System;
 
-namespace Phaseward;
+namespace Phaseward.Electrical;
 
 /// <summary>
 /// The Elmore delay of every node of an RC tree: the first moment of its impulse response,

@@ -1,6 +1,6 @@
 using System;
 
-namespace Phaseward;
+namespace Phaseward.Electrical;
 
 /// <summary>
 /// The 50 % delay estimated from an Elmore delay. A single RC pole reaches half its final value at t = ln 2 · RC

@@ -1,8 +1,9 @@
 using System;
 using System.Collections.Generic;
 using System.Threading;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Electrical;
 
 /// <summary>
 /// A netlist seen as RC trees of pass gates, and the one pass-gate delay model every rule and report uses. A pass gate

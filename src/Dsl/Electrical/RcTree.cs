@@ -2,7 +2,7 @@ using System;
 using System.Collections.Generic;
 using Phaseward.Internal;
 
-namespace Phaseward;
+namespace Phaseward.Electrical;
 
 /// <summary>
 /// An RC tree driven by a step source: the root node hangs from the source through the driver's resistance, every

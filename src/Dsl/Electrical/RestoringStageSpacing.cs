@@ -1,7 +1,7 @@
 using System;
 using Phaseward.Internal;
 
-namespace Phaseward;
+namespace Phaseward.Electrical;
 
 /// <summary>
 /// How often a chain of pass gates should be broken by a restoring stage (an inverter or buffer), and how fast the

@@ -1,6 +1,6 @@
 using System.Collections.Generic;
 
-namespace Phaseward;
+namespace Phaseward.Netlists;
 
 /// <summary>A primitive: a restoring stage or a pass device, with its connections and where it was written.</summary>
 public sealed class Device

@@ -1,4 +1,4 @@
-namespace Phaseward;
+namespace Phaseward.Netlists;
 
 /// <summary>The primitives a netlist is made of. Macros expand into these.</summary>
 public enum DeviceKind

@@ -1,7 +1,7 @@
 using System;
 using System.Collections.Generic;
 
-namespace Phaseward;
+namespace Phaseward.Netlists;
 
 /// <summary>
 /// The devices of one net in one of the netlist's flat indexes (a slice of a shared array): iterated with foreach or

@@ -1,7 +1,7 @@
 using System;
 using System.Collections.Generic;
 
-namespace Phaseward;
+namespace Phaseward.Netlists;
 
 /// <summary>
 /// Which control nets are never high together: the groups stated with <see cref="Circuit.Exclusive"/>, and every net

@@ -1,6 +1,6 @@
 using System.Collections.Generic;
 
-namespace Phaseward;
+namespace Phaseward.Netlists;
 
 /// <summary>One use of a library cell: which primitives it expanded into and where it was written.</summary>
 public sealed class MacroInstance

@@ -1,4 +1,4 @@
-namespace Phaseward;
+namespace Phaseward.Netlists;
 
 /// <summary>The library cells that expand into primitives.</summary>
 public enum MacroKind

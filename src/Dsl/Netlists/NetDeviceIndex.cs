@@ -1,6 +1,6 @@
 using System.Collections.Generic;
 
-namespace Phaseward;
+namespace Phaseward.Netlists;
 
 /// <summary>
 /// For every net, the devices connected to it in one way (as output, data input or control), stored flat: one array

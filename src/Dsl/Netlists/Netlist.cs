@@ -1,7 +1,7 @@
 using System;
 using System.Collections.Generic;
 
-namespace Phaseward;
+namespace Phaseward.Netlists;
 
 /// <summary>
 /// The elaborated design: primitives only, with nets, clocks, ports and the electrical figures the rules use.

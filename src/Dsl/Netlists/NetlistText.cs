@@ -2,7 +2,7 @@ using System.Globalization;
 using System.Linq;
 using System.Text;
 
-namespace Phaseward;
+namespace Phaseward.Netlists;
 
 /// <summary>
 /// A canonical, line-per-item text form of a netlist: the same design gives the same text however it was

@@ -1,4 +1,4 @@
-namespace Phaseward;
+namespace Phaseward.Netlists;
 
 /// <summary>A named primary input or output of a design.</summary>
 public sealed class Port

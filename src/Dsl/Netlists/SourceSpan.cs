@@ -1,7 +1,7 @@
 using System;
 using System.Collections.Generic;
 
-namespace Phaseward;
+namespace Phaseward.Netlists;
 
 /// <summary>
 /// Where a device, clock or port was written. At run time only the file and line of the call are known; at

@@ -1,4 +1,8 @@
 using System;
+using Phaseward.Checking;
+using Phaseward.Netlists;
+using Phaseward.Rules.DynamicStorage;
+using Phaseward.Storage;
 
 namespace Phaseward.Reproducers;
 

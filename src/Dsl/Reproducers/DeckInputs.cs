@@ -1,5 +1,8 @@
 using System;
 using System.Globalization;
+using Phaseward.Checking;
+using Phaseward.Netlists;
+using Phaseward.Storage;
 
 namespace Phaseward.Reproducers;
 

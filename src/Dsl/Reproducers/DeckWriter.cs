@@ -2,6 +2,8 @@ using System;
 using System.Collections.Generic;
 using System.Globalization;
 using System.Text;
+using Phaseward.Checking;
+using Phaseward.Netlists;
 
 namespace Phaseward.Reproducers;
 

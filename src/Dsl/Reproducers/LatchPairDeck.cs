@@ -1,5 +1,10 @@
 using System;
 using System.Collections.Generic;
+using Phaseward.Checking;
+using Phaseward.Clocking;
+using Phaseward.Netlists;
+using Phaseward.Rules.ClockPhases;
+using Phaseward.Sequencing;
 
 namespace Phaseward.Reproducers;
 

@@ -1,6 +1,10 @@
 using System;
 using System.Collections.Generic;
 using System.Globalization;
+using Phaseward.Checking;
+using Phaseward.Electrical;
+using Phaseward.Netlists;
+using Phaseward.Rules.PassGatePaths;
 
 namespace Phaseward.Reproducers;
 

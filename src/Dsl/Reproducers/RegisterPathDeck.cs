@@ -1,4 +1,10 @@
 using System;
+using Phaseward.Checking;
+using Phaseward.Clocking;
+using Phaseward.Netlists;
+using Phaseward.Rules.ClockPhases;
+using Phaseward.Rules.Timing;
+using Phaseward.Sequencing;
 
 namespace Phaseward.Reproducers;
 

@@ -1,5 +1,7 @@
 using System;
 using System.Collections.Generic;
+using Phaseward.Checking;
+using Phaseward.Netlists;
 
 namespace Phaseward.Reproducers;
 

@@ -1,4 +1,6 @@
-namespace Phaseward;
+using Phaseward.Netlists;
+
+namespace Phaseward.Sequencing;
 
 /// <summary>
 /// The first-order delay of one stage, used by the clock-phase and timing rules: t = 0.69 · R · C, with R the

@@ -1,6 +1,8 @@
 using System.Collections.Generic;
+using Phaseward.Clocking;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Sequencing;
 
 /// <summary>
 /// A latch found on the primitives: clock-phase-controlled pass gates (its entry gates) into a storage node, a net

@@ -1,4 +1,7 @@
-namespace Phaseward;
+using Phaseward.Electrical;
+using Phaseward.Netlists;
+
+namespace Phaseward.Sequencing;
 
 /// <summary>
 /// The graph a latch's path searches walk: nets joined by the stages that carry data onwards, ending at the entry

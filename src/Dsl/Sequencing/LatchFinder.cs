@@ -1,6 +1,8 @@
 using System.Collections.Generic;
+using Phaseward.Clocking;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Sequencing;
 
 /// <summary>
 /// Finds the latches of a netlist on its storage nodes (see <see cref="StorageNodeShape"/> for what a storage node,

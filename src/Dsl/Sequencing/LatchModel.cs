@@ -1,8 +1,10 @@
 using System;
 using System.Collections.Generic;
 using System.Runtime.CompilerServices;
+using Phaseward.Clocking;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Sequencing;
 
 /// <summary>
 /// The latches, registers and latch-to-latch data paths of a netlist, found on its primitives. Shared by the

@@ -1,7 +1,7 @@
 using System;
 using System.Collections.Generic;
 
-namespace Phaseward;
+namespace Phaseward.Sequencing;
 
 /// <summary>
 /// Every latch-to-latch path of a netlist: one shortest and one longest search per latch over its fan-out cone up

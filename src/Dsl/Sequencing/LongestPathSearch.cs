@@ -1,7 +1,8 @@
 using System;
 using System.Collections.Generic;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Sequencing;
 
 /// <summary>
 /// The longest delay from one latch's storage node to every entry gate of its cone, the cone taken as acyclic:

@@ -1,6 +1,6 @@
 using System.Collections.Generic;
 
-namespace Phaseward;
+namespace Phaseward.Sequencing;
 
 /// <summary>A binary min-heap of nets keyed by a delay (duplicates allowed; the reader skips stale entries).</summary>
 internal sealed class NetMinHeap

@@ -1,4 +1,4 @@
-namespace Phaseward;
+namespace Phaseward.Sequencing;
 
 /// <summary>
 /// The one model of a race through overlapping windows, shared by PW1002 (latch pairs) and PW4002 (register hold):

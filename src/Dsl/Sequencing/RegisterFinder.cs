@@ -1,6 +1,7 @@
 using System.Collections.Generic;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Sequencing;
 
 /// <summary>
 /// Pairs latches into master–slave registers: register cells by their parts' names, hand-built pairs by their

@@ -1,6 +1,7 @@
 using System.Collections.Generic;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Sequencing;
 
 /// <summary>
 /// The shortest delay from one latch's storage node to every entry gate of its cone (Dijkstra's algorithm). Its

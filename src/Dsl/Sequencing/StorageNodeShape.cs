@@ -1,4 +1,6 @@
-namespace Phaseward;
+using Phaseward.Netlists;
+
+namespace Phaseward.Sequencing;
 
 /// <summary>
 /// What the latch finder recognises around one net: whether it is a storage node, the static-latch feedback loop

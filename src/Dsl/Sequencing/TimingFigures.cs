@@ -2,8 +2,10 @@ using System;
 using System.Collections.Generic;
 using System.Globalization;
 using System.Text;
+using Phaseward.Clocking;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Sequencing;
 
 /// <summary>First-order timing figures of one latch, derived from its devices (see <see cref="TimingFigures"/>).</summary>
 public sealed class LatchTiming

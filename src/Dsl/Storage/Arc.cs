@@ -1,7 +1,8 @@
 using System;
 using System.Collections.Generic;
+using Phaseward.Clocking;
 
-namespace Phaseward;
+namespace Phaseward.Storage;
 
 /// <summary>
 /// A stretch of time on the circle of one clock period: it starts at <see cref="Opens"/> and lasts

@@ -1,6 +1,7 @@
 using System.Collections.Generic;
+using Phaseward.Clocking;
 
-namespace Phaseward;
+namespace Phaseward.Storage;
 
 /// <summary>
 /// Scratch lists for combining the conduction windows of one storage node after another: a rule keeps one set for

@@ -1,6 +1,6 @@
 using Phaseward.Internal;
 
-namespace Phaseward;
+namespace Phaseward.Storage;
 
 /// <summary>
 /// Charge sharing between two floating nodes joined by a pass device: a node of capacitance C1 charged to V and

@@ -1,7 +1,8 @@
 using System;
 using Phaseward.Internal;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Storage;
 
 /// <summary>
 /// How long a floating storage node keeps a readable level: t_ret = C·ΔV / I_leak.

@@ -1,7 +1,9 @@
 using System;
 using System.Collections.Generic;
+using Phaseward.Clocking;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Storage;
 
 /// <summary>
 /// When a storage node is isolated: every pass device that drives it is off, so it holds its level only as charge.

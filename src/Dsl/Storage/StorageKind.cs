@@ -1,4 +1,4 @@
-namespace Phaseward;
+namespace Phaseward.Storage;
 
 /// <summary>What, if anything, restores a storage node (a net driven only through pass devices).</summary>
 public enum StorageKind

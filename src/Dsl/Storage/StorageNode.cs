@@ -1,6 +1,7 @@
 using System.Collections.Generic;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Storage;
 
 /// <summary>A net driven only through pass devices (no restoring stage, keeper included, drives it; not a primary input).</summary>
 public sealed class StorageNode

@@ -1,8 +1,9 @@
 using System;
 using System.Collections.Generic;
 using System.Runtime.CompilerServices;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Storage;
 
 /// <summary>
 /// Finds the storage nodes of a netlist: nets driven only through pass devices (<see cref="Netlist.IsDrivenOnlyThroughPassDevices"/>).

@@ -4,7 +4,10 @@ using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Testing;
 using Phaseward.Analyzers.Tests.Elaboration;
 using Phaseward.Analyzers.Tests.Verifiers;
+using Phaseward.Checking;
 using Phaseward.CodeFixes;
+using Phaseward.Netlists;
+using Phaseward.Rules.PassGatePaths;
 
 namespace Phaseward.Analyzers.Tests.CodeFixes;
 

@@ -8,6 +8,7 @@ using System.Threading;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 using Phaseward.Analyzers.Tests.Robustness;
+using Phaseward.Checking;
 
 namespace Phaseward.Analyzers.Tests.Elaboration;
 

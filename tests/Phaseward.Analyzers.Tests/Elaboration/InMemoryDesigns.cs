@@ -8,6 +8,7 @@ using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp;
 using Phaseward.Analyzers.Elaboration;
 using Phaseward.Analyzers.Tests.Verifiers;
+using Phaseward.Netlists;
 
 namespace Phaseward.Analyzers.Tests.Elaboration;
 

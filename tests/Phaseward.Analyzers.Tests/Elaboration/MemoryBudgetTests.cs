@@ -4,6 +4,7 @@ using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Testing;
 using Phaseward.Analyzers.Elaboration;
 using Phaseward.Analyzers.Tests.Verifiers;
+using Phaseward.Checking;
 
 namespace Phaseward.Analyzers.Tests.Elaboration;
 

@@ -10,6 +10,7 @@ using Microsoft.CodeAnalysis.CSharp;
 using Microsoft.CodeAnalysis.Diagnostics;
 using Phaseward.Analyzers.Tests.Elaboration;
 using Phaseward.Analyzers.Tests.Verifiers;
+using Phaseward.Checking;
 
 namespace Phaseward.Analyzers.Tests.Robustness;
 

@@ -6,6 +6,7 @@ using Microsoft.CodeAnalysis.Diagnostics;
 using Microsoft.CodeAnalysis.Testing;
 using Microsoft.CodeAnalysis.Text;
 using Phaseward.Analyzers.Tests.Verifiers;
+using Phaseward.Checking;
 using static Phaseward.Analyzers.Tests.Rules.RuleSources;
 
 namespace Phaseward.Analyzers.Tests.Rules;

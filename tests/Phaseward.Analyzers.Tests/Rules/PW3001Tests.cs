@@ -2,6 +2,7 @@ using System.Threading.Tasks;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Testing;
 using Phaseward.Analyzers.Tests.Verifiers;
+using Phaseward.Checking;
 
 namespace Phaseward.Analyzers.Tests.Rules;
 

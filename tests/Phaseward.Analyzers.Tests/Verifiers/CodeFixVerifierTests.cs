@@ -13,6 +13,7 @@ using Microsoft.CodeAnalysis.CSharp.Testing;
 using Microsoft.CodeAnalysis.Testing;
 using Microsoft.CodeAnalysis.Text;
 using Phaseward.Analyzers.Tests.Elaboration;
+using Phaseward.Checking;
 using Phaseward.CodeFixes;
 using static Phaseward.Analyzers.Tests.Rules.RuleSources;
 

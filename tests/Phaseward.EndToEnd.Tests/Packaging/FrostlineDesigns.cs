@@ -1,6 +1,7 @@
 using System;
 using System.Collections.Generic;
 using System.Linq;
+using Phaseward.Checking;
 
 namespace Phaseward.EndToEnd.Tests.Packaging;
 

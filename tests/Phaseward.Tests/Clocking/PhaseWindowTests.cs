@@ -1,5 +1,6 @@
 using System;
 using System.Linq;
+using Phaseward.Clocking;
 
 namespace Phaseward.Tests.Clocking;
 

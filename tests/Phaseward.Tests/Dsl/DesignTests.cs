@@ -1,5 +1,6 @@
 using System;
 using System.Linq;
+using Phaseward.Netlists;
 
 namespace Phaseward.Tests.Dsl;
 

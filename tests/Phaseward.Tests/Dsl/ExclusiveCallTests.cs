@@ -1,4 +1,5 @@
 using System;
+using Phaseward.Netlists;
 using Phaseward.Tests.BadInput;
 using Phaseward.Tests.Support;
 

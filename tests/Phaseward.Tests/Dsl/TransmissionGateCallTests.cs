@@ -1,3 +1,4 @@
+using Phaseward.Netlists;
 using Phaseward.Tests.Support;
 
 namespace Phaseward.Tests.Dsl;

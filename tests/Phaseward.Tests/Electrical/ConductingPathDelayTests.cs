@@ -1,4 +1,9 @@
 using System.Linq;
+using Phaseward.Checking;
+using Phaseward.Electrical;
+using Phaseward.Netlists;
+using Phaseward.Rules.PassGatePaths;
+using Phaseward.Sequencing;
 using Phaseward.Tests.Reference;
 using Phaseward.Tests.Rules.ClockPhases;
 

@@ -1,4 +1,5 @@
 using System;
+using Phaseward.Electrical;
 using Phaseward.Tests.Reference;
 
 namespace Phaseward.Tests.Electrical;

@@ -1,5 +1,6 @@
 using System;
 using System.Linq;
+using Phaseward.Electrical;
 using Phaseward.Tests.Reference;
 
 namespace Phaseward.Tests.Electrical;

@@ -1,4 +1,5 @@
 using System;
+using Phaseward.Electrical;
 
 namespace Phaseward.Tests.Electrical;
 

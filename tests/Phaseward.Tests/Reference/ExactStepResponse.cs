@@ -1,5 +1,6 @@
 using System;
 using MathNet.Numerics.LinearAlgebra;
+using Phaseward.Electrical;
 
 namespace Phaseward.Tests.Reference;
 

@@ -1,4 +1,5 @@
 using System.Collections.Generic;
+using Phaseward.Electrical;
 
 namespace Phaseward.Tests.Reference;
 

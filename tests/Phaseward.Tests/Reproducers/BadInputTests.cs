@@ -1,5 +1,7 @@
 using System;
 using System.Linq;
+using Phaseward.Checking;
+using Phaseward.Netlists;
 using Phaseward.Reproducers;
 
 namespace Phaseward.Tests.Reproducers;

@@ -1,4 +1,5 @@
 using System.Linq;
+using Phaseward.Checking;
 using Phaseward.Reproducers;
 
 namespace Phaseward.Tests.Reproducers;

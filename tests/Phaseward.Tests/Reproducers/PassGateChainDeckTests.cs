@@ -1,6 +1,8 @@
 using System.Globalization;
 using System.Linq;
+using Phaseward.Checking;
 using Phaseward.Reproducers;
+using Phaseward.Rules.PassGatePaths;
 
 namespace Phaseward.Tests.Reproducers;
 

@@ -1,6 +1,9 @@
 using System.Globalization;
 using System.Linq;
+using Phaseward.Checking;
+using Phaseward.Netlists;
 using Phaseward.Reproducers;
+using Phaseward.Rules.ClockPhases;
 
 namespace Phaseward.Tests.Reproducers;
 

@@ -2,6 +2,9 @@ using System;
 using System.Collections.Generic;
 using System.Globalization;
 using System.Linq;
+using Phaseward.Checking;
+using Phaseward.Netlists;
+using Phaseward.Rules.PassGatePaths;
 using Phaseward.Tests.Reference;
 
 namespace Phaseward.Tests.Rules;

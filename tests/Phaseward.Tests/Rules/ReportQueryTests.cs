@@ -1,6 +1,11 @@
 using System;
 using System.Globalization;
 using System.Linq;
+using Phaseward.Checking;
+using Phaseward.Rules.ClockPhases;
+using Phaseward.Rules.PassGatePaths;
+using Phaseward.Rules.Timing;
+using Phaseward.Sequencing;
 using Phaseward.Tests.Rules.ClockPhases;
 
 namespace Phaseward.Tests.Rules;

@@ -1,4 +1,5 @@
 using System.Linq;
+using Phaseward.Netlists;
 using Phaseward.Tests.Support;
 
 namespace Phaseward.Tests.SourceSpans;

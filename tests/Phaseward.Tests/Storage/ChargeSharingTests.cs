@@ -1,4 +1,5 @@
 using System;
+using Phaseward.Storage;
 
 namespace Phaseward.Tests.Storage;
 

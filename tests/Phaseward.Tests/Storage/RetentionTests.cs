@@ -1,5 +1,6 @@
 using System;
 using System.Linq;
+using Phaseward.Storage;
 
 namespace Phaseward.Tests.Storage;
 

@@ -1,5 +1,8 @@
 using System;
 using System.Linq;
+using Phaseward.Clocking;
+using Phaseward.Netlists;
+using Phaseward.Storage;
 
 namespace Phaseward.Tests.Storage;
 

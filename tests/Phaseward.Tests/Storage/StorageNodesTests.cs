@@ -1,4 +1,6 @@
 using System.Linq;
+using Phaseward.Netlists;
+using Phaseward.Storage;
 
 namespace Phaseward.Tests.Storage;
 

@@ -1,4 +1,5 @@
 using System.Linq;
+using Phaseward.Netlists;
 
 namespace Phaseward.Tests.Support;
 

@@ -1,4 +1,5 @@
 using System;
+using Phaseward.Netlists;
 
 namespace Phaseward.Tests.Support;
 

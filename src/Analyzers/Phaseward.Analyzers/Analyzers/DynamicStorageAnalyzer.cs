@@ -1,6 +1,8 @@
 using System.Collections.Generic;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
+using Phaseward.Checking;
+using Phaseward.Rules.DynamicStorage;
 
 namespace Phaseward.Analyzers;
 

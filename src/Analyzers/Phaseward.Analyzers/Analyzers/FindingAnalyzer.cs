@@ -4,6 +4,7 @@ using System.Collections.Immutable;
 using System.Linq;
 using Microsoft.CodeAnalysis;
 using Phaseward.Analyzers.Diagnostics;
+using Phaseward.Checking;
 
 namespace Phaseward.Analyzers;
 

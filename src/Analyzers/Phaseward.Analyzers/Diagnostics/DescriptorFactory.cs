@@ -1,4 +1,5 @@
 using Microsoft.CodeAnalysis;
+using Phaseward.Checking;
 
 namespace Phaseward.Analyzers.Diagnostics;
 

@@ -1,6 +1,8 @@
 using System.Collections.Generic;
 using System.Collections.Immutable;
 using Microsoft.CodeAnalysis;
+using Phaseward.Checking;
+using Phaseward.Rules.ClockPhases;
 
 namespace Phaseward.Analyzers.Diagnostics;
 

@@ -4,6 +4,8 @@ using System.Linq;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Text;
 using Phaseward.Analyzers.Elaboration;
+using Phaseward.Checking;
+using Phaseward.Netlists;
 
 namespace Phaseward.Analyzers.Diagnostics;
 

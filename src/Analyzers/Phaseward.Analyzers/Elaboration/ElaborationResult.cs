@@ -1,4 +1,5 @@
 using System.Collections.Generic;
+using Phaseward.Netlists;
 
 namespace Phaseward.Analyzers.Elaboration;
 

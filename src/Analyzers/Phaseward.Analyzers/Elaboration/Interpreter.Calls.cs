@@ -6,6 +6,8 @@ using System.Reflection;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Operations;
+using Phaseward.Checking;
+using Phaseward.Netlists;
 
 namespace Phaseward.Analyzers.Elaboration;
 

@@ -6,6 +6,7 @@ using System.Linq;
 using System.Reflection;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Operations;
+using Phaseward.Checking;
 
 namespace Phaseward.Analyzers.Elaboration;
 

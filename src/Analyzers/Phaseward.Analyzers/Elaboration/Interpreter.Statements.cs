@@ -3,6 +3,7 @@ using System.Collections.Generic;
 using System.Linq;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Operations;
+using Phaseward.Netlists;
 
 namespace Phaseward.Analyzers.Elaboration;
 

@@ -4,6 +4,8 @@ using System.Collections.Generic;
 using System.Linq;
 using System.Threading;
 using Microsoft.CodeAnalysis;
+using Phaseward.Checking;
+using Phaseward.Netlists;
 
 namespace Phaseward.Analyzers.Elaboration;
 

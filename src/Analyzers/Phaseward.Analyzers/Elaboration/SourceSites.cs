@@ -1,6 +1,7 @@
 using System.Collections.Generic;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
+using Phaseward.Netlists;
 
 namespace Phaseward.Analyzers.Elaboration;
 

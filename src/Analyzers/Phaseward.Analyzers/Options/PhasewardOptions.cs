@@ -1,6 +1,7 @@
 using System.Collections.Generic;
 using Microsoft.CodeAnalysis.Diagnostics;
 using Phaseward.Analyzers.Elaboration;
+using Phaseward.Checking;
 using Phaseward.Configuration;
 
 namespace Phaseward.Analyzers.Options;

@@ -1,6 +1,9 @@
 using System.Collections.Generic;
+using Phaseward.Checking;
+using Phaseward.Clocking;
+using Phaseward.Sequencing;
 
-namespace Phaseward;
+namespace Phaseward.Rules.ClockPhases;
 
 /// <summary>
 /// PW1003: data crosses from a latch on one clock to a latch on a clock with no fixed time relation to it (declared

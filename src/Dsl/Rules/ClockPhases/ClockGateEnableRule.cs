@@ -1,7 +1,13 @@
 using System.Collections.Generic;
 using System.Globalization;
+using Phaseward.Checking;
+using Phaseward.Clocking;
+using Phaseward.Netlists;
+using Phaseward.Rules.DynamicStorage;
+using Phaseward.Rules.Timing;
+using Phaseward.Sequencing;
 
-namespace Phaseward;
+namespace Phaseward.Rules.ClockPhases;
 
 /// <summary>
 /// PW1004: a clock gate's enable can change while the gate passes the clock. A gate that stops low passes its source

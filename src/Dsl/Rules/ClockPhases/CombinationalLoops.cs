@@ -1,6 +1,7 @@
 using System.Collections.Generic;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Rules.ClockPhases;
 
 /// <summary>
 /// The feedback loops that no latch breaks: the strongly connected components of the graph whose nodes are nets and

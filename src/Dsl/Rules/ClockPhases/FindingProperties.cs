@@ -1,4 +1,4 @@
-namespace Phaseward;
+namespace Phaseward.Rules.ClockPhases;
 
 /// <summary>Keys of the machine-readable properties that the clock-phase and timing findings carry (for code fixes and reports).</summary>
 public static class FindingProperties

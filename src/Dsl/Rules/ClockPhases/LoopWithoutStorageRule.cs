@@ -1,7 +1,11 @@
 using System.Collections.Generic;
 using System.Text;
+using Phaseward.Checking;
+using Phaseward.Netlists;
+using Phaseward.Rules.DynamicStorage;
+using Phaseward.Sequencing;
 
-namespace Phaseward;
+namespace Phaseward.Rules.ClockPhases;
 
 /// <summary>
 /// PW1005: a feedback loop through restoring stages and data-controlled pass gates with no latch (no clocked pass

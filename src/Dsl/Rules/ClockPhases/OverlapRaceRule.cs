@@ -2,8 +2,11 @@ using System;
 using System.Collections.Generic;
 using System.Globalization;
 using System.Threading;
+using Phaseward.Checking;
+using Phaseward.Clocking;
+using Phaseward.Sequencing;
 
-namespace Phaseward;
+namespace Phaseward.Rules.ClockPhases;
 
 /// <summary>
 /// PW1002: latch A feeds latch B and B is still transparent when A opens (a short overlap of their windows on the

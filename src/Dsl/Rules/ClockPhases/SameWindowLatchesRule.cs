@@ -1,6 +1,9 @@
 using System.Collections.Generic;
+using Phaseward.Checking;
+using Phaseward.Clocking;
+using Phaseward.Sequencing;
 
-namespace Phaseward;
+namespace Phaseward.Rules.ClockPhases;
 
 /// <summary>
 /// PW1001: latch A's storage node reaches latch B's entry gate through restoring stages and data-controlled pass

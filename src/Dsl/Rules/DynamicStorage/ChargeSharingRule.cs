@@ -1,6 +1,8 @@
 using System.Collections.Generic;
+using Phaseward.Checking;
+using Phaseward.Storage;
 
-namespace Phaseward;
+namespace Phaseward.Rules.DynamicStorage;
 
 /// <summary>
 /// PW3003: a pass device whose input and output are both storage nodes, each possibly floating while the device

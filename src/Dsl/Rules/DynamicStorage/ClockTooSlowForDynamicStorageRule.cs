@@ -1,6 +1,8 @@
 using System.Collections.Generic;
+using Phaseward.Checking;
+using Phaseward.Storage;
 
-namespace Phaseward;
+namespace Phaseward.Rules.DynamicStorage;
 
 /// <summary>
 /// PW3002: with its clocks running, a storage node floats for longer per period than its retention time (see

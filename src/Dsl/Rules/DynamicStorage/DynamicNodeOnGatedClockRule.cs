@@ -1,6 +1,9 @@
 using System.Collections.Generic;
+using Phaseward.Checking;
+using Phaseward.Netlists;
+using Phaseward.Storage;
 
-namespace Phaseward;
+namespace Phaseward.Rules.DynamicStorage;
 
 /// <summary>
 /// PW3001: a storage node that floats while a gated clock is stopped (see <see cref="StorageIsolation.WhileStopped"/>)

@@ -1,4 +1,4 @@
-namespace Phaseward;
+namespace Phaseward.Rules.DynamicStorage;
 
 /// <summary>Keys of the machine-readable properties the dynamic-storage rules attach to their findings (for code fixes and reports).</summary>
 public static class DynamicStorageProperties

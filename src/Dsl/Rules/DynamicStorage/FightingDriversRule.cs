@@ -1,7 +1,12 @@
 using System.Collections.Generic;
 using System.Globalization;
+using Phaseward.Checking;
+using Phaseward.Clocking;
+using Phaseward.Electrical;
+using Phaseward.Netlists;
+using Phaseward.Storage;
 
-namespace Phaseward;
+namespace Phaseward.Rules.DynamicStorage;
 
 /// <summary>
 /// PW3004: two conducting paths drive one net at the same time. Counted: two restoring stages on one net (always);

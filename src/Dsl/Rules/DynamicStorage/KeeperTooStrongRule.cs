@@ -1,6 +1,9 @@
 using System.Collections.Generic;
+using Phaseward.Checking;
+using Phaseward.Electrical;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Rules.DynamicStorage;
 
 /// <summary>
 /// PW3005: a node with a keeper whose write path cannot overpower it. Writing a 0 against a keeper that holds a 1

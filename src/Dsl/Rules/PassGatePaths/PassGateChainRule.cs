@@ -2,8 +2,11 @@ using System;
 using System.Collections.Generic;
 using System.Globalization;
 using System.Text;
+using Phaseward.Checking;
+using Phaseward.Electrical;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Rules.PassGatePaths;
 
 /// <summary>
 /// PW2001: pass gates in series without a restoring stage. A run of pass gates (clock- or data-controlled; a latch

@@ -1,8 +1,11 @@
 using System;
 using System.Collections.Generic;
 using System.Threading;
+using Phaseward.Checking;
+using Phaseward.Electrical;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Rules.PassGatePaths;
 
 /// <summary>One run of pass gates in series with no restoring stage between them (see <see cref="PassGateChains"/>).</summary>
 public sealed class PassGateRun
@@ -27,7 +30,7 @@ public sealed class PassGateRun
     public Time ElmoreDelay { get; }
 
     /// <summary>The 50 % delay of a single-pole response with that Elmore time constant (ln 2 · τ).</summary>
-    public Time FiftyPercentDelay => Phaseward.FiftyPercentDelay.FromElmore(ElmoreDelay);
+    public Time FiftyPercentDelay => Electrical.FiftyPercentDelay.FromElmore(ElmoreDelay);
 
     /// <summary>The most gates in series PW2001 allows under the policy it was computed with.</summary>
     public int Limit { get; }

@@ -1,7 +1,9 @@
 using System;
 using System.Threading;
+using Phaseward.Electrical;
+using Phaseward.Netlists;
 
-namespace Phaseward;
+namespace Phaseward.Rules.PassGatePaths;
 
 /// <summary>
 /// The series runs of pass gates in a netlist: for every pass gate, the longest run of pass gates that ends at it

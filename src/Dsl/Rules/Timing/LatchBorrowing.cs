@@ -1,8 +1,10 @@
 using System;
 using System.Collections.Generic;
 using System.Threading;
+using Phaseward.Clocking;
+using Phaseward.Sequencing;
 
-namespace Phaseward;
+namespace Phaseward.Rules.Timing;
 
 /// <summary>The steady state of time borrowing behind PW4003 and PW4005 (see <see cref="LatchBorrowingRule"/>).</summary>
 public sealed class BorrowingSolution

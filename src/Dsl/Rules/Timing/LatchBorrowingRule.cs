@@ -1,7 +1,12 @@
 using System.Collections.Generic;
 using System.Globalization;
+using Phaseward.Checking;
+using Phaseward.Clocking;
+using Phaseward.Netlists;
+using Phaseward.Rules.ClockPhases;
+using Phaseward.Sequencing;
 
-namespace Phaseward;
+namespace Phaseward.Rules.Timing;
 
 /// <summary>
 /// PW4003 and PW4005: latch paths with time borrowing. Each latch L may borrow up to

@@ -1,7 +1,11 @@
 using System.Collections.Generic;
 using System.Globalization;
+using Phaseward.Checking;
+using Phaseward.Clocking;
+using Phaseward.Rules.ClockPhases;
+using Phaseward.Sequencing;
 
-namespace Phaseward;
+namespace Phaseward.Rules.Timing;
 
 /// <summary>
 /// PW4004: a latch whose transparency window is too short for its entry gate to write the storage node. While the

@@ -2,8 +2,12 @@ using System;
 using System.Collections.Generic;
 using System.Globalization;
 using System.Threading;
+using Phaseward.Checking;
+using Phaseward.Clocking;
+using Phaseward.Rules.ClockPhases;
+using Phaseward.Sequencing;
 
-namespace Phaseward;
+namespace Phaseward.Rules.Timing;
 
 /// <summary>
 /// PW4001 and PW4002: register-to-register paths (from one register's slave to a register's master, on related

@@ -1,5 +1,6 @@
 using System.Collections.Generic;
 using Phaseward;
+using Phaseward.Sequencing;
 
 namespace ParityDesigns
 {

@@ -1,5 +1,7 @@
 using System;
 using System.Linq;
+using Phaseward.Checking;
+using Phaseward.Rules.ClockPhases;
 using Phaseward.Tests.Support;
 
 namespace Phaseward.Tests.Rules.ClockPhases;

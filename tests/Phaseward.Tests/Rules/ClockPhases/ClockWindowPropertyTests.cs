@@ -1,6 +1,8 @@
 using System;
 using System.Collections.Generic;
 using System.Linq;
+using Phaseward.Checking;
+using Phaseward.Rules.ClockPhases;
 
 namespace Phaseward.Tests.Rules.ClockPhases;
 

@@ -1,4 +1,5 @@
 using System.Linq;
+using Phaseward.Checking;
 
 namespace Phaseward.Tests.Rules.ClockPhases;
 

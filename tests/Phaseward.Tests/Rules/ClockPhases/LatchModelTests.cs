@@ -1,4 +1,5 @@
 using System.Linq;
+using Phaseward.Sequencing;
 
 namespace Phaseward.Tests.Rules.ClockPhases;
 

@@ -1,5 +1,8 @@
 using System;
 using System.Linq;
+using Phaseward.Checking;
+using Phaseward.Rules.ClockPhases;
+using Phaseward.Sequencing;
 
 namespace Phaseward.Tests.Rules.ClockPhases;
 

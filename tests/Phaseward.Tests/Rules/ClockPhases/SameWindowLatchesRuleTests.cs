@@ -1,4 +1,6 @@
 using System.Linq;
+using Phaseward.Checking;
+using Phaseward.Rules.ClockPhases;
 
 namespace Phaseward.Tests.Rules.ClockPhases;
 

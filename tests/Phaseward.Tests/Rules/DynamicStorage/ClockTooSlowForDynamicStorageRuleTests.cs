@@ -1,6 +1,8 @@
 using System;
 using System.Globalization;
 using System.Linq;
+using Phaseward.Checking;
+using Phaseward.Rules.DynamicStorage;
 
 namespace Phaseward.Tests.Rules.DynamicStorage;
 

@@ -1,5 +1,8 @@
 using System;
 using System.Linq;
+using Phaseward.Checking;
+using Phaseward.Netlists;
+using Phaseward.Rules.DynamicStorage;
 
 namespace Phaseward.Tests.Rules.DynamicStorage;
 

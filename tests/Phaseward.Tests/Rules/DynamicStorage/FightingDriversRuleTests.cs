@@ -1,6 +1,9 @@
 using System;
 using System.Globalization;
 using System.Linq;
+using Phaseward.Checking;
+using Phaseward.Netlists;
+using Phaseward.Rules.DynamicStorage;
 using Phaseward.Tests.Support;
 
 namespace Phaseward.Tests.Rules.DynamicStorage;

@@ -1,4 +1,8 @@
 using System.Linq;
+using Phaseward.Checking;
+using Phaseward.Rules.ClockPhases;
+using Phaseward.Rules.Timing;
+using Phaseward.Sequencing;
 using Phaseward.Tests.Reference;
 
 namespace Phaseward.Tests.Rules.Timing;

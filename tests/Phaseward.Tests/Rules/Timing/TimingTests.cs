@@ -1,5 +1,9 @@
 using System;
 using System.Linq;
+using Phaseward.Checking;
+using Phaseward.Rules.ClockPhases;
+using Phaseward.Rules.Timing;
+using Phaseward.Sequencing;
 using Phaseward.Tests.Rules.ClockPhases;
 
 namespace Phaseward.Tests.Rules.Timing;
