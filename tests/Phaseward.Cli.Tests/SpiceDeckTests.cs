@@ -30,6 +30,10 @@ public sealed class SpiceDeckTests : IDisposable
         Assert.Contains("BurstCapture/PW3001-1.cir", files);
         Assert.Contains("Housekeeping/PW3002-1.cir", files);
         Assert.Contains("TideAverager/PW1001-1.cir", files);
+        Assert.Contains("BurstGate/PW1004-1.cir", files);
+        Assert.Contains("WakeLogic/PW1005-1.cir", files);
+        Assert.Contains("TelemetryBus/PW3004-1.cir", files);
+        Assert.Contains("MooringHold/PW3005-1.cir", files);
         Assert.Contains($"{files.Length} SPICE deck(s) written to {Path.GetFullPath(decks)}", run.Out);
         var chain = File.ReadAllText(Path.Combine(decks, "ChannelSelect", "PW2001-1.cir"));
         Assert.StartsWith("* Phaseward reproducer deck: PW2001", chain);

@@ -66,6 +66,12 @@ internal sealed class ClockWaveforms
         return node;
     }
 
+    /// <summary>The node of the clock's own waveform (not a phase's conduction).</summary>
+    public string ClockNode(Clock clock) => Draw(clock).Clock;
+
+    /// <summary>The node of the clock's late complement.</summary>
+    public string ComplementNode(Clock clock) => Draw(clock).Complement;
+
     private (string Clock, string Complement) Draw(Clock clock)
     {
         if (drawn.TryGetValue(clock, out var nodes)) return nodes;

@@ -16,12 +16,17 @@ public static class Reproducer
     {
         [RuleIds.SameWindowLatches] = LatchPairDeck.Build,
         [RuleIds.OverlapRace] = LatchPairDeck.Build,
+        [RuleIds.ClockGateEnable] = ClockGateDeck.Build,
+        [RuleIds.LoopWithoutStorage] = LoopDeck.Build,
         [RuleIds.SeriesPassGates] = PassGateChainDeck.Build,
         [RuleIds.DynamicNodeOnGatedClock] = RetentionDeck.Build,
         [RuleIds.ClockTooSlowForDynamicStorage] = RetentionDeck.Build,
         [RuleIds.ChargeSharing] = ChargeSharingDeck.Build,
+        [RuleIds.FightingDrivers] = FightingDriversDeck.Build,
+        [RuleIds.KeeperTooStrong] = KeeperWriteDeck.Build,
         [RuleIds.RegisterSetup] = RegisterPathDeck.Build,
         [RuleIds.RegisterHold] = RegisterPathDeck.Build,
+        [RuleIds.LatchWriteWindow] = LatchWriteWindowDeck.Build,
     };
 
     /// <summary>The rule IDs whose findings have a deck.</summary>
