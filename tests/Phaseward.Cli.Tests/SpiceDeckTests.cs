@@ -101,7 +101,9 @@ public sealed class SpiceDeckTests : IDisposable
     private static System.Collections.Generic.IReadOnlyList<ExportedDeck> DeckExportFor(string decks)
     {
         var catalog = Loading.DesignCatalog.Load(QuorvaneDll, new[] { "ChannelSelect" });
-        var reports = catalog.Designs.Select(d => Model.DesignRunner.Run(d, QuorvaneDll, RulePolicy.Default, new Policy.SeverityPolicy())).ToList();
+        var reports = catalog.Designs
+            .Select(d => Model.DesignRunner.Check(d, Model.DesignRunner.Elaborate(d, QuorvaneDll), Netlists.SourceSpan.Unknown, new Policy.ReportPolicy()))
+            .ToList();
         return DeckExport.Write(decks, reports, TextWriter.Null);
     }
 }
