@@ -1,6 +1,7 @@
 using System;
 using System.Collections.Generic;
 using Phaseward.Cli.Policy;
+using Phaseward.Configuration;
 
 namespace Phaseward.Cli;
 
@@ -26,12 +27,14 @@ Options:
   --max-series-pass-gates <n> PW2001 limit (phaseward.max_series_pass_gates)
   --min-race-margin <time>    PW1002 threshold, e.g. 20ps (phaseward.min_race_margin)
   --min-timing-slack <time>   PW4001-PW4004 threshold, e.g. 0.1ns (phaseward.min_timing_slack)
-  --no-editorconfig           ignore .editorconfig files
+  --no-editorconfig           ignore the analyzer config files (.editorconfig, .globalconfig)
   --artifacts <dir>           where a project is built (default: a new temporary folder, deleted afterwards)
   -h, --help                  this text
 
-Severity: each rule's default, then dotnet_diagnostic.PWxxxx.severity and the phaseward.* keys of the .editorconfig
-files in the input's folder and its parents (sections for *.cs files), then the options above.
+Configuration is read as the compiler reads it: the project's .editorconfig and .globalconfig files (for a .dll, those
+above its sources), asked per source file; severities from dotnet_diagnostic.PWxxxx.severity (and the bulk
+dotnet_analyzer_diagnostic keys), then the project's NoWarn / WarningsAsErrors / TreatWarningsAsErrors, then the options
+above. A project is built with Phaseward's own diagnostics kept from failing the build, so that the report can show them.
 Exit code: 0 no error-severity findings, 1 findings at error severity, 2 bad input (the message names the file).";
 
     public string? Input { get; private set; }
@@ -46,7 +49,7 @@ Exit code: 0 no error-severity findings, 1 findings at error severity, 2 bad inp
 
     public List<(string Ids, ReportSeverity Severity)> SeverityOverrides { get; } = new();
 
-    public List<(string Key, string Value, string Option)> PolicyOverrides { get; } = new();
+    public List<(PhasewardOption Definition, string Value, string Option)> PolicyOverrides { get; } = new();
 
     public bool UseEditorConfig { get; private set; } = true;
 
@@ -78,9 +81,9 @@ Exit code: 0 no error-severity findings, 1 findings at error severity, 2 bad inp
                 case "--warning": line.SeverityOverrides.Add((Value(), ReportSeverity.Warning)); break;
                 case "--info": line.SeverityOverrides.Add((Value(), ReportSeverity.Info)); break;
                 case "--none": line.SeverityOverrides.Add((Value(), ReportSeverity.None)); break;
-                case "--max-series-pass-gates": line.PolicyOverrides.Add((PolicyValues.MaxSeriesPassGatesKey, Value(), arg)); break;
-                case "--min-race-margin": line.PolicyOverrides.Add((PolicyValues.MinimumRaceMarginKey, Value(), arg)); break;
-                case "--min-timing-slack": line.PolicyOverrides.Add((PolicyValues.MinimumTimingSlackKey, Value(), arg)); break;
+                case "--max-series-pass-gates": line.PolicyOverrides.Add((OptionCatalog.MaxSeriesPassGates, Value(), arg)); break;
+                case "--min-race-margin": line.PolicyOverrides.Add((OptionCatalog.MinimumRaceMargin, Value(), arg)); break;
+                case "--min-timing-slack": line.PolicyOverrides.Add((OptionCatalog.MinimumTimingSlack, Value(), arg)); break;
                 case "--no-editorconfig": line.UseEditorConfig = false; break;
                 case "--artifacts": line.ArtifactsPath = Value(); break;
                 default:

@@ -32,48 +32,34 @@ internal static class ReportCommand
             }
 
             var input = Path.GetFullPath(line.Input!);
-            var assemblyPath = ResolveAssembly(input, line, stderr, ref tempArtifacts);
-
-            var severities = new SeverityPolicy();
-            var policy = new PolicyValues();
-            if (line.UseEditorConfig)
-            {
-                // Farthest file first, so that nearer files win; within a file, later sections win.
-                foreach (var file in EditorConfig.FilesAbove(Path.GetDirectoryName(input)!).Reverse())
-                {
-                    var keys = new Dictionary<string, string>(StringComparer.OrdinalIgnoreCase);
-                    foreach (var (key, value) in EditorConfig.Parse(File.ReadAllLines(file)))
-                        keys[key] = value;
-                    severities.Apply(keys, file);
-                    foreach (var (key, value) in keys)
-                        policy.TrySet(key, value, $"'{key}' in {file}");
-                }
-            }
-
-            foreach (var (ids, severity) in line.SeverityOverrides)
-                foreach (var id in ids.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries))
-                {
-                    if (id == "*")
-                        foreach (var rule in RuleCatalog.All) severities.Set(rule.Id, severity, "command line");
-                    else
-                        severities.Set(id, severity, "command line");
-                }
-
-            foreach (var (key, value, option) in line.PolicyOverrides)
-                policy.TrySet(key, value, $"option {option}");
-
-            RulePolicy rulePolicy;
-            try
-            {
-                rulePolicy = policy.ToRulePolicy();
-            }
-            catch (ArgumentException e)
-            {
-                throw new InputException(e.Message);
-            }
+            var (assemblyPath, built) = ResolveAssembly(input, line, stderr, ref tempArtifacts);
+            if (built is not null)
+                stdout.WriteLine(ProjectBuilder.FindingsKeptFromFailingNote);
 
             var catalog = DesignCatalog.Load(assemblyPath, line.Designs);
-            var reports = catalog.Designs.Select(d => DesignRunner.Run(d, assemblyPath, rulePolicy, severities)).ToList();
+            var elaborated = catalog.Designs.Select(d => (Design: d, Netlist: DesignRunner.Elaborate(d, assemblyPath))).ToList();
+            using var sources = DesignSources.Open(assemblyPath);
+            var anchors = elaborated.Select(e => DesignRunner.Anchor(e.Design, e.Netlist, sources)).ToList();
+
+            var configuration = ReportConfiguration.None;
+            if (line.UseEditorConfig)
+            {
+                // A project's list is the compiler's own; an assembly's is found above its sources, as the SDK finds it.
+                configuration = ReportConfiguration.Load(built?.AnalyzerConfigFiles
+                    ?? AnalyzerConfigFiles.Above(DesignSources.FoldersOf(anchors.Select(a => a.Path)
+                        .Concat(elaborated.SelectMany(e => e.Netlist.Devices.Select(d => d.Span.Path))))));
+            }
+
+            var policy = new ReportPolicy(configuration, built?.Warnings);
+            foreach (var (ids, severity) in line.SeverityOverrides)
+                foreach (var id in ids.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries))
+                    policy.SetSeverity(id, severity);
+            foreach (var (definition, value, option) in line.PolicyOverrides)
+                policy.SetOption(definition, value, option);
+
+            var reports = elaborated.Select((e, i) => DesignRunner.Check(e.Design, e.Netlist, anchors[i], policy)).ToList();
+            foreach (var warning in configuration.Warnings())
+                stderr.WriteLine("phaseward-report: warning: " + warning);
 
             TextReport.Write(stdout, reports);
             foreach (var skipped in catalog.Skipped)
@@ -116,7 +102,7 @@ internal static class ReportCommand
         }
     }
 
-    private static string ResolveAssembly(string input, CommandLine line, TextWriter log, ref string? tempArtifacts)
+    private static (string AssemblyPath, BuiltProject? Built) ResolveAssembly(string input, CommandLine line, TextWriter log, ref string? tempArtifacts)
     {
         if (Directory.Exists(input))
         {
@@ -130,14 +116,15 @@ internal static class ReportCommand
             throw new InputException($"'{input}' does not exist");
         var extension = Path.GetExtension(input).ToLowerInvariant();
         if (extension == ".dll")
-            return input;
+            return (input, null);
         if (extension != ".csproj")
             throw new InputException($"'{input}' is not a design project (.csproj) or a built design assembly (.dll)");
         var artifacts = line.ArtifactsPath is { } given
             ? Path.GetFullPath(given)
             : tempArtifacts = Path.Combine(Path.GetTempPath(), "phaseward-report-" + Guid.NewGuid().ToString("N"));
         Directory.CreateDirectory(artifacts);
-        return ProjectBuilder.Build(input, artifacts, log);
+        var built = ProjectBuilder.Build(input, artifacts, log);
+        return (built.AssemblyPath, built);
     }
 
     private static void TryDelete(string directory)

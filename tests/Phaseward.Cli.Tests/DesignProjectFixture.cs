@@ -70,7 +70,7 @@ public sealed class DesignProjectFixture : IDisposable
             """);
         var artifacts = Path.Combine(Directory, "artifacts");
         System.IO.Directory.CreateDirectory(artifacts);
-        Assembly = Loading.ProjectBuilder.Build(Project, artifacts, TextWriter.Null);
+        Assembly = Loading.ProjectBuilder.Build(Project, artifacts, TextWriter.Null).AssemblyPath;
     }
 
     public string Directory { get; }

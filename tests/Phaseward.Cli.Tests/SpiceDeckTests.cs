@@ -30,6 +30,11 @@ public sealed class SpiceDeckTests : IDisposable
         Assert.Contains("BurstCapture/PW3001-1.cir", files);
         Assert.Contains("Housekeeping/PW3002-1.cir", files);
         Assert.Contains("TideAverager/PW1001-1.cir", files);
+        Assert.Contains("BurstGate/PW1004-1.cir", files);
+        Assert.Contains("WakeLogic/PW1005-1.cir", files);
+        Assert.Contains("TelemetryBus/PW3004-1.cir", files);
+        Assert.Contains("MooringHold/PW3005-1.cir", files);
+        Assert.Contains("RadioHandoff/PW1003-1.cir", files);
         Assert.Contains($"{files.Length} SPICE deck(s) written to {Path.GetFullPath(decks)}", run.Out);
         var chain = File.ReadAllText(Path.Combine(decks, "ChannelSelect", "PW2001-1.cir"));
         Assert.StartsWith("* Phaseward reproducer deck: PW2001", chain);
@@ -96,7 +101,9 @@ public sealed class SpiceDeckTests : IDisposable
     private static System.Collections.Generic.IReadOnlyList<ExportedDeck> DeckExportFor(string decks)
     {
         var catalog = Loading.DesignCatalog.Load(QuorvaneDll, new[] { "ChannelSelect" });
-        var reports = catalog.Designs.Select(d => Model.DesignRunner.Run(d, QuorvaneDll, RulePolicy.Default, new Policy.SeverityPolicy())).ToList();
+        var reports = catalog.Designs
+            .Select(d => Model.DesignRunner.Check(d, Model.DesignRunner.Elaborate(d, QuorvaneDll), Netlists.SourceSpan.Unknown, new Policy.ReportPolicy()))
+            .ToList();
         return DeckExport.Write(decks, reports, TextWriter.Null);
     }
 }

@@ -1,38 +1,100 @@
 using System;
+using System.Collections.Generic;
 using System.Diagnostics;
 using System.IO;
 using System.Linq;
 using System.Text;
+using System.Text.Json;
+using Phaseward.Checking;
+using Phaseward.Cli.Policy;
 
 namespace Phaseward.Cli.Loading;
 
-/// <summary>Builds a design project with <c>dotnet build</c> into an artifacts folder of its own and returns the built assembly.</summary>
+/// <summary>A built design project: its assembly, the analyzer config files its compiler read, its warning switches.</summary>
+internal sealed record BuiltProject(string AssemblyPath, IReadOnlyList<string> AnalyzerConfigFiles, BuildWarningOptions Warnings);
+
+/// <summary>
+/// Builds a design project with <c>dotnet build</c> into an artifacts folder of its own, so that Phaseward's own
+/// diagnostics cannot stop the build (the report is there to show them), and asks MSBuild what the compiler was given.
+/// </summary>
 internal static class ProjectBuilder
 {
     public static readonly TimeSpan Timeout = TimeSpan.FromMinutes(10);
 
-    /// <summary>Builds <paramref name="project"/> (Debug, so that run-time source lines come with it) and returns its assembly's path.</summary>
-    public static string Build(string project, string artifactsPath, TextWriter log)
+    /// <summary>What the report prints about the build, so that nobody mistakes its success for a clean build.</summary>
+    public const string FindingsKeptFromFailingNote =
+        "Phaseward's own diagnostics (PW*) were kept from failing this build (added to NoWarn for the report's build only); "
+        + "the findings below carry the severities the project's own build gives them.";
+
+    /// <summary>
+    /// Builds <paramref name="project"/> (Debug, so that run-time source lines come with it) with every Phaseward rule in
+    /// NoWarn, through a targets file MSBuild imports after the project's own settings (the project's NoWarn is kept).
+    /// The user's compile errors still fail it: an input error listing them.
+    /// </summary>
+    public static BuiltProject Build(string project, string artifactsPath, TextWriter log)
     {
         log.WriteLine($"Building {project} ...");
         var common = $"\"{project}\" -nologo -p:Configuration=Debug -p:UseArtifactsOutput=true \"-p:ArtifactsPath={artifactsPath}\"";
-        var (exitCode, output) = Run($"build {common}", Path.GetDirectoryName(project)!);
+        var keepGoing = Path.Combine(artifactsPath, "phaseward-report.targets");
+        File.WriteAllText(keepGoing, $"""
+            <Project>
+              <!-- Written by phaseward-report for its own build of the design: Phaseward's findings must not stop it. -->
+              <PropertyGroup>
+                <NoWarn>$(NoWarn);{string.Join(";", RuleCatalog.All.Select(r => r.Id))}</NoWarn>
+              </PropertyGroup>
+            </Project>
+            """);
+        var (exitCode, output) = Run($"build {common} \"-p:CustomAfterMicrosoftCommonTargets={keepGoing}\"", Path.GetDirectoryName(project)!);
         var lines = output.Split('\n', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
         if (exitCode != 0)
         {
             var errors = lines.Where(l => l.Contains(": error ", StringComparison.Ordinal)).Distinct().Take(10).ToList();
             var detail = errors.Count > 0 ? string.Join(Environment.NewLine, errors.Select(e => "  " + e)) : Indent(Tail(lines, 15));
-            throw new InputException($"project '{project}' failed to build (dotnet build exit code {exitCode}):{Environment.NewLine}{detail}");
+            throw new InputException($"project '{project}' failed to build (dotnet build exit code {exitCode}); "
+                + $"its own errors, not Phaseward's findings, stop it:{Environment.NewLine}{detail}");
         }
 
-        // Then ask MSBuild where the assembly went (evaluation only: quick).
-        var (queryExit, query) = Run($"msbuild {common} -getProperty:TargetPath", Path.GetDirectoryName(project)!);
-        var targetPath = queryExit != 0 ? null : query.Split('\n', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)
-            .LastOrDefault(l => l.EndsWith(".dll", StringComparison.OrdinalIgnoreCase) && Path.IsPathRooted(l));
-        if (targetPath is null || !File.Exists(targetPath))
+        // Then ask MSBuild (evaluation only: quick) where the assembly went and what the compiler was given.
+        var (queryExit, query) = Run($"msbuild {common} -getProperty:TargetPath -getProperty:TreatWarningsAsErrors -getProperty:NoWarn "
+            + "-getProperty:WarningsAsErrors -getProperty:WarningsNotAsErrors -getItem:EditorConfigFiles", Path.GetDirectoryName(project)!);
+        var evaluation = queryExit == 0 ? ParseEvaluation(query) : null;
+        var targetPath = evaluation?.Property("TargetPath");
+        if (evaluation is null || targetPath is null || !File.Exists(targetPath))
             throw new InputException($"project '{project}' built, but its assembly was not found (TargetPath '{targetPath ?? "(none)"}'); "
                 + "projects that target several frameworks are not supported: build one and pass its .dll");
-        return targetPath;
+        var warnings = new BuildWarningOptions(
+            string.Equals(evaluation.Property("TreatWarningsAsErrors"), "true", StringComparison.OrdinalIgnoreCase),
+            evaluation.Property("NoWarn"), evaluation.Property("WarningsAsErrors"), evaluation.Property("WarningsNotAsErrors"));
+        return new BuiltProject(targetPath, evaluation.Items("EditorConfigFiles"), warnings);
+    }
+
+    /// <summary>The JSON MSBuild prints for -getProperty/-getItem (several of them).</summary>
+    private static Evaluation? ParseEvaluation(string output)
+    {
+        var start = output.IndexOf('{');
+        if (start < 0) return null;
+        try
+        {
+            return new Evaluation(JsonDocument.Parse(output[start..]).RootElement.Clone());
+        }
+        catch (JsonException)
+        {
+            return null;
+        }
+    }
+
+    private sealed record Evaluation(JsonElement Root)
+    {
+        public string? Property(string name)
+            => Root.TryGetProperty("Properties", out var properties) && properties.TryGetProperty(name, out var value) && value.GetString() is { Length: > 0 } text
+                ? text
+                : null;
+
+        public IReadOnlyList<string> Items(string type)
+            => Root.TryGetProperty("Items", out var items) && items.TryGetProperty(type, out var list)
+                ? list.EnumerateArray().Select(i => i.TryGetProperty("FullPath", out var full) ? full.GetString() : i.GetProperty("Identity").GetString())
+                    .OfType<string>().ToList()
+                : Array.Empty<string>();
     }
 
     private static (int ExitCode, string Output) Run(string arguments, string workingDirectory)

@@ -32,13 +32,13 @@ internal sealed record StorageRow(StorageNode Node, string Clock, Time? FloatsWh
 /// <summary>Everything the text and HTML outputs show for one design, computed once with the tool's Phaseward.</summary>
 internal sealed class DesignReport
 {
-    public DesignReport(Design design, Netlist netlist, CheckReport check, RulePolicy policy, SeverityPolicy severities)
+    public DesignReport(Design design, Netlist netlist, CheckReport check, RulePolicy policy, Func<Finding, ReportSeverity> severityOf)
     {
         Design = design;
         Netlist = netlist;
         Policy = policy;
         Findings = check.Findings
-            .Select(f => new ReportedFinding(f, severities.SeverityOf(f.Rule)))
+            .Select(f => new ReportedFinding(f, severityOf(f)))
             .Where(f => f.Severity != ReportSeverity.None)
             .ToList();
         Suppressed = check.Findings.Count - Findings.Count;

@@ -1,6 +1,5 @@
-using System;
-using System.Collections.Generic;
 using System.Globalization;
+using Microsoft.CodeAnalysis;
 using Phaseward.Checking;
 
 namespace Phaseward.Cli.Policy;
@@ -14,53 +13,9 @@ internal enum ReportSeverity
     Error,
 }
 
-/// <summary>
-/// The severity of each rule in the report: the rule's default, then <c>dotnet_diagnostic.PWxxxx.severity</c> from the
-/// .editorconfig files above the input (error, warning, suggestion or silent = info, none = left out), then the
-/// command line (<c>--error</c>, <c>--warning</c>, <c>--info</c>, <c>--none</c>), last one winning.
-/// </summary>
-internal sealed class SeverityPolicy
+/// <summary>Conversions between the report's severities, the rules' defaults and the compiler's.</summary>
+internal static class SeverityPolicy
 {
-    private readonly Dictionary<string, (ReportSeverity Severity, string Source)> overrides = new(StringComparer.OrdinalIgnoreCase);
-
-    public ReportSeverity SeverityOf(RuleDescriptor rule)
-        => overrides.TryGetValue(rule.Id, out var o) ? o.Severity : FromDefault(rule.DefaultSeverity);
-
-    /// <summary>Where the severity of a rule came from ("default", an .editorconfig path, "command line").</summary>
-    public string SourceOf(RuleDescriptor rule) => overrides.TryGetValue(rule.Id, out var o) ? o.Source : "default";
-
-    public void Set(string ruleId, ReportSeverity severity, string source)
-    {
-        if (RuleCatalog.Find(ruleId.ToUpperInvariant()) is null)
-            throw new InputException($"unknown rule ID '{ruleId}' in {source} (known: {string.Join(", ", Ids())})");
-        overrides[ruleId.ToUpperInvariant()] = (severity, source);
-    }
-
-    /// <summary>Applies the <c>dotnet_diagnostic.PWxxxx.severity</c> keys of an .editorconfig (other rules' keys are ignored).</summary>
-    public void Apply(IReadOnlyDictionary<string, string> keys, string source)
-    {
-        foreach (var (key, value) in keys)
-        {
-            const string Prefix = "dotnet_diagnostic.";
-            const string Suffix = ".severity";
-            if (!key.StartsWith(Prefix, StringComparison.OrdinalIgnoreCase) || !key.EndsWith(Suffix, StringComparison.OrdinalIgnoreCase))
-                continue;
-            var id = key.Substring(Prefix.Length, key.Length - Prefix.Length - Suffix.Length).ToUpperInvariant();
-            if (!id.StartsWith("PW", StringComparison.Ordinal) || RuleCatalog.Find(id) is null)
-                continue;
-            overrides[id] = (Parse(value, $"'{key}' in {source}"), source);
-        }
-    }
-
-    public static ReportSeverity Parse(string value, string where) => value.Trim().ToLowerInvariant() switch
-    {
-        "error" => ReportSeverity.Error,
-        "warning" => ReportSeverity.Warning,
-        "suggestion" or "info" or "silent" or "hidden" => ReportSeverity.Info,
-        "none" => ReportSeverity.None,
-        _ => throw new InputException($"the severity '{value}' of {where} is not valid: expected error, warning, suggestion, silent or none"),
-    };
-
     public static ReportSeverity FromDefault(Severity severity) => severity switch
     {
         Severity.Error => ReportSeverity.Error,
@@ -68,10 +23,15 @@ internal sealed class SeverityPolicy
         _ => ReportSeverity.Info,
     };
 
-    public static string Name(ReportSeverity severity) => severity.ToString().ToLower(CultureInfo.InvariantCulture);
-
-    private static IEnumerable<string> Ids()
+    /// <summary>A configured severity; suggestion and silent both show as info, none leaves the finding out.</summary>
+    public static ReportSeverity FromCompiler(ReportDiagnostic severity, Severity ruleDefault) => severity switch
     {
-        foreach (var rule in RuleCatalog.All) yield return rule.Id;
-    }
+        ReportDiagnostic.Error => ReportSeverity.Error,
+        ReportDiagnostic.Warn => ReportSeverity.Warning,
+        ReportDiagnostic.Info or ReportDiagnostic.Hidden => ReportSeverity.Info,
+        ReportDiagnostic.Suppress => ReportSeverity.None,
+        _ => FromDefault(ruleDefault),
+    };
+
+    public static string Name(ReportSeverity severity) => severity.ToString().ToLower(CultureInfo.InvariantCulture);
 }

@@ -14,6 +14,15 @@ internal static class DeckInputs
             ? value
             : throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location} has no '{key}' property, which its deck needs.", nameof(finding));
 
+    /// <summary>A figure the finding carries as a property (SI units, invariant culture).</summary>
+    public static double Number(Finding finding, string key)
+    {
+        var text = Property(finding, key);
+        return double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value)
+            ? value
+            : throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location} has '{key}' = '{text}', which is not a number.", nameof(finding));
+    }
+
     public static Device DeviceById(Finding finding, Netlist netlist, string key)
     {
         var text = Property(finding, key);

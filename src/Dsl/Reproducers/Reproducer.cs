@@ -16,12 +16,20 @@ public static class Reproducer
     {
         [RuleCatalog.SameWindowLatches.Id] = LatchPairDeck.Build,
         [RuleCatalog.OverlapRace.Id] = LatchPairDeck.Build,
+        [RuleCatalog.ClockCrossing.Id] = ClockCrossingDeck.Build,
+        [RuleCatalog.ClockGateEnable.Id] = ClockGateDeck.Build,
+        [RuleCatalog.LoopWithoutStorage.Id] = LoopDeck.Build,
         [RuleCatalog.SeriesPassGates.Id] = PassGateChainDeck.Build,
         [RuleCatalog.DynamicNodeOnGatedClock.Id] = RetentionDeck.Build,
         [RuleCatalog.ClockTooSlowForDynamicStorage.Id] = RetentionDeck.Build,
         [RuleCatalog.ChargeSharing.Id] = ChargeSharingDeck.Build,
+        [RuleCatalog.FightingDrivers.Id] = FightingDriversDeck.Build,
+        [RuleCatalog.KeeperTooStrong.Id] = KeeperWriteDeck.Build,
         [RuleCatalog.RegisterSetup.Id] = RegisterPathDeck.Build,
         [RuleCatalog.RegisterHold.Id] = RegisterPathDeck.Build,
+        [RuleCatalog.LatchBorrowing.Id] = LatchBorrowingDeck.Build,
+        [RuleCatalog.LatchWriteWindow.Id] = LatchWriteWindowDeck.Build,
+        [RuleCatalog.LatchLoop.Id] = LatchLoopDeck.Build,
     };
 
     /// <summary>The rule IDs whose findings have a deck.</summary>

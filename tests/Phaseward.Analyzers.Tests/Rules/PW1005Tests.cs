@@ -103,4 +103,66 @@ public class PW1005Tests
                     .WithArguments(1, "'n.inv1'", "1 inversions (odd): enabled, it oscillates with a period of about 55.2 ps (twice the loop's delay 27.6 ps)"))
             .WithEditorConfig("dotnet_diagnostic.PW1005.severity = suggestion")
             .RunAsync();
+
+    private const string WakeCell = """
+
+        public sealed class WakeCell : Block
+        {
+            private readonly Clock clock;
+            private readonly bool registered;
+
+            public WakeCell(Clock clock, bool registered)
+            {
+                this.clock = clock;
+                this.registered = registered;
+            }
+
+            protected override void Describe(Circuit c)
+            {
+                var held = c.Node("held");
+                var wake = {|#0:c.Nand(c.Input("request"), held, "wake")|};
+                if (registered)
+                    c.Inverter(c.StaticRegister(wake, clock, "state"), held);
+                else
+                    {|#2:c.Inverter({|#1:c.Inverter(wake, "sense")|}, held)|};
+                c.Output("out", wake);
+            }
+        }
+        """;
+
+    private static string Placed(string name, bool registered) => Design(name, $$"""
+        var clk = c.Clock("clk", 10.Nanoseconds());
+        for (var i = 0; i < 2; i++)
+            c.Place(new WakeCell(clk, registered: {{(registered ? "true" : "false")}}), $"w{i}");
+        """);
+
+    [Fact]
+    public Task LoopsInsideBlocksPlacedInALoopAreOneFindingPerPlacedCell()
+        // Three stages each: 82.8 ps round, period 166 ps; both copies point at the block's three calls.
+        => Verify(Placed("Cells", registered: false) + WakeCell,
+            Pw1005("A feedback loop of 3 devices has no latch on it ('w0.wake', 'w0.sense', 'w0.held.inv1'): 3 inversions (odd): enabled, "
+                + "it oscillates with a period of about 166 ps (twice the loop's delay 82.8 ps)").WithLocation(0).WithLocation(1).WithLocation(2),
+            Pw1005("A feedback loop of 3 devices has no latch on it ('w1.wake', 'w1.sense', 'w1.held.inv1'): 3 inversions (odd): enabled, "
+                + "it oscillates with a period of about 166 ps (twice the loop's delay 82.8 ps)").WithLocation(0).WithLocation(1).WithLocation(2));
+
+    [Fact]
+    public Task BlocksWhoseLoopGoesThroughARegisterAreClean()
+        => Verify(Placed("RegisteredCells", registered: true) + Unmarked(WakeCell));
+
+    [Fact]
+    public Task RingsMadeByAHelperInALoopWithARegisterInEachAreClean()
+        => Verify(Design("RegisteredRings", """
+            var clk = c.Clock("clk", 10.Nanoseconds());
+            for (var i = 0; i < 2; i++)
+                Ring(c, clk, $"r{i}");
+            """, """
+            private static void Ring(Circuit c, Clock clk, string name)
+            {
+                var start = c.Node(name);
+                var a = c.Inverter(start, name + ".a");
+                c.Inverter(c.StaticRegister(a, clk, name + ".hold"), start);
+            }
+            """));
+
+    private static string Unmarked(string source) => System.Text.RegularExpressions.Regex.Replace(source, @"\{\|#\d+:|\|\}", string.Empty);
 }

@@ -91,4 +91,48 @@ public class PW3004Tests
             Pw3004().WithArguments("n0.tg1", "9 kΩ", "n0.tg2", "9 kΩ", "n0", "for 60 ps per period (clk.High and clk.Low overlap)", "600 mV", "66.7 µA"),
             Pw3004().WithArguments("n1.tg1", "9 kΩ", "n1.tg2", "9 kΩ", "n1", "for 60 ps per period (clk.High and clk.Low overlap)", "600 mV", "66.7 µA"))
             .RunAsync();
+
+    private static string BusBits(bool selected) => $$"""
+        using Phaseward;
+
+        public sealed class Bits : Design
+        {
+            protected override void Describe(Circuit c)
+            {
+                for (var bit = 0; bit < 2; bit++)
+                    c.Place(new BusBit({{(selected ? "true" : "false")}}), $"bit{bit}");
+            }
+        }
+
+        public sealed class BusBit : Block
+        {
+            private readonly bool selected;
+
+            public BusBit(bool selected) => this.selected = selected;
+
+            protected override void Describe(Circuit c)
+            {
+                var bus = c.Node("bus");
+                var pick = c.Input("pick");
+                {|#1:c.TransmissionGate(c.Input("a"), pick, bus)|};
+                {|#0:c.TransmissionGate(c.Input("b"), selected ? c.Inverter(pick, "pick_b") : c.Input("other"), bus)|};
+                c.Output("q", c.Inverter(bus, "q"));
+            }
+        }
+        """;
+
+    [Fact]
+    public Task BusBitsPlacedAsBlocksInALoopAreOneFindingPerNode()
+        // 9 kΩ each side: 600 mV, 66.7 µA, in each placed bit; both squiggles on the block's two gate calls.
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(BusBits(selected: false),
+            Pw3004().WithMessage("'bit0.bus.tg1' (9 kΩ) and 'bit0.bus.tg2' (9 kΩ) drive node 'bit0.bus' together whenever 'bit0.pick' and 'bit0.other' are both high "
+                + "(not stated exclusive): when they disagree the node sits at 600 mV (divider, 'bit0.bus.tg1' pulling up) and 66.7 µA flows from rail to rail"),
+            Pw3004().WithMessage("'bit1.bus.tg1' (9 kΩ) and 'bit1.bus.tg2' (9 kΩ) drive node 'bit1.bus' together whenever 'bit1.pick' and 'bit1.other' are both high "
+                + "(not stated exclusive): when they disagree the node sits at 600 mV (divider, 'bit1.bus.tg1' pulling up) and 66.7 µA flows from rail to rail"))
+            .RunAsync();
+
+    [Fact]
+    public Task BusBitsPlacedAsBlocksOnASelectAndItsInverseAreClean()
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(System.Text.RegularExpressions.Regex.Replace(BusBits(selected: true), @"\{\|#\d+:|\|\}", string.Empty))
+            .RunAsync();
 }

@@ -105,4 +105,45 @@ public class PW3005Tests
                 .WithArguments("phaseward.keeper_write_margin", "0.7", "a number from 0 up to (not including) 0.5, such as 0.1", "0.1"))
             .WithEditorConfig("phaseward.keeper_write_margin = 0.7")
             .RunAsync();
+
+    private static string KeptBits(bool strong) => $$"""
+        using Phaseward;
+
+        public sealed class Bits : Design
+        {
+            protected override void Describe(Circuit c)
+            {
+                foreach (var bit in new[] { 0, 1 })
+                    c.Place(new KeptBit({{(strong ? "10.Kiloohms()" : "null")}}), $"bit{bit}");
+            }
+        }
+
+        public sealed class KeptBit : Block
+        {
+            private readonly Resistance? keeper;
+
+            public KeptBit(Resistance? keeper) => this.keeper = keeper;
+
+            protected override void Describe(Circuit c)
+            {
+                var x = {|#1:c.TransmissionGate(c.Input("d"), c.Input("sel"), "x")|};
+                {|#0:c.Keeper(x, resistance: keeper)|};
+                c.Output("q", c.Inverter(x, "q"));
+            }
+        }
+        """;
+
+    [Fact]
+    public Task KeptBitsPlacedAsBlocksInALoopAreEachChecked()
+        // 1.2 V × 9 kΩ / (9 + 10) kΩ = 568 mV, above 480 mV, in each placed bit.
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(KeptBits(strong: true),
+            Pw3005().WithArguments("bit0.x.keeper", "10 kΩ", "bit0.x", "9 kΩ", "bit0.x", "568 mV", "480 mV", "600 mV", "120 mV"),
+            Pw3005().WithArguments("bit1.x.keeper", "10 kΩ", "bit1.x", "9 kΩ", "bit1.x", "568 mV", "480 mV", "600 mV", "120 mV"))
+            .RunAsync();
+
+    [Fact]
+    public Task KeptBitsPlacedAsBlocksWithTheProcessKeeperAreClean()
+        // The process's 40 kΩ keeper: 1.2 × 9 / 49 = 220 mV.
+        => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(System.Text.RegularExpressions.Regex.Replace(KeptBits(strong: false), @"\{\|#\d+:|\|\}", string.Empty))
+            .RunAsync();
 }

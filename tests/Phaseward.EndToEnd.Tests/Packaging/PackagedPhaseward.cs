@@ -115,6 +115,17 @@ public sealed class PackagedPhaseward : IDisposable
         return new BuildResult(exitCode, output, sarif);
     }
 
+    /// <summary>
+    /// Runs phaseward-report (the tool's assembly beside the tests) on a design project, as a user would: it builds the
+    /// project itself, restoring from the same feed and packages folder.
+    /// </summary>
+    public (int ExitCode, string Output) Report(string projectDirectory, string extraArguments = "")
+    {
+        var tool = Path.Combine(AppContext.BaseDirectory, "Phaseward.Cli.dll");
+        var project = Directory.GetFiles(projectDirectory, "*.csproj").Single();
+        return Dotnet($"\"{tool}\" \"{project}\" {extraArguments}", projectDirectory);
+    }
+
     public void Dispose()
     {
         try

@@ -2,6 +2,7 @@ using System.Collections.Generic;
 using Microsoft.CodeAnalysis.Diagnostics;
 using Phaseward.Analyzers.Elaboration;
 using Phaseward.Checking;
+using Phaseward.Configuration;
 
 namespace Phaseward.Analyzers.Options;
 
@@ -21,16 +22,17 @@ internal sealed class PhasewardOptions
 
     public IReadOnlyList<OptionProblem> Problems { get; }
 
+    /// <summary>Reads every <c>phaseward.</c> key through its one definition (<see cref="OptionCatalog"/>).</summary>
     public static PhasewardOptions Read(AnalyzerConfigOptions options)
     {
         var problems = new List<OptionProblem>();
-        var reader = new OptionReader(options, problems);
+        string? Lookup(string key) => options.TryGetValue(key, out var value) ? value : null;
         var limits = new ElaborationLimits(
-            reader.Integer(OptionKeys.ElaborationStepBudget, ElaborationLimits.DefaultStepBudget, 1, long.MaxValue / 2),
-            reader.Integer(OptionKeys.ElaborationRecursionLimit, ElaborationLimits.DefaultRecursionLimit, 1, ElaborationLimits.MaxRecursionLimit),
-            reader.Integer(OptionKeys.ElaborationDeviceBudget, ElaborationLimits.DefaultDeviceBudget, 1, int.MaxValue),
-            reader.Integer(OptionKeys.ElaborationMemoryBudget, ElaborationLimits.DefaultMemoryBudget, 1, ElaborationLimits.MaxMemoryBudget));
-        var policy = RulePolicyReader.Read(reader);
+            OptionCatalog.ElaborationStepBudget.Read(Lookup, problems),
+            (int)OptionCatalog.ElaborationRecursionLimit.Read(Lookup, problems),
+            OptionCatalog.ElaborationDeviceBudget.Read(Lookup, problems),
+            OptionCatalog.ElaborationMemoryBudget.Read(Lookup, problems));
+        var policy = RulePolicyOptions.Read(Lookup, problems);
         return new PhasewardOptions(limits, policy, problems);
     }
 }

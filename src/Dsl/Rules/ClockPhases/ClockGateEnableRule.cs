@@ -46,7 +46,6 @@ public sealed class ClockGateEnableRule : Rule
                 continue;
 
             model ??= LatchModel.Of(netlist);
-            borrow ??= BorrowByLatch(model);
             var passes = PassInterval(gate, source);
             foreach (var origin in EnableOrigins.Of(netlist, model, enable))
             {
@@ -63,6 +62,7 @@ public sealed class ClockGateEnableRule : Rule
                     else
                     {
                         var opens = PhaseWindow.Of(phase).Opens;
+                        borrow ??= BorrowByLatch(model); // the whole design's latch timing: only once an enable comes from a latch
                         borrow.TryGetValue(latch.Index, out var late);
                         var until = opens + late + model.EntryDelay(latch) + origin.Delay;
                         change = new TimeInterval(opens, until);
@@ -97,7 +97,10 @@ public sealed class ClockGateEnableRule : Rule
                 properties[ClockGateProperties.Origin] = origin.Latch is null ? ClockGateProperties.FromInput
                     : change is null ? ClockGateProperties.FromUnrelatedClock : ClockGateProperties.FromLatch;
                 if (change is not null)
+                {
                     properties[ClockGateProperties.OpensWhilePassing] = opensWhilePassing ? "true" : "false";
+                    properties[ClockGateProperties.EnableDelaySeconds] = DynamicStorageProperties.Number((model.EntryDelay(origin.Latch!) + origin.Delay).Seconds);
+                }
                 if (change is { } c)
                 {
                     properties[ClockGateProperties.ChangeStartSeconds] = DynamicStorageProperties.Number(c.Start.Seconds);
@@ -292,6 +295,9 @@ public static class ClockGateProperties
     /// <summary>For an enable from a latch: "true" when the latch opens while the gate passes the clock (it is on the
     /// wrong phase: latching the enable on the blocking phase fixes it), "false" when only the path after it is too slow.</summary>
     public const string OpensWhilePassing = "OpensWhilePassing";
+
+    /// <summary>For an enable from a latch: its entry delay plus the slowest path from its storage node to the enable (s).</summary>
+    public const string EnableDelaySeconds = "EnableDelaySeconds";
 
     public const string PassStartSeconds = "PassStartSeconds";
     public const string PassEndSeconds = "PassEndSeconds";

@@ -165,4 +165,40 @@ public class FightingDriversRuleTests
         }).Findings);
 
     private static double Number(Finding finding, string key) => double.Parse(finding.Properties[key], CultureInfo.InvariantCulture);
+
+    /// <summary>A bus bit written as a block: two sources onto one node, picked by two request lines (which can be
+    /// high together) or by one select and its inverse (exclusive by construction).</summary>
+    private sealed class BusBit(bool selected) : Block
+    {
+        protected override void Describe(Circuit c)
+        {
+            var bus = c.Node("bus");
+            var pick = c.Input("pick");
+            c.TransmissionGate(c.Input("a"), pick, bus);
+            c.TransmissionGate(c.Input("b"), selected ? c.Inverter(pick, "pick_b") : c.Input("other"), bus);
+            c.Output("q", c.Inverter(bus, "q"));
+        }
+    }
+
+    [Theory]
+    [InlineData(false)]
+    [InlineData(true)]
+    public void BusBitsPlacedAsBlocksInALoopAreOneFindingPerNodeAndCleanWithASelect(bool selected)
+    {
+        var (_, findings) = Check(c =>
+        {
+            for (var bit = 0; bit < 3; bit++)
+                c.Place(new BusBit(selected), $"bit{bit}");
+        });
+
+        if (selected)
+        {
+            Assert.Empty(findings);
+            return;
+        }
+
+        // 4 kΩ input driver + 5 kΩ gate on each side: 600 mV, 1.2 V / 18 kΩ = 66.7 µA.
+        Assert.Equal(new[] { "bit0.bus", "bit1.bus", "bit2.bus" }, findings.Select(f => f.Properties[FightProperties.Node]).ToArray());
+        Assert.All(findings, f => Assert.Contains("sits at 600 mV", f.Message));
+    }
 }

@@ -184,4 +184,38 @@ public class KeeperTooStrongRuleTests
     }
 
     private static double Number(Finding finding, string key) => double.Parse(finding.Properties[key], CultureInfo.InvariantCulture);
+
+    /// <summary>A kept bit written as a block: a pass gate writes a node that a keeper of the given strength holds.</summary>
+    private sealed class KeptBit(Resistance? keeper) : Block
+    {
+        protected override void Describe(Circuit c)
+        {
+            var x = c.TransmissionGate(c.Input("d"), c.Input("sel"), "x");
+            c.Keeper(x, resistance: keeper);
+            c.Output("q", c.Inverter(x, "q"));
+        }
+    }
+
+    [Theory]
+    [InlineData(false)]
+    [InlineData(true)]
+    public void KeptBitsPlacedAsBlocksInALoopAreCheckedEachAndCleanWithTheProcessKeeper(bool weak)
+    {
+        // 10 kΩ against the 9 kΩ write path: 1.2 × 9 / 19 = 568 mV > 480 mV; the process's 40 kΩ gives 220 mV.
+        var (_, findings) = Check(c =>
+        {
+            for (var bit = 0; bit < 3; bit++)
+                c.Place(new KeptBit(weak ? null : 10.Kiloohms()), $"bit{bit}");
+        });
+
+        if (weak)
+        {
+            Assert.Empty(findings);
+            return;
+        }
+
+        Assert.Equal(3, findings.Length);
+        for (var bit = 0; bit < 3; bit++)
+            Assert.Contains($"node 'bit{bit}.x' only down to 568 mV", findings[bit].Message);
+    }
 }
