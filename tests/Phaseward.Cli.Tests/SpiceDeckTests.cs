@@ -34,6 +34,7 @@ public sealed class SpiceDeckTests : IDisposable
         Assert.Contains("WakeLogic/PW1005-1.cir", files);
         Assert.Contains("TelemetryBus/PW3004-1.cir", files);
         Assert.Contains("MooringHold/PW3005-1.cir", files);
+        Assert.Contains("RadioHandoff/PW1003-1.cir", files);
         Assert.Contains($"{files.Length} SPICE deck(s) written to {Path.GetFullPath(decks)}", run.Out);
         var chain = File.ReadAllText(Path.Combine(decks, "ChannelSelect", "PW2001-1.cir"));
         Assert.StartsWith("* Phaseward reproducer deck: PW2001", chain);

@@ -16,14 +16,18 @@ internal sealed class ClockWaveforms
     private readonly DeckWriter deck;
     private readonly Time end;
     private readonly Func<Clock, (Time At, ClockStopLevel Level)?> stops;
+    private readonly Func<Clock, Time> shifts;
     private readonly Dictionary<Clock, (string Clock, string Complement)> drawn = new();
     private readonly Dictionary<Phase, string> controls = new();
 
-    public ClockWaveforms(DeckWriter deck, Time end, Func<Clock, (Time At, ClockStopLevel Level)?>? stops = null)
+    /// <param name="shifts">A shift of a clock's edges against the time line (none by default): for clocks with no
+    /// fixed time relation, whose phase to each other drifts, a deck may draw them at the worst one.</param>
+    public ClockWaveforms(DeckWriter deck, Time end, Func<Clock, (Time At, ClockStopLevel Level)?>? stops = null, Func<Clock, Time>? shifts = null)
     {
         this.deck = deck;
         this.end = end;
         this.stops = stops ?? (_ => null);
+        this.shifts = shifts ?? (_ => Time.Zero);
     }
 
     /// <summary>The 10 %–90 % edge time used for every clock edge: 1 % of the shorter half period, at most 10 ps.</summary>
@@ -76,12 +80,15 @@ internal sealed class ClockWaveforms
     {
         if (drawn.TryGetValue(clock, out var nodes)) return nodes;
         var (rise, high, skew, period) = Edges(clock);
+        var shift = shifts(clock);
+        rise += shift;
         var edge = EdgeTime(clock).Seconds;
         var stop = stops(clock);
         var clk = deck.Fresh("clk_" + DeckWriter.Safe(clock.Name));
         var clkb = deck.Fresh("clkb_" + DeckWriter.Safe(clock.Name));
         var vdd = deck.Supply;
         deck.Comment($"clock '{clock.Name}' ({clock.Kind}{(clock.Kind == ClockKind.Root ? string.Empty : " of root " + clock.Root.Name)}): period {period}, high {high} from {rise} into each period, complement {skew} late"
+            + (shift == Time.Zero ? string.Empty : $"; drawn {shift} shifted on the time line")
             + (stop is { } s ? $"; stopped {s.Level.ToString().ToLowerInvariant()} from {new Time(s.At.Seconds)}" : string.Empty));
         deck.Pwl(clk, Points(rise, high, period, Time.Zero, edge, stop, vdd, invert: false), $"clock {clock.Name}");
         deck.Pwl(clkb, Points(rise, high, period, skew, edge, stop, vdd, invert: true), $"its complement, {skew} late");

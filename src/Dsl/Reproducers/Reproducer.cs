@@ -16,6 +16,7 @@ public static class Reproducer
     {
         [RuleIds.SameWindowLatches] = LatchPairDeck.Build,
         [RuleIds.OverlapRace] = LatchPairDeck.Build,
+        [RuleIds.ClockCrossing] = ClockCrossingDeck.Build,
         [RuleIds.ClockGateEnable] = ClockGateDeck.Build,
         [RuleIds.LoopWithoutStorage] = LoopDeck.Build,
         [RuleIds.SeriesPassGates] = PassGateChainDeck.Build,
@@ -26,7 +27,9 @@ public static class Reproducer
         [RuleIds.KeeperTooStrong] = KeeperWriteDeck.Build,
         [RuleIds.RegisterSetup] = RegisterPathDeck.Build,
         [RuleIds.RegisterHold] = RegisterPathDeck.Build,
+        [RuleIds.LatchBorrowing] = LatchBorrowingDeck.Build,
         [RuleIds.LatchWriteWindow] = LatchWriteWindowDeck.Build,
+        [RuleIds.LatchLoop] = LatchLoopDeck.Build,
     };
 
     /// <summary>The rule IDs whose findings have a deck.</summary>

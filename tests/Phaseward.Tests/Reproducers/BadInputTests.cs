@@ -34,4 +34,34 @@ public class ReproducerBadInputTests
         Assert.Contains("'a'", error.Message);
         Assert.Contains("Other", error.Message);
     }
+
+    [Fact]
+    public void ATangleOfLoopsIsRefusedNamingTheFinding()
+    {
+        var c = new Circuit("Tangle");
+        var hub = c.Node("hub");
+        c.Nand(c.Inverter(hub, "a"), c.Inverter(hub, "b"), hub);
+        var report = Checker.Check(c.ToNetlist());
+        var finding = report.Findings.Single(f => f.RuleId == RuleIds.LoopWithoutStorage);
+
+        var error = Assert.Throws<ArgumentException>(() => Reproducer.Deck(finding, report.Netlist));
+        Assert.Contains("PW1005", error.Message);
+        Assert.Contains("tangle of loops", error.Message);
+    }
+
+    [Fact]
+    public void AFightFindingOfAnotherDesignIsRefusedNamingTheNode()
+    {
+        var c = new Circuit("Bus");
+        var bus = c.Node("bus");
+        c.TransmissionGate(c.Input("a"), c.Input("ra"), bus);
+        c.TransmissionGate(c.Input("b"), c.Input("rb"), bus);
+        var finding = Checker.Check(c.ToNetlist()).Findings.Single(f => f.RuleId == RuleIds.FightingDrivers);
+        var other = new Circuit("Other");
+        other.Inverter(other.Input("x"), "y");
+
+        var error = Assert.Throws<ArgumentException>(() => Reproducer.Deck(finding, other.ToNetlist()));
+        Assert.Contains("'bus'", error.Message);
+        Assert.Contains("Other", error.Message);
+    }
 }
