@@ -1,5 +1,7 @@
 using System;
 using System.Collections.Generic;
+using System.CommandLine;
+using System.CommandLine.Help;
 using System.IO;
 using System.Linq;
 using Phaseward.Checking;
@@ -18,20 +20,34 @@ internal static class ReportCommand
     public const int ErrorFindings = 1;
     public const int BadInput = 2;
 
+    /// <summary>
+    /// Parses the command line with System.CommandLine: help (-h, --help, -?) is written to <paramref name="stdout"/>
+    /// (exit 0); a parse or validation error is written to <paramref name="stderr"/> (exit 2); otherwise the report runs.
+    /// </summary>
     public static int Run(IReadOnlyList<string> args, TextWriter stdout, TextWriter stderr)
+    {
+        var commandLine = new ReportCommandLine();
+        var result = commandLine.Command.Parse(args);
+        if (result.Action is not HelpAction && result.Errors.Count > 0)
+        {
+            foreach (var error in result.Errors)
+                stderr.WriteLine("phaseward-report: error: " + error.Message);
+            stderr.WriteLine("phaseward-report: see --help for the options");
+            return BadInput;
+        }
+
+        commandLine.Command.SetAction(parsed => Run(commandLine.Read(parsed), stdout, stderr));
+        return result.Invoke(new InvocationConfiguration { Output = stdout, Error = stderr });
+    }
+
+    /// <summary>The report itself, for options already parsed and checked.</summary>
+    public static int Run(ReportOptions line, TextWriter stdout, TextWriter stderr)
     {
         string? tempArtifacts = null;
         string? tempDecks = null;
         try
         {
-            var line = CommandLine.Parse(args);
-            if (line.Help)
-            {
-                stdout.WriteLine(CommandLine.Usage);
-                return Clean;
-            }
-
-            var input = Path.GetFullPath(line.Input!);
+            var input = Path.GetFullPath(line.Input);
             var (assemblyPath, built) = ResolveAssembly(input, line, stderr, ref tempArtifacts);
             if (built is not null)
                 stdout.WriteLine(ProjectBuilder.FindingsKeptFromFailingNote);
@@ -51,9 +67,8 @@ internal static class ReportCommand
             }
 
             var policy = new ReportPolicy(configuration, built?.Warnings);
-            foreach (var (ids, severity) in line.SeverityOverrides)
-                foreach (var id in ids.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries))
-                    policy.SetSeverity(id, severity);
+            foreach (var (id, severity) in line.SeverityOverrides)
+                policy.SetSeverity(id, severity);
             foreach (var (definition, value, option) in line.PolicyOverrides)
                 policy.SetOption(definition, value, option);
 
@@ -102,7 +117,7 @@ internal static class ReportCommand
         }
     }
 
-    private static (string AssemblyPath, BuiltProject? Built) ResolveAssembly(string input, CommandLine line, TextWriter log, ref string? tempArtifacts)
+    private static (string AssemblyPath, BuiltProject? Built) ResolveAssembly(string input, ReportOptions line, TextWriter log, ref string? tempArtifacts)
     {
         if (Directory.Exists(input))
         {

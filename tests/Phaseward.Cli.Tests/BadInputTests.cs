@@ -148,13 +148,19 @@ public sealed class BadInputTests : IClassFixture<DesignProjectFixture>, IDispos
     }
 
     [Fact]
-    public void UsageErrors()
+    public void UsageErrorsGetSystemCommandLineMessagesAndExitCodeTwo()
     {
-        Assert.Equal(ReportCommand.BadInput, Of().ExitCode);
-        Assert.Contains("unknown option '--colour'", Of(QuorvaneDll, "--colour").Err);
-        Assert.Contains("option '--html' needs a value", Of(QuorvaneDll, "--html").Err);
-        var help = Of("--help");
-        Assert.Equal(ReportCommand.Clean, help.ExitCode);
-        Assert.Contains("Usage: phaseward-report", help.Out);
+        var none = Of();
+        Assert.Equal(ReportCommand.BadInput, none.ExitCode);
+        Assert.Contains("Required argument missing", none.Err);
+
+        var unknown = Of(QuorvaneDll, "--colour");
+        Assert.Equal(ReportCommand.BadInput, unknown.ExitCode);
+        Assert.Contains("'--colour'", unknown.Err);
+
+        var missing = Of(QuorvaneDll, "--html");
+        Assert.Equal(ReportCommand.BadInput, missing.ExitCode);
+        Assert.Contains("Required argument missing for option: '--html'", missing.Err);
+        Assert.Empty(missing.Out);
     }
 }
