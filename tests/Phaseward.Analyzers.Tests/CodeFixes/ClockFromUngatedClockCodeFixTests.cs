@@ -94,7 +94,7 @@ public class ClockFromUngatedClockCodeFixTests
                     for (var i = 0; i < 2; i++)
                         c.Output($"sample{i}", c.DynamicLatch(first, capture.High, $"copy{i}"));
                     c.Output("count", c.DynamicRegister(bit, capture, "count"));
-            """), PW3001(0), PW3001(1), PW3001(1), PW3001(2)).RunAsync();
+            """), PW3001(0), PW3001(1), PW3001(2)).RunAsync();
 
     private static Task NoFix(string body)
     {

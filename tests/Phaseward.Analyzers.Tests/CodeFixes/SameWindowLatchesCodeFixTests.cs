@@ -134,7 +134,7 @@ public class SameWindowLatchesCodeFixTests
             for (var i = 0; i < 3; i++)
                 net = {|#0:c.DynamicLatch(net, clk.High, $"L{i}")|};
             c.Output("q", net);
-            """, Pw1001(0, 0, "L1", "L0", "clk.High"), Pw1001(0, 0, "L2", "L1", "clk.High"));
+            """, Pw1001(0, 0, "L1", "L0", "clk.High").FoundAtThisCall(2, "Ambiguous", "L1, L2"));
 
     [Fact]
     public Task NoFixForALatchCallInAHelperMethod()

@@ -119,7 +119,7 @@ public class UseStaticCellCodeFixTests
                     c.Output("battery_carry", carry);
                 }
             }
-            """, PW3002(), PW3002(), PW3002(), PW3002()).Choosing(EquivalenceKeys.UseStaticRegister).RunAsync();
+            """, PW3002()).Choosing(EquivalenceKeys.UseStaticRegister).RunAsync();
 
     [Fact]
     public Task FixAllTurnsEverySlowDynamicLatchInTheDocumentStatic()
@@ -187,8 +187,8 @@ public class UseStaticCellCodeFixTests
                     c.Output("count", {|#0:c.DynamicRegister(b, tick, "count")|});
                 }
             }
-            """, PW3002(0), PW3002(1), PW3002(2), PW3002(2)).Choosing(EquivalenceKeys.UseStaticLatch);
-        test.FixedState.ExpectedDiagnostics.AddRange(new[] { PW3002(0), PW3002(0) });
+            """, PW3002(0), PW3002(1), PW3002(2)).Choosing(EquivalenceKeys.UseStaticLatch);
+        test.FixedState.ExpectedDiagnostics.AddRange(new[] { PW3002(0) });
         await test.RunAsync();
     }
 

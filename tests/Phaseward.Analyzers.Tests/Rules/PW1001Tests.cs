@@ -148,8 +148,7 @@ public class PW1001Tests
             c.Output("q", net);
             """),
             // Same location, same ID, different messages: nothing to de-duplicate.
-            Pw1001("L1", "L0", "clk.High").WithLocation(0).WithLocation(0),
-            Pw1001("L2", "L1", "clk.High").WithLocation(0).WithLocation(0));
+            Pw1001("L1", "L0", "clk.High").WithLocation(0).WithLocation(0).FoundAtThisCall(2, "LoopChain", "L1, L2"));
 
     [Fact]
     public Task AlternatingPhasesInALoopAreClean()

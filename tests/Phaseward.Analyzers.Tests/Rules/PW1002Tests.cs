@@ -72,8 +72,8 @@ public class PW1002Tests
                 net = {|#0:c.DynamicRegister(net, clk, $"R{i}")|};
             c.Output("q", net);
             """),
-            Pw1002("R0.slave", "R0.master", "0-0", "clk", "96.6 ps", "120 ps", "-23.4 ps").WithLocation(0).WithLocation(0),
-            Pw1002("R1.slave", "R1.master", "0-0", "clk", "96.6 ps", "120 ps", "-23.4 ps").WithLocation(0).WithLocation(0));
+            Pw1002("R0.slave", "R0.master", "0-0", "clk", "96.6 ps", "120 ps", "-23.4 ps").WithLocation(0).WithLocation(0)
+                .FoundAtThisCall(2, "Loop", "R0.slave, R1.slave"));
 
     [Fact]
     public Task HelperInAnotherFileIsReportedAtTheCallInDescribe()

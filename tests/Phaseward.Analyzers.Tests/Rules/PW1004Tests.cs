@@ -96,13 +96,12 @@ public class PW1004Tests
         => Verify(Design("Lanes", """
             var clk = c.Clock("clk", 10.Nanoseconds());
             for (var i = 0; i < 2; i++)
-                Lane(c, clk, i);
+                {|#2:Lane(c, clk, i)|};
             """, """
             private static Clock Lane(Circuit c, Clock clk, int i)
                 => {|#0:c.ClockGate(clk, {|#1:c.StaticRegister(c.Input($"want{i}"), clk, $"en{i}")|}, name: $"lane{i}")|};
             """),
-            FromRegisterSlave("lane0", "en0", "en0.slave"),
-            FromRegisterSlave("lane1", "en1", "en1.slave"));
+            FromRegisterSlave("lane0", "en0", "en0.slave").WithLocation(2).FoundAtThisCall(2, "Lanes", "lane0, lane1"));
 
     [Fact]
     public Task GatesMadeByAHelperInALoopWithLatchedEnablesAreClean()
@@ -146,10 +145,9 @@ public class PW1004Tests
         => Verify(Design("Blocks", """
             var clk = c.Clock("clk", 10.Nanoseconds());
             foreach (var i in new[] { 0, 1 })
-                c.Place(new GatedLane(clk, latched: false), $"lane{i}");
+                {|#2:c.Place(new GatedLane(clk, latched: false), $"lane{i}")|};
             """) + LaneBlock,
-            FromRegisterSlave("lane0.gclk", "lane0.en_reg", "lane0.en_reg.slave"),
-            FromRegisterSlave("lane1.gclk", "lane1.en_reg", "lane1.en_reg.slave"));
+            FromRegisterSlave("lane0.gclk", "lane0.en_reg", "lane0.en_reg.slave").WithLocation(2).FoundAtThisCall(2, "Blocks", "lane0.gclk, lane1.gclk"));
 
     [Fact]
     public Task GatesInsideBlocksWithLatchedEnablesAreClean()

@@ -65,7 +65,7 @@ public class PW1005Tests
         // Three stages each: 82.8 ps round, period 166 ps. Every ring's devices come from the helper's three calls.
         => Verify(Design("Rings", """
             for (var i = 0; i < 2; i++)
-                Ring(c, $"r{i}");
+                {|#3:Ring(c, $"r{i}")|};
             """, """
             private static void Ring(Circuit c, string name)
             {
@@ -76,9 +76,8 @@ public class PW1005Tests
             }
             """),
             Pw1005("A feedback loop of 3 devices has no latch on it ('r0.a', 'r0.b', 'r0.inv1'): 3 inversions (odd): enabled, "
-                + "it oscillates with a period of about 166 ps (twice the loop's delay 82.8 ps)").WithLocation(0).WithLocation(1).WithLocation(2),
-            Pw1005("A feedback loop of 3 devices has no latch on it ('r1.a', 'r1.b', 'r1.inv1'): 3 inversions (odd): enabled, "
-                + "it oscillates with a period of about 166 ps (twice the loop's delay 82.8 ps)").WithLocation(0).WithLocation(1).WithLocation(2));
+                + "it oscillates with a period of about 166 ps (twice the loop's delay 82.8 ps)").WithLocation(0).WithLocation(1).WithLocation(2)
+                .WithLocation(3).FoundAtThisCall(2, "Rings", "'r0.a', 'r1.a'"));
 
     [Fact]
     public Task ARingBuiltInAForLoopIsOneFindingAtTheCallInTheLoop()
@@ -133,7 +132,7 @@ public class PW1005Tests
     private static string Placed(string name, bool registered) => Design(name, $$"""
         var clk = c.Clock("clk", 10.Nanoseconds());
         for (var i = 0; i < 2; i++)
-            c.Place(new WakeCell(clk, registered: {{(registered ? "true" : "false")}}), $"w{i}");
+            {|#3:c.Place(new WakeCell(clk, registered: {{(registered ? "true" : "false")}}), $"w{i}")|};
         """);
 
     [Fact]
@@ -141,9 +140,8 @@ public class PW1005Tests
         // Three stages each: 82.8 ps round, period 166 ps; both copies point at the block's three calls.
         => Verify(Placed("Cells", registered: false) + WakeCell,
             Pw1005("A feedback loop of 3 devices has no latch on it ('w0.wake', 'w0.sense', 'w0.held.inv1'): 3 inversions (odd): enabled, "
-                + "it oscillates with a period of about 166 ps (twice the loop's delay 82.8 ps)").WithLocation(0).WithLocation(1).WithLocation(2),
-            Pw1005("A feedback loop of 3 devices has no latch on it ('w1.wake', 'w1.sense', 'w1.held.inv1'): 3 inversions (odd): enabled, "
-                + "it oscillates with a period of about 166 ps (twice the loop's delay 82.8 ps)").WithLocation(0).WithLocation(1).WithLocation(2));
+                + "it oscillates with a period of about 166 ps (twice the loop's delay 82.8 ps)").WithLocation(0).WithLocation(1).WithLocation(2)
+                .WithLocation(3).FoundAtThisCall(2, "Cells", "'w0.wake', 'w1.wake'"));
 
     [Fact]
     public Task BlocksWhoseLoopGoesThroughARegisterAreClean()

@@ -42,7 +42,7 @@ public class PW2001Tests
                 }
             }
             """,
-            PW2001.WithLocation(1).WithLocation(0).WithArguments("3", "2", "188 ps", "130 ps", "2", "95 ps", ""))
+            PW2001.WithLocation(1).WithLocation(0).WithArguments("3", "2", "188 ps", "130 ps", "2", "95 ps", "", "n1", "n3", "Relay"))
             .RunAsync();
 
     [Fact]
@@ -85,7 +85,7 @@ public class PW2001Tests
                 }
             }
             """,
-            PW2001.WithLocation(0).WithLocation(0).WithArguments("6", "2", "543 ps", "376 ps", "2", "187 ps", ""))
+            PW2001.WithLocation(0).WithLocation(0).WithArguments("6", "2", "543 ps", "376 ps", "2", "187 ps", "", "tg1", "tg3", "Row"))
             .RunAsync();
 
     [Fact]
@@ -282,7 +282,7 @@ public class PW2001Tests
                 }
             }
             """,
-            PW2001.WithLocation(0).WithLocation(0).WithArguments("6", "4", "543 ps", "376 ps", "2", "187 ps", ""))
+            PW2001.WithLocation(0).WithLocation(0).WithArguments("6", "4", "543 ps", "376 ps", "2", "187 ps", "", "tg1", "tg5", "Row"))
             .WithEditorConfig("phaseward.max_series_pass_gates = 4")
             .RunAsync();
 
@@ -313,7 +313,7 @@ public class PW2001Tests
                 .WithEditorConfig("phaseward.max_series_pass_gates = " + value)
                 .RunAsync(),
             new PhasewardAnalyzerTest<PassGatePathAnalyzer>(ThreeGates.Replace("{|#9:Describe|}", "Describe"),
-                    PW2001.WithLocation(1).WithLocation(0).WithArguments("3", "2", "188 ps", "130 ps", "2", "95 ps", ""))
+                    PW2001.WithLocation(1).WithLocation(0).WithArguments("3", "2", "188 ps", "130 ps", "2", "95 ps", "", "tg1", "tg3", "Relay"))
                 .WithEditorConfig("phaseward.max_series_pass_gates = " + value)
                 .RunAsync());
 

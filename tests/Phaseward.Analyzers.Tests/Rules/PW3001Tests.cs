@@ -187,9 +187,8 @@ public class PW3001Tests
                     for (var i = 0; i < 3; i++)
                         c.Output($"wave_sample{i}", {|#0:c.DynamicLatch(c.Input($"wave_bit{i}"), burst.High, $"wave_hold{i}")|});
             """),
-            PW3001().WithLocation(1).WithMessage(Message("wave_hold0.x", "burst", "low", "unbounded")),
-            PW3001().WithLocation(1).WithMessage(Message("wave_hold1.x", "burst", "low", "unbounded")),
-            PW3001().WithLocation(1).WithMessage(Message("wave_hold2.x", "burst", "low", "unbounded")))
+            PW3001().WithLocation(1).WithMessage(Message("wave_hold0.x", "burst", "low", "unbounded"))
+                .FoundAtThisCall(3, "Capture", "wave_hold0.x, wave_hold1.x, wave_hold2.x"))
             .RunAsync();
 
     [Fact]

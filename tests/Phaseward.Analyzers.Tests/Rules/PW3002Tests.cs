@@ -85,10 +85,8 @@ public class PW3002Tests
 
                     c.Output("battery_carry", carry);
             """),
-            PW3002().WithMessage(Message("battery_count0.master.x", "500 µs", "1 ms", "housekeeping", "1.86 kHz")),
-            PW3002().WithMessage(Message("battery_count0.slave.x", "500 µs", "1 ms", "housekeeping", "1.86 kHz")),
-            PW3002().WithMessage(Message("battery_count1.master.x", "500 µs", "1 ms", "housekeeping", "1.86 kHz")),
-            PW3002().WithMessage(Message("battery_count1.slave.x", "500 µs", "1 ms", "housekeeping", "1.86 kHz")))
+            PW3002().WithMessage(Message("battery_count0.master.x", "500 µs", "1 ms", "housekeeping", "1.86 kHz"))
+                .FoundAtThisCall(4, "Housekeeping", "battery_count0.master.x, battery_count0.slave.x, battery_count1.master.x, ..."))
             .RunAsync();
 
     [Fact]
@@ -126,14 +124,14 @@ public class PW3002Tests
                 protected override void Describe(Circuit c)
                 {
                     var tick = {|#1:c.Clock("housekeeping", 1.Milliseconds())|};
-                    c.Output("count", Count(c, c.Input("count_enable"), tick));
+                    c.Output("count", {|#2:Count(c, c.Input("count_enable"), tick)|});
                 }
 
                 private static Net Count(Circuit c, Net enable, Clock clock)
                     => {|#0:c.DynamicRegister(enable, clock, "count")|};
             }
             """,
-            PW3002().WithMessage(Message("count.master.x", "500 µs", "1 ms", "housekeeping", "1.86 kHz")),
-            PW3002().WithMessage(Message("count.slave.x", "500 µs", "1 ms", "housekeeping", "1.86 kHz")))
+            PW3002().WithLocation(2).WithMessage(Message("count.master.x", "500 µs", "1 ms", "housekeeping", "1.86 kHz"))
+                .FoundAtThisCall(2, "Housekeeping", "count.master.x, count.slave.x"))
             .RunAsync();
 }

@@ -87,9 +87,7 @@ public class PW3003Tests
             """),
             new DiagnosticResult(RuleCatalog.ChargeSharing.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(0)
                 .WithMessage("When 'n1' conducts, floating node 'n0' (C1 = 4 fF) shares its charge with floating node 'n1' (C2 = 4 fF): "
-                    + "a 1.2 V level settles at 600 mV, a droop of 600 mV, more than the tolerated 300 mV"),
-            new DiagnosticResult(RuleCatalog.ChargeSharing.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(0)
-                .WithMessage("When 'n2' conducts, floating node 'n1' (C1 = 4 fF) shares its charge with floating node 'n2' (C2 = 4.5 fF): "
-                    + "a 1.2 V level settles at 565 mV, a droop of 635 mV, more than the tolerated 300 mV"))
+                    + "a 1.2 V level settles at 600 mV, a droop of 600 mV, more than the tolerated 300 mV")
+                .FoundAtThisCall(2, "Sharing", "n1, n2"))
             .RunAsync();
 }

@@ -76,7 +76,7 @@ public class PW3004Tests
                 {
                     var clk = c.Clock("clk", 10.Nanoseconds());
                     for (var i = 0; i < 2; i++)
-                        c.Output($"q{i}", c.Inverter(Lane(c, clk, i)));
+                        c.Output($"q{i}", c.Inverter({|#2:Lane(c, clk, i)|}));
                 }
 
                 private static Net Lane(Circuit c, Clock clk, int i)
@@ -88,8 +88,8 @@ public class PW3004Tests
                 }
             }
             """,
-            Pw3004().WithArguments("n0.tg1", "9 kΩ", "n0.tg2", "9 kΩ", "n0", "for 60 ps per period (clk.High and clk.Low overlap)", "600 mV", "66.7 µA"),
-            Pw3004().WithArguments("n1.tg1", "9 kΩ", "n1.tg2", "9 kΩ", "n1", "for 60 ps per period (clk.High and clk.Low overlap)", "600 mV", "66.7 µA"))
+            Pw3004().WithArguments("n0.tg1", "9 kΩ", "n0.tg2", "9 kΩ", "n0", "for 60 ps per period (clk.High and clk.Low overlap)", "600 mV", "66.7 µA")
+                .WithLocation(2).FoundAtThisCall(2, "Lanes", "n0.tg1, n1.tg1"))
             .RunAsync();
 
     private static string BusBits(bool selected) => $$"""
@@ -100,7 +100,7 @@ public class PW3004Tests
             protected override void Describe(Circuit c)
             {
                 for (var bit = 0; bit < 2; bit++)
-                    c.Place(new BusBit({{(selected ? "true" : "false")}}), $"bit{bit}");
+                    {|#2:c.Place(new BusBit({{(selected ? "true" : "false")}}), $"bit{bit}")|};
             }
         }
 
@@ -122,13 +122,12 @@ public class PW3004Tests
         """;
 
     [Fact]
-    public Task BusBitsPlacedAsBlocksInALoopAreOneFindingPerNode()
-        // 9 kΩ each side: 600 mV, 66.7 µA, in each placed bit; both squiggles on the block's two gate calls.
+    public Task BusBitsPlacedAsBlocksInALoopAreOneFindingPerCause()
+        // 9 kΩ each side: 600 mV, 66.7 µA, in each placed bit: one diagnostic for the two instances, the Place call related.
         => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(BusBits(selected: false),
-            Pw3004().WithMessage("'bit0.bus.tg1' (9 kΩ) and 'bit0.bus.tg2' (9 kΩ) drive node 'bit0.bus' together whenever 'bit0.pick' and 'bit0.other' are both high "
-                + "(not stated exclusive): when they disagree the node sits at 600 mV (divider, 'bit0.bus.tg1' pulling up) and 66.7 µA flows from rail to rail"),
-            Pw3004().WithMessage("'bit1.bus.tg1' (9 kΩ) and 'bit1.bus.tg2' (9 kΩ) drive node 'bit1.bus' together whenever 'bit1.pick' and 'bit1.other' are both high "
-                + "(not stated exclusive): when they disagree the node sits at 600 mV (divider, 'bit1.bus.tg1' pulling up) and 66.7 µA flows from rail to rail"))
+            Pw3004().WithLocation(2).WithMessage("'bit0.bus.tg1' (9 kΩ) and 'bit0.bus.tg2' (9 kΩ) drive node 'bit0.bus' together whenever 'bit0.pick' and 'bit0.other' are both high "
+                + "(not stated exclusive): when they disagree the node sits at 600 mV (divider, 'bit0.bus.tg1' pulling up) and 66.7 µA flows from rail to rail"
+                + "; found 2 times at this call in design 'Bits': bit0.bus.tg1, bit1.bus.tg1"))
             .RunAsync();
 
     [Fact]

@@ -80,7 +80,7 @@ public class PW3005Tests
                 {
                     var clk = c.Clock("clk", 10.Nanoseconds());
                     for (var i = 0; i < 4; i++)
-                        c.Output($"q{i}", c.Inverter(Bit(c, i, clk)));
+                        c.Output($"q{i}", c.Inverter({|#2:Bit(c, i, clk)|}));
                 }
 
                 private static Net Bit(Circuit c, int i, Clock clk)
@@ -92,8 +92,8 @@ public class PW3005Tests
                 }
             }
             """,
-            Pw3005().WithArguments("bit1.keeper", "8 kΩ", "bit1", "9 kΩ", "bit1", "635 mV", "480 mV", "600 mV", "120 mV"),
-            Pw3005().WithArguments("bit3.keeper", "8 kΩ", "bit3", "9 kΩ", "bit3", "635 mV", "480 mV", "600 mV", "120 mV"))
+            Pw3005().WithArguments("bit1.keeper", "8 kΩ", "bit1", "9 kΩ", "bit1", "635 mV", "480 mV", "600 mV", "120 mV")
+                .WithLocation(2).FoundAtThisCall(2, "Bits", "bit1.keeper, bit3.keeper"))
             .RunAsync();
 
     [Fact]
@@ -114,7 +114,7 @@ public class PW3005Tests
             protected override void Describe(Circuit c)
             {
                 foreach (var bit in new[] { 0, 1 })
-                    c.Place(new KeptBit({{(strong ? "10.Kiloohms()" : "null")}}), $"bit{bit}");
+                    {|#2:c.Place(new KeptBit({{(strong ? "10.Kiloohms()" : "null")}}), $"bit{bit}")|};
             }
         }
 
@@ -137,8 +137,8 @@ public class PW3005Tests
     public Task KeptBitsPlacedAsBlocksInALoopAreEachChecked()
         // 1.2 V × 9 kΩ / (9 + 10) kΩ = 568 mV, above 480 mV, in each placed bit.
         => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(KeptBits(strong: true),
-            Pw3005().WithArguments("bit0.x.keeper", "10 kΩ", "bit0.x", "9 kΩ", "bit0.x", "568 mV", "480 mV", "600 mV", "120 mV"),
-            Pw3005().WithArguments("bit1.x.keeper", "10 kΩ", "bit1.x", "9 kΩ", "bit1.x", "568 mV", "480 mV", "600 mV", "120 mV"))
+            Pw3005().WithArguments("bit0.x.keeper", "10 kΩ", "bit0.x", "9 kΩ", "bit0.x", "568 mV", "480 mV", "600 mV", "120 mV")
+                .WithLocation(2).FoundAtThisCall(2, "Bits", "bit0.x.keeper, bit1.x.keeper"))
             .RunAsync();
 
     [Fact]

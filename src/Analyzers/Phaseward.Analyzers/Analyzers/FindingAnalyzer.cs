@@ -52,7 +52,14 @@ public abstract class FindingAnalyzer : PhasewardAnalyzer
         if (context.Elaboration.Netlist is not { } netlist)
             return;
         var report = Checker.Check(netlist, Rules, context.Options.Policy, context.CancellationToken);
+        var mapped = new List<(Finding, Diagnostic)>(report.Findings.Count);
         foreach (var finding in report.Findings)
-            context.Report(context.Mapper.FromFinding(finding));
+        {
+            if (context.Mapper.FromFinding(finding) is { } diagnostic)
+                mapped.Add((finding, diagnostic));
+        }
+
+        foreach (var diagnostic in InstanceGrouping.Group(mapped, netlist.DesignName, context.Mapper.Exact))
+            context.Report(diagnostic);
     }
 }

@@ -161,7 +161,11 @@ public sealed class PassGateChainRule : Rule
         return new Finding(
             RuleCatalog.SeriesPassGates,
             gate.Span,
-            new object[] { chain.Length, limit, chain.Elmore, fifty, spacing, restored, chain.AssumesUnknownBranchesConduct ? ExclusivityAssumption : "" },
+            new object[]
+            {
+                chain.Length, limit, chain.Elmore, fifty, spacing, restored, chain.AssumesUnknownBranchesConduct ? ExclusivityAssumption : "",
+                chain.First.Name, gate.Name, netlist.DesignName,
+            },
             new[] { chain.First.Span },
             properties);
     }
