@@ -15,7 +15,7 @@ using Phaseward.Analyzers;
 using Phaseward.Analyzers.Diagnostics;
 using Phaseward.Analyzers.Elaboration;
 using Phaseward.Checking;
-using RuleSet = Phaseward.Checking.RuleSet;
+
 
 namespace Phaseward.Benchmarks;
 
@@ -133,7 +133,7 @@ public static class Program
             var rulesGcBefore = GcCounts.Now();
             var total = 0.0;
             var findings = new List<Finding>();
-            foreach (var rule in RuleSet.All)
+            foreach (var rule in Checker.Rules)
             {
                 var ruleAllocated = GC.GetAllocatedBytesForCurrentThread();
                 var ms = Samples.Time(() => findings.AddRange(Checker.Check(netlist, new[] { rule }, RulePolicy.Default).Findings));
@@ -322,7 +322,7 @@ public static class Program
                 throw new InvalidOperationException($"Generated design elaborated to {netlist.Devices.Count} devices (expected {Devices}) with {result.Issues.Count} issue(s): " +
                                                     string.Join("; ", result.Issues.Take(3).Select(i => i.RuleId + " " + string.Join(", ", i.Arguments))));
             CheckReport? check = null;
-            var rulesMs = Samples.Time(() => check = Checker.Check(netlist, RuleSet.All, RulePolicy.Default, CancellationToken.None));
+            var rulesMs = Samples.Time(() => check = Checker.Check(netlist, Checker.Rules, RulePolicy.Default, CancellationToken.None));
             var mapper = new DiagnosticMapper(session, design);
             var mappingMs = Samples.Time(() =>
             {

@@ -3,6 +3,7 @@ using System.IO;
 using System.Linq;
 using System.Reflection;
 using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Diagnostics;
 using Phaseward.Analyzers.Diagnostics;
 using Phaseward.Analyzers.Tests.Elaboration;
 using Phaseward.Checking;
@@ -60,6 +61,8 @@ public class DescriptorTests
             .Where(p => p.PropertyType == typeof(RuleDescriptor))
             .Select(p => (RuleDescriptor)p.GetValue(null)!)
             .ToList();
+        Assert.Equal(catalog.Select(r => r.Id).Order(StringComparer.Ordinal), RuleCatalog.All.Select(r => r.Id));
+        Assert.Equal(catalog.Count, catalog.Select(r => r.Id).Distinct().Count());
         Assert.Equal(catalog.Select(r => r.Id).Order(StringComparer.Ordinal), Descriptors.Declared.Select(d => d.Id).Order(StringComparer.Ordinal));
         foreach (var rule in catalog)
         {
@@ -81,5 +84,63 @@ public class DescriptorTests
         Assert.Equal(Descriptors.Declared.Select(d => d.Id).Order(StringComparer.Ordinal), listed.Order(StringComparer.Ordinal));
         var pages = Directory.GetFiles(Repository.PathOf("docs", "rules"), "PW*.md").Select(Path.GetFileNameWithoutExtension);
         Assert.Equal(Descriptors.Declared.Select(d => d.Id).Order(StringComparer.Ordinal), pages.Order(StringComparer.Ordinal));
+    }
+
+    [Fact]
+    public void ReleaseFilesTrackNoUnknownRule()
+    {
+        var tracked = new[] { "AnalyzerReleases.Shipped.md", "AnalyzerReleases.Unshipped.md" }
+            .SelectMany(f => File.ReadAllLines(Repository.PathOf("src", "Analyzers", "Phaseward.Analyzers", f)))
+            .Where(l => l.StartsWith("PW", StringComparison.Ordinal))
+            .Select(l => l.Substring(0, 6));
+        Assert.Equal(RuleCatalog.All.Select(r => r.Id), tracked.Order(StringComparer.Ordinal));
+    }
+
+    [Fact]
+    public void EveryRuleRunsInTheAnalyzerOfItsFamily()
+    {
+        // Every rule class is in the rule set (a rule written but not listed would never run) ...
+        var ruleTypes = typeof(Rule).Assembly.GetTypes().Where(t => t.IsSubclassOf(typeof(Rule)) && !t.IsAbstract);
+        Assert.Equal(ruleTypes.Select(t => t.FullName).Order(StringComparer.Ordinal),
+            Checker.Rules.Select(r => r.GetType().FullName).Order(StringComparer.Ordinal));
+
+        // ... each reports findings of one family only, so exactly one family analyzer runs it ...
+        foreach (var rule in Checker.Rules)
+            Assert.Single(rule.Descriptors.Select(d => d.Family).Distinct());
+
+        // ... and each family analyzer supports exactly its family's registry entries (PW9xxx: the elaboration analyzer).
+        var analyzers = typeof(FindingAnalyzer).Assembly.GetTypes()
+            .Where(t => !t.IsAbstract && typeof(DiagnosticAnalyzer).IsAssignableFrom(t))
+            .Select(t => (DiagnosticAnalyzer)Activator.CreateInstance(t)!)
+            .ToList();
+        foreach (var entry in RuleCatalog.All)
+        {
+            var supporting = analyzers.Where(a => a.SupportedDiagnostics.Any(d => d.Id == entry.Id)).ToList();
+            var analyzer = Assert.Single(supporting);
+            if (analyzer is FindingAnalyzer findingAnalyzer)
+                Assert.Contains(findingAnalyzer.Rules, r => r.Descriptors.Contains(entry));
+            else
+                Assert.Equal(RuleFamily.Elaboration, entry.Family);
+        }
+    }
+
+    [Theory]
+    [InlineData("PW1001", RuleFamily.Timing)]
+    [InlineData("PW10011", RuleFamily.ClockPhases)]
+    [InlineData("XW1001", RuleFamily.ClockPhases)]
+    [InlineData("PW1a01", RuleFamily.ClockPhases)]
+    public void AnEntryWhoseIdDoesNotNameItsFamilyIsRefused(string id, RuleFamily family)
+    {
+        var error = Assert.Throws<ArgumentException>(() => new RuleDescriptor(id, family, Severity.Warning, "t", "{0}", "d"));
+        Assert.Contains(id, error.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void EveryCheckingRuleSaysItsFiguresAreEstimatesOrThatItIsStructural()
+    {
+        foreach (var entry in RuleCatalog.All.Where(e => e.Family != RuleFamily.Elaboration))
+            Assert.True(entry.Description.Contains("estimate", StringComparison.OrdinalIgnoreCase)
+                || entry.Description.Contains("Structural check", StringComparison.Ordinal),
+                $"{entry.Id}'s description neither calls its figures estimates nor says it is a structural check");
     }
 }

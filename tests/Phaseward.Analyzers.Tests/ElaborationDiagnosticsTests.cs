@@ -42,7 +42,7 @@ public class NotElaboratedTests
     [Fact]
     public Task EachConstructOutsideTheSubsetIsReportedOnce()
         => new PhasewardAnalyzerTest<ElaborationAnalyzer>(Source,
-                Enumerable.Range(0, 5).Select(i => new DiagnosticResult(RuleIds.NotElaborated, DiagnosticSeverity.Info).WithLocation(i)).ToArray())
+                Enumerable.Range(0, 5).Select(i => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(i)).ToArray())
             .RunAsync();
 
     [Fact]
@@ -57,7 +57,7 @@ public class NotElaboratedTests
         Assert.Equal(new[] { "after", "last" }, result.Netlist!.Devices.Select(d => d.Name));
         Assert.Single(result.Netlist.Outputs);
         Assert.Equal(5, result.Issues.Count);
-        Assert.All(result.Issues, i => Assert.Equal(RuleIds.NotElaborated, i.RuleId));
+        Assert.All(result.Issues, i => Assert.Equal(RuleCatalog.NotElaborated.Id, i.RuleId));
         Assert.Contains(result.Issues, i => i.Arguments[0].Contains("Environment.ProcessorCount"));
     }
 
@@ -76,7 +76,7 @@ public class NotElaboratedTests
                         c.Inverter(a, {|#0:Guid.NewGuid()|}.ToString());
                 }
             }
-            """, new DiagnosticResult(RuleIds.NotElaborated, DiagnosticSeverity.Info).WithLocation(0)).RunAsync();
+            """, new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(0)).RunAsync();
 
     [Fact]
     public Task SilentWithoutTheDsl()
@@ -113,7 +113,7 @@ public class ElaborationBudgetTests
     [Fact]
     public Task EndlessLoopStopsAtAConfiguredBudget()
         => new PhasewardAnalyzerTest<ElaborationAnalyzer>(EndlessLoop,
-                new DiagnosticResult(RuleIds.ElaborationBudgetExceeded, DiagnosticSeverity.Warning).WithLocation(0)
+                new DiagnosticResult(RuleCatalog.ElaborationBudgetExceeded.Id, DiagnosticSeverity.Warning).WithLocation(0)
                     .WithArguments("Endless", "the step budget of 1000 steps (loop iterations and calls; phaseward.elaboration_step_budget) is used up"))
             .WithEditorConfig("phaseward.elaboration_step_budget = 1000")
             .RunAsync();
@@ -133,7 +133,7 @@ public class ElaborationBudgetTests
                     }
                 }
                 """,
-                new DiagnosticResult(RuleIds.ElaborationBudgetExceeded, DiagnosticSeverity.Warning).WithLocation(0)
+                new DiagnosticResult(RuleCatalog.ElaborationBudgetExceeded.Id, DiagnosticSeverity.Warning).WithLocation(0)
                     .WithArguments("Runaway", "the device budget of 500 devices (or nets; phaseward.elaboration_device_budget) is used up"))
             .WithEditorConfig("phaseward.elaboration_device_budget = 500")
             .RunAsync();
@@ -143,7 +143,7 @@ public class ElaborationBudgetTests
     {
         var result = new InMemoryDesigns(("/src/Endless.cs", EndlessLoop.Replace("{|#0:", "").Replace("|}", ""))).CompileTime("Endless");
         var issue = Assert.Single(result.Issues);
-        Assert.Equal(RuleIds.ElaborationBudgetExceeded, issue.RuleId);
+        Assert.Equal(RuleCatalog.ElaborationBudgetExceeded.Id, issue.RuleId);
         Assert.Equal(ElaborationLimits.DefaultStepBudget + 1, result.Steps);
         Assert.Equal(new[] { "before" }, result.Netlist!.Devices.Select(d => d.Name));
     }
@@ -160,7 +160,7 @@ public class ElaborationBudgetTests
                 private static void Chain(Circuit c, Net x, int depth) => {|#0:Chain(c, c.Buffer(x), depth + 1)|};
             }
             """,
-            new DiagnosticResult(RuleIds.ElaborationBudgetExceeded, DiagnosticSeverity.Warning).WithLocation(0)
+            new DiagnosticResult(RuleCatalog.ElaborationBudgetExceeded.Id, DiagnosticSeverity.Warning).WithLocation(0)
                 .WithArguments("Deep", "calls nest deeper than the limit of 10 (phaseward.elaboration_recursion_limit)"))
             .WithEditorConfig("phaseward.elaboration_recursion_limit = 10")
             .RunAsync();
@@ -211,7 +211,7 @@ public class DesignThrowsTests
                 }
             }
             """,
-            new DiagnosticResult(RuleIds.DesignThrows, DiagnosticSeverity.Error).WithLocation(0)
+            new DiagnosticResult(RuleCatalog.DesignThrows.Id, DiagnosticSeverity.Error).WithLocation(0)
                 .WithArguments("Leaky", "'total' must be a positive, finite value (was -2 fF).\nParameter name: total".Replace("\nParameter name: total", " (Parameter 'total')")))
             .RunAsync();
 
@@ -230,7 +230,7 @@ public class DesignThrowsTests
                 }
             }
             """,
-            new DiagnosticResult(RuleIds.DesignThrows, DiagnosticSeverity.Error).WithLocation(0).WithLocation(1));
+            new DiagnosticResult(RuleCatalog.DesignThrows.Id, DiagnosticSeverity.Error).WithLocation(0).WithLocation(1));
         test.TestState.Sources.Add("""
             using Phaseward;
 
@@ -259,7 +259,7 @@ public class DesignThrowsTests
             }
             """)).CompileTime("Repeat");
         var issue = Assert.Single(result.Issues);
-        Assert.Equal(RuleIds.DesignThrows, issue.RuleId);
+        Assert.Equal(RuleCatalog.DesignThrows.Id, issue.RuleId);
         // i = 0 throws too (a capacitance must be positive). 100 iterations of four steps each (iteration, Femtofarads,
         // the Capacitance negation operator, SetCapacitance) plus c.Input, then elaboration stops.
         Assert.Equal(1 + 4 * Interpreter.MaxThrows, result.Steps);
@@ -286,7 +286,7 @@ public class DesignThrowsTests
             }
             """)).CompileTime("Guarded");
         var issue = Assert.Single(result.Issues);
-        Assert.Equal(RuleIds.DesignThrows, issue.RuleId);
+        Assert.Equal(RuleCatalog.DesignThrows.Id, issue.RuleId);
         Assert.Equal("ArgumentOutOfRangeException: need at least one bit", issue.Arguments[1]);
         Assert.Equal(new[] { "first" }, result.Netlist!.Devices.Select(d => d.Name));
     }
@@ -308,8 +308,33 @@ public class InvalidOptionTests
                 protected override void {|#0:Describe|}(Circuit c) => c.Inverter(c.Input("a"));
             }
             """,
-            new DiagnosticResult(RuleIds.InvalidOption, DiagnosticSeverity.Warning).WithLocation(0).WithArguments(key, value, expected, fallback))
+            new DiagnosticResult(RuleCatalog.InvalidOption.Id, DiagnosticSeverity.Warning).WithLocation(0).WithArguments(key, value, expected, fallback))
             .WithEditorConfig(key + " = " + value)
+            .RunAsync();
+
+    [Fact]
+    public Task ABadValueIsReportedOncePerFileHoweverManyDesignsItHolds()
+        => new PhasewardAnalyzerTest<ElaborationAnalyzer>("""
+            using Phaseward;
+
+            public sealed class First : Design
+            {
+                protected override void {|#0:Describe|}(Circuit c) => c.Inverter(c.Input("a"));
+            }
+
+            public sealed class Second : Design
+            {
+                protected override void Describe(Circuit c) => c.Inverter(c.Input("b"));
+            }
+
+            public sealed class Third : Design
+            {
+                protected override void Describe(Circuit c) => c.Inverter(c.Input("c"));
+            }
+            """,
+            new DiagnosticResult(RuleCatalog.InvalidOption.Id, DiagnosticSeverity.Warning).WithLocation(0)
+                .WithArguments("phaseward.elaboration_recursion_limit", "deep", "a whole number from 1 to 512 (for example 64)", "64"))
+            .WithEditorConfig("phaseward.elaboration_recursion_limit = deep")
             .RunAsync();
 
     [Fact]

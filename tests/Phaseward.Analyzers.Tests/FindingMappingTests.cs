@@ -57,7 +57,7 @@ public class FindingMappingTests
         Assert.Equal("/src/Split.cs", first.Location.SourceTree!.FilePath);
         Assert.Equal("c.Inverter(a, \"first\")", first.Location.SourceTree.GetText().ToString(first.Location.SourceSpan));
         // The message is the descriptor's format (PW9001's here) filled with the finding's arguments.
-        Assert.Equal(string.Format(RuleTexts.NotElaboratedMessage, "Inverter", "first", "Split"), first.GetMessage());
+        Assert.Equal(string.Format(RuleCatalog.NotElaborated.MessageFormat, "Inverter", "first", "Split"), first.GetMessage());
 
         // "second" is made in a helper in another file: reported at the call in Describe that led there, with the
         // helper's call as an additional location, then the finding's related location.
@@ -98,7 +98,7 @@ public class FindingMappingTests
     /// It borrows PW9001's descriptor, since the mapping only needs an ID that has a diagnostic descriptor.</summary>
     private sealed class EveryDeviceRule : Rule
     {
-        private static readonly RuleDescriptor Descriptor = new(RuleIds.NotElaborated, "test", "{0} {1} from {2}", RuleCategories.Elaboration, Severity.Info, "test");
+        private static readonly RuleDescriptor Descriptor = new(RuleCatalog.NotElaborated.Id, RuleFamily.Elaboration, Severity.Info, "test", "{0} {1} from {2}", "test");
 
         public override IReadOnlyList<RuleDescriptor> Descriptors { get; } = new[] { Descriptor };
 
@@ -111,7 +111,9 @@ public class FindingMappingTests
 #pragma warning disable RS1001 // Missing DiagnosticAnalyzerAttribute (test-only analyzer, see above)
     private sealed class EveryDeviceAnalyzer : FindingAnalyzer
     {
-        protected override IReadOnlyList<Rule> Rules { get; } = new Rule[] { new EveryDeviceRule() };
+        protected override RuleFamily Family => RuleFamily.Elaboration;
+
+        internal override IReadOnlyList<Rule> Rules { get; } = new Rule[] { new EveryDeviceRule() };
     }
 #pragma warning restore RS1001
 }

@@ -116,7 +116,7 @@ public class SuppressionTests
         var diagnostics = await analysis.GetAnalyzerDiagnosticsAsync(CancellationToken.None);
 
         var diagnostic = Assert.Single(diagnostics);
-        Assert.Equal(RuleIds.SeriesPassGates, diagnostic.Id);
+        Assert.Equal(RuleCatalog.SeriesPassGates.Id, diagnostic.Id);
         // It sits inside Describe, at the last gate of the chain.
         Assert.Equal("c.TransmissionGate(b, enable, \"c\")", diagnostic.Location.SourceTree!.GetText().ToString(diagnostic.Location.SourceSpan));
         return diagnostic;

@@ -64,7 +64,7 @@ public sealed class CommandLineTests : IDisposable
     public void ResponseFilesHoldArguments()
     {
         var rsp = Path.Combine(directory, "burst.rsp");
-        File.WriteAllText(rsp, $"--design\n{nameof(BurstCapture)}\n--error\n{RuleIds.DynamicNodeOnGatedClock}\n");
+        File.WriteAllText(rsp, $"--design\n{nameof(BurstCapture)}\n--error\n{RuleCatalog.DynamicNodeOnGatedClock.Id}\n");
         var run = Of(QuorvaneDll, "@" + rsp);
         Assert.Equal(ReportCommand.ErrorFindings, run.ExitCode);
         Assert.Contains("error     PW3001", run.Out);
@@ -78,10 +78,10 @@ public sealed class CommandLineTests : IDisposable
     [Fact]
     public void ALaterSeverityOptionWinsForTheSameRule()
     {
-        var id = RuleIds.DynamicNodeOnGatedClock;
+        var id = RuleCatalog.DynamicNodeOnGatedClock.Id;
         Assert.Equal(ReportCommand.Clean, Of(QuorvaneDll, "--design", nameof(BurstCapture), "--error", "*", "--warning", id).ExitCode);
         Assert.Equal(ReportCommand.ErrorFindings, Of(QuorvaneDll, "--design", nameof(BurstCapture), "--warning", id, "--error", "*").ExitCode);
-        var none = Of(QuorvaneDll, "--design", nameof(BurstCapture), "--error", id, "--none", $"{RuleIds.SameWindowLatches},{id}");
+        var none = Of(QuorvaneDll, "--design", nameof(BurstCapture), "--error", id, "--none", $"{RuleCatalog.SameWindowLatches.Id},{id}");
         Assert.Equal(ReportCommand.Clean, none.ExitCode);
         Assert.Contains("left out: severity none", none.Out);
         Assert.DoesNotContain(none.Out.Split('\n'), l => l.Contains(id + "  ", StringComparison.Ordinal));

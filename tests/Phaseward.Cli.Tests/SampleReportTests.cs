@@ -80,7 +80,7 @@ public sealed class SampleReportTests : IDisposable
         var run = Of(QuorvaneDll, "--design", nameof(ChannelSelect), "--design", nameof(Housekeeping));
 
         var channel = new ChannelSelect().Check();
-        var pw2001 = Assert.Single(channel.Findings, f => f.RuleId == RuleIds.SeriesPassGates);
+        var pw2001 = Assert.Single(channel.Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
         var elmore = new Time(double.Parse(pw2001.Properties[PassGateChainRule.ElmoreDelayProperty], CultureInfo.InvariantCulture));
         var chainRow = run.Out.Split('\n').Single(l => l.Contains("TOO LONG", StringComparison.Ordinal));
         Assert.Contains(elmore.ToString(), chainRow);          // the Elmore delay in PW2001's message
@@ -198,7 +198,7 @@ public sealed class SampleReportTests : IDisposable
     {
         var strict = Of(QuorvaneDll, "--design", nameof(ChannelSelect), "--max-series-pass-gates", "10");
         Assert.Equal(0, strict.ExitCode);
-        Assert.DoesNotContain(RuleIds.SeriesPassGates + "  ", strict.Out);
+        Assert.DoesNotContain(RuleCatalog.SeriesPassGates.Id + "  ", strict.Out);
         Assert.Contains("Findings: none", strict.Out);
 
         var bad = Of(QuorvaneDll, "--min-race-margin", "5");
@@ -222,7 +222,7 @@ public sealed class SampleReportTests : IDisposable
         // Two root clocks of 2 ns, 40 % high, the second offset by 1 ns: phases 200 ps apart (> the 30 ps skew).
         Assert.Empty(new TwoPhaseTally().Check().Findings);
         var crossing = Assert.Single(new RadioHandoff().Check().Findings);
-        Assert.Equal(RuleIds.ClockCrossing, crossing.RuleId);
+        Assert.Equal(RuleCatalog.ClockCrossing.Id, crossing.RuleId);
         Assert.Contains("'tx' on clock 'radio' takes data from latch 'sample.slave' on clock 'sensor'", crossing.Message);
         Assert.Empty(new RadioHandoffSynchronized().Check().Findings);
     }
@@ -232,7 +232,7 @@ public sealed class SampleReportTests : IDisposable
     {
         // The arming register's slave opens on the rising edge, while the gate passes the 10 ns sample clock (high over [0, 5 ns)).
         var gate = Assert.Single(new BurstGate().Check().Findings);
-        Assert.Equal(RuleIds.ClockGateEnable, gate.RuleId);
+        Assert.Equal(RuleCatalog.ClockGateEnable.Id, gate.RuleId);
         Assert.Contains("Clock gate 'burst' passes clock 'sample' during [0 s, 5 ns) (while it is high), but its enable 'burst_armed' can change during [0 s, ", gate.Message);
         Assert.Contains("(from latch 'burst_armed.slave', transparent in sample.High", gate.Message);
         Assert.Empty(new BurstGateLatched().Check().Findings);

@@ -27,7 +27,7 @@ public sealed class SeverityTests : IDisposable
     [Fact]
     public void ErrorOptionMakesTheExitCodeOne()
     {
-        var run = Of(QuorvaneDll, "--design", nameof(BurstCapture), "--error", RuleIds.DynamicNodeOnGatedClock);
+        var run = Of(QuorvaneDll, "--design", nameof(BurstCapture), "--error", RuleCatalog.DynamicNodeOnGatedClock.Id);
         Assert.Equal(ReportCommand.ErrorFindings, run.ExitCode);
         Assert.Contains("error     PW3001", run.Out);
         Assert.Contains("1 at error severity", run.Out);

@@ -50,24 +50,24 @@ public sealed class EditorConfigTests
         var messages = build.PhasewardMessages;
 
         // Control: the same designs without the .editorconfig report PW1001 and PW2001 as warnings.
-        Assert.Contains(package.Baseline.PhasewardMessages, m => m.Id == RuleIds.SameWindowLatches && m.Severity == "warning");
-        Assert.Contains(package.Baseline.PhasewardMessages, m => m.Id == RuleIds.SeriesPassGates && m.Severity == "warning");
+        Assert.Contains(package.Baseline.PhasewardMessages, m => m.Id == RuleCatalog.SameWindowLatches.Id && m.Severity == "warning");
+        Assert.Contains(package.Baseline.PhasewardMessages, m => m.Id == RuleCatalog.SeriesPassGates.Id && m.Severity == "warning");
 
         // severity = none: gone.
-        Assert.DoesNotContain(messages, m => m.Id == RuleIds.SameWindowLatches);
+        Assert.DoesNotContain(messages, m => m.Id == RuleCatalog.SameWindowLatches.Id);
         // severity = error: an error at the same place, and the build fails.
         var (line, column) = FrostlineDesigns.HeaterHold.ExpectedPosition;
-        var error = Assert.Single(messages, m => m.Id == RuleIds.DynamicNodeOnGatedClock);
+        var error = Assert.Single(messages, m => m.Id == RuleCatalog.DynamicNodeOnGatedClock.Id);
         Assert.Equal(("error", FrostlineDesigns.HeaterHold.FileName, line, column), (error.Severity, Path.GetFileName(error.File), error.Line, error.Column));
         Assert.True(build.ExitCode != 0, build.Output);
 
         // phaseward.max_series_pass_gates: 10 allows SprinklerRoute's six gates, 5 does not allow CellarRoute's.
-        var passGates = Assert.Single(messages, m => m.Id == RuleIds.SeriesPassGates);
+        var passGates = Assert.Single(messages, m => m.Id == RuleCatalog.SeriesPassGates.Id);
         Assert.Equal("CellarRoute.cs", Path.GetFileName(passGates.File));
         Assert.StartsWith("6 pass gates in series without a restoring stage (limit 5)", passGates.Message, StringComparison.Ordinal);
 
         // An invalid value: PW9004 names the key and the value, in the file the key applies to.
-        var invalid = Assert.Single(messages, m => m.Id == RuleIds.InvalidOption);
+        var invalid = Assert.Single(messages, m => m.Id == RuleCatalog.InvalidOption.Id);
         Assert.Equal(("warning", FrostlineDesigns.HeaterHold.FileName), (invalid.Severity, Path.GetFileName(invalid.File)));
         Assert.Contains("'phaseward.min_timing_slack'", invalid.Message, StringComparison.Ordinal);
         Assert.Contains("'soon'", invalid.Message, StringComparison.Ordinal);
@@ -75,10 +75,10 @@ public sealed class EditorConfigTests
         // The suppressed one: absent from the console, present in the SARIF log as suppressed in source.
         var (_, results, _) = SarifLog.Read(build.SarifPath);
         var suppressed = Assert.Single(results, r => r.IsPhaseward && r.Suppressed);
-        Assert.Equal((RuleIds.SeriesPassGates, "VentRoute.cs"), (suppressed.RuleId, suppressed.FileName));
+        Assert.Equal((RuleCatalog.SeriesPassGates.Id, "VentRoute.cs"), (suppressed.RuleId, suppressed.FileName));
         Assert.DoesNotContain(messages, m => m.File.EndsWith("VentRoute.cs", StringComparison.Ordinal));
 
-        Assert.Equal(new[] { RuleIds.SeriesPassGates, RuleIds.DynamicNodeOnGatedClock, RuleIds.InvalidOption }.Order(StringComparer.Ordinal),
+        Assert.Equal(new[] { RuleCatalog.SeriesPassGates.Id, RuleCatalog.DynamicNodeOnGatedClock.Id, RuleCatalog.InvalidOption.Id }.Order(StringComparer.Ordinal),
             messages.Select(m => m.Id).Order(StringComparer.Ordinal));
     }
 }

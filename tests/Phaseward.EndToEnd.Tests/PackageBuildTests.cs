@@ -79,11 +79,11 @@ public sealed class PackageBuildTests
         // The messages carry the design's own names and the rule's figures.
         Assert.Equal(
             "Latch 'late' takes its data from latch 'early' and both are transparent in tick.High: data can run through both in one phase",
-            Assert.Single(messages, m => m.Id == RuleIds.SameWindowLatches).Message);
+            Assert.Single(messages, m => m.Id == RuleCatalog.SameWindowLatches.Id).Message);
         Assert.StartsWith("6 pass gates in series without a restoring stage (limit 2): Elmore delay ",
-            Assert.Single(messages, m => m.Id == RuleIds.SeriesPassGates).Message, StringComparison.Ordinal);
+            Assert.Single(messages, m => m.Id == RuleCatalog.SeriesPassGates.Id).Message, StringComparison.Ordinal);
         Assert.StartsWith("Dynamic node 'wet_hold.x' floats while gated clock 'heater_sense' is stopped low",
-            Assert.Single(messages, m => m.Id == RuleIds.DynamicNodeOnGatedClock).Message, StringComparison.Ordinal);
+            Assert.Single(messages, m => m.Id == RuleCatalog.DynamicNodeOnGatedClock.Id).Message, StringComparison.Ordinal);
         Assert.DoesNotContain(messages, m => m.File.EndsWith(FrostlineDesigns.DewSampler.FileName, StringComparison.Ordinal));
         Assert.Equal(3, messages.Count);
     }

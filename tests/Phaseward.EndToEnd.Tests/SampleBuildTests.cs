@@ -33,7 +33,7 @@ public class SampleBuildTests
             var results = log.RootElement.GetProperty("runs")[0].GetProperty("results").EnumerateArray().ToList();
             // StrainLanes reads the environment, which compile time cannot know: the elaborator, running inside the
             // compiler, reports PW9001 at that line of StrainLanes.cs.
-            var found = Assert.Single(results, r => r.GetProperty("ruleId").GetString() == RuleIds.NotElaborated);
+            var found = Assert.Single(results, r => r.GetProperty("ruleId").GetString() == RuleCatalog.NotElaborated.Id);
             var location = found.GetProperty("locations")[0].GetProperty("physicalLocation");
             Assert.EndsWith("StrainLanes.cs", location.GetProperty("artifactLocation").GetProperty("uri").GetString());
             var expectedLine = Array.FindIndex(

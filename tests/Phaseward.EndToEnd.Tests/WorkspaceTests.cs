@@ -40,7 +40,7 @@ public sealed class WorkspaceTests
 
         var diagnostics = await workspace.DocumentDiagnosticsAsync(document, cancellation.Token);
         var hazard = Assert.Single(diagnostics, d => d.Id.StartsWith("PW", StringComparison.Ordinal));
-        Assert.Equal(RuleIds.SameWindowLatches, hazard.Id);
+        Assert.Equal(RuleCatalog.SameWindowLatches.Id, hazard.Id);
         Assert.Equal(expectedLine, hazard.Location.GetLineSpan().StartLinePosition.Line); // 0-based, as editors count
         Assert.Equal(DiagnosticSeverity.Warning, hazard.Severity);
 

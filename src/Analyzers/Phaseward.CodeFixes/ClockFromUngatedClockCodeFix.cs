@@ -44,7 +44,7 @@ public sealed class ClockFromUngatedClockCodeFix : CodeFixProvider
 {
     private const int MaxChain = 32;
 
-    public override ImmutableArray<string> FixableDiagnosticIds { get; } = ImmutableArray.Create(RuleIds.DynamicNodeOnGatedClock);
+    public override ImmutableArray<string> FixableDiagnosticIds { get; } = ImmutableArray.Create(RuleCatalog.DynamicNodeOnGatedClock.Id);
 
     public override FixAllProvider GetFixAllProvider() => WellKnownFixAllProviders.BatchFixer;
 

@@ -16,7 +16,7 @@ public abstract class InsertRestoringStageFix : CodeFixProvider
 
     protected abstract string EquivalenceKey { get; }
 
-    public sealed override ImmutableArray<string> FixableDiagnosticIds => ImmutableArray.Create(RuleIds.SeriesPassGates);
+    public sealed override ImmutableArray<string> FixableDiagnosticIds => ImmutableArray.Create(RuleCatalog.SeriesPassGates.Id);
 
     public sealed override FixAllProvider GetFixAllProvider() => new RestoringStageFixAllProvider(StageMethod, ActionTitle);
 

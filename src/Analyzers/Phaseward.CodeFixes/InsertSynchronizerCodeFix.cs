@@ -34,7 +34,7 @@ public sealed class InsertSynchronizerCodeFix : CodeFixProvider
 {
     private static readonly string[] Cells = { "DynamicLatch", "StaticLatch", "DynamicRegister", "StaticRegister" };
 
-    public override ImmutableArray<string> FixableDiagnosticIds { get; } = ImmutableArray.Create(RuleIds.ClockCrossing);
+    public override ImmutableArray<string> FixableDiagnosticIds { get; } = ImmutableArray.Create(RuleCatalog.ClockCrossing.Id);
 
     public override FixAllProvider GetFixAllProvider() => WellKnownFixAllProviders.BatchFixer;
 

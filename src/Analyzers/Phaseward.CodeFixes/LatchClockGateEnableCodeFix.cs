@@ -41,7 +41,7 @@ namespace Phaseward.CodeFixes;
 [ExportCodeFixProvider(LanguageNames.CSharp, Name = nameof(LatchClockGateEnableCodeFix)), Shared]
 public sealed class LatchClockGateEnableCodeFix : CodeFixProvider
 {
-    public override ImmutableArray<string> FixableDiagnosticIds { get; } = ImmutableArray.Create(RuleIds.ClockGateEnable);
+    public override ImmutableArray<string> FixableDiagnosticIds { get; } = ImmutableArray.Create(RuleCatalog.ClockGateEnable.Id);
 
     public override FixAllProvider GetFixAllProvider() => FixAllProvider.Create(FixAllAsync);
 

@@ -338,7 +338,7 @@ internal sealed class RestoringStageFixAllProvider : FixAllProvider
         return CodeAction.Create(title, async cancellationToken =>
         {
             var edits = new List<RestoringStageInsertion.Edit>();
-            foreach (var diagnostic in diagnostics.Where(d => d.Id == RuleIds.SeriesPassGates).OrderBy(d => d.Location.SourceSpan.Start))
+            foreach (var diagnostic in diagnostics.Where(d => d.Id == RuleCatalog.SeriesPassGates.Id).OrderBy(d => d.Location.SourceSpan.Start))
             {
                 var planned = await RestoringStageInsertion.PlanAsync(solution, diagnostic, stage, cancellationToken).ConfigureAwait(false);
                 if (planned is not null)

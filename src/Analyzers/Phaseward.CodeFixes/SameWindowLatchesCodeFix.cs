@@ -33,7 +33,7 @@ namespace Phaseward.CodeFixes;
 [ExportCodeFixProvider(LanguageNames.CSharp, Name = nameof(SameWindowLatchesCodeFix)), Shared]
 public sealed class SameWindowLatchesCodeFix : CodeFixProvider
 {
-    public override ImmutableArray<string> FixableDiagnosticIds { get; } = ImmutableArray.Create(RuleIds.SameWindowLatches);
+    public override ImmutableArray<string> FixableDiagnosticIds { get; } = ImmutableArray.Create(RuleCatalog.SameWindowLatches.Id);
 
     public override FixAllProvider GetFixAllProvider() => FixAll.Instance;
 
@@ -95,7 +95,7 @@ public sealed class SameWindowLatchesCodeFix : CodeFixProvider
 
         public static Plan? For(Diagnostic diagnostic, SyntaxNode root, SemanticModel model, CancellationToken cancellationToken)
         {
-            if (diagnostic.Id != RuleIds.SameWindowLatches || !diagnostic.Location.IsInSource
+            if (diagnostic.Id != RuleCatalog.SameWindowLatches.Id || !diagnostic.Location.IsInSource
                 || diagnostic.Location.SourceTree != root.SyntaxTree)
                 return null;
             var target = Property(diagnostic, FindingProperties.TargetLatch);

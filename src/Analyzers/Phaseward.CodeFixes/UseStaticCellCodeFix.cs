@@ -27,7 +27,7 @@ namespace Phaseward.CodeFixes;
 public sealed class UseStaticCellCodeFix : CodeFixProvider
 {
     public override ImmutableArray<string> FixableDiagnosticIds { get; } =
-        ImmutableArray.Create(RuleIds.DynamicNodeOnGatedClock, RuleIds.ClockTooSlowForDynamicStorage);
+        ImmutableArray.Create(RuleCatalog.DynamicNodeOnGatedClock.Id, RuleCatalog.ClockTooSlowForDynamicStorage.Id);
 
     public override FixAllProvider GetFixAllProvider() => WellKnownFixAllProviders.BatchFixer;
 

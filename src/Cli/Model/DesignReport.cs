@@ -108,21 +108,21 @@ internal sealed class DesignReport
         foreach (var r in RegisterChecks)
         {
             var c = r.Check;
-            paths.Add(new CheckedPath("setup", RuleIds.RegisterSetup, r.Launch.Name, r.Capture.Name,
+            paths.Add(new CheckedPath("setup", RuleCatalog.RegisterSetup.Id, r.Launch.Name, r.Capture.Name,
                 c.Available, c.ClockToOutput + c.PathMax + c.Setup, c.SetupSlack, c.SetupSlack < Policy.MinimumTimingSlack));
-            paths.Add(new CheckedPath("hold", RuleIds.RegisterHold, r.Launch.Name, r.Capture.Name,
+            paths.Add(new CheckedPath("hold", RuleCatalog.RegisterHold.Id, r.Launch.Name, r.Capture.Name,
                 c.Hold + c.Skew, c.ClockToOutputMin + c.PathMin, c.HoldSlack, c.HoldSlack < Policy.MinimumTimingSlack));
         }
 
         foreach (var a in Borrowing)
         {
             var timing = Timing.Of(a.Path.To);
-            paths.Add(new CheckedPath("borrowing", RuleIds.LatchBorrowing, a.Path.From.Name, a.Path.To.Name,
+            paths.Add(new CheckedPath("borrowing", RuleCatalog.LatchBorrowing.Id, a.Path.From.Name, a.Path.To.Name,
                 timing.Window.Length - timing.Setup, a.Arrival, a.Slack, a.Slack < Policy.MinimumTimingSlack));
         }
 
         foreach (var race in Races)
-            paths.Add(new CheckedPath(race.OverlapName + " race", RuleIds.OverlapRace, race.Path.From.Name, race.Path.To.Name,
+            paths.Add(new CheckedPath(race.OverlapName + " race", RuleCatalog.OverlapRace.Id, race.Path.From.Name, race.Path.To.Name,
                 race.Overlap, race.Fastest, race.Margin, race.Margin < Policy.MinimumRaceMargin));
         return paths;
     }

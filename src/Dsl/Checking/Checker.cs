@@ -2,14 +2,37 @@ using System;
 using System.Collections.Generic;
 using System.Threading;
 using Phaseward.Netlists;
+using Phaseward.Rules.ClockPhases;
+using Phaseward.Rules.DynamicStorage;
+using Phaseward.Rules.PassGatePaths;
+using Phaseward.Rules.Timing;
 
 namespace Phaseward.Checking;
 
 /// <summary>Runs every rule on a netlist.</summary>
 public static class Checker
 {
+    /// <summary>The rules Phaseward runs, in a fixed order (so reports are deterministic).</summary>
+    public static IReadOnlyList<Rule> Rules { get; } = new Rule[]
+    {
+        new SameWindowLatchesRule(),
+        new OverlapRaceRule(),
+        new ClockCrossingRule(),
+        new ClockGateEnableRule(),
+        new LoopWithoutStorageRule(),
+        new RegisterTimingRule(),
+        new LatchBorrowingRule(),
+        new LatchWriteWindowRule(),
+        new PassGateChainRule(),
+        new DynamicNodeOnGatedClockRule(),
+        new ClockTooSlowForDynamicStorageRule(),
+        new ChargeSharingRule(),
+        new FightingDriversRule(),
+        new KeeperTooStrongRule(),
+    };
+
     public static CheckReport Check(Netlist netlist, RulePolicy? policy = null, CancellationToken cancellationToken = default)
-        => Check(netlist, RuleSet.All, policy, cancellationToken);
+        => Check(netlist, Rules, policy, cancellationToken);
 
     public static CheckReport Check(Netlist netlist, IReadOnlyList<Rule> rules, RulePolicy? policy = null, CancellationToken cancellationToken = default)
     {

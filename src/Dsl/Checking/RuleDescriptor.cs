@@ -1,5 +1,6 @@
 using System;
 using System.Globalization;
+using System.Linq;
 
 namespace Phaseward.Checking;
 
@@ -8,24 +9,29 @@ public sealed class RuleDescriptor
 {
     public const string HelpBaseUri = "https://github.com/phaseward/phaseward/blob/main/docs/rules/";
 
-    public RuleDescriptor(string id, string title, string messageFormat, string category, Severity defaultSeverity, string description)
+    public RuleDescriptor(string id, RuleFamily family, Severity defaultSeverity, string title, string messageFormat, string description)
     {
         Id = id ?? throw new ArgumentNullException(nameof(id));
+        if (id.Length != 6 || !id.StartsWith("PW", StringComparison.Ordinal) || id[2] - '0' != (int)family || !id.Substring(2).All(char.IsDigit))
+            throw new ArgumentException($"Rule ID '{id}' must be PW followed by four digits, the first being its family's ({family} = {(int)family}).", nameof(id));
+        Family = family;
+        DefaultSeverity = defaultSeverity;
         Title = title ?? throw new ArgumentNullException(nameof(title));
         MessageFormat = messageFormat ?? throw new ArgumentNullException(nameof(messageFormat));
-        Category = category ?? throw new ArgumentNullException(nameof(category));
-        DefaultSeverity = defaultSeverity;
         Description = description ?? throw new ArgumentNullException(nameof(description));
     }
 
     public string Id { get; }
+
+    public RuleFamily Family { get; }
 
     public string Title { get; }
 
     /// <summary>A composite format string; <see cref="Finding.Arguments"/> fill its holes.</summary>
     public string MessageFormat { get; }
 
-    public string Category { get; }
+    /// <summary>The diagnostic category: the family's name under "Phaseward.".</summary>
+    public string Category => "Phaseward." + Family;
 
     public Severity DefaultSeverity { get; }
 

@@ -43,7 +43,7 @@ internal static class LatchPairDeck
         var stages = Route(netlist, a.Storage, entryB.Inputs[0])
             ?? throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: no path of stages from '{a.Storage.Name}' to '{entryB.Inputs[0].Name}'.", nameof(finding));
 
-        var sameWindow = finding.RuleId == RuleIds.SameWindowLatches;
+        var sameWindow = finding.RuleId == RuleCatalog.SameWindowLatches.Id;
         var windowA = PhaseWindow.Of(phaseA);
         var period = windowA.Period;
         var edge = ClockWaveforms.EdgeTime(phaseA.Clock);

@@ -28,7 +28,7 @@ internal static class RegisterPathDeck
         if (result is null)
             throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: design '{netlist.DesignName}' has no register path from '{launchName}' to '{captureName}'.", nameof(finding));
 
-        var setup = finding.RuleId == RuleIds.RegisterSetup;
+        var setup = finding.RuleId == RuleCatalog.RegisterSetup.Id;
         var check = result.Check;
         var a = result.Launch.Slave;
         var b = result.Capture.Master;

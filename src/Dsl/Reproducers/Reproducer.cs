@@ -14,22 +14,22 @@ public static class Reproducer
 {
     private static readonly Dictionary<string, Func<Finding, Netlist, SpiceDeck>> Builders = new(StringComparer.Ordinal)
     {
-        [RuleIds.SameWindowLatches] = LatchPairDeck.Build,
-        [RuleIds.OverlapRace] = LatchPairDeck.Build,
-        [RuleIds.ClockCrossing] = ClockCrossingDeck.Build,
-        [RuleIds.ClockGateEnable] = ClockGateDeck.Build,
-        [RuleIds.LoopWithoutStorage] = LoopDeck.Build,
-        [RuleIds.SeriesPassGates] = PassGateChainDeck.Build,
-        [RuleIds.DynamicNodeOnGatedClock] = RetentionDeck.Build,
-        [RuleIds.ClockTooSlowForDynamicStorage] = RetentionDeck.Build,
-        [RuleIds.ChargeSharing] = ChargeSharingDeck.Build,
-        [RuleIds.FightingDrivers] = FightingDriversDeck.Build,
-        [RuleIds.KeeperTooStrong] = KeeperWriteDeck.Build,
-        [RuleIds.RegisterSetup] = RegisterPathDeck.Build,
-        [RuleIds.RegisterHold] = RegisterPathDeck.Build,
-        [RuleIds.LatchBorrowing] = LatchBorrowingDeck.Build,
-        [RuleIds.LatchWriteWindow] = LatchWriteWindowDeck.Build,
-        [RuleIds.LatchLoop] = LatchLoopDeck.Build,
+        [RuleCatalog.SameWindowLatches.Id] = LatchPairDeck.Build,
+        [RuleCatalog.OverlapRace.Id] = LatchPairDeck.Build,
+        [RuleCatalog.ClockCrossing.Id] = ClockCrossingDeck.Build,
+        [RuleCatalog.ClockGateEnable.Id] = ClockGateDeck.Build,
+        [RuleCatalog.LoopWithoutStorage.Id] = LoopDeck.Build,
+        [RuleCatalog.SeriesPassGates.Id] = PassGateChainDeck.Build,
+        [RuleCatalog.DynamicNodeOnGatedClock.Id] = RetentionDeck.Build,
+        [RuleCatalog.ClockTooSlowForDynamicStorage.Id] = RetentionDeck.Build,
+        [RuleCatalog.ChargeSharing.Id] = ChargeSharingDeck.Build,
+        [RuleCatalog.FightingDrivers.Id] = FightingDriversDeck.Build,
+        [RuleCatalog.KeeperTooStrong.Id] = KeeperWriteDeck.Build,
+        [RuleCatalog.RegisterSetup.Id] = RegisterPathDeck.Build,
+        [RuleCatalog.RegisterHold.Id] = RegisterPathDeck.Build,
+        [RuleCatalog.LatchBorrowing.Id] = LatchBorrowingDeck.Build,
+        [RuleCatalog.LatchWriteWindow.Id] = LatchWriteWindowDeck.Build,
+        [RuleCatalog.LatchLoop.Id] = LatchLoopDeck.Build,
     };
 
     /// <summary>The rule IDs whose findings have a deck.</summary>

@@ -22,7 +22,7 @@ internal static class RetentionDeck
     {
         var node = DeckInputs.StorageNodeByName(finding, netlist, DynamicStorageProperties.Node);
         var retention = node.Retention;
-        var stopped = finding.RuleId == RuleIds.DynamicNodeOnGatedClock;
+        var stopped = finding.RuleId == RuleCatalog.DynamicNodeOnGatedClock.Id;
         var deck = new DeckWriter(finding, netlist);
         var dv = retention.ToleratedDroop.Volts;
         deck.Param("dv", SpiceNumbers.Of(dv), "tolerated droop (V), the process figure");

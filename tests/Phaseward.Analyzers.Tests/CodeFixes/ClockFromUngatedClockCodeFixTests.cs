@@ -14,7 +14,7 @@ namespace Phaseward.Analyzers.Tests.CodeFixes;
 /// </summary>
 public class ClockFromUngatedClockCodeFixTests
 {
-    private static DiagnosticResult PW3001(int marker = 0) => new DiagnosticResult(RuleIds.DynamicNodeOnGatedClock, DiagnosticSeverity.Warning).WithLocation(marker).WithOptions(DiagnosticOptions.IgnoreAdditionalLocations);
+    private static DiagnosticResult PW3001(int marker = 0) => new DiagnosticResult(RuleCatalog.DynamicNodeOnGatedClock.Id, DiagnosticSeverity.Warning).WithLocation(marker).WithOptions(DiagnosticOptions.IgnoreAdditionalLocations);
 
     private static PhasewardCodeFixTest<DynamicStorageAnalyzer, ClockFromUngatedClockCodeFix> Test(string source, string fixedSource, params DiagnosticResult[] expected)
         => new PhasewardCodeFixTest<DynamicStorageAnalyzer, ClockFromUngatedClockCodeFix>(source, fixedSource, expected).Choosing(EquivalenceKeys.ClockFromUngatedClock);

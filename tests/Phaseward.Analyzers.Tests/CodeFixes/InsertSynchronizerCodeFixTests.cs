@@ -16,7 +16,7 @@ namespace Phaseward.Analyzers.Tests.CodeFixes;
 public class InsertSynchronizerCodeFixTests
 {
     private static DiagnosticResult Pw1003(string receiver, string receiving, string sender, string sending)
-        => new DiagnosticResult(RuleIds.ClockCrossing, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1)
+        => new DiagnosticResult(RuleCatalog.ClockCrossing.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1)
             .WithMessage($"'{receiver}' on clock '{receiving}' takes data from latch '{sender}' on clock '{sending}', which has no fixed time " +
                          $"relation to it ('{receiving}' is declared independent), without a synchronizer: it can sample the data while it changes and go metastable");
 

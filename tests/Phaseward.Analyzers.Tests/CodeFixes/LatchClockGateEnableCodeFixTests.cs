@@ -17,7 +17,7 @@ namespace Phaseward.Analyzers.Tests.CodeFixes;
 public class LatchClockGateEnableCodeFixTests
 {
     private static DiagnosticResult Pw1004(string gate, string stateWindow, string level, string enable, string changes)
-        => new DiagnosticResult(RuleIds.ClockGateEnable, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1)
+        => new DiagnosticResult(RuleCatalog.ClockGateEnable.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1)
             .WithArguments(gate, "clk", stateWindow, level, enable, changes);
 
     private static DiagnosticResult FromRegister(string gate, string register)
@@ -70,7 +70,7 @@ public class LatchClockGateEnableCodeFixTests
         // A 1 ns clock, low over [0.5, 1 ns): the latch opens while the gate blocks, but 20 stages after it (586.5 ps)
         // carry its change past 1 ns. Another latch would not help; a shorter path would.
         => new PhasewardCodeFixTest<ClockPhaseAnalyzer, LatchClockGateEnableCodeFix>(Slow, Slow,
-                new DiagnosticResult(RuleIds.ClockGateEnable, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1)
+                new DiagnosticResult(RuleCatalog.ClockGateEnable.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1)
                     .WithArguments("gclk", "clk", "[0 s, 500 ps)", "high", "en19",
                         "during [500 ps, 1.09 ns) (from latch 'en_latch', transparent in clk.Low, through a 552 ps path)"))
             .RunAsync();
@@ -87,7 +87,7 @@ public class LatchClockGateEnableCodeFixTests
     public Task NoFixWhenTheEnableComesFromAnUnrelatedClock()
         // That needs a synchronizer (PW1003's fix), not a latch.
         => new PhasewardCodeFixTest<ClockPhaseAnalyzer, LatchClockGateEnableCodeFix>(Unrelated, Unrelated,
-                new DiagnosticResult(RuleIds.ClockGateEnable, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1)
+                new DiagnosticResult(RuleCatalog.ClockGateEnable.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1)
                     .WithArguments("gclk", "clk", "[0 s, 5 ns)", "high", "en_reg",
                         "at any time (from latch 'en_reg.slave', transparent in radio.High, whose clock has no fixed time relation to 'clk')"))
             .RunAsync();
@@ -102,7 +102,7 @@ public class LatchClockGateEnableCodeFixTests
     public Task NoFixWhenTheClockIsMadeAtTheCall()
         // Repeating c.Clock(...) for the latch's phase would make a second clock.
         => new PhasewardCodeFixTest<ClockPhaseAnalyzer, LatchClockGateEnableCodeFix>(Inline, Inline,
-                new DiagnosticResult(RuleIds.ClockGateEnable, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1)
+                new DiagnosticResult(RuleCatalog.ClockGateEnable.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1)
                     .WithArguments("gclk", "clk", "[0 s, 5 ns)", "high", "enable",
                         "at any time (from primary input 'enable', taken as changing at any time by phaseward.clock_gate_inputs_may_change)"))
             .WithEditorConfig("phaseward.clock_gate_inputs_may_change = true")
@@ -142,7 +142,7 @@ public class LatchClockGateEnableCodeFixTests
             private static Clock Gate(Circuit circuit, Clock clock)
                 => circuit.ClockGate(clock, circuit.Inverter(circuit.StaticLatch(circuit.StaticRegister(circuit.Input("b"), clock, "en_b"), clock.Low)), name: "gb");
             """), FromRegister("ga", "en_a"),
-            new DiagnosticResult(RuleIds.ClockGateEnable, DiagnosticSeverity.Warning).WithLocation(2).WithLocation(3)
+            new DiagnosticResult(RuleCatalog.ClockGateEnable.Id, DiagnosticSeverity.Warning).WithLocation(2).WithLocation(3)
                 .WithArguments("gb", "clk", "[0 s, 5 ns)", "high", "en_b", "during [0 s, 62.1 ps) (from latch 'en_b.slave', transparent in clk.High, through a 27.6 ps path)"))
             .RunAsync();
 }

@@ -18,7 +18,7 @@ namespace Phaseward.Analyzers.Tests.CodeFixes;
 /// </summary>
 public class PW2001CodeFixTests
 {
-    private static DiagnosticResult PW2001 => new(RuleIds.SeriesPassGates, DiagnosticSeverity.Warning);
+    private static DiagnosticResult PW2001 => new(RuleCatalog.SeriesPassGates.Id, DiagnosticSeverity.Warning);
 
     private const string Straight = """
         using Phaseward;

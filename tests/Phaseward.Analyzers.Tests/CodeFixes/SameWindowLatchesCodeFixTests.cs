@@ -16,7 +16,7 @@ namespace Phaseward.Analyzers.Tests.CodeFixes;
 public class SameWindowLatchesCodeFixTests
 {
     private static DiagnosticResult Pw1001(int location, int related, string latch, string source, string phase)
-        => new DiagnosticResult(RuleIds.SameWindowLatches, DiagnosticSeverity.Warning).WithLocation(location).WithLocation(related)
+        => new DiagnosticResult(RuleCatalog.SameWindowLatches.Id, DiagnosticSeverity.Warning).WithLocation(location).WithLocation(related)
             .WithArguments(latch, source, phase);
 
     private static PhasewardCodeFixTest<ClockPhaseAnalyzer, SameWindowLatchesCodeFix> Test(string source, string fixedSource, params DiagnosticResult[] expected)

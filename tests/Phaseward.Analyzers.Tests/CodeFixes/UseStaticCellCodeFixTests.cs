@@ -13,9 +13,9 @@ namespace Phaseward.Analyzers.Tests.CodeFixes;
 /// </summary>
 public class UseStaticCellCodeFixTests
 {
-    private static DiagnosticResult PW3001(int marker = 0) => new DiagnosticResult(RuleIds.DynamicNodeOnGatedClock, DiagnosticSeverity.Warning).WithLocation(marker).WithOptions(DiagnosticOptions.IgnoreAdditionalLocations);
+    private static DiagnosticResult PW3001(int marker = 0) => new DiagnosticResult(RuleCatalog.DynamicNodeOnGatedClock.Id, DiagnosticSeverity.Warning).WithLocation(marker).WithOptions(DiagnosticOptions.IgnoreAdditionalLocations);
 
-    private static DiagnosticResult PW3002(int marker = 0) => new DiagnosticResult(RuleIds.ClockTooSlowForDynamicStorage, DiagnosticSeverity.Warning).WithLocation(marker).WithOptions(DiagnosticOptions.IgnoreAdditionalLocations);
+    private static DiagnosticResult PW3002(int marker = 0) => new DiagnosticResult(RuleCatalog.ClockTooSlowForDynamicStorage.Id, DiagnosticSeverity.Warning).WithLocation(marker).WithOptions(DiagnosticOptions.IgnoreAdditionalLocations);
 
     private static PhasewardCodeFixTest<DynamicStorageAnalyzer, UseStaticCellCodeFix> Test(string source, string fixedSource, params DiagnosticResult[] expected)
         => new(source, fixedSource, expected);

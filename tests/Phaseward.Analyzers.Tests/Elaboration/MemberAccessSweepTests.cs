@@ -87,7 +87,7 @@ public class MemberAccessSweepTests
         else
         {
             var issue = Assert.Single(compileTime.Issues);
-            Assert.True(issue.RuleId == RuleIds.NotElaborated, kind + ": " + issue);
+            Assert.True(issue.RuleId == RuleCatalog.NotElaborated.Id, kind + ": " + issue);
             Assert.Empty(compileTime.Netlist!.Devices);
         }
     }

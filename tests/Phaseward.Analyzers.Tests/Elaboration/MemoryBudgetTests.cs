@@ -29,7 +29,7 @@ public class MemoryBudgetTests
                 }
             }
             """,
-            new DiagnosticResult(RuleIds.ElaborationBudgetExceeded, DiagnosticSeverity.Warning).WithLocation(0)
+            new DiagnosticResult(RuleCatalog.ElaborationBudgetExceeded.Id, DiagnosticSeverity.Warning).WithLocation(0)
                 .WithArguments("Hoarder", "the memory budget of 268435456 bytes (arrays, strings and collections the design's code makes; phaseward.elaboration_memory_budget) would be exceeded by 8589934584 more"))
             .RunAsync();
 
@@ -47,7 +47,7 @@ public class MemoryBudgetTests
                 }
             }
             """,
-            new DiagnosticResult(RuleIds.ElaborationBudgetExceeded, DiagnosticSeverity.Warning).WithLocation(0)
+            new DiagnosticResult(RuleCatalog.ElaborationBudgetExceeded.Id, DiagnosticSeverity.Warning).WithLocation(0)
                 .WithArguments("Names", "the memory budget of 1000 bytes (arrays, strings and collections the design's code makes; phaseward.elaboration_memory_budget) would be exceeded by 1200 more"))
             .WithEditorConfig("phaseward.elaboration_memory_budget = 1_000")
             .RunAsync();
@@ -86,7 +86,7 @@ public class MemoryBudgetTests
             """));
         var result = designs.CompileTime("Greedy");
         var issue = Assert.Single(result.Issues);
-        Assert.Equal(RuleIds.ElaborationBudgetExceeded, issue.RuleId);
+        Assert.Equal(RuleCatalog.ElaborationBudgetExceeded.Id, issue.RuleId);
         Assert.Equal(new[] { "before" }, result.Netlist!.Devices.Select(d => d.Name));
     }
 }

@@ -77,7 +77,7 @@ public class ParityTests
         for (var i = 0; i < System.Math.Min(expected.Length, actual.Length); i++)
             Assert.True(expected[i] == actual[i], $"{design}, line {i + 1}:\n  run time:     {expected[i]}\n  compile time: {actual[i]}");
         Assert.Equal(expected.Length, actual.Length);
-        var issues = compileTime.Issues.Where(i => !allowNotElaborated || i.RuleId != RuleIds.NotElaborated).ToList();
+        var issues = compileTime.Issues.Where(i => !allowNotElaborated || i.RuleId != RuleCatalog.NotElaborated.Id).ToList();
         Assert.True(issues.Count == 0, design + ": " + string.Join("\n", issues));
         Assert.Equal(runTime.Devices.Count, compileTime.Netlist!.Devices.Count);
     }

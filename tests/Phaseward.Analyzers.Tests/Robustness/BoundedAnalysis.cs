@@ -83,7 +83,7 @@ internal static class BoundedAnalysis
         Assert.True(failures.Count == 0, $"Analyzer exception on {what}:\n{string.Join("\n", failures)}");
         var ad0001 = diagnostics.FirstOrDefault(d => d.Id == "AD0001");
         Assert.True(ad0001 is null, $"AD0001 on {what}: {ad0001}");
-        var internalFailure = diagnostics.FirstOrDefault(d => d.Id == RuleIds.NotElaborated && d.GetMessage().Contains("failed on it"));
+        var internalFailure = diagnostics.FirstOrDefault(d => d.Id == RuleCatalog.NotElaborated.Id && d.GetMessage().Contains("failed on it"));
         Assert.True(internalFailure is null, $"The elaborator failed internally on {what}: {internalFailure}");
         return diagnostics;
     }

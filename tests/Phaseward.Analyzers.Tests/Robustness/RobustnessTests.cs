@@ -68,7 +68,7 @@ public class RobustnessTests
         Assert.Empty(failures);
         Assert.DoesNotContain(diagnostics, d => d.Id == "AD0001");
         // Code that does not compile is the compiler's to report; the elaborator adds no PW9001 for it.
-        Assert.DoesNotContain(diagnostics, d => d.Id == RuleIds.NotElaborated && d.GetMessage().Contains("failed on it"));
+        Assert.DoesNotContain(diagnostics, d => d.Id == RuleCatalog.NotElaborated.Id && d.GetMessage().Contains("failed on it"));
     }
 
     [Theory]
@@ -81,7 +81,7 @@ public class RobustnessTests
                      "    protected override void Describe(Circuit c) => c.Output(\"y\", c.Input(\"a\"));\n}\n";
         var tree = BoundedAnalysis.Parse("/src/Looping.cs", source);
         var diagnostics = await BoundedAnalysis.DocumentAsync(BoundedAnalysis.Compile(new[] { tree }), tree, "a constructor chain that calls itself");
-        Assert.Contains(diagnostics, d => d.Id == RuleIds.ElaborationBudgetExceeded && d.GetMessage().Contains("nest deeper"));
+        Assert.Contains(diagnostics, d => d.Id == RuleCatalog.ElaborationBudgetExceeded.Id && d.GetMessage().Contains("nest deeper"));
     }
 
     [Fact]
@@ -105,7 +105,7 @@ public class RobustnessTests
         var result = designs.CompileTime("Runaway", new ElaborationLimits(ElaborationLimits.DefaultStepBudget, ElaborationLimits.DefaultRecursionLimit, 1_000));
 
         var issue = Assert.Single(result.Issues);
-        Assert.Equal(RuleIds.ElaborationBudgetExceeded, issue.RuleId);
+        Assert.Equal(RuleCatalog.ElaborationBudgetExceeded.Id, issue.RuleId);
         Assert.Contains("device budget of 1000 devices", string.Join(" ", issue.Arguments));
         // Each inverter makes a net too: the input and 1,000 inverter outputs make 1,001 nets, just past the budget.
         Assert.Equal(1_000, result.Netlist!.Devices.Count);

@@ -19,7 +19,7 @@ namespace Phaseward.Analyzers.Tests.Rules;
 public class PW1001Tests
 {
     private static DiagnosticResult Pw1001(string latch, string source, string phase)
-        => new DiagnosticResult(RuleIds.SameWindowLatches, DiagnosticSeverity.Warning)
+        => new DiagnosticResult(RuleCatalog.SameWindowLatches.Id, DiagnosticSeverity.Warning)
             .WithMessage($"Latch '{latch}' takes its data from latch '{source}' and both are transparent in {phase}: data can run through both in one phase");
 
     private static Task Verify(string source, params DiagnosticResult[] expected)
@@ -88,7 +88,7 @@ public class PW1001Tests
             var b = c.Clock("b", 4.Nanoseconds(), independent: true);
             c.Output("q", {|#0:c.DynamicLatch({|#1:c.DynamicLatch(c.Input("d"), a.High, "A")|}, b.High, "B")|});
             """),
-            new DiagnosticResult(RuleIds.ClockCrossing, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1)
+            new DiagnosticResult(RuleCatalog.ClockCrossing.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1)
                 .WithMessage("'B' on clock 'b' takes data from latch 'A' on clock 'a', which has no fixed time relation to it ('b' is declared " +
                              "independent), without a synchronizer: it can sample the data while it changes and go metastable"));
 
@@ -184,14 +184,14 @@ public class PW1001Tests
             .GetAnalyzerDiagnosticsAsync();
 
         var diagnostic = Assert.Single(diagnostics);
-        Assert.Equal(RuleIds.SameWindowLatches, diagnostic.Id);
+        Assert.Equal(RuleCatalog.SameWindowLatches.Id, diagnostic.Id);
         Assert.Equal(DiagnosticSeverity.Error, diagnostic.Severity);
     }
 
     [Fact]
     public Task SeveritySuggestion()
         => new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(Design("Mild", Pair),
-                new DiagnosticResult(RuleIds.SameWindowLatches, DiagnosticSeverity.Info).WithLocation(0).WithLocation(1)
+                new DiagnosticResult(RuleCatalog.SameWindowLatches.Id, DiagnosticSeverity.Info).WithLocation(0).WithLocation(1)
                     .WithArguments("B", "A", "clk.High"))
             .WithEditorConfig("dotnet_diagnostic.PW1001.severity = suggestion")
             .RunAsync();

@@ -17,7 +17,7 @@ public class PW1002Tests
 {
     private static DiagnosticResult Pw1002(string latch, string source, string overlapKind, string clock, string fastest, string overlap, string margin,
         string required = "0 s")
-        => new DiagnosticResult(RuleIds.OverlapRace, DiagnosticSeverity.Warning)
+        => new DiagnosticResult(RuleCatalog.OverlapRace.Id, DiagnosticSeverity.Warning)
             .WithMessage($"Latch '{latch}' races latch '{source}' through the {overlapKind} overlap of clock '{clock}': " +
                          $"the fastest path takes {fastest} while both pass gates conduct together for {overlap}, a margin of {margin}, below the required {required}");
 
@@ -117,7 +117,7 @@ public class PW1002Tests
     [Fact]
     public Task SeverityFromEditorConfig()
         => new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(Margin166,
-                new DiagnosticResult(RuleIds.OverlapRace, DiagnosticSeverity.Info).WithLocation(0).WithLocation(0)
+                new DiagnosticResult(RuleCatalog.OverlapRace.Id, DiagnosticSeverity.Info).WithLocation(0).WithLocation(0)
                     .WithArguments("R.slave", "R.master", "0-0", "clock 'clk'", "96.6 ps", "80 ps", "16.6 ps", "20 ps"))
             .WithEditorConfig("phaseward.min_race_margin = 20ps\ndotnet_diagnostic.PW1002.severity = suggestion")
             .RunAsync();

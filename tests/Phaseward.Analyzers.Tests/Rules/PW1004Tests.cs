@@ -17,7 +17,7 @@ public class PW1004Tests
 {
     private const string FromRegister = "during [0 s, 62.1 ps) (from latch '{0}', transparent in clk.High, through a 27.6 ps path)";
 
-    private static DiagnosticResult Pw1004() => new DiagnosticResult(RuleIds.ClockGateEnable, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1);
+    private static DiagnosticResult Pw1004() => new DiagnosticResult(RuleCatalog.ClockGateEnable.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1);
 
     // A gate that stops low on the 10 ns clock (high over [0, 5 ns)), its enable straight from a register's slave.
     private static DiagnosticResult FromRegisterSlave(string gate, string enable, string slave)
@@ -86,7 +86,7 @@ public class PW1004Tests
             var clk = c.Clock("clk", 10.Nanoseconds());
             c.ClockGate(clk, c.Input("enable"), name: "gclk");
             """).Replace("void Describe", "void {|#0:Describe|}"),
-            new DiagnosticResult(RuleIds.InvalidOption, DiagnosticSeverity.Warning).WithLocation(0)
+            new DiagnosticResult(RuleCatalog.InvalidOption.Id, DiagnosticSeverity.Warning).WithLocation(0)
                 .WithArguments("phaseward.clock_gate_inputs_may_change", "sometimes", "true or false", "false"))
             .WithEditorConfig("phaseward.clock_gate_inputs_may_change = sometimes")
             .RunAsync();

@@ -16,7 +16,7 @@ namespace Phaseward.Analyzers.Tests.Rules;
 public class PW1005Tests
 {
     private static DiagnosticResult Pw1005(string message)
-        => new DiagnosticResult(RuleIds.LoopWithoutStorage, DiagnosticSeverity.Warning).WithMessage(message);
+        => new DiagnosticResult(RuleCatalog.LoopWithoutStorage.Id, DiagnosticSeverity.Warning).WithMessage(message);
 
     private static Task Verify(string source, params DiagnosticResult[] expected)
         => new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(source, expected).RunAsync();
@@ -99,7 +99,7 @@ public class PW1005Tests
                 var n = c.Node("n");
                 {|#0:c.Inverter(n, n)|};
                 """),
-                new DiagnosticResult(RuleIds.LoopWithoutStorage, DiagnosticSeverity.Info).WithLocation(0)
+                new DiagnosticResult(RuleCatalog.LoopWithoutStorage.Id, DiagnosticSeverity.Info).WithLocation(0)
                     .WithArguments(1, "'n.inv1'", "1 inversions (odd): enabled, it oscillates with a period of about 55.2 ps (twice the loop's delay 27.6 ps)"))
             .WithEditorConfig("dotnet_diagnostic.PW1005.severity = suggestion")
             .RunAsync();

@@ -18,7 +18,7 @@ namespace Phaseward.Analyzers.Tests.Rules;
 /// </remarks>
 public class PW2001Tests
 {
-    private static DiagnosticResult PW2001 => new(RuleIds.SeriesPassGates, DiagnosticSeverity.Warning);
+    private static DiagnosticResult PW2001 => new(RuleCatalog.SeriesPassGates.Id, DiagnosticSeverity.Warning);
 
     // Three gates from input a to an inverter. Nets: a = wire 1 + one TG terminal 1.5 = 2.5 fF; n1, n2 = 1 + 1.5·2 = 4 fF;
     // n3 = 1 + 1.5 + inverter gate 2 = 4.5 fF. Downstream: n3 4.5, n2 8.5, n1 12.5, a 15 fF.
@@ -308,7 +308,7 @@ public class PW2001Tests
     public Task AnInvalidLimitIsReportedAndTheComputedLimitApplies(string value)
         => Task.WhenAll(
             new PhasewardAnalyzerTest<ElaborationAnalyzer>(ThreeGates.Replace("{|#0:", "").Replace("{|#1:", "").Replace(")|}", ")"),
-                    new DiagnosticResult(RuleIds.InvalidOption, DiagnosticSeverity.Warning).WithLocation(9)
+                    new DiagnosticResult(RuleCatalog.InvalidOption.Id, DiagnosticSeverity.Warning).WithLocation(9)
                         .WithArguments("phaseward.max_series_pass_gates", value, "a whole number from 1 to 10000", "computed by the rule"))
                 .WithEditorConfig("phaseward.max_series_pass_gates = " + value)
                 .RunAsync(),
@@ -320,7 +320,7 @@ public class PW2001Tests
     [Fact]
     public Task SeverityIsConfigurable()
         => new PhasewardAnalyzerTest<PassGatePathAnalyzer>(ThreeGates.Replace("{|#9:Describe|}", "Describe"),
-                new DiagnosticResult(RuleIds.SeriesPassGates, DiagnosticSeverity.Info).WithLocation(1).WithLocation(0))
+                new DiagnosticResult(RuleCatalog.SeriesPassGates.Id, DiagnosticSeverity.Info).WithLocation(1).WithLocation(0))
             .WithEditorConfig("dotnet_diagnostic.PW2001.severity = suggestion")
             .RunAsync();
 

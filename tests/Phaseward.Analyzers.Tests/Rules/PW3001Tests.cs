@@ -14,7 +14,7 @@ namespace Phaseward.Analyzers.Tests.Rules;
 /// </summary>
 public class PW3001Tests
 {
-    private static DiagnosticResult PW3001(int marker = 0) => new DiagnosticResult(RuleIds.DynamicNodeOnGatedClock, DiagnosticSeverity.Warning).WithLocation(marker);
+    private static DiagnosticResult PW3001(int marker = 0) => new DiagnosticResult(RuleCatalog.DynamicNodeOnGatedClock.Id, DiagnosticSeverity.Warning).WithLocation(marker);
 
     private static string Message(string node, string gate, string level, string idle, string retention = "270 µs", string c = "4.5 fF", string leak = "5 pA")
         => $"Dynamic node '{node}' floats while gated clock '{gate}' is stopped {level} (declared maximum idle time: {idle}), "

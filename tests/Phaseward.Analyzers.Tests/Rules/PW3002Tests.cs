@@ -14,7 +14,7 @@ namespace Phaseward.Analyzers.Tests.Rules;
 /// </summary>
 public class PW3002Tests
 {
-    private static DiagnosticResult PW3002() => new DiagnosticResult(RuleIds.ClockTooSlowForDynamicStorage, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1);
+    private static DiagnosticResult PW3002() => new DiagnosticResult(RuleCatalog.ClockTooSlowForDynamicStorage.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1);
 
     private static string Message(string node, string isolation, string period, string clock, string minimum, string retention = "270 µs", string leak = "5 pA")
         => $"Dynamic node '{node}' floats for up to {isolation} of every {period} period of clock '{clock}', longer than its retention time {retention} "

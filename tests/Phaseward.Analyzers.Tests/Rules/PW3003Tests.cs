@@ -13,7 +13,7 @@ namespace Phaseward.Analyzers.Tests.Rules;
 /// </summary>
 public class PW3003Tests
 {
-    private static DiagnosticResult PW3003() => new DiagnosticResult(RuleIds.ChargeSharing, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1);
+    private static DiagnosticResult PW3003() => new DiagnosticResult(RuleCatalog.ChargeSharing.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1);
 
     private static string Design(string body) => $$"""
         using Phaseward;
@@ -85,10 +85,10 @@ public class PW3003Tests
                         n = {|#0:c.TransmissionGate(n, i % 2 == 0 ? clk.Low : clk.High, $"n{i}")|};
                     c.Output("q", c.Inverter(n, "q"));
             """),
-            new DiagnosticResult(RuleIds.ChargeSharing, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(0)
+            new DiagnosticResult(RuleCatalog.ChargeSharing.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(0)
                 .WithMessage("When 'n1' conducts, floating node 'n0' (C1 = 4 fF) shares its charge with floating node 'n1' (C2 = 4 fF): "
                     + "a 1.2 V level settles at 600 mV, a droop of 600 mV, more than the tolerated 300 mV"),
-            new DiagnosticResult(RuleIds.ChargeSharing, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(0)
+            new DiagnosticResult(RuleCatalog.ChargeSharing.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(0)
                 .WithMessage("When 'n2' conducts, floating node 'n1' (C1 = 4 fF) shares its charge with floating node 'n2' (C2 = 4.5 fF): "
                     + "a 1.2 V level settles at 565 mV, a droop of 635 mV, more than the tolerated 300 mV"))
             .RunAsync();

@@ -13,7 +13,7 @@ namespace Phaseward.Analyzers.Tests.Rules;
 /// </summary>
 public class PW3004Tests
 {
-    private static DiagnosticResult Pw3004() => new DiagnosticResult(RuleIds.FightingDrivers, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1);
+    private static DiagnosticResult Pw3004() => new DiagnosticResult(RuleCatalog.FightingDrivers.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1);
 
     private static string Design(string body) => $$"""
         using Phaseward;

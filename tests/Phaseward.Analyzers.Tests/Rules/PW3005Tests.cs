@@ -13,7 +13,7 @@ namespace Phaseward.Analyzers.Tests.Rules;
 /// </summary>
 public class PW3005Tests
 {
-    private static DiagnosticResult Pw3005() => new DiagnosticResult(RuleIds.KeeperTooStrong, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1);
+    private static DiagnosticResult Pw3005() => new DiagnosticResult(RuleCatalog.KeeperTooStrong.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1);
 
     private static string Design(string body) => $$"""
         using Phaseward;
@@ -101,7 +101,7 @@ public class PW3005Tests
         => new PhasewardAnalyzerTest<ElaborationAnalyzer>(Design("""
                     c.Keeper(c.TransmissionGate(c.Input("d"), c.Input("sel"), "x"));
             """).Replace("void Describe", "void {|#0:Describe|}"),
-            new DiagnosticResult(RuleIds.InvalidOption, DiagnosticSeverity.Warning).WithLocation(0)
+            new DiagnosticResult(RuleCatalog.InvalidOption.Id, DiagnosticSeverity.Warning).WithLocation(0)
                 .WithArguments("phaseward.keeper_write_margin", "0.7", "a number from 0 up to (not including) 0.5, such as 0.1", "0.1"))
             .WithEditorConfig("phaseward.keeper_write_margin = 0.7")
             .RunAsync();

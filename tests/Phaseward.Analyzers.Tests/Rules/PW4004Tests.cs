@@ -23,7 +23,7 @@ public class PW4004Tests
         """);
 
     private static DiagnosticResult Pw4004(string open, string fullyOn, string skew, string margin, DiagnosticSeverity severity = DiagnosticSeverity.Warning)
-        => new DiagnosticResult(RuleIds.LatchWriteWindow, severity)
+        => new DiagnosticResult(RuleCatalog.LatchWriteWindow.Id, severity)
             .WithMessage($"Latch 'pl.x' cannot be written in its window: it is open {open}, {fullyOn} of it with both halves of its entry gate on " +
                          $"(complement skew {skew}), but the entry gate needs 207 ps to charge storage node 'pl.x' (0.69·R·C with R = 5 kΩ, " +
                          $"C = 60 fF; margin {margin})")

@@ -51,7 +51,7 @@ public class CodeFixVerifierTests
         c.Output("trim_n", trimmed);
         """);
 
-    private static readonly DiagnosticResult Pw1001 = new DiagnosticResult(RuleIds.SameWindowLatches, DiagnosticSeverity.Warning)
+    private static readonly DiagnosticResult Pw1001 = new DiagnosticResult(RuleCatalog.SameWindowLatches.Id, DiagnosticSeverity.Warning)
         .WithLocation(0).WithLocation(1).WithArguments("shape", "hold", "sample.High");
 
     private static PhasewardCodeFixTest<ClockPhaseAnalyzer, TFix> Test<TFix>(string fixedSource)

@@ -15,7 +15,7 @@ internal static class FrostlineDesigns
     /// <summary>Two pipeline latches both transparent while <c>tick</c> is high (PW1001).</summary>
     public static readonly DesignFile FrostCounter = new(
         "FrostCounter.cs",
-        RuleIds.SameWindowLatches,
+        RuleCatalog.SameWindowLatches.Id,
         Marker: "c.StaticLatch(c.Inverter(early), tick.High",
         Source: """
             using Phaseward;
@@ -41,7 +41,7 @@ internal static class FrostlineDesigns
     /// <summary>Six pass gates in series on one valve enable, no restoring stage (PW2001; the computed limit is 2).</summary>
     public static readonly DesignFile SprinklerRoute = new(
         "SprinklerRoute.cs",
-        RuleIds.SeriesPassGates,
+        RuleCatalog.SeriesPassGates.Id,
         Marker: "c.TransmissionGate(line, open",
         Source: """
             using Phaseward;
@@ -69,7 +69,7 @@ internal static class FrostlineDesigns
     /// <summary>A dynamic latch on a clock the heater enable can stop, with no bound on how long (PW3001).</summary>
     public static readonly DesignFile HeaterHold = new(
         "HeaterHold.cs",
-        RuleIds.DynamicNodeOnGatedClock,
+        RuleCatalog.DynamicNodeOnGatedClock.Id,
         Marker: "c.DynamicLatch(c.Input(\"leaf_wet\")",
         Source: """
             using Phaseward;

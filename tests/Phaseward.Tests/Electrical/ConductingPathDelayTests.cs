@@ -78,7 +78,7 @@ public class ConductingPathDelayTests
         Assert.Equal(840.0, Figures.Ps(RunInto(netlist, "L0").ElmoreDelay), 9);
 
         var finding = new PassGateChainRule().Check(new RuleContext(netlist, new RulePolicy { MaxSeriesPassGates = 2 })).First();
-        Assert.EndsWith(RuleTexts.SeriesPassGatesAssumption, finding.Message);
+        Assert.EndsWith(PassGateChainRule.ExclusivityAssumption, finding.Message);
         Assert.Equal("true", finding.Properties[PassGateChainRule.AssumesUnknownBranchesConductProperty]);
     }
 

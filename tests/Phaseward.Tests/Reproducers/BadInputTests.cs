@@ -42,7 +42,7 @@ public class ReproducerBadInputTests
         var hub = c.Node("hub");
         c.Nand(c.Inverter(hub, "a"), c.Inverter(hub, "b"), hub);
         var report = Checker.Check(c.ToNetlist());
-        var finding = report.Findings.Single(f => f.RuleId == RuleIds.LoopWithoutStorage);
+        var finding = report.Findings.Single(f => f.RuleId == RuleCatalog.LoopWithoutStorage.Id);
 
         var error = Assert.Throws<ArgumentException>(() => Reproducer.Deck(finding, report.Netlist));
         Assert.Contains("PW1005", error.Message);
@@ -56,7 +56,7 @@ public class ReproducerBadInputTests
         var bus = c.Node("bus");
         c.TransmissionGate(c.Input("a"), c.Input("ra"), bus);
         c.TransmissionGate(c.Input("b"), c.Input("rb"), bus);
-        var finding = Checker.Check(c.ToNetlist()).Findings.Single(f => f.RuleId == RuleIds.FightingDrivers);
+        var finding = Checker.Check(c.ToNetlist()).Findings.Single(f => f.RuleId == RuleCatalog.FightingDrivers.Id);
         var other = new Circuit("Other");
         other.Inverter(other.Input("x"), "y");
 

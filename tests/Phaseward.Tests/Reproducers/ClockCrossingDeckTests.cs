@@ -25,7 +25,7 @@ public class ClockCrossingDeckTests
         for (var i = 0; i < 2; i++) net = c.Inverter(net);
         c.DynamicLatch(net, radio.Low, "tx");
         var report = Checker.Check(c.ToNetlist());
-        var deck = Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleIds.ClockCrossing), report.Netlist);
+        var deck = Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleCatalog.ClockCrossing.Id), report.Netlist);
         var measured = Ngspice.Run(deck);
 
         Assert.Contains("shifted", deck.Text);

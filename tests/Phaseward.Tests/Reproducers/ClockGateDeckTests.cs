@@ -18,8 +18,8 @@ public class ClockGateDeckTests
     {
         var c = Figures.NewCircuit("GateTest");
         describe(c);
-        var report = Checker.Check(c.ToNetlist(), RuleSet.All, policy);
-        return Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleIds.ClockGateEnable), report.Netlist);
+        var report = Checker.Check(c.ToNetlist(), Checker.Rules, policy);
+        return Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleCatalog.ClockGateEnable.Id), report.Netlist);
     }
 
     [Fact]

@@ -16,7 +16,7 @@ public class FightingDriversDeckTests
         var c = new Circuit("FightTest");
         describe(c);
         var report = Checker.Check(c.ToNetlist());
-        var deck = Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleIds.FightingDrivers), report.Netlist);
+        var deck = Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleCatalog.FightingDrivers.Id), report.Netlist);
         return (deck, Ngspice.Run(deck));
     }
 

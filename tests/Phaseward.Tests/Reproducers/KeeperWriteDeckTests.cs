@@ -18,7 +18,7 @@ public class KeeperWriteDeckTests
         c.Keeper(x, resistance: keeperKiloohms.Kiloohms());
         c.Inverter(x, "q");
         var report = Checker.Check(c.ToNetlist());
-        var deck = Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleIds.KeeperTooStrong), report.Netlist);
+        var deck = Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleCatalog.KeeperTooStrong.Id), report.Netlist);
         return (deck, Ngspice.Run(deck));
     }
 

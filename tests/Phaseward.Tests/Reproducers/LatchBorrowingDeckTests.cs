@@ -26,7 +26,7 @@ public class LatchBorrowingDeckTests
         for (var i = 0; i < 27; i++) net = c.Inverter(net);
         c.DynamicLatch(net, clk.High, "L3");
         var report = Checker.Check(c.ToNetlist());
-        var deck = Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleIds.LatchBorrowing), report.Netlist);
+        var deck = Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleCatalog.LatchBorrowing.Id), report.Netlist);
         var measured = Ngspice.Run(deck);
 
         Assert.Equal(476.6e-12, deck.Estimates.Single(e => e.Name == "t_arrival").Value, 15);

@@ -27,7 +27,7 @@ public class LatchLoopDeckTests
         var q = c.DynamicLatch(net, clk.Low, "Q");
         c.Inverter(q, start);
         var report = Checker.Check(c.ToNetlist());
-        var deck = Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleIds.LatchLoop), report.Netlist);
+        var deck = Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleCatalog.LatchLoop.Id), report.Netlist);
         var measured = Ngspice.Run(deck);
 
         Assert.Equal(1062.6e-12, deck.Estimates.Single(e => e.Name == "t_round").Value, 14);

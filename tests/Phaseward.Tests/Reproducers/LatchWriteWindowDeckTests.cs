@@ -24,7 +24,7 @@ public class LatchWriteWindowDeckTests
         c.DynamicLatch(c.Input("d"), clk.High, "pl");
         c.SetCapacitance(c.ToNetlist().Nets.Single(n => n.Name == "pl.x"), 60.Femtofarads());
         var report = Checker.Check(c.ToNetlist());
-        var deck = Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleIds.LatchWriteWindow), report.Netlist);
+        var deck = Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleCatalog.LatchWriteWindow.Id), report.Netlist);
         var measured = Ngspice.Run(deck);
 
         var fullyOn = (pulsePs - skewPs) * 1e-12; // the window (pulse + skew) less the skew at each end

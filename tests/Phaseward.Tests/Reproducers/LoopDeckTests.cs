@@ -21,7 +21,7 @@ public class LoopDeckTests
         var c = Figures.NewCircuit("LoopTest");
         describe(c);
         var report = Checker.Check(c.ToNetlist());
-        return Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleIds.LoopWithoutStorage), report.Netlist);
+        return Reproducer.Deck(report.Findings.Single(f => f.RuleId == RuleCatalog.LoopWithoutStorage.Id), report.Netlist);
     }
 
     [Fact]

@@ -336,14 +336,14 @@ public class PassGateChainRuleTests
     public void Design_check_reports_the_finding_at_run_time()
     {
         var report = new TelemetryMux().Check(new RulePolicy { MaxSeriesPassGates = 4 });
-        var finding = Assert.Single(report.Findings, f => f.RuleId == RuleIds.SeriesPassGates);
+        var finding = Assert.Single(report.Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
         Assert.Equal("6", finding.Properties["chainLength"]);
         Assert.StartsWith("6 pass gates in series without a restoring stage (limit 4): Elmore delay ", finding.Message);
         Assert.Contains(" ps", finding.Message);
         Assert.True(finding.Location.IsKnown);
         Assert.Contains(RuleCatalog.SeriesPassGates, RuleCatalog.All);
-        Assert.Contains(RuleSet.All, r => r is PassGateChainRule);
-        Assert.DoesNotContain(new TelemetryMux().Check(new RulePolicy { MaxSeriesPassGates = 6 }).Findings, f => f.RuleId == RuleIds.SeriesPassGates);
+        Assert.Contains(Checker.Rules, r => r is PassGateChainRule);
+        Assert.DoesNotContain(new TelemetryMux().Check(new RulePolicy { MaxSeriesPassGates = 6 }).Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
     }
 
     // The example and its fix in docs/rules/PW2001.md (keep them in step). By hand: as the five-gate chain above,
@@ -372,11 +372,11 @@ public class PassGateChainRuleTests
     [Fact]
     public void Documented_example_and_its_fix()
     {
-        var finding = Assert.Single(new TelemetryBus(restored: false).Check().Findings, f => f.RuleId == RuleIds.SeriesPassGates);
+        var finding = Assert.Single(new TelemetryBus(restored: false).Check().Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
         Assert.Equal("5 pass gates in series without a restoring stage (limit 2): Elmore delay 405 ps (50% estimate 280 ps); "
                      + "a restoring stage every 2 gates would give about 157 ps", finding.Message);
         Assert.Equal("hop2\nhop4", finding.Properties["splitAfterDevices"]);
-        Assert.DoesNotContain(new TelemetryBus(restored: true).Check().Findings, f => f.RuleId == RuleIds.SeriesPassGates);
+        Assert.DoesNotContain(new TelemetryBus(restored: true).Check().Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
     }
 
     // The split sites a code fix needs (splitSites): a straight run of five separate calls, then a loop-like call that

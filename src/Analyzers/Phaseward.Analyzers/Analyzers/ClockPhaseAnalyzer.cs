@@ -1,8 +1,6 @@
-using System.Collections.Generic;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 using Phaseward.Checking;
-using Phaseward.Rules.ClockPhases;
 
 namespace Phaseward.Analyzers;
 
@@ -10,5 +8,5 @@ namespace Phaseward.Analyzers;
 [DiagnosticAnalyzer(LanguageNames.CSharp)]
 public sealed class ClockPhaseAnalyzer : FindingAnalyzer
 {
-    protected override IReadOnlyList<Rule> Rules { get; } = new Rule[] { new SameWindowLatchesRule(), new OverlapRaceRule(), new ClockCrossingRule(), new ClockGateEnableRule(), new LoopWithoutStorageRule() };
+    protected override RuleFamily Family => RuleFamily.ClockPhases;
 }

@@ -1,8 +1,6 @@
-using System.Collections.Generic;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 using Phaseward.Checking;
-using Phaseward.Rules.DynamicStorage;
 
 namespace Phaseward.Analyzers;
 
@@ -10,12 +8,5 @@ namespace Phaseward.Analyzers;
 [DiagnosticAnalyzer(LanguageNames.CSharp)]
 public sealed class DynamicStorageAnalyzer : FindingAnalyzer
 {
-    protected override IReadOnlyList<Rule> Rules { get; } = new Rule[]
-    {
-        new DynamicNodeOnGatedClockRule(),
-        new ClockTooSlowForDynamicStorageRule(),
-        new ChargeSharingRule(),
-        new FightingDriversRule(),
-        new KeeperTooStrongRule(),
-    };
+    protected override RuleFamily Family => RuleFamily.DynamicStorage;
 }

@@ -2,6 +2,9 @@ using System.Collections.Immutable;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 using Phaseward.Analyzers.Diagnostics;
+using Phaseward.Analyzers.Elaboration;
+using Phaseward.Analyzers.Options;
+using Phaseward.Checking;
 
 namespace Phaseward.Analyzers;
 
@@ -13,14 +16,18 @@ namespace Phaseward.Analyzers;
 public sealed class ElaborationAnalyzer : PhasewardAnalyzer
 {
     public override ImmutableArray<DiagnosticDescriptor> SupportedDiagnostics { get; } = ImmutableArray.Create(
-        Descriptors.NotElaborated, Descriptors.ElaborationBudgetExceeded, Descriptors.DesignThrows, Descriptors.InvalidOption);
+        Descriptors.Of(RuleCatalog.NotElaborated), Descriptors.Of(RuleCatalog.ElaborationBudgetExceeded),
+        Descriptors.Of(RuleCatalog.DesignThrows), Descriptors.Of(RuleCatalog.InvalidOption));
+
+    internal override void AnalyzeDocumentOptions(SemanticModelAnalysisContext context, PhasewardOptions options, DesignInfo firstDesign)
+    {
+        foreach (var problem in options.Problems)
+            context.ReportDiagnostic(Diagnostic.Create(Descriptors.Of(RuleCatalog.InvalidOption), firstDesign.AnchorLocation,
+                problem.Key, problem.Value, problem.Expected, problem.DefaultValue));
+    }
 
     internal override void AnalyzeDesign(DesignAnalysisContext context)
     {
-        foreach (var problem in context.Options.Problems)
-            context.Report(Diagnostic.Create(Descriptors.InvalidOption, context.Design.AnchorLocation,
-                problem.Key, problem.Value, problem.Expected, problem.DefaultValue));
-
         foreach (var issue in context.Elaboration.Issues)
             context.Report(context.Mapper.FromIssue(issue));
     }

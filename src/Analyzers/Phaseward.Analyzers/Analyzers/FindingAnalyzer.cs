@@ -9,13 +9,13 @@ using Phaseward.Checking;
 namespace Phaseward.Analyzers;
 
 /// <summary>
-/// Base of a rule family's analyzer: it runs the family's rules (from src/Dsl) on the shared netlist and reports their
-/// findings. A family analyzer only lists its rules:
+/// Base of a rule family's analyzer: it runs the family's rules (those of <see cref="Checker.Rules"/> whose registry
+/// entries are in its family) on the shared netlist and reports their findings. A family analyzer only names its family:
 /// <code>
 /// [DiagnosticAnalyzer(LanguageNames.CSharp)]
 /// public sealed class ClockPhaseAnalyzer : FindingAnalyzer
 /// {
-///     protected override IReadOnlyList&lt;Rule&gt; Rules { get; } = new Rule[] { new SamePhaseLatchesRule() };
+///     protected override RuleFamily Family => RuleFamily.ClockPhases;
 /// }
 /// </code>
 /// </summary>
@@ -23,8 +23,13 @@ public abstract class FindingAnalyzer : PhasewardAnalyzer
 {
     private ImmutableArray<DiagnosticDescriptor> supported;
 
-    /// <summary>The rules this analyzer runs.</summary>
-    protected abstract IReadOnlyList<Rule> Rules { get; }
+    private IReadOnlyList<Rule>? rules;
+
+    /// <summary>The family whose rules this analyzer runs.</summary>
+    protected abstract RuleFamily Family { get; }
+
+    /// <summary>The rules this analyzer runs (virtual for test-only analyzers).</summary>
+    internal virtual IReadOnlyList<Rule> Rules => rules ??= Checker.Rules.Where(r => r.Descriptors.Any(d => d.Family == Family)).ToArray();
 
     public sealed override ImmutableArray<DiagnosticDescriptor> SupportedDiagnostics
     {
@@ -33,8 +38,7 @@ public abstract class FindingAnalyzer : PhasewardAnalyzer
             if (supported.IsDefault)
             {
                 supported = Rules.SelectMany(r => r.Descriptors)
-                    .Select(d => Descriptors.Find(d.Id) ?? throw new InvalidOperationException(
-                        $"Rule ID {d.Id} has no DiagnosticDescriptor in Phaseward.Analyzers.Diagnostics.Descriptors; add one there."))
+                    .Select(Descriptors.Of)
                     .Distinct()
                     .ToImmutableArray();
             }

@@ -27,6 +27,12 @@ public abstract class PhasewardAnalyzer : DiagnosticAnalyzer
 
     internal abstract void AnalyzeDesign(DesignAnalysisContext context);
 
+    /// <summary>Called once per document that holds designs, with its options and its first design (where a problem
+    /// with the options is reported: once per file, however many designs it holds).</summary>
+    internal virtual void AnalyzeDocumentOptions(SemanticModelAnalysisContext context, PhasewardOptions options, DesignInfo firstDesign)
+    {
+    }
+
     private void AnalyzeDocument(SemanticModelAnalysisContext context, ElaborationSession session)
     {
         var tree = context.SemanticModel.SyntaxTree;
@@ -35,7 +41,12 @@ public abstract class PhasewardAnalyzer : DiagnosticAnalyzer
         {
             context.CancellationToken.ThrowIfCancellationRequested();
             // The options belong to the document, not the design: read them once, and only for documents with designs.
-            options ??= PhasewardOptions.Read(context.Options.AnalyzerConfigOptionsProvider.GetOptions(tree));
+            if (options is null)
+            {
+                options = PhasewardOptions.Read(context.Options.AnalyzerConfigOptionsProvider.GetOptions(tree));
+                AnalyzeDocumentOptions(context, options, design);
+            }
+
             var result = CompilationElaborations.Elaborate(session, design, options.Limits, context.CancellationToken);
             AnalyzeDesign(new DesignAnalysisContext(context, design, result, options, new DiagnosticMapper(session, design)));
         }

@@ -1,8 +1,6 @@
-using System.Collections.Generic;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 using Phaseward.Checking;
-using Phaseward.Rules.Timing;
 
 namespace Phaseward.Analyzers;
 
@@ -10,5 +8,5 @@ namespace Phaseward.Analyzers;
 [DiagnosticAnalyzer(LanguageNames.CSharp)]
 public sealed class TimingAnalyzer : FindingAnalyzer
 {
-    protected override IReadOnlyList<Rule> Rules { get; } = new Rule[] { new RegisterTimingRule(), new LatchBorrowingRule(), new LatchWriteWindowRule() };
+    protected override RuleFamily Family => RuleFamily.Timing;
 }

@@ -114,7 +114,7 @@ internal sealed partial class Interpreter
                         reference.Value = FromClr(clrArguments[i]);
             if (circuit is not null && (circuit.DeviceCount > limits.DeviceBudget || circuit.NetCount > limits.DeviceBudget))
             {
-                Report(RuleIds.ElaborationBudgetExceeded, loops.Count > 0 ? loops.Peek().Syntax : site.Syntax, DesignName,
+                Report(RuleCatalog.ElaborationBudgetExceeded.Id, loops.Count > 0 ? loops.Peek().Syntax : site.Syntax, DesignName,
                     $"the device budget of {limits.DeviceBudget} devices (or nets; phaseward.elaboration_device_budget) is used up");
                 throw new ElaborationStopped();
             }
@@ -461,7 +461,7 @@ internal sealed partial class Interpreter
                 continue;
             if (ModelOf(declaration).GetOperation(declaration, cancellationToken) is not IConstructorBodyOperation body)
             {
-                Report(RuleIds.NotElaborated, declaration, "the static constructor of " + Describe(type), "its body could not be read", DesignName);
+                Report(RuleCatalog.NotElaborated.Id, declaration, "the static constructor of " + Describe(type), "its body could not be read", DesignName);
                 continue;
             }
 

@@ -228,7 +228,7 @@ internal sealed partial class Interpreter
         allocatedBytes += bytes;
         if (allocatedBytes > limits.MemoryBudget || bytes > limits.MemoryBudget)
         {
-            Report(RuleIds.ElaborationBudgetExceeded, site.Syntax, DesignName,
+            Report(RuleCatalog.ElaborationBudgetExceeded.Id, site.Syntax, DesignName,
                 $"the memory budget of {limits.MemoryBudget} bytes (arrays, strings and collections the design's code makes; phaseward.elaboration_memory_budget) would be exceeded by {bytes} more");
             throw new ElaborationStopped();
         }

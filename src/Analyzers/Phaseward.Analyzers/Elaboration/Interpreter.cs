@@ -92,7 +92,7 @@ internal sealed partial class Interpreter
     /// <summary>Reports PW9001 once for this site and returns <see cref="Unknown"/>.</summary>
     public object Unsupported(IOperation operation, string what, string why)
     {
-        Report(RuleIds.NotElaborated, operation.Syntax, what, why, DesignName);
+        Report(RuleCatalog.NotElaborated.Id, operation.Syntax, what, why, DesignName);
         return Unknown.Value;
     }
 
@@ -110,7 +110,7 @@ internal sealed partial class Interpreter
     {
         if (tryDepth > 0)
             throw new DesignException(ExceptionNamed(message), site);
-        Report(RuleIds.DesignThrows, site, DesignName, message);
+        Report(RuleCatalog.DesignThrows.Id, site, DesignName, message);
         if (++throws >= MaxThrows && !Silent)
             throw new ElaborationStopped();
     }
@@ -134,7 +134,7 @@ internal sealed partial class Interpreter
         if (++Steps > limits.StepBudget)
         {
             var where = loops.Count > 0 ? loops.Peek() : site;
-            Report(RuleIds.ElaborationBudgetExceeded, where.Syntax, DesignName,
+            Report(RuleCatalog.ElaborationBudgetExceeded.Id, where.Syntax, DesignName,
                 $"the step budget of {limits.StepBudget} steps (loop iterations and calls; phaseward.elaboration_step_budget) is used up");
             throw new ElaborationStopped();
         }
@@ -145,7 +145,7 @@ internal sealed partial class Interpreter
         if (++depth > limits.RecursionLimit || !HasStackRoom())
         {
             depth--;
-            Report(RuleIds.ElaborationBudgetExceeded, site.Syntax, DesignName,
+            Report(RuleCatalog.ElaborationBudgetExceeded.Id, site.Syntax, DesignName,
                 $"calls nest deeper than the limit of {limits.RecursionLimit} (phaseward.elaboration_recursion_limit)");
             throw new ElaborationStopped();
         }

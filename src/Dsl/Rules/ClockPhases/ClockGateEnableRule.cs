@@ -28,6 +28,10 @@ namespace Phaseward.Rules.ClockPhases;
 /// </remarks>
 public sealed class ClockGateEnableRule : Rule
 {
+    private const string FromLatch = "during {0} (from latch '{1}', transparent in {2}, through a {3} path)";
+    private const string Unrelated = "at any time (from latch '{0}', transparent in {1}, whose clock has no fixed time relation to '{2}')";
+    private const string FromInput = "at any time (from primary input '{0}', taken as changing at any time by phaseward.clock_gate_inputs_may_change)";
+
     public override IReadOnlyList<RuleDescriptor> Descriptors { get; } = new[] { RuleCatalog.ClockGateEnable };
 
     public override IEnumerable<Finding> Check(RuleContext context)
@@ -53,7 +57,7 @@ public sealed class ClockGateEnableRule : Rule
                     var phase = latch.Phase;
                     if (TimeBase.CommonCycle(phase.Clock, source) is not { } cycle)
                     {
-                        changes = Format(RuleTexts.ClockGateEnableUnrelated, latch.Name, phase.Name, source.Name);
+                        changes = Format(Unrelated, latch.Name, phase.Name, source.Name);
                     }
                     else
                     {
@@ -67,14 +71,14 @@ public sealed class ClockGateEnableRule : Rule
                         // Data already waiting when the latch opens passes within its entry delay: if that falls while the
                         // gate passes the clock, the storage is on the wrong phase (not merely slow to reach the gate).
                         opensWhilePassing = Overlaps(new TimeInterval(opens, opens + model.EntryDelay(latch)), phase.Clock.Period, passes, source.Period, cycle);
-                        changes = Format(RuleTexts.ClockGateEnableFromLatch, Interval(change.Value), latch.Name, phase.Name, origin.Delay);
+                        changes = Format(FromLatch, Interval(change.Value), latch.Name, phase.Name, origin.Delay);
                     }
                 }
                 else
                 {
                     if (!context.Policy.EnablesFromInputsMayChange)
                         continue;
-                    changes = Format(RuleTexts.ClockGateEnableFromInput, origin.Input!.Name);
+                    changes = Format(FromInput, origin.Input!.Name);
                 }
 
                 var blocks = gate.StopLevel == ClockStopLevel.Low ? source.Low : source.High;

@@ -24,6 +24,10 @@ namespace Phaseward.Rules.ClockPhases;
 /// </remarks>
 public sealed class LoopWithoutStorageRule : Rule
 {
+    private const string OddLoop = "{0} inversions (odd): enabled, it oscillates with a period of about {1} (twice the loop's delay {2})";
+    private const string EvenLoop = "{0} inversions (even): it settles at a level nothing writes";
+    private const string TangledLoops = "loops that share nets, whose behaviour depends on their other inputs";
+
     /// <summary>How many of a loop's devices the message names.</summary>
     public const int NamedDevices = 4;
 
@@ -65,16 +69,16 @@ public sealed class LoopWithoutStorageRule : Rule
                 if (inversions % 2 == 1)
                 {
                     properties[LoopProperties.OscillationPeriodSeconds] = DynamicStorageProperties.Number((delay * 2).Seconds);
-                    behaviour = string.Format(System.Globalization.CultureInfo.InvariantCulture, RuleTexts.LoopWithoutStorageOddLoop, inversions, delay * 2, delay);
+                    behaviour = string.Format(System.Globalization.CultureInfo.InvariantCulture, OddLoop, inversions, delay * 2, delay);
                 }
                 else
                 {
-                    behaviour = string.Format(System.Globalization.CultureInfo.InvariantCulture, RuleTexts.LoopWithoutStorageEvenLoop, inversions);
+                    behaviour = string.Format(System.Globalization.CultureInfo.InvariantCulture, EvenLoop, inversions);
                 }
             }
             else
             {
-                behaviour = RuleTexts.LoopWithoutStorageTangledLoops;
+                behaviour = TangledLoops;
             }
 
             var related = new List<SourceSpan>(NamedDevices);

@@ -24,6 +24,14 @@ namespace Phaseward.Rules.DynamicStorage;
 /// </remarks>
 public sealed class FightingDriversRule : Rule
 {
+    private const string Always = "all the time (two restoring stages)";
+    private const string WhilePhase = "while {0} conducts ({1} per period)";
+    private const string WhileControl = "whenever '{0}' is high";
+    private const string WhileBothControls = "whenever '{0}' and '{1}' are both high (not stated exclusive)";
+    private const string Overlap = "for {0} per period ({1} and {2} overlap)";
+    private const string UnrelatedClocks = "whenever {0} and {1} conduct together (unrelated clocks)";
+    private const string PhaseAndControl = "whenever '{1}' is high while {0} conducts";
+
     public override IReadOnlyList<RuleDescriptor> Descriptors { get; } = new[] { RuleCatalog.FightingDrivers };
 
     public override IEnumerable<Finding> Check(RuleContext context)
@@ -113,13 +121,13 @@ public sealed class FightingDriversRule : Rule
     private static (string When, Time? Overlap)? Together(Netlist netlist, Device a, Device b, PhaseWindowCache windows)
     {
         if (!a.IsPassDevice && !b.IsPassDevice)
-            return (RuleTexts.FightingDriversAlways, null);
+            return (Always, null);
         if (!a.IsPassDevice || !b.IsPassDevice)
         {
             var gate = a.IsPassDevice ? a : b;
             return gate.ClockControl is { } phase
-                ? (Format(RuleTexts.FightingDriversWhilePhase, phase.Name, windows.Of(phase).Length), windows.Of(phase).Length)
-                : (Format(RuleTexts.FightingDriversWhileControl, gate.DataControl!.Name), null);
+                ? (Format(WhilePhase, phase.Name, windows.Of(phase).Length), windows.Of(phase).Length)
+                : (Format(WhileControl, gate.DataControl!.Name), null);
         }
 
         if (a.ClockControl is { } pa && b.ClockControl is { } pb)
@@ -127,21 +135,21 @@ public sealed class FightingDriversRule : Rule
             var wa = windows.Of(pa);
             var wb = windows.Of(pb);
             if (!wa.SharesRootWith(wb))
-                return (Format(RuleTexts.FightingDriversUnrelatedClocks, pa.Name, pb.Name), null);
+                return (Format(UnrelatedClocks, pa.Name, pb.Name), null);
             var overlap = wa.TotalOverlapWith(wb);
-            return overlap > Time.Zero ? (Format(RuleTexts.FightingDriversOverlap, overlap, pa.Name, pb.Name), overlap) : null;
+            return overlap > Time.Zero ? (Format(Overlap, overlap, pa.Name, pb.Name), overlap) : null;
         }
 
         if (a.DataControl is { } ca && b.DataControl is { } cb)
         {
             if (ReferenceEquals(ca, cb))
-                return (Format(RuleTexts.FightingDriversWhileControl, ca.Name), null);
-            return netlist.AreExclusive(ca, cb) ? null : (Format(RuleTexts.FightingDriversWhileBothControls, ca.Name, cb.Name), null);
+                return (Format(WhileControl, ca.Name), null);
+            return netlist.AreExclusive(ca, cb) ? null : (Format(WhileBothControls, ca.Name, cb.Name), null);
         }
 
         var clocked = a.ClockControl is not null ? a : b;
         var controlled = ReferenceEquals(clocked, a) ? b : a;
-        return (Format(RuleTexts.FightingDriversPhaseAndControl, clocked.ClockControl!.Name, controlled.DataControl!.Name), null);
+        return (Format(PhaseAndControl, clocked.ClockControl!.Name, controlled.DataControl!.Name), null);
     }
 
     private static string Format(string format, params object[] arguments) => string.Format(CultureInfo.InvariantCulture, format, arguments);

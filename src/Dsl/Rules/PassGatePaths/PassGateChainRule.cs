@@ -27,6 +27,9 @@ namespace Phaseward.Rules.PassGatePaths;
 /// </remarks>
 public sealed class PassGateChainRule : Rule
 {
+    /// <summary>PW2001's {6} when its worst case counts branches not known to be exclusive as conducting together.</summary>
+    internal const string ExclusivityAssumption = "; this worst case assumes that mux branches whose controls are not known to be exclusive conduct together (state Circuit.Exclusive to count them off)";
+
     /// <summary>At most this many split points are listed in a finding's properties.</summary>
     public const int MaxListedSplitPoints = 32;
 
@@ -158,7 +161,7 @@ public sealed class PassGateChainRule : Rule
         return new Finding(
             RuleCatalog.SeriesPassGates,
             gate.Span,
-            new object[] { chain.Length, limit, chain.Elmore, fifty, spacing, restored, chain.AssumesUnknownBranchesConduct ? RuleTexts.SeriesPassGatesAssumption : "" },
+            new object[] { chain.Length, limit, chain.Elmore, fifty, spacing, restored, chain.AssumesUnknownBranchesConduct ? ExclusivityAssumption : "" },
             new[] { chain.First.Span },
             properties);
     }

@@ -202,9 +202,9 @@ public class DynamicNodeOnGatedClockRuleTests
     [Fact]
     public void RunsFromTheRuleSetAndTheCatalog()
     {
-        Assert.Contains(RuleSet.All, r => r is DynamicNodeOnGatedClockRule);
+        Assert.Contains(Checker.Rules, r => r is DynamicNodeOnGatedClockRule);
         Assert.Same(RuleCatalog.DynamicNodeOnGatedClock, RuleCatalog.Find("PW3001"));
         Assert.Equal(Severity.Warning, RuleCatalog.DynamicNodeOnGatedClock.DefaultSeverity);
-        Assert.Equal(RuleCategories.DynamicStorage, RuleCatalog.DynamicNodeOnGatedClock.Category);
+        Assert.Equal("Phaseward.DynamicStorage", RuleCatalog.DynamicNodeOnGatedClock.Category);
     }
 }

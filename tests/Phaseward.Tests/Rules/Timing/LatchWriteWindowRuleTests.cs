@@ -35,7 +35,7 @@ public class LatchWriteWindowRuleTests
     public void A_30ps_pulse_latch_charging_60fF_through_a_pass_gate_is_reported_with_its_figures()
     {
         var finding = Assert.Single(Run(PulseLatch(30)));
-        Assert.Equal(RuleIds.LatchWriteWindow, finding.RuleId);
+        Assert.Equal(RuleCatalog.LatchWriteWindow.Id, finding.RuleId);
         Assert.Equal("Latch 'pl' cannot be written in its window: it is open 30 ps, 30 ps of it with both halves of its entry gate on " +
                      "(complement skew 0 s), but the entry gate needs 207 ps to charge storage node 'pl.x' (0.69·R·C with R = 5 kΩ, " +
                      "C = 60 fF; margin -177 ps)", finding.Message);
