@@ -51,6 +51,19 @@ public sealed class ReportConfigurationTests
                 ["Routes/.editorconfig"] = "[Barn*.cs]\ndotnet_analyzer_diagnostic.category-Phaseward.PassGatePaths.severity = none\n",
             },
         },
+        // The project's warning switches on top of the config: NoWarn drops a rule, TreatWarningsAsErrors makes the other
+        // warnings errors except those in WarningsNotAsErrors; a suggestion stays a suggestion.
+        new object[]
+        {
+            "switches",
+            new Dictionary<string, string>
+            {
+                ["Directory.Build.props"] = "<Project>\n  <PropertyGroup>\n    <TreatWarningsAsErrors>true</TreatWarningsAsErrors>\n"
+                    + "    <WarningsNotAsErrors>$(WarningsNotAsErrors);PW3001</WarningsNotAsErrors>\n    <NoWarn>$(NoWarn);PW1001</NoWarn>\n"
+                    + "  </PropertyGroup>\n</Project>\n",
+                [".editorconfig"] = "root = true\n\n[Routes/*.cs]\ndotnet_diagnostic.PW2001.severity = suggestion\n",
+            },
+        },
     };
 
     [Theory]
@@ -80,6 +93,15 @@ public sealed class ReportConfigurationTests
         Assert.NotEmpty(built);
         Assert.True(reported.Count > 0, output);
         Assert.Equal(built, reported);
+        if (name == "switches")
+        {
+            // Not agreement by accident: the switches did change the build's severities.
+            Assert.Contains(built, b => b.StartsWith("error PW2001 SprinklerRoute.cs:", StringComparison.Ordinal));
+            Assert.Contains(built, b => b.StartsWith("warning PW3001 HeaterHold.cs:", StringComparison.Ordinal));
+            Assert.Contains(built, b => b.StartsWith("info PW2001 CellarRoute.cs:", StringComparison.Ordinal));
+            Assert.DoesNotContain(built, b => b.Contains(" PW1001 ", StringComparison.Ordinal));
+        }
+
         Assert.Equal(built.Any(b => b.StartsWith("error ", StringComparison.Ordinal)) ? 1 : 0, exitCode);
     }
 
