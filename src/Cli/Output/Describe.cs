@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Linq;
+using Phaseward.Checking;
 using Phaseward.Cli.Model;
 using Phaseward.Clocking;
 using Phaseward.Netlists;
@@ -10,8 +11,7 @@ namespace Phaseward.Cli.Output;
 /// <summary>Short texts shared by the text and HTML outputs, so both say the same thing.</summary>
 internal static class Describe
 {
-    public const string Caution = "Figures are first-order estimates (0.69·R·C stages, Elmore delays, linear leakage, nominal clock edges). "
-        + "They catch clocking hazards early; they do not replace transistor-level simulation, the foundry's rules or sign-off.";
+    public const string Caution = EstimateCaution.Text;
 
     public static string Location(SourceSpan span)
         => span.IsKnown ? $"{DisplayPath(span.Path)}:{span.Line.ToString(CultureInfo.InvariantCulture)}" : "(unknown location)";

@@ -19,7 +19,8 @@ public sealed class CheckReport
 
     public bool IsClean => Findings.Count == 0;
 
-    /// <summary>A human-readable report: a summary line, then one line per finding with its location.</summary>
+    /// <summary>A human-readable report: a summary line, one line per finding with its location, then the process the
+    /// figures came from and the caution that they are estimates.</summary>
     public override string ToString()
     {
         var text = new StringBuilder();
@@ -30,6 +31,7 @@ public sealed class CheckReport
         text.AppendLine(IsClean ? "clean, no findings." : Findings.Count + (Findings.Count == 1 ? " finding:" : " findings:"));
         foreach (var finding in Findings)
             text.Append("  ").AppendLine(finding.ToString());
+        text.Append("  ").Append(EstimateCaution.ProcessLine(Netlist.Process)).Append(' ').AppendLine(EstimateCaution.Text);
         return text.ToString();
     }
 

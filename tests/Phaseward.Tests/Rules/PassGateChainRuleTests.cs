@@ -85,7 +85,7 @@ public class PassGateChainRuleTests
         Assert.Equal("2", finding.Properties["splitPointCount"]);
         Assert.Equal("hop2\nhop4", finding.Properties["splitAfterDevices"]);
         Assert.Equal("false", finding.Properties["splitPointsTruncated"]);
-        Assert.Equal("5 pass gates in series without a restoring stage (limit 2): Elmore delay 347 ps (50% estimate 240 ps); "
+        Assert.Equal("5 pass gates in series without a restoring stage (limit 2), starting at 'hop1' and passing the limit at 'hop3', in design 'Buoy': Elmore delay 347 ps (50% estimate 240 ps); "
                      + "a restoring stage every 2 gates would give about 146 ps", finding.Message);
         Assert.Equal(c.ToNetlist().Devices.Single(d => d.Name == "hop1").Span, Assert.Single(finding.RelatedLocations));
         Assert.Equal(c.ToNetlist().Devices.Single(d => d.Name == "hop3").Span, finding.Location);
@@ -338,7 +338,8 @@ public class PassGateChainRuleTests
         var report = new TelemetryMux().Check(new RulePolicy { MaxSeriesPassGates = 4 });
         var finding = Assert.Single(report.Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
         Assert.Equal("6", finding.Properties["chainLength"]);
-        Assert.StartsWith("6 pass gates in series without a restoring stage (limit 4): Elmore delay ", finding.Message);
+        Assert.StartsWith("6 pass gates in series without a restoring stage (limit 4), starting at '", finding.Message);
+        Assert.Contains("', in design 'TelemetryMux': Elmore delay ", finding.Message);
         Assert.Contains(" ps", finding.Message);
         Assert.True(finding.Location.IsKnown);
         Assert.Contains(RuleCatalog.SeriesPassGates, RuleCatalog.All);
@@ -373,7 +374,7 @@ public class PassGateChainRuleTests
     public void Documented_example_and_its_fix()
     {
         var finding = Assert.Single(new TelemetryBus(restored: false).Check().Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
-        Assert.Equal("5 pass gates in series without a restoring stage (limit 2): Elmore delay 405 ps (50% estimate 280 ps); "
+        Assert.Equal("5 pass gates in series without a restoring stage (limit 2), starting at 'hop1' and passing the limit at 'hop3', in design 'TelemetryBus': Elmore delay 405 ps (50% estimate 280 ps); "
                      + "a restoring stage every 2 gates would give about 157 ps", finding.Message);
         Assert.Equal("hop2\nhop4", finding.Properties["splitAfterDevices"]);
         Assert.DoesNotContain(new TelemetryBus(restored: true).Check().Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
