@@ -22,17 +22,7 @@ internal static class ClockCrossingDeck
     public static SpiceDeck Build(Finding finding, Netlist netlist)
     {
         var model = LatchModel.Of(netlist);
-        var targetName = DeckInputs.Property(finding, FindingProperties.TargetLatch);
-        var sourceName = DeckInputs.Property(finding, FindingProperties.SourceLatch);
-        LatchPath? path = null;
-        foreach (var p in model.Paths)
-        {
-            if (p.From.Name != sourceName || p.To.Name != targetName) continue;
-            if (path is null || p.EntryGate.Span.Equals(finding.Location)) path = p;
-        }
-
-        if (path is null)
-            throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: design '{netlist.DesignName}' has no path from latch '{sourceName}' to latch '{targetName}'.", nameof(finding));
+        var path = DeckInputs.LatchPathOf(finding, netlist, model);
 
         var a = path.From;
         var b = path.To;

@@ -2,6 +2,8 @@ using System;
 using System.Globalization;
 using Phaseward.Checking;
 using Phaseward.Netlists;
+using Phaseward.Rules.ClockPhases;
+using Phaseward.Sequencing;
 using Phaseward.Storage;
 
 namespace Phaseward.Reproducers;
@@ -45,5 +47,23 @@ internal static class DeckInputs
         var net = NetByName(finding, netlist, key);
         return StorageNodes.Find(netlist, net)
             ?? throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location} names '{net.Name}', which is not a storage node in design '{netlist.DesignName}'.", nameof(netlist));
+    }
+
+    /// <summary>The latch-to-latch path a finding names (its source and target latch properties), preferring the one
+    /// whose entry gate is the finding's location when several connect the two latches.</summary>
+    public static LatchPath LatchPathOf(Finding finding, Netlist netlist, LatchModel model)
+    {
+        var targetName = Property(finding, FindingProperties.TargetLatch);
+        var sourceName = Property(finding, FindingProperties.SourceLatch);
+        LatchPath? path = null;
+        foreach (var p in model.Paths)
+        {
+            if (p.From.Name != sourceName || p.To.Name != targetName) continue;
+            if (path is null || p.EntryGate.Span.Equals(finding.Location)) path = p;
+        }
+
+        return path ?? throw new ArgumentException(
+            $"The {finding.RuleId} finding at {finding.Location}: design '{netlist.DesignName}' has no path from latch '{sourceName}' to latch '{targetName}'.",
+            nameof(finding));
     }
 }
