@@ -72,7 +72,9 @@ internal static class ReportCommand
             foreach (var (definition, value, option) in line.PolicyOverrides)
                 policy.SetOption(definition, value, option);
 
-            var reports = elaborated.Select((e, i) => DesignRunner.Check(e.Design, e.Netlist, anchors[i], policy)).ToList();
+            var filesWithOptionsReported = new HashSet<string>(StringComparer.Ordinal);
+            var reports = elaborated.Select((e, i) => DesignRunner.Check(e.Design, e.Netlist, anchors[i], policy,
+                reportOptionProblems: filesWithOptionsReported.Add(anchors[i].Path))).ToList();
             foreach (var warning in configuration.Warnings())
                 stderr.WriteLine("phaseward-report: warning: " + warning);
 

@@ -62,6 +62,22 @@ public sealed class LayeredDesignsFixture : IDisposable
                 }
             }
             """);
+        File.WriteAllText(Path.Combine(Directory, "Designs", "Beacons.cs"), """
+            using Phaseward;
+
+            namespace Layered;
+
+            /// <summary>Demo designs, invented figures: two beacon drivers in one file (options are per file).</summary>
+            public sealed class BowBeacon : Design
+            {
+                protected override void Describe(Circuit c) => c.Output("bow_lamp", c.Inverter(c.Input("bow_on")));
+            }
+
+            public sealed class SternBeacon : Design
+            {
+                protected override void Describe(Circuit c) => c.Output("stern_lamp", c.Inverter(c.Input("stern_on")));
+            }
+            """);
         var artifacts = Path.Combine(Directory, "artifacts");
         System.IO.Directory.CreateDirectory(artifacts);
         Assembly = Loading.ProjectBuilder.Build(Project, artifacts, TextWriter.Null).AssemblyPath;

@@ -83,6 +83,16 @@ public sealed class SeverityTests : IDisposable
     }
 
     [Fact]
+    public void AnUnusableOptionIsReportedOncePerFileAsInTheBuild()
+    {
+        project.Write(".editorconfig", "root = true\n\n[*.cs]\nphaseward.min_race_margin = soon\n");
+        var run = Of(project.Assembly, "--design", "BowBeacon", "--design", "SternBeacon");
+        // Beacons.cs holds both designs: one PW9004, with the first of them, as the analyzers report it once per file.
+        Assert.Single(System.Text.RegularExpressions.Regex.Matches(run.Out, "PW9004"));
+        Assert.Contains("'soon'", run.Out);
+    }
+
+    [Fact]
     public void BulkSeverityKeysApplyBelowTheRuleKey()
     {
         project.Write(".editorconfig", "root = true\n\n[*.cs]\ndotnet_analyzer_diagnostic.severity = error\ndotnet_diagnostic.PW1001.severity = suggestion\n");

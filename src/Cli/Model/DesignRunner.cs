@@ -30,13 +30,14 @@ internal static class DesignRunner
     /// <summary>
     /// Checks an elaborated design as the analyzers would: its <c>phaseward.</c> options from the configuration of the
     /// file holding its <c>Describe</c> (<paramref name="anchor"/>; a value that cannot be used is a PW9004 finding
-    /// there and its default applies), each finding at the severity configured for its own file.
+    /// there and its default applies), each finding at the severity configured for its own file. As in the build, a
+    /// file's option problems are reported once, with the first of its designs (<paramref name="reportOptionProblems"/>).
     /// </summary>
-    public static DesignReport Check(Design design, Netlist netlist, SourceSpan anchor, ReportPolicy policy)
+    public static DesignReport Check(Design design, Netlist netlist, SourceSpan anchor, ReportPolicy policy, bool reportOptionProblems = true)
     {
         var (rulePolicy, problems) = policy.RulePolicyFor(anchor.Path);
         var check = Checker.Check(netlist, rulePolicy);
-        var optionFindings = problems.Select(p => new Finding(RuleCatalog.InvalidOption, anchor, new object[] { p.Key, p.Value, p.Expected, p.DefaultValue }));
+        var optionFindings = problems.Where(_ => reportOptionProblems).Select(p => new Finding(RuleCatalog.InvalidOption, anchor, new object[] { p.Key, p.Value, p.Expected, p.DefaultValue }));
         var findings = new CheckReport(netlist, optionFindings.Concat(check.Findings).ToList());
         return new DesignReport(design, netlist, findings, rulePolicy,
             f => policy.SeverityOf(f.Rule, f.Location.Path.Length > 0 ? f.Location.Path : anchor.Path));
