@@ -410,7 +410,7 @@ public class PassGateChainRuleTests
         var finding = Assert.Single(Check(c));
         Assert.Equal("10", finding.Properties["chainLength"]);
         Assert.Equal("hop2\nhop4\nloop0\nloop2", finding.Properties["splitAfterDevices"]);
-        var sites = finding.Properties[PassGateChainRule.SplitSitesProperty].Split('\n');
+        var sites = finding.Properties[FindingPropertyKeys.SplitSites].Split('\n');
         Assert.Equal(new[]
         {
             "3|3|1|1|false|120|8|/src/Buoy.cs",   // hop3: its own call
@@ -421,7 +421,7 @@ public class PassGateChainRuleTests
 
         // Limit 1 (spacing 1): split before every gate from position 2 on; the helper's gate reports its caller.
         var strict = Assert.Single(Check(c, limit: 1));
-        var last = strict.Properties[PassGateChainRule.SplitSitesProperty].Split('\n').Last();
+        var last = strict.Properties[FindingPropertyKeys.SplitSites].Split('\n').Last();
         Assert.Equal("10|10|1|1|true|300|12|/src/Lib.cs", last);
     }
 
@@ -445,7 +445,7 @@ public class PassGateChainRuleTests
         c.Output("z", c.Inverter(side));
 
         var finding = Assert.Single(Check(c));
-        Assert.Equal("3|3|1|2|false|30|5|/src/Buoy.cs", finding.Properties[PassGateChainRule.SplitSitesProperty]);
+        Assert.Equal("3|3|1|2|false|30|5|/src/Buoy.cs", finding.Properties[FindingPropertyKeys.SplitSites]);
     }
 
     [Fact]
@@ -454,7 +454,7 @@ public class PassGateChainRuleTests
         var c = new Circuit("Buoy");
         var clock = c.Clock("sample", 10.Nanoseconds());
         Chain(c, c.Input("sensor"), clock.High, 3, "hop");
-        var line = Assert.Single(Check(c)).Properties[PassGateChainRule.SplitSitesProperty];
+        var line = Assert.Single(Check(c)).Properties[FindingPropertyKeys.SplitSites];
         Assert.StartsWith("3|3|1|1|false|-1|0|", line, StringComparison.Ordinal);
     }
 
