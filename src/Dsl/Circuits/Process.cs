@@ -66,6 +66,7 @@ public sealed class Process
     /// <summary>How late a clock's complement arrives after its true phase (it opens the 1-1 and 0-0 overlaps).</summary>
     public Time ComplementSkew { get => complementSkew; init => complementSkew = new Time(Guard.NonNegative(value.Seconds, nameof(ComplementSkew), "s")); }
 
+    /// <inheritdoc/>
     public override string ToString() => Name;
 
     private static Resistance PositiveOhms(Resistance value, string parameter) => new(Guard.Positive(value.Ohms, parameter, "Ω"));

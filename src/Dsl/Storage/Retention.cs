@@ -55,5 +55,6 @@ public readonly struct Retention
         return Of(netlist.CapacitanceOf(net), netlist.Process.ToleratedDroop, netlist.LeakageOf(net));
     }
 
+    /// <inheritdoc/>
     public override string ToString() => $"t_ret = {Time} (C = {Capacitance}, ΔV = {ToleratedDroop}, I_leak = {Leakage})";
 }

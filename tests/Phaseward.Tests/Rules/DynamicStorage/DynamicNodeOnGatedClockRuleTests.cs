@@ -86,10 +86,11 @@ public class DynamicNodeOnGatedClockRuleTests
     }
 
     [Theory]
-    [InlineData(100.0, false)]  // 100 µs < 270 µs
-    [InlineData(269.0, false)]  // just shorter
-    [InlineData(1000.0, true)]  // 1 ms > 270 µs
-    public void DeclaredIdleTimeIsComparedWithRetention(double idleUs, bool reported)
+    [InlineData(100.0, false, null)]      // 100 µs < 270 µs
+    [InlineData(269.0, false, null)]      // just shorter
+    [InlineData(271.0, true, "271 µs")]   // just longer: the limit is tested from above too
+    [InlineData(1000.0, true, "1 ms")]    // 1 ms > 270 µs
+    public void DeclaredIdleTimeIsComparedWithRetention(double idleUs, bool reported, string? idleText)
     {
         var (_, findings) = Check(c =>
         {
@@ -99,8 +100,10 @@ public class DynamicNodeOnGatedClockRuleTests
         Assert.Equal(reported ? 1 : 0, findings.Length);
         if (reported)
         {
-            Assert.Contains("declared maximum idle time: 1 ms", findings[0].Message);
-            Assert.Equal("0.001", findings[0].Properties[FindingPropertyKeys.IdleSeconds]);
+            Assert.Contains($"declared maximum idle time: {idleText}", findings[0].Message);
+            Assert.Contains("keeps its level only 270 µs", findings[0].Message);
+            var idleSeconds = double.Parse(findings[0].Properties[FindingPropertyKeys.IdleSeconds], System.Globalization.CultureInfo.InvariantCulture);
+            Assert.Equal(idleUs * 1e-6, idleSeconds, 1e-15);
         }
     }
 
