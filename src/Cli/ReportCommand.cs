@@ -52,7 +52,7 @@ internal static class ReportCommand
             if (built is not null)
                 stdout.WriteLine(ProjectBuilder.FindingsKeptFromFailingNote);
 
-            var catalog = DesignCatalog.Load(assemblyPath, line.Designs);
+            var catalog = LoadedDesigns.Load(assemblyPath, line.Designs);
             var elaborated = catalog.Designs.Select(d => (Design: d, Netlist: DesignRunner.Elaborate(d, assemblyPath))).ToList();
             using var sources = DesignSources.Open(assemblyPath);
             var anchors = elaborated.Select(e => DesignRunner.Anchor(e.Design, e.Netlist, sources)).ToList();

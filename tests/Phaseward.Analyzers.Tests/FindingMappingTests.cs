@@ -67,6 +67,11 @@ public class FindingMappingTests
         Assert.Equal("/src/Library.cs", second.AdditionalLocations[0].SourceTree!.FilePath);
         Assert.Equal(6, second.AdditionalLocations[0].GetLineSpan().StartLinePosition.Line + 1);
         Assert.Equal("c.Inverter(a, \"first\")", second.AdditionalLocations[1].SourceTree!.GetText().ToString(second.AdditionalLocations[1].SourceSpan));
+
+        // Every diagnostic names the process its figures came from (it lands in the SARIF result's properties):
+        // here the design states none, so the invented defaults, and the name says so.
+        Assert.All(diagnostics, d => Assert.Equal(Process.Illustrative.Name, d.Properties[FindingPropertyKeys.Process]));
+        Assert.Contains("invented", Process.Illustrative.Name, System.StringComparison.Ordinal);
     }
 
     [Fact]

@@ -100,7 +100,7 @@ public sealed class SpiceDeckTests : IDisposable
     // The decks of the ChannelSelect design, exported again in-process (the same code path the command uses).
     private static System.Collections.Generic.IReadOnlyList<ExportedDeck> DeckExportFor(string decks)
     {
-        var catalog = Loading.DesignCatalog.Load(QuorvaneDll, new[] { "ChannelSelect" });
+        var catalog = Loading.LoadedDesigns.Load(QuorvaneDll, new[] { "ChannelSelect" });
         var reports = catalog.Designs
             .Select(d => Model.DesignRunner.Check(d, Model.DesignRunner.Elaborate(d, QuorvaneDll), Netlists.SourceSpan.Unknown, new Policy.ReportPolicy()))
             .ToList();

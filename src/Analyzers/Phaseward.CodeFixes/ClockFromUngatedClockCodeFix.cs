@@ -118,7 +118,7 @@ public sealed class ClockFromUngatedClockCodeFix : CodeFixProvider
             || declarator.SyntaxTree != model.SyntaxTree)
             return null;
         if (model.GetOperation(value, cancellationToken) is not IInvocationOperation made
-            || made.TargetMethod.ContainingType?.ToDisplayString() != DesignCallSite.CircuitTypeName)
+            || !DesignCallSite.IsCircuitMethod(made.TargetMethod))
             return null;
 
         var scope = declarator.Ancestors().FirstOrDefault(a => a is BlockSyntax or SwitchSectionSyntax) ?? declarator.Parent!;

@@ -16,7 +16,7 @@ namespace Phaseward.CodeFixes;
 /// </summary>
 internal static class DesignCallSite
 {
-    public const string CircuitTypeName = "Phaseward.Circuit";
+    private const string CircuitTypeName = "Phaseward.Circuit";
     private const string DesignTypeName = "Phaseward.Design";
 
     /// <summary>The invocation of the <see cref="Circuit"/> method <paramref name="methodName"/> exactly at the diagnostic's location, or null.</summary>
@@ -37,10 +37,13 @@ internal static class DesignCallSite
         var model = await document.GetSemanticModelAsync(cancellationToken).ConfigureAwait(false);
         if (model?.GetOperation(call, cancellationToken) is not IInvocationOperation operation
             || operation.TargetMethod.Name != methodName
-            || operation.TargetMethod.ContainingType?.ToDisplayString() != CircuitTypeName)
+            || !IsCircuitMethod(operation.TargetMethod))
             return null;
         return (call, operation, model);
     }
+
+    /// <summary>True for a method of the DSL's <see cref="Circuit"/> type: the one test every code fix uses to know a call builds the design.</summary>
+    public static bool IsCircuitMethod(IMethodSymbol method) => method.ContainingType?.ToDisplayString() == CircuitTypeName;
 
     /// <summary>True if rewriting <paramref name="call"/> changes only what this one call site builds (see the class remarks).</summary>
     public static async Task<bool> IsLocalAsync(Document document, SemanticModel model, SyntaxNode call, CancellationToken cancellationToken)

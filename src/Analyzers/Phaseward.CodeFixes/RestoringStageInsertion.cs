@@ -132,7 +132,7 @@ internal static class RestoringStageInsertion
         if (node is not InvocationExpressionSyntax call) return null;
 
         if (model.GetOperation(call, cancellationToken) is not IInvocationOperation operation
-            || operation.TargetMethod.ContainingType?.ToDisplayString() != "Phaseward.Circuit"
+            || !DesignCallSite.IsCircuitMethod(operation.TargetMethod)
             || call.Expression is not MemberAccessExpressionSyntax access
             || !IsPlainReceiver(access.Expression))
             return null;

@@ -108,8 +108,7 @@ public sealed class SameWindowLatchesCodeFix : CodeFixProvider
             if (call is null || call.Span != span || !RunsOnce(call))
                 return null;
             if (model.GetOperation(call, cancellationToken) is not IInvocationOperation invocation
-                || invocation.TargetMethod.ContainingType is not { Name: "Circuit" } circuit
-                || circuit.ContainingNamespace?.ToDisplayString() != "Phaseward"
+                || !DesignCallSite.IsCircuitMethod(invocation.TargetMethod)
                 || invocation.Instance is null
                 || call.Expression is not MemberAccessExpressionSyntax { Expression: var receiver })
                 return null;

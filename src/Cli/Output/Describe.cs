@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Linq;
 using Phaseward.Checking;
 using Phaseward.Cli.Model;
+using Phaseward.Cli.Policy;
 using Phaseward.Clocking;
 using Phaseward.Netlists;
 using Phaseward.Sequencing;
@@ -31,6 +32,10 @@ internal static class Describe
     /// <summary>"1 clock", "2 clocks".</summary>
     public static string Count(int count, string noun)
         => count.ToString(CultureInfo.InvariantCulture) + " " + noun + (count == 1 ? string.Empty : "s");
+
+    /// <summary>"1 error", "3 warnings", "2 info" (info takes no plural).</summary>
+    public static string Count(int count, ReportSeverity severity)
+        => severity == ReportSeverity.Info ? count.ToString(CultureInfo.InvariantCulture) + " info" : Count(count, SeverityPolicy.Name(severity));
 
     public static string Window(PhaseWindow window) => $"[{window.Opens}, {window.Closes})";
 

@@ -1,9 +1,11 @@
+using System;
 using System.Collections.Generic;
 using System.Globalization;
 using System.IO;
 using System.Linq;
 using System.Net;
 using System.Text;
+using Phaseward.Checking;
 using Phaseward.Cli.Loading;
 using Phaseward.Cli.Model;
 using Phaseward.Cli.Policy;
@@ -37,10 +39,11 @@ internal static class HtmlReport
         h.AppendLine(TimingDiagram.Defs().ToString(System.Xml.Linq.SaveOptions.DisableFormatting));
         h.Append("<header><h1>Phaseward design report</h1><p class=\"input\">").Append(E(Describe.DisplayPath(input))).AppendLine("</p>");
         h.AppendLine("<nav><ul class=\"designs\">");
+        var shared = SharedNames(reports);
         foreach (var r in reports)
         {
             var counts = Counts(r);
-            h.Append("<li><a href=\"#").Append(E(Anchor(r))).Append("\">").Append(E(r.Name)).Append("</a> ").Append(counts).AppendLine("</li>");
+            h.Append("<li><a href=\"#").Append(E(Anchor(r, shared))).Append("\">").Append(E(Label(r, shared))).Append("</a> ").Append(counts).AppendLine("</li>");
         }
 
         h.AppendLine("</ul></nav>");
@@ -53,19 +56,20 @@ internal static class HtmlReport
 
         h.Append("<p class=\"caution\">").Append(E(Describe.Caution)).AppendLine("</p></header>");
         foreach (var r in reports)
-            Design(h, r, decks, pagePath);
+            Design(h, r, shared, decks, pagePath);
         h.AppendLine("</body>");
         h.AppendLine("</html>");
         return h.ToString();
     }
 
-    private static void Design(StringBuilder h, DesignReport r, IReadOnlyList<ExportedDeck>? decks, string? pagePath)
+    private static void Design(StringBuilder h, DesignReport r, ISet<string> shared, IReadOnlyList<ExportedDeck>? decks, string? pagePath)
     {
         var n = r.Netlist;
-        h.Append("<section class=\"design\" id=\"").Append(E(Anchor(r))).Append("\" data-design=\"").Append(E(r.Name)).AppendLine("\">");
+        h.Append("<section class=\"design\" id=\"").Append(E(Anchor(r, shared))).Append("\" data-design=\"").Append(E(r.Name)).AppendLine("\">");
         h.Append("<h2>").Append(E(r.Name)).Append(" <small>").Append(E(r.TypeName)).Append(" · ")
             .Append(Describe.Count(n.Devices.Count, "device")).Append(", ").Append(Describe.Count(n.Nets.Count, "net")).Append(", ")
             .Append(Describe.Count(n.Clocks.Count, "clock")).AppendLine("</small></h2>");
+        h.Append("<p class=\"process\">").Append(E(EstimateCaution.ProcessLine(n.Process))).AppendLine("</p>");
 
         h.AppendLine("<h3>Findings</h3>");
         if (r.Findings.Count == 0)
@@ -204,13 +208,20 @@ internal static class HtmlReport
         if (r.Findings.Count == 0) return "<span class=\"count clean\">clean</span>";
         var parts = new[] { ReportSeverity.Error, ReportSeverity.Warning, ReportSeverity.Info }
             .Select(s => (s, r.Findings.Count(f => f.Severity == s))).Where(x => x.Item2 > 0)
-            .Select(x => $"<span class=\"count sev-{SeverityPolicy.Name(x.s)}\">{x.Item2} {SeverityPolicy.Name(x.s)}</span>");
+            .Select(x => $"<span class=\"count sev-{SeverityPolicy.Name(x.s)}\">{Describe.Count(x.Item2, x.s)}</span>");
         return string.Join(" ", parts);
     }
 
     private static string Chip(ReportSeverity severity) => $"<span class=\"chip sev-{SeverityPolicy.Name(severity)}\">{SeverityPolicy.Name(severity)}</span>";
 
-    private static string Anchor(DesignReport r) => "design-" + r.Name;
+    // Design names that more than one report carries (classes of one name in different namespaces): those are shown,
+    // and linked, by their full type name, so the two links differ.
+    private static ISet<string> SharedNames(IReadOnlyList<DesignReport> reports)
+        => new HashSet<string>(reports.GroupBy(r => r.Name, StringComparer.Ordinal).Where(g => g.Count() > 1).Select(g => g.Key), StringComparer.Ordinal);
+
+    private static string Label(DesignReport r, ISet<string> shared) => shared.Contains(r.Name) ? r.TypeName : r.Name;
+
+    private static string Anchor(DesignReport r, ISet<string> shared) => "design-" + Label(r, shared);
 
     private static string E(string text) => WebUtility.HtmlEncode(text);
 

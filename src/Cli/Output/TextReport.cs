@@ -1,6 +1,7 @@
 using System.Collections.Generic;
 using System.IO;
 using System.Linq;
+using Phaseward.Checking;
 using Phaseward.Cli.Model;
 using Phaseward.Cli.Policy;
 using Phaseward.Clocking;
@@ -25,13 +26,14 @@ internal static class TextReport
     {
         var n = r.Netlist;
         w.WriteLine($"== Design '{r.Name}' ({r.TypeName}): {Describe.Count(n.Devices.Count, "device")}, {Describe.Count(n.Nets.Count, "net")}, {Describe.Count(n.Clocks.Count, "clock")}");
+        w.WriteLine(EstimateCaution.ProcessLine(n.Process));
 
         var errors = r.Findings.Count(f => f.Severity == ReportSeverity.Error);
         var warnings = r.Findings.Count(f => f.Severity == ReportSeverity.Warning);
         var infos = r.Findings.Count(f => f.Severity == ReportSeverity.Info);
         w.WriteLine(r.Findings.Count == 0
             ? "Findings: none" + (r.Suppressed > 0 ? $" ({r.Suppressed} left out: severity none)" : string.Empty)
-            : $"Findings: {errors} error, {warnings} warning, {infos} info" + (r.Suppressed > 0 ? $" ({r.Suppressed} left out: severity none)" : string.Empty));
+            : $"Findings: {Describe.Count(errors, ReportSeverity.Error)}, {Describe.Count(warnings, ReportSeverity.Warning)}, {Describe.Count(infos, ReportSeverity.Info)}" + (r.Suppressed > 0 ? $" ({r.Suppressed} left out: severity none)" : string.Empty));
         if (r.Findings.Count > 0)
         {
             var findings = new TextTable("severity", "rule", "location", "message");

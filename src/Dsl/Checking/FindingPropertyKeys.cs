@@ -15,6 +15,10 @@ public static class FindingPropertyKeys
     /// <summary>Every instance's name, separated by ";".</summary>
     public const string Instances = "Instances";
 
+    /// <summary>The name of the process whose figures the estimates used: every diagnostic of a checking rule carries
+    /// it, so a SARIF result says where its figures came from (invented defaults included).</summary>
+    public const string Process = "Process";
+
     // ---- Latch pairs, overlap races and timing (PW1001–PW1003, PW4001–PW4005)
     /// <summary>Name of the latch (or register) the finding is reported at.</summary>
     public const string TargetLatch = "TargetLatch";

@@ -55,7 +55,7 @@ public abstract class FindingAnalyzer : PhasewardAnalyzer
         var mapped = new List<(Finding, Diagnostic)>(report.Findings.Count);
         foreach (var finding in report.Findings)
         {
-            if (context.Mapper.FromFinding(finding) is { } diagnostic)
+            if (context.Mapper.FromFinding(finding, netlist.Process) is { } diagnostic)
                 mapped.Add((finding, diagnostic));
         }
 

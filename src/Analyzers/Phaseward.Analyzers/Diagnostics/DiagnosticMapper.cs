@@ -26,12 +26,19 @@ internal sealed class DiagnosticMapper
         this.design = design;
     }
 
-    public Diagnostic? FromFinding(Finding finding)
+    /// <summary>The finding's diagnostic, its properties naming the process its figures came from (so a SARIF result
+    /// says which process figures, perhaps invented defaults, its estimate used); without a process, as found.</summary>
+    public Diagnostic? FromFinding(Finding finding, Process? process = null)
     {
         var descriptor = Descriptors.Find(finding.RuleId);
         if (descriptor is null)
             return null;
-        return Create(descriptor, finding.Location, finding.RelatedLocations, finding.Arguments, finding.Properties);
+        var properties = new Dictionary<string, string>(finding.Properties.Count + 1);
+        foreach (var property in finding.Properties)
+            properties[property.Key] = property.Value;
+        if (process is not null)
+            properties[FindingPropertyKeys.Process] = process.Name;
+        return Create(descriptor, finding.Location, finding.RelatedLocations, finding.Arguments, properties);
     }
 
     public Diagnostic? FromIssue(ElaborationIssue issue)

@@ -10,10 +10,10 @@ namespace Phaseward.Cli.Loading;
 internal sealed record SkippedDesign(string TypeName, string Reason);
 
 /// <summary>The designs of one assembly: the instances made, and the classes skipped.</summary>
-internal sealed record DesignCatalog(string AssemblyPath, IReadOnlyList<Design> Designs, IReadOnlyList<SkippedDesign> Skipped)
+internal sealed record LoadedDesigns(string AssemblyPath, IReadOnlyList<Design> Designs, IReadOnlyList<SkippedDesign> Skipped)
 {
     /// <summary>Loads <paramref name="assemblyPath"/> and instantiates each concrete <see cref="Design"/> with a public parameterless constructor.</summary>
-    public static DesignCatalog Load(string assemblyPath, IReadOnlyList<string> nameFilters)
+    public static LoadedDesigns Load(string assemblyPath, IReadOnlyList<string> nameFilters)
     {
         Assembly assembly;
         try
@@ -59,7 +59,7 @@ internal sealed record DesignCatalog(string AssemblyPath, IReadOnlyList<Design> 
             if (type.ContainsGenericParameters) { skipped.Add(new SkippedDesign(name, "generic type definition")); continue; }
             if (!type.IsPublic && !type.IsNestedPublic) { skipped.Add(new SkippedDesign(name, "not public")); continue; }
             var constructor = type.GetConstructor(BindingFlags.Public | BindingFlags.Instance, Type.EmptyTypes);
-            if (constructor is null) { skipped.Add(new SkippedDesign(name, "no public parameterless constructor")); continue; }
+            if (constructor is null) { skipped.Add(new SkippedDesign(name, ConstructorReason(type))); continue; }
             try
             {
                 designs.Add((Design)constructor.Invoke(null));
@@ -80,10 +80,25 @@ internal sealed record DesignCatalog(string AssemblyPath, IReadOnlyList<Design> 
 
         if (matched == 0)
             throw new InputException($"'{assemblyPath}' holds no class deriving from Phaseward.Design");
-        return new DesignCatalog(assemblyPath, designs, skipped);
+        return new LoadedDesigns(assemblyPath, designs, skipped);
     }
 
     private static bool Matches(Type type, string filter)
         => string.Equals(type.Name, filter, StringComparison.OrdinalIgnoreCase)
            || string.Equals(type.FullName, filter, StringComparison.OrdinalIgnoreCase);
+
+    // Why a design with no public parameterless constructor is not reported, and what to do about it. The analyzers
+    // elaborate it at each `new X(...)` in the source, with that call's arguments; the tool only has the assembly, and
+    // choosing argument values itself would report a design nobody wrote.
+    private static string ConstructorReason(Type type)
+    {
+        var parameters = type.GetConstructors(BindingFlags.Public | BindingFlags.Instance)
+            .OrderBy(c => c.GetParameters().Length).FirstOrDefault()?.GetParameters();
+        if (parameters is null)
+            return "no public constructor, so the report tool cannot make one";
+        var list = string.Join(", ", parameters.Select(p => p.ParameterType.Name + " " + p.Name));
+        return $"its constructor takes parameters ({list}) and the report tool cannot choose their values; the analyzers check it "
+            + "at each 'new " + type.Name + "(...)' in the source. To report it here, add a design with a parameterless constructor "
+            + "that passes the values";
+    }
 }
