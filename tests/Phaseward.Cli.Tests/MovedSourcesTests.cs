@@ -45,7 +45,7 @@ public sealed class MovedSourcesTests
                     }
                 }
                 """);
-            var build = System.Diagnostics.Process.Start(new ProcessStartInfo("dotnet", "build -nologo -v q -o out") { WorkingDirectory = directory, RedirectStandardOutput = true, RedirectStandardError = true })!;
+            var build = System.Diagnostics.Process.Start(new System.Diagnostics.ProcessStartInfo("dotnet", "build -nologo -v q -o out") { WorkingDirectory = directory, RedirectStandardOutput = true, RedirectStandardError = true })!;
             var buildOutput = build.StandardOutput.ReadToEnd() + build.StandardError.ReadToEnd();
             build.WaitForExit();
             Assert.True(build.ExitCode == 0, buildOutput);

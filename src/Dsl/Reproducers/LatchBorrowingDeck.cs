@@ -19,8 +19,8 @@ internal static class LatchBorrowingDeck
 {
     public static SpiceDeck Build(Finding finding, Netlist netlist)
     {
-        var targetName = DeckInputs.Property(finding, FindingProperties.TargetLatch);
-        var sourceName = DeckInputs.Property(finding, FindingProperties.SourceLatch);
+        var targetName = DeckInputs.Property(finding, FindingPropertyKeys.TargetLatch);
+        var sourceName = DeckInputs.Property(finding, FindingPropertyKeys.SourceLatch);
         var figures = TimingFigures.For(netlist);
         LatchArrival? arrival = null;
         foreach (var candidate in LatchBorrowing.Compute(figures))

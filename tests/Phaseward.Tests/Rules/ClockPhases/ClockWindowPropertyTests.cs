@@ -112,7 +112,7 @@ public class ClockWindowPropertyTests
         foreach (var rule in rules)
         {
             foreach (var f in rule.Check(new RuleContext(netlist, policy)))
-                Assert.True(actual.Add((f.RuleId, f.Properties[FindingProperties.SourceLatch], f.Properties[FindingProperties.TargetLatch])),
+                Assert.True(actual.Add((f.RuleId, f.Properties[FindingPropertyKeys.SourceLatch], f.Properties[FindingPropertyKeys.TargetLatch])),
                     $"{f.RuleId} reported a pair twice");
         }
 
@@ -139,7 +139,7 @@ public class ClockWindowPropertyTests
         public override IReadOnlyList<RuleDescriptor> Descriptors => rule.Descriptors;
 
         public override IEnumerable<Finding> Check(RuleContext context)
-            => rule.Check(context).Where(f => f.Properties[FindingProperties.SourceLatch] != f.Properties[FindingProperties.TargetLatch]);
+            => rule.Check(context).Where(f => f.Properties[FindingPropertyKeys.SourceLatch] != f.Properties[FindingPropertyKeys.TargetLatch]);
     }
 
     private static HashSet<(string, string, string)> Expected(Model model)
