@@ -1,3 +1,4 @@
+using Phaseward.Electrical;
 using System;
 using System.Globalization;
 using System.IO;
@@ -51,7 +52,7 @@ public sealed class SampleReportTests : IDisposable
     {
         var run = Of(QuorvaneDll, "--design", nameof(PressureSampler));
         var netlist = new PressureSampler().Elaborate();
-        var figures = TimingFigures.For(netlist);
+        var figures = TimingFigures.For(netlist, Corner.Nominal);
         var lines = run.Out.Split('\n');
 
         Assert.NotEmpty(figures.Latches);
@@ -112,7 +113,7 @@ public sealed class SampleReportTests : IDisposable
             var diagrams = section.Descendants(Svg + "svg").Where(s => HasClass(s, "timing-diagram")).ToList();
             Assert.Equal(Output.TimingDiagram.TimeBaseGroups(netlist.Clocks.Where(c => c.Kind == ClockKind.Root)).Count, diagrams.Count);
 
-            var figures = TimingFigures.For(netlist);
+            var figures = TimingFigures.For(netlist, Corner.Nominal);
             var groups = section.Descendants(Svg + "g").Where(g => HasClass(g, "latch")).ToList();
             Assert.Equal(figures.Latches.Count, groups.Count);
             foreach (var latch in figures.Latches)

@@ -1,6 +1,7 @@
 using System;
 using Phaseward.Checking;
 using Phaseward.Clocking;
+using Phaseward.Electrical;
 using Phaseward.Netlists;
 using Phaseward.Rules.ClockPhases;
 using Phaseward.Rules.Timing;
@@ -22,7 +23,7 @@ internal static class RegisterPathDeck
         var captureName = DeckInputs.Property(finding, FindingProperties.TargetLatch);
         var launchName = DeckInputs.Property(finding, FindingProperties.SourceLatch);
         RegisterPathResult? result = null;
-        foreach (var r in RegisterPathChecks.For(TimingFigures.For(netlist)))
+        foreach (var r in RegisterPathChecks.For(netlist))
             if (r.Launch.Name == launchName && r.Capture.Name == captureName)
                 result = r;
         if (result is null)
@@ -51,6 +52,7 @@ internal static class RegisterPathDeck
         var slack = setup ? check.SetupSlack : check.HoldSlack;
 
         var deck = new DeckWriter(finding, netlist);
+        deck.AtCorner(setup ? Corner.Slow : Corner.Fast);
         deck.Describe($"Sub-circuit: register '{result.Launch.Name}''s slave '{a.Name}' (entry '{entryA.Name}' on {a.Phase.Name}), the path of {stages.Count} stage(s) to register '{result.Capture.Name}''s master '{b.Name}' (entry '{entryB.Name}' on {entryB.ClockControl!.Name}).");
         deck.Describe($"Stimulus: at the launching edge (t = {launchAt}) the launching master's output stage drives new data into the opening slave.");
         deck.Describe(setup
@@ -66,7 +68,7 @@ internal static class RegisterPathDeck
         deck.Pwl(data, new[] { (0.0, 0.0), ((launchAt - edge / 2).Seconds, 0.0), ((launchAt + edge / 2).Seconds, deck.Supply) }, "new data from the launching master at the launching edge");
         var input = deck.Node(entryA.Inputs[0]);
         var outputR = result.Launch.Master.OutputStage is { } stage ? netlist.ResistanceOf(stage) : netlist.Process.DriverResistance;
-        deck.Element($"R_data {data} {input} {SpiceNumbers.Of(outputR.Ohms)}   $ the launching master's output stage");
+        deck.Element($"R_data {data} {input} {SpiceNumbers.Of(deck.AtCorner(outputR).Ohms)}   $ the launching master's output stage");
         deck.Capacitor(input, netlist.CapacitanceOf(entryA.Inputs[0]), $"'{entryA.Inputs[0].Name}'");
         var storageA = deck.Node(a.Storage);
         deck.PassGate(entryA, input, storageA, controlA);

@@ -1,3 +1,4 @@
+using Phaseward.Electrical;
 using System;
 using System.Globalization;
 using System.Linq;
@@ -77,7 +78,7 @@ public class ReportQueryTests
         c.DynamicRegister(c.Inverter(first), clk, "B");
         var netlist = c.ToNetlist();
 
-        var result = Assert.Single(RegisterPathChecks.For(TimingFigures.For(netlist)));
+        var result = Assert.Single(RegisterPathChecks.For(netlist));
         Assert.Equal("A", result.Launch.Name);
         Assert.Equal("B", result.Capture.Name);
         Assert.Equal(1000, Figures.Ps(result.Check.Available), 9); // same edge, same clock: one period
