@@ -8,8 +8,8 @@ namespace Phaseward.Tests.Rules.DynamicStorage;
 
 /// <summary>
 /// PW3001. Default (illustrative) process: a latch's storage node is 1 fF wire + 1.5 fF pass-gate diffusion + 2 fF
-/// inverter gate = 4.5 fF; with ΔV = 0.3 V and 5 pA, t_ret = 4.5 fF × 0.3 V / 5 pA = 270 µs (common practice: Q = C·V,
-/// t = Q/I).
+/// inverter gate = 4.5 fF; with ΔV = 0.3 V (a quarter of the 1.2 V supply) and the hot-corner leakage 1 nA,
+/// t_ret = 4.5 fF × 0.3 V / 1 nA = 1.35 µs (common practice: Q = C·V, t = Q/I).
 /// </summary>
 public class DynamicNodeOnGatedClockRuleTests
 {
@@ -38,7 +38,7 @@ public class DynamicNodeOnGatedClockRuleTests
         Assert.Equal("PW3001", finding.RuleId);
         Assert.Equal(
             "Dynamic node 'hold.x' floats while gated clock 'burst_clk' is stopped low (declared maximum idle time: unbounded), "
-            + "but keeps its level only 270 µs (C·ΔV/I_leak with C = 4.5 fF, ΔV = 300 mV, I_leak = 5 pA)",
+            + "but keeps its level only 1.35 µs (C·ΔV/I_leak with C = 4.5 fF, ΔV = 300 mV, I_leak = 1 nA at the hot corner)",
             finding.Message);
         Assert.Equal(netlist.Devices.Single(d => d.Name == "hold.pass").Span, finding.Location);
         Assert.Equal(gate!.Span, Assert.Single(finding.RelatedLocations));
@@ -50,7 +50,7 @@ public class DynamicNodeOnGatedClockRuleTests
         Assert.Equal("clk", finding.Properties[DynamicStorageProperties.UngatedClock]);
         Assert.Equal("clk", finding.Properties[DynamicStorageProperties.RootClock]);
         Assert.Equal("unbounded", finding.Properties[DynamicStorageProperties.IdleSeconds]);
-        Assert.Equal(270e-6, double.Parse(finding.Properties[DynamicStorageProperties.RetentionSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-15);
+        Assert.Equal(1.35e-6, double.Parse(finding.Properties[DynamicStorageProperties.RetentionSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-15);
     }
 
     [Fact]
@@ -65,7 +65,7 @@ public class DynamicNodeOnGatedClockRuleTests
         });
         Assert.Equal(
             "Dynamic node 'hold.x' floats while gated clock 'burst_clk' is stopped low (declared maximum idle time: 2 s), "
-            + "but keeps its level only 270 µs (C·ΔV/I_leak with C = 4.5 fF, ΔV = 300 mV, I_leak = 5 pA)",
+            + "but keeps its level only 1.35 µs (C·ΔV/I_leak with C = 4.5 fF, ΔV = 300 mV, I_leak = 1 nA at the hot corner)",
             Assert.Single(findings).Message);
     }
 
@@ -86,9 +86,9 @@ public class DynamicNodeOnGatedClockRuleTests
     }
 
     [Theory]
-    [InlineData(100.0, false)]  // 100 µs < 270 µs
-    [InlineData(269.0, false)]  // just shorter
-    [InlineData(1000.0, true)]  // 1 ms > 270 µs
+    [InlineData(1.0, false)]    // 1 µs < 1.35 µs
+    [InlineData(1.34, false)]   // just shorter
+    [InlineData(1000.0, true)]  // 1 ms > 1.35 µs
     public void DeclaredIdleTimeIsComparedWithRetention(double idleUs, bool reported)
     {
         var (_, findings) = Check(c =>
@@ -150,36 +150,36 @@ public class DynamicNodeOnGatedClockRuleTests
     [Fact]
     public void PerNodeLeakageAndCapacitanceOverridesChangeTheVerdict()
     {
-        // 100 µs idle against 270 µs: clean. 50 pA on the node: 4.5 fF × 0.3 V / 50 pA = 27 µs < 100 µs: reported.
+        // 1 µs idle against 1.35 µs: clean. 10 nA on the node: 4.5 fF × 0.3 V / 10 nA = 135 ns < 1 µs: reported.
         var (_, leaky) = Check(c =>
         {
-            var gated = c.ClockGate(c.Clock("clk", 10.Nanoseconds()), c.Input("en"), ClockStopLevel.Low, 100.Microseconds());
+            var gated = c.ClockGate(c.Clock("clk", 10.Nanoseconds()), c.Input("en"), ClockStopLevel.Low, 1.Microseconds());
             c.DynamicLatch(c.Input("d"), gated.High, "l");
-            c.SetLeakage(c.Node("other"), 50.Picoamperes()); // an override on another net changes nothing here
+            c.SetLeakage(c.Node("other"), 10.Nanoamperes()); // an override on another net changes nothing here
         });
         Assert.Empty(leaky);
 
         var (_, withLeak) = Check(c =>
         {
-            var gated = c.ClockGate(c.Clock("clk", 10.Nanoseconds()), c.Input("en"), ClockStopLevel.Low, 100.Microseconds());
+            var gated = c.ClockGate(c.Clock("clk", 10.Nanoseconds()), c.Input("en"), ClockStopLevel.Low, 1.Microseconds());
             var node = c.Node("x");
             c.TransmissionGate(c.Input("d"), gated.High, node);
             c.Inverter(node, "q");
-            c.SetLeakage(node, 50.Picoamperes());
+            c.SetLeakage(node, 10.Nanoamperes());
         });
         var finding = Assert.Single(withLeak);
-        Assert.Contains("keeps its level only 27 µs", finding.Message);
-        Assert.Contains("I_leak = 50 pA", finding.Message);
+        Assert.Contains("keeps its level only 135 ns", finding.Message);
+        Assert.Contains("I_leak = 10 nA", finding.Message);
         Assert.False(finding.Properties.ContainsKey(DynamicStorageProperties.Cell));
 
-        // A 100 fF storage capacitor: 100 fF × 0.3 V / 50 pA = 600 µs > 100 µs: clean again.
+        // A 100 fF storage capacitor: 100 fF × 0.3 V / 10 nA = 3 µs > 1 µs: clean again.
         var (_, withCap) = Check(c =>
         {
-            var gated = c.ClockGate(c.Clock("clk", 10.Nanoseconds()), c.Input("en"), ClockStopLevel.Low, 100.Microseconds());
+            var gated = c.ClockGate(c.Clock("clk", 10.Nanoseconds()), c.Input("en"), ClockStopLevel.Low, 1.Microseconds());
             var node = c.Node("x");
             c.TransmissionGate(c.Input("d"), gated.High, node);
             c.Inverter(node, "q");
-            c.SetLeakage(node, 50.Picoamperes());
+            c.SetLeakage(node, 10.Nanoamperes());
             c.SetCapacitance(node, 100.Femtofarads());
         });
         Assert.Empty(withCap);
@@ -196,7 +196,7 @@ public class DynamicNodeOnGatedClockRuleTests
         });
         // 4.5 fF × 0.2 V / 1 pA = 900 µs < 1 ms: reported, with the process's figures.
         var finding = Assert.Single(findings);
-        Assert.Contains("keeps its level only 900 µs (C·ΔV/I_leak with C = 4.5 fF, ΔV = 200 mV, I_leak = 1 pA)", finding.Message);
+        Assert.Contains("keeps its level only 900 µs (C·ΔV/I_leak with C = 4.5 fF, ΔV = 200 mV, I_leak = 1 pA at the hot corner)", finding.Message);
     }
 
     [Fact]

@@ -117,7 +117,7 @@ public class RegisterTimingRuleTests
         var finding = Assert.Single(Figures.Run(Rule, Pipeline(280, 5)));
         Assert.Equal("PW4001", finding.RuleId);
         Assert.Equal("Register 'R2' misses its setup time on the path from register 'R1': clock-to-output 89.7 ps + path 166 ps + " +
-                     "setup 34.5 ps = 290 ps exceeds the 280 ps available (slack -9.8 ps)", finding.Message);
+                     "setup 34.5 ps = 290 ps exceeds the 280 ps available (slack -9.8 ps; slow corner, delays ×1)", finding.Message);
         Assert.Equal(-9.8e-12, double.Parse(finding.Properties[FindingProperties.MarginSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-18);
     }
 
@@ -133,7 +133,7 @@ public class RegisterTimingRuleTests
         var finding = Assert.Single(Figures.Run(Rule, Pipeline(1000, 1, 110)));
         Assert.Equal("PW4002", finding.RuleId);
         Assert.Equal("Register 'R2' can lose its data on the path from register 'R1': minimum clock-to-output 62.1 ps + shortest path 27.6 ps = " +
-                     "89.7 ps is less than its hold time -4.5 ps plus clock skew 110 ps (slack -15.8 ps)", finding.Message);
+                     "89.7 ps is less than its hold time -4.5 ps plus clock skew 110 ps (slack -15.8 ps; fast corner, delays ×1)", finding.Message);
     }
 
     [Fact]
@@ -196,7 +196,7 @@ public class RegisterTimingRuleTests
         Assert.Empty(new SameWindowLatchesRule().Check(new RuleContext(netlist, RulePolicy.Default)));
         var finding = Assert.Single(Figures.Run(Rule, c));
         Assert.Equal("PW4001", finding.RuleId);
-        Assert.Contains("exceeds the 500 ps available (slack -38.2 ps)", finding.Message);
+        Assert.Contains("exceeds the 500 ps available (slack -38.2 ps; slow corner, delays ×1)", finding.Message);
     }
 
     [Fact]
@@ -249,7 +249,7 @@ public class LatchBorrowingRuleTests
 
         Assert.Equal("PW4003", finding.RuleId);
         Assert.Equal("Data from latch 'L2' reaches latch 'L3' 477 ps after 'L3' opens, but its phase (500 ps) less its setup time and clock skew (34.5 ps) " +
-                     "allows only 466 ps (slack -11.1 ps; 'L2' had borrowed 142 ps)", finding.Message);
+                     "allows only 466 ps (slack -11.1 ps; 'L2' had borrowed 142 ps; slow corner, delays ×1)", finding.Message);
         var arrival = LatchBorrowing.Compute(TimingFigures.For(Chain(20, 27).ToNetlist(), Corner.Nominal)).Single(a => a.Path.To.Name == "L3");
         Assert.Equal(476.6, Figures.Ps(arrival.Arrival), 6);
         Assert.Equal(141.7, Figures.Ps(arrival.SourceBorrow), 6);
@@ -314,6 +314,6 @@ public class LatchBorrowingRuleTests
         var finding = Assert.Single(Figures.Run(Rule, Loop(29)));
         Assert.Equal("PW4005", finding.RuleId);
         Assert.Equal("The latch loop P → Q → P (2 paths) takes 1.01 ns round but its phases give it only 1 ns: each latch borrows " +
-                     "7.4 ps more every time round until one misses its window", finding.Message);
+                     "7.4 ps more every time round until one misses its window (slow corner, delays ×1)", finding.Message);
     }
 }
