@@ -1,4 +1,3 @@
-using Phaseward.Electrical;
 using System;
 using System.Globalization;
 using System.IO;
@@ -6,6 +5,7 @@ using System.Linq;
 using System.Xml.Linq;
 using Phaseward.Checking;
 using Phaseward.Clocking;
+using Phaseward.Electrical;
 using Phaseward.Rules.PassGatePaths;
 using Phaseward.Sequencing;
 using Phaseward.Storage;

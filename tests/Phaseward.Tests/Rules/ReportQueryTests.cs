@@ -1,8 +1,8 @@
-using Phaseward.Electrical;
 using System;
 using System.Globalization;
 using System.Linq;
 using Phaseward.Checking;
+using Phaseward.Electrical;
 using Phaseward.Rules.ClockPhases;
 using Phaseward.Rules.PassGatePaths;
 using Phaseward.Rules.Timing;

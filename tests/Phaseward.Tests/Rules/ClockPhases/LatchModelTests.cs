@@ -1,5 +1,5 @@
-using Phaseward.Electrical;
 using System.Linq;
+using Phaseward.Electrical;
 using Phaseward.Sequencing;
 
 namespace Phaseward.Tests.Rules.ClockPhases;

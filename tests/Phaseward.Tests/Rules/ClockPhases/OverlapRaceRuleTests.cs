@@ -1,7 +1,7 @@
-using Phaseward.Electrical;
 using System;
 using System.Linq;
 using Phaseward.Checking;
+using Phaseward.Electrical;
 using Phaseward.Rules.ClockPhases;
 using Phaseward.Sequencing;
 
