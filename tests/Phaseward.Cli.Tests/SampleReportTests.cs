@@ -52,7 +52,7 @@ public sealed class SampleReportTests : IDisposable
     {
         var run = Of(QuorvaneDll, "--design", nameof(PressureSampler));
         var netlist = new PressureSampler().Elaborate();
-        var figures = TimingFigures.For(netlist, Corner.Nominal);
+        var figures = TimingFigures.For(netlist, Corner.Slow); // the report draws and tabulates the slow corner the setup checks use
         var lines = run.Out.Split('\n');
 
         Assert.NotEmpty(figures.Latches);
@@ -67,6 +67,8 @@ public sealed class SampleReportTests : IDisposable
         var register = Assert.Single(figures.Registers);
         var registerRow = lines.Single(l => l.TrimStart().StartsWith(register.Name + " ", StringComparison.Ordinal) && l.Contains("rising"));
         Assert.Contains(register.ClockToOutput.ToString(), registerRow);
+        Assert.Contains("Registers (setup, clk-q: slow corner, delays ×1.3; clk-q min, hold: fast corner, delays ×0.75)", run.Out);
+        Assert.Contains(TimingFigures.For(netlist, Corner.Fast).Registers.Single().Hold.ToString(), registerRow);
 
         // Aligned: every row of the latch table puts its columns at the header's offsets.
         var header = Array.FindIndex(lines, l => l.TrimStart().StartsWith("latch ", StringComparison.Ordinal));
@@ -113,7 +115,7 @@ public sealed class SampleReportTests : IDisposable
             var diagrams = section.Descendants(Svg + "svg").Where(s => HasClass(s, "timing-diagram")).ToList();
             Assert.Equal(Output.TimingDiagram.TimeBaseGroups(netlist.Clocks.Where(c => c.Kind == ClockKind.Root)).Count, diagrams.Count);
 
-            var figures = TimingFigures.For(netlist, Corner.Nominal);
+            var figures = TimingFigures.For(netlist, Corner.Slow); // the report draws and tabulates the slow corner the setup checks use
             var groups = section.Descendants(Svg + "g").Where(g => HasClass(g, "latch")).ToList();
             Assert.Equal(figures.Latches.Count, groups.Count);
             foreach (var latch in figures.Latches)
