@@ -12,8 +12,9 @@ public static partial class RuleCatalog
         description: "A node driven only through pass devices, with no keeper or restoring feedback, holds its bit as charge. "
             + "When its clock gate stops the clock at a level that turns every driver off, leakage drains the node for "
             + "as long as the clock stays off; if the gate declares no maximum idle time, or one longer than the "
-            + "node's retention time C·ΔV/I_leak, the bit can be lost. First-order, linear estimate with the hot-corner "
-            + "leakage.");
+            + "node's retention time C·ΔV/I_leak, the bit can be lost. ΔV is what the node's droop allowance leaves after the "
+            + "worst charge sharing on it (one budget per node, shared with PW3003). First-order, linear estimate with the "
+            + "hot-corner leakage.");
 
     /// <summary>A running clock leaves a dynamic storage node floating for longer than it retains its level.</summary>
     public static RuleDescriptor ClockTooSlowForDynamicStorage { get; } = new(
@@ -23,8 +24,9 @@ public static partial class RuleCatalog
             + "time {4} (C·ΔV/I_leak with C = {5}, ΔV = {6}, I_leak = {7} at the hot corner); run the clock at {8} or faster",
         description: "A dynamic node is refreshed only while one of its pass devices conducts. "
             + "With the clock running, the longest stretch of each period in which all of them are off (from the "
-            + "period, duty and complement skew) must be shorter than the node's retention time C·ΔV/I_leak. "
-            + "First-order, linear estimate with the hot-corner leakage.");
+            + "period, duty and complement skew) must be shorter than the node's retention time C·ΔV/I_leak, ΔV being what "
+            + "the node's droop allowance leaves after the worst charge sharing on it (one budget per node, shared with "
+            + "PW3003). First-order, linear estimate with the hot-corner leakage.");
 
     /// <summary>A pass device joins a charged floating node to another floating node and the shared level droops too far.</summary>
     public static RuleDescriptor ChargeSharing { get; } = new(
@@ -34,7 +36,9 @@ public static partial class RuleCatalog
             + "{4}): a {5} level settles at {6}, a droop of {7}, more than the tolerated {8}",
         description: "A pass device that opens between a charged floating node and another floating node shares the charge "
             + "between them: the level settles at V·C1/(C1+C2), a droop of V·C2/(C1+C2) in the worst case (the other "
-            + "node at the opposite level). First-order estimate by conservation of charge.");
+            + "node at the opposite level), reported when it exceeds the node's droop allowance (the process's tolerated droop, "
+            + "by default a quarter of the supply); what it leaves of the allowance is what leakage may take (PW3001, "
+            + "PW3002). First-order estimate by conservation of charge.");
 
     /// <summary>Two or more conducting paths drive one net at the same time.</summary>
     public static RuleDescriptor FightingDrivers { get; } = new(

@@ -35,7 +35,7 @@ public sealed class Process
     private readonly double slowDelayFactor = 1.3;
     private readonly double fastDelayFactor = 0.75;
     private readonly Voltage supply = 1.2.Volts();
-    private readonly Voltage toleratedDroop = 0.3.Volts();
+    private readonly Voltage? toleratedDroop;
     private readonly Time complementSkew = 30.Picoseconds();
 
     /// <summary>The invented, illustrative defaults (see the remarks on <see cref="Process"/>).</summary>
@@ -76,8 +76,16 @@ public sealed class Process
     /// <summary>Supply voltage.</summary>
     public Voltage Supply { get => supply; init => supply = new Voltage(Guard.Positive(value.Volts, nameof(Supply), "V")); }
 
-    /// <summary>The largest droop a dynamic node may suffer and still be read correctly.</summary>
-    public Voltage ToleratedDroop { get => toleratedDroop; init => toleratedDroop = new Voltage(Guard.Positive(value.Volts, nameof(ToleratedDroop), "V")); }
+    /// <summary>
+    /// The largest droop a dynamic node may suffer and still be read correctly: one allowance per node, which charge
+    /// sharing and leakage share (charge sharing spends first, leakage may take what is left). By default a quarter of
+    /// <see cref="Supply"/> (<see cref="DefaultDroopFraction"/>; 0.3 V at 1.2 V: the read stage's switching point at
+    /// half the supply, with half of that kept as noise margin, common practice); set an absolute value to override it.
+    /// </summary>
+    public Voltage ToleratedDroop { get => toleratedDroop ?? Supply * DefaultDroopFraction; init => toleratedDroop = new Voltage(Guard.Positive(value.Volts, nameof(ToleratedDroop), "V")); }
+
+    /// <summary>The fraction of the supply a node may droop by when <see cref="ToleratedDroop"/> is not set: 0.25.</summary>
+    public const double DefaultDroopFraction = 0.25;
 
     /// <summary>How late a clock's complement arrives after its true phase (it opens the 1-1 and 0-0 overlaps).</summary>
     public Time ComplementSkew { get => complementSkew; init => complementSkew = new Time(Guard.NonNegative(value.Seconds, nameof(ComplementSkew), "s")); }

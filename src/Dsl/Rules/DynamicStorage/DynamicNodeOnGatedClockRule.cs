@@ -20,6 +20,9 @@ public sealed class DynamicNodeOnGatedClockRule : Rule
             context.CancellationToken.ThrowIfCancellationRequested();
             if (StorageIsolation.WhileStopped(node) is not { } stopped)
                 continue;
+            // Charge sharing that alone spends the whole allowance is PW3003's finding: one finding per cause.
+            if (node.Budget.SpentBySharing)
+                continue;
             var retention = node.Retention;
             if (stopped.IdleBound is { } idle && idle <= retention.Time)
                 continue;
@@ -52,7 +55,7 @@ public sealed class DynamicNodeOnGatedClockRule : Rule
                 new object[]
                 {
                     node.Net.Name, gate.Name, gate.StopLevel == ClockStopLevel.High ? "high" : "low", idleText,
-                    retainedText, retention.Capacitance, retention.ToleratedDroop, retention.Leakage,
+                    retainedText, retention.Capacitance, node.Budget.DroopText(), retention.Leakage,
                 },
                 related,
                 properties);
