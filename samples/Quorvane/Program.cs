@@ -31,6 +31,8 @@ public static class Program
             new TelemetryBusSelected(),
             new BurstGate(),
             new BurstGateLatched(),
+            new WaveLog(),
+            new WaveLogDecoded(),
         };
 
         var findings = 0;

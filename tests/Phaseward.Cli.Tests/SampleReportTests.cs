@@ -216,7 +216,7 @@ public sealed class SampleReportTests : IDisposable
         new TideAverager(), new TideAveragerTwoPhase(), new Housekeeping(), new HousekeepingStatic(), new StrainLanes(),
         new WakeLogic(), new WakeLogicRegistered(), new MooringHold(), new MooringHoldWeakKeeper(),
         new TelemetryBus(), new TelemetryBusSelected(), new BurstGate(), new BurstGateLatched(),
-        new TwoPhaseTally(), new RadioHandoff(), new RadioHandoffSynchronized(),
+        new TwoPhaseTally(), new RadioHandoff(), new RadioHandoffSynchronized(), new WaveLog(), new WaveLogDecoded(),
     };
 
     [Fact]
@@ -228,6 +228,20 @@ public sealed class SampleReportTests : IDisposable
         Assert.Equal(RuleCatalog.ClockCrossing.Id, crossing.RuleId);
         Assert.Contains("'tx' on clock 'radio' takes data from latch 'sample.slave' on clock 'sensor'", crossing.Message);
         Assert.Empty(new RadioHandoffSynchronized().Check().Findings);
+    }
+
+    [Fact]
+    public void TheWaveLogSampleSharesChargeUntilItsDecodedSelectsAreStatedExclusive()
+    {
+        // Four invented 40 fF cells on a bit line of wire 1 + four terminals 4 × 1.5 + the sense inverter's gate 2 = 9 fF.
+        // Requests not known exclusive: C2 = 9 + 3 × 40 = 129 fF, droop 1.2 V × 129 / 169 = 916 mV (conservation of charge,
+        // common practice). Decoded and stated exclusive: droop 1.2 V × 9 / 49 = 220 mV, under the tolerated 300 mV.
+        var findings = new WaveLog().Check().Findings;
+        Assert.Equal(4, findings.Count(f => f.RuleId == RuleCatalog.ChargeSharing.Id));
+        Assert.Contains("(C2 = 129 fF, counting 3 more floating nodes", findings.First(f => f.RuleId == RuleCatalog.ChargeSharing.Id).Message);
+        Assert.Contains("a droop of 916 mV", findings.First(f => f.RuleId == RuleCatalog.ChargeSharing.Id).Message);
+        Assert.Single(findings, f => f.RuleId == RuleCatalog.FightingDrivers.Id);
+        Assert.Empty(new WaveLogDecoded().Check().Findings);
     }
 
     [Fact]

@@ -33,11 +33,13 @@ public static partial class RuleCatalog
         "PW3003", RuleFamily.DynamicStorage, Severity.Warning,
         title: "Charge sharing corrupts a dynamic node",
         messageFormat: "When '{0}' conducts, floating node '{1}' (C1 = {2}) shares its charge with floating node '{3}' (C2 = "
-            + "{4}): a {5} level settles at {6}, a droop of {7}, more than the tolerated {8}",
+            + "{4}{9}): a {5} level settles at {6}, a droop of {7}, more than the tolerated {8}",
         description: "A pass device that opens between a charged floating node and another floating node shares the charge "
             + "between them: the level settles at V·C1/(C1+C2), a droop of V·C2/(C1+C2) in the worst case (the other "
-            + "node at the opposite level), reported when it exceeds the node's droop allowance (the process's tolerated droop, "
-            + "by default a quarter of the supply); what it leaves of the allowance is what leakage may take (PW3001, "
+            + "node at the opposite level). C2 also counts the floating nodes one pass gate away from the other node "
+            + "whose gates may conduct at the same time (not provably exclusive: state Circuit.Exclusive for one-hot "
+            + "selects). Reported when the droop exceeds the node's droop allowance (the process's tolerated droop, by "
+            + "default a quarter of the supply); what it leaves of the allowance is what leakage may take (PW3001, "
             + "PW3002). First-order estimate by conservation of charge.");
 
     /// <summary>Two or more conducting paths drive one net at the same time.</summary>

@@ -1,5 +1,6 @@
 using System;
 using Phaseward.Checking;
+using Phaseward.Clocking;
 using Phaseward.Netlists;
 using Phaseward.Rules.DynamicStorage;
 using Phaseward.Storage;
@@ -24,12 +25,16 @@ internal static class ChargeSharingDeck
         if (device is null)
             throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: no pass device joins '{charged.Net.Name}' to '{other.Net.Name}' in design '{netlist.DesignName}'.", nameof(finding));
 
+        var partners = SharingPartners.Of(netlist, device, charged, other, new PhaseWindowCache());
         var c1 = charged.Retention.Capacitance;
         var c2 = other.Retention.Capacitance;
+        foreach (var partner in partners)
+            c2 += partner.Node.Retention.Capacitance;
         var sharing = ChargeSharing.Of(c1, c2, netlist.Process.Supply);
         var deck = new DeckWriter(finding, netlist);
-        deck.Describe($"Sub-circuit: '{device.Name}' between floating nodes '{charged.Net.Name}' (C1 = {c1}) and '{other.Net.Name}' (C2 = {c2}).");
-        deck.Describe($"Stimulus: '{charged.Net.Name}' precharged to vdd and '{other.Net.Name}' to 0 V (the worst case) through precharge switches, which then open; then '{device.Name}' conducts (its control driven directly).");
+        deck.Describe($"Sub-circuit: '{device.Name}' between floating nodes '{charged.Net.Name}' (C1 = {c1}) and '{other.Net.Name}' (C2 = {c2} in all)"
+            + (partners.Count == 0 ? "." : $", with the {partners.Count} floating node(s) joined to '{other.Net.Name}' through gates that may conduct at the same time."));
+        deck.Describe($"Stimulus: '{charged.Net.Name}' precharged to vdd and '{other.Net.Name}'{(partners.Count == 0 ? "" : " and its partners")} to 0 V (the worst case) through precharge switches, which then open; then '{device.Name}'{(partners.Count == 0 ? "" : " and the partners' gates")} conduct (controls driven directly).");
         deck.Describe("Measured: v_settled, the charged node's level at the end (Phaseward's estimate V·C1/(C1+C2)), and droop = vdd - v_settled. Leakage is left out, as the estimate does.");
 
         var r = netlist.ResistanceOf(device);
@@ -53,10 +58,19 @@ internal static class ChargeSharingDeck
         deck.Element($"X_pre2 {gnd} {n2} {pre} pw_tg ron={SpiceNumbers.Of(r.Ohms)}   $ precharge switch (not part of the design)");
         deck.PassGate(device, n1, n2, on);
         deck.Capacitor(n1, c1, $"C1, '{charged.Net.Name}'");
-        deck.Capacitor(n2, c2, $"C2, '{other.Net.Name}'");
+        deck.Capacitor(n2, other.Retention.Capacitance, $"C2, '{other.Net.Name}'");
+        var index = 0;
+        foreach (var partner in partners)
+        {
+            var node = deck.Node(partner.Node.Net);
+            index++;
+            deck.Element($"X_pre_p{index} {gnd} {node} {pre} pw_tg ron={SpiceNumbers.Of(netlist.ResistanceOf(partner.Through).Ohms)}   $ precharge switch (not part of the design)");
+            deck.PassGate(partner.Through, node, n2, on);
+            deck.Capacitor(node, partner.Node.Retention.Capacitance, $"partner '{partner.Node.Net.Name}'");
+        }
 
         deck.Transient(end / 5000, end, end / 1000);
-        deck.Measure($".meas tran v_settled FIND v({n1}) AT={SpiceNumbers.Of(end)}",
+        deck.Measure($".meas tran v_settled FIND v({n1}) AT={SpiceNumbers.Of(DeckWriter.SettledBefore(end))}",
             new DeckEstimate("v_settled", sharing.Settled.Volts, "V", "shared level V·C1/(C1+C2)"));
         deck.Measure(".meas tran droop PARAM='vdd - v_settled'",
             new DeckEstimate("droop", sharing.Droop.Volts, "V", "droop V·C2/(C1+C2)"));

@@ -128,6 +128,12 @@ internal sealed class DeckWriter
     public void Transient(Time step, Time stop, Time maxStep)
         => analysis = $".tran {SpiceNumbers.Of(step)} {SpiceNumbers.Of(stop)} 0 {SpiceNumbers.Of(maxStep)}";
 
+    /// <summary>
+    /// The instant to read a settled level at: just before <paramref name="stop"/>. ngspice refuses a FIND ... AT
+    /// equal to the stop time when its last time point falls a rounding error short of it ("out of interval").
+    /// </summary>
+    public static Time SettledBefore(Time stop) => stop * 0.99;
+
     /// <summary>A measurement and Phaseward's estimate of it (null: measured only, to help read the others).</summary>
     public void Measure(string statement, DeckEstimate? estimate)
     {

@@ -51,9 +51,9 @@ internal static class FightingDriversDeck
         deck.Element($".ic v({node})={SpiceNumbers.Of(deck.Supply / 2)}");
 
         deck.Transient(end / 2000, end * 1.02, end / 500); // a little past the measuring instant, so that FIND ... AT= has a point after it
-        deck.Measure($".meas tran v_fight FIND v({node}) AT={SpiceNumbers.Of(end)}",
+        deck.Measure($".meas tran v_fight FIND v({node}) AT={SpiceNumbers.Of(DeckWriter.SettledBefore(end))}",
             new DeckEstimate("v_fight", level, "V", "divider V·R2/(R1+R2)"));
-        deck.Measure($".meas tran i_fight FIND i(V_probe) AT={SpiceNumbers.Of(end)}",
+        deck.Measure($".meas tran i_fight FIND i(V_probe) AT={SpiceNumbers.Of(DeckWriter.SettledBefore(end))}",
             new DeckEstimate("i_fight", current, "A", "rail-to-rail current V/(R1+R2)"));
         return deck.Build();
     }

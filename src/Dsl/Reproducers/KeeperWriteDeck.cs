@@ -87,9 +87,9 @@ internal static class KeeperWriteDeck
         deck.Element($".ic v({closed})={{vdd}}");
 
         deck.Transient(tau / 50, end * 1.02, tau / 10); // a little past the measuring instant, so that FIND ... AT= has a point after it
-        deck.Measure($".meas tran v_level FIND v({held}) AT={SpiceNumbers.Of(end)}",
+        deck.Measure($".meas tran v_level FIND v({held}) AT={SpiceNumbers.Of(DeckWriter.SettledBefore(end))}",
             new DeckEstimate("v_level", level, "V", "level a 0 written against the keeper reaches, V·R_w/(R_w+R_k)"));
-        deck.Measure($".meas tran v_loop FIND v({closed}) AT={SpiceNumbers.Of(end)}", null);
+        deck.Measure($".meas tran v_loop FIND v({closed}) AT={SpiceNumbers.Of(DeckWriter.SettledBefore(end))}", null);
         deck.Measure(".meas tran flipped PARAM='v_loop < vdd/2 ? 1 : 0'",
             new DeckEstimate("flipped", level < deck.Supply / 2 ? 1 : 0, string.Empty, "1 when the divider level is below the switching point vdd/2"));
         return deck.Build();

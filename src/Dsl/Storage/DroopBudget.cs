@@ -1,4 +1,5 @@
 using System;
+using Phaseward.Clocking;
 using Phaseward.Netlists;
 
 namespace Phaseward.Storage;
@@ -51,9 +52,10 @@ public sealed class DroopBudget
         var allowance = netlist.Process.ToleratedDroop;
         ChargeSharing? worst = null;
         Device? worstDevice = null;
+        var windows = new PhaseWindowCache();
         foreach (var device in netlist.DataLoadList(node.Net))
         {
-            if (!ChargeSharingPaths.TryShare(netlist, device, out var charged, out _, out var sharing) || !ReferenceEquals(charged, node))
+            if (!ChargeSharingPaths.TryShare(netlist, device, windows, out var charged, out _, out _, out var sharing) || !ReferenceEquals(charged, node))
                 continue;
             if (worst is null || sharing.Droop > worst.Value.Droop)
             {

@@ -32,4 +32,31 @@ public class ChargeSharingDeckTests
         Assert.InRange(settled, stated * 0.95, stated * 1.05);
         Assert.InRange(measured.Value("droop", deck), 1.2 - stated * 1.05, 1.2 - stated * 0.95);
     }
+
+    [Fact]
+    public void TheDeckOpensThePartnersGatesAndSettlesWhereTheirCapacitanceSaysItShould()
+    {
+        // Four 40 fF cells read onto a 9 fF bit line by selects not known exclusive: the worst case opens every read
+        // gate together, so cell0's charge spreads over 40 + 9 + 3 × 40 fF: V·C1/(C1+C2) = 1.2 × 40 / 169 = 284.0 mV.
+        var c = new Circuit("ReadPortShare");
+        var clk = c.Clock("clk", 10.Nanoseconds());
+        var bitLine = c.Node("rbl");
+        for (var i = 0; i < 4; i++)
+        {
+            var cell = c.TransmissionGate(c.Input($"d{i}"), clk.High, $"cell{i}");
+            c.SetCapacitance(cell, 40.Femtofarads());
+            c.TransmissionGate(cell, c.Input($"rsel{i}"), bitLine);
+        }
+
+        c.Inverter(bitLine, "sense");
+        var report = Checker.Check(c.ToNetlist());
+        var finding = report.Findings.First(f => f.RuleId == "PW3003");
+
+        var deck = Reproducer.Deck(finding, report.Netlist);
+        var measured = Ngspice.Run(deck);
+
+        var stated = 1.2 * 40 / 169;
+        Assert.Equal(stated, deck.Estimates.Single(e => e.Name == "v_settled").Value, 9);
+        Assert.InRange(measured.Value("v_settled", deck), stated * 0.95, stated * 1.05);
+    }
 }

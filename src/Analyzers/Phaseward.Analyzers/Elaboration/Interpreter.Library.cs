@@ -52,7 +52,7 @@ internal sealed partial class Interpreter
             // A plain sequence parameter gets a metered, converted sequence; a list or array parameter (the DSL's) a typed copy.
             if (type == typeof(IEnumerable) || type.IsGenericType && type.GetGenericTypeDefinition() == typeof(IEnumerable<>))
                 return Metered(sequence, elementType);
-            var array = TypedArray(Materialize(sequence), elementType);
+            if (TypedArray(Materialize(sequence), elementType) is not Array array) return Unconvertible.Value;
             if (type.IsAssignableFrom(array.GetType())) return array;
             var list = typeof(List<>).MakeGenericType(elementType);
             return type.IsAssignableFrom(list) ? Activator.CreateInstance(list, array) : Unconvertible.Value;
@@ -93,13 +93,17 @@ internal sealed partial class Interpreter
         return items.ToArray();
     }
 
-    private Array TypedArray(object?[] items, Type elementType)
+    // A typed copy, or Unconvertible when an element is not of the element type (code that does not compile, such
+    // as an array of nets holding a broken expression): the call is then reported as not evaluable, never half-made.
+    private object TypedArray(object?[] items, Type elementType)
     {
         var array = Array.CreateInstance(elementType, items.Length);
         for (var i = 0; i < items.Length; i++)
         {
             var item = ToClr(items[i], elementType);
-            if (item is Unconvertible) throw new InvalidCastException("an element cannot be given the type " + elementType.Name);
+            if (item is Unconvertible || item is null && elementType.IsValueType && Nullable.GetUnderlyingType(elementType) is null
+                || item is not null && !elementType.IsInstanceOfType(item))
+                return Unconvertible.Value;
             array.SetValue(item, i);
         }
 

@@ -1,5 +1,7 @@
 using System.Collections.Generic;
+using System.Text;
 using Phaseward.Checking;
+using Phaseward.Clocking;
 using Phaseward.Storage;
 
 namespace Phaseward.Rules.DynamicStorage;
@@ -26,10 +28,11 @@ public sealed class ChargeSharingRule : Rule
     public override IEnumerable<Finding> Check(RuleContext context)
     {
         var netlist = context.Netlist;
+        var windows = new PhaseWindowCache();
         foreach (var device in netlist.Devices)
         {
             context.CancellationToken.ThrowIfCancellationRequested();
-            if (!ChargeSharingPaths.TryShare(netlist, device, out var charged, out var other, out var sharing))
+            if (!ChargeSharingPaths.TryShare(netlist, device, windows, out var charged, out var other, out var partners, out var sharing))
                 continue;
 
             var tolerated = netlist.Process.ToleratedDroop;
@@ -50,10 +53,30 @@ public sealed class ChargeSharingRule : Rule
                 new object[]
                 {
                     device.Name, charged.Net.Name, sharing.ChargedCapacitance, other.Net.Name, sharing.OtherCapacitance,
-                    sharing.Level, sharing.Settled, sharing.Droop, tolerated,
+                    sharing.Level, sharing.Settled, sharing.Droop, tolerated, PartnerText(partners),
                 },
                 new[] { charged.PrimaryDriver.Span },
                 properties);
         }
     }
+
+    // Names the partners counted in C2 (the first few), so the figure can be checked by hand.
+    private static string PartnerText(IReadOnlyList<SharingPartner> partners)
+    {
+        if (partners.Count == 0)
+            return "";
+        var text = new StringBuilder(", counting ").Append(partners.Count)
+            .Append(partners.Count == 1 ? " more floating node" : " more floating nodes")
+            .Append(" joined through pass gates that may conduct at the same time: ");
+        for (var i = 0; i < partners.Count && i < NamedPartners; i++)
+        {
+            if (i > 0) text.Append(", ");
+            text.Append('\'').Append(partners[i].Node.Net.Name).Append("' through '").Append(partners[i].Through.Name).Append('\'');
+        }
+
+        if (partners.Count > NamedPartners) text.Append(", ...");
+        return text.Append("; state Circuit.Exclusive if their controls are never high together").ToString();
+    }
+
+    private const int NamedPartners = 3;
 }

@@ -130,22 +130,20 @@ public sealed class FightingDriversRule : Rule
                 : (Format(WhileControl, gate.DataControl!.Name), null);
         }
 
+        if (!ConductionOverlap.MayConductTogether(netlist, a, b, windows, SkewOverlapCounts.Yes))
+            return null;
         if (a.ClockControl is { } pa && b.ClockControl is { } pb)
         {
             var wa = windows.Of(pa);
             var wb = windows.Of(pb);
-            if (!wa.SharesRootWith(wb))
+            if (wa.CommonCycleWith(wb) is null)
                 return (Format(UnrelatedClocks, pa.Name, pb.Name), null);
             var overlap = wa.TotalOverlapWith(wb);
-            return overlap > Time.Zero ? (Format(Overlap, overlap, pa.Name, pb.Name), overlap) : null;
+            return (Format(Overlap, overlap, pa.Name, pb.Name), overlap);
         }
 
         if (a.DataControl is { } ca && b.DataControl is { } cb)
-        {
-            if (ReferenceEquals(ca, cb))
-                return (Format(WhileControl, ca.Name), null);
-            return netlist.AreExclusive(ca, cb) ? null : (Format(WhileBothControls, ca.Name, cb.Name), null);
-        }
+            return ReferenceEquals(ca, cb) ? (Format(WhileControl, ca.Name), null) : (Format(WhileBothControls, ca.Name, cb.Name), null);
 
         var clocked = a.ClockControl is not null ? a : b;
         var controlled = ReferenceEquals(clocked, a) ? b : a;

@@ -162,4 +162,80 @@ public class ChargeSharingRuleTests
         // 0.6 V × 4.5 / 8.5 = 317.6 mV > 300 mV.
         Assert.Contains("a 600 mV level settles at 282 mV, a droop of 318 mV", Assert.Single(findings).Message);
     }
+
+    // A register-file read port: four dynamic cells of 40 fF each (written on clk.High) read through pass gates onto
+    // one bit line. The bit line: wire 1 + four pass-gate terminals 4 × 1.5 + the sense inverter's gate 2 = 9 fF.
+    private static (Netlist Netlist, Finding[] Findings) ReadPort(Action<Circuit, Net[]> state)
+        => Check(c =>
+        {
+            var clk = c.Clock("clk", 10.Nanoseconds());
+            var bitLine = c.Node("rbl");
+            var selects = new Net[4];
+            for (var i = 0; i < selects.Length; i++)
+            {
+                var cell = c.TransmissionGate(c.Input($"d{i}"), clk.High, $"cell{i}");
+                c.SetCapacitance(cell, 40.Femtofarads());
+                selects[i] = c.Input($"rsel{i}");
+                c.TransmissionGate(cell, selects[i], bitLine);
+            }
+
+            state(c, selects);
+            c.Inverter(bitLine, "sense");
+        });
+
+    [Fact]
+    public void AOneHotReadPortStatedExclusiveSharesACellWithTheBitLineAlone()
+    {
+        // One read gate open at a time: 40 fF shares with 9 fF, droop 1.2 V × 9 / 49 = 220.4 mV, under 300 mV.
+        var (_, findings) = ReadPort((c, selects) => c.Exclusive(selects));
+        Assert.Empty(findings);
+    }
+
+    [Fact]
+    public void ReadSelectsNotKnownExclusiveShareACellWithTheBitLineAndEveryOtherCell()
+    {
+        // Worst case, every read gate open together: C2 = 9 + 3 × 40 = 129 fF; droop 1.2 V × 129 / 169 = 916.0 mV,
+        // the level settles at 1.2 V × 40 / 169 = 284.0 mV (conservation of charge over the five nodes).
+        var (_, findings) = ReadPort((_, _) => { });
+        Assert.Equal(4, findings.Length);
+        Assert.Equal(
+            "When 'rbl.tg1' conducts, floating node 'cell0' (C1 = 40 fF) shares its charge with floating node 'rbl' (C2 = 129 fF, "
+            + "counting 3 more floating nodes joined through pass gates that may conduct at the same time: 'cell1' through "
+            + "'rbl.tg2', 'cell2' through 'rbl.tg3', 'cell3' through 'rbl.tg4'; state Circuit.Exclusive if their controls are "
+            + "never high together): a 1.2 V level settles at 284 mV, a droop of 916 mV, more than the tolerated 300 mV",
+            findings[0].Message);
+        Assert.Equal(1.2 * 129 / 169, double.Parse(findings[0].Properties[DynamicStorageProperties.DroopVolts], CultureInfo.InvariantCulture), 1e-12);
+    }
+
+    [Fact]
+    public void StatingTwoOfFourSelectsExclusiveLeavesTheOtherTwoCounted()
+    {
+        // rsel0/rsel1 stated exclusive: opening rbl.tg1 can still find rbl.tg3 and rbl.tg4 open, not rbl.tg2.
+        // C2 = 9 + 2 × 40 = 89 fF for cell0.
+        var (_, findings) = ReadPort((c, selects) => c.Exclusive(selects[0], selects[1]));
+        Assert.Contains("(C2 = 89 fF, counting 2 more floating nodes joined through pass gates that may conduct at the same time: "
+            + "'cell2' through 'rbl.tg3', 'cell3' through 'rbl.tg4';", findings.Single(f => f.Properties[DynamicStorageProperties.Node] == "cell0").Message);
+    }
+
+    [Theory]
+    [InlineData(true)]   // y → z on clk.High too: z is open while x's charge spreads into y, so it takes a share.
+    [InlineData(false)]  // y → z on clk.Low: the windows meet only for the complement skew, and z is not counted.
+    public void AClockedGateCountsItsFarNodeOnlyWhenItsWindowOverlapsTheOpeningOne(bool samePhase)
+    {
+        // x (wire 1 + two terminals 2 × 1.5 = 4 fF) → gate y on clk.High → y (4 fF likewise) → gate z → z (wire 1 +
+        // one terminal 1.5 + inverter gate 2 = 4.5 fF). Same phase: C2 = 4 + 4.5 = 8.5 fF; otherwise C2 = 4 fF.
+        var (_, findings) = Check(c =>
+        {
+            var clk = c.Clock("clk", 10.Nanoseconds());
+            var x = c.TransmissionGate(c.Input("d"), clk.Low, "x");
+            var y = c.TransmissionGate(x, clk.High, "y");
+            var z = c.TransmissionGate(y, samePhase ? clk.High : clk.Low, "z");
+            c.Inverter(z, "q");
+        });
+
+        var atY = findings.Single(f => f.Properties[DynamicStorageProperties.Node] == "x");
+        var c2 = samePhase ? 4.0 + 4.5 : 4.0;
+        Assert.Equal(1.2 * c2 / (4.0 + c2), double.Parse(atY.Properties[DynamicStorageProperties.DroopVolts], CultureInfo.InvariantCulture), 1e-12);
+        Assert.Equal(samePhase, atY.Message.Contains("'z' through 'z'", StringComparison.Ordinal));
+    }
 }
