@@ -88,7 +88,7 @@ public sealed class SampleReportTests : IDisposable
 
         var channel = new ChannelSelect().Check();
         var pw2001 = Assert.Single(channel.Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
-        var elmore = new Time(double.Parse(pw2001.Properties[PassGateChainRule.ElmoreDelayProperty], CultureInfo.InvariantCulture));
+        var elmore = new Time(double.Parse(pw2001.Properties[FindingPropertyKeys.ElmoreDelaySeconds], CultureInfo.InvariantCulture));
         var chainRow = run.Out.Split('\n').Single(l => l.Contains("TOO LONG", StringComparison.Ordinal));
         Assert.Contains(elmore.ToString(), chainRow);          // the Elmore delay in PW2001's message
         Assert.Contains(pw2001.Arguments[2], chainRow);

@@ -52,11 +52,11 @@ public sealed class ClockFromUngatedClockCodeFix : CodeFixProvider
     {
         foreach (var diagnostic in context.Diagnostics)
         {
-            if (!diagnostic.Properties.TryGetValue(DynamicStorageProperties.Cell, out var cell) || cell is null
-                || !diagnostic.Properties.TryGetValue(DynamicStorageProperties.UngatedClock, out var ungated) || ungated is null
+            if (!diagnostic.Properties.TryGetValue(FindingPropertyKeys.Cell, out var cell) || cell is null
+                || !diagnostic.Properties.TryGetValue(FindingPropertyKeys.UngatedClock, out var ungated) || ungated is null
                 || (cell != nameof(MacroKind.DynamicLatch) && cell != nameof(MacroKind.DynamicRegister)))
                 continue;
-            diagnostic.Properties.TryGetValue(DynamicStorageProperties.GatedClock, out var gated);
+            diagnostic.Properties.TryGetValue(FindingPropertyKeys.GatedClock, out var gated);
 
             var site = await DesignCallSite.FindAsync(context.Document, diagnostic, cell, context.CancellationToken).ConfigureAwait(false);
             if (site is not { } found

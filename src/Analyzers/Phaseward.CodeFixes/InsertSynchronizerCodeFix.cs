@@ -42,7 +42,7 @@ public sealed class InsertSynchronizerCodeFix : CodeFixProvider
     {
         foreach (var diagnostic in context.Diagnostics)
         {
-            if (!diagnostic.Properties.TryGetValue(FindingProperties.Clock, out var clock) || clock is null)
+            if (!diagnostic.Properties.TryGetValue(FindingPropertyKeys.Clock, out var clock) || clock is null)
                 continue;
             foreach (var cell in Cells)
             {

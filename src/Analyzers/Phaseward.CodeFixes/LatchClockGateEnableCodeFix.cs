@@ -71,14 +71,14 @@ public sealed class LatchClockGateEnableCodeFix : CodeFixProvider
     // The gate call to rewrite and the phase to latch on (for the action's title), or null when the fix does not apply.
     private static async Task<(TextSpan Span, string Phase)?> SiteAsync(Document document, Diagnostic diagnostic, CancellationToken cancellationToken)
     {
-        if (!diagnostic.Properties.TryGetValue(ClockGateProperties.Origin, out var origin)
-            || !diagnostic.Properties.TryGetValue(ClockGateProperties.BlockingPolarity, out var polarity)
+        if (!diagnostic.Properties.TryGetValue(FindingPropertyKeys.Origin, out var origin)
+            || !diagnostic.Properties.TryGetValue(FindingPropertyKeys.BlockingPolarity, out var polarity)
             || polarity is not ("High" or "Low")
-            || !diagnostic.Properties.TryGetValue(ClockGateProperties.BlockingPhase, out var phase) || phase is null)
+            || !diagnostic.Properties.TryGetValue(FindingPropertyKeys.BlockingPhase, out var phase) || phase is null)
             return null;
-        var wrongPhase = origin == ClockGateProperties.FromLatch
-            && diagnostic.Properties.TryGetValue(ClockGateProperties.OpensWhilePassing, out var opens) && opens == "true";
-        if (origin != ClockGateProperties.FromInput && !wrongPhase)
+        var wrongPhase = origin == FindingPropertyValues.EnableFromLatch
+            && diagnostic.Properties.TryGetValue(FindingPropertyKeys.OpensWhilePassing, out var opens) && opens == "true";
+        if (origin != FindingPropertyValues.EnableFromInput && !wrongPhase)
             return null;
 
         var site = await DesignCallSite.FindAsync(document, diagnostic, "ClockGate", cancellationToken).ConfigureAwait(false);

@@ -20,7 +20,7 @@ namespace Phaseward.CodeFixes;
 
 /// <summary>
 /// Shared by the two PW2001 fixes (<see cref="InsertRestoringBufferFix"/>, <see cref="InsertRestoringInverterFix"/>):
-/// plans where a restoring stage goes from the finding's split sites (<see cref="PassGateChainRule.SplitSitesProperty"/>)
+/// plans where a restoring stage goes from the finding's split sites (<see cref="FindingPropertyKeys.SplitSites"/>)
 /// and the syntax there, and applies the plan. Not a fix itself.
 /// </summary>
 /// <remarks>
@@ -57,35 +57,18 @@ internal static class RestoringStageInsertion
         public string Text { get; }
     }
 
-    private sealed class Site
-    {
-        public int Position;
-        public int RunFirst;
-        public int RunCount;
-        public int SiteGates;
-        public bool HasCallers;
-        public int Start;
-        public int Length;
-        public string Path = string.Empty;
-    }
-
     /// <summary>The edits that restore the chain of one diagnostic, or null when a split point cannot be expressed.</summary>
     public static async Task<IReadOnlyList<Edit>?> PlanAsync(Solution solution, Diagnostic diagnostic, string stage, CancellationToken cancellationToken)
     {
         var properties = diagnostic.Properties;
-        if (!properties.TryGetValue(PassGateChainRule.SplitSitesProperty, out var sitesText) || string.IsNullOrEmpty(sitesText)
-            || !properties.TryGetValue(PassGateChainRule.SplitSpacingProperty, out var spacingText)
+        if (!properties.TryGetValue(FindingPropertyKeys.SplitSites, out var sitesText) || string.IsNullOrEmpty(sitesText)
+            || !properties.TryGetValue(FindingPropertyKeys.SplitSpacing, out var spacingText)
             || !int.TryParse(spacingText, NumberStyles.None, CultureInfo.InvariantCulture, out var spacing) || spacing < 1)
             return null;
-        var truncated = properties.TryGetValue(PassGateChainRule.SplitPointsTruncatedProperty, out var t) && t == "true";
+        var truncated = properties.TryGetValue(FindingPropertyKeys.SplitPointsTruncated, out var t) && t == "true";
 
-        var sites = new List<Site>();
-        foreach (var line in sitesText!.Split('\n'))
-        {
-            if (Parse(line) is not { } site || site.Start < 0)
-                return null;
-            sites.Add(site);
-        }
+        if (!SplitSite.TryParseAll(sitesText, out var sites) || sites.Any(site => site.Start < 0))
+            return null;
 
         var edits = new List<Edit>();
         foreach (var group in sites.GroupBy(s => (s.Path, s.Start, s.Length)))
@@ -135,30 +118,7 @@ internal static class RestoringStageInsertion
                 into.Add(edit);
     }
 
-    private static Site? Parse(string line)
-    {
-        var parts = line.Split(new[] { '|' }, 8);
-        if (parts.Length != 8) return null;
-        var numbers = new int[5];
-        for (var i = 0; i < 4; i++)
-            if (!int.TryParse(parts[i], NumberStyles.None, CultureInfo.InvariantCulture, out numbers[i])) return null;
-        if (!int.TryParse(parts[5], NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out var start)
-            || !int.TryParse(parts[6], NumberStyles.None, CultureInfo.InvariantCulture, out var length))
-            return null;
-        return new Site
-        {
-            Position = numbers[0],
-            RunFirst = numbers[1],
-            RunCount = numbers[2],
-            SiteGates = numbers[3],
-            HasCallers = parts[4] == "true",
-            Start = start,
-            Length = length,
-            Path = parts[7],
-        };
-    }
-
-    private static async Task<Edit?> PlanSiteAsync(Solution solution, List<Site> splits, int spacing, bool truncated, string stage, CancellationToken cancellationToken)
+    private static async Task<Edit?> PlanSiteAsync(Solution solution, List<SplitSite> splits, int spacing, bool truncated, string stage, CancellationToken cancellationToken)
     {
         var site = splits[0];
         var document = solution.Projects.SelectMany(p => p.Documents).FirstOrDefault(d => d.FilePath == site.Path);

@@ -89,18 +89,18 @@ public sealed class SameWindowLatchesCodeFix : CodeFixProvider
 
         public string EquivalenceKey { get; }
 
-        public string TargetLatch => Property(Diagnostic, FindingProperties.TargetLatch) ?? string.Empty;
+        public string TargetLatch => Property(Diagnostic, FindingPropertyKeys.TargetLatch) ?? string.Empty;
 
-        public string SourceLatch => Property(Diagnostic, FindingProperties.SourceLatch) ?? string.Empty;
+        public string SourceLatch => Property(Diagnostic, FindingPropertyKeys.SourceLatch) ?? string.Empty;
 
         public static Plan? For(Diagnostic diagnostic, SyntaxNode root, SemanticModel model, CancellationToken cancellationToken)
         {
             if (diagnostic.Id != RuleCatalog.SameWindowLatches.Id || !diagnostic.Location.IsInSource
                 || diagnostic.Location.SourceTree != root.SyntaxTree)
                 return null;
-            var target = Property(diagnostic, FindingProperties.TargetLatch);
-            var source = Property(diagnostic, FindingProperties.SourceLatch);
-            if (string.IsNullOrEmpty(target) || target == source || Property(diagnostic, FindingProperties.PhaseSetByOneCall) != "true")
+            var target = Property(diagnostic, FindingPropertyKeys.TargetLatch);
+            var source = Property(diagnostic, FindingPropertyKeys.SourceLatch);
+            if (string.IsNullOrEmpty(target) || target == source || Property(diagnostic, FindingPropertyKeys.PhaseSetByOneCall) != "true")
                 return null;
 
             var span = diagnostic.Location.SourceSpan;
@@ -114,7 +114,7 @@ public sealed class SameWindowLatchesCodeFix : CodeFixProvider
                 || call.Expression is not MemberAccessExpressionSyntax { Expression: var receiver })
                 return null;
 
-            return Property(diagnostic, FindingProperties.IsRegisterStage) == "true"
+            return Property(diagnostic, FindingPropertyKeys.IsRegisterStage) == "true"
                 ? InsertLatch(diagnostic, call, invocation, receiver, target!)
                 : SwitchPhase(diagnostic, call, invocation, model, target!, cancellationToken);
         }
@@ -127,8 +127,8 @@ public sealed class SameWindowLatchesCodeFix : CodeFixProvider
             var argument = invocation.Arguments.FirstOrDefault(a => IsDslType(a.Parameter?.Type, "Phase"));
             if (argument is null || argument.ArgumentKind != ArgumentKind.Explicit || argument.Syntax is not ArgumentSyntax { Expression: var phase })
                 return null;
-            var polarity = Property(diagnostic, FindingProperties.Polarity);
-            var complement = Property(diagnostic, FindingProperties.ComplementPolarity);
+            var polarity = Property(diagnostic, FindingPropertyKeys.Polarity);
+            var complement = Property(diagnostic, FindingPropertyKeys.ComplementPolarity);
             if (polarity is not ("High" or "Low") || complement is not ("High" or "Low") || polarity == complement)
                 return null;
 
@@ -169,9 +169,9 @@ public sealed class SameWindowLatchesCodeFix : CodeFixProvider
                 "StaticRegister" => "StaticLatch",
                 _ => null,
             };
-            var register = Property(diagnostic, FindingProperties.Register);
+            var register = Property(diagnostic, FindingPropertyKeys.Register);
             // Only the master is fed from outside the register; the new latch takes the complement of its phase.
-            var complementPolarity = Property(diagnostic, FindingProperties.ComplementPolarity);
+            var complementPolarity = Property(diagnostic, FindingPropertyKeys.ComplementPolarity);
             if (latchMethod is null || register is null || latch != register + ".master" || complementPolarity is not ("High" or "Low"))
                 return null;
             var data = Explicit(invocation, "d");

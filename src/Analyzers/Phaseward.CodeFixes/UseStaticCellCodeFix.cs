@@ -35,8 +35,8 @@ public sealed class UseStaticCellCodeFix : CodeFixProvider
     {
         foreach (var diagnostic in context.Diagnostics)
         {
-            if (!diagnostic.Properties.TryGetValue(DynamicStorageProperties.Cell, out var cell) || cell is null
-                || !diagnostic.Properties.TryGetValue(DynamicStorageProperties.StaticReplacement, out var replacement) || replacement is null)
+            if (!diagnostic.Properties.TryGetValue(FindingPropertyKeys.Cell, out var cell) || cell is null
+                || !diagnostic.Properties.TryGetValue(FindingPropertyKeys.StaticReplacement, out var replacement) || replacement is null)
                 continue;
             var (title, key) = replacement switch
             {

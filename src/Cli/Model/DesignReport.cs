@@ -155,10 +155,10 @@ internal sealed class DesignReport
         {
             var hits = new HashSet<Latch>();
             var p = finding.Finding.Properties;
-            foreach (var key in new[] { FindingProperties.TargetLatch, FindingProperties.SourceLatch, FindingProperties.Register, DynamicStorageProperties.CellName })
+            foreach (var key in new[] { FindingPropertyKeys.TargetLatch, FindingPropertyKeys.SourceLatch, FindingPropertyKeys.Register, FindingPropertyKeys.CellName })
                 if (p.TryGetValue(key, out var name) && byName.TryGetValue(name, out var latches))
                     hits.UnionWith(latches);
-            foreach (var key in new[] { DynamicStorageProperties.Node, DynamicStorageProperties.OtherNode })
+            foreach (var key in new[] { FindingPropertyKeys.Node, FindingPropertyKeys.OtherNode })
                 if (p.TryGetValue(key, out var net) && byName.TryGetValue("net:" + net, out var latches))
                     hits.UnionWith(latches);
             // Findings that name no latch (a pass-gate chain): the latches whose entry gate is the reported call.

@@ -16,8 +16,8 @@ internal static class ChargeSharingDeck
 {
     public static SpiceDeck Build(Finding finding, Netlist netlist)
     {
-        var charged = DeckInputs.StorageNodeByName(finding, netlist, DynamicStorageProperties.Node);
-        var other = DeckInputs.StorageNodeByName(finding, netlist, DynamicStorageProperties.OtherNode);
+        var charged = DeckInputs.StorageNodeByName(finding, netlist, FindingPropertyKeys.Node);
+        var other = DeckInputs.StorageNodeByName(finding, netlist, FindingPropertyKeys.OtherNode);
         Device? device = null;
         foreach (var d in netlist.DataLoadsOf(charged.Net))
             if (d.IsPassDevice && ReferenceEquals(d.Output, other.Net) && (finding.Arguments.Count == 0 || d.Name == finding.Arguments[0]))

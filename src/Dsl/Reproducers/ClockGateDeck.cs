@@ -23,7 +23,7 @@ internal static class ClockGateDeck
 {
     public static SpiceDeck Build(Finding finding, Netlist netlist)
     {
-        var gateName = DeckInputs.Property(finding, ClockGateProperties.GatedClock);
+        var gateName = DeckInputs.Property(finding, FindingPropertyKeys.GatedClock);
         Clock? gate = null;
         foreach (var clock in netlist.Clocks)
             if (clock.Name == gateName) gate = clock;
@@ -32,14 +32,14 @@ internal static class ClockGateDeck
 
         var stopsLow = gate.StopLevel == ClockStopLevel.Low;
         var period = source.Period;
-        var passStart = new Time(DeckInputs.Number(finding, ClockGateProperties.PassStartSeconds));
-        var passLength = new Time(DeckInputs.Number(finding, ClockGateProperties.PassEndSeconds)) - passStart;
-        var fromLatch = DeckInputs.Property(finding, ClockGateProperties.Origin) == ClockGateProperties.FromLatch;
+        var passStart = new Time(DeckInputs.Number(finding, FindingPropertyKeys.PassStartSeconds));
+        var passLength = new Time(DeckInputs.Number(finding, FindingPropertyKeys.PassEndSeconds)) - passStart;
+        var fromLatch = DeckInputs.Property(finding, FindingPropertyKeys.Origin) == FindingPropertyValues.EnableFromLatch;
         var model = LatchModel.Of(netlist);
         Latch? latch = null;
         if (fromLatch)
         {
-            var storageName = DeckInputs.Property(finding, ClockGateProperties.Storage);
+            var storageName = DeckInputs.Property(finding, FindingPropertyKeys.Storage);
             foreach (var l in model.Latches)
                 if (l.Name == storageName) latch = l;
             if (latch is null)
@@ -56,8 +56,8 @@ internal static class ClockGateDeck
         if (latch is not null)
         {
             opensAt = ClockWaveforms.NextOpening(latch.Phase, period);
-            changeLength = new Time(DeckInputs.Number(finding, ClockGateProperties.ChangeEndSeconds) - DeckInputs.Number(finding, ClockGateProperties.ChangeStartSeconds));
-            var late = changeLength - new Time(DeckInputs.Number(finding, ClockGateProperties.EnableDelaySeconds));
+            changeLength = new Time(DeckInputs.Number(finding, FindingPropertyKeys.ChangeEndSeconds) - DeckInputs.Number(finding, FindingPropertyKeys.ChangeStartSeconds));
+            var late = changeLength - new Time(DeckInputs.Number(finding, FindingPropertyKeys.EnableDelaySeconds));
             dataAt = late > edge * 3 ? opensAt + late : opensAt - edge * 3;
             enableAt = opensAt + changeLength;
         }

@@ -53,8 +53,8 @@ internal static class DeckInputs
     /// whose entry gate is the finding's location when several connect the two latches.</summary>
     public static LatchPath LatchPathOf(Finding finding, Netlist netlist, LatchModel model)
     {
-        var targetName = Property(finding, FindingProperties.TargetLatch);
-        var sourceName = Property(finding, FindingProperties.SourceLatch);
+        var targetName = Property(finding, FindingPropertyKeys.TargetLatch);
+        var sourceName = Property(finding, FindingPropertyKeys.SourceLatch);
         LatchPath? path = null;
         foreach (var p in model.Paths)
         {

@@ -17,13 +17,13 @@ internal static class FightingDriversDeck
 {
     public static SpiceDeck Build(Finding finding, Netlist netlist)
     {
-        var net = DeckInputs.NetByName(finding, netlist, FightProperties.Node);
-        var up = DrivePaths.Driver(finding, netlist, net, DeckInputs.Property(finding, FightProperties.Driver));
-        var down = DrivePaths.Driver(finding, netlist, net, DeckInputs.Property(finding, FightProperties.OtherDriver));
-        var r1 = new Resistance(DeckInputs.Number(finding, FightProperties.DriverOhms));
-        var r2 = new Resistance(DeckInputs.Number(finding, FightProperties.OtherDriverOhms));
-        var level = DeckInputs.Number(finding, FightProperties.LevelVolts);
-        var current = DeckInputs.Number(finding, FightProperties.CurrentAmperes);
+        var net = DeckInputs.NetByName(finding, netlist, FindingPropertyKeys.Node);
+        var up = DrivePaths.Driver(finding, netlist, net, DeckInputs.Property(finding, FindingPropertyKeys.Driver));
+        var down = DrivePaths.Driver(finding, netlist, net, DeckInputs.Property(finding, FindingPropertyKeys.OtherDriver));
+        var r1 = new Resistance(DeckInputs.Number(finding, FindingPropertyKeys.DriverOhms));
+        var r2 = new Resistance(DeckInputs.Number(finding, FindingPropertyKeys.OtherDriverOhms));
+        var level = DeckInputs.Number(finding, FindingPropertyKeys.LevelVolts);
+        var current = DeckInputs.Number(finding, FindingPropertyKeys.CurrentAmperes);
         var capacitance = netlist.CapacitanceOf(net);
         var tau = new Time((r1.Ohms * r2.Ohms / (r1.Ohms + r2.Ohms)) * capacitance.Farads);
         var end = new Time(Math.Max(tau.Seconds, 1e-12) * 40);
@@ -31,7 +31,7 @@ internal static class FightingDriversDeck
         var deck = new DeckWriter(finding, netlist);
         deck.Describe($"Sub-circuit: node '{net.Name}' ({capacitance}) and its two drivers: '{up.Name}' (path {r1}) pulling up and '{down.Name}' (path {r2}) pulling down, each with the rest of its path lumped behind it.");
         deck.Describe("Stimulus: both drivers conduct from the start and disagree (the first drives vdd, the second 0 V); the node starts at vdd/2."
-            + (finding.Properties.TryGetValue(FightProperties.OverlapSeconds, out var overlap)
+            + (finding.Properties.TryGetValue(FindingPropertyKeys.OverlapSeconds, out var overlap)
                 ? $" Their clocks overlap for {new Time(double.Parse(overlap, CultureInfo.InvariantCulture))} per period: the deck holds both windows open, which is where the node goes while they overlap (it gets there when the overlap is longer than the node's time constant, about {tau})."
                 : string.Empty));
         deck.Describe("Measured: v_fight, the node's level (Phaseward's estimate: the divider V·R2/(R1+R2)), and i_fight, the current through the pull-up path (V/(R1+R2)).");

@@ -18,11 +18,11 @@ internal static class KeeperWriteDeck
 {
     public static SpiceDeck Build(Finding finding, Netlist netlist)
     {
-        var net = DeckInputs.NetByName(finding, netlist, KeeperProperties.Node);
-        var writer = DrivePaths.Driver(finding, netlist, net, DeckInputs.Property(finding, KeeperProperties.Writer));
-        var write = new Resistance(DeckInputs.Number(finding, KeeperProperties.WriteOhms));
-        var keeperOhms = DeckInputs.Number(finding, KeeperProperties.KeeperOhms);
-        var level = DeckInputs.Number(finding, KeeperProperties.LevelVolts);
+        var net = DeckInputs.NetByName(finding, netlist, FindingPropertyKeys.Node);
+        var writer = DrivePaths.Driver(finding, netlist, net, DeckInputs.Property(finding, FindingPropertyKeys.Writer));
+        var write = new Resistance(DeckInputs.Number(finding, FindingPropertyKeys.WriteOhms));
+        var keeperOhms = DeckInputs.Number(finding, FindingPropertyKeys.KeeperOhms);
+        var level = DeckInputs.Number(finding, FindingPropertyKeys.LevelVolts);
         var keepers = new List<Device>();
         foreach (var driver in netlist.DriversOf(net))
             if (driver.IsWeak && driver.IsRestoring && driver.Inputs.Count == 1)

@@ -20,8 +20,8 @@ internal static class LatchBorrowingDeck
 {
     public static SpiceDeck Build(Finding finding, Netlist netlist)
     {
-        var targetName = DeckInputs.Property(finding, FindingProperties.TargetLatch);
-        var sourceName = DeckInputs.Property(finding, FindingProperties.SourceLatch);
+        var targetName = DeckInputs.Property(finding, FindingPropertyKeys.TargetLatch);
+        var sourceName = DeckInputs.Property(finding, FindingPropertyKeys.SourceLatch);
         var figures = TimingFigures.For(netlist, Corner.Slow);
         LatchArrival? arrival = null;
         foreach (var candidate in LatchBorrowing.Compute(figures))

@@ -23,8 +23,8 @@ internal static class LatchLoopDeck
 {
     public static SpiceDeck Build(Finding finding, Netlist netlist)
     {
-        var targetName = DeckInputs.Property(finding, FindingProperties.TargetLatch);
-        var sourceName = DeckInputs.Property(finding, FindingProperties.SourceLatch);
+        var targetName = DeckInputs.Property(finding, FindingPropertyKeys.TargetLatch);
+        var sourceName = DeckInputs.Property(finding, FindingPropertyKeys.SourceLatch);
         var model = LatchModel.Of(netlist);
         LatchLoop? loop = null;
         foreach (var candidate in LatchBorrowing.Solve(TimingFigures.For(netlist, Corner.Slow)).DivergentLoops)

@@ -22,7 +22,7 @@ internal static class LatchWriteWindowDeck
     public static SpiceDeck Build(Finding finding, Netlist netlist)
     {
         var model = LatchModel.Of(netlist);
-        var name = DeckInputs.Property(finding, FindingProperties.TargetLatch);
+        var name = DeckInputs.Property(finding, FindingPropertyKeys.TargetLatch);
         Latch? latch = null;
         foreach (var l in model.Latches)
             if (l.Name == name) latch = l;

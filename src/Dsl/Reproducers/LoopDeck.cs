@@ -18,13 +18,13 @@ internal static class LoopDeck
 {
     public static SpiceDeck Build(Finding finding, Netlist netlist)
     {
-        var firstName = DeckInputs.Property(finding, LoopProperties.FirstDevice);
-        if (!finding.Properties.TryGetValue(LoopProperties.Inversions, out var inversionsText))
+        var firstName = DeckInputs.Property(finding, FindingPropertyKeys.FirstDevice);
+        if (!finding.Properties.TryGetValue(FindingPropertyKeys.Inversions, out var inversionsText))
             throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location} is a tangle of loops that share nets: its behaviour depends on their other inputs, and there is no single loop to draw in a deck.", nameof(finding));
         var inversions = int.Parse(inversionsText, CultureInfo.InvariantCulture);
         var loop = Ordered(finding, netlist, firstName);
         var odd = inversions % 2 == 1;
-        var delay = new Time(DeckInputs.Number(finding, LoopProperties.LoopDelaySeconds));
+        var delay = new Time(DeckInputs.Number(finding, FindingPropertyKeys.LoopDelaySeconds));
         var period = delay * 2;
         var end = period * 8;
 

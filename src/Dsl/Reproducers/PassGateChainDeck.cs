@@ -18,7 +18,7 @@ internal static class PassGateChainDeck
 {
     public static SpiceDeck Build(Finding finding, Netlist netlist)
     {
-        var reported = DeckInputs.DeviceById(finding, netlist, PassGateChainRule.ReportedGateIdProperty);
+        var reported = DeckInputs.DeviceById(finding, netlist, FindingPropertyKeys.ReportedGateId);
         var network = new PassGateNetwork(netlist);
         var chains = new SeriesChains(network);
         var gates = new List<Device>();

@@ -20,8 +20,8 @@ internal static class RegisterPathDeck
 {
     public static SpiceDeck Build(Finding finding, Netlist netlist)
     {
-        var captureName = DeckInputs.Property(finding, FindingProperties.TargetLatch);
-        var launchName = DeckInputs.Property(finding, FindingProperties.SourceLatch);
+        var captureName = DeckInputs.Property(finding, FindingPropertyKeys.TargetLatch);
+        var launchName = DeckInputs.Property(finding, FindingPropertyKeys.SourceLatch);
         RegisterPathResult? result = null;
         foreach (var r in RegisterPathChecks.For(netlist))
             if (r.Launch.Name == launchName && r.Capture.Name == captureName)

@@ -20,7 +20,7 @@ internal static class RetentionDeck
 {
     public static SpiceDeck Build(Finding finding, Netlist netlist)
     {
-        var node = DeckInputs.StorageNodeByName(finding, netlist, DynamicStorageProperties.Node);
+        var node = DeckInputs.StorageNodeByName(finding, netlist, FindingPropertyKeys.Node);
         var retention = node.Retention;
         var stopped = finding.RuleId == RuleCatalog.DynamicNodeOnGatedClock.Id;
         var deck = new DeckWriter(finding, netlist);

@@ -79,7 +79,7 @@ public class ConductingPathDelayTests
 
         var finding = new PassGateChainRule().Check(new RuleContext(netlist, new RulePolicy { MaxSeriesPassGates = 2 })).First();
         Assert.EndsWith(PassGateChainRule.ExclusivityAssumption, finding.Message);
-        Assert.Equal("true", finding.Properties[PassGateChainRule.AssumesUnknownBranchesConductProperty]);
+        Assert.Equal("true", finding.Properties[FindingPropertyKeys.AssumesUnknownBranchesConduct]);
     }
 
     [Fact]
@@ -90,7 +90,7 @@ public class ConductingPathDelayTests
 
         var finding = new PassGateChainRule().Check(new RuleContext(netlist, new RulePolicy { MaxSeriesPassGates = 2 })).First();
         Assert.DoesNotContain("assumes", finding.Message);
-        Assert.Equal("false", finding.Properties[PassGateChainRule.AssumesUnknownBranchesConductProperty]);
+        Assert.Equal("false", finding.Properties[FindingPropertyKeys.AssumesUnknownBranchesConduct]);
     }
 
     [Fact]

@@ -30,7 +30,7 @@ public class PassGateChainDeckTests
 
         var deck = Reproducer.Deck(finding, report.Netlist);
         var estimate = deck.Estimates.Single(e => e.Name == "t50").Value;
-        var stated = double.Parse(finding.Properties[PassGateChainRule.FiftyPercentDelayProperty], CultureInfo.InvariantCulture);
+        var stated = double.Parse(finding.Properties[FindingPropertyKeys.FiftyPercentDelaySeconds], CultureInfo.InvariantCulture);
         Assert.Equal(stated, estimate);
         Assert.Contains("* estimate t50 = " + estimate.ToString("R", CultureInfo.InvariantCulture), deck.Text);
         Assert.Equal(gates, deck.Text.Split('\n').Count(l => l.StartsWith("X", System.StringComparison.Ordinal) && l.Contains(" pw_tg ")));

@@ -36,7 +36,7 @@ public class RegisterPathDeckTests
         var measured = Ngspice.Run(deck);
 
         var estimate = deck.Estimates.Single(e => e.Name == "slack").Value;
-        Assert.Equal(double.Parse(finding.Properties[FindingProperties.MarginSeconds], CultureInfo.InvariantCulture), estimate);
+        Assert.Equal(double.Parse(finding.Properties[FindingPropertyKeys.MarginSeconds], CultureInfo.InvariantCulture), estimate);
         var arrival = deck.Estimates.Single(e => e.Name == "t_arrival").Value;
         var simulated = measured.Value("t_arrival", deck);
         Assert.True(estimate < 0 && measured.Value("slack", deck) < 0, $"slack: estimate {estimate}, simulated {measured.Value("slack", deck)}");

@@ -23,7 +23,7 @@ public class RetentionDeckTests
         var finding = report.Findings.Single(f => f.RuleId == "PW3001");
 
         var deck = Reproducer.Deck(finding, report.Netlist);
-        var stated = double.Parse(finding.Properties[DynamicStorageProperties.RetentionSeconds], CultureInfo.InvariantCulture);
+        var stated = double.Parse(finding.Properties[FindingPropertyKeys.RetentionSeconds], CultureInfo.InvariantCulture);
         Assert.Equal(stated, deck.Estimates.Single(e => e.Name == "t_ret").Value);
         var tRet = Ngspice.Run(deck).Value("t_ret", deck);
         Assert.InRange(tRet, stated * 0.9, stated * 1.1);
@@ -39,7 +39,7 @@ public class RetentionDeckTests
         var finding = report.Findings.Single(f => f.RuleId == "PW3002");
 
         var deck = Reproducer.Deck(finding, report.Netlist);
-        var stated = double.Parse(finding.Properties[DynamicStorageProperties.RetentionSeconds], CultureInfo.InvariantCulture);
+        var stated = double.Parse(finding.Properties[FindingPropertyKeys.RetentionSeconds], CultureInfo.InvariantCulture);
         Assert.Equal(stated, deck.Estimates.Single(e => e.Name == "t_ret").Value);
         var measured = Ngspice.Run(deck);
         var tRet = measured.Value("t_ret", deck);

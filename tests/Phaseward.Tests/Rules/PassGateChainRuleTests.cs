@@ -49,10 +49,10 @@ public class PassGateChainRuleTests
 
         var finding = findings[0];
         Assert.Equal("PW2001", finding.RuleId);
-        Assert.Equal(gates.ToString(CultureInfo.InvariantCulture), finding.Properties["chainLength"]);
-        Assert.Equal(limit.ToString(CultureInfo.InvariantCulture), finding.Properties["limit"]);
-        Assert.Equal("hop" + (limit + 1), Name(c, finding.Properties["reportedGateId"]));
-        Assert.Equal("hop1", finding.Properties["firstGate"]);
+        Assert.Equal(gates.ToString(CultureInfo.InvariantCulture), finding.Properties[FindingPropertyKeys.ChainLength]);
+        Assert.Equal(limit.ToString(CultureInfo.InvariantCulture), finding.Properties[FindingPropertyKeys.Limit]);
+        Assert.Equal("hop" + (limit + 1), Name(c, finding.Properties[FindingPropertyKeys.ReportedGateId]));
+        Assert.Equal("hop1", finding.Properties[FindingPropertyKeys.FirstGate]);
     }
 
     // The figures of a straight chain, worked by hand with the illustrative process (wire 1 fF, diffusion 1.5 fF,
@@ -73,18 +73,18 @@ public class PassGateChainRuleTests
 
         Assert.Equal(2, PassGateChainRule.LimitFor(c.Process, RulePolicy.Default));
         var finding = Assert.Single(Check(c));
-        Assert.Equal("5", finding.Properties["chainLength"]);
-        Assert.Equal("2", finding.Properties["limit"]);
-        Assert.Equal("2", finding.Properties["optimalSpacing"]);
-        var elmore = double.Parse(finding.Properties["elmoreDelaySeconds"], CultureInfo.InvariantCulture);
+        Assert.Equal("5", finding.Properties[FindingPropertyKeys.ChainLength]);
+        Assert.Equal("2", finding.Properties[FindingPropertyKeys.Limit]);
+        Assert.Equal("2", finding.Properties[FindingPropertyKeys.OptimalSpacing]);
+        var elmore = double.Parse(finding.Properties[FindingPropertyKeys.ElmoreDelaySeconds], CultureInfo.InvariantCulture);
         Assert.Equal(346.5e-12, elmore, 1e-21);
-        Assert.Equal(Math.Log(2) * 346.5e-12, double.Parse(finding.Properties["fiftyPercentDelaySeconds"], CultureInfo.InvariantCulture), 1e-21);
-        var restored = double.Parse(finding.Properties["restoredDelaySeconds"], CultureInfo.InvariantCulture);
+        Assert.Equal(Math.Log(2) * 346.5e-12, double.Parse(finding.Properties[FindingPropertyKeys.FiftyPercentDelaySeconds], CultureInfo.InvariantCulture), 1e-21);
+        var restored = double.Parse(finding.Properties[FindingPropertyKeys.RestoredDelaySeconds], CultureInfo.InvariantCulture);
         Assert.Equal(2.5 * (Math.Log(2) * 18.5e-12 * 3 + 20e-12), restored, 1e-21);
         // Split after hop2 and hop4: segments of 2, 2, 1.
-        Assert.Equal("2", finding.Properties["splitPointCount"]);
-        Assert.Equal("hop2\nhop4", finding.Properties["splitAfterDevices"]);
-        Assert.Equal("false", finding.Properties["splitPointsTruncated"]);
+        Assert.Equal("2", finding.Properties[FindingPropertyKeys.SplitPointCount]);
+        Assert.Equal("hop2\nhop4", finding.Properties[FindingPropertyKeys.SplitAfterDevices]);
+        Assert.Equal("false", finding.Properties[FindingPropertyKeys.SplitPointsTruncated]);
         Assert.Equal("5 pass gates in series without a restoring stage (limit 2), starting at 'hop1' and passing the limit at 'hop3', in design 'Buoy': Elmore delay 347 ps (50% estimate 240 ps); "
                      + "a restoring stage every 2 gates would give about 146 ps", finding.Message);
         Assert.Equal(c.ToNetlist().Devices.Single(d => d.Name == "hop1").Span, Assert.Single(finding.RelatedLocations));
@@ -102,7 +102,7 @@ public class PassGateChainRuleTests
         Assert.Equal(5, PassGateChainRule.LimitFor(c.Process, RulePolicy.Default));
         Assert.Empty(Check(c));
         Chain(c, c.Input("sensor2"), clock.High, 6, "leg");
-        Assert.Equal("leg6", Name(c, Assert.Single(Check(c)).Properties["reportedGateId"]));
+        Assert.Equal("leg6", Name(c, Assert.Single(Check(c)).Properties[FindingPropertyKeys.ReportedGateId]));
     }
 
     [Fact]
@@ -143,8 +143,8 @@ public class PassGateChainRuleTests
 
         var findings = Check(c, limit);
         Assert.Equal(expected, findings.Count);
-        Assert.All(findings, f => Assert.Equal("4", f.Properties["chainLength"]));
-        Assert.Equal(findings.Count, findings.Select(f => f.Properties["reportedGateId"]).Distinct().Count());
+        Assert.All(findings, f => Assert.Equal("4", f.Properties[FindingPropertyKeys.ChainLength]));
+        Assert.Equal(findings.Count, findings.Select(f => f.Properties[FindingPropertyKeys.ReportedGateId]).Distinct().Count());
     }
 
     // Branching out: a long shared trunk is reported once, at the trunk (not once per branch), with the longest
@@ -158,8 +158,8 @@ public class PassGateChainRuleTests
         for (var b = 0; b < 3; b++)
             Chain(c, trunk[^1], clock.High, 2 + b, "branch" + b + "_");
         var finding = Assert.Single(Check(c, 3));
-        Assert.Equal("9", finding.Properties["chainLength"]);
-        Assert.Equal("trunk4", Name(c, finding.Properties["reportedGateId"]));
+        Assert.Equal("9", finding.Properties[FindingPropertyKeys.ChainLength]);
+        Assert.Equal("trunk4", Name(c, finding.Properties[FindingPropertyKeys.ReportedGateId]));
 
         var d = new Circuit("BuoyBroadcast2");
         var clock2 = d.Clock("sample", 10.Nanoseconds());
@@ -167,9 +167,9 @@ public class PassGateChainRuleTests
         for (var b = 0; b < 3; b++)
             Chain(d, stub[^1], clock2.High, 3, "branch" + b + "_");
         var findings = Check(d, 3);
-        Assert.Equal(new[] { "branch0_2", "branch1_2", "branch2_2" }, findings.Select(f => Name(d, f.Properties["reportedGateId"])));
-        Assert.All(findings, f => Assert.Equal("5", f.Properties["chainLength"]));
-        Assert.All(findings, f => Assert.Equal("trunk1", f.Properties["firstGate"]));
+        Assert.Equal(new[] { "branch0_2", "branch1_2", "branch2_2" }, findings.Select(f => Name(d, f.Properties[FindingPropertyKeys.ReportedGateId])));
+        Assert.All(findings, f => Assert.Equal("5", f.Properties[FindingPropertyKeys.ChainLength]));
+        Assert.All(findings, f => Assert.Equal("trunk1", f.Properties[FindingPropertyKeys.FirstGate]));
     }
 
     // A branched chain built with the DSL to match reference tree A (tests/reference/ngspice/rc_tree_a.cir): the input's
@@ -196,13 +196,13 @@ public class PassGateChainRuleTests
         Gate(Gate(Gate(Gate(t3, "b1", 6, 3), "b2", 8, 5), "b3", 7, 4), "b4", 12, 20);
 
         var findings = Check(c, 2);
-        Assert.Equal(new[] { "a1", "b1" }, findings.Select(f => Name(c, f.Properties["reportedGateId"])));
-        var a = double.Parse(findings[0].Properties["elmoreDelaySeconds"], CultureInfo.InvariantCulture);
-        var b = double.Parse(findings[1].Properties["elmoreDelaySeconds"], CultureInfo.InvariantCulture);
+        Assert.Equal(new[] { "a1", "b1" }, findings.Select(f => Name(c, f.Properties[FindingPropertyKeys.ReportedGateId])));
+        var a = double.Parse(findings[0].Properties[FindingPropertyKeys.ElmoreDelaySeconds], CultureInfo.InvariantCulture);
+        var b = double.Parse(findings[1].Properties[FindingPropertyKeys.ElmoreDelaySeconds], CultureInfo.InvariantCulture);
         Assert.Equal(876e-12, a, 1e-20);
         Assert.Equal(1368e-12, b, 1e-20);
-        Assert.Equal("4", findings[0].Properties["chainLength"]);
-        Assert.Equal("6", findings[1].Properties["chainLength"]);
+        Assert.Equal("4", findings[0].Properties[FindingPropertyKeys.ChainLength]);
+        Assert.Equal("6", findings[1].Properties[FindingPropertyKeys.ChainLength]);
         Assert.True(a >= NgspiceReference.TreeT50("rc_tree_a", "a2"));
         Assert.True(b >= NgspiceReference.TreeT50("rc_tree_a", "b4"));
     }
@@ -218,8 +218,8 @@ public class PassGateChainRuleTests
         Chain(c, held, clock.High, 2, "after");
 
         var finding = Assert.Single(Check(c, 2));
-        Assert.Equal("hold.pass", Name(c, finding.Properties["reportedGateId"]));
-        Assert.Equal("3", finding.Properties["chainLength"]);
+        Assert.Equal("hold.pass", Name(c, finding.Properties[FindingPropertyKeys.ReportedGateId]));
+        Assert.Equal("3", finding.Properties[FindingPropertyKeys.ChainLength]);
         Assert.Empty(Check(c, 3));
     }
 
@@ -240,8 +240,8 @@ public class PassGateChainRuleTests
         var hop = d.TransmissionGate(d.Input("sensor"), clock2.High, "hop");
         d.StaticLatch(hop, clock2.Low, "keep");
         var finding = Assert.Single(Check(d, 1));
-        Assert.Equal("keep.pass", Name(d, finding.Properties["reportedGateId"]));
-        Assert.Equal("2", finding.Properties["chainLength"]);
+        Assert.Equal("keep.pass", Name(d, finding.Properties[FindingPropertyKeys.ReportedGateId]));
+        Assert.Equal("2", finding.Properties[FindingPropertyKeys.ChainLength]);
     }
 
     // A loop of pass gates (a designer's mistake, or a ring written on purpose) must not hang the rule. The edge that
@@ -257,7 +257,7 @@ public class PassGateChainRuleTests
         c.TransmissionGate(n1, clock.Low, n2);
         c.TransmissionGate(n2, clock.High, n1);
         var finding = Assert.Single(Check(c, 2));
-        Assert.Equal("3", finding.Properties["chainLength"]);
+        Assert.Equal("3", finding.Properties[FindingPropertyKeys.ChainLength]);
         Assert.Empty(Check(c, 3));
 
         // A loop with no way in at all.
@@ -282,7 +282,7 @@ public class PassGateChainRuleTests
         var hops = Chain(c, c.Input("sensor"), clock.High, 2, "hop");
         c.Keeper(hops[^1]);
         Chain(c, hops[^1], clock.High, 2, "more");
-        Assert.Equal("4", Assert.Single(Check(c, 3)).Properties["chainLength"]);
+        Assert.Equal("4", Assert.Single(Check(c, 3)).Properties[FindingPropertyKeys.ChainLength]);
 
         var d = new Circuit("BuoyBuffered");
         var clock2 = d.Clock("sample", 10.Nanoseconds());
@@ -300,7 +300,7 @@ public class PassGateChainRuleTests
         var hops = Chain(c, c.Input("sensor"), clock.High, 2, "hop");
         c.Inverter(hops[^1], "tap");
         Chain(c, hops[^1], clock.High, 2, "more");
-        Assert.Equal("4", Assert.Single(Check(c, 3)).Properties["chainLength"]);
+        Assert.Equal("4", Assert.Single(Check(c, 3)).Properties[FindingPropertyKeys.ChainLength]);
     }
 
     // 200 000 gates in one chain: the rule must finish (no timing asserted; speed lives in the benchmark) and list a
@@ -314,10 +314,10 @@ public class PassGateChainRuleTests
         for (var i = 0; i < 200_000; i++)
             net = c.TransmissionGate(net, clock.High);
         var finding = Assert.Single(Check(c));
-        Assert.Equal("200000", finding.Properties["chainLength"]);
-        Assert.Equal("99999", finding.Properties["splitPointCount"]);
-        Assert.Equal("true", finding.Properties["splitPointsTruncated"]);
-        Assert.Equal(PassGateChainRule.MaxListedSplitPoints, finding.Properties["splitAfterDeviceIds"].Split(',').Length);
+        Assert.Equal("200000", finding.Properties[FindingPropertyKeys.ChainLength]);
+        Assert.Equal("99999", finding.Properties[FindingPropertyKeys.SplitPointCount]);
+        Assert.Equal("true", finding.Properties[FindingPropertyKeys.SplitPointsTruncated]);
+        Assert.Equal(PassGateChainRule.MaxListedSplitPoints, finding.Properties[FindingPropertyKeys.SplitAfterDeviceIds].Split(',').Length);
     }
 
     private sealed class TelemetryMux : Design
@@ -337,7 +337,7 @@ public class PassGateChainRuleTests
     {
         var report = new TelemetryMux().Check(new RulePolicy { MaxSeriesPassGates = 4 });
         var finding = Assert.Single(report.Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
-        Assert.Equal("6", finding.Properties["chainLength"]);
+        Assert.Equal("6", finding.Properties[FindingPropertyKeys.ChainLength]);
         Assert.StartsWith("6 pass gates in series without a restoring stage (limit 4), starting at '", finding.Message);
         Assert.Contains("', in design 'TelemetryMux': Elmore delay ", finding.Message);
         Assert.Contains(" ps", finding.Message);
@@ -376,7 +376,7 @@ public class PassGateChainRuleTests
         var finding = Assert.Single(new TelemetryBus(restored: false).Check().Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
         Assert.Equal("5 pass gates in series without a restoring stage (limit 2), starting at 'hop1' and passing the limit at 'hop3', in design 'TelemetryBus': Elmore delay 405 ps (50% estimate 280 ps); "
                      + "a restoring stage every 2 gates would give about 157 ps", finding.Message);
-        Assert.Equal("hop2\nhop4", finding.Properties["splitAfterDevices"]);
+        Assert.Equal("hop2\nhop4", finding.Properties[FindingPropertyKeys.SplitAfterDevices]);
         Assert.DoesNotContain(new TelemetryBus(restored: true).Check().Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
     }
 
@@ -408,9 +408,9 @@ public class PassGateChainRuleTests
         c.Output("bus", c.Inverter(net));
 
         var finding = Assert.Single(Check(c));
-        Assert.Equal("10", finding.Properties["chainLength"]);
-        Assert.Equal("hop2\nhop4\nloop0\nloop2", finding.Properties["splitAfterDevices"]);
-        var sites = finding.Properties[PassGateChainRule.SplitSitesProperty].Split('\n');
+        Assert.Equal("10", finding.Properties[FindingPropertyKeys.ChainLength]);
+        Assert.Equal("hop2\nhop4\nloop0\nloop2", finding.Properties[FindingPropertyKeys.SplitAfterDevices]);
+        var sites = finding.Properties[FindingPropertyKeys.SplitSites].Split('\n');
         Assert.Equal(new[]
         {
             "3|3|1|1|false|120|8|/src/Buoy.cs",   // hop3: its own call
@@ -421,7 +421,7 @@ public class PassGateChainRuleTests
 
         // Limit 1 (spacing 1): split before every gate from position 2 on; the helper's gate reports its caller.
         var strict = Assert.Single(Check(c, limit: 1));
-        var last = strict.Properties[PassGateChainRule.SplitSitesProperty].Split('\n').Last();
+        var last = strict.Properties[FindingPropertyKeys.SplitSites].Split('\n').Last();
         Assert.Equal("10|10|1|1|true|300|12|/src/Lib.cs", last);
     }
 
@@ -445,7 +445,7 @@ public class PassGateChainRuleTests
         c.Output("z", c.Inverter(side));
 
         var finding = Assert.Single(Check(c));
-        Assert.Equal("3|3|1|2|false|30|5|/src/Buoy.cs", finding.Properties[PassGateChainRule.SplitSitesProperty]);
+        Assert.Equal("3|3|1|2|false|30|5|/src/Buoy.cs", finding.Properties[FindingPropertyKeys.SplitSites]);
     }
 
     [Fact]
@@ -454,7 +454,7 @@ public class PassGateChainRuleTests
         var c = new Circuit("Buoy");
         var clock = c.Clock("sample", 10.Nanoseconds());
         Chain(c, c.Input("sensor"), clock.High, 3, "hop");
-        var line = Assert.Single(Check(c)).Properties[PassGateChainRule.SplitSitesProperty];
+        var line = Assert.Single(Check(c)).Properties[FindingPropertyKeys.SplitSites];
         Assert.StartsWith("3|3|1|1|false|-1|0|", line, StringComparison.Ordinal);
     }
 

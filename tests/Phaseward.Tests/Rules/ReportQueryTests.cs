@@ -37,7 +37,7 @@ public class ReportQueryTests
         Assert.True(run.ExceedsLimit);
 
         var finding = Assert.Single(Checker.Check(netlist).Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
-        Assert.Equal(run.ElmoreDelay.Seconds.ToString("R", CultureInfo.InvariantCulture), finding.Properties[PassGateChainRule.ElmoreDelayProperty]);
+        Assert.Equal(run.ElmoreDelay.Seconds.ToString("R", CultureInfo.InvariantCulture), finding.Properties[FindingPropertyKeys.ElmoreDelaySeconds]);
 
         var relaxed = Assert.Single(PassGateChains.Of(netlist, new RulePolicy { MaxSeriesPassGates = 5 }));
         Assert.False(relaxed.ExceedsLimit);
@@ -66,7 +66,7 @@ public class ReportQueryTests
         // The rule reports the same pair with the same margin once the policy asks for more than it has.
         var finding = Assert.Single(Checker.Check(netlist, new RulePolicy { MinimumRaceMargin = 60.Picoseconds() }).Findings,
             f => f.RuleId == RuleCatalog.OverlapRace.Id);
-        Assert.Equal(race.Margin.Seconds.ToString("R", CultureInfo.InvariantCulture), finding.Properties[FindingProperties.MarginSeconds]);
+        Assert.Equal(race.Margin.Seconds.ToString("R", CultureInfo.InvariantCulture), finding.Properties[FindingPropertyKeys.MarginSeconds]);
     }
 
     [Fact]
@@ -87,7 +87,7 @@ public class ReportQueryTests
         var findings = Checker.Check(netlist, new RulePolicy { MinimumTimingSlack = 10.Nanoseconds() }).Findings;
         var setup = Assert.Single(findings, f => f.RuleId == RuleCatalog.RegisterSetup.Id);
         var hold = Assert.Single(findings, f => f.RuleId == RuleCatalog.RegisterHold.Id);
-        Assert.Equal(result.Check.SetupSlack.Seconds.ToString("R", CultureInfo.InvariantCulture), setup.Properties[FindingProperties.MarginSeconds]);
-        Assert.Equal(result.Check.HoldSlack.Seconds.ToString("R", CultureInfo.InvariantCulture), hold.Properties[FindingProperties.MarginSeconds]);
+        Assert.Equal(result.Check.SetupSlack.Seconds.ToString("R", CultureInfo.InvariantCulture), setup.Properties[FindingPropertyKeys.MarginSeconds]);
+        Assert.Equal(result.Check.HoldSlack.Seconds.ToString("R", CultureInfo.InvariantCulture), hold.Properties[FindingPropertyKeys.MarginSeconds]);
     }
 }

@@ -22,9 +22,6 @@ internal static class InstanceGrouping
     /// <summary>Additional locations carried at most (the calls that led to the instances).</summary>
     public const int MaxRelatedLocations = 16;
 
-    public const string InstanceCountProperty = "instanceCount";
-    public const string InstancesProperty = "instances";
-
     /// <summary>Groups the mapped findings by rule, primary and related locations, in the order they were found.</summary>
     /// <param name="callSite">The location of a call the instances went through (a <c>Place</c> call, a helper call in
     /// a loop), or null when it is not in this compilation.</param>
@@ -53,8 +50,8 @@ internal static class InstanceGrouping
         var additional = members.SelectMany(m => m.Diagnostic.AdditionalLocations).Concat(calls)
             .Distinct().Take(MaxRelatedLocations).ToList();
         var properties = first.Diagnostic.Properties
-            .SetItem(InstanceCountProperty, members.Count.ToString(CultureInfo.InvariantCulture))
-            .SetItem(InstancesProperty, string.Join(";", labels));
+            .SetItem(FindingPropertyKeys.InstanceCount, members.Count.ToString(CultureInfo.InvariantCulture))
+            .SetItem(FindingPropertyKeys.Instances, string.Join(";", labels));
         var arguments = first.Finding.Arguments.Cast<object?>().Append(suffix).ToArray();
         return Diagnostic.Create(Descriptors.ForInstances(first.Finding.Rule), first.Diagnostic.Location, additional, properties, arguments);
     }

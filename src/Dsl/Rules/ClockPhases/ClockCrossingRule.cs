@@ -40,14 +40,14 @@ public sealed class ClockCrossingRule : Rule
             var register = model.RegisterOf(b);
             var properties = new Dictionary<string, string>
             {
-                [FindingProperties.TargetLatch] = b.Name,
-                [FindingProperties.SourceLatch] = a.Name,
-                [FindingProperties.Clock] = receiving.Name,
-                [FindingProperties.SendingClock] = sending.Name,
-                [FindingProperties.IsRegisterStage] = register is null ? "false" : "true",
+                [FindingPropertyKeys.TargetLatch] = b.Name,
+                [FindingPropertyKeys.SourceLatch] = a.Name,
+                [FindingPropertyKeys.Clock] = receiving.Name,
+                [FindingPropertyKeys.SendingClock] = sending.Name,
+                [FindingPropertyKeys.IsRegisterStage] = register is null ? "false" : "true",
             };
             if (register is not null)
-                properties[FindingProperties.Register] = register.Name;
+                properties[FindingPropertyKeys.Register] = register.Name;
             yield return new Finding(RuleCatalog.ClockCrossing, path.EntryGate.Span,
                 new object[] { register?.Name ?? b.Name, receiving.Name, a.Name, sending.Name, Reason(sending, receiving) },
                 new[] { a.Span }, properties);

@@ -87,27 +87,27 @@ public sealed class ClockGateEnableRule : Rule
                 var blocks = gate.StopLevel == ClockStopLevel.Low ? source.Low : source.High;
                 var properties = new Dictionary<string, string>
                 {
-                    [ClockGateProperties.GatedClock] = gate.Name,
-                    [ClockGateProperties.SourceClock] = source.Name,
-                    [ClockGateProperties.Enable] = enable.Name,
-                    [ClockGateProperties.BlockingPhase] = blocks.Name,
-                    [ClockGateProperties.BlockingPolarity] = blocks.Polarity.ToString(),
-                    [ClockGateProperties.PassStartSeconds] = DynamicStorageProperties.Number(passes.Start.Seconds),
-                    [ClockGateProperties.PassEndSeconds] = DynamicStorageProperties.Number(passes.End.Seconds),
+                    [FindingPropertyKeys.GatedClock] = gate.Name,
+                    [FindingPropertyKeys.SourceClock] = source.Name,
+                    [FindingPropertyKeys.Enable] = enable.Name,
+                    [FindingPropertyKeys.BlockingPhase] = blocks.Name,
+                    [FindingPropertyKeys.BlockingPolarity] = blocks.Polarity.ToString(),
+                    [FindingPropertyKeys.PassStartSeconds] = FindingPropertyValues.Number(passes.Start.Seconds),
+                    [FindingPropertyKeys.PassEndSeconds] = FindingPropertyValues.Number(passes.End.Seconds),
                 };
                 if (origin.Latch is { } storage)
-                    properties[ClockGateProperties.Storage] = storage.Name;
-                properties[ClockGateProperties.Origin] = origin.Latch is null ? ClockGateProperties.FromInput
-                    : change is null ? ClockGateProperties.FromUnrelatedClock : ClockGateProperties.FromLatch;
+                    properties[FindingPropertyKeys.Storage] = storage.Name;
+                properties[FindingPropertyKeys.Origin] = origin.Latch is null ? FindingPropertyValues.EnableFromInput
+                    : change is null ? FindingPropertyValues.EnableFromUnrelatedClock : FindingPropertyValues.EnableFromLatch;
                 if (change is not null)
                 {
-                    properties[ClockGateProperties.OpensWhilePassing] = opensWhilePassing ? "true" : "false";
-                    properties[ClockGateProperties.EnableDelaySeconds] = DynamicStorageProperties.Number(((model.EntryDelay(origin.Latch!) + origin.Delay) * netlist.Process.SlowDelayFactor).Seconds);
+                    properties[FindingPropertyKeys.OpensWhilePassing] = opensWhilePassing ? "true" : "false";
+                    properties[FindingPropertyKeys.EnableDelaySeconds] = FindingPropertyValues.Number(((model.EntryDelay(origin.Latch!) + origin.Delay) * netlist.Process.SlowDelayFactor).Seconds);
                 }
                 if (change is { } c)
                 {
-                    properties[ClockGateProperties.ChangeStartSeconds] = DynamicStorageProperties.Number(c.Start.Seconds);
-                    properties[ClockGateProperties.ChangeEndSeconds] = DynamicStorageProperties.Number(c.End.Seconds);
+                    properties[FindingPropertyKeys.ChangeStartSeconds] = FindingPropertyValues.Number(c.Start.Seconds);
+                    properties[FindingPropertyKeys.ChangeEndSeconds] = FindingPropertyValues.Number(c.End.Seconds);
                 }
 
                 var related = origin.Latch is { } l ? new[] { l.Span } : new[] { origin.InputSpan! };
@@ -269,41 +269,4 @@ internal static class EnableOrigins
                 return port.Span;
         return SourceSpan.Unknown;
     }
-}
-
-/// <summary>Keys of the machine-readable properties PW1004 findings carry (times in seconds on the root clock's period).</summary>
-public static class ClockGateProperties
-{
-    public const string GatedClock = "GatedClock";
-    public const string SourceClock = "SourceClock";
-    public const string Enable = "Enable";
-
-    /// <summary>The latch the enable comes from (absent for a primary input).</summary>
-    public const string Storage = "Storage";
-
-    /// <summary>The phase in which the gate blocks the clock ("clk.Low" for a gate that stops low): what to latch the enable on.</summary>
-    public const string BlockingPhase = "BlockingPhase";
-
-    /// <summary>"High" or "Low": the blocking phase's polarity.</summary>
-    public const string BlockingPolarity = "BlockingPolarity";
-
-    /// <summary>Where the enable comes from: <see cref="FromLatch"/>, <see cref="FromUnrelatedClock"/> (a latch whose clock
-    /// has no fixed time relation to the gate's: a synchronizer's business, not a latch's) or <see cref="FromInput"/>.</summary>
-    public const string Origin = "Origin";
-
-    public const string FromLatch = "Latch";
-    public const string FromUnrelatedClock = "UnrelatedClock";
-    public const string FromInput = "Input";
-
-    /// <summary>For an enable from a latch: "true" when the latch opens while the gate passes the clock (it is on the
-    /// wrong phase: latching the enable on the blocking phase fixes it), "false" when only the path after it is too slow.</summary>
-    public const string OpensWhilePassing = "OpensWhilePassing";
-
-    /// <summary>For an enable from a latch: its entry delay plus the slowest path from its storage node to the enable, at the slow corner (s).</summary>
-    public const string EnableDelaySeconds = "EnableDelaySeconds";
-
-    public const string PassStartSeconds = "PassStartSeconds";
-    public const string PassEndSeconds = "PassEndSeconds";
-    public const string ChangeStartSeconds = "ChangeStartSeconds";
-    public const string ChangeEndSeconds = "ChangeEndSeconds";
 }

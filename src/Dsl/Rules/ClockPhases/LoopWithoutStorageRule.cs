@@ -50,8 +50,8 @@ public sealed class LoopWithoutStorageRule : Rule
 
             var properties = new Dictionary<string, string>
             {
-                [LoopProperties.Devices] = loop.Count.ToString(System.Globalization.CultureInfo.InvariantCulture),
-                [LoopProperties.FirstDevice] = first.Name,
+                [FindingPropertyKeys.LoopDevices] = loop.Count.ToString(System.Globalization.CultureInfo.InvariantCulture),
+                [FindingPropertyKeys.FirstDevice] = first.Name,
             };
             string behaviour;
             if (IsSimpleCycle(loop))
@@ -64,11 +64,11 @@ public sealed class LoopWithoutStorageRule : Rule
                     delay += FirstOrderDelay.Of(netlist, device);
                 }
 
-                properties[LoopProperties.Inversions] = inversions.ToString(System.Globalization.CultureInfo.InvariantCulture);
-                properties[LoopProperties.LoopDelaySeconds] = DynamicStorageProperties.Number(delay.Seconds);
+                properties[FindingPropertyKeys.Inversions] = inversions.ToString(System.Globalization.CultureInfo.InvariantCulture);
+                properties[FindingPropertyKeys.LoopDelaySeconds] = FindingPropertyValues.Number(delay.Seconds);
                 if (inversions % 2 == 1)
                 {
-                    properties[LoopProperties.OscillationPeriodSeconds] = DynamicStorageProperties.Number((delay * 2).Seconds);
+                    properties[FindingPropertyKeys.OscillationPeriodSeconds] = FindingPropertyValues.Number((delay * 2).Seconds);
                     behaviour = string.Format(System.Globalization.CultureInfo.InvariantCulture, OddLoop, inversions, delay * 2, delay);
                 }
                 else
@@ -148,23 +148,4 @@ public sealed class LoopWithoutStorageRule : Rule
 
         return true;
     }
-}
-
-/// <summary>Keys of the machine-readable properties PW1005 findings carry.</summary>
-public static class LoopProperties
-{
-    /// <summary>How many devices the loop holds.</summary>
-    public const string Devices = "LoopDevices";
-
-    /// <summary>The device the finding is reported at.</summary>
-    public const string FirstDevice = "FirstDevice";
-
-    /// <summary>Inverting stages round a simple loop (absent for loops that share nets).</summary>
-    public const string Inversions = "Inversions";
-
-    /// <summary>Sum of the loop's first-order stage delays, in seconds (simple loops only).</summary>
-    public const string LoopDelaySeconds = "LoopDelaySeconds";
-
-    /// <summary>About twice the loop's delay, in seconds, for an odd loop.</summary>
-    public const string OscillationPeriodSeconds = "OscillationPeriodSeconds";
 }

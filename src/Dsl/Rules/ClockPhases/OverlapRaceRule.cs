@@ -38,14 +38,14 @@ public sealed class OverlapRaceRule : Rule
             var register = model.RegisterOf(b);
             var properties = new Dictionary<string, string>
             {
-                [FindingProperties.TargetLatch] = b.Name,
-                [FindingProperties.SourceLatch] = a.Name,
-                [FindingProperties.Phase] = path.EntryGate.ClockControl!.Name,
-                [FindingProperties.IsRegisterStage] = register is null ? "false" : "true",
-                [FindingProperties.MarginSeconds] = margin.Seconds.ToString("R", CultureInfo.InvariantCulture),
+                [FindingPropertyKeys.TargetLatch] = b.Name,
+                [FindingPropertyKeys.SourceLatch] = a.Name,
+                [FindingPropertyKeys.Phase] = path.EntryGate.ClockControl!.Name,
+                [FindingPropertyKeys.IsRegisterStage] = register is null ? "false" : "true",
+                [FindingPropertyKeys.MarginSeconds] = margin.Seconds.ToString("R", CultureInfo.InvariantCulture),
             };
             if (register is not null)
-                properties[FindingProperties.Register] = register.Name;
+                properties[FindingPropertyKeys.Register] = register.Name;
             yield return new Finding(RuleCatalog.OverlapRace, path.EntryGate.Span,
                 new object[] { b.Name, a.Name, race.OverlapName, race.ClocksText, fastest, overlap, margin, required, CornerText.Of(context.Netlist.Process, Corner.Fast) },
                 new[] { a.Span }, properties);

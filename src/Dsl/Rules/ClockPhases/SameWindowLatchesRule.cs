@@ -44,18 +44,18 @@ public sealed class SameWindowLatchesRule : Rule
             var register = model.RegisterOf(b);
             var properties = new Dictionary<string, string>
             {
-                [FindingProperties.TargetLatch] = b.Name,
-                [FindingProperties.SourceLatch] = a.Name,
-                [FindingProperties.Phase] = phaseB.Name,
-                [FindingProperties.ComplementPhase] = phaseB.Complement.Name,
-                [FindingProperties.Clock] = phaseB.Clock.Name,
-                [FindingProperties.Polarity] = phaseB.Polarity.ToString(),
-                [FindingProperties.ComplementPolarity] = phaseB.Complement.Polarity.ToString(),
-                [FindingProperties.IsRegisterStage] = register is null ? "false" : "true",
-                [FindingProperties.PhaseSetByOneCall] = b.Cell is not null || (b.EntryGates.Count == 1 && b.FeedbackGates.Count == 0) ? "true" : "false",
+                [FindingPropertyKeys.TargetLatch] = b.Name,
+                [FindingPropertyKeys.SourceLatch] = a.Name,
+                [FindingPropertyKeys.Phase] = phaseB.Name,
+                [FindingPropertyKeys.ComplementPhase] = phaseB.Complement.Name,
+                [FindingPropertyKeys.Clock] = phaseB.Clock.Name,
+                [FindingPropertyKeys.Polarity] = phaseB.Polarity.ToString(),
+                [FindingPropertyKeys.ComplementPolarity] = phaseB.Complement.Polarity.ToString(),
+                [FindingPropertyKeys.IsRegisterStage] = register is null ? "false" : "true",
+                [FindingPropertyKeys.PhaseSetByOneCall] = b.Cell is not null || (b.EntryGates.Count == 1 && b.FeedbackGates.Count == 0) ? "true" : "false",
             };
             if (register is not null)
-                properties[FindingProperties.Register] = register.Name;
+                properties[FindingPropertyKeys.Register] = register.Name;
 
             yield return new Finding(RuleCatalog.SameWindowLatches, path.EntryGate.Span, new object[] { b.Name, a.Name, shared },
                 new[] { a.Span }, properties);

@@ -41,9 +41,9 @@ public sealed class ChargeSharingRule : Rule
 
             var properties = new Dictionary<string, string>
             {
-                [DynamicStorageProperties.Node] = charged.Net.Name,
-                [DynamicStorageProperties.OtherNode] = other.Net.Name,
-                [DynamicStorageProperties.DroopVolts] = DynamicStorageProperties.Number(sharing.Droop.Volts),
+                [FindingPropertyKeys.Node] = charged.Net.Name,
+                [FindingPropertyKeys.OtherNode] = other.Net.Name,
+                [FindingPropertyKeys.DroopVolts] = FindingPropertyValues.Number(sharing.Droop.Volts),
             };
             CellProperties.Add(properties, charged);
 

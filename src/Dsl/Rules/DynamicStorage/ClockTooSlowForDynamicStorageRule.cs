@@ -31,11 +31,11 @@ public sealed class ClockTooSlowForDynamicStorageRule : Rule
             var (isolation, retained) = Engineering.FormatApart(running.Longest.Seconds, retention.Time.Seconds, "s");
             var properties = new Dictionary<string, string>
             {
-                [DynamicStorageProperties.Node] = node.Net.Name,
-                [DynamicStorageProperties.RootClock] = root.Name,
-                [DynamicStorageProperties.RetentionSeconds] = DynamicStorageProperties.Number(retention.Time.Seconds),
-                [DynamicStorageProperties.IsolationSeconds] = DynamicStorageProperties.Number(running.Longest.Seconds),
-                [DynamicStorageProperties.MinimumFrequencyHertz] = DynamicStorageProperties.Number(minimum.Hertz),
+                [FindingPropertyKeys.Node] = node.Net.Name,
+                [FindingPropertyKeys.RootClock] = root.Name,
+                [FindingPropertyKeys.RetentionSeconds] = FindingPropertyValues.Number(retention.Time.Seconds),
+                [FindingPropertyKeys.IsolationSeconds] = FindingPropertyValues.Number(running.Longest.Seconds),
+                [FindingPropertyKeys.MinimumFrequencyHertz] = FindingPropertyValues.Number(minimum.Hertz),
             };
             CellProperties.Add(properties, node);
 

@@ -30,23 +30,23 @@ public sealed class DynamicNodeOnGatedClockRule : Rule
             var gate = stopped.Gate;
             var (idleText, retainedText) = stopped.IdleBound is { } idleShown
                 ? Engineering.FormatApart(idleShown.Seconds, retention.Time.Seconds, "s")
-                : (DynamicStorageProperties.Unbounded, retention.Time.ToString());
+                : (FindingPropertyValues.Unbounded, retention.Time.ToString());
             var related = new List<SourceSpan>(stopped.Gates.Count);
             foreach (var g in stopped.Gates)
                 related.Add(g.Span);
 
             var properties = new Dictionary<string, string>
             {
-                [DynamicStorageProperties.Node] = node.Net.Name,
-                [DynamicStorageProperties.GatedClock] = gate.Name,
-                [DynamicStorageProperties.RootClock] = gate.Root.Name,
-                [DynamicStorageProperties.RetentionSeconds] = DynamicStorageProperties.Number(retention.Time.Seconds),
-                [DynamicStorageProperties.IdleSeconds] = stopped.IdleBound is { } bound
-                    ? DynamicStorageProperties.Number(bound.Seconds)
-                    : DynamicStorageProperties.Unbounded,
+                [FindingPropertyKeys.Node] = node.Net.Name,
+                [FindingPropertyKeys.GatedClock] = gate.Name,
+                [FindingPropertyKeys.RootClock] = gate.Root.Name,
+                [FindingPropertyKeys.RetentionSeconds] = FindingPropertyValues.Number(retention.Time.Seconds),
+                [FindingPropertyKeys.IdleSeconds] = stopped.IdleBound is { } bound
+                    ? FindingPropertyValues.Number(bound.Seconds)
+                    : FindingPropertyValues.Unbounded,
             };
             if (UngatedSource(gate) is { } ungated)
-                properties[DynamicStorageProperties.UngatedClock] = ungated.Name;
+                properties[FindingPropertyKeys.UngatedClock] = ungated.Name;
             CellProperties.Add(properties, node);
 
             yield return new Finding(
@@ -78,8 +78,8 @@ internal static class CellProperties
     public static void Add(Dictionary<string, string> properties, StorageNode node)
     {
         if (node.Cell is not { } cell) return;
-        properties[DynamicStorageProperties.Cell] = cell.Kind.ToString();
-        properties[DynamicStorageProperties.CellName] = cell.Name;
+        properties[FindingPropertyKeys.Cell] = cell.Kind.ToString();
+        properties[FindingPropertyKeys.CellName] = cell.Name;
         var replacement = cell.Kind switch
         {
             MacroKind.DynamicLatch => nameof(MacroKind.StaticLatch),
@@ -87,6 +87,6 @@ internal static class CellProperties
             _ => null,
         };
         if (replacement is not null)
-            properties[DynamicStorageProperties.StaticReplacement] = replacement;
+            properties[FindingPropertyKeys.StaticReplacement] = replacement;
     }
 }

@@ -81,16 +81,16 @@ public sealed class FightingDriversRule : Rule
 
             var properties = new Dictionary<string, string>
             {
-                [FightProperties.Node] = net.Name,
-                [FightProperties.Driver] = first.Name,
-                [FightProperties.OtherDriver] = second.Name,
-                [FightProperties.DriverOhms] = DynamicStorageProperties.Number(r1.Ohms),
-                [FightProperties.OtherDriverOhms] = DynamicStorageProperties.Number(r2.Ohms),
-                [FightProperties.LevelVolts] = DynamicStorageProperties.Number(level.Volts),
-                [FightProperties.CurrentAmperes] = DynamicStorageProperties.Number(current.Amperes),
+                [FindingPropertyKeys.Node] = net.Name,
+                [FindingPropertyKeys.Driver] = first.Name,
+                [FindingPropertyKeys.OtherDriver] = second.Name,
+                [FindingPropertyKeys.DriverOhms] = FindingPropertyValues.Number(r1.Ohms),
+                [FindingPropertyKeys.OtherDriverOhms] = FindingPropertyValues.Number(r2.Ohms),
+                [FindingPropertyKeys.LevelVolts] = FindingPropertyValues.Number(level.Volts),
+                [FindingPropertyKeys.CurrentAmperes] = FindingPropertyValues.Number(current.Amperes),
             };
             if (overlap is { } o)
-                properties[FightProperties.OverlapSeconds] = DynamicStorageProperties.Number(o.Seconds);
+                properties[FindingPropertyKeys.OverlapSeconds] = FindingPropertyValues.Number(o.Seconds);
 
             yield return new Finding(RuleCatalog.FightingDrivers, second.Span,
                 new object[] { first.Name, r1, second.Name, r2, net.Name, when, level, current },
@@ -151,23 +151,4 @@ public sealed class FightingDriversRule : Rule
     }
 
     private static string Format(string format, params object[] arguments) => string.Format(CultureInfo.InvariantCulture, format, arguments);
-}
-
-/// <summary>Keys of the machine-readable properties PW3004 findings carry (figures in SI units, round-trip format).</summary>
-public static class FightProperties
-{
-    public const string Node = "Node";
-    public const string Driver = "Driver";
-    public const string OtherDriver = "OtherDriver";
-    public const string DriverOhms = "DriverOhms";
-    public const string OtherDriverOhms = "OtherDriverOhms";
-
-    /// <summary>The node's level with <see cref="Driver"/> pulling up and <see cref="OtherDriver"/> pulling down.</summary>
-    public const string LevelVolts = "LevelVolts";
-
-    /// <summary>The rail-to-rail current while they disagree.</summary>
-    public const string CurrentAmperes = "CurrentAmperes";
-
-    /// <summary>How long per period two clocked gates (or a stage and a clocked gate) conduct together (absent otherwise).</summary>
-    public const string OverlapSeconds = "OverlapSeconds";
 }

@@ -64,14 +64,14 @@ public sealed class KeeperTooStrongRule : Rule
 
             var properties = new Dictionary<string, string>
             {
-                [KeeperProperties.Node] = net.Name,
-                [KeeperProperties.Keeper] = keeper.Macro?.Name ?? keeper.Name,
-                [KeeperProperties.Writer] = writer.Name,
-                [KeeperProperties.KeeperOhms] = DynamicStorageProperties.Number(check.Keeper.Ohms),
-                [KeeperProperties.WriteOhms] = DynamicStorageProperties.Number(check.Write.Ohms),
-                [KeeperProperties.LevelVolts] = DynamicStorageProperties.Number(check.Level.Volts),
-                [KeeperProperties.RequiredVolts] = DynamicStorageProperties.Number(check.Required.Volts),
-                [KeeperProperties.SupplyVolts] = DynamicStorageProperties.Number(check.Supply.Volts),
+                [FindingPropertyKeys.Node] = net.Name,
+                [FindingPropertyKeys.Keeper] = keeper.Macro?.Name ?? keeper.Name,
+                [FindingPropertyKeys.Writer] = writer.Name,
+                [FindingPropertyKeys.KeeperOhms] = FindingPropertyValues.Number(check.Keeper.Ohms),
+                [FindingPropertyKeys.WriteOhms] = FindingPropertyValues.Number(check.Write.Ohms),
+                [FindingPropertyKeys.LevelVolts] = FindingPropertyValues.Number(check.Level.Volts),
+                [FindingPropertyKeys.RequiredVolts] = FindingPropertyValues.Number(check.Required.Volts),
+                [FindingPropertyKeys.SupplyVolts] = FindingPropertyValues.Number(check.Supply.Volts),
             };
 
             yield return new Finding(
@@ -127,17 +127,4 @@ public readonly struct KeeperWrite
             throw new System.ArgumentException($"'{nameof(margin)}' must be at least 0 and below 0.5 of the supply (was {margin.ToString("R", System.Globalization.CultureInfo.InvariantCulture)}).", nameof(margin));
         return new KeeperWrite(keeper, write, supply, margin);
     }
-}
-
-/// <summary>Keys of the machine-readable properties PW3005 findings carry (figures in SI units, round-trip format).</summary>
-public static class KeeperProperties
-{
-    public const string Node = "Node";
-    public const string Keeper = "Keeper";
-    public const string Writer = "Writer";
-    public const string KeeperOhms = "KeeperOhms";
-    public const string WriteOhms = "WriteOhms";
-    public const string LevelVolts = "LevelVolts";
-    public const string RequiredVolts = "RequiredVolts";
-    public const string SupplyVolts = "SupplyVolts";
 }

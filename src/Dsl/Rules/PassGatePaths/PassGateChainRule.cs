@@ -33,33 +33,6 @@ public sealed class PassGateChainRule : Rule
     /// <summary>At most this many split points are listed in a finding's properties.</summary>
     public const int MaxListedSplitPoints = 32;
 
-    public const string ChainLengthProperty = "chainLength";
-    public const string LimitProperty = "limit";
-    public const string OptimalSpacingProperty = "optimalSpacing";
-    public const string SplitSpacingProperty = "splitSpacing";
-    public const string FirstGateIdProperty = "firstGateId";
-    public const string FirstGateProperty = "firstGate";
-    public const string ReportedGateIdProperty = "reportedGateId";
-    public const string ElmoreDelayProperty = "elmoreDelaySeconds";
-    public const string FiftyPercentDelayProperty = "fiftyPercentDelaySeconds";
-    public const string RestoredDelayProperty = "restoredDelaySeconds";
-    public const string AssumesUnknownBranchesConductProperty = "assumesUnknownBranchesConduct";
-    public const string SplitAfterDeviceIdsProperty = "splitAfterDeviceIds";
-    public const string SplitAfterDevicesProperty = "splitAfterDevices";
-    public const string SplitPointCountProperty = "splitPointCount";
-    public const string SplitPointsTruncatedProperty = "splitPointsTruncated";
-
-    /// <summary>
-    /// Where each listed split point can be fixed in the source, one line per split point (same order as
-    /// <see cref="SplitAfterDeviceIdsProperty"/>): <c>position|runFirst|runCount|siteGates|siteHasCallers|start|length|path</c>.
-    /// <c>position</c> is the chain position (1-based) of the gate right after the split, the one whose input a
-    /// restoring stage would drive; <c>start</c>/<c>length</c>/<c>path</c> are that gate's call (its innermost source
-    /// span; start is -1 when unknown, as at run time); <c>siteGates</c> is how many pass devices the whole netlist makes
-    /// at that call; <c>runFirst</c>/<c>runCount</c> the consecutive run of this chain's gates made at that call in creation
-    /// order (a loop's iterations), and <c>siteHasCallers</c> whether any of them was made through a helper method.
-    /// </summary>
-    public const string SplitSitesProperty = "splitSites";
-
     private static readonly IReadOnlyList<RuleDescriptor> Supported = new[] { RuleCatalog.SeriesPassGates };
 
     public override IReadOnlyList<RuleDescriptor> Descriptors => Supported;
@@ -127,35 +100,35 @@ public sealed class PassGateChainRule : Rule
         var listed = Math.Min(splitCount, MaxListedSplitPoints);
         var ids = new StringBuilder();
         var names = new StringBuilder();
-        var sites = new StringBuilder();
+        var sites = new List<SplitSite>();
         for (var k = 1; k <= listed; k++)
         {
             // Split after position k·spacing (window index k·spacing - 1); the next gate is at index k·spacing.
             var split = window[k * spacing - 1];
-            if (ids.Length > 0) { ids.Append(','); names.Append('\n'); sites.Append('\n'); }
+            if (ids.Length > 0) { ids.Append(','); names.Append('\n'); }
             ids.Append(split.Id.ToString(CultureInfo.InvariantCulture));
             names.Append(split.Name);
-            AppendSite(sites, window, k * spacing, siteGates ??= CountPassGatesBySite(netlist));
+            sites.Add(SiteOf(window, k * spacing, siteGates ??= CountPassGatesBySite(netlist)));
         }
 
         var properties = new Dictionary<string, string>
         {
-            [ChainLengthProperty] = Invariant(chain.Length),
-            [LimitProperty] = Invariant(limit),
-            [OptimalSpacingProperty] = optimum is { } m ? Invariant(m) : "none",
-            [SplitSpacingProperty] = Invariant(spacing),
-            [FirstGateIdProperty] = Invariant(chain.First.Id),
-            [FirstGateProperty] = chain.First.Name,
-            [ReportedGateIdProperty] = Invariant(gate.Id),
-            [ElmoreDelayProperty] = chain.Elmore.Seconds.ToString("R", CultureInfo.InvariantCulture),
-            [FiftyPercentDelayProperty] = fifty.Seconds.ToString("R", CultureInfo.InvariantCulture),
-            [RestoredDelayProperty] = restored.Seconds.ToString("R", CultureInfo.InvariantCulture),
-            [SplitAfterDeviceIdsProperty] = ids.ToString(),
-            [SplitAfterDevicesProperty] = names.ToString(),
-            [SplitPointCountProperty] = Invariant(splitCount),
-            [SplitPointsTruncatedProperty] = splitCount > listed ? "true" : "false",
-            [SplitSitesProperty] = sites.ToString(),
-            [AssumesUnknownBranchesConductProperty] = chain.AssumesUnknownBranchesConduct ? "true" : "false",
+            [FindingPropertyKeys.ChainLength] = Invariant(chain.Length),
+            [FindingPropertyKeys.Limit] = Invariant(limit),
+            [FindingPropertyKeys.OptimalSpacing] = optimum is { } m ? Invariant(m) : "none",
+            [FindingPropertyKeys.SplitSpacing] = Invariant(spacing),
+            [FindingPropertyKeys.FirstGateId] = Invariant(chain.First.Id),
+            [FindingPropertyKeys.FirstGate] = chain.First.Name,
+            [FindingPropertyKeys.ReportedGateId] = Invariant(gate.Id),
+            [FindingPropertyKeys.ElmoreDelaySeconds] = chain.Elmore.Seconds.ToString("R", CultureInfo.InvariantCulture),
+            [FindingPropertyKeys.FiftyPercentDelaySeconds] = fifty.Seconds.ToString("R", CultureInfo.InvariantCulture),
+            [FindingPropertyKeys.RestoredDelaySeconds] = restored.Seconds.ToString("R", CultureInfo.InvariantCulture),
+            [FindingPropertyKeys.SplitAfterDeviceIds] = ids.ToString(),
+            [FindingPropertyKeys.SplitAfterDevices] = names.ToString(),
+            [FindingPropertyKeys.SplitPointCount] = Invariant(splitCount),
+            [FindingPropertyKeys.SplitPointsTruncated] = splitCount > listed ? "true" : "false",
+            [FindingPropertyKeys.SplitSites] = SplitSite.FormatAll(sites),
+            [FindingPropertyKeys.AssumesUnknownBranchesConduct] = chain.AssumesUnknownBranchesConduct ? "true" : "false",
         };
 
         return new Finding(
@@ -186,8 +159,8 @@ public sealed class PassGateChainRule : Rule
         return window;
     }
 
-    // One line of SplitSitesProperty for the gate at window[index] (chain position index + 1).
-    private static void AppendSite(StringBuilder sites, List<Device> window, int index, Dictionary<SiteKey, (int Gates, bool HasCallers)> siteGates)
+    // The split site of the gate at window[index] (chain position index + 1).
+    private static SplitSite SiteOf(List<Device> window, int index, Dictionary<SiteKey, (int Gates, bool HasCallers)> siteGates)
     {
         var next = window[index];
         var span = next.Span;
@@ -205,14 +178,7 @@ public sealed class PassGateChainRule : Rule
 
         var gates = siteGates.TryGetValue(key, out var site) ? site.Gates : 1;
         hasCallers |= site.HasCallers;
-        sites.Append(Invariant(index + 1)).Append('|')
-            .Append(Invariant(first + 1)).Append('|')
-            .Append(Invariant(last - first + 1)).Append('|')
-            .Append(Invariant(gates)).Append('|')
-            .Append(hasCallers ? "true" : "false").Append('|')
-            .Append(Invariant(span.Start)).Append('|')
-            .Append(Invariant(span.Length)).Append('|')
-            .Append(span.Path);
+        return new SplitSite(index + 1, first + 1, last - first + 1, gates, hasCallers, span.Start, span.Length, span.Path);
     }
 
     // How many pass devices the netlist makes at each call (innermost source span), and whether any came through a helper.

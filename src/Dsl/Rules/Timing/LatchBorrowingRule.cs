@@ -48,9 +48,9 @@ public sealed class LatchBorrowingRule : Rule
                 related,
                 new Dictionary<string, string>
                 {
-                    [FindingProperties.TargetLatch] = first.To.Name,
-                    [FindingProperties.SourceLatch] = first.From.Name,
-                    [FindingProperties.MarginSeconds] = (-loop.Growth).Seconds.ToString("R", CultureInfo.InvariantCulture),
+                    [FindingPropertyKeys.TargetLatch] = first.To.Name,
+                    [FindingPropertyKeys.SourceLatch] = first.From.Name,
+                    [FindingPropertyKeys.MarginSeconds] = (-loop.Growth).Seconds.ToString("R", CultureInfo.InvariantCulture),
                 });
         }
 
@@ -72,10 +72,10 @@ public sealed class LatchBorrowingRule : Rule
                 new[] { a.Span },
                 new Dictionary<string, string>
                 {
-                    [FindingProperties.TargetLatch] = b.Name,
-                    [FindingProperties.SourceLatch] = a.Name,
-                    [FindingProperties.Phase] = b.Phase.Name,
-                    [FindingProperties.MarginSeconds] = arrival.Slack.Seconds.ToString("R", CultureInfo.InvariantCulture),
+                    [FindingPropertyKeys.TargetLatch] = b.Name,
+                    [FindingPropertyKeys.SourceLatch] = a.Name,
+                    [FindingPropertyKeys.Phase] = b.Phase.Name,
+                    [FindingPropertyKeys.MarginSeconds] = arrival.Slack.Seconds.ToString("R", CultureInfo.InvariantCulture),
                 });
         }
     }

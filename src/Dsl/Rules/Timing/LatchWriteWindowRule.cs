@@ -51,9 +51,9 @@ public sealed class LatchWriteWindowRule : Rule
                 new[] { latch.Phase.Clock.Span },
                 new Dictionary<string, string>
                 {
-                    [FindingProperties.TargetLatch] = latch.Name,
-                    [FindingProperties.Phase] = latch.Phase.Name,
-                    [FindingProperties.MarginSeconds] = write.Margin.Seconds.ToString("R", CultureInfo.InvariantCulture),
+                    [FindingPropertyKeys.TargetLatch] = latch.Name,
+                    [FindingPropertyKeys.Phase] = latch.Phase.Name,
+                    [FindingPropertyKeys.MarginSeconds] = write.Margin.Seconds.ToString("R", CultureInfo.InvariantCulture),
                 });
         }
     }

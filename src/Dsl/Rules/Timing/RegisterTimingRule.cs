@@ -62,11 +62,11 @@ public sealed class RegisterTimingRule : Rule
 
     private static Dictionary<string, string> Properties(Register launch, Register capture, Time slack) => new()
     {
-        [FindingProperties.TargetLatch] = capture.Name,
-        [FindingProperties.SourceLatch] = launch.Name,
-        [FindingProperties.Register] = capture.Name,
-        [FindingProperties.IsRegisterStage] = "true",
-        [FindingProperties.MarginSeconds] = slack.Seconds.ToString("R", CultureInfo.InvariantCulture),
+        [FindingPropertyKeys.TargetLatch] = capture.Name,
+        [FindingPropertyKeys.SourceLatch] = launch.Name,
+        [FindingPropertyKeys.Register] = capture.Name,
+        [FindingPropertyKeys.IsRegisterStage] = "true",
+        [FindingPropertyKeys.MarginSeconds] = slack.Seconds.ToString("R", CultureInfo.InvariantCulture),
     };
 }
 

@@ -41,9 +41,9 @@ public class ClockGateEnableRuleTests
             + "[0 s, 62.1 ps) (from latch 'en_reg.slave', transparent in clk.High, through a 27.6 ps path; slow corner, delays ×1): the gated clock can be clipped or get an extra pulse",
             finding.Message);
         Assert.Equal(netlist.Clock("gclk").Span, finding.Location);
-        Assert.Equal("clk.Low", finding.Properties[ClockGateProperties.BlockingPhase]);
-        Assert.Equal("en_reg.slave", finding.Properties[ClockGateProperties.Storage]);
-        Assert.Equal("true", finding.Properties[ClockGateProperties.OpensWhilePassing]);
+        Assert.Equal("clk.Low", finding.Properties[FindingPropertyKeys.BlockingPhase]);
+        Assert.Equal("en_reg.slave", finding.Properties[FindingPropertyKeys.Storage]);
+        Assert.Equal("true", finding.Properties[FindingPropertyKeys.OpensWhilePassing]);
     }
 
     [Fact]
@@ -87,7 +87,7 @@ public class ClockGateEnableRuleTests
             c.ClockGate(clk, en, name: "gclk");
         }));
         Assert.Contains("can change during [500 ps, 1.09 ns) (from latch 'en_latch', transparent in clk.Low, through a 552 ps path; slow corner, delays ×1)", finding.Message);
-        Assert.Equal("false", finding.Properties[ClockGateProperties.OpensWhilePassing]); // the right latch: only the path is slow
+        Assert.Equal("false", finding.Properties[FindingPropertyKeys.OpensWhilePassing]); // the right latch: only the path is slow
     }
 
     [Fact]
@@ -109,7 +109,7 @@ public class ClockGateEnableRuleTests
             c.ClockGate(c.Clock("clk", 10.Nanoseconds()), en, name: "gclk");
         }));
         Assert.Contains("at any time (from latch 'en_latch', transparent in other.Low, whose clock has no fixed time relation to 'clk')", finding.Message);
-        Assert.Equal(ClockGateProperties.FromUnrelatedClock, finding.Properties[ClockGateProperties.Origin]);
+        Assert.Equal(FindingPropertyValues.EnableFromUnrelatedClock, finding.Properties[FindingPropertyKeys.Origin]);
     }
 
     [Theory]
@@ -187,9 +187,9 @@ public class ClockGateEnableRuleTests
             return;
         }
 
-        Assert.Equal(new[] { "lane0.gclk", "lane1.gclk", "lane2.gclk" }, findings.Select(f => f.Properties[ClockGateProperties.GatedClock]).ToArray());
+        Assert.Equal(new[] { "lane0.gclk", "lane1.gclk", "lane2.gclk" }, findings.Select(f => f.Properties[FindingPropertyKeys.GatedClock]).ToArray());
         Assert.Equal(new[] { "lane0.en_reg.slave", "lane1.en_reg.slave", "lane2.en_reg.slave" },
-            findings.Select(f => f.Properties[ClockGateProperties.Storage]).ToArray());
+            findings.Select(f => f.Properties[FindingPropertyKeys.Storage]).ToArray());
     }
 
     [Fact]
@@ -203,8 +203,8 @@ public class ClockGateEnableRuleTests
             for (var i = 0; i < 3; i++)
                 Lane(c, clk, i);
         });
-        Assert.Equal(new[] { "lane0", "lane1", "lane2" }, findings.Select(f => f.Properties[ClockGateProperties.GatedClock]).ToArray());
-        Assert.All(findings, f => Assert.Equal(ClockGateProperties.FromLatch, f.Properties[ClockGateProperties.Origin]));
+        Assert.Equal(new[] { "lane0", "lane1", "lane2" }, findings.Select(f => f.Properties[FindingPropertyKeys.GatedClock]).ToArray());
+        Assert.All(findings, f => Assert.Equal(FindingPropertyValues.EnableFromLatch, f.Properties[FindingPropertyKeys.Origin]));
     }
 
     [Fact]

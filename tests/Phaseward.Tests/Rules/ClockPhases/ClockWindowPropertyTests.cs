@@ -67,7 +67,7 @@ public class ClockWindowPropertyTests
             foreach (var rule in new Rule[] { new SameWindowLatchesRule(), new OverlapRaceRule(), new ClockCrossingRule() })
             {
                 foreach (var f in rule.Check(new RuleContext(netlist, policy)))
-                    Assert.True(actual.Add((f.RuleId, f.Properties[FindingProperties.SourceLatch], f.Properties[FindingProperties.TargetLatch])),
+                    Assert.True(actual.Add((f.RuleId, f.Properties[FindingPropertyKeys.SourceLatch], f.Properties[FindingPropertyKeys.TargetLatch])),
                         $"seed {seed}: {f.RuleId} reported a pair twice");
             }
 

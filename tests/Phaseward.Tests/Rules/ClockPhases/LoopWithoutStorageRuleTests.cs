@@ -44,9 +44,9 @@ public class LoopWithoutStorageRuleTests
         Assert.Equal("A feedback loop of 3 devices has no latch on it ('n', 'i1', 'fb.inv1'): 3 inversions (odd): enabled, "
             + "it oscillates with a period of about 166 ps (twice the loop's delay 82.8 ps)", finding.Message);
         Assert.Equal(netlist.Device("n").Span, finding.Location);
-        Assert.Equal("3", finding.Properties[LoopProperties.Devices]);
-        Assert.Equal("3", finding.Properties[LoopProperties.Inversions]);
-        Assert.Equal(165.6e-12, double.Parse(finding.Properties[LoopProperties.OscillationPeriodSeconds], CultureInfo.InvariantCulture), 1e-18);
+        Assert.Equal("3", finding.Properties[FindingPropertyKeys.LoopDevices]);
+        Assert.Equal("3", finding.Properties[FindingPropertyKeys.Inversions]);
+        Assert.Equal(165.6e-12, double.Parse(finding.Properties[FindingPropertyKeys.OscillationPeriodSeconds], CultureInfo.InvariantCulture), 1e-18);
     }
 
     [Fact]
@@ -73,7 +73,7 @@ public class LoopWithoutStorageRuleTests
         }));
         Assert.Equal("A feedback loop of 3 devices has no latch on it ('a', 'b', 'fb.buf1'): 2 inversions (even): it settles at a level nothing writes",
             finding.Message);
-        Assert.False(finding.Properties.ContainsKey(LoopProperties.OscillationPeriodSeconds));
+        Assert.False(finding.Properties.ContainsKey(FindingPropertyKeys.OscillationPeriodSeconds));
     }
 
     [Fact]
@@ -85,8 +85,8 @@ public class LoopWithoutStorageRuleTests
             var y = c.TransmissionGate(c.Input("d"), ctl, "y");
             c.Inverter(y, ctl);
         }));
-        Assert.Equal("2", finding.Properties[LoopProperties.Devices]);
-        Assert.Equal("1", finding.Properties[LoopProperties.Inversions]);
+        Assert.Equal("2", finding.Properties[FindingPropertyKeys.LoopDevices]);
+        Assert.Equal("1", finding.Properties[FindingPropertyKeys.Inversions]);
     }
 
     [Fact]
@@ -97,7 +97,7 @@ public class LoopWithoutStorageRuleTests
             var n = c.Node("n");
             c.Inverter(n, n);
         }));
-        Assert.Equal("1", finding.Properties[LoopProperties.Devices]);
+        Assert.Equal("1", finding.Properties[FindingPropertyKeys.LoopDevices]);
     }
 
     [Fact]
@@ -140,8 +140,8 @@ public class LoopWithoutStorageRuleTests
             var back = c.Inverter(c.Inverter(q, "qb"), "back");
             c.TransmissionGate(back, c.Input("hold"), q);
         }));
-        Assert.Equal("3", finding.Properties[LoopProperties.Devices]);
-        Assert.Equal("2", finding.Properties[LoopProperties.Inversions]);
+        Assert.Equal("3", finding.Properties[FindingPropertyKeys.LoopDevices]);
+        Assert.Equal("2", finding.Properties[FindingPropertyKeys.Inversions]);
     }
 
     [Fact]
@@ -182,7 +182,7 @@ public class LoopWithoutStorageRuleTests
             Ring(c, "left");
             Ring(c, "right");
         });
-        Assert.Equal(new[] { "left.a", "right.a" }, findings.Select(f => f.Properties[LoopProperties.FirstDevice]).ToArray());
+        Assert.Equal(new[] { "left.a", "right.a" }, findings.Select(f => f.Properties[FindingPropertyKeys.FirstDevice]).ToArray());
     }
 
     [Fact]
@@ -197,7 +197,7 @@ public class LoopWithoutStorageRuleTests
         }));
         Assert.Equal("A feedback loop of 3 devices has no latch on it ('a', 'b', 'hub.nand1'): loops that share nets, whose behaviour depends on their other inputs",
             finding.Message);
-        Assert.False(finding.Properties.ContainsKey(LoopProperties.Inversions));
+        Assert.False(finding.Properties.ContainsKey(FindingPropertyKeys.Inversions));
     }
 
     [Fact]
@@ -211,7 +211,7 @@ public class LoopWithoutStorageRuleTests
                 n = c.Inverter(n);
             c.Inverter(n, start);
         }));
-        Assert.Equal("200001", finding.Properties[LoopProperties.Devices]);
+        Assert.Equal("200001", finding.Properties[FindingPropertyKeys.LoopDevices]);
     }
 
     [Fact]

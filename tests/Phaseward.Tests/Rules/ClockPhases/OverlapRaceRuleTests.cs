@@ -31,8 +31,8 @@ public class OverlapRaceRuleTests
         Assert.Equal("PW1002", finding.RuleId);
         Assert.Equal("Latch 'R.slave' races latch 'R.master' through the 0-0 overlap of clock 'clk': " +
                      "the fastest path takes 96.6 ps while both pass gates conduct together for 120 ps, a margin of -23.4 ps, below the required 0 s (fast corner, delays ×1)", finding.Message);
-        Assert.Equal(-23.4e-12, double.Parse(finding.Properties[FindingProperties.MarginSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-18);
-        Assert.Equal("true", finding.Properties[FindingProperties.IsRegisterStage]);
+        Assert.Equal(-23.4e-12, double.Parse(finding.Properties[FindingPropertyKeys.MarginSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-18);
+        Assert.Equal("true", finding.Properties[FindingPropertyKeys.IsRegisterStage]);
         Assert.Equal(96.6, Figures.Ps(TimingFigures.For(c.ToNetlist(), Corner.Nominal).Registers.Single().MasterSlaveRace), 9);
     }
 
@@ -90,7 +90,7 @@ public class OverlapRaceRuleTests
         var r1 = c.DynamicRegister(c.Input("d"), clk, "R1");
         c.DynamicRegister(r1, clk, "R2");
 
-        var targets = Figures.Run(Rule, c).Select(f => f.Properties[FindingProperties.SourceLatch] + ">" + f.Properties[FindingProperties.TargetLatch]).ToArray();
+        var targets = Figures.Run(Rule, c).Select(f => f.Properties[FindingPropertyKeys.SourceLatch] + ">" + f.Properties[FindingPropertyKeys.TargetLatch]).ToArray();
 
         Assert.Equal(new[] { "R1.master>R1.slave", "R2.master>R2.slave" }, targets);
     }

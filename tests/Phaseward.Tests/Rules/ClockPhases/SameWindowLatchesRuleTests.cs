@@ -31,11 +31,11 @@ public class SameWindowLatchesRuleTests
         Assert.Equal(bSpan, finding.Location);
         Assert.Equal(new[] { aSpan }, finding.RelatedLocations);
         Assert.Equal("Latch 'B' takes its data from latch 'A' and both are transparent in clk.High: data can run through both in one phase", finding.Message);
-        Assert.Equal("clk.High", finding.Properties[FindingProperties.Phase]);
-        Assert.Equal("clk.Low", finding.Properties[FindingProperties.ComplementPhase]);
-        Assert.Equal("Low", finding.Properties[FindingProperties.ComplementPolarity]);
-        Assert.Equal("false", finding.Properties[FindingProperties.IsRegisterStage]);
-        Assert.Equal("true", finding.Properties[FindingProperties.PhaseSetByOneCall]);
+        Assert.Equal("clk.High", finding.Properties[FindingPropertyKeys.Phase]);
+        Assert.Equal("clk.Low", finding.Properties[FindingPropertyKeys.ComplementPhase]);
+        Assert.Equal("Low", finding.Properties[FindingPropertyKeys.ComplementPolarity]);
+        Assert.Equal("false", finding.Properties[FindingPropertyKeys.IsRegisterStage]);
+        Assert.Equal("true", finding.Properties[FindingPropertyKeys.PhaseSetByOneCall]);
     }
 
     [Fact]
@@ -52,10 +52,10 @@ public class SameWindowLatchesRuleTests
         var q = c.Inverter(store, "q");
         c.TransmissionGate(c.Inverter(q), clk.Low, store);
 
-        var findings = Figures.Run(Rule, c).ToDictionary(f => f.Properties[FindingProperties.TargetLatch]);
+        var findings = Figures.Run(Rule, c).ToDictionary(f => f.Properties[FindingPropertyKeys.TargetLatch]);
 
-        Assert.Equal("true", findings["plain"].Properties[FindingProperties.PhaseSetByOneCall]);
-        Assert.Equal("false", findings["store"].Properties[FindingProperties.PhaseSetByOneCall]);
+        Assert.Equal("true", findings["plain"].Properties[FindingPropertyKeys.PhaseSetByOneCall]);
+        Assert.Equal("false", findings["store"].Properties[FindingPropertyKeys.PhaseSetByOneCall]);
     }
 
     [Fact]
@@ -91,8 +91,8 @@ public class SameWindowLatchesRuleTests
         var finding = Assert.Single(Figures.Run(Rule, c));
         // Low windows [500, 1030) ps and, 40 ps later, [540, 1070) ps: together for 490 ps (530 ps for the gated copy).
         Assert.Contains($"clk.Low and copy.Low (together for {together} of every 1 ns)", finding.Message);
-        Assert.Equal("copy.Low", finding.Properties[FindingProperties.Phase]);
-        Assert.Equal("copy", finding.Properties[FindingProperties.Clock]);
+        Assert.Equal("copy.Low", finding.Properties[FindingPropertyKeys.Phase]);
+        Assert.Equal("copy", finding.Properties[FindingPropertyKeys.Clock]);
     }
 
     [Fact]
@@ -107,7 +107,7 @@ public class SameWindowLatchesRuleTests
         var bb = c.DynamicLatch(c.Input("e"), clk.High, "D");
         c.DynamicLatch(c.DynamicLatch(bb, clk.High, "E"), clk.High, "F");
 
-        var pairs = Figures.Run(Rule, c).Select(f => f.Properties[FindingProperties.SourceLatch] + ">" + f.Properties[FindingProperties.TargetLatch]).ToArray();
+        var pairs = Figures.Run(Rule, c).Select(f => f.Properties[FindingPropertyKeys.SourceLatch] + ">" + f.Properties[FindingPropertyKeys.TargetLatch]).ToArray();
 
         Assert.Equal(new[] { "A>B", "D>E", "E>F" }, pairs);
     }
@@ -126,7 +126,7 @@ public class SameWindowLatchesRuleTests
         var arm = c.TransmissionGate(c.Input("x"), steer, "arm");
         c.DynamicLatch(c.Buffer(arm), clk.Low, "T");
 
-        var pairs = Figures.Run(Rule, c).Select(f => f.Properties[FindingProperties.SourceLatch] + ">" + f.Properties[FindingProperties.TargetLatch]).ToArray();
+        var pairs = Figures.Run(Rule, c).Select(f => f.Properties[FindingPropertyKeys.SourceLatch] + ">" + f.Properties[FindingPropertyKeys.TargetLatch]).ToArray();
 
         Assert.Equal(new[] { "A>B", "S>T" }, pairs);
     }
@@ -147,8 +147,8 @@ public class SameWindowLatchesRuleTests
         c.Inverter(r2, r0);
 
         var finding = Assert.Single(Figures.Run(Rule, c));
-        Assert.Equal("L", finding.Properties[FindingProperties.SourceLatch]);
-        Assert.Equal("L", finding.Properties[FindingProperties.TargetLatch]);
+        Assert.Equal("L", finding.Properties[FindingPropertyKeys.SourceLatch]);
+        Assert.Equal("L", finding.Properties[FindingPropertyKeys.TargetLatch]);
     }
 
     [Fact]
@@ -160,10 +160,10 @@ public class SameWindowLatchesRuleTests
         c.DynamicRegister(a, clk, "R");
 
         var finding = Assert.Single(Figures.Run(Rule, c));
-        Assert.Equal("R.master", finding.Properties[FindingProperties.TargetLatch]);
-        Assert.Equal("true", finding.Properties[FindingProperties.IsRegisterStage]);
-        Assert.Equal("R", finding.Properties[FindingProperties.Register]);
-        Assert.Equal("clk.Low", finding.Properties[FindingProperties.Phase]);
+        Assert.Equal("R.master", finding.Properties[FindingPropertyKeys.TargetLatch]);
+        Assert.Equal("true", finding.Properties[FindingPropertyKeys.IsRegisterStage]);
+        Assert.Equal("R", finding.Properties[FindingPropertyKeys.Register]);
+        Assert.Equal("clk.Low", finding.Properties[FindingPropertyKeys.Phase]);
     }
 
     [Fact]
@@ -181,7 +181,7 @@ public class SameWindowLatchesRuleTests
         var y1 = c.TransmissionGate(c.Input("e"), clk.Low, "y1");
         c.Inverter(c.TransmissionGate(y1, clk.Low, "y2"));
 
-        var pairs = Figures.Run(Rule, c).Select(f => f.Properties[FindingProperties.SourceLatch] + ">" + f.Properties[FindingProperties.TargetLatch]).ToArray();
+        var pairs = Figures.Run(Rule, c).Select(f => f.Properties[FindingPropertyKeys.SourceLatch] + ">" + f.Properties[FindingPropertyKeys.TargetLatch]).ToArray();
 
         Assert.Equal(new[] { "x1>x2", "y1>y2" }, pairs);
     }

@@ -43,9 +43,9 @@ public class ChargeSharingRuleTests
             finding.Message);
         Assert.Equal(netlist.Devices.Single(d => d.Name == "b").Span, finding.Location);
         Assert.Equal(netlist.Devices.Single(d => d.Name == "a").Span, Assert.Single(finding.RelatedLocations));
-        Assert.Equal(1.2 * 4.5 / 8.5, double.Parse(finding.Properties[DynamicStorageProperties.DroopVolts], CultureInfo.InvariantCulture), 1e-12);
-        Assert.Equal("a", finding.Properties[DynamicStorageProperties.Node]);
-        Assert.Equal("b", finding.Properties[DynamicStorageProperties.OtherNode]);
+        Assert.Equal(1.2 * 4.5 / 8.5, double.Parse(finding.Properties[FindingPropertyKeys.DroopVolts], CultureInfo.InvariantCulture), 1e-12);
+        Assert.Equal("a", finding.Properties[FindingPropertyKeys.Node]);
+        Assert.Equal("b", finding.Properties[FindingPropertyKeys.OtherNode]);
     }
 
     [Theory]
@@ -74,7 +74,7 @@ public class ChargeSharingRuleTests
             var y = c.TransmissionGate(x, c.Input("sel"), "y");
             c.Inverter(y, "q");
         });
-        Assert.Equal("y", Assert.Single(findings).Properties[DynamicStorageProperties.OtherNode]);
+        Assert.Equal("y", Assert.Single(findings).Properties[FindingPropertyKeys.OtherNode]);
     }
 
     [Fact]
@@ -95,7 +95,7 @@ public class ChargeSharingRuleTests
             var middle = c.TransmissionGate(c.Input("d"), c.Input("first_enable"), "middle");
             c.Inverter(c.TransmissionGate(middle, c.Input("second_enable"), "end"), "q");
         });
-        Assert.Equal("middle", Assert.Single(independent).Properties[DynamicStorageProperties.Node]);
+        Assert.Equal("middle", Assert.Single(independent).Properties[FindingPropertyKeys.Node]);
     }
 
     [Fact]
@@ -204,7 +204,7 @@ public class ChargeSharingRuleTests
             + "'rbl.tg2', 'cell2' through 'rbl.tg3', 'cell3' through 'rbl.tg4'; state Circuit.Exclusive if their controls are "
             + "never high together): a 1.2 V level settles at 284 mV, a droop of 916 mV, more than the tolerated 300 mV",
             findings[0].Message);
-        Assert.Equal(1.2 * 129 / 169, double.Parse(findings[0].Properties[DynamicStorageProperties.DroopVolts], CultureInfo.InvariantCulture), 1e-12);
+        Assert.Equal(1.2 * 129 / 169, double.Parse(findings[0].Properties[FindingPropertyKeys.DroopVolts], CultureInfo.InvariantCulture), 1e-12);
     }
 
     [Fact]
@@ -214,7 +214,7 @@ public class ChargeSharingRuleTests
         // C2 = 9 + 2 × 40 = 89 fF for cell0.
         var (_, findings) = ReadPort((c, selects) => c.Exclusive(selects[0], selects[1]));
         Assert.Contains("(C2 = 89 fF, counting 2 more floating nodes joined through pass gates that may conduct at the same time: "
-            + "'cell2' through 'rbl.tg3', 'cell3' through 'rbl.tg4';", findings.Single(f => f.Properties[DynamicStorageProperties.Node] == "cell0").Message);
+            + "'cell2' through 'rbl.tg3', 'cell3' through 'rbl.tg4';", findings.Single(f => f.Properties[FindingPropertyKeys.Node] == "cell0").Message);
     }
 
     [Theory]
@@ -233,9 +233,9 @@ public class ChargeSharingRuleTests
             c.Inverter(z, "q");
         });
 
-        var atY = findings.Single(f => f.Properties[DynamicStorageProperties.Node] == "x");
+        var atY = findings.Single(f => f.Properties[FindingPropertyKeys.Node] == "x");
         var c2 = samePhase ? 4.0 + 4.5 : 4.0;
-        Assert.Equal(1.2 * c2 / (4.0 + c2), double.Parse(atY.Properties[DynamicStorageProperties.DroopVolts], CultureInfo.InvariantCulture), 1e-12);
+        Assert.Equal(1.2 * c2 / (4.0 + c2), double.Parse(atY.Properties[FindingPropertyKeys.DroopVolts], CultureInfo.InvariantCulture), 1e-12);
         Assert.Equal(samePhase, atY.Message.Contains("'z' through 'z'", StringComparison.Ordinal));
     }
 }

@@ -39,11 +39,11 @@ public class ClockTooSlowForDynamicStorageRuleTests
             + "(C·ΔV/I_leak with C = 4.5 fF, ΔV = 300 mV, I_leak = 1 nA at the hot corner); run the clock at 371 kHz or faster",
             finding.Message);
         Assert.Equal(clk!.Span, Assert.Single(finding.RelatedLocations));
-        var hertz = double.Parse(finding.Properties[DynamicStorageProperties.MinimumFrequencyHertz], CultureInfo.InvariantCulture);
+        var hertz = double.Parse(finding.Properties[FindingPropertyKeys.MinimumFrequencyHertz], CultureInfo.InvariantCulture);
         Assert.Equal(371_000, hertz, 1e-6);
-        Assert.Equal(500e-6 - 30e-12, double.Parse(finding.Properties[DynamicStorageProperties.IsolationSeconds], CultureInfo.InvariantCulture), 1e-15);
-        Assert.Equal("tick", finding.Properties[DynamicStorageProperties.RootClock]);
-        Assert.Equal("StaticLatch", finding.Properties[DynamicStorageProperties.StaticReplacement]);
+        Assert.Equal(500e-6 - 30e-12, double.Parse(finding.Properties[FindingPropertyKeys.IsolationSeconds], CultureInfo.InvariantCulture), 1e-15);
+        Assert.Equal("tick", finding.Properties[FindingPropertyKeys.RootClock]);
+        Assert.Equal("StaticLatch", finding.Properties[FindingPropertyKeys.StaticReplacement]);
     }
 
     [Theory]
@@ -70,7 +70,7 @@ public class ClockTooSlowForDynamicStorageRuleTests
             c.DynamicLatch(d, clk.Low, "lo");
         });
         var finding = Assert.Single(findings);
-        Assert.Equal("hi.x", finding.Properties[DynamicStorageProperties.Node]);
+        Assert.Equal("hi.x", finding.Properties[FindingPropertyKeys.Node]);
         Assert.Contains("floats for up to 1.5 µs", finding.Message);
         // f_min = 0.75 / (1.35 µs + 30 ps) = 555.543 kHz → 556 kHz.
         Assert.Contains("run the clock at 556 kHz or faster", finding.Message);
@@ -93,8 +93,8 @@ public class ClockTooSlowForDynamicStorageRuleTests
     public void BothLatchesOfASlowDynamicRegisterAreReported()
     {
         var findings = Check(c => c.DynamicRegister(c.Input("d"), c.Clock("tick", 2.Milliseconds()), "r"));
-        Assert.Equal(new[] { "r.master.x", "r.slave.x" }, findings.Select(f => f.Properties[DynamicStorageProperties.Node]).ToArray());
-        Assert.All(findings, f => Assert.Equal("StaticRegister", f.Properties[DynamicStorageProperties.StaticReplacement]));
+        Assert.Equal(new[] { "r.master.x", "r.slave.x" }, findings.Select(f => f.Properties[FindingPropertyKeys.Node]).ToArray());
+        Assert.All(findings, f => Assert.Equal("StaticRegister", f.Properties[FindingPropertyKeys.StaticReplacement]));
     }
 
     [Fact]
@@ -124,6 +124,6 @@ public class ClockTooSlowForDynamicStorageRuleTests
         var finding = Assert.Single(findings);
         Assert.Contains("retention time 675 ns", finding.Message);
         Assert.Contains("run the clock at 741 kHz or faster", finding.Message);
-        Assert.False(finding.Properties.ContainsKey(DynamicStorageProperties.Cell));
+        Assert.False(finding.Properties.ContainsKey(FindingPropertyKeys.Cell));
     }
 }

@@ -42,15 +42,15 @@ public class DynamicNodeOnGatedClockRuleTests
             finding.Message);
         Assert.Equal(netlist.Devices.Single(d => d.Name == "hold.pass").Span, finding.Location);
         Assert.Equal(gate!.Span, Assert.Single(finding.RelatedLocations));
-        Assert.Equal("hold.x", finding.Properties[DynamicStorageProperties.Node]);
-        Assert.Equal("DynamicLatch", finding.Properties[DynamicStorageProperties.Cell]);
-        Assert.Equal("hold", finding.Properties[DynamicStorageProperties.CellName]);
-        Assert.Equal("StaticLatch", finding.Properties[DynamicStorageProperties.StaticReplacement]);
-        Assert.Equal("burst_clk", finding.Properties[DynamicStorageProperties.GatedClock]);
-        Assert.Equal("clk", finding.Properties[DynamicStorageProperties.UngatedClock]);
-        Assert.Equal("clk", finding.Properties[DynamicStorageProperties.RootClock]);
-        Assert.Equal("unbounded", finding.Properties[DynamicStorageProperties.IdleSeconds]);
-        Assert.Equal(1.35e-6, double.Parse(finding.Properties[DynamicStorageProperties.RetentionSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-15);
+        Assert.Equal("hold.x", finding.Properties[FindingPropertyKeys.Node]);
+        Assert.Equal("DynamicLatch", finding.Properties[FindingPropertyKeys.Cell]);
+        Assert.Equal("hold", finding.Properties[FindingPropertyKeys.CellName]);
+        Assert.Equal("StaticLatch", finding.Properties[FindingPropertyKeys.StaticReplacement]);
+        Assert.Equal("burst_clk", finding.Properties[FindingPropertyKeys.GatedClock]);
+        Assert.Equal("clk", finding.Properties[FindingPropertyKeys.UngatedClock]);
+        Assert.Equal("clk", finding.Properties[FindingPropertyKeys.RootClock]);
+        Assert.Equal("unbounded", finding.Properties[FindingPropertyKeys.IdleSeconds]);
+        Assert.Equal(1.35e-6, double.Parse(finding.Properties[FindingPropertyKeys.RetentionSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-15);
     }
 
     [Fact]
@@ -102,7 +102,7 @@ public class DynamicNodeOnGatedClockRuleTests
         {
             Assert.Contains($"declared maximum idle time: {idleText}", findings[0].Message);
             Assert.Contains("keeps its level only 1.35 µs", findings[0].Message);
-            var idleSeconds = double.Parse(findings[0].Properties[DynamicStorageProperties.IdleSeconds], System.Globalization.CultureInfo.InvariantCulture);
+            var idleSeconds = double.Parse(findings[0].Properties[FindingPropertyKeys.IdleSeconds], System.Globalization.CultureInfo.InvariantCulture);
             Assert.Equal(idleUs * 1e-6, idleSeconds, 1e-15);
         }
     }
@@ -141,12 +141,12 @@ public class DynamicNodeOnGatedClockRuleTests
             c.DynamicRegister(c.Input("d"), gated, "r");
         });
         var finding = Assert.Single(findings);
-        Assert.Equal(node, finding.Properties[DynamicStorageProperties.Node]);
-        Assert.Equal("DynamicRegister", finding.Properties[DynamicStorageProperties.Cell]);
-        Assert.Equal("r", finding.Properties[DynamicStorageProperties.CellName]);
-        Assert.Equal("StaticRegister", finding.Properties[DynamicStorageProperties.StaticReplacement]);
-        Assert.Equal("clk_buf", finding.Properties[DynamicStorageProperties.UngatedClock]);
-        Assert.Equal("clk", finding.Properties[DynamicStorageProperties.RootClock]);
+        Assert.Equal(node, finding.Properties[FindingPropertyKeys.Node]);
+        Assert.Equal("DynamicRegister", finding.Properties[FindingPropertyKeys.Cell]);
+        Assert.Equal("r", finding.Properties[FindingPropertyKeys.CellName]);
+        Assert.Equal("StaticRegister", finding.Properties[FindingPropertyKeys.StaticReplacement]);
+        Assert.Equal("clk_buf", finding.Properties[FindingPropertyKeys.UngatedClock]);
+        Assert.Equal("clk", finding.Properties[FindingPropertyKeys.RootClock]);
         Assert.Equal(netlist.Macros.Single(m => m.Name == "r").Span, finding.Location);
     }
 
@@ -173,7 +173,7 @@ public class DynamicNodeOnGatedClockRuleTests
         var finding = Assert.Single(withLeak);
         Assert.Contains("keeps its level only 135 ns", finding.Message);
         Assert.Contains("I_leak = 10 nA", finding.Message);
-        Assert.False(finding.Properties.ContainsKey(DynamicStorageProperties.Cell));
+        Assert.False(finding.Properties.ContainsKey(FindingPropertyKeys.Cell));
 
         // A 100 fF storage capacitor: 100 fF × 0.3 V / 10 nA = 3 µs > 1 µs: clean again.
         var (_, withCap) = Check(c =>

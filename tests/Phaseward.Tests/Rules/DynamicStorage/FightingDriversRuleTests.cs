@@ -44,8 +44,8 @@ public class FightingDriversRuleTests
             + "when they disagree the node sits at 600 mV (divider, 'n.tg1' pulling up) and 66.7 µA flows from rail to rail", finding.Message);
         Assert.Equal(netlist.Device("n.tg2").Span, finding.Location);
         Assert.Equal(netlist.Device("n.tg1").Span, Assert.Single(finding.RelatedLocations));
-        Assert.Equal(5.03, Number(finding, FightProperties.OverlapSeconds) * 1e9, 12);
-        Assert.Equal(0.6, Number(finding, FightProperties.LevelVolts), 12);
+        Assert.Equal(5.03, Number(finding, FindingPropertyKeys.OverlapSeconds) * 1e9, 12);
+        Assert.Equal(0.6, Number(finding, FindingPropertyKeys.LevelVolts), 12);
     }
 
     [Fact]
@@ -59,7 +59,7 @@ public class FightingDriversRuleTests
             c.TransmissionGate(c.Input("b"), clk.Low, n);
         });
         // The 0-0 overlap after the falling edge and the 1-1 overlap after the rising edge: 30 ps each.
-        Assert.Equal(60, Number(Assert.Single(findings), FightProperties.OverlapSeconds) * 1e12, 9);
+        Assert.Equal(60, Number(Assert.Single(findings), FindingPropertyKeys.OverlapSeconds) * 1e12, 9);
     }
 
     [Fact]
@@ -89,7 +89,7 @@ public class FightingDriversRuleTests
         // 4 + 20 = 24 kΩ against 9 kΩ: 1.2 × 9 / 33 = 327 mV, 1.2 / 33 kΩ = 36.4 µA.
         Assert.Equal("'n.tg1' (24 kΩ) and 'n.tg2' (9 kΩ) drive node 'n' together whenever 'sel' and 'selb' are both high (not stated exclusive): "
             + "when they disagree the node sits at 327 mV (divider, 'n.tg1' pulling up) and 36.4 µA flows from rail to rail", finding.Message);
-        Assert.Equal(1.2 / 33e3, Number(finding, FightProperties.CurrentAmperes), 15);
+        Assert.Equal(1.2 / 33e3, Number(finding, FindingPropertyKeys.CurrentAmperes), 15);
         Assert.Empty(Check(c => Mux(c, stated: true)).Findings);
     }
 
@@ -116,7 +116,7 @@ public class FightingDriversRuleTests
             c.TransmissionGate(c.Input("b"), c.Clock("slow", 1.Microseconds()).Low, n);
         }).Findings);
         Assert.Contains("whenever fast.High and slow.Low conduct together (unrelated clocks)", finding.Message);
-        Assert.False(finding.Properties.ContainsKey(FightProperties.OverlapSeconds));
+        Assert.False(finding.Properties.ContainsKey(FindingPropertyKeys.OverlapSeconds));
     }
 
     [Fact]
@@ -149,7 +149,7 @@ public class FightingDriversRuleTests
                 Drive(c, bus, clk.Low, $"aux{bit}");
             }
         });
-        Assert.Equal(new[] { "bus0", "bus1", "bus2", "bus3" }, findings.Select(f => f.Properties[FightProperties.Node]).ToArray());
+        Assert.Equal(new[] { "bus0", "bus1", "bus2", "bus3" }, findings.Select(f => f.Properties[FindingPropertyKeys.Node]).ToArray());
     }
 
     [Fact]
@@ -198,7 +198,7 @@ public class FightingDriversRuleTests
         }
 
         // 4 kΩ input driver + 5 kΩ gate on each side: 600 mV, 1.2 V / 18 kΩ = 66.7 µA.
-        Assert.Equal(new[] { "bit0.bus", "bit1.bus", "bit2.bus" }, findings.Select(f => f.Properties[FightProperties.Node]).ToArray());
+        Assert.Equal(new[] { "bit0.bus", "bit1.bus", "bit2.bus" }, findings.Select(f => f.Properties[FindingPropertyKeys.Node]).ToArray());
         Assert.All(findings, f => Assert.Contains("sits at 600 mV", f.Message));
     }
 }

@@ -47,10 +47,10 @@ public class KeeperTooStrongRuleTests
             + "only down to 568 mV, above the 480 mV it must reach (switching point 600 mV less a 120 mV margin; a 1 mirrors this)", finding.Message);
         Assert.Equal(netlist.Device("x.keeper.feedback").Span, finding.Location);
         Assert.Equal(netlist.Device("x").Span, Assert.Single(finding.RelatedLocations));
-        Assert.Equal(1.2 * 9 / 19, Number(finding, KeeperProperties.LevelVolts), 12);
-        Assert.Equal(9000, Number(finding, KeeperProperties.WriteOhms), 9);
-        Assert.Equal(10000, Number(finding, KeeperProperties.KeeperOhms), 9);
-        Assert.Equal(0.48, Number(finding, KeeperProperties.RequiredVolts), 12);
+        Assert.Equal(1.2 * 9 / 19, Number(finding, FindingPropertyKeys.LevelVolts), 12);
+        Assert.Equal(9000, Number(finding, FindingPropertyKeys.WriteOhms), 9);
+        Assert.Equal(10000, Number(finding, FindingPropertyKeys.KeeperOhms), 9);
+        Assert.Equal(0.48, Number(finding, FindingPropertyKeys.RequiredVolts), 12);
     }
 
     [Theory]
@@ -90,7 +90,7 @@ public class KeeperTooStrongRuleTests
         });
         Assert.Equal(reported ? 1 : 0, findings.Length);
         if (reported)
-            Assert.Equal(29000, Number(findings[0], KeeperProperties.WriteOhms), 9);
+            Assert.Equal(29000, Number(findings[0], FindingPropertyKeys.WriteOhms), 9);
     }
 
     [Fact]
@@ -106,8 +106,8 @@ public class KeeperTooStrongRuleTests
         });
         // The slow arm: 4 + 60 = 64 kΩ against 40 kΩ: 1.2 × 64 / 104 = 738 mV.
         var finding = Assert.Single(findings);
-        Assert.Equal("n.tg2", finding.Properties[KeeperProperties.Writer]);
-        Assert.Equal(1.2 * 64 / 104, Number(finding, KeeperProperties.LevelVolts), 12);
+        Assert.Equal("n.tg2", finding.Properties[FindingPropertyKeys.Writer]);
+        Assert.Equal(1.2 * 64 / 104, Number(finding, FindingPropertyKeys.LevelVolts), 12);
     }
 
     [Fact]
@@ -128,7 +128,7 @@ public class KeeperTooStrongRuleTests
             c.Keeper(x, "k2");
             c.Keeper(x, "k3");
         });
-        Assert.Equal(40000.0 / 3, Number(Assert.Single(three), KeeperProperties.KeeperOhms), 6);
+        Assert.Equal(40000.0 / 3, Number(Assert.Single(three), FindingPropertyKeys.KeeperOhms), 6);
     }
 
     [Fact]
@@ -146,7 +146,7 @@ public class KeeperTooStrongRuleTests
             }
         });
         // Each written through its latch's pass gate from an input: 9 kΩ against 8 kΩ, 1.2 × 9 / 17 = 635 mV.
-        Assert.Equal(new[] { "bit1", "bit3" }, findings.Select(f => f.Properties[KeeperProperties.Node]).ToArray());
+        Assert.Equal(new[] { "bit1", "bit3" }, findings.Select(f => f.Properties[FindingPropertyKeys.Node]).ToArray());
     }
 
     [Fact]

@@ -45,7 +45,7 @@ public class CornerTests
         return c;
     }
 
-    private static double Slack(Finding finding) => double.Parse(finding.Properties[FindingProperties.MarginSeconds], CultureInfo.InvariantCulture);
+    private static double Slack(Finding finding) => double.Parse(finding.Properties[FindingPropertyKeys.MarginSeconds], CultureInfo.InvariantCulture);
 
     [Fact]
     public void TheDefaultsAreInventedButOfARecentProcesssOrder()

@@ -40,8 +40,8 @@ public class LatchWriteWindowRuleTests
         Assert.Equal("Latch 'pl' cannot be written in its window: it is open 30 ps, 30 ps of it with both halves of its entry gate on " +
                      "(complement skew 0 s), but the entry gate needs 269 ps to charge storage node 'pl.x' (0.69·R·C with R = 6.5 kΩ, " +
                      "C = 60 fF; margin -239 ps; slow corner, delays ×1.3)", finding.Message);
-        Assert.Equal(-239.1e-12, double.Parse(finding.Properties[FindingProperties.MarginSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-18);
-        Assert.Equal("pl", finding.Properties[FindingProperties.TargetLatch]);
+        Assert.Equal(-239.1e-12, double.Parse(finding.Properties[FindingPropertyKeys.MarginSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-18);
+        Assert.Equal("pl", finding.Properties[FindingPropertyKeys.TargetLatch]);
     }
 
     [Fact]

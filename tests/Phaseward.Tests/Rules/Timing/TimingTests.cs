@@ -118,7 +118,7 @@ public class RegisterTimingRuleTests
         Assert.Equal("PW4001", finding.RuleId);
         Assert.Equal("Register 'R2' misses its setup time on the path from register 'R1': clock-to-output 89.7 ps + path 166 ps + " +
                      "setup 34.5 ps = 290 ps exceeds the 280 ps available (slack -9.8 ps; slow corner, delays ×1)", finding.Message);
-        Assert.Equal(-9.8e-12, double.Parse(finding.Properties[FindingProperties.MarginSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-18);
+        Assert.Equal(-9.8e-12, double.Parse(finding.Properties[FindingPropertyKeys.MarginSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-18);
     }
 
     [Fact]
