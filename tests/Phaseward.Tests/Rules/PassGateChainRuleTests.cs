@@ -92,6 +92,33 @@ public class PassGateChainRuleTests
     }
 
     [Fact]
+    public void Gates_on_opposite_phases_are_two_runs_not_one_conducting_chain()
+    {
+        // hop1..3 on sample.High, then leg1..3 on sample.Low: never on together (beyond the skew-long overlap, which is
+        // PW1002's race), so data never runs through all six in one go: two runs of three, each within a limit of 3.
+        // Elmore's RC ladder (Elmore 1948) assumes every section conducts at once; a chain is the gates that do.
+        var c = new Circuit("Buoy");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        Chain(c, Chain(c, c.Input("sensor"), clock.High, 3, "hop")[^1], clock.Low, 3, "leg");
+        Assert.Empty(Check(c, 3));
+
+        // The same six gates on one phase are one run of six.
+        var d = new Circuit("Buoy");
+        var clk = d.Clock("sample", 10.Nanoseconds());
+        Chain(d, Chain(d, d.Input("sensor"), clk.High, 3, "hop")[^1], clk.High, 3, "leg");
+        Assert.Equal("6", Assert.Single(Check(d, 3)).Properties["chainLength"]);
+
+        // Data-controlled gates on provably exclusive controls (a select and its inverse) are two runs as well.
+        var e = new Circuit("Buoy");
+        var select = e.Input("select");
+        var first = e.Input("sensor");
+        for (var i = 1; i <= 3; i++) first = e.TransmissionGate(first, select, "on" + i);
+        var inverse = e.Inverter(select, "select_b");
+        for (var i = 1; i <= 3; i++) first = e.TransmissionGate(first, inverse, "off" + i);
+        Assert.Empty(Check(e, 3));
+    }
+
+    [Fact]
     public void A_larger_stage_delay_raises_the_computed_limit()
     {
         var c = new Circuit("Buoy");
@@ -213,8 +240,9 @@ public class PassGateChainRuleTests
     {
         var c = new Circuit("BuoyLatch");
         var clock = c.Clock("sample", 10.Nanoseconds());
+        // The latch on the same phase as the gates before it (on the opposite phase they would be two runs).
         var hops = Chain(c, c.Input("sensor"), clock.High, 2, "hop");
-        var held = c.DynamicLatch(hops[^1], clock.Low, "hold");
+        var held = c.DynamicLatch(hops[^1], clock.High, "hold");
         Chain(c, held, clock.High, 2, "after");
 
         var finding = Assert.Single(Check(c, 2));
@@ -238,7 +266,7 @@ public class PassGateChainRuleTests
         var d = new Circuit("BuoyStatic2");
         var clock2 = d.Clock("sample", 10.Nanoseconds());
         var hop = d.TransmissionGate(d.Input("sensor"), clock2.High, "hop");
-        d.StaticLatch(hop, clock2.Low, "keep");
+        d.StaticLatch(hop, clock2.High, "keep"); // the same phase as 'hop': one run through both
         var finding = Assert.Single(Check(d, 1));
         Assert.Equal("keep.pass", Name(d, finding.Properties["reportedGateId"]));
         Assert.Equal("2", finding.Properties["chainLength"]);
@@ -254,7 +282,7 @@ public class PassGateChainRuleTests
         var n1 = c.Node("n1");
         var n2 = c.Node("n2");
         c.TransmissionGate(c.Input("sensor"), clock.High, n1);
-        c.TransmissionGate(n1, clock.Low, n2);
+        c.TransmissionGate(n1, clock.High, n2); // one phase: gates on opposite phases would be separate runs
         c.TransmissionGate(n2, clock.High, n1);
         var finding = Assert.Single(Check(c, 2));
         Assert.Equal("3", finding.Properties["chainLength"]);
