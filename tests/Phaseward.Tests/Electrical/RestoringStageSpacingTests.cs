@@ -46,9 +46,10 @@ public class RestoringStageSpacingTests
     }
 
     [Fact]
-    public void Coefficient_is_sqrt_two_over_ln_two()
+    public void Coefficient_is_sqrt_two_over_the_single_pole_factor()
     {
-        Assert.Equal(Math.Sqrt(2 / Math.Log(2)), RestoringStageSpacing.Coefficient, 12);
+        // sqrt(2/0.69) = 1.7025, with 0.69 the one value of ln 2 Phaseward uses (sqrt(2/ln 2) = 1.6986).
+        Assert.Equal(Math.Sqrt(2 / 0.69), RestoringStageSpacing.Coefficient, 12);
         Assert.Equal(1.70, RestoringStageSpacing.Coefficient, 2);
     }
 
@@ -62,11 +63,11 @@ public class RestoringStageSpacingTests
         var t = 20.Picoseconds();
         var rc = (r * c).Seconds;
         var single = RestoringStageSpacing.BufferedChainDelay(10, 10, r, c, t).Seconds;
-        Assert.Equal(Math.Log(2) * 55 * rc + 20e-12, single, 1e-20);
+        Assert.Equal(0.69 * 55 * rc + 20e-12, single, 1e-20);
 
         var m = RestoringStageSpacing.OptimalSpacing(t, r, c);
         var atOptimum = RestoringStageSpacing.BufferedChainDelay(1000, m, r, c, t).Seconds;
-        var k = Math.Log(2);
+        var k = 0.69;
         Assert.Equal(1000 * (k * rc / 2 + Math.Sqrt(2 * k * rc * t.Seconds)), atOptimum, atOptimum * 1e-12);
 
         // With these (illustrative) figures t_buf/RC = 1: m_opt = 1.70, the whole optimum is 2 gates.

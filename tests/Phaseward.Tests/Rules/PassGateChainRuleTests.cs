@@ -63,7 +63,9 @@ public class PassGateChainRuleTests
     //   downstream: hop5 2.5, hop4 6.5, hop3 10.5, hop2 14.5, hop1 18.5, sensor 21 fF
     //   Elmore(hop5) = 4k·21f + 5k·(18.5 + 14.5 + 10.5 + 6.5 + 2.5)f = 84 ps + 262.5 ps = 346.5 ps
     // Limit: m_opt = 1.70·sqrt(20 ps/(5 kΩ·4 fF)) = 1.70 → best whole spacing 2 → limit max(2, 2) = 2.
-    // Restored: mean R 5 kΩ, mean node C (4·4 + 2.5)/5 = 3.7 fF, RC = 18.5 ps; t = (5/2)·(ln 2·18.5 ps·3 + 20 ps) = 146 ps.
+    // Restored, counted as the unrestored figure is (the same 4 kΩ driver, whole segments 2 + 2 + 1, one restoring stage
+    // between segments): mean R 5 kΩ, mean node C (4·4 + 2.5)/5 = 3.7 fF, RC = 18.5 ps;
+    // t = 0.69·4 kΩ·(2.5 + 2·3.7) fF + 0.69·18.5 ps·(3 + 3 + 1) + 2·20 ps = 27.3 + 89.4 + 40 = 156.7 ps.
     [Fact]
     public void Figures_of_a_five_gate_chain_under_the_process_limit()
     {
@@ -78,15 +80,15 @@ public class PassGateChainRuleTests
         Assert.Equal("2", finding.Properties["optimalSpacing"]);
         var elmore = double.Parse(finding.Properties["elmoreDelaySeconds"], CultureInfo.InvariantCulture);
         Assert.Equal(346.5e-12, elmore, 1e-21);
-        Assert.Equal(Math.Log(2) * 346.5e-12, double.Parse(finding.Properties["fiftyPercentDelaySeconds"], CultureInfo.InvariantCulture), 1e-21);
+        Assert.Equal(0.69 * 346.5e-12, double.Parse(finding.Properties["fiftyPercentDelaySeconds"], CultureInfo.InvariantCulture), 1e-21);
         var restored = double.Parse(finding.Properties["restoredDelaySeconds"], CultureInfo.InvariantCulture);
-        Assert.Equal(2.5 * (Math.Log(2) * 18.5e-12 * 3 + 20e-12), restored, 1e-21);
+        Assert.Equal(0.69 * 4e3 * (2.5e-15 + 2 * 3.7e-15) + 0.69 * 18.5e-12 * 7 + 2 * 20e-12, restored, 1e-21);
         // Split after hop2 and hop4: segments of 2, 2, 1.
         Assert.Equal("2", finding.Properties["splitPointCount"]);
         Assert.Equal("hop2\nhop4", finding.Properties["splitAfterDevices"]);
         Assert.Equal("false", finding.Properties["splitPointsTruncated"]);
-        Assert.Equal("5 pass gates in series without a restoring stage (limit 2), starting at 'hop1' and passing the limit at 'hop3', in design 'Buoy': Elmore delay 347 ps (50% estimate 240 ps); "
-                     + "a restoring stage every 2 gates would give about 146 ps", finding.Message);
+        Assert.Equal("5 pass gates in series without a restoring stage (limit 2), starting at 'hop1' and passing the limit at 'hop3', in design 'Buoy': Elmore delay 347 ps (50% estimate 239 ps); "
+                     + "a restoring stage every 2 gates would give about 157 ps", finding.Message);
         Assert.Equal(c.ToNetlist().Devices.Single(d => d.Name == "hop1").Span, Assert.Single(finding.RelatedLocations));
         Assert.Equal(c.ToNetlist().Devices.Single(d => d.Name == "hop3").Span, finding.Location);
     }
@@ -377,8 +379,9 @@ public class PassGateChainRuleTests
 
     // The example and its fix in docs/rules/PW2001.md (keep them in step). By hand: as the five-gate chain above,
     // but hop5 also drives an inverter (+2 fF gate load): hop5 4.5 fF, downstream +2 fF on every net:
-    //   Elmore = 4 kΩ·23 fF + 5 kΩ·(20.5 + 16.5 + 12.5 + 8.5 + 4.5) fF = 92 + 312.5 = 404.5 ps; ln 2 × = 280 ps;
-    //   restored: mean C (4·4 + 4.5)/5 = 4.1 fF, RC = 20.5 ps, t = 2.5·(ln 2·20.5 ps·3 + 20 ps) = 157 ps.
+    //   Elmore = 4 kΩ·23 fF + 5 kΩ·(20.5 + 16.5 + 12.5 + 8.5 + 4.5) fF = 92 + 312.5 = 404.5 ps; 0.69 × = 279 ps;
+    //   restored: mean C (4·4 + 4.5)/5 = 4.1 fF, RC = 20.5 ps, the same driver on the input (2.5 fF) and the first
+    //   segment, segments 2 + 2 + 1, two restoring stages: 0.69·4 kΩ·10.7 fF + 0.69·20.5 ps·7 + 40 ps = 169 ps.
     private sealed class TelemetryBus : Design
     {
         private readonly bool restored;
@@ -402,8 +405,8 @@ public class PassGateChainRuleTests
     public void Documented_example_and_its_fix()
     {
         var finding = Assert.Single(new TelemetryBus(restored: false).Check().Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
-        Assert.Equal("5 pass gates in series without a restoring stage (limit 2), starting at 'hop1' and passing the limit at 'hop3', in design 'TelemetryBus': Elmore delay 405 ps (50% estimate 280 ps); "
-                     + "a restoring stage every 2 gates would give about 157 ps", finding.Message);
+        Assert.Equal("5 pass gates in series without a restoring stage (limit 2), starting at 'hop1' and passing the limit at 'hop3', in design 'TelemetryBus': Elmore delay 405 ps (50% estimate 279 ps); "
+                     + "a restoring stage every 2 gates would give about 169 ps", finding.Message);
         Assert.Equal("hop2\nhop4", finding.Properties["splitAfterDevices"]);
         Assert.DoesNotContain(new TelemetryBus(restored: true).Check().Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
     }
