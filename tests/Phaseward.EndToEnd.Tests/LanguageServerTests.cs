@@ -46,13 +46,26 @@ public sealed class LanguageServerTests
         (line, column) = route.ExpectedPosition;
         Assert.Equal((line - 1, column - 1), (gates.Line, gates.Character));
 
-        // The designer moves the second latch to the complementary phase, as an unsaved edit.
-        var edited = counter.Source.Replace("c.StaticLatch(c.Inverter(early), tick.High", "c.StaticLatch(c.Inverter(early), tick.Low", StringComparison.Ordinal);
-        Assert.NotEqual(counter.Source, edited);
+        // The designer moves the second latch to the complementary phase, as an unsaved edit, and in the same edit adds a
+        // spare line of six pass gates (PW2001). An empty reply (the server not done, or not analyzing) must not count
+        // as "PW1001 gone": the wait is for a reply that carries the edited file's new PW2001 and no PW1001.
+        const string spareMarker = "c.TransmissionGate(spare, probe";
+        var edited = counter.Source
+            .Replace("c.StaticLatch(c.Inverter(early), tick.High", "c.StaticLatch(c.Inverter(early), tick.Low", StringComparison.Ordinal)
+            .Replace("c.Output(\"frost_bit\", late);", "c.Output(\"frost_bit\", late);\n" +
+                "                var spare = c.Input(\"spare_bit\");\n" +
+                "                for (var gate = 0; gate < 6; gate++) spare = " + spareMarker + ", $\"spare{gate}\");\n" +
+                "                c.Output(\"spare_out\", c.Inverter(spare));", StringComparison.Ordinal);
+        Assert.Contains(spareMarker, edited, StringComparison.Ordinal);
+        Assert.DoesNotContain("tick.High, \"late\"", edited, StringComparison.Ordinal);
         await server.ChangeAsync(counterPath, 2, edited);
 
-        var after = await server.PullDiagnosticsUntilAsync(counterPath, d => d.All(x => x.Code != counter.RuleId), PullTimeout, cancellation.Token);
+        var after = await server.PullDiagnosticsUntilAsync(counterPath,
+            d => d.Any(x => x.Code == route.RuleId) && d.All(x => x.Code != counter.RuleId), PullTimeout, cancellation.Token);
         Assert.True(after.All(d => d.Code != counter.RuleId), "PW1001 still reported after the edit:\n" + string.Join("\n", after) + "\n" + server.Log);
+        var spareGates = Assert.Single(after, d => d.Code == route.RuleId);
+        var spareLine = edited.Replace("\r\n", "\n", StringComparison.Ordinal).Split('\n').ToList().FindIndex(l => l.Contains(spareMarker, StringComparison.Ordinal));
+        Assert.Equal(spareLine, spareGates.Line); // the reply analysed the edited text, not the text on disk
         Assert.DoesNotContain(after, d => d.Code.StartsWith("CS", StringComparison.Ordinal) && d.Message.Contains("error", StringComparison.OrdinalIgnoreCase));
 
         // Control: the server still analyzes (the untouched document keeps its diagnostic).

@@ -7,16 +7,20 @@ namespace Phaseward.Checking;
 /// <summary>The result of checking a design at run time.</summary>
 public sealed class CheckReport
 {
+    /// <summary>A report of <paramref name="findings"/> on <paramref name="netlist"/>.</summary>
     public CheckReport(Netlist netlist, IReadOnlyList<Finding> findings)
     {
         Netlist = netlist;
         Findings = findings;
     }
 
+    /// <summary>The netlist that was checked.</summary>
     public Netlist Netlist { get; }
 
+    /// <summary>The findings, in rule order, then netlist order.</summary>
     public IReadOnlyList<Finding> Findings { get; }
 
+    /// <summary>True when no rule found anything.</summary>
     public bool IsClean => Findings.Count == 0;
 
     /// <summary>A human-readable report: a summary line, one line per finding with its location, then the process the

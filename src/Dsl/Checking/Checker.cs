@@ -31,9 +31,11 @@ public static class Checker
         new KeeperTooStrongRule(),
     };
 
+    /// <summary>Runs every rule of <see cref="Rules"/> on <paramref name="netlist"/> under <paramref name="policy"/> (the defaults when null).</summary>
     public static CheckReport Check(Netlist netlist, RulePolicy? policy = null, CancellationToken cancellationToken = default)
         => Check(netlist, Rules, policy, cancellationToken);
 
+    /// <summary>Runs <paramref name="rules"/>, in order, on <paramref name="netlist"/> under <paramref name="policy"/> (the defaults when null).</summary>
     public static CheckReport Check(Netlist netlist, IReadOnlyList<Rule> rules, RulePolicy? policy = null, CancellationToken cancellationToken = default)
     {
         if (netlist is null) throw new ArgumentNullException(nameof(netlist));

@@ -10,6 +10,7 @@ public sealed class Finding
 {
     private static readonly IReadOnlyDictionary<string, string> NoProperties = new Dictionary<string, string>();
 
+    /// <summary>A finding of <paramref name="rule"/> at <paramref name="location"/>; <paramref name="arguments"/> fill the rule's message holes (formatted with ToString).</summary>
     public Finding(RuleDescriptor rule, SourceSpan location, IReadOnlyList<object> arguments,
         IReadOnlyList<SourceSpan>? relatedLocations = null, IReadOnlyDictionary<string, string>? properties = null)
     {
@@ -20,8 +21,10 @@ public sealed class Finding
         Properties = properties ?? NoProperties;
     }
 
+    /// <summary>The rule entry (ID, title, message format) this finding belongs to.</summary>
     public RuleDescriptor Rule { get; }
 
+    /// <summary>The rule ID, <c>PW</c> and four digits.</summary>
     public string RuleId => Rule.Id;
 
     /// <summary>The call the finding is reported at.</summary>
@@ -30,6 +33,7 @@ public sealed class Finding
     /// <summary>The message's arguments, already formatted (figures with their units).</summary>
     public IReadOnlyList<string> Arguments { get; }
 
+    /// <summary>The rule's message with this finding's figures filled in.</summary>
     public string Message => Rule.FormatMessage(Arguments.Cast<object>().ToArray());
 
     /// <summary>Other calls involved (the other latch, the chain's first gate, the clock gate...).</summary>
@@ -38,5 +42,6 @@ public sealed class Finding
     /// <summary>Machine-readable details for code fixes and reports.</summary>
     public IReadOnlyDictionary<string, string> Properties { get; }
 
+    /// <inheritdoc/>
     public override string ToString() => $"{Location}: {Rule.DefaultSeverity.ToString().ToLowerInvariant()} {RuleId}: {Message}";
 }

@@ -11,5 +11,6 @@ public abstract class Rule
     /// <summary>The descriptors of every finding this rule can produce.</summary>
     public abstract IReadOnlyList<RuleDescriptor> Descriptors { get; }
 
+    /// <summary>The rule's findings on the context's netlist under its policy.</summary>
     public abstract IEnumerable<Finding> Check(RuleContext context);
 }

@@ -21,6 +21,7 @@ public sealed class RulePolicy
     /// </summary>
     public bool EnablesFromInputsMayChange { get; init; }
 
+    /// <summary>Every threshold at its default.</summary>
     public static RulePolicy Default { get; } = new();
 
     /// <summary>

@@ -29,7 +29,11 @@ public sealed partial class Circuit
         => AddRegisterCell(MacroKind.StaticRegister, d, clock, name, Site(callerFile, callerLine));
 
     /// <summary>A weak keeper on <paramref name="node"/>: an inverter senses it and a weak inverter feeds it back.</summary>
+    /// <param name="node">The node to hold.</param>
+    /// <param name="name">The keeper's name (default: an automatic name).</param>
     /// <param name="resistance">The weak inverter's output resistance (default: the process's keeper resistance).</param>
+    /// <param name="callerFile">Filled in by the compiler: the calling file, for the source span.</param>
+    /// <param name="callerLine">Filled in by the compiler: the calling line.</param>
     /// <returns>The keeper's internal net (the inverse of the node).</returns>
     public Net Keeper(Net node, string? name = null, Resistance? resistance = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
     {

@@ -16,6 +16,8 @@ public sealed partial class Circuit
     /// clocks of a design share that time base: two clocks of one period offset by half a period are two phases.</param>
     /// <param name="independent">True for a clock unrelated to all others (its own crystal): data crossing from or to
     /// it needs a synchronizer (PW1003).</param>
+    /// <param name="callerFile">Filled in by the compiler: the calling file, for the source span.</param>
+    /// <param name="callerLine">Filled in by the compiler: the calling line.</param>
     public Clock Clock(string name, Time period, double duty = 0.5, Time? complementSkew = null, Time? offset = null,
         bool independent = false,
         [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
@@ -47,7 +49,13 @@ public sealed partial class Circuit
     /// A clock gate: a copy of <paramref name="clock"/> that runs while <paramref name="enable"/> is high and is held at
     /// <paramref name="stopsAt"/> while it is low.
     /// </summary>
+    /// <param name="clock">The clock to gate.</param>
+    /// <param name="enable">The net that lets the clock through while high.</param>
+    /// <param name="stopsAt">The level the gated clock holds while stopped.</param>
     /// <param name="maxIdle">The longest the gate is guaranteed to stay disabled (null: unbounded).</param>
+    /// <param name="name">The gated clock's name (default: the clock's name and <c>.gated</c>).</param>
+    /// <param name="callerFile">Filled in by the compiler: the calling file, for the source span.</param>
+    /// <param name="callerLine">Filled in by the compiler: the calling line.</param>
     public Clock ClockGate(Clock clock, Net enable, ClockStopLevel stopsAt = ClockStopLevel.Low, Time? maxIdle = null, string? name = null,
         [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
     {
@@ -66,7 +74,11 @@ public sealed partial class Circuit
     }
 
     /// <summary>A copy of <paramref name="clock"/> delayed by a clock buffer.</summary>
+    /// <param name="clock">The clock to delay.</param>
     /// <param name="delay">The buffer's delay (default: the process's stage delay).</param>
+    /// <param name="name">The delayed clock's name (default: an automatic name).</param>
+    /// <param name="callerFile">Filled in by the compiler: the calling file, for the source span.</param>
+    /// <param name="callerLine">Filled in by the compiler: the calling line.</param>
     public Clock BufferedClock(Clock clock, Time? delay = null, string? name = null,
         [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
     {

@@ -18,9 +18,11 @@ public sealed partial class Circuit
         return NewNet(name ?? AutoName(Scoped("node")));
     }
 
+    /// <summary>An inverter driven by <paramref name="input"/>; returns its new output net (named <paramref name="name"/>, or an automatic name).</summary>
     public Net Inverter(Net input, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
         => AddPrimitive(DeviceKind.Inverter, new[] { input }, OneInput, null, null, name, null, null, Site(callerFile, callerLine));
 
+    /// <summary>An inverter from <paramref name="input"/> driving <paramref name="output"/>, a net declared earlier with Node().</summary>
     public void Inverter(Net input, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
         => AddPrimitive(DeviceKind.Inverter, new[] { input }, OneInput, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 
@@ -28,18 +30,23 @@ public sealed partial class Circuit
     public Net Buffer(Net input, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
         => AddPrimitive(DeviceKind.Buffer, new[] { input }, OneInput, null, null, name, null, null, Site(callerFile, callerLine));
 
+    /// <summary>A non-inverting restoring stage from <paramref name="input"/> driving <paramref name="output"/>, a net declared earlier with Node().</summary>
     public void Buffer(Net input, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
         => AddPrimitive(DeviceKind.Buffer, new[] { input }, OneInput, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 
+    /// <summary>A two-input NAND of <paramref name="a"/> and <paramref name="b"/>; returns its new output net.</summary>
     public Net Nand(Net a, Net b, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
         => AddPrimitive(DeviceKind.Nand, new[] { a, b }, TwoInputs, null, null, name, null, null, Site(callerFile, callerLine));
 
+    /// <summary>A two-input NAND of <paramref name="a"/> and <paramref name="b"/> driving <paramref name="output"/>, a net declared earlier with Node().</summary>
     public void Nand(Net a, Net b, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
         => AddPrimitive(DeviceKind.Nand, new[] { a, b }, TwoInputs, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 
+    /// <summary>A two-input NOR of <paramref name="a"/> and <paramref name="b"/>; returns its new output net.</summary>
     public Net Nor(Net a, Net b, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
         => AddPrimitive(DeviceKind.Nor, new[] { a, b }, TwoInputs, null, null, name, null, null, Site(callerFile, callerLine));
 
+    /// <summary>A two-input NOR of <paramref name="a"/> and <paramref name="b"/> driving <paramref name="output"/>, a net declared earlier with Node().</summary>
     public void Nor(Net a, Net b, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
         => AddPrimitive(DeviceKind.Nor, new[] { a, b }, TwoInputs, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 

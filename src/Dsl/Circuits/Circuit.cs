@@ -35,6 +35,7 @@ public sealed partial class Circuit
         DesignName = Guard.Name(designName, nameof(designName));
     }
 
+    /// <summary>The name of the design being described (the netlist keeps it).</summary>
     public string DesignName { get; }
 
     /// <summary>The process figures in force (the illustrative defaults until <see cref="UseProcess"/> is called).</summary>

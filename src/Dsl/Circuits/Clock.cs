@@ -59,10 +59,13 @@ public sealed class Clock
 
     internal Circuit Owner { get; }
 
+    /// <summary>The clock's number in its circuit, in order of creation.</summary>
     public int Id { get; }
 
+    /// <summary>The clock's name (with the scope of the block it was made in).</summary>
     public string Name { get; }
 
+    /// <summary>Root, gated or buffered.</summary>
     public ClockKind Kind { get; }
 
     /// <summary>The clock this one is derived from (null for a root clock).</summary>
@@ -71,8 +74,10 @@ public sealed class Clock
     /// <summary>The root clock at the start of the derivation chain (itself for a root clock).</summary>
     public Clock Root => Source?.Root ?? this;
 
+    /// <summary>The period (a derived clock has its root's period).</summary>
     public Time Period { get; }
 
+    /// <summary>1 / <see cref="Period"/>.</summary>
     public Frequency Frequency => Period.ToFrequency();
 
     /// <summary>Fraction of the period during which the clock is high.</summary>
@@ -115,12 +120,15 @@ public sealed class Clock
     /// <summary>Where the clock was declared.</summary>
     public SourceSpan Span { get; }
 
+    /// <summary>The phase in which the clock is high: latches on it are transparent while the clock is high.</summary>
     public Phase High { get; }
 
+    /// <summary>The phase in which the clock is low (the complement, with its skew).</summary>
     public Phase Low { get; }
 
     /// <summary>The phase of this clock with the given polarity.</summary>
     public Phase this[ClockPolarity polarity] => polarity == ClockPolarity.High ? High : Low;
 
+    /// <inheritdoc/>
     public override string ToString() => Name;
 }

@@ -15,7 +15,9 @@ public sealed class Net
     /// <summary>Position of the net in its netlist (0-based, in order of creation).</summary>
     public int Id { get; }
 
+    /// <summary>The net's name (with the scope of the block it was made in).</summary>
     public string Name { get; }
 
+    /// <inheritdoc/>
     public override string ToString() => Name;
 }

@@ -112,6 +112,7 @@ public sealed class Process
         _ => throw new ArgumentException($"'{nameof(corner)}' must be Nominal, Slow or Fast (was {(int)corner}).", nameof(corner)),
     };
 
+    /// <inheritdoc/>
     public override string ToString() => Name;
 
     // Nominal lies between the corners, so each factor is checked on its own (in whatever order an initializer sets

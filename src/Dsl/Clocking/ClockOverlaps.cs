@@ -10,6 +10,7 @@ public sealed class ClockOverlaps
         ZeroZero = zeroZero;
     }
 
+    /// <summary>The clock whose true and complement overlap.</summary>
     public Clock Clock { get; }
 
     /// <summary>Clock and complement both high, after the rising edge: both phases' pass gates conduct.</summary>
@@ -18,6 +19,7 @@ public sealed class ClockOverlaps
     /// <summary>Clock and complement both low, after the falling edge: both phases' pass gates conduct.</summary>
     public TimeInterval ZeroZero { get; }
 
+    /// <summary>The 1-1 and 0-0 overlaps of <paramref name="clock"/>, from its complement skew.</summary>
     public static ClockOverlaps Of(Clock clock)
     {
         var high = PhaseWindow.Of(clock.High);

@@ -31,6 +31,7 @@ public sealed class PhaseWindow
         Length = length;
     }
 
+    /// <summary>The phase this window belongs to.</summary>
     public Phase Phase { get; }
 
     /// <summary>The clock's period: the window opens once per period.</summary>
@@ -45,6 +46,7 @@ public sealed class PhaseWindow
     /// <summary>When it stops conducting; may lie beyond <see cref="Period"/> (the window wraps).</summary>
     public Time Closes => Opens + Length;
 
+    /// <summary>The transparency window of <paramref name="phase"/> on its clock's time line.</summary>
     public static PhaseWindow Of(Phase phase)
     {
         if (phase is null) throw new ArgumentNullException(nameof(phase));
@@ -167,6 +169,7 @@ public sealed class PhaseWindow
         return new Time(shortest);
     }
 
+    /// <inheritdoc/>
     public override string ToString() => $"{Phase.Name}: [{Opens}, {Closes}) every {Period}";
 
     // How many times this window opens in the common cycle.

@@ -38,6 +38,7 @@ public static class WindowRelations
         return Time.Min(a.Length, b.Length) * OverlapAllowanceFraction;
     }
 
+    /// <summary>How windows <paramref name="a"/> and <paramref name="b"/> lie on the common time line.</summary>
     public static WindowRelation Of(PhaseWindow a, PhaseWindow b)
     {
         if (a is null) throw new ArgumentNullException(nameof(a));

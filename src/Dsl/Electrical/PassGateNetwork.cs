@@ -19,7 +19,7 @@ namespace Phaseward.Electrical;
 /// <see cref="Circuit.Exclusive"/>, or a net and its inverse) at most one conducts, so only the heaviest such set
 /// counts; a branch exclusive with the gate that charges the net is off. Branches on data nets not known to be
 /// exclusive are counted as conducting together (the worst case), and the model says so
-/// (<see cref="AssumesUnknownBranchesConduct"/>).</item>
+/// (<see cref="AssumesUnknownBranchesConduct(Net)"/>).</item>
 /// </list>
 /// </summary>
 /// <remarks>

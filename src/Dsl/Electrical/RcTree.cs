@@ -23,6 +23,7 @@ public sealed class RcTree
         Add(-1, driverResistance, rootCapacitance, nameof(driverResistance), nameof(rootCapacitance));
     }
 
+    /// <summary>The number of the root node.</summary>
     public const int Root = 0;
 
     /// <summary>Number of nodes, the root included.</summary>
@@ -42,6 +43,7 @@ public sealed class RcTree
     /// <summary>The resistance between the node and its parent (the driver's resistance for the root).</summary>
     public Resistance ResistanceOf(int node) => resistances[CheckNode(node)];
 
+    /// <summary>The node's capacitance to ground.</summary>
     public Capacitance CapacitanceOf(int node) => capacitances[CheckNode(node)];
 
     private int Add(int parent, Resistance resistance, Capacitance capacitance, string resistanceName, string capacitanceName)

@@ -21,7 +21,9 @@ namespace Phaseward.Electrical;
 /// </code>
 /// and sqrt(2/0.69) = 1.703 (sqrt(2/ln 2) = 1.699), hence m_opt ≈ 1.7·sqrt(t_buf/(R·C)). d²t/dm² = 2·N·t_buf/m³ &gt; 0,
 /// so this is the minimum, and t(m_opt) = N·(k·R·C/2 + sqrt(2·k·R·C·t_buf)): linear in N, where the unrestored
-/// chain grows as N².
+/// chain grows as N². The same derivation, with m_opt = 1.7·sqrt(t_buf/(C·R_eq)), is in J. M. Rabaey,
+/// A. Chandrakasan, B. Nikolić, "Digital Integrated Circuits: A Design Perspective", 2nd ed., ch. 6 (transmission-gate
+/// chains with buffers, section 6.3.2 from memory), which counts n/m − 1 buffers where this model counts n/m.
 /// </remarks>
 public static class RestoringStageSpacing
 {

@@ -8,7 +8,8 @@ public sealed class Device
     private readonly string? nameInCell;
     private string? name;
 
-    /// <param name="name">The device's name; null for a part of a cell, named <paramref name="nameInCell"/> inside it.</param>
+    /// <summary>A device named <paramref name="name"/>, or, when that is null, a part of a cell named
+    /// <paramref name="nameInCell"/> inside it.</summary>
     internal Device(int id, string? name, DeviceKind kind, IReadOnlyList<Net> inputs, Net output, Phase? clockControl,
         Net? dataControl, Resistance? resistance, bool isWeak, SourceSpan span, MacroInstance? macro, string? role, string? nameInCell = null)
     {
@@ -29,17 +30,20 @@ public sealed class Device
         Role = role;
     }
 
+    /// <summary>The device's number in the netlist, in order of creation.</summary>
     public int Id { get; }
 
     /// <summary>The device's name; a cell's parts are named "cell.part", composed when first asked for (a large
     /// design then does not hold a string per part that nobody reads).</summary>
     public string Name => name ??= Macro!.Name + "." + nameInCell;
 
+    /// <summary>What kind of primitive this is.</summary>
     public DeviceKind Kind { get; }
 
     /// <summary>Data inputs (one for inverters, buffers and pass gates; two for NAND and NOR).</summary>
     public IReadOnlyList<Net> Inputs { get; }
 
+    /// <summary>The net the device drives.</summary>
     public Net Output { get; }
 
     /// <summary>The clock phase a pass gate conducts in (null for data-controlled gates and restoring stages).</summary>
@@ -54,6 +58,7 @@ public sealed class Device
     /// <summary>A deliberately weak driver (a keeper's feedback stage).</summary>
     public bool IsWeak { get; }
 
+    /// <summary>Where the device was written (the macro call for a macro's devices).</summary>
     public SourceSpan Span { get; }
 
     /// <summary>The library cell this device belongs to (null when written as a primitive).</summary>
@@ -62,9 +67,12 @@ public sealed class Device
     /// <summary>The device's role inside its cell ("pass", "inverter", "feedback-inverter", "feedback-pass", ...).</summary>
     public string? Role { get; }
 
+    /// <summary>True for stages that drive their output from the rails (inverter, buffer, NAND, NOR).</summary>
     public bool IsRestoring => Kind.IsRestoring();
 
+    /// <summary>True for transmission gates.</summary>
     public bool IsPassDevice => Kind == DeviceKind.TransmissionGate;
 
+    /// <inheritdoc/>
     public override string ToString() => $"{Kind} {Name}";
 }

@@ -21,12 +21,16 @@ public sealed class MacroInstance
             (parent.parts ??= new List<MacroInstance>(2)).Add(this);
     }
 
+    /// <summary>The macro's number in the netlist, in order of creation.</summary>
     public int Id { get; }
 
+    /// <summary>Which macro this is.</summary>
     public MacroKind Kind { get; }
 
+    /// <summary>The name given at the call (with its block scope).</summary>
     public string Name { get; }
 
+    /// <summary>Where the macro was called.</summary>
     public SourceSpan Span { get; }
 
     /// <summary>The enclosing cell (a register for its master and slave latches), or null.</summary>
@@ -44,5 +48,6 @@ public sealed class MacroInstance
         Parent?.Add(device);
     }
 
+    /// <inheritdoc/>
     public override string ToString() => $"{Kind} {Name}";
 }

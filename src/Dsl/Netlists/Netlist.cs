@@ -57,21 +57,28 @@ public sealed class Netlist
                 : EstimateCapacitance(net, enableLoads[net.Id]);
     }
 
+    /// <summary>The design's name.</summary>
     public string DesignName { get; }
 
+    /// <summary>The process the electrical figures come from.</summary>
     public Process Process { get; }
 
+    /// <summary>Every net, in order of creation.</summary>
     public IReadOnlyList<Net> Nets { get; }
 
+    /// <summary>Every primitive device, in order of creation (macros expanded).</summary>
     public IReadOnlyList<Device> Devices { get; }
 
     /// <summary>Root and derived clocks, in order of declaration.</summary>
     public IReadOnlyList<Clock> Clocks { get; }
 
+    /// <summary>Every macro call, whose devices keep a link to it.</summary>
     public IReadOnlyList<MacroInstance> Macros { get; }
 
+    /// <summary>The design's inputs.</summary>
     public IReadOnlyList<Port> Inputs { get; }
 
+    /// <summary>The design's outputs.</summary>
     public IReadOnlyList<Port> Outputs { get; }
 
     /// <summary>Devices whose output is this net (restoring stages and pass gates).</summary>
@@ -146,6 +153,7 @@ public sealed class Netlist
         return true;
     }
 
+    /// <inheritdoc/>
     public override string ToString() => NetlistText.Write(this, includeSpans: false);
 
     private Capacitance EstimateCapacitance(Net net, int enableLoads)

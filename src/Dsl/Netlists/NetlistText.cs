@@ -10,6 +10,7 @@ namespace Phaseward.Netlists;
 /// </summary>
 public static class NetlistText
 {
+    /// <summary>The canonical text of <paramref name="netlist"/>, with each item's source span when <paramref name="includeSpans"/> is true.</summary>
     public static string Write(Netlist netlist, bool includeSpans)
     {
         var text = new StringBuilder();

@@ -10,11 +10,15 @@ public sealed class Port
         Span = span;
     }
 
+    /// <summary>The port's name.</summary>
     public string Name { get; }
 
+    /// <summary>The net behind the port.</summary>
     public Net Net { get; }
 
+    /// <summary>Where the port was declared.</summary>
     public SourceSpan Span { get; }
 
+    /// <inheritdoc/>
     public override string ToString() => $"{Name} = {Net.Name}";
 }

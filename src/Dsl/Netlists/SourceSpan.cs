@@ -12,6 +12,7 @@ public sealed class SourceSpan : IEquatable<SourceSpan>
 {
     private static readonly IReadOnlyList<SourceSpan> NoCallers = Array.Empty<SourceSpan>();
 
+    /// <summary>A place in a source file: 1-based <paramref name="line"/> and <paramref name="column"/>, the character range (<paramref name="start"/>, <paramref name="length"/>; -1 when unknown) and the helper calls that led there.</summary>
     public SourceSpan(string path, int line, int column = 0, int start = -1, int length = 0, IReadOnlyList<SourceSpan>? callers = null)
     {
         Path = path ?? string.Empty;
@@ -22,6 +23,7 @@ public sealed class SourceSpan : IEquatable<SourceSpan>
         Callers = callers ?? NoCallers;
     }
 
+    /// <summary>No known place (a design built outside a source file).</summary>
     public static SourceSpan Unknown { get; } = new(string.Empty, 0);
 
     /// <summary>The source file ("" when unknown).</summary>
@@ -36,20 +38,26 @@ public sealed class SourceSpan : IEquatable<SourceSpan>
     /// <summary>0-based character offset in the file (-1 when unknown).</summary>
     public int Start { get; }
 
+    /// <summary>The length of the character range (0 when unknown).</summary>
     public int Length { get; }
 
     /// <summary>The call sites that led here, outermost first (the call in <c>Describe</c> comes first).</summary>
     public IReadOnlyList<SourceSpan> Callers { get; }
 
+    /// <summary>True when the span names a line.</summary>
     public bool IsKnown => Line > 0;
 
+    /// <summary>True when <paramref name="other"/> names the same file, line, column and range (the callers are not compared).</summary>
     public bool Equals(SourceSpan? other)
         => other is not null && Path == other.Path && Line == other.Line && Column == other.Column && Start == other.Start && Length == other.Length;
 
+    /// <inheritdoc/>
     public override bool Equals(object? obj) => Equals(obj as SourceSpan);
 
+    /// <inheritdoc/>
     public override int GetHashCode() => (Path.GetHashCode() * 397) ^ (Line * 31) ^ Start;
 
+    /// <inheritdoc/>
     public override string ToString()
         => !IsKnown ? "(unknown location)" : Column > 0 ? $"{Path}({Line},{Column})" : $"{Path}({Line})";
 }

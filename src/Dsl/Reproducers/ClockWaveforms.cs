@@ -20,6 +20,9 @@ internal sealed class ClockWaveforms
     private readonly Dictionary<Clock, (string Clock, string Complement)> drawn = new();
     private readonly Dictionary<Phase, string> controls = new();
 
+    /// <param name="deck">The deck the sources are written into.</param>
+    /// <param name="end">Where the simulation ends.</param>
+    /// <param name="stops">When and at which level a gated clock stops (null: never).</param>
     /// <param name="shifts">A shift of a clock's edges against the time line (none by default): for clocks with no
     /// fixed time relation, whose phase to each other drifts, a deck may draw them at the worst one.</param>
     public ClockWaveforms(DeckWriter deck, Time end, Func<Clock, (Time At, ClockStopLevel Level)?>? stops = null, Func<Clock, Time>? shifts = null)

@@ -3,6 +3,7 @@ namespace Phaseward.Reproducers;
 /// <summary>One figure a deck measures with <c>.meas</c>, with Phaseward's own estimate of it.</summary>
 public sealed class DeckEstimate
 {
+    /// <summary>A figure the deck measures as <paramref name="name"/>, with Phaseward's estimate <paramref name="value"/> in <paramref name="unit"/>, and what it means.</summary>
     public DeckEstimate(string name, double value, string unit, string meaning)
     {
         Name = name;
@@ -23,5 +24,6 @@ public sealed class DeckEstimate
     /// <summary>What the figure is, in words.</summary>
     public string Meaning { get; }
 
+    /// <inheritdoc/>
     public override string ToString() => $"{Name} = {Engineering.Format(Value, Unit)} ({Meaning})";
 }

@@ -27,6 +27,7 @@ public sealed class MeasuredValues
     /// <summary>Measurements ngspice could not make (lower-case names).</summary>
     public IReadOnlyList<string> Failed { get; }
 
+    /// <summary>Reads the <c>.meas</c> results (and the failed measurements) from ngspice's batch output.</summary>
     public static MeasuredValues Parse(string ngspiceOutput)
     {
         if (ngspiceOutput is null) throw new ArgumentNullException(nameof(ngspiceOutput));

@@ -20,10 +20,13 @@ public sealed class SpiceDeck
         Estimates = estimates;
     }
 
+    /// <summary>The finding the deck reproduces.</summary>
     public Finding Finding { get; }
 
+    /// <summary>The finding's rule ID.</summary>
     public string RuleId => Finding.RuleId;
 
+    /// <summary>The design the finding was made on.</summary>
     public string DesignName { get; }
 
     /// <summary>The deck, ready for <c>ngspice -b</c>.</summary>
@@ -46,5 +49,6 @@ public sealed class SpiceDeck
         return new SpiceDeck(Finding, DesignName, pattern.Replace(Text, ".param " + name + " = " + value), Estimates);
     }
 
+    /// <inheritdoc/>
     public override string ToString() => Text;
 }

@@ -68,6 +68,7 @@ public sealed class Latch
     /// <summary>When the latch is transparent, within its root clock's period.</summary>
     public PhaseWindow Window => PhaseWindow.Of(Phase);
 
+    /// <inheritdoc/>
     public override string ToString() => $"latch {Name} ({Phase.Name})";
 }
 
@@ -85,8 +86,10 @@ public sealed class Register
     /// <summary>The register cell's name, or the name of the hand-built register's output net.</summary>
     public string Name { get; }
 
+    /// <summary>The first latch of the register.</summary>
     public Latch Master { get; }
 
+    /// <summary>The second latch of the register.</summary>
     public Latch Slave { get; }
 
     /// <summary>The register cell it came from, or null for a hand-built master–slave pair.</summary>
@@ -98,8 +101,10 @@ public sealed class Register
     /// <summary>True when the slave opens on the rising edge (master transparent while the clock is low).</summary>
     public bool IsPositiveEdge => Slave.Phase.Polarity == ClockPolarity.High;
 
+    /// <summary>Where the register was written (its macro call, or its master latch).</summary>
     public SourceSpan Span => Cell?.Span ?? Master.Span;
 
+    /// <inheritdoc/>
     public override string ToString() => $"register {Name} ({(IsPositiveEdge ? "rising" : "falling")} edge of {Clock.Name})";
 }
 
@@ -118,8 +123,10 @@ public sealed class LatchPath
         MaxDelay = maxDelay;
     }
 
+    /// <summary>The latch the data leaves.</summary>
     public Latch From { get; }
 
+    /// <summary>The latch the data reaches.</summary>
     public Latch To { get; }
 
     /// <summary>The entry gate of <see cref="To"/> the path arrives at.</summary>
@@ -131,5 +138,6 @@ public sealed class LatchPath
     /// <summary>Longest delay from <see cref="From"/>'s storage node to the entry gate's input (combinational loops are not followed round).</summary>
     public Time MaxDelay { get; }
 
+    /// <inheritdoc/>
     public override string ToString() => $"{From.Name} -> {To.Name} [{MinDelay}, {MaxDelay}]";
 }

@@ -34,10 +34,13 @@ public sealed class LatchModel
         Paths = LatchPathFinder.Find(new LatchCone(netlist, found.EntryLatchOfDevice, found.IsLatchStorage), found.Latches);
     }
 
+    /// <summary>The netlist the latches were found in.</summary>
     public Netlist Netlist { get; }
 
+    /// <summary>Every latch, library or hand-built.</summary>
     public IReadOnlyList<Latch> Latches { get; }
 
+    /// <summary>Every master-slave pair of latches.</summary>
     public IReadOnlyList<Register> Registers { get; }
 
     /// <summary>Every latch-to-latch path, grouped by source latch (in latch order), then by entry gate.</summary>

@@ -25,10 +25,13 @@ public sealed class LatchTiming
             : latch.Phase.Clock.Period * (1 - latch.Phase.Clock.Duty));
     }
 
+    /// <summary>The latch these figures are for.</summary>
     public Latch Latch { get; }
 
+    /// <summary>The latch's name.</summary>
     public string Name => Latch.Name;
 
+    /// <summary>The phase in which the latch is transparent.</summary>
     public Phase Phase => Latch.Phase;
 
     /// <summary>When the latch is transparent (made once, with the other figures).</summary>
@@ -83,10 +86,13 @@ public sealed class RegisterTiming
         MasterSlaveRace = master.EntryDelay + master.OutputDelay + slave.EntryDelay;
     }
 
+    /// <summary>The register these figures are for.</summary>
     public Register Register { get; }
 
+    /// <summary>The register's name.</summary>
     public string Name => Register.Name;
 
+    /// <summary>The register's clock.</summary>
     public Clock Clock => Register.Clock;
 
     /// <summary>Setup time before the capturing edge: the master latch's setup (dynamic: its input pass gate's delay).</summary>
@@ -149,6 +155,7 @@ public sealed class TimingFigures
         Registers = registers;
     }
 
+    /// <summary>The latches and registers the figures are for.</summary>
     public LatchModel Model { get; }
 
     /// <summary>The corner these figures are at.</summary>
@@ -166,6 +173,7 @@ public sealed class TimingFigures
     /// <summary>Every latch, register halves included, in the order of <see cref="LatchModel.Latches"/>.</summary>
     public IReadOnlyList<LatchTiming> Latches => byLatch;
 
+    /// <summary>The figures of every register.</summary>
     public IReadOnlyList<RegisterTiming> Registers { get; }
 
     /// <summary>The figures of <paramref name="netlist"/> at <paramref name="corner"/>.</summary>
@@ -177,6 +185,7 @@ public sealed class TimingFigures
         return new(LatchModel.Of(netlist), corner);
     }
 
+    /// <summary>The figures of <paramref name="latch"/>.</summary>
     public LatchTiming Of(Latch latch)
     {
         if (latch is null) throw new ArgumentNullException(nameof(latch));

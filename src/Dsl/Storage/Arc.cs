@@ -11,18 +11,23 @@ namespace Phaseward.Storage;
 /// </summary>
 public readonly struct Arc
 {
+    /// <summary>An arc that opens at <paramref name="opens"/> and lasts <paramref name="length"/>.</summary>
     public Arc(Time opens, Time length)
     {
         Opens = opens;
         Length = length;
     }
 
+    /// <summary>Where the arc starts in the period.</summary>
     public Time Opens { get; }
 
+    /// <summary>How long the arc lasts.</summary>
     public Time Length { get; }
 
+    /// <summary>The arc of a transparency window.</summary>
     public static Arc Of(PhaseWindow window) => new(window.Opens, window.Length);
 
+    /// <inheritdoc/>
     public override string ToString() => $"[{Opens}, +{Length})";
 
     // Gaps shorter than this fraction of the period are rounding noise (two windows that touch exactly).

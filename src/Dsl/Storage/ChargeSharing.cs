@@ -40,6 +40,7 @@ public readonly struct ChargeSharing
     /// <summary>V·C2 / (C1 + C2): how far the charged node's level drops.</summary>
     public Voltage Droop { get; }
 
+    /// <summary>Charge sharing between a node <paramref name="charged"/> to <paramref name="level"/> and a discharged node <paramref name="other"/>.</summary>
     public static ChargeSharing Of(Capacitance charged, Capacitance other, Voltage level)
     {
         Guard.NonNegative(charged.Farads, nameof(charged), "F");
@@ -48,5 +49,6 @@ public readonly struct ChargeSharing
         return new ChargeSharing(charged, other, level);
     }
 
+    /// <inheritdoc/>
     public override string ToString() => $"{Level} on {ChargedCapacitance} shared with {OtherCapacitance}: settles at {Settled}, droop {Droop}";
 }

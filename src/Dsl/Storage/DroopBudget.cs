@@ -72,5 +72,6 @@ public sealed class DroopBudget
     public string DroopText()
         => Sharing is null ? LeftForLeakage.ToString() : $"{LeftForLeakage} ({Allowance} allowance less {SharingDroop} of charge sharing through '{SharingDevice!.Name}')";
 
+    /// <inheritdoc/>
     public override string ToString() => $"allowance {Allowance}, charge sharing {SharingDroop}, left for leakage {LeftForLeakage}";
 }

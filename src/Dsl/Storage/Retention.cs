@@ -63,5 +63,6 @@ public readonly struct Retention
     internal static Retention WithDroopLeft(Capacitance capacitance, Voltage left, Current leakage)
         => new(capacitance, Voltage.Max(Voltage.Zero, left), leakage);
 
+    /// <inheritdoc/>
     public override string ToString() => $"t_ret = {Time} (C = {Capacitance}, ΔV = {ToleratedDroop}, I_leak = {Leakage})";
 }

@@ -214,6 +214,7 @@ public sealed class RunningIsolation
         Drivers = drivers;
     }
 
+    /// <summary>The storage node.</summary>
     public StorageNode Node { get; }
 
     /// <summary>The root clock whose drivers bound the isolation.</summary>
@@ -274,6 +275,7 @@ public sealed class StoppedIsolation
         AroundStopAndRestart = runningGap * 2;
     }
 
+    /// <summary>The storage node.</summary>
     public StorageNode Node { get; }
 
     /// <summary>The gated clocks that must all be stopped for the node to float, the one with the shortest declared

@@ -18,8 +18,10 @@ public sealed class StorageNode
         FeedbackDrivers = feedbackDrivers;
     }
 
+    /// <summary>The stored net.</summary>
     public Net Net { get; }
 
+    /// <summary>Dynamic (charge only) or static (with feedback).</summary>
     public StorageKind Kind { get; }
 
     /// <summary>Every pass device that drives the node, feedback gates included, in netlist order.</summary>
@@ -71,6 +73,7 @@ public sealed class StorageNode
         }
     }
 
+    /// <summary>True when <paramref name="driver"/> is one of the node's feedback drivers.</summary>
     public bool IsFeedback(Device driver)
     {
         foreach (var feedback in FeedbackDrivers)
@@ -79,5 +82,6 @@ public sealed class StorageNode
         return false;
     }
 
+    /// <inheritdoc/>
     public override string ToString() => $"{Kind} storage node {Net.Name}";
 }

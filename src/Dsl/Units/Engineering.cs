@@ -9,6 +9,7 @@ public static class Engineering
     private static readonly string[] Prefixes = { "a", "f", "p", "n", "µ", "m", "", "k", "M", "G", "T" };
     private const int UnitPrefixIndex = 6;
 
+    /// <summary><paramref name="value"/> with an SI prefix and <paramref name="unit"/>, to three significant digits.</summary>
     public static string Format(double value, string unit) => Format(value, unit, 3);
 
     /// <summary>

@@ -9,6 +9,7 @@ public readonly partial struct Resistance
 
 public readonly partial struct Capacitance
 {
+    /// <summary>C·R is a time constant.</summary>
     public static Time operator *(Capacitance c, Resistance r) => new(r.Ohms * c.Farads);
 
     /// <summary>Q = C·V.</summary>
@@ -17,6 +18,7 @@ public readonly partial struct Capacitance
 
 public readonly partial struct Voltage
 {
+    /// <summary>Q = V·C.</summary>
     public static Charge operator *(Voltage v, Capacitance c) => new(c.Farads * v.Volts);
 }
 

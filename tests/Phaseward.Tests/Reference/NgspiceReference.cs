@@ -24,6 +24,13 @@ internal static class NgspiceReference
         .Select(f => new TreeRow(f[0], f[1], Number(f[2])))
         .ToArray();
 
+    public sealed record RestoredChainRow(int Gates, int Spacing, double Ohms, double Farads, double StageDelaySeconds, double T50Seconds);
+
+    public static IReadOnlyList<RestoredChainRow> RestoredChains { get; } = Read("restored_chain_t50.csv", 6)
+        .Select(f => new RestoredChainRow(int.Parse(f[0], CultureInfo.InvariantCulture), int.Parse(f[1], CultureInfo.InvariantCulture),
+            Number(f[2]), Number(f[3]), Number(f[4]), Number(f[5])))
+        .ToArray();
+
     public static double TreeT50(string tree, string leaf)
         => Trees.Single(r => r.Tree == tree && r.Leaf == leaf).T50Seconds;
 

@@ -2,7 +2,7 @@
 # Re-run every committed netlist into a temporary folder and compare the results with
 # the committed CSVs in this folder. Exits non-zero if a value is missing, a row or
 # column differs, or a number differs by more than a relative tolerance of 1e-3.
-# Also checks that the committed ladder netlists match what lib.sh generates.
+# Also checks that the committed ladder and restored-chain netlists match what lib.sh generates.
 # Usage: tests/reference/ngspice/check.sh     (from any directory)
 set -euo pipefail
 export LC_ALL=C
@@ -17,8 +17,9 @@ work="$(mktemp -d)"
 # Keep the ngspice logs when something fails, so the error can be read.
 trap 'rc=$?; if (( rc == 0 )); then rm -rf "$work"; else echo "ngspice logs kept in $work" >&2; fi' EXIT
 
-# The committed ladder netlists must be exactly what the generator writes.
+# The committed ladder and restored-chain netlists must be exactly what the generator writes.
 ref_gen_all_ladders "$work/gen"
+ref_gen_all_restored "$work/gen"
 for f in "$work"/gen/*.cir; do
     committed="$here/netlists/$(basename "$f")"
     [[ -f "$committed" ]] || ref_die "committed netlist missing: $committed (run regenerate.sh)"
@@ -28,7 +29,7 @@ done
 ref_build_csvs "$here/netlists" "$work/out"
 
 status=0
-for f in rc_ladder_t50.csv rc_tree_t50.csv retention.csv; do
+for f in rc_ladder_t50.csv rc_tree_t50.csv retention.csv restored_chain_t50.csv; do
     committed="$here/$f"
     fresh="$work/out/$f"
     [[ -f "$committed" ]] || { echo "check: committed CSV missing: $committed" >&2; status=1; continue; }

@@ -6,7 +6,7 @@ namespace Phaseward.Rules.DynamicStorage;
 
 /// <summary>
 /// PW3002: with its clocks running, a storage node floats for longer per period than its retention time (see
-/// <see cref="StorageIsolation.WhileRunning"/>); reports the lowest safe clock frequency.
+/// <see cref="StorageIsolation.WhileRunning(StorageNode)"/>); reports the lowest safe clock frequency.
 /// </summary>
 public sealed class ClockTooSlowForDynamicStorageRule : Rule
 {

@@ -38,6 +38,7 @@ public sealed class PassGateRun
     /// <summary>True when the run is longer than <see cref="Limit"/> (PW2001 reports it).</summary>
     public bool ExceedsLimit => Length > Limit;
 
+    /// <inheritdoc/>
     public override string ToString() => $"{Length} pass gates {First.Name} .. {Last.Name}: Elmore {ElmoreDelay}";
 }
 

@@ -88,10 +88,11 @@ public class DynamicNodeOnGatedClockRuleTests
     }
 
     [Theory]
-    [InlineData(1.0, false)]    // 1 µs < 1.35 µs
-    [InlineData(1.34, false)]   // just shorter
-    [InlineData(1000.0, true)]  // 1 ms > 1.35 µs
-    public void DeclaredIdleTimeIsComparedWithRetention(double idleUs, bool reported)
+    [InlineData(1.0, false, null)]       // 1 µs < 1.35 µs
+    [InlineData(1.34, false, null)]      // just shorter
+    [InlineData(1.36, true, "1.36 µs")]  // just longer: the limit is tested from above too
+    [InlineData(1000.0, true, "1 ms")]   // 1 ms > 1.35 µs
+    public void DeclaredIdleTimeIsComparedWithRetention(double idleUs, bool reported, string? idleText)
     {
         var (_, findings) = Check(c =>
         {
@@ -101,8 +102,10 @@ public class DynamicNodeOnGatedClockRuleTests
         Assert.Equal(reported ? 1 : 0, findings.Length);
         if (reported)
         {
-            Assert.Contains("declared maximum idle time: 1 ms", findings[0].Message);
-            Assert.Equal("0.001", findings[0].Properties[DynamicStorageProperties.IdleSeconds]);
+            Assert.Contains($"declared maximum idle time: {idleText}", findings[0].Message);
+            Assert.Contains("keeps its level only 1.35 µs", findings[0].Message);
+            var idleSeconds = double.Parse(findings[0].Properties[DynamicStorageProperties.IdleSeconds], System.Globalization.CultureInfo.InvariantCulture);
+            Assert.Equal(idleUs * 1e-6, idleSeconds, 1e-15);
         }
     }
 
