@@ -3,6 +3,7 @@ using System.Linq;
 using Phaseward.Checking;
 using Phaseward.Netlists;
 using Phaseward.Rules.DynamicStorage;
+using Phaseward.Storage;
 
 namespace Phaseward.Tests.Rules.DynamicStorage;
 
@@ -64,7 +65,8 @@ public class DynamicNodeOnGatedClockRuleTests
             c.DynamicLatch(c.Input("comparator"), burst.High, "hold");
         });
         Assert.Equal(
-            "Dynamic node 'hold.x' floats while gated clock 'burst_clk' is stopped low (declared maximum idle time: 2 s), "
+            "Dynamic node 'hold.x' floats while gated clock 'burst_clk' is stopped low (declared maximum idle time: 2 s, so it "
+            + "floats up to 2 s with the clock periods around the stop and the restart), "
             + "but keeps its level only 1.35 µs (C·ΔV/I_leak with C = 4.5 fF, ΔV = 300 mV, I_leak = 1 nA at the hot corner)",
             Assert.Single(findings).Message);
     }
@@ -186,6 +188,26 @@ public class DynamicNodeOnGatedClockRuleTests
             c.SetCapacitance(node, 100.Femtofarads());
         });
         Assert.Empty(withCap);
+    }
+
+    [Theory]
+    // 20 ns clock, 30 ps skew: a High-phase node floats L = 10 ns − 30 ps per period while it runs, and up to that long
+    // before the stop (since its last refresh) and after the restart (until its window opens): idle + 2·L = idle + 19.94 ns
+    // against t_ret = 1.35 µs (common practice: the node floats from its last refresh to its next one).
+    [InlineData(1.33, false)] // 1.34994 µs ≤ 1.35 µs
+    [InlineData(1.34, true)]  // 1.35994 µs > 1.35 µs, though the idle time alone is shorter than t_ret
+    public void TheFloatAroundTheStopAndTheRestartCounts(double idleUs, bool reported)
+    {
+        var (netlist, findings) = Check(c =>
+        {
+            var gated = c.ClockGate(c.Clock("clk", 20.Nanoseconds()), c.Input("en"), ClockStopLevel.Low, idleUs.Microseconds(), "g");
+            c.DynamicLatch(c.Input("d"), gated.High, "l");
+        });
+        var stopped = StorageIsolation.WhileStopped(StorageNodes.Of(netlist).Single())!;
+        Assert.Equal(2 * (10e-9 - 30e-12), stopped.AroundStopAndRestart.Seconds, 1e-18);
+        Assert.Equal(reported ? 1 : 0, findings.Length);
+        if (reported)
+            Assert.Contains("(declared maximum idle time: 1.34 µs, so it floats up to 1.36 µs with the clock periods around the stop and the restart)", findings[0].Message);
     }
 
     [Fact]
