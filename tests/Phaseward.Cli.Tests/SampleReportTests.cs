@@ -92,8 +92,8 @@ public sealed class SampleReportTests : IDisposable
         var chainRow = run.Out.Split('\n').Single(l => l.Contains("TOO LONG", StringComparison.Ordinal));
         Assert.Contains(elmore.ToString(), chainRow);          // the Elmore delay in PW2001's message
         Assert.Contains(pw2001.Arguments[2], chainRow);
-        // Single-pole 50 % point: t50 = ln 2 · τ (common practice for an RC step response).
-        Assert.Contains(new Time(Math.Log(2) * elmore.Seconds).ToString(), chainRow);
+        // Single-pole 50 % point: t50 = 0.69 · τ, 0.69 ≈ ln 2 (common practice for an RC step response).
+        Assert.Contains(new Time(0.69 * elmore.Seconds).ToString(), chainRow);
 
         var housekeeping = new Housekeeping().Elaborate();
         var nodes = StorageNodes.Of(housekeeping).ToList();
