@@ -29,6 +29,10 @@ public static class Program
 
     public static int Main(string[] args)
     {
+        // The per-phase measurements under BenchmarkDotNet: everything after --bdn goes to BDN's own command line.
+        if (args.Length > 0 && args[0] == "--bdn")
+            return PhaseBenchmarkRunner.Run(args.Skip(1).ToArray());
+
         Settings settings;
         try
         {

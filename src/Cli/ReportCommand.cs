@@ -61,9 +61,17 @@ internal static class ReportCommand
             if (line.UseEditorConfig)
             {
                 // A project's list is the compiler's own; an assembly's is found above its sources, as the SDK finds it.
-                configuration = ReportConfiguration.Load(built?.AnalyzerConfigFiles
-                    ?? AnalyzerConfigFiles.Above(DesignSources.FoldersOf(anchors.Select(a => a.Path)
-                        .Concat(elaborated.SelectMany(e => e.Netlist.Devices.Select(d => d.Span.Path))))));
+                var sourceFolders = DesignSources.FoldersOf(anchors.Select(a => a.Path)
+                    .Concat(elaborated.SelectMany(e => e.Netlist.Devices.Select(d => d.Span.Path))));
+                configuration = ReportConfiguration.Load(built?.AnalyzerConfigFiles ?? AnalyzerConfigFiles.Above(sourceFolders));
+                // An assembly built with PathMap (as CI builds with ContinuousIntegrationBuild do) or on another machine
+                // names source folders that are not here: no configuration can be found for them, which must not pass
+                // for "the defaults are the policy".
+                if (built is null && sourceFolders.Count > 0 && !sourceFolders.Any(Directory.Exists))
+                    stderr.WriteLine($"phaseward-report: warning: the design's source folders (such as '{sourceFolders[0]}') are not on this "
+                        + "machine (the assembly was built with PathMap, or elsewhere), so no .editorconfig or .globalconfig was read: "
+                        + "severities and options are the defaults and the command line's. Pass the project instead of the assembly "
+                        + "to read its configuration, or --no-editorconfig to use the defaults without this warning.");
             }
 
             var policy = new ReportPolicy(configuration, built?.Warnings);

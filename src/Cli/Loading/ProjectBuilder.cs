@@ -3,6 +3,7 @@ using System.Collections.Generic;
 using System.Diagnostics;
 using System.IO;
 using System.Linq;
+using System.Security;
 using System.Text;
 using System.Text.Json;
 using Phaseward.Checking;
@@ -28,7 +29,8 @@ internal static class ProjectBuilder
 
     /// <summary>
     /// Builds <paramref name="project"/> (Debug, so that run-time source lines come with it) with every Phaseward rule in
-    /// NoWarn, through a targets file MSBuild imports after the project's own settings (the project's NoWarn is kept).
+    /// NoWarn, through a targets file MSBuild imports after the project's own settings (the project's NoWarn is kept, and
+    /// so is a CustomAfterMicrosoftCommonTargets file of the project's, imported from it).
     /// The user's compile errors still fail it: an input error listing them.
     /// </summary>
     public static BuiltProject Build(string project, string artifactsPath, TextWriter log)
@@ -36,9 +38,20 @@ internal static class ProjectBuilder
         log.WriteLine($"Building {project} ...");
         var common = $"\"{project}\" -nologo -p:Configuration=Debug -p:UseArtifactsOutput=true \"-p:ArtifactsPath={artifactsPath}\"";
         var keepGoing = Path.Combine(artifactsPath, "phaseward-report.targets");
+        // The file goes in through CustomAfterMicrosoftCommonTargets, a global property that replaces the project's own
+        // value: a targets file the project (or its Directory.Build.props) puts there is imported from ours, first.
+        var (userExit, userQuery) = Run($"msbuild {common} -getProperty:CustomAfterMicrosoftCommonTargets", Path.GetDirectoryName(project)!);
+        var userTargets = userExit == 0
+            ? userQuery.Split('\n', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries).LastOrDefault() ?? string.Empty
+            : string.Empty;
+        if (userTargets.Length > 0)
+            userTargets = Path.GetFullPath(userTargets, Path.GetDirectoryName(project)!);
+        var chained = userTargets.Length == 0 ? string.Empty
+            : $"<Import Project=\"{SecurityElement.Escape(userTargets)}\" Condition=\"Exists('{SecurityElement.Escape(userTargets)}')\" />";
         File.WriteAllText(keepGoing, $"""
             <Project>
               <!-- Written by phaseward-report for its own build of the design: Phaseward's findings must not stop it. -->
+              {chained}
               <PropertyGroup>
                 <NoWarn>$(NoWarn);{string.Join(";", RuleCatalog.All.Select(r => r.Id))}</NoWarn>
               </PropertyGroup>

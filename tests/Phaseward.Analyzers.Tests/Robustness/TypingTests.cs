@@ -3,13 +3,16 @@ using System.Collections.Generic;
 using System.Linq;
 using System.Text;
 using System.Threading.Tasks;
+using CsCheck;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp;
+using Phaseward.Tests.Properties;
 
 namespace Phaseward.Analyzers.Tests.Robustness;
 
 /// <summary>
-/// Every sample file as it is being typed (prefixes, sampled), and seeded random token-level mutations of the samples:
+/// Every sample file as it is being typed (prefixes, sampled), and random token-level mutations of the samples (drawn
+/// by CsCheck, shrunk on failure):
 /// the analyzers never throw (AD0001), never fail inside the elaborator, and never hang. The other sample files stay
 /// whole, as in the editor.
 /// </summary>
@@ -41,39 +44,49 @@ public class TypingTests
             await AnalyseVariant(baseline, tree, text.Substring(0, cut), $"{path} cut at {cut} of {text.Length}");
     }
 
+    // The mutations are drawn by CsCheck from a choice sequence (Phaseward.Tests' ChoiceSequence): a mutation that makes
+    // an analyzer fail is shrunk to fewer, earlier edits and reported with the seed that reproduces it (CsCheck_Seed).
     [Theory]
     [MemberData(nameof(SampleFiles))]
-    public async Task RandomTokenMutationsOfASample(string path)
+    public void RandomTokenMutationsOfASample(string path)
     {
         var (baseline, tree, text) = Setup(path);
         var tokens = tree.GetRoot().DescendantTokens().Where(t => t.Span.Length > 0).ToList();
-        var random = new Random(Seed(path) ^ 0x5EED);
-        for (var n = 0; n < MutationsPerFile; n++)
-        {
-            var edits = new List<(int Start, int Length, string Text)>();
-            var count = 1 + random.Next(3);
-            var describe = new StringBuilder();
-            for (var k = 0; k < count; k++)
+        ChoiceSequence.Of(12).Sample(
+            choices =>
             {
-                var token = tokens[random.Next(tokens.Count)];
-                var other = tokens[random.Next(tokens.Count)].Text;
-                switch (random.Next(5))
-                {
-                    case 0: edits.Add((token.SpanStart, token.Span.Length, "")); describe.Append($" delete '{token.Text}'@{token.SpanStart}"); break;
-                    case 1: edits.Add((token.SpanStart, 0, token.Text + " ")); describe.Append($" duplicate '{token.Text}'@{token.SpanStart}"); break;
-                    case 2: edits.Add((token.SpanStart, token.Span.Length, other)); describe.Append($" replace '{token.Text}'@{token.SpanStart} by '{other}'"); break;
-                    case 3: edits.Add((token.SpanStart, 0, other + " ")); describe.Append($" insert '{other}'@{token.SpanStart}"); break;
-                    default:
-                        var next = token.GetNextToken();
-                        if (next.Span.Length == 0) goto case 0;
-                        edits.Add((token.SpanStart, next.Span.End - token.SpanStart, next.Text + text.Substring(token.Span.End, next.SpanStart - token.Span.End) + token.Text));
-                        describe.Append($" swap '{token.Text}' '{next.Text}'@{token.SpanStart}");
-                        break;
-                }
-            }
+                var (variant, describe) = Mutate(new ChoiceSequence(choices), text, tokens);
+                AnalyseVariant(baseline, tree, variant, $"{path} mutation:{describe}").GetAwaiter().GetResult();
+            },
+            iter: MutationsPerFile, threads: 1, print: choices => Mutate(new ChoiceSequence(choices), text, tokens).Describe);
+    }
 
-            await AnalyseVariant(baseline, tree, Apply(text, edits), $"{path} mutation {n}:{describe}");
+    /// <summary>One to three token edits (delete, duplicate, replace, insert, swap with the next token).</summary>
+    private static (string Variant, string Describe) Mutate(Random random, string text, List<SyntaxToken> tokens)
+    {
+        var edits = new List<(int Start, int Length, string Text)>();
+        var count = 1 + random.Next(3);
+        var describe = new StringBuilder();
+        for (var k = 0; k < count; k++)
+        {
+            var token = tokens[random.Next(tokens.Count)];
+            var other = tokens[random.Next(tokens.Count)].Text;
+            switch (random.Next(5))
+            {
+                case 0: edits.Add((token.SpanStart, token.Span.Length, "")); describe.Append($" delete '{token.Text}'@{token.SpanStart}"); break;
+                case 1: edits.Add((token.SpanStart, 0, token.Text + " ")); describe.Append($" duplicate '{token.Text}'@{token.SpanStart}"); break;
+                case 2: edits.Add((token.SpanStart, token.Span.Length, other)); describe.Append($" replace '{token.Text}'@{token.SpanStart} by '{other}'"); break;
+                case 3: edits.Add((token.SpanStart, 0, other + " ")); describe.Append($" insert '{other}'@{token.SpanStart}"); break;
+                default:
+                    var next = token.GetNextToken();
+                    if (next.Span.Length == 0) goto case 0;
+                    edits.Add((token.SpanStart, next.Span.End - token.SpanStart, next.Text + text.Substring(token.Span.End, next.SpanStart - token.Span.End) + token.Text));
+                    describe.Append($" swap '{token.Text}' '{next.Text}'@{token.SpanStart}");
+                    break;
+            }
         }
+
+        return (Apply(text, edits), describe.ToString());
     }
 
     private static async Task AnalyseVariant(CSharpCompilation baseline, SyntaxTree original, string variant, string what)

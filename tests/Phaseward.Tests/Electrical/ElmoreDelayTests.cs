@@ -1,5 +1,8 @@
 using System;
+using System.Linq;
+using CsCheck;
 using Phaseward.Electrical;
+using Phaseward.Tests.Properties;
 using Phaseward.Tests.Reference;
 
 namespace Phaseward.Tests.Electrical;
@@ -65,24 +68,32 @@ public class ElmoreDelayTests
     [Fact]
     public void Two_pass_algorithm_equals_the_shared_path_resistance_sum_on_random_trees()
     {
-        var random = new Random(20240611);
-        for (var trial = 0; trial < 50; trial++)
+        // Trees drawn by CsCheck from a choice sequence: a failure shrinks to a small tree, printed with its seed.
+        ChoiceSequence.Of(200).Sample(choices =>
         {
-            var n = random.Next(1, 60);
-            var tree = new RcTree(new Resistance(random.Next(100, 10000)), new Capacitance(random.Next(1, 30) * 1e-15));
-            for (var i = 1; i < n; i++)
-                tree.AddBranch(random.Next(0, i), new Resistance(random.Next(100, 20000)), new Capacitance(random.Next(0, 30) * 1e-15));
-
+            var tree = RandomTree(new ChoiceSequence(choices));
             var delays = ElmoreDelay.Compute(tree);
-            for (var i = 0; i < n; i++)
+            for (var i = 0; i < tree.Count; i++)
             {
                 var sum = 0.0;
-                for (var j = 0; j < n; j++)
+                for (var j = 0; j < tree.Count; j++)
                     sum += tree.CapacitanceOf(j).Farads * SharedResistance(tree, i, j);
                 Assert.Equal(sum, delays[i].Seconds, Math.Max(1e-24, sum * 1e-12));
             }
-        }
+        }, iter: 200, print: choices => DescribeTree(RandomTree(new ChoiceSequence(choices))));
     }
+
+    private static RcTree RandomTree(Random random)
+    {
+        var n = random.Next(1, 60);
+        var tree = new RcTree(new Resistance(random.Next(100, 10000)), new Capacitance(random.Next(1, 30) * 1e-15));
+        for (var i = 1; i < n; i++)
+            tree.AddBranch(random.Next(0, i), new Resistance(random.Next(100, 20000)), new Capacitance(random.Next(0, 30) * 1e-15));
+        return tree;
+    }
+
+    private static string DescribeTree(RcTree tree)
+        => string.Join("; ", Enumerable.Range(0, tree.Count).Select(i => $"{i}<-{tree.ParentOf(i)} {tree.ResistanceOf(i)} {tree.CapacitanceOf(i)}"));
 
     [Fact]
     public void Bad_input_names_the_argument_and_the_value()

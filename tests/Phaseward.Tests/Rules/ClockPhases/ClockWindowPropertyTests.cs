@@ -1,8 +1,10 @@
 using System;
 using System.Collections.Generic;
 using System.Linq;
+using CsCheck;
 using Phaseward.Checking;
 using Phaseward.Rules.ClockPhases;
+using Phaseward.Tests.Properties;
 
 namespace Phaseward.Tests.Rules.ClockPhases;
 
@@ -11,7 +13,8 @@ namespace Phaseward.Tests.Rules.ClockPhases;
 /// (library cells, hand-built dynamic, keeper and static latches, registers, two-register synchronizers) on random
 /// phases of one to three root clocks (periods of 1, 2 or 3 ns, or 1.414 ns, with offsets; some declared independent)
 /// and their gated and buffered copies, joined by random logic (inverters, buffers, NANDs, data-controlled pass gates,
-/// loops included), are built twice: as a netlist through the DSL, and as an abstract model that knows only "latch on
+/// loops included), drawn by CsCheck from a choice sequence (<see cref="ChoiceSequence"/>, so a failure shrinks), are
+/// built twice: as a netlist through the DSL, and as an abstract model that knows only "latch on
 /// (clock, polarity) fed by this signal", "gate fed by these signals" and each clock's figures.
 /// </summary>
 /// <remarks>
@@ -52,36 +55,91 @@ public class ClockWindowPropertyTests
         public List<AbstractGate> Gates { get; } = new();
     }
 
+    // Sequences long enough for the largest pipelines (about 100 choices); shorter ones make smaller designs.
+    private static readonly Gen<int[]> Pipelines = ChoiceSequence.Of(160);
+
+    private static readonly Rule[] Rules = { new SameWindowLatchesRule(), new OverlapRaceRule(), new ClockCrossingRule() };
+
     [Fact]
     public void Pw1001Pw1002AndPw1003FireExactlyWhereTheSampledWaveformsSayTheyShould()
     {
         var seen = new Dictionary<string, int> { ["PW1001"] = 0, ["PW1002"] = 0, ["PW1003"] = 0 };
         var clean = 0;
-        var policy = new RulePolicy { MinimumRaceMargin = 1.Seconds() };
-        for (var seed = 1; seed <= 300; seed++)
+        var samples = 0;
+        // CsCheck draws the pipelines (a fresh seed each run); a failure is shrunk to a small pipeline and reported
+        // with the seed that reproduces it (CsCheck_Seed).
+        Pipelines.Sample(choices =>
         {
-            var (circuit, model) = Generate(new Random(seed), seed);
-            var expected = Expected(model);
-            var netlist = circuit.ToNetlist();
-            var actual = new HashSet<(string, string, string)>();
-            foreach (var rule in new Rule[] { new SameWindowLatchesRule(), new OverlapRaceRule(), new ClockCrossingRule() })
+            var expected = CheckPipeline(choices, Rules);
+            lock (seen)
             {
-                foreach (var f in rule.Check(new RuleContext(netlist, policy)))
-                    Assert.True(actual.Add((f.RuleId, f.Properties[FindingPropertyKeys.SourceLatch], f.Properties[FindingPropertyKeys.TargetLatch])),
-                        $"seed {seed}: {f.RuleId} reported a pair twice");
+                samples++;
+                foreach (var id in expected.Select(e => e.Item1).Distinct()) seen[id]++;
+                if (expected.Count == 0) clean++;
             }
-
-            var missing = expected.Except(actual).ToArray();
-            var extra = actual.Except(expected).ToArray();
-            Assert.True(missing.Length == 0 && extra.Length == 0,
-                $"seed {seed}: missing [{string.Join(", ", missing)}], extra [{string.Join(", ", extra)}]\n{netlist}");
-            foreach (var id in expected.Select(e => e.Item1).Distinct()) seen[id]++;
-            if (expected.Count == 0) clean++;
-        }
+        }, iter: 400, print: Describe);
 
         // Every outcome must be well represented, or the comparison proves little.
+        Assert.Equal(400, samples);
         Assert.All(seen, pair => Assert.True(pair.Value >= 30, $"only {pair.Value} pipelines with {pair.Key} ({string.Join(", ", seen)}, {clean} clean)"));
         Assert.True(clean >= 5, $"only {clean} clean pipelines");
+    }
+
+    // A test of the test: a PW1001 rule with a planted bug (it drops a latch fed back into itself in its own phase, a
+    // case the simulation does report) must make the property fail, and CsCheck must report a shrunk pipeline of a
+    // latch or two rather than the large random one it first met, with the seed that reproduces it.
+    [Fact]
+    public void A_broken_rule_fails_the_property_with_a_shrunk_pipeline_and_its_seed()
+    {
+        var broken = new Rule[] { new SelfLoopBlindSameWindowRule(), new OverlapRaceRule(), new ClockCrossingRule() };
+
+        var failure = Assert.Throws<CsCheckException>(() => Pipelines.Sample(choices => { CheckPipeline(choices, broken); }, iter: 3000, print: Describe));
+
+        Assert.Contains("CsCheck_Seed", failure.Message, StringComparison.Ordinal);
+        Assert.Contains("missing [(PW1001,", failure.ToString(), StringComparison.Ordinal);
+        var latches = int.Parse(System.Text.RegularExpressions.Regex.Match(failure.Message, @"pipeline of (\d+) latch").Groups[1].Value, System.Globalization.CultureInfo.InvariantCulture);
+        Assert.InRange(latches, 1, 2);
+    }
+
+    /// <summary>Builds the pipeline the choices describe and compares the rules' findings with the simulation's.</summary>
+    private static HashSet<(string, string, string)> CheckPipeline(int[] choices, IReadOnlyList<Rule> rules)
+    {
+        var (circuit, model) = Generate(new ChoiceSequence(choices), 0);
+        var expected = Expected(model);
+        var netlist = circuit.ToNetlist();
+        var policy = new RulePolicy { MinimumRaceMargin = 1.Seconds() };
+        var actual = new HashSet<(string, string, string)>();
+        foreach (var rule in rules)
+        {
+            foreach (var f in rule.Check(new RuleContext(netlist, policy)))
+                Assert.True(actual.Add((f.RuleId, f.Properties[FindingPropertyKeys.SourceLatch], f.Properties[FindingPropertyKeys.TargetLatch])),
+                    $"{f.RuleId} reported a pair twice");
+        }
+
+        var missing = expected.Except(actual).ToArray();
+        var extra = actual.Except(expected).ToArray();
+        Assert.True(missing.Length == 0 && extra.Length == 0, $"missing [{string.Join(", ", missing)}], extra [{string.Join(", ", extra)}]");
+        return expected;
+    }
+
+    /// <summary>What CsCheck prints for a failing case: its size and the netlist, whose text names every part.</summary>
+    private static string Describe(int[] choices)
+    {
+        var sequence = new ChoiceSequence(choices);
+        var (circuit, model) = Generate(sequence, 0);
+        return $"pipeline of {model.Latches.Count} latch(es), {model.Gates.Count} gate(s), {model.Clocks.Count} clock(s) from {sequence.Used} choice(s):\n"
+            + Phaseward.Netlists.NetlistText.Write(circuit.ToNetlist(), includeSpans: false);
+    }
+
+    /// <summary>PW1001 with a planted bug: it forgets a latch whose own output comes back to its input.</summary>
+    private sealed class SelfLoopBlindSameWindowRule : Rule
+    {
+        private readonly SameWindowLatchesRule rule = new();
+
+        public override IReadOnlyList<RuleDescriptor> Descriptors => rule.Descriptors;
+
+        public override IEnumerable<Finding> Check(RuleContext context)
+            => rule.Check(context).Where(f => f.Properties[FindingPropertyKeys.SourceLatch] != f.Properties[FindingPropertyKeys.TargetLatch]);
     }
 
     private static HashSet<(string, string, string)> Expected(Model model)

@@ -1,9 +1,11 @@
 using System;
 using System.Globalization;
 using System.Linq;
+using CsCheck;
 using Phaseward.Checking;
 using Phaseward.Netlists;
 using Phaseward.Rules.ClockPhases;
+using Phaseward.Tests.Properties;
 using Phaseward.Tests.Support;
 
 namespace Phaseward.Tests.Rules.ClockPhases;
@@ -219,44 +221,50 @@ public class LoopWithoutStorageRuleTests
     {
         // Two nets are in one loop exactly when each reaches the other over loop edges (the definition of a strongly
         // connected component), computed here by a search from every net: quadratic, fine for small circuits.
-        var random = new Random(17);
+        // Circuits drawn by CsCheck from a choice sequence: a failure shrinks to a small circuit, printed with its seed.
         var loopsSeen = 0;
-        for (var trial = 0; trial < 40; trial++)
+        ChoiceSequence.Of(60).Sample(choices =>
         {
-            var c = Figures.NewCircuit("random");
-            var clk = c.Clock("clk", 1.Nanoseconds());
-            var nets = Enumerable.Range(0, 12).Select(i => c.Node($"n{i}")).ToList();
-            var driven = new bool[nets.Count];
-            for (var d = 0; d < 14; d++)
-            {
-                var output = random.Next(nets.Count);
-                var input = nets[random.Next(nets.Count)];
-                switch (random.Next(4))
-                {
-                    case 0 when !driven[output]:
-                        c.Inverter(input, nets[output]);
-                        driven[output] = true;
-                        break;
-                    case 1:
-                        c.TransmissionGate(input, nets[random.Next(nets.Count)], nets[output]);
-                        break;
-                    case 2:
-                        c.TransmissionGate(input, clk.High, nets[output]);
-                        break;
-                }
-            }
-
-            var netlist = c.ToNetlist();
+            var netlist = RandomLoopCircuit(new ChoiceSequence(choices));
             var expected = ReachabilityLoops(netlist);
             var found = CombinationalLoops.Of(netlist)
                 .Select(loop => string.Join(",", loop.Select(d => d.Id)))
                 .OrderBy(s => s, StringComparer.Ordinal)
                 .ToArray();
             Assert.Equal(expected, found);
-            loopsSeen += found.Length;
-        }
+            System.Threading.Interlocked.Add(ref loopsSeen, found.Length);
+        }, iter: 80, print: choices => Phaseward.Netlists.NetlistText.Write(RandomLoopCircuit(new ChoiceSequence(choices)), includeSpans: false));
 
         Assert.True(loopsSeen > 10, $"The random circuits held only {loopsSeen} loops.");
+    }
+
+    // Twelve nodes and fourteen random devices (inverters, data- and clock-controlled pass gates) among them.
+    private static Netlist RandomLoopCircuit(Random random)
+    {
+        var c = Figures.NewCircuit("random");
+        var clk = c.Clock("clk", 1.Nanoseconds());
+        var nets = Enumerable.Range(0, 12).Select(i => c.Node($"n{i}")).ToList();
+        var driven = new bool[nets.Count];
+        for (var d = 0; d < 14; d++)
+        {
+            var output = random.Next(nets.Count);
+            var input = nets[random.Next(nets.Count)];
+            switch (random.Next(4))
+            {
+                case 0 when !driven[output]:
+                    c.Inverter(input, nets[output]);
+                    driven[output] = true;
+                    break;
+                case 1:
+                    c.TransmissionGate(input, nets[random.Next(nets.Count)], nets[output]);
+                    break;
+                case 2:
+                    c.TransmissionGate(input, clk.High, nets[output]);
+                    break;
+            }
+        }
+
+        return c.ToNetlist();
     }
 
     private static string[] ReachabilityLoops(Netlist netlist)
