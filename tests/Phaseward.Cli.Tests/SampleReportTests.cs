@@ -5,6 +5,7 @@ using System.Linq;
 using System.Xml.Linq;
 using Phaseward.Checking;
 using Phaseward.Clocking;
+using Phaseward.Electrical;
 using Phaseward.Rules.PassGatePaths;
 using Phaseward.Sequencing;
 using Phaseward.Storage;
@@ -55,7 +56,7 @@ public sealed class SampleReportTests : IDisposable
     {
         var run = Of(QuorvaneDll, "--design", nameof(PressureSampler));
         var netlist = new PressureSampler().Elaborate();
-        var figures = TimingFigures.For(netlist);
+        var figures = TimingFigures.For(netlist, Corner.Slow); // the report draws and tabulates the slow corner the setup checks use
         var lines = run.Out.Split('\n');
 
         Assert.NotEmpty(figures.Latches);
@@ -70,6 +71,8 @@ public sealed class SampleReportTests : IDisposable
         var register = Assert.Single(figures.Registers);
         var registerRow = lines.Single(l => l.TrimStart().StartsWith(register.Name + " ", StringComparison.Ordinal) && l.Contains("rising"));
         Assert.Contains(register.ClockToOutput.ToString(), registerRow);
+        Assert.Contains("Registers (setup, clk-q: slow corner, delays ×1.3; clk-q min, hold: fast corner, delays ×0.75)", run.Out);
+        Assert.Contains(TimingFigures.For(netlist, Corner.Fast).Registers.Single().Hold.ToString(), registerRow);
 
         // Aligned: every row of the latch table puts its columns at the header's offsets.
         var header = Array.FindIndex(lines, l => l.TrimStart().StartsWith("latch ", StringComparison.Ordinal));
@@ -89,8 +92,8 @@ public sealed class SampleReportTests : IDisposable
         var chainRow = run.Out.Split('\n').Single(l => l.Contains("TOO LONG", StringComparison.Ordinal));
         Assert.Contains(elmore.ToString(), chainRow);          // the Elmore delay in PW2001's message
         Assert.Contains(pw2001.Arguments[2], chainRow);
-        // Single-pole 50 % point: t50 = ln 2 · τ (common practice for an RC step response).
-        Assert.Contains(new Time(Math.Log(2) * elmore.Seconds).ToString(), chainRow);
+        // Single-pole 50 % point: t50 = 0.69 · τ, 0.69 ≈ ln 2 (common practice for an RC step response).
+        Assert.Contains(new Time(0.69 * elmore.Seconds).ToString(), chainRow);
 
         var housekeeping = new Housekeeping().Elaborate();
         var nodes = StorageNodes.Of(housekeeping).ToList();
@@ -119,7 +122,7 @@ public sealed class SampleReportTests : IDisposable
             var diagrams = section.Descendants(Svg + "svg").Where(s => HasClass(s, "timing-diagram")).ToList();
             Assert.Equal(Output.TimingDiagram.TimeBaseGroups(netlist.Clocks.Where(c => c.Kind == ClockKind.Root)).Count, diagrams.Count);
 
-            var figures = TimingFigures.For(netlist);
+            var figures = TimingFigures.For(netlist, Corner.Slow); // the report draws and tabulates the slow corner the setup checks use
             var groups = section.Descendants(Svg + "g").Where(g => HasClass(g, "latch")).ToList();
             Assert.Equal(figures.Latches.Count, groups.Count);
             latchesChecked += figures.Latches.Count;

@@ -3,6 +3,7 @@ using System.Collections.Generic;
 using System.Linq;
 using Phaseward.Checking;
 using Phaseward.Cli.Policy;
+using Phaseward.Electrical;
 using Phaseward.Netlists;
 using Phaseward.Rules.ClockPhases;
 using Phaseward.Rules.DynamicStorage;
@@ -42,8 +43,9 @@ internal sealed class DesignReport
             .Where(f => f.Severity != ReportSeverity.None)
             .ToList();
         Suppressed = check.Findings.Count - Findings.Count;
-        Timing = TimingFigures.For(netlist);
-        RegisterChecks = RegisterPathChecks.For(Timing);
+        Timing = TimingFigures.For(netlist, Corner.Slow);
+        FastTiming = TimingFigures.For(netlist, Corner.Fast);
+        RegisterChecks = RegisterPathChecks.For(netlist);
         Borrowing = LatchBorrowing.Compute(Timing);
         Races = OverlapRaces.For(Timing.Model);
         Chains = PassGateChains.Of(netlist, policy);
@@ -67,7 +69,11 @@ internal sealed class DesignReport
     /// <summary>Findings left out because their rule's severity is none.</summary>
     public int Suppressed { get; }
 
+    /// <summary>The figures at the slow corner: setup, clock-to-output, borrowing (as the rules check them).</summary>
     public TimingFigures Timing { get; }
+
+    /// <summary>The figures at the fast corner: minimum clock-to-output and hold (as the rules check them).</summary>
+    public TimingFigures FastTiming { get; }
 
     public IReadOnlyList<RegisterPathResult> RegisterChecks { get; }
 

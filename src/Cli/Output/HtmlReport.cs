@@ -115,18 +115,19 @@ internal static class HtmlReport
 
         if (r.Timing.Registers.Count > 0)
         {
-            h.AppendLine("<h3>Registers</h3>");
+            h.AppendLine("<h3>Registers</h3><p class=\"note\">Setup and clk-q at the " + E(r.Timing.CornerText) + "; clk-q min and hold at the "
+                + E(r.FastTiming.CornerText) + ".</p>");
             Table(h, "registers", new[] { "register", "clock", "edge", "setup", "clk-q", "clk-q min", "hold", "location" },
-                r.Timing.Registers.Select(t => new[]
+                r.Timing.Registers.Zip(r.FastTiming.Registers, (t, fast) => new[]
                 {
                     E(t.Name), E(t.Clock.Name), t.Register.IsPositiveEdge ? "rising" : "falling", E(t.Setup.ToString()), E(t.ClockToOutput.ToString()),
-                    E(t.ClockToOutputMin.ToString()), E(t.Hold.ToString()), E(Describe.ShortLocation(t.Register.Span)),
+                    E(fast.ClockToOutputMin.ToString()), E(fast.Hold.ToString()), E(Describe.ShortLocation(t.Register.Span)),
                 }), numeric: new[] { 3, 4, 5, 6 });
         }
 
         if (r.Timing.Latches.Count > 0)
         {
-            h.AppendLine("<h3>Latches</h3>");
+            h.AppendLine("<h3>Latches</h3><p class=\"note\">At the " + E(r.Timing.CornerText) + ".</p>");
             Table(h, "latches", new[] { "latch", "phase", "kind", "window", "setup", "d-q", "clk-q", "hold", "location", "findings" },
                 r.Timing.Latches.Select(t => new[]
                 {

@@ -65,18 +65,18 @@ internal static class TextReport
         if (r.Timing.Registers.Count > 0)
         {
             w.WriteLine();
-            w.WriteLine("Registers");
+            w.WriteLine($"Registers (setup, clk-q: {r.Timing.CornerText}; clk-q min, hold: {r.FastTiming.CornerText})");
             var registers = new TextTable("register", "clock", "edge", ">setup", ">clk-q", ">clk-q min", ">hold", "location");
-            foreach (var t in r.Timing.Registers)
+            foreach (var (t, fast) in r.Timing.Registers.Zip(r.FastTiming.Registers, (slow, fast) => (slow, fast)))
                 registers.Add(t.Name, t.Clock.Name, t.Register.IsPositiveEdge ? "rising" : "falling", t.Setup, t.ClockToOutput,
-                    t.ClockToOutputMin, t.Hold, Describe.ShortLocation(t.Register.Span));
+                    fast.ClockToOutputMin, fast.Hold, Describe.ShortLocation(t.Register.Span));
             registers.Write(w);
         }
 
         if (r.Timing.Latches.Count > 0)
         {
             w.WriteLine();
-            w.WriteLine("Latches");
+            w.WriteLine($"Latches ({r.Timing.CornerText})");
             var latches = new TextTable("latch", "phase", "kind", "window", ">setup", ">d-q", ">clk-q", ">hold", "location", "findings");
             foreach (var t in r.Timing.Latches)
                 latches.Add(t.Name, t.Phase.Name, Describe.LatchKind(t.Latch), Describe.Window(t.Window), t.Setup, t.DataToOutput,

@@ -88,7 +88,7 @@ public static class FindingPropertyKeys
     /// wrong phase: latching the enable on the blocking phase fixes it), "false" when only the path after it is too slow.</summary>
     public const string OpensWhilePassing = "OpensWhilePassing";
 
-    /// <summary>For an enable from a latch: its entry delay plus the slowest path from its storage node to the enable (s).</summary>
+    /// <summary>For an enable from a latch: its entry delay plus the slowest path from its storage node to the enable, at the slow corner (s).</summary>
     public const string EnableDelaySeconds = "EnableDelaySeconds";
 
     /// <summary>PW1004: when the gate starts passing the clock, in the design's time base (s).</summary>

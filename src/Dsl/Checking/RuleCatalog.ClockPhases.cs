@@ -21,14 +21,14 @@ public static partial class RuleCatalog
         "PW1002", RuleFamily.ClockPhases, Severity.Warning,
         title: "Clock overlap lets data race through complementary latches",
         messageFormat: "Latch '{0}' races latch '{1}' through the {2} overlap of {3}: the fastest path takes {4} while both "
-            + "pass gates conduct together for {5}, a margin of {6}, below the required {7}",
+            + "pass gates conduct together for {5}, a margin of {6}, below the required {7} ({8})",
         description: "Two latches in series are both transparent for a short time: the 1-1 or 0-0 overlap of a clock and its "
             + "late complement, or a partial overlap of shifted or different clocks on the design's time base. "
             + "Data entering the first latch when it opens must not reach the second latch's storage node before the "
             + "second latch closes: the shortest delay through the first latch, the path and the second latch's pass "
             + "gate must exceed the overlap by at least phaseward.min_race_margin. "
             + "For a master-slave register this is t(TG1) + t(I1) + t(TG2) against the 0-0 overlap (rising-edge "
-            + "register). First-order estimate, fast corner.");
+            + "register). First-order estimate at the fast corner (every delay times the process's fast-corner factor).");
 
     /// <summary>Data crosses between clocks with no fixed time relation without a synchronizer.</summary>
     public static RuleDescriptor ClockCrossing { get; } = new(
@@ -55,7 +55,7 @@ public static partial class RuleCatalog
             + "(latest data through that storage plus the path) before the clock rises; the mirror holds for a gate "
             + "that stops high. Primary inputs are taken as stable unless phaseward.clock_gate_inputs_may_change is "
             + "true. Latch the enable on the phase in which the gate blocks the clock. The enable path's delay is a first-order "
-            + "estimate.");
+            + "estimate at the slow corner (every delay times the process's slow-corner factor).");
 
     /// <summary>A feedback loop through restoring stages and data-controlled pass gates with no latch on it.</summary>
     public static RuleDescriptor LoopWithoutStorage { get; } = new(

@@ -8,22 +8,25 @@ public static partial class RuleCatalog
         "PW3001", RuleFamily.DynamicStorage, Severity.Warning,
         title: "Dynamic node on a clock that can be gated off",
         messageFormat: "Dynamic node '{0}' floats while gated clock '{1}' is stopped {2} (declared maximum idle time: {3}), but "
-            + "keeps its level only {4} (C·ΔV/I_leak with C = {5}, ΔV = {6}, I_leak = {7})",
+            + "keeps its level only {4} (C·ΔV/I_leak with C = {5}, ΔV = {6}, I_leak = {7} at the hot corner)",
         description: "A node driven only through pass devices, with no keeper or restoring feedback, holds its bit as charge. "
             + "When its clock gate stops the clock at a level that turns every driver off, leakage drains the node for "
             + "as long as the clock stays off; if the gate declares no maximum idle time, or one longer than the "
-            + "node's retention time C·ΔV/I_leak, the bit can be lost. First-order, linear estimate.");
+            + "node's retention time C·ΔV/I_leak, the bit can be lost. ΔV is what the node's droop allowance leaves after the "
+            + "worst charge sharing on it (one budget per node, shared with PW3003). First-order, linear estimate with the "
+            + "hot-corner leakage.");
 
     /// <summary>A running clock leaves a dynamic storage node floating for longer than it retains its level.</summary>
     public static RuleDescriptor ClockTooSlowForDynamicStorage { get; } = new(
         "PW3002", RuleFamily.DynamicStorage, Severity.Warning,
         title: "Clock too slow for dynamic storage",
         messageFormat: "Dynamic node '{0}' floats for up to {1} of every {2} period of clock '{3}', longer than its retention "
-            + "time {4} (C·ΔV/I_leak with C = {5}, ΔV = {6}, I_leak = {7}); run the clock at {8} or faster",
+            + "time {4} (C·ΔV/I_leak with C = {5}, ΔV = {6}, I_leak = {7} at the hot corner); run the clock at {8} or faster",
         description: "A dynamic node is refreshed only while one of its pass devices conducts. "
             + "With the clock running, the longest stretch of each period in which all of them are off (from the "
-            + "period, duty and complement skew) must be shorter than the node's retention time C·ΔV/I_leak. "
-            + "First-order, linear estimate.");
+            + "period, duty and complement skew) must be shorter than the node's retention time C·ΔV/I_leak, ΔV being what "
+            + "the node's droop allowance leaves after the worst charge sharing on it (one budget per node, shared with "
+            + "PW3003). First-order, linear estimate with the hot-corner leakage.");
 
     /// <summary>A pass device joins a charged floating node to another floating node and the shared level droops too far.</summary>
     public static RuleDescriptor ChargeSharing { get; } = new(
@@ -35,7 +38,9 @@ public static partial class RuleCatalog
             + "between them: the level settles at V·C1/(C1+C2), a droop of V·C2/(C1+C2) in the worst case (the other "
             + "node at the opposite level). C2 also counts the floating nodes one pass gate away from the other node "
             + "whose gates may conduct at the same time (not provably exclusive: state Circuit.Exclusive for one-hot "
-            + "selects). First-order estimate by conservation of charge.");
+            + "selects). Reported when the droop exceeds the node's droop allowance (the process's tolerated droop, by "
+            + "default a quarter of the supply); what it leaves of the allowance is what leakage may take (PW3001, "
+            + "PW3002). First-order estimate by conservation of charge.");
 
     /// <summary>Two or more conducting paths drive one net at the same time.</summary>
     public static RuleDescriptor FightingDrivers { get; } = new(

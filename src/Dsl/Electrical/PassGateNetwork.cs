@@ -182,7 +182,7 @@ internal sealed class PassGateNetwork
     /// The Elmore term of one restoring stage or pass gate on a conducting path, in the worst case: its resistance
     /// times everything it charges (a restoring stage: its output net and the pass-gate branches that may conduct from
     /// it; a pass gate: <see cref="ChargedThrough"/>). Summed along a path, the terms make the path's Elmore delay with
-    /// its side loads; a 50 % estimate multiplies it by ln 2 (<see cref="FiftyPercentDelay"/>).
+    /// its side loads; a 50 % estimate multiplies it by 0.69 ≈ ln 2 (<see cref="FiftyPercentDelay"/>).
     /// </summary>
     public Time ElmoreTerm(Device device)
     {

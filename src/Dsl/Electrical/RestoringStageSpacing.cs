@@ -7,18 +7,19 @@ namespace Phaseward.Electrical;
 /// How often a chain of pass gates should be broken by a restoring stage (an inverter or buffer), and how fast the
 /// restored chain is. First-order model: every gate has on-resistance R, every node capacitance C, a restoring stage
 /// costs its intrinsic delay t_buf, and each unrestored segment of m gates is a uniform RC ladder whose 50 % delay is
-/// ln 2 · R·C · m(m+1)/2 (its Elmore delay N(N+1)/2·RC scaled by the single-pole factor).
+/// 0.69 · R·C · m(m+1)/2 (its Elmore delay m(m+1)/2·RC scaled by the single-pole factor 0.69 ≈ ln 2,
+/// <see cref="FiftyPercentDelay.SinglePoleFactor"/>).
 /// </summary>
 /// <remarks>
 /// Where the 1.7 comes from. A chain of N gates restored every m gates has N/m segments, each an m-section ladder
 /// followed by a restoring stage:
 /// <code>
-///   t(m) = (N/m) · (k·R·C·m(m+1)/2 + t_buf),           k = ln 2 ≈ 0.69
+///   t(m) = (N/m) · (k·R·C·m(m+1)/2 + t_buf),           k = 0.69 ≈ ln 2
 ///        = N · (k·R·C·(m+1)/2 + t_buf/m)
 ///   dt/dm = N · (k·R·C/2 − t_buf/m²) = 0
 ///   m_opt = sqrt(2·t_buf / (k·R·C)) = sqrt(2/k) · sqrt(t_buf/(R·C))
 /// </code>
-/// and sqrt(2/ln 2) = 1.699 (sqrt(2/0.69) = 1.703), hence m_opt ≈ 1.7·sqrt(t_buf/(R·C)). d²t/dm² = 2·N·t_buf/m³ &gt; 0,
+/// and sqrt(2/0.69) = 1.703 (sqrt(2/ln 2) = 1.699), hence m_opt ≈ 1.7·sqrt(t_buf/(R·C)). d²t/dm² = 2·N·t_buf/m³ &gt; 0,
 /// so this is the minimum, and t(m_opt) = N·(k·R·C/2 + sqrt(2·k·R·C·t_buf)): linear in N, where the unrestored
 /// chain grows as N². The same derivation, with m_opt = 1.7·sqrt(t_buf/(C·R_eq)), is in J. M. Rabaey,
 /// A. Chandrakasan, B. Nikolić, "Digital Integrated Circuits: A Design Perspective", 2nd ed., ch. 6 (transmission-gate
@@ -26,10 +27,10 @@ namespace Phaseward.Electrical;
 /// </remarks>
 public static class RestoringStageSpacing
 {
-    /// <summary>sqrt(2 / ln 2) ≈ 1.70, the coefficient of sqrt(t_buf/(R·C)) in the optimum spacing.</summary>
+    /// <summary>sqrt(2 / 0.69) ≈ 1.70, the coefficient of sqrt(t_buf/(R·C)) in the optimum spacing.</summary>
     public static readonly double Coefficient = Math.Sqrt(2.0 / FiftyPercentDelay.SinglePoleFactor);
 
-    /// <summary>The continuous optimum m_opt = sqrt(2·t_buf/(ln 2·R·C)) ≈ 1.7·sqrt(t_buf/(R·C)).</summary>
+    /// <summary>The continuous optimum m_opt = sqrt(2·t_buf/(0.69·R·C)) ≈ 1.7·sqrt(t_buf/(R·C)).</summary>
     public static double OptimalSpacing(Time stageDelay, Resistance resistance, Capacitance capacitance)
     {
         Check(stageDelay, resistance, capacitance);
@@ -50,7 +51,7 @@ public static class RestoringStageSpacing
     }
 
     /// <summary>
-    /// t(m) = (N/m)·(ln 2·R·C·m(m+1)/2 + t_buf): the 50 % delay of <paramref name="gates"/> gates restored every
+    /// t(m) = (N/m)·(0.69·R·C·m(m+1)/2 + t_buf): the 50 % delay of <paramref name="gates"/> gates restored every
     /// <paramref name="spacing"/> gates (the model's continuous form; <paramref name="spacing"/> need not divide N).
     /// </summary>
     public static Time BufferedChainDelay(int gates, double spacing, Resistance resistance, Capacitance capacitance, Time stageDelay)
@@ -63,6 +64,43 @@ public static class RestoringStageSpacing
         Guard.Positive(resistance.Ohms, nameof(resistance), "Ω");
         Guard.NonNegative(capacitance.Farads, nameof(capacitance), "F");
         return new Time(gates * PerGateDelay(spacing, stageDelay, resistance, capacitance));
+    }
+
+    /// <summary>
+    /// The 50 % delay of an actual chain of <paramref name="gates"/> gates with a restoring stage after every
+    /// <paramref name="spacing"/> gates, counted as the unrestored chain's figure is: the same driver
+    /// (<paramref name="driver"/> charging the input net <paramref name="inputNet"/> and the first segment), whole
+    /// segments (⌈N/m⌉ of them, the last one the remainder) and one restoring stage between segments (⌈N/m⌉ − 1 of
+    /// them: the unrestored chain has none at its end either):
+    /// <code>
+    ///   t = k·R_drv·(C_in + m₁·C) + Σ_segments k·R·C·m_j(m_j + 1)/2 + (⌈N/m⌉ − 1)·t_buf,     k = 0.69
+    /// </code>
+    /// First order: a restoring stage costs its intrinsic delay t_buf (its input and output loads are in it).
+    /// </summary>
+    public static Time RestoredChainDelay(int gates, int spacing, Resistance resistance, Capacitance capacitance, Time stageDelay,
+        Resistance driver, Capacitance inputNet)
+    {
+        if (gates < 1)
+            throw new ArgumentOutOfRangeException(nameof(gates), gates, $"'{nameof(gates)}' must be at least 1 (was {gates}).");
+        if (spacing < 1)
+            throw new ArgumentOutOfRangeException(nameof(spacing), spacing, $"'{nameof(spacing)}' must be at least 1 (was {spacing}).");
+        Guard.Positive(stageDelay.Seconds, nameof(stageDelay), "s");
+        Guard.Positive(resistance.Ohms, nameof(resistance), "Ω");
+        Guard.NonNegative(capacitance.Farads, nameof(capacitance), "F");
+        Guard.NonNegative(driver.Ohms, nameof(driver), "Ω");
+        Guard.NonNegative(inputNet.Farads, nameof(inputNet), "F");
+        var k = FiftyPercentDelay.SinglePoleFactor;
+        var rc = (resistance * capacitance).Seconds;
+        var segments = (gates + spacing - 1) / spacing;
+        var first = Math.Min(spacing, gates);
+        var seconds = k * driver.Ohms * (inputNet.Farads + first * capacitance.Farads) + (segments - 1) * stageDelay.Seconds;
+        for (var left = gates; left > 0; left -= spacing)
+        {
+            var m = Math.Min(spacing, left);
+            seconds += k * rc * m * (m + 1) / 2.0;
+        }
+
+        return new Time(seconds);
     }
 
     /// <summary>

@@ -1,6 +1,7 @@
 using System;
 using System.Collections.Generic;
 using Phaseward.Checking;
+using Phaseward.Electrical;
 using Phaseward.Netlists;
 using Phaseward.Rules.ClockPhases;
 using Phaseward.Sequencing;
@@ -70,6 +71,7 @@ internal static class ClockGateDeck
         var end = enableAt + period * 2;
 
         var deck = new DeckWriter(finding, netlist);
+        deck.AtCorner(Corner.Slow);
         deck.Describe($"Sub-circuit: clock gate '{gate.Name}' on clock '{source.Name}' (it stops {(stopsLow ? "low" : "high")}, so it passes the clock while it is {(stopsLow ? "high" : "low")}), drawn as its logic function"
             + (latch is null ? $", and its enable '{enable.Name}' driven directly." : $", and the enable's storage: latch '{latch.Name}' (entry '{latch.EntryGates[0].Name}' on {latch.Phase.Name}, storage '{latch.Storage.Name}') and the path from it to '{enable.Name}'."));
         deck.Describe(latch is null

@@ -3,6 +3,7 @@ using System.Collections.Generic;
 using System.Globalization;
 using System.Text;
 using Phaseward.Checking;
+using Phaseward.Electrical;
 using Phaseward.Netlists;
 
 namespace Phaseward.Reproducers;
@@ -25,6 +26,7 @@ internal sealed class DeckWriter
     private readonly HashSet<string> capacitorsOn = new(StringComparer.OrdinalIgnoreCase);
     private string analysis = string.Empty;
     private int elementCount;
+    private Corner corner = Corner.Nominal;
 
     public DeckWriter(Finding finding, Netlist netlist)
     {
@@ -37,6 +39,16 @@ internal sealed class DeckWriter
     public double Supply { get; }
 
     public Netlist Netlist => netlist;
+
+    /// <summary>The factor every on-resistance of the deck takes: the corner the finding's figures are at.</summary>
+    public double DelayFactor => netlist.Process.DelayFactor(corner);
+
+    /// <summary>Simulates at <paramref name="atCorner"/>: every on-resistance the deck draws is the design's figure times
+    /// the corner's factor, as the rule's first-order delays are (set before drawing any element).</summary>
+    public void AtCorner(Corner atCorner) => corner = atCorner;
+
+    /// <summary>A nominal on-resistance at the deck's corner.</summary>
+    public Resistance AtCorner(Resistance nominal) => nominal * DelayFactor;
 
     /// <summary>A line of the header explaining what this deck reproduces and how.</summary>
     public void Describe(string line) => description.Add(line);
@@ -72,7 +84,7 @@ internal sealed class DeckWriter
 
     /// <summary>A pass device as the <c>pw_tg</c> switch with its on-resistance, conducting while <paramref name="control"/> is above vdd/2.</summary>
     public void PassGate(Device device, string from, string to, string control)
-        => elements.Add($"X{++elementCount}_{Safe(device.Name)} {from} {to} {control} pw_tg ron={SpiceNumbers.Of(netlist.ResistanceOf(device).Ohms)}   $ {device.Kind} '{device.Name}' ({ControlText(device)})");
+        => elements.Add($"X{++elementCount}_{Safe(device.Name)} {from} {to} {control} pw_tg ron={SpiceNumbers.Of(AtCorner(netlist.ResistanceOf(device)).Ohms)}   $ {device.Kind} '{device.Name}' ({ControlText(device)})");
 
     /// <summary>A restoring stage: its logic function (other inputs at their non-controlling level) behind its output resistance.</summary>
     public void RestoringStage(Device device, string input, string output)
@@ -82,7 +94,7 @@ internal sealed class DeckWriter
             DeviceKind.Buffer => "pw_buf",
             _ => "pw_inv", // an inverter, or a NAND/NOR with its other inputs at the non-controlling level: it inverts the path's input
         };
-        elements.Add($"X{++elementCount}_{Safe(device.Name)} {input} {output} {model} r={SpiceNumbers.Of(netlist.ResistanceOf(device).Ohms)}   $ {device.Kind} '{device.Name}'"
+        elements.Add($"X{++elementCount}_{Safe(device.Name)} {input} {output} {model} r={SpiceNumbers.Of(AtCorner(netlist.ResistanceOf(device)).Ohms)}   $ {device.Kind} '{device.Name}'"
             + (device.Inputs.Count > 1 ? " (its other inputs held at the level that lets the path through)" : string.Empty));
     }
 
@@ -139,6 +151,9 @@ internal sealed class DeckWriter
         foreach (var line in Wrap("Message: " + finding.Message))
             text.Append("* ").AppendLine(line);
         text.Append("* Process: ").AppendLine(netlist.Process.Name);
+        if (corner != Corner.Nominal)
+            text.Append("* Corner: ").Append(CornerText.Of(netlist.Process, corner))
+                .AppendLine(" (every on-resistance below is the design's figure times this factor, as the rule's delays are)");
         text.AppendLine("*");
         foreach (var line in Wrap(Caution))
             text.Append("* ").AppendLine(line);

@@ -1,6 +1,7 @@
 using System;
 using Phaseward.Checking;
 using Phaseward.Clocking;
+using Phaseward.Electrical;
 using Phaseward.Netlists;
 using Phaseward.Rules.ClockPhases;
 using Phaseward.Rules.Timing;
@@ -21,7 +22,7 @@ internal static class LatchBorrowingDeck
     {
         var targetName = DeckInputs.Property(finding, FindingPropertyKeys.TargetLatch);
         var sourceName = DeckInputs.Property(finding, FindingPropertyKeys.SourceLatch);
-        var figures = TimingFigures.For(netlist);
+        var figures = TimingFigures.For(netlist, Corner.Slow);
         LatchArrival? arrival = null;
         foreach (var candidate in LatchBorrowing.Compute(figures))
             if (candidate.Path.From.Name == sourceName && candidate.Path.To.Name == targetName)
@@ -48,6 +49,7 @@ internal static class LatchBorrowingDeck
         var end = opensB + Time.Max(windowB.Length, arrival.Arrival) + period;
 
         var deck = new DeckWriter(finding, netlist);
+        deck.AtCorner(Corner.Slow);
         deck.Describe($"Sub-circuit: latch '{a.Name}' (entry '{entryA.Name}' on {a.Phase.Name}, storage '{a.Storage.Name}'), the path of {stages.Count} stage(s) to latch '{b.Name}' (entry '{entryB.Name}' on {entryB.ClockControl!.Name}, storage '{b.Storage.Name}').");
         deck.Describe($"Stimulus: the data reaches '{entryA.Inputs[0].Name}' at {dataAt}: '{a.Name}' opens at {opensA} and had borrowed {arrival.SourceBorrow}. '{b.Name}' opens at {opensB}.");
         deck.Describe($"Measured: t_arrival, from '{b.Name}' opening to '{entryB.Inputs[0].Name}' at vdd/2, and slack = {limit} (its window less setup and clock skew) - t_arrival.");

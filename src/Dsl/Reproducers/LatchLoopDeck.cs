@@ -2,6 +2,7 @@ using System;
 using System.Collections.Generic;
 using Phaseward.Checking;
 using Phaseward.Clocking;
+using Phaseward.Electrical;
 using Phaseward.Netlists;
 using Phaseward.Rules.ClockPhases;
 using Phaseward.Rules.Timing;
@@ -26,7 +27,7 @@ internal static class LatchLoopDeck
         var sourceName = DeckInputs.Property(finding, FindingPropertyKeys.SourceLatch);
         var model = LatchModel.Of(netlist);
         LatchLoop? loop = null;
-        foreach (var candidate in LatchBorrowing.Solve(TimingFigures.For(netlist)).DivergentLoops)
+        foreach (var candidate in LatchBorrowing.Solve(TimingFigures.For(netlist, Corner.Slow)).DivergentLoops)
             if (candidate.Paths[0].From.Name == sourceName && candidate.Paths[0].To.Name == targetName)
                 loop = candidate;
         if (loop is null)
@@ -41,6 +42,7 @@ internal static class LatchLoopDeck
         var end = opens + loop.TotalDelay + window.Period;
 
         var deck = new DeckWriter(finding, netlist);
+        deck.AtCorner(Corner.Slow);
         deck.Describe($"Sub-circuit: the latch loop {loop.Describe()} once round ({loop.Paths.Count} paths), opened at '{entryIntoFirst.Inputs[0].Name}', the input of '{first.Name}'.");
         deck.Describe($"Stimulus: the data waits at the input of '{first.Name}' from {dataAt}; '{first.Name}' opens at {opens}.");
         deck.Describe($"Measured: t_round, from that opening to the data back at '{entryIntoFirst.Inputs[0].Name}' at vdd/2 (Phaseward's loop delay {loop.TotalDelay}), and growth = t_round - {loop.TimeAllowed} (the time its phases give it). A latch on the loop that is shut when the data reaches it makes the data wait: t_round is then longer than the sum of the delays.");

@@ -2,6 +2,7 @@ using System;
 using System.Collections.Generic;
 using Phaseward.Checking;
 using Phaseward.Clocking;
+using Phaseward.Electrical;
 using Phaseward.Netlists;
 using Phaseward.Rules.ClockPhases;
 using Phaseward.Sequencing;
@@ -47,6 +48,7 @@ internal static class LatchPairDeck
         var end = dataAt + period * 2;
 
         var deck = new DeckWriter(finding, netlist);
+        deck.AtCorner(Corner.Fast); // the race model's corner
         deck.Describe($"Sub-circuit: latch '{a.Name}' (entry '{entryA.Name}' on {phaseA.Name}, storage '{a.Storage.Name}'), the path of {stages.Count} stage(s) to latch '{b.Name}' (entry '{entryB.Name}' on {phaseB.Name}, storage '{b.Storage.Name}'). Latch feedback and keepers are left out: they are off or weak while a latch is transparent.");
         deck.Describe($"Stimulus: the data at '{entryA.Inputs[0].Name}' rises just after '{a.Name}' opens in the second period (t = {dataAt}); '{b.Name}' closes at {closes}.");
         deck.Describe("Measured: t_through (data change to '" + b.Storage.Name + "' at vdd/2), b_before and b_at_close (its level before the change and when its window closes), and race_through = 1 if it switched inside the window.");
@@ -74,7 +76,7 @@ internal static class LatchPairDeck
         var data = deck.Fresh("data");
         deck.Pwl(data, new[] { (0.0, 0.0), (dataAt.Seconds, 0.0), ((dataAt + edge).Seconds, deck.Supply) }, "data changes just after the first latch opens");
         var input = deck.Node(entryA.Inputs[0]);
-        deck.Element($"R_data {data} {input} {SpiceNumbers.Of(netlist.Process.DriverResistance.Ohms)}   $ the data driven through the process's driver resistance");
+        deck.Element($"R_data {data} {input} {SpiceNumbers.Of(deck.AtCorner(netlist.Process.DriverResistance).Ohms)}   $ the data driven through the process's driver resistance");
         deck.Capacitor(input, netlist.CapacitanceOf(entryA.Inputs[0]), $"'{entryA.Inputs[0].Name}'");
         var storageA = deck.Node(a.Storage);
         deck.PassGate(entryA, input, storageA, controlA);

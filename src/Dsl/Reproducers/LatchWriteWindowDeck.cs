@@ -1,6 +1,7 @@
 using System;
 using Phaseward.Checking;
 using Phaseward.Clocking;
+using Phaseward.Electrical;
 using Phaseward.Netlists;
 using Phaseward.Rules.ClockPhases;
 using Phaseward.Rules.Timing;
@@ -44,6 +45,7 @@ internal static class LatchWriteWindowDeck
         var riseAt = opensAt - (window.Period - window.Length) / 2; // between the previous window's close and this one's opening
 
         var deck = new DeckWriter(finding, netlist);
+        deck.AtCorner(Corner.Slow);
         deck.Describe($"Sub-circuit: latch '{latch.Name}''s entry gate '{gate.Name}' ({write.Resistance}, on {phase.Name}) and its storage node '{latch.Storage.Name}' ({write.Capacitance}), drawn twice.");
         deck.Describe($"Stimulus: the data at '{gate.Inputs[0].Name}' rises at {riseAt}, while the latch is shut, and waits; the node starts at 0 V. Copy 1: the gate conducts while both of its halves are on, from {fullyOnAt} to {closesAt} ({write.FullyOn}). Copy 2: the gate stays on from {fullyOnAt}.");
         deck.Describe("Measured: v_close, copy 1's node when the window closes, and written = 1 if that is past vdd/2; t_write, copy 2's time from the gate turning on to its node at vdd/2 (Phaseward's entry delay 0.69·R·C).");

@@ -32,7 +32,7 @@ internal static class PassGateChainDeck
 
         var deck = new DeckWriter(finding, netlist);
         deck.Describe($"Sub-circuit: the chain of {gates.Count} pass gates from '{gates[0].Name}' to '{gates[gates.Count - 1].Name}', every gate conducting, driven by a step through the driving stage's output resistance. Side branches' capacitance is lumped on the net they leave.");
-        deck.Describe($"Stimulus: a 0 -> vdd step. Measured: t50, from the step's 50 % point to the chain's last net at 50 % (Phaseward's estimate: ln 2 x the Elmore delay {chain.Elmore}).");
+        deck.Describe($"Stimulus: a 0 -> vdd step. Measured: t50, from the step's 50 % point to the chain's last net at 50 % (Phaseward's estimate: 0.69 (~ ln 2) x the Elmore delay {chain.Elmore}).");
 
         var input = gates[0].Inputs[0];
         var step = deck.Fresh("step");
@@ -58,7 +58,7 @@ internal static class PassGateChainDeck
         var last = deck.Node(gates[gates.Count - 1].Output);
         deck.Transient(chain.Elmore / 500, stepAt + chain.Elmore * 6, chain.Elmore / 200);
         deck.Measure($".meas tran t50 TRIG v({step}) VAL={{vdd/2}} RISE=1 TARG v({last}) VAL={{vdd/2}} RISE=1",
-            new DeckEstimate("t50", fifty.Seconds, "s", "50 % delay of the chain, ln 2 x Elmore"));
+            new DeckEstimate("t50", fifty.Seconds, "s", "50 % delay of the chain, 0.69 x Elmore"));
         deck.Measure($".meas tran t_elmore_point TRIG v({step}) VAL={{vdd/2}} RISE=1 TARG v({last}) VAL={{vdd*0.632}} RISE=1", null);
         return deck.Build();
     }

@@ -1,6 +1,7 @@
 using System;
 using Phaseward.Checking;
 using Phaseward.Clocking;
+using Phaseward.Electrical;
 using Phaseward.Netlists;
 using Phaseward.Rules.ClockPhases;
 using Phaseward.Rules.Timing;
@@ -10,8 +11,9 @@ namespace Phaseward.Reproducers;
 
 /// <summary>
 /// PW4001 and PW4002: the launching register's slave latch (entry gate, storage, output stage), the path to the
-/// capturing register and its master latch's entry gate and storage node, on their clocks. At the launching edge the
-/// launching master's output stage drives new data into the opening slave (clock-to-output starts there). Measures
+/// capturing register and its master latch's entry gate and storage node, on their clocks. PW4001: at the launching
+/// edge the launching master's output stage drives new data into the opening slave (the latest case). PW4002: the new
+/// data is already settled at the slave's input and leaves when the slave opens (the earliest case). Measures
 /// <c>t_arrival</c> from the launching edge (setup: to the capturing master's storage node at vdd/2; hold: to its
 /// input) and <c>slack</c>: for setup, the time available less t_arrival; for hold, t_arrival less hold time and skew.
 /// </summary>
@@ -22,7 +24,7 @@ internal static class RegisterPathDeck
         var captureName = DeckInputs.Property(finding, FindingPropertyKeys.TargetLatch);
         var launchName = DeckInputs.Property(finding, FindingPropertyKeys.SourceLatch);
         RegisterPathResult? result = null;
-        foreach (var r in RegisterPathChecks.For(TimingFigures.For(netlist)))
+        foreach (var r in RegisterPathChecks.For(netlist))
             if (r.Launch.Name == launchName && r.Capture.Name == captureName)
                 result = r;
         if (result is null)
@@ -51,8 +53,11 @@ internal static class RegisterPathDeck
         var slack = setup ? check.SetupSlack : check.HoldSlack;
 
         var deck = new DeckWriter(finding, netlist);
+        deck.AtCorner(setup ? Corner.Slow : Corner.Fast);
         deck.Describe($"Sub-circuit: register '{result.Launch.Name}''s slave '{a.Name}' (entry '{entryA.Name}' on {a.Phase.Name}), the path of {stages.Count} stage(s) to register '{result.Capture.Name}''s master '{b.Name}' (entry '{entryB.Name}' on {entryB.ClockControl!.Name}).");
-        deck.Describe($"Stimulus: at the launching edge (t = {launchAt}) the launching master's output stage drives new data into the opening slave.");
+        deck.Describe(setup
+            ? $"Stimulus: at the launching edge (t = {launchAt}) the launching master's output stage drives new data into the opening slave."
+            : $"Stimulus: new data settles at the launching master's output while the slave is closed, and leaves when the slave opens at the launching edge (t = {launchAt}): the earliest case a hold check is about.");
         deck.Describe(setup
             ? $"Measured: t_arrival, from the launching edge to '{b.Storage.Name}' at vdd/2, and slack = {check.Available} available - t_arrival."
             : $"Measured: t_arrival, from the launching edge to '{entryB.Inputs[0].Name}' (the master's input) at vdd/2, and slack = t_arrival - hold {check.Hold} - skew {check.Skew}.");
@@ -63,10 +68,15 @@ internal static class RegisterPathDeck
         var controlA = clocks.Control(a.Phase);
         var controlB = clocks.Control(entryB.ClockControl!);
         var data = deck.Fresh("data");
-        deck.Pwl(data, new[] { (0.0, 0.0), ((launchAt - edge / 2).Seconds, 0.0), ((launchAt + edge / 2).Seconds, deck.Supply) }, "new data from the launching master at the launching edge");
+        // Setup: the slowest case, the launching master's output changing at the edge (the dynamic register's t_c-q counts
+        // the master's output stage). Hold: the earliest case, the master's output settled while the slave was closed, so
+        // the new data leaves as soon as the slave opens (t_ccq = slave gate + slave stage, as the estimate takes it).
+        var dataAt = setup ? launchAt : launchAt - (period - PhaseWindow.Of(a.Phase).Length) / 2;
+        deck.Pwl(data, new[] { (0.0, 0.0), ((dataAt - edge / 2).Seconds, 0.0), ((dataAt + edge / 2).Seconds, deck.Supply) },
+            setup ? "new data from the launching master at the launching edge" : "new data settled at the launching master's output while the slave is closed");
         var input = deck.Node(entryA.Inputs[0]);
         var outputR = result.Launch.Master.OutputStage is { } stage ? netlist.ResistanceOf(stage) : netlist.Process.DriverResistance;
-        deck.Element($"R_data {data} {input} {SpiceNumbers.Of(outputR.Ohms)}   $ the launching master's output stage");
+        deck.Element($"R_data {data} {input} {SpiceNumbers.Of(deck.AtCorner(outputR).Ohms)}   $ the launching master's output stage");
         deck.Capacitor(input, netlist.CapacitanceOf(entryA.Inputs[0]), $"'{entryA.Inputs[0].Name}'");
         var storageA = deck.Node(a.Storage);
         deck.PassGate(entryA, input, storageA, controlA);

@@ -1,3 +1,4 @@
+using Phaseward.Electrical;
 using Phaseward.Netlists;
 
 namespace Phaseward.Sequencing;
@@ -8,7 +9,8 @@ namespace Phaseward.Sequencing;
 /// drives (<see cref="Netlist.CapacitanceOf"/>).
 /// </summary>
 /// <remarks>
-/// 0.69·R·C is the 50 % point of a lumped RC step response (ln 2 ≈ 0.69), the usual first-order propagation delay of
+/// 0.69·R·C is the 50 % point of a lumped RC step response (0.69 ≈ ln 2: <see cref="FiftyPercentDelay.SinglePoleFactor"/>,
+/// the one value of the factor), the usual first-order propagation delay of
 /// a switch-resistor stage (Rabaey, Chandrakasan, Nikolić, "Digital Integrated Circuits: A Design Perspective", 2nd
 /// ed., ch. 5, t_p = 0.69·R_eq·C_L; section from memory). Each stage is taken on its own: the driver of the
 /// stage's input is not added to its RC (that is the Elmore model's job for pass-gate chains, rule PW2001), a
@@ -16,8 +18,6 @@ namespace Phaseward.Sequencing;
 /// </remarks>
 internal static class FirstOrderDelay
 {
-    public const double Ln2 = 0.69;
-
     public static Time Of(Netlist netlist, Device device)
-        => netlist.ResistanceOf(device) * netlist.CapacitanceOf(device.Output) * Ln2;
+        => netlist.ResistanceOf(device) * netlist.CapacitanceOf(device.Output) * FiftyPercentDelay.SinglePoleFactor;
 }

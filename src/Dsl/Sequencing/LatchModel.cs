@@ -59,7 +59,7 @@ public sealed class LatchModel
     /// <summary>The latch whose entry gate this device is, or null.</summary>
     public Latch? LatchEnteredBy(Device device) => entryLatchOfDevice[device.Id];
 
-    /// <summary>First-order delay of one stage (ln 2·R·C, see <see cref="FirstOrderDelay"/>).</summary>
+    /// <summary>First-order delay of one stage (0.69·R·C, see <see cref="FirstOrderDelay"/>).</summary>
     public Time StageDelay(Device device) => FirstOrderDelay.Of(Netlist, device);
 
     /// <summary>Delay of the latch's entry: its (slowest) entry gate charging the storage node.</summary>

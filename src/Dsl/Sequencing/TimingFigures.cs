@@ -3,6 +3,7 @@ using System.Collections.Generic;
 using System.Globalization;
 using System.Text;
 using Phaseward.Clocking;
+using Phaseward.Electrical;
 using Phaseward.Netlists;
 
 namespace Phaseward.Sequencing;
@@ -125,22 +126,27 @@ public sealed class RegisterTiming
 }
 
 /// <summary>
-/// Setup, hold and clock-to-output of every latch and register of a netlist, derived from their devices with the
-/// first-order stage delay 0.69·R·C. For a report or the command line: <c>TimingFigures.For(netlist).ToString()</c>
-/// prints a table. First-order estimates: they do not replace transistor-level simulation or sign-off.
+/// Setup, hold and clock-to-output of every latch and register of a netlist at one process corner, derived from their
+/// devices with the first-order stage delay 0.69·R·C, every delay times the corner's factor
+/// (<see cref="Process.DelayFactor"/>). For a report or the command line:
+/// <c>TimingFigures.For(netlist, Corner.Slow).ToString()</c> prints a table. First-order estimates: they do not
+/// replace transistor-level simulation or sign-off.
 /// </summary>
 public sealed class TimingFigures
 {
     private readonly LatchTiming[] byLatch;
 
-    private TimingFigures(LatchModel model)
+    private TimingFigures(LatchModel model, Corner corner)
     {
         Model = model;
+        Corner = corner;
+        DelayFactor = model.Netlist.Process.DelayFactor(corner);
         byLatch = new LatchTiming[model.Latches.Count];
         foreach (var latch in model.Latches)
         {
             var feedback = latch.FeedbackStage is { } stage ? model.StageDelay(stage) : Time.Zero;
-            byLatch[latch.Index] = new LatchTiming(latch, model.EntryDelay(latch), model.FastestEntryDelay(latch), model.OutputDelay(latch), feedback);
+            byLatch[latch.Index] = new LatchTiming(latch, AtCorner(model.EntryDelay(latch)), AtCorner(model.FastestEntryDelay(latch)),
+                AtCorner(model.OutputDelay(latch)), AtCorner(feedback));
         }
 
         var registers = new List<RegisterTiming>();
@@ -152,14 +158,32 @@ public sealed class TimingFigures
     /// <summary>The latches and registers the figures are for.</summary>
     public LatchModel Model { get; }
 
+    /// <summary>The corner these figures are at.</summary>
+    public Corner Corner { get; }
+
+    /// <summary>The factor every nominal delay takes at <see cref="Corner"/>.</summary>
+    public double DelayFactor { get; }
+
+    /// <summary>"slow corner, delays ×1.3": the words a message uses for <see cref="Corner"/>.</summary>
+    public string CornerText => Electrical.CornerText.Of(Model.Netlist.Process, Corner);
+
+    /// <summary>A nominal delay (a path's, from <see cref="LatchModel"/>) at this corner.</summary>
+    public Time AtCorner(Time nominal) => nominal * DelayFactor;
+
     /// <summary>Every latch, register halves included, in the order of <see cref="LatchModel.Latches"/>.</summary>
     public IReadOnlyList<LatchTiming> Latches => byLatch;
 
     /// <summary>The figures of every register.</summary>
     public IReadOnlyList<RegisterTiming> Registers { get; }
 
-    /// <summary>The timing figures of every latch and register of <paramref name="netlist"/>.</summary>
-    public static TimingFigures For(Netlist netlist) => new(LatchModel.Of(netlist));
+    /// <summary>The figures of <paramref name="netlist"/> at <paramref name="corner"/>.</summary>
+    public static TimingFigures For(Netlist netlist, Corner corner)
+    {
+        if (netlist is null) throw new ArgumentNullException(nameof(netlist));
+        if (corner is not (Corner.Nominal or Corner.Slow or Corner.Fast))
+            throw new ArgumentException($"'{nameof(corner)}' must be Nominal, Slow or Fast (was {(int)corner}).", nameof(corner));
+        return new(LatchModel.Of(netlist), corner);
+    }
 
     /// <summary>The figures of <paramref name="latch"/>.</summary>
     public LatchTiming Of(Latch latch)
@@ -174,7 +198,8 @@ public sealed class TimingFigures
     public override string ToString()
     {
         var text = new StringBuilder();
-        text.Append("Timing figures of design '").Append(Model.Netlist.DesignName).AppendLine("' (first-order estimates, 0.69·R·C per stage)");
+        text.Append("Timing figures of design '").Append(Model.Netlist.DesignName).Append("' at the ").Append(CornerText)
+            .AppendLine(" (first-order estimates, 0.69·R·C per stage)");
         text.AppendLine("register | clock | edge | setup | clk-q | clk-q min | hold");
         foreach (var r in Registers)
             text.Append(string.Join(" | ", r.Name, r.Clock.Name, r.Register.IsPositiveEdge ? "rising" : "falling",

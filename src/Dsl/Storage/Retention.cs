@@ -28,7 +28,8 @@ public readonly struct Retention
     /// <summary>The node's total capacitance C.</summary>
     public Capacitance Capacitance { get; }
 
-    /// <summary>The droop ΔV the node may suffer and still be read correctly.</summary>
+    /// <summary>The droop ΔV leakage may cause and the node still be read correctly (for a storage node, what its droop
+    /// budget leaves after charge sharing, see <see cref="DroopBudget"/>).</summary>
     public Voltage ToleratedDroop { get; }
 
     /// <summary>The leakage current I_leak that drains the node.</summary>
@@ -47,13 +48,20 @@ public readonly struct Retention
         return new Retention(capacitance, toleratedDroop, leakage);
     }
 
-    /// <summary>The retention time of a net: its capacitance, the process's tolerated droop and the net's leakage
-    /// (the value set with <see cref="Circuit.SetLeakage"/>, else the process figure).</summary>
+    /// <summary>The retention time of a net: its capacitance, the droop its budget leaves for leakage (the process's
+    /// tolerated droop less the worst charge sharing on a storage node, see <see cref="DroopBudget"/>) and the net's
+    /// leakage (the value set with <see cref="Circuit.SetLeakage"/>, else the process's hot-corner figure).</summary>
     public static Retention Of(Netlist netlist, Net net)
     {
         if (netlist is null) throw new ArgumentNullException(nameof(netlist));
+        if (StorageNodes.Find(netlist, net) is { } node)
+            return node.Retention;
         return Of(netlist.CapacitanceOf(net), netlist.Process.ToleratedDroop, netlist.LeakageOf(net));
     }
+
+    // The budget's share for leakage may be zero (charge sharing took it all): a retention time of zero.
+    internal static Retention WithDroopLeft(Capacitance capacitance, Voltage left, Current leakage)
+        => new(capacitance, Voltage.Max(Voltage.Zero, left), leakage);
 
     /// <inheritdoc/>
     public override string ToString() => $"t_ret = {Time} (C = {Capacitance}, ΔV = {ToleratedDroop}, I_leak = {Leakage})";

@@ -113,7 +113,8 @@ public static class StorageIsolation
                 binding = gate;
         gates.Remove(binding);
         gates.Insert(0, binding);
-        return new StoppedIsolation(node, gates, binding.MaxIdle);
+        var running = WhileRunning(node);
+        return new StoppedIsolation(node, gates, binding.MaxIdle, running?.Longest ?? Time.Zero);
     }
 
     /// <summary>
@@ -266,11 +267,12 @@ public sealed class RunningIsolation
 /// <summary>How a storage node floats while gated clocks are stopped.</summary>
 public sealed class StoppedIsolation
 {
-    internal StoppedIsolation(StorageNode node, IReadOnlyList<Clock> gates, Time? idleBound)
+    internal StoppedIsolation(StorageNode node, IReadOnlyList<Clock> gates, Time? idleBound, Time runningGap)
     {
         Node = node;
         Gates = gates;
         IdleBound = idleBound;
+        AroundStopAndRestart = runningGap * 2;
     }
 
     /// <summary>The storage node.</summary>
@@ -283,6 +285,17 @@ public sealed class StoppedIsolation
     /// <summary>The gate whose declared idle time bounds the isolation (the first of <see cref="Gates"/>).</summary>
     public Clock Gate => Gates[0];
 
-    /// <summary>The longest the node can float: the shortest declared maximum idle time (null: unbounded).</summary>
+    /// <summary>The shortest declared maximum idle time of the gates (null: unbounded).</summary>
     public Time? IdleBound { get; }
+
+    /// <summary>
+    /// What the node floats on top of the idle time: before the stop it has floated since its last refresh, and after
+    /// the restart it floats until its window next opens — each up to the longest gap between its drivers' windows
+    /// while the clocks run (<see cref="RunningIsolation.Longest"/>, L), so 2·L (first order: the stop and the restart
+    /// may fall anywhere in the cycle).
+    /// </summary>
+    public Time AroundStopAndRestart { get; }
+
+    /// <summary>The longest the node can float: the idle bound plus <see cref="AroundStopAndRestart"/> (null: unbounded).</summary>
+    public Time? FloatBound => IdleBound is { } idle ? idle + AroundStopAndRestart : null;
 }

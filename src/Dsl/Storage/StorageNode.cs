@@ -6,13 +6,16 @@ namespace Phaseward.Storage;
 /// <summary>A net driven only through pass devices (no restoring stage, keeper included, drives it; not a primary input).</summary>
 public sealed class StorageNode
 {
-    internal StorageNode(Net net, StorageKind kind, IReadOnlyList<Device> drivers, IReadOnlyList<Device> feedbackDrivers, Retention retention)
+    private readonly Netlist netlist;
+    private DroopBudget? budget;
+
+    internal StorageNode(Netlist netlist, Net net, StorageKind kind, IReadOnlyList<Device> drivers, IReadOnlyList<Device> feedbackDrivers)
     {
+        this.netlist = netlist;
         Net = net;
         Kind = kind;
         Drivers = drivers;
         FeedbackDrivers = feedbackDrivers;
-        Retention = retention;
     }
 
     /// <summary>The stored net.</summary>
@@ -27,8 +30,12 @@ public sealed class StorageNode
     /// <summary>The drivers that feed the node a restored copy of itself (empty for a dynamic node).</summary>
     public IReadOnlyList<Device> FeedbackDrivers { get; }
 
-    /// <summary>t_ret = C·ΔV / I_leak for this node.</summary>
-    public Retention Retention { get; }
+    /// <summary>The node's droop allowance, shared by charge sharing and leakage (computed once, on first use: it needs
+    /// the other storage nodes).</summary>
+    public DroopBudget Budget => budget ??= DroopBudget.Of(netlist, this);
+
+    /// <summary>t_ret = C·ΔV / I_leak for this node, ΔV being what charge sharing leaves of the allowance (<see cref="Budget"/>).</summary>
+    public Retention Retention => Budget.Retention;
 
     /// <summary>True if at least one driver is controlled by a clock phase.</summary>
     public bool IsClocked

@@ -67,8 +67,8 @@ public static class StorageNodes
                 if (feedbackSearch.IsRestoredCopy(driver.Inputs[0], net))
                     (feedback ??= new List<Device>(1)).Add(driver);
 
-            var node = new StorageNode(net, feedback is null ? StorageKind.Dynamic : StorageKind.ClockedFeedback, drivers.AsReadOnlyList(),
-                (IReadOnlyList<Device>?)feedback ?? Array.Empty<Device>(), Retention.Of(netlist, net));
+            var node = new StorageNode(netlist, net, feedback is null ? StorageKind.Dynamic : StorageKind.ClockedFeedback, drivers.AsReadOnlyList(),
+                (IReadOnlyList<Device>?)feedback ?? Array.Empty<Device>());
             byNet[net.Id] = node;
             nodes.Add(node);
         }

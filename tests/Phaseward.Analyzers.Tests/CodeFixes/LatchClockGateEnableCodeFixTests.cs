@@ -21,7 +21,7 @@ public class LatchClockGateEnableCodeFixTests
             .WithArguments(gate, "clk", stateWindow, level, enable, changes);
 
     private static DiagnosticResult FromRegister(string gate, string register)
-        => Pw1004(gate, "[0 s, 5 ns)", "high", register, $"during [0 s, 62.1 ps) (from latch '{register}.slave', transparent in clk.High, through a 27.6 ps path)");
+        => Pw1004(gate, "[0 s, 5 ns)", "high", register, $"during [0 s, 62.1 ps) (from latch '{register}.slave', transparent in clk.High, through a 27.6 ps path; slow corner, delays ×1)");
 
     [Fact]
     public Task LatchesAnEnableFromARegisterOnTheLowPhaseKeepingComments()
@@ -49,7 +49,7 @@ public class LatchClockGateEnableCodeFixTests
             var clk = c.Clock("clk", 10.Nanoseconds());
             var wrong = c.StaticLatch(c.Input("a"), clk.Low, "wrong");
             c.ClockGate(clk, c.Inverter(c.StaticLatch(c.Inverter(wrong), clk.High)), ClockStopLevel.High, name: "g");
-            """), Pw1004("g", "[5 ns, 10 ns)", "low", "inv1", "during [5 ns, 5.09 ns) (from latch 'wrong', transparent in clk.Low, through a 55.2 ps path)"))
+            """), Pw1004("g", "[5 ns, 10 ns)", "low", "inv1", "during [5 ns, 5.09 ns) (from latch 'wrong', transparent in clk.Low, through a 55.2 ps path; slow corner, delays ×1)"))
             .RunAsync();
 
     [Fact]
@@ -72,7 +72,7 @@ public class LatchClockGateEnableCodeFixTests
         => new PhasewardCodeFixTest<ClockPhaseAnalyzer, LatchClockGateEnableCodeFix>(Slow, Slow,
                 new DiagnosticResult(RuleCatalog.ClockGateEnable.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1)
                     .WithArguments("gclk", "clk", "[0 s, 500 ps)", "high", "en19",
-                        "during [500 ps, 1.09 ns) (from latch 'en_latch', transparent in clk.Low, through a 552 ps path)"))
+                        "during [500 ps, 1.09 ns) (from latch 'en_latch', transparent in clk.Low, through a 552 ps path; slow corner, delays ×1)"))
             .RunAsync();
 
     private static readonly string Slow = Design("Slow", """
@@ -143,6 +143,6 @@ public class LatchClockGateEnableCodeFixTests
                 => circuit.ClockGate(clock, circuit.Inverter(circuit.StaticLatch(circuit.StaticRegister(circuit.Input("b"), clock, "en_b"), clock.Low)), name: "gb");
             """), FromRegister("ga", "en_a"),
             new DiagnosticResult(RuleCatalog.ClockGateEnable.Id, DiagnosticSeverity.Warning).WithLocation(2).WithLocation(3)
-                .WithArguments("gb", "clk", "[0 s, 5 ns)", "high", "en_b", "during [0 s, 62.1 ps) (from latch 'en_b.slave', transparent in clk.High, through a 27.6 ps path)"))
+                .WithArguments("gb", "clk", "[0 s, 5 ns)", "high", "en_b", "during [0 s, 62.1 ps) (from latch 'en_b.slave', transparent in clk.High, through a 27.6 ps path; slow corner, delays ×1)"))
             .RunAsync();
 }

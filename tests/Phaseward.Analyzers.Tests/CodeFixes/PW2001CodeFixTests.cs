@@ -178,7 +178,7 @@ public class PW2001CodeFixTests
                 {
                     var clk = c.Clock("sample", 10.Nanoseconds());
                     var first = {|#0:c.TransmissionGate(c.Input("a"), clk.High)|};
-                    var second = c.TransmissionGate(first, clk.Low);
+                    var second = c.TransmissionGate(first, clk.High);
                     c.Output("y", c.Inverter({|#1:Routing.Hop(c, second, clk.High)|}));
                 }
             }
@@ -191,7 +191,7 @@ public class PW2001CodeFixTests
                 {
                     var clk = c.Clock("sample", 10.Nanoseconds());
                     var first = c.TransmissionGate(c.Input("a"), clk.High);
-                    var second = c.TransmissionGate(first, clk.Low);
+                    var second = c.TransmissionGate(first, clk.High);
                     c.Output("y", c.Inverter(Routing.Hop(c, second, clk.High)));
                 }
             }
@@ -296,7 +296,7 @@ public class PW2001CodeFixTests
                 protected override void Describe(Circuit c)
                 {
                     var clk = c.Clock("sample", 10.Nanoseconds());
-                    var x = {|#0:c.TransmissionGate(c.Input("a"), clk.Low)|};
+                    var x = {|#0:c.TransmissionGate(c.Input("a"), clk.High)|};
                     for (var i = 1; i <= 5; i++)
                         x = {|#1:c.TransmissionGate(x, clk.High)|};
                     c.Output("y", c.Inverter(x));
@@ -310,7 +310,7 @@ public class PW2001CodeFixTests
                 protected override void Describe(Circuit c)
                 {
                     var clk = c.Clock("sample", 10.Nanoseconds());
-                    var x = c.TransmissionGate(c.Input("a"), clk.Low);
+                    var x = c.TransmissionGate(c.Input("a"), clk.High);
                     for (var i = 1; i <= 5; i++)
                         x = c.TransmissionGate(i % 2 == 0 ? c.Inverter(x) : x, clk.High);
                     c.Output("y", c.Inverter(x));

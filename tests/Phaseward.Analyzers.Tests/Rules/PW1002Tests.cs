@@ -19,7 +19,7 @@ public class PW1002Tests
         string required = "0 s")
         => new DiagnosticResult(RuleCatalog.OverlapRace.Id, DiagnosticSeverity.Warning)
             .WithMessage($"Latch '{latch}' races latch '{source}' through the {overlapKind} overlap of clock '{clock}': " +
-                         $"the fastest path takes {fastest} while both pass gates conduct together for {overlap}, a margin of {margin}, below the required {required}");
+                         $"the fastest path takes {fastest} while both pass gates conduct together for {overlap}, a margin of {margin}, below the required {required} (fast corner, delays ×1)");
 
     private static Task Verify(string source, params DiagnosticResult[] expected)
         => new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(source, expected).RunAsync();
@@ -118,7 +118,7 @@ public class PW1002Tests
     public Task SeverityFromEditorConfig()
         => new PhasewardAnalyzerTest<ClockPhaseAnalyzer>(Margin166,
                 new DiagnosticResult(RuleCatalog.OverlapRace.Id, DiagnosticSeverity.Info).WithLocation(0).WithLocation(0)
-                    .WithArguments("R.slave", "R.master", "0-0", "clock 'clk'", "96.6 ps", "80 ps", "16.6 ps", "20 ps"))
+                    .WithArguments("R.slave", "R.master", "0-0", "clock 'clk'", "96.6 ps", "80 ps", "16.6 ps", "20 ps", "fast corner, delays ×1"))
             .WithEditorConfig("phaseward.min_race_margin = 20ps\ndotnet_diagnostic.PW1002.severity = suggestion")
             .RunAsync();
 }

@@ -15,7 +15,7 @@ namespace Phaseward.Analyzers.Tests.Rules;
 /// </summary>
 public class PW1004Tests
 {
-    private const string FromRegister = "during [0 s, 62.1 ps) (from latch '{0}', transparent in clk.High, through a 27.6 ps path)";
+    private const string FromRegister = "during [0 s, 62.1 ps) (from latch '{0}', transparent in clk.High, through a 27.6 ps path; slow corner, delays ×1)";
 
     private static DiagnosticResult Pw1004() => new DiagnosticResult(RuleCatalog.ClockGateEnable.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(1);
 
@@ -36,7 +36,7 @@ public class PW1004Tests
             c.Output("q", c.DynamicLatch(c.Input("d"), gated.High, "cap"));
             """),
             Pw1004().WithMessage("Clock gate 'gclk' passes clock 'clk' during [0 s, 5 ns) (while it is high), but its enable 'en_reg' can change during "
-                + "[0 s, 62.1 ps) (from latch 'en_reg.slave', transparent in clk.High, through a 27.6 ps path): the gated clock can be clipped or get an extra pulse"));
+                + "[0 s, 62.1 ps) (from latch 'en_reg.slave', transparent in clk.High, through a 27.6 ps path; slow corner, delays ×1): the gated clock can be clipped or get an extra pulse"));
 
     [Fact]
     public Task TheEnableLatchedWhileTheClockIsLowIsClean()
@@ -58,7 +58,7 @@ public class PW1004Tests
             c.ClockGate(clk, c.Inverter(c.StaticLatch(c.Input("b"), clk.High, "right")), ClockStopLevel.High, name: "g2");
             """),
             Pw1004().WithArguments("g1", "clk", "[5 ns, 10 ns)", "low", "inv1",
-                "during [5 ns, 5.09 ns) (from latch 'wrong', transparent in clk.Low, through a 55.2 ps path)"));
+                "during [5 ns, 5.09 ns) (from latch 'wrong', transparent in clk.Low, through a 55.2 ps path; slow corner, delays ×1)"));
 
     [Fact]
     public Task InputsMayBeTakenAsChangingAtAnyTime()

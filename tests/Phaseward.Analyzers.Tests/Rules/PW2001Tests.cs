@@ -42,7 +42,7 @@ public class PW2001Tests
                 }
             }
             """,
-            PW2001.WithLocation(1).WithLocation(0).WithArguments("3", "2", "188 ps", "130 ps", "2", "95 ps", "", "n1", "n3", "Relay"))
+            PW2001.WithLocation(1).WithLocation(0).WithArguments("3", "2", "188 ps", "129 ps", "2", "107 ps", "", "n1", "n3", "Relay"))
             .RunAsync();
 
     [Fact]
@@ -85,7 +85,7 @@ public class PW2001Tests
                 }
             }
             """,
-            PW2001.WithLocation(0).WithLocation(0).WithArguments("6", "2", "543 ps", "376 ps", "2", "187 ps", "", "tg1", "tg3", "Row"))
+            PW2001.WithLocation(0).WithLocation(0).WithArguments("6", "2", "543 ps", "375 ps", "2", "196 ps", "", "tg1", "tg3", "Row"))
             .RunAsync();
 
     [Fact]
@@ -193,7 +193,7 @@ public class PW2001Tests
                 {
                     var clk = c.Clock("sample", 10.Nanoseconds());
                     var first = {|#0:c.TransmissionGate(c.Input("a"), clk.High)|};
-                    var middle = Hop(c, first, clk.Low);
+                    var middle = Hop(c, first, clk.High);
                     var last = {|#1:c.TransmissionGate(middle, clk.High)|};
                     c.Output("y", c.Inverter(last));
                 }
@@ -218,7 +218,7 @@ public class PW2001Tests
                 {
                     var clk = c.Clock("sample", 10.Nanoseconds());
                     var first = {|#0:c.TransmissionGate(c.Input("a"), clk.High)|};
-                    var second = c.TransmissionGate(first, clk.Low);
+                    var second = c.TransmissionGate(first, clk.High);
                     c.Output("y", c.Inverter({|#1:Routing.Hop(c, second, clk.High)|}));
                 }
             }
@@ -282,7 +282,7 @@ public class PW2001Tests
                 }
             }
             """,
-            PW2001.WithLocation(0).WithLocation(0).WithArguments("6", "4", "543 ps", "376 ps", "2", "187 ps", "", "tg1", "tg5", "Row"))
+            PW2001.WithLocation(0).WithLocation(0).WithArguments("6", "4", "543 ps", "375 ps", "2", "196 ps", "", "tg1", "tg5", "Row"))
             .WithEditorConfig("phaseward.max_series_pass_gates = 4")
             .RunAsync();
 
@@ -313,7 +313,7 @@ public class PW2001Tests
                 .WithEditorConfig("phaseward.max_series_pass_gates = " + value)
                 .RunAsync(),
             new PhasewardAnalyzerTest<PassGatePathAnalyzer>(ThreeGates.Replace("{|#9:Describe|}", "Describe"),
-                    PW2001.WithLocation(1).WithLocation(0).WithArguments("3", "2", "188 ps", "130 ps", "2", "95 ps", "", "tg1", "tg3", "Relay"))
+                    PW2001.WithLocation(1).WithLocation(0).WithArguments("3", "2", "188 ps", "129 ps", "2", "107 ps", "", "tg1", "tg3", "Relay"))
                 .WithEditorConfig("phaseward.max_series_pass_gates = " + value)
                 .RunAsync());
 

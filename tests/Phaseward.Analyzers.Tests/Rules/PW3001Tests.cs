@@ -9,16 +9,20 @@ namespace Phaseward.Analyzers.Tests.Rules;
 /// <summary>
 /// PW3001 through the compiler: the design's C# is elaborated and the finding lands at the call that made the node,
 /// with the clock gate as an additional location. Figures: illustrative process, a latch node of 1 fF wire + 1.5 fF
-/// pass-gate diffusion + 2 fF inverter gate = 4.5 fF, ΔV = 0.3 V, I_leak = 5 pA, so t_ret = 4.5 fF × 0.3 V / 5 pA =
+/// pass-gate diffusion + 2 fF inverter gate = 4.5 fF, ΔV = 0.3 V, I_leak = 5 pA (a test figure each design sets, far
+/// below the 1 nA hot-corner default, so the times stay long), so t_ret = 4.5 fF × 0.3 V / 5 pA =
 /// 270 µs (common practice: Q = C·V, t = Q/I; the formula itself is checked in Phaseward.Tests/Storage/RetentionTests).
 /// </summary>
 public class PW3001Tests
 {
     private static DiagnosticResult PW3001(int marker = 0) => new DiagnosticResult(RuleCatalog.DynamicNodeOnGatedClock.Id, DiagnosticSeverity.Warning).WithLocation(marker);
 
+    // A declared idle time is shown with the float around the stop and the restart (idle + 2·L, L the node's longest
+    // gap while the clock runs: about 2 ns on these 2 ns clocks, below the digits shown).
     private static string Message(string node, string gate, string level, string idle, string retention = "270 µs", string c = "4.5 fF", string leak = "5 pA")
-        => $"Dynamic node '{node}' floats while gated clock '{gate}' is stopped {level} (declared maximum idle time: {idle}), "
-           + $"but keeps its level only {retention} (C·ΔV/I_leak with C = {c}, ΔV = 300 mV, I_leak = {leak})";
+        => $"Dynamic node '{node}' floats while gated clock '{gate}' is stopped {level} (declared maximum idle time: "
+           + (idle == "unbounded" ? idle : $"{idle}, so it floats up to {idle} with the clock periods around the stop and the restart") + "), "
+           + $"but keeps its level only {retention} (C·ΔV/I_leak with C = {c}, ΔV = 300 mV, I_leak = {leak} at the hot corner)";
 
     private static string Design(string body) => $$"""
         using Phaseward;
@@ -27,6 +31,7 @@ public class PW3001Tests
         {
             protected override void Describe(Circuit c)
             {
+                c.UseProcess(new Process { StorageLeakage = 5.Picoamperes() });
         {{body}}
             }
         }
@@ -87,7 +92,7 @@ public class PW3001Tests
 
     [Theory]
     [InlineData("100.Microseconds()")]
-    [InlineData("270.Microseconds()")] // exactly t_ret: the node just holds
+    [InlineData("269.99.Microseconds()")] // with 2·L ≈ 1.94 ns around the stop and the restart: 269.992 µs, just within t_ret
     public Task DeclaredIdleTimeNoLongerThanRetentionIsSafe(string maxIdle)
         => new PhasewardAnalyzerTest<DynamicStorageAnalyzer>(Design($$"""
                     var capture = c.Clock("capture", 2.Nanoseconds());
@@ -210,7 +215,7 @@ public class PW3001Tests
                     => {|#0:c.DynamicLatch(d, phase, name)|};
             }
             """,
-            PW3001().WithLocation(1).WithMessage(Message("hold_a.x", "burst", "low", "unbounded")))
+            PW3001().WithLocation(1).WithMessage(Message("hold_a.x", "burst", "low", "unbounded", retention: "1.35 µs", leak: "1 nA")))
             .RunAsync();
 
     [Fact]
@@ -230,7 +235,7 @@ public class PW3001Tests
             }
             """,
             // The call in Describe, then the helper's own call (another file), then the clock gate.
-            PW3001().WithLocation(1).WithLocation(2).WithMessage(Message("hold_a.x", "burst", "low", "unbounded")));
+            PW3001().WithLocation(1).WithLocation(2).WithMessage(Message("hold_a.x", "burst", "low", "unbounded", retention: "1.35 µs", leak: "1 nA")));
         test.TestState.Sources.Add(("/0/Library.cs", """
             using Phaseward;
 

@@ -8,7 +8,8 @@ namespace Phaseward.Analyzers.Tests.Rules;
 
 /// <summary>
 /// PW3002 through the compiler. A High-phase dynamic latch floats for (1 − D)·T − s per period (the Low time less the
-/// 30 ps complement skew of the illustrative process; common practice), against t_ret = 4.5 fF × 0.3 V / 5 pA = 270 µs
+/// 30 ps complement skew of the illustrative process; common practice), against t_ret = 4.5 fF × 0.3 V / 5 pA = 270 µs (5 pA: a test figure each design sets, below the
+/// 1 nA hot-corner default)
 /// (common practice: Q = C·V, t = Q/I). The lowest safe frequency is (1 − D)/(t_ret + s), rounded up to three
 /// significant digits. Reported at the call that made the node, with the root clock's declaration as additional location.
 /// </summary>
@@ -18,7 +19,7 @@ public class PW3002Tests
 
     private static string Message(string node, string isolation, string period, string clock, string minimum, string retention = "270 µs", string leak = "5 pA")
         => $"Dynamic node '{node}' floats for up to {isolation} of every {period} period of clock '{clock}', longer than its retention time {retention} "
-           + $"(C·ΔV/I_leak with C = 4.5 fF, ΔV = 300 mV, I_leak = {leak}); run the clock at {minimum} or faster";
+           + $"(C·ΔV/I_leak with C = 4.5 fF, ΔV = 300 mV, I_leak = {leak} at the hot corner); run the clock at {minimum} or faster";
 
     private static string Design(string body) => $$"""
         using Phaseward;
@@ -27,6 +28,7 @@ public class PW3002Tests
         {
             protected override void Describe(Circuit c)
             {
+                c.UseProcess(new Process { StorageLeakage = 5.Picoamperes() });
         {{body}}
             }
         }
@@ -131,7 +133,7 @@ public class PW3002Tests
                     => {|#0:c.DynamicRegister(enable, clock, "count")|};
             }
             """,
-            PW3002().WithLocation(2).WithMessage(Message("count.master.x", "500 µs", "1 ms", "housekeeping", "1.86 kHz"))
+            PW3002().WithLocation(2).WithMessage(Message("count.master.x", "500 µs", "1 ms", "housekeeping", "371 kHz", retention: "1.35 µs", leak: "1 nA"))
                 .FoundAtThisCall(2, "Housekeeping", "count.master.x, count.slave.x"))
             .RunAsync();
 }

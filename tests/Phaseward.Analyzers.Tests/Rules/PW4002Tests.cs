@@ -25,7 +25,7 @@ public class PW4002Tests
     private static DiagnosticResult Pw4002(string skew, string slack)
         => new DiagnosticResult(RuleCatalog.RegisterHold.Id, DiagnosticSeverity.Warning)
             .WithMessage("Register 'R2' can lose its data on the path from register 'R1': minimum clock-to-output 62.1 ps + shortest path 27.6 ps = " +
-                         $"89.7 ps is less than its hold time -4.5 ps plus clock skew {skew} (slack {slack})")
+                         $"89.7 ps is less than its hold time -4.5 ps plus clock skew {skew} (slack {slack}; fast corner, delays ×1)")
             .WithLocation(0).WithLocation(1);
 
     [Fact]

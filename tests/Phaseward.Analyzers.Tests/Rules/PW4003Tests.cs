@@ -28,7 +28,7 @@ public class PW4003Tests
     private static DiagnosticResult Pw4003(string arrival, string slack, DiagnosticSeverity severity = DiagnosticSeverity.Warning)
         => new DiagnosticResult(RuleCatalog.LatchBorrowing.Id, severity)
             .WithMessage($"Data from latch 'L2' reaches latch 'L3' {arrival} after 'L3' opens, but its phase (500 ps) less its setup time and clock skew (34.5 ps) " +
-                         $"allows only 466 ps (slack {slack}; 'L2' had borrowed 142 ps)")
+                         $"allows only 466 ps (slack {slack}; 'L2' had borrowed 142 ps; slow corner, delays ×1)")
             .WithLocation(0).WithLocation(1);
 
     [Fact]
@@ -75,5 +75,5 @@ public class PW4003Tests
             }
             """),
             new DiagnosticResult(RuleCatalog.LatchBorrowing.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(0)
-                .WithArguments("S2", "S1", "780 ps", "500 ps", "34.5 ps", "466 ps", "-315 ps", "390 ps")).RunAsync();
+                .WithArguments("S2", "S1", "780 ps", "500 ps", "34.5 ps", "466 ps", "-315 ps", "390 ps", "slow corner, delays ×1")).RunAsync();
 }

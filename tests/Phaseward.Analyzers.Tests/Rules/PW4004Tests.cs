@@ -26,7 +26,7 @@ public class PW4004Tests
         => new DiagnosticResult(RuleCatalog.LatchWriteWindow.Id, severity)
             .WithMessage($"Latch 'pl.x' cannot be written in its window: it is open {open}, {fullyOn} of it with both halves of its entry gate on " +
                          $"(complement skew {skew}), but the entry gate needs 207 ps to charge storage node 'pl.x' (0.69·R·C with R = 5 kΩ, " +
-                         $"C = 60 fF; margin {margin})")
+                         $"C = 60 fF; margin {margin}; slow corner, delays ×1)")
             .WithLocation(0).WithLocation(1);
 
     [Fact]

@@ -7,7 +7,8 @@ namespace Phaseward.Analyzers.Tests.Rules;
 /// are round by hand (the same figures as the rule tests in tests/Phaseward.Tests): every net is 10 fF, pass gates are
 /// 5 kΩ and restoring stages 4 kΩ, so t_TG = 0.69 · 5 kΩ · 10 fF = 34.5 ps and t_inv = 0.69 · 4 kΩ · 10 fF = 27.6 ps
 /// (t = 0.69·R·C: Rabaey, Chandrakasan, Nikolić, "Digital Integrated Circuits: A Design Perspective", 2nd ed., ch. 5,
-/// from memory). Test figures, not a real process.
+/// from memory). Both corners are nominal (delay factors 1) so the figures stay round; corner tests set their own
+/// factors. Test figures, not a real process.
 /// </summary>
 internal static class RuleSources
 {
@@ -28,6 +29,8 @@ internal static class RuleSources
                     DiffusionCapacitance = 0.Femtofarads(),
                     PassGateResistance = 5.Kiloohms(),
                     DriverResistance = 4.Kiloohms(),
+                    SlowDelayFactor = 1,
+                    FastDelayFactor = 1,
                 });
         {{Indent(body, "        ")}}
             }

@@ -63,7 +63,9 @@ public class PassGateChainRuleTests
     //   downstream: hop5 2.5, hop4 6.5, hop3 10.5, hop2 14.5, hop1 18.5, sensor 21 fF
     //   Elmore(hop5) = 4k·21f + 5k·(18.5 + 14.5 + 10.5 + 6.5 + 2.5)f = 84 ps + 262.5 ps = 346.5 ps
     // Limit: m_opt = 1.70·sqrt(20 ps/(5 kΩ·4 fF)) = 1.70 → best whole spacing 2 → limit max(2, 2) = 2.
-    // Restored: mean R 5 kΩ, mean node C (4·4 + 2.5)/5 = 3.7 fF, RC = 18.5 ps; t = (5/2)·(ln 2·18.5 ps·3 + 20 ps) = 146 ps.
+    // Restored, counted as the unrestored figure is (the same 4 kΩ driver, whole segments 2 + 2 + 1, one restoring stage
+    // between segments): mean R 5 kΩ, mean node C (4·4 + 2.5)/5 = 3.7 fF, RC = 18.5 ps;
+    // t = 0.69·4 kΩ·(2.5 + 2·3.7) fF + 0.69·18.5 ps·(3 + 3 + 1) + 2·20 ps = 27.3 + 89.4 + 40 = 156.7 ps.
     [Fact]
     public void Figures_of_a_five_gate_chain_under_the_process_limit()
     {
@@ -78,17 +80,44 @@ public class PassGateChainRuleTests
         Assert.Equal("2", finding.Properties[FindingPropertyKeys.OptimalSpacing]);
         var elmore = double.Parse(finding.Properties[FindingPropertyKeys.ElmoreDelaySeconds], CultureInfo.InvariantCulture);
         Assert.Equal(346.5e-12, elmore, 1e-21);
-        Assert.Equal(Math.Log(2) * 346.5e-12, double.Parse(finding.Properties[FindingPropertyKeys.FiftyPercentDelaySeconds], CultureInfo.InvariantCulture), 1e-21);
+        Assert.Equal(0.69 * 346.5e-12, double.Parse(finding.Properties[FindingPropertyKeys.FiftyPercentDelaySeconds], CultureInfo.InvariantCulture), 1e-21);
         var restored = double.Parse(finding.Properties[FindingPropertyKeys.RestoredDelaySeconds], CultureInfo.InvariantCulture);
-        Assert.Equal(2.5 * (Math.Log(2) * 18.5e-12 * 3 + 20e-12), restored, 1e-21);
+        Assert.Equal(0.69 * 4e3 * (2.5e-15 + 2 * 3.7e-15) + 0.69 * 18.5e-12 * 7 + 2 * 20e-12, restored, 1e-21);
         // Split after hop2 and hop4: segments of 2, 2, 1.
         Assert.Equal("2", finding.Properties[FindingPropertyKeys.SplitPointCount]);
         Assert.Equal("hop2\nhop4", finding.Properties[FindingPropertyKeys.SplitAfterDevices]);
         Assert.Equal("false", finding.Properties[FindingPropertyKeys.SplitPointsTruncated]);
-        Assert.Equal("5 pass gates in series without a restoring stage (limit 2), starting at 'hop1' and passing the limit at 'hop3', in design 'Buoy': Elmore delay 347 ps (50% estimate 240 ps); "
-                     + "a restoring stage every 2 gates would give about 146 ps", finding.Message);
+        Assert.Equal("5 pass gates in series without a restoring stage (limit 2), starting at 'hop1' and passing the limit at 'hop3', in design 'Buoy': Elmore delay 347 ps (50% estimate 239 ps); "
+                     + "a restoring stage every 2 gates would give about 157 ps", finding.Message);
         Assert.Equal(c.ToNetlist().Devices.Single(d => d.Name == "hop1").Span, Assert.Single(finding.RelatedLocations));
         Assert.Equal(c.ToNetlist().Devices.Single(d => d.Name == "hop3").Span, finding.Location);
+    }
+
+    [Fact]
+    public void Gates_on_opposite_phases_are_two_runs_not_one_conducting_chain()
+    {
+        // hop1..3 on sample.High, then leg1..3 on sample.Low: never on together (beyond the skew-long overlap, which is
+        // PW1002's race), so data never runs through all six in one go: two runs of three, each within a limit of 3.
+        // Elmore's RC ladder (Elmore 1948) assumes every section conducts at once; a chain is the gates that do.
+        var c = new Circuit("Buoy");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        Chain(c, Chain(c, c.Input("sensor"), clock.High, 3, "hop")[^1], clock.Low, 3, "leg");
+        Assert.Empty(Check(c, 3));
+
+        // The same six gates on one phase are one run of six.
+        var d = new Circuit("Buoy");
+        var clk = d.Clock("sample", 10.Nanoseconds());
+        Chain(d, Chain(d, d.Input("sensor"), clk.High, 3, "hop")[^1], clk.High, 3, "leg");
+        Assert.Equal("6", Assert.Single(Check(d, 3)).Properties[FindingPropertyKeys.ChainLength]);
+
+        // Data-controlled gates on provably exclusive controls (a select and its inverse) are two runs as well.
+        var e = new Circuit("Buoy");
+        var select = e.Input("select");
+        var first = e.Input("sensor");
+        for (var i = 1; i <= 3; i++) first = e.TransmissionGate(first, select, "on" + i);
+        var inverse = e.Inverter(select, "select_b");
+        for (var i = 1; i <= 3; i++) first = e.TransmissionGate(first, inverse, "off" + i);
+        Assert.Empty(Check(e, 3));
     }
 
     [Fact]
@@ -213,8 +242,9 @@ public class PassGateChainRuleTests
     {
         var c = new Circuit("BuoyLatch");
         var clock = c.Clock("sample", 10.Nanoseconds());
+        // The latch on the same phase as the gates before it (on the opposite phase they would be two runs).
         var hops = Chain(c, c.Input("sensor"), clock.High, 2, "hop");
-        var held = c.DynamicLatch(hops[^1], clock.Low, "hold");
+        var held = c.DynamicLatch(hops[^1], clock.High, "hold");
         Chain(c, held, clock.High, 2, "after");
 
         var finding = Assert.Single(Check(c, 2));
@@ -238,7 +268,7 @@ public class PassGateChainRuleTests
         var d = new Circuit("BuoyStatic2");
         var clock2 = d.Clock("sample", 10.Nanoseconds());
         var hop = d.TransmissionGate(d.Input("sensor"), clock2.High, "hop");
-        d.StaticLatch(hop, clock2.Low, "keep");
+        d.StaticLatch(hop, clock2.High, "keep"); // the same phase as 'hop': one run through both
         var finding = Assert.Single(Check(d, 1));
         Assert.Equal("keep.pass", Name(d, finding.Properties[FindingPropertyKeys.ReportedGateId]));
         Assert.Equal("2", finding.Properties[FindingPropertyKeys.ChainLength]);
@@ -254,7 +284,7 @@ public class PassGateChainRuleTests
         var n1 = c.Node("n1");
         var n2 = c.Node("n2");
         c.TransmissionGate(c.Input("sensor"), clock.High, n1);
-        c.TransmissionGate(n1, clock.Low, n2);
+        c.TransmissionGate(n1, clock.High, n2); // one phase: gates on opposite phases would be separate runs
         c.TransmissionGate(n2, clock.High, n1);
         var finding = Assert.Single(Check(c, 2));
         Assert.Equal("3", finding.Properties[FindingPropertyKeys.ChainLength]);
@@ -349,8 +379,9 @@ public class PassGateChainRuleTests
 
     // The example and its fix in docs/rules/PW2001.md (keep them in step). By hand: as the five-gate chain above,
     // but hop5 also drives an inverter (+2 fF gate load): hop5 4.5 fF, downstream +2 fF on every net:
-    //   Elmore = 4 kΩ·23 fF + 5 kΩ·(20.5 + 16.5 + 12.5 + 8.5 + 4.5) fF = 92 + 312.5 = 404.5 ps; ln 2 × = 280 ps;
-    //   restored: mean C (4·4 + 4.5)/5 = 4.1 fF, RC = 20.5 ps, t = 2.5·(ln 2·20.5 ps·3 + 20 ps) = 157 ps.
+    //   Elmore = 4 kΩ·23 fF + 5 kΩ·(20.5 + 16.5 + 12.5 + 8.5 + 4.5) fF = 92 + 312.5 = 404.5 ps; 0.69 × = 279 ps;
+    //   restored: mean C (4·4 + 4.5)/5 = 4.1 fF, RC = 20.5 ps, the same driver on the input (2.5 fF) and the first
+    //   segment, segments 2 + 2 + 1, two restoring stages: 0.69·4 kΩ·10.7 fF + 0.69·20.5 ps·7 + 40 ps = 169 ps.
     private sealed class TelemetryBus : Design
     {
         private readonly bool restored;
@@ -374,8 +405,8 @@ public class PassGateChainRuleTests
     public void Documented_example_and_its_fix()
     {
         var finding = Assert.Single(new TelemetryBus(restored: false).Check().Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
-        Assert.Equal("5 pass gates in series without a restoring stage (limit 2), starting at 'hop1' and passing the limit at 'hop3', in design 'TelemetryBus': Elmore delay 405 ps (50% estimate 280 ps); "
-                     + "a restoring stage every 2 gates would give about 157 ps", finding.Message);
+        Assert.Equal("5 pass gates in series without a restoring stage (limit 2), starting at 'hop1' and passing the limit at 'hop3', in design 'TelemetryBus': Elmore delay 405 ps (50% estimate 279 ps); "
+                     + "a restoring stage every 2 gates would give about 169 ps", finding.Message);
         Assert.Equal("hop2\nhop4", finding.Properties[FindingPropertyKeys.SplitAfterDevices]);
         Assert.DoesNotContain(new TelemetryBus(restored: true).Check().Findings, f => f.RuleId == RuleCatalog.SeriesPassGates.Id);
     }

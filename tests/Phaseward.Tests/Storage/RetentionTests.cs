@@ -118,11 +118,11 @@ public class RetentionTests
         circuit.SetLeakage(b, 1.Picoamperes());
         var netlist = circuit.ToNetlist();
 
-        // a: wire 1 fF + driver diffusion 1.5 fF + inverter gate 2 fF = 4.5 fF; process leakage 5 pA; ΔV 0.3 V.
+        // a: wire 1 fF + driver diffusion 1.5 fF + inverter gate 2 fF = 4.5 fF; process (hot-corner) leakage 1 nA; ΔV 0.3 V.
         var ra = Retention.Of(netlist, a);
         Assert.Equal(4.5e-15, ra.Capacitance.Farads, 1e-24);
-        Assert.Equal(5e-12, ra.Leakage.Amperes, 1e-24);
-        Assert.Equal(270e-6, ra.Time.Seconds, 1e-15);
+        Assert.Equal(1e-9, ra.Leakage.Amperes, 1e-24);
+        Assert.Equal(1.35e-6, ra.Time.Seconds, 1e-18);
         // b: 9 fF × 0.3 V / 1 pA = 2.7 ms (common practice: Q = C·V, t = Q/I).
         Assert.Equal(2.7e-3, Retention.Of(netlist, b).Time.Seconds, 1e-15);
     }

@@ -139,13 +139,13 @@ public class StorageIsolationTests
         var node = c.TransmissionGate(c.Input("d"), clk.High, "n");
         c.Inverter(node);
         var storage = StorageNodes.Find(c.ToNetlist(), node)!;
-        var retention = storage.Retention.Time; // 4.5 fF × 0.3 V / 5 pA = 270 µs
-        Assert.Equal(270e-6, retention.Seconds, 1e-15);
+        var retention = storage.Retention.Time; // 4.5 fF × 0.3 V / 1 nA = 1.35 µs
+        Assert.Equal(1.35e-6, retention.Seconds, 1e-18);
 
         var isolation = StorageIsolation.WhileRunning(storage)!;
-        var exact = 0.5 / (270e-6 + 30e-12); // 1851.85 Hz
+        var exact = 0.5 / (1.35e-6 + 30e-12); // 370.362 kHz
         var reported = isolation.LowestSafeFrequency(retention)!.Value;
-        Assert.Equal(1860, reported.Hertz, 1e-6); // rounded up to three significant digits
+        Assert.Equal(371_000, reported.Hertz, 1e-6); // rounded up to three significant digits
         Assert.True(reported.Hertz >= exact);
         Assert.True(isolation.LongestAtPeriod(reported.ToPeriod()) <= retention);
         Assert.True(isolation.LongestAtPeriod(new Time(1.0 / (exact * 0.999))) > retention);

@@ -2,6 +2,7 @@ using System.Collections.Generic;
 using System.Globalization;
 using Phaseward.Checking;
 using Phaseward.Clocking;
+using Phaseward.Electrical;
 using Phaseward.Netlists;
 using Phaseward.Rules.DynamicStorage;
 using Phaseward.Rules.Timing;
@@ -22,13 +23,14 @@ namespace Phaseward.Rules.ClockPhases;
 /// <remarks>
 /// The condition — latch a clock gate's enable on the phase in which the gate blocks the clock, so the enable is
 /// steady while the clock passes — is common practice for glitch-free clock gating. Windows are nominal edges on the
-/// design's time base, compared over the two clocks' common cycle; delays are first-order 0.69·R·C stages. One
+/// design's time base, compared over the two clocks' common cycle; delays are first-order 0.69·R·C stages at the slow
+/// corner (<see cref="Process.SlowDelayFactor"/>: the latest change is the one that reaches into the passing phase). One
 /// finding per gate (the first storage that breaks the condition), at the gate's call. The search of each gate's
 /// enable stops at storage and inputs: its cost is the enable's fan-in logic.
 /// </remarks>
 public sealed class ClockGateEnableRule : Rule
 {
-    private const string FromLatch = "during {0} (from latch '{1}', transparent in {2}, through a {3} path)";
+    private const string FromLatch = "during {0} (from latch '{1}', transparent in {2}, through a {3} path; {4})";
     private const string Unrelated = "at any time (from latch '{0}', transparent in {1}, whose clock has no fixed time relation to '{2}')";
     private const string FromInput = "at any time (from primary input '{0}', taken as changing at any time by phaseward.clock_gate_inputs_may_change)";
 
@@ -64,14 +66,15 @@ public sealed class ClockGateEnableRule : Rule
                         var opens = PhaseWindow.Of(phase).Opens;
                         borrow ??= BorrowByLatch(model); // the whole design's latch timing: only once an enable comes from a latch
                         borrow.TryGetValue(latch.Index, out var late);
-                        var until = opens + late + model.EntryDelay(latch) + origin.Delay;
+                        var slow = netlist.Process.SlowDelayFactor;
+                        var until = opens + late + (model.EntryDelay(latch) + origin.Delay) * slow;
                         change = new TimeInterval(opens, until);
                         if (!Overlaps(change.Value, phase.Clock.Period, passes, source.Period, cycle))
                             continue;
                         // Data already waiting when the latch opens passes within its entry delay: if that falls while the
                         // gate passes the clock, the storage is on the wrong phase (not merely slow to reach the gate).
-                        opensWhilePassing = Overlaps(new TimeInterval(opens, opens + model.EntryDelay(latch)), phase.Clock.Period, passes, source.Period, cycle);
-                        changes = Format(FromLatch, Interval(change.Value), latch.Name, phase.Name, origin.Delay);
+                        opensWhilePassing = Overlaps(new TimeInterval(opens, opens + model.EntryDelay(latch) * slow), phase.Clock.Period, passes, source.Period, cycle);
+                        changes = Format(FromLatch, Interval(change.Value), latch.Name, phase.Name, origin.Delay * slow, CornerText.Of(netlist.Process, Corner.Slow));
                     }
                 }
                 else
@@ -99,7 +102,7 @@ public sealed class ClockGateEnableRule : Rule
                 if (change is not null)
                 {
                     properties[FindingPropertyKeys.OpensWhilePassing] = opensWhilePassing ? "true" : "false";
-                    properties[FindingPropertyKeys.EnableDelaySeconds] = FindingPropertyValues.Number((model.EntryDelay(origin.Latch!) + origin.Delay).Seconds);
+                    properties[FindingPropertyKeys.EnableDelaySeconds] = FindingPropertyValues.Number(((model.EntryDelay(origin.Latch!) + origin.Delay) * netlist.Process.SlowDelayFactor).Seconds);
                 }
                 if (change is { } c)
                 {
@@ -158,7 +161,7 @@ public sealed class ClockGateEnableRule : Rule
     private static Dictionary<int, Time> BorrowByLatch(LatchModel model)
     {
         var borrow = new Dictionary<int, Time>();
-        foreach (var arrival in LatchBorrowing.Compute(TimingFigures.For(model.Netlist)))
+        foreach (var arrival in LatchBorrowing.Compute(TimingFigures.For(model.Netlist, Corner.Slow)))
         {
             var index = arrival.Path.To.Index;
             if (!borrow.TryGetValue(index, out var seen) || arrival.Borrow > seen)

@@ -4,6 +4,7 @@ using System.Globalization;
 using System.Threading;
 using Phaseward.Checking;
 using Phaseward.Clocking;
+using Phaseward.Electrical;
 using Phaseward.Sequencing;
 
 namespace Phaseward.Rules.ClockPhases;
@@ -14,7 +15,7 @@ namespace Phaseward.Rules.ClockPhases;
 /// or different clocks). The fastest data entering A when A opens must not reach B's storage node before B closes
 /// (<see cref="RaceModel"/>, the model PW4002 shares): margin = t(A's entry gate) + t_min(path, A's output stage
 /// included) + t(B's entry gate) − overlap, the overlap being how long B still conducts after A opens. Reported at B
-/// when the margin is below <see cref="RulePolicy.MinimumRaceMargin"/>. For a register's master and slave this is the
+/// when the margin is below <see cref="RulePolicy.MinimumRaceMargin"/>. Delays at the fast corner. For a register's master and slave this is the
 /// condition t(TG1) + t(I1) + t(TG2) &gt; 0-0 overlap (rising-edge register). A path from one register's slave to a
 /// register's master is the capturing register's hold check (PW4002) and is left to it; windows transparent together
 /// for longer than the overlap allowance are PW1001's.
@@ -46,7 +47,7 @@ public sealed class OverlapRaceRule : Rule
             if (register is not null)
                 properties[FindingPropertyKeys.Register] = register.Name;
             yield return new Finding(RuleCatalog.OverlapRace, path.EntryGate.Span,
-                new object[] { b.Name, a.Name, race.OverlapName, race.ClocksText, fastest, overlap, margin, required },
+                new object[] { b.Name, a.Name, race.OverlapName, race.ClocksText, fastest, overlap, margin, required, CornerText.Of(context.Netlist.Process, Corner.Fast) },
                 new[] { a.Span }, properties);
         }
     }
@@ -65,7 +66,7 @@ public sealed class OverlapRace
     /// <summary>The fastest path from the launching latch to the catching one.</summary>
     public LatchPath Path { get; }
 
-    /// <summary>Launching entry gate + shortest path + catching entry gate.</summary>
+    /// <summary>Launching entry gate + shortest path + catching entry gate, at the fast corner.</summary>
     public Time Fastest { get; }
 
     /// <summary>How long the catching latch still conducts after the launching one opens.</summary>

@@ -10,7 +10,8 @@ namespace Phaseward.Rules.DynamicStorage;
 /// PW3003: a pass device whose input and output are both storage nodes, each possibly floating while the device
 /// conducts. When it opens, the input node's charge is shared with the output node; the droop
 /// V·C2/(C1+C2) (V the supply, C1 the input node, C2 the output node taken at 0 V) is reported when it exceeds the
-/// process's tolerated droop.
+/// process's tolerated droop (the node's whole droop allowance; what it leaves is what leakage may take, see
+/// <see cref="DroopBudget"/>).
 /// </summary>
 /// <remarks>
 /// Counts: a pass device (clock- or data-controlled) from storage node A to storage node B, where A's drivers do
@@ -31,20 +32,9 @@ public sealed class ChargeSharingRule : Rule
         foreach (var device in netlist.Devices)
         {
             context.CancellationToken.ThrowIfCancellationRequested();
-            if (!device.IsPassDevice)
-                continue;
-            if (StorageNodes.Find(netlist, device.Inputs[0]) is not { } charged
-                || StorageNodes.Find(netlist, device.Output) is not { } other
-                || ReferenceEquals(charged, other))
-                continue;
-            if (!StorageIsolation.MayFloatWhile(charged, device) || !StorageIsolation.MayFloatWhile(other, device, except: device))
+            if (!ChargeSharingPaths.TryShare(netlist, device, windows, out var charged, out var other, out var partners, out var sharing))
                 continue;
 
-            var partners = SharingPartners.Of(netlist, device, charged, other, windows);
-            var sharedCapacitance = other.Retention.Capacitance;
-            foreach (var partner in partners)
-                sharedCapacitance += partner.Node.Retention.Capacitance;
-            var sharing = ChargeSharing.Of(charged.Retention.Capacitance, sharedCapacitance, netlist.Process.Supply);
             var tolerated = netlist.Process.ToleratedDroop;
             if (sharing.Droop <= tolerated)
                 continue;

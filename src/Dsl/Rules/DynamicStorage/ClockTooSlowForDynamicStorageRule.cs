@@ -20,6 +20,9 @@ public sealed class ClockTooSlowForDynamicStorageRule : Rule
             context.CancellationToken.ThrowIfCancellationRequested();
             if (StorageIsolation.WhileRunning(node, buffers) is not { } running)
                 continue;
+            // Charge sharing that alone spends the whole allowance is PW3003's finding: one finding per cause.
+            if (node.Budget.SpentBySharing)
+                continue;
             var retention = node.Retention;
             if (running.LowestSafeFrequency(retention.Time) is not { } minimum)
                 continue;
@@ -42,7 +45,7 @@ public sealed class ClockTooSlowForDynamicStorageRule : Rule
                 new object[]
                 {
                     node.Net.Name, isolation, root.Period, root.Name,
-                    retained, retention.Capacitance, retention.ToleratedDroop, retention.Leakage, minimum,
+                    retained, retention.Capacitance, node.Budget.DroopText(), retention.Leakage, minimum,
                 },
                 new[] { root.Span },
                 properties);

@@ -7,7 +7,8 @@ namespace Phaseward.Rules.DynamicStorage;
 
 /// <summary>
 /// PW3001: a storage node that floats while a gated clock is stopped (see <see cref="StorageIsolation.WhileStopped"/>)
-/// when the gates declare no maximum idle time, or one longer than the node's retention time.
+/// when the gates declare no maximum idle time, or one that, with the float around the stop and the restart
+/// (<see cref="StoppedIsolation.AroundStopAndRestart"/>), is longer than the node's retention time.
 /// </summary>
 public sealed class DynamicNodeOnGatedClockRule : Rule
 {
@@ -20,14 +21,19 @@ public sealed class DynamicNodeOnGatedClockRule : Rule
             context.CancellationToken.ThrowIfCancellationRequested();
             if (StorageIsolation.WhileStopped(node) is not { } stopped)
                 continue;
+            // Charge sharing that alone spends the whole allowance is PW3003's finding: one finding per cause.
+            if (node.Budget.SpentBySharing)
+                continue;
             var retention = node.Retention;
-            if (stopped.IdleBound is { } idle && idle <= retention.Time)
+            if (stopped.FloatBound is { } floats && floats <= retention.Time)
                 continue;
 
             var gate = stopped.Gate;
-            var (idleText, retainedText) = stopped.IdleBound is { } idleShown
-                ? Engineering.FormatApart(idleShown.Seconds, retention.Time.Seconds, "s")
+            var (idleText, retainedText) = stopped.FloatBound is { } floatShown
+                ? Engineering.FormatApart(floatShown.Seconds, retention.Time.Seconds, "s")
                 : (FindingPropertyValues.Unbounded, retention.Time.ToString());
+            if (stopped.IdleBound is { } idleShown)
+                idleText = $"{idleShown}, so it floats up to {idleText} with the clock periods around the stop and the restart";
             var related = new List<SourceSpan>(stopped.Gates.Count);
             foreach (var g in stopped.Gates)
                 related.Add(g.Span);
@@ -52,7 +58,7 @@ public sealed class DynamicNodeOnGatedClockRule : Rule
                 new object[]
                 {
                     node.Net.Name, gate.Name, gate.StopLevel == ClockStopLevel.High ? "high" : "low", idleText,
-                    retainedText, retention.Capacitance, retention.ToleratedDroop, retention.Leakage,
+                    retainedText, retention.Capacitance, node.Budget.DroopText(), retention.Leakage,
                 },
                 related,
                 properties);

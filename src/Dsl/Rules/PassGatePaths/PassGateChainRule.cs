@@ -93,7 +93,10 @@ public sealed class PassGateChainRule : Rule
         var fifty = FiftyPercentDelay.FromElmore(chain.Elmore);
         var meanResistance = chain.TotalResistance / chain.Length;
         var meanCapacitance = chain.TotalNodeCapacitance / chain.Length;
-        var restored = RestoringStageSpacing.BufferedChainDelay(chain.Length, spacing, meanResistance, meanCapacitance, process.StageDelay);
+        // The same driver and the actual stages as the Elmore figure it is compared with (RestoredChainDelay).
+        var input = chain.First.Inputs[0];
+        var restored = RestoringStageSpacing.RestoredChainDelay(chain.Length, spacing, meanResistance, meanCapacitance, process.StageDelay,
+            chains.Network.RootResistanceOf(input), netlist.CapacitanceOf(input));
 
         var window = ChainWindow(chains, gate, chain.Length, limit, spacing);
         var splitCount = (chain.Length - 1) / spacing;

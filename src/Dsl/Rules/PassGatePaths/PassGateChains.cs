@@ -29,7 +29,7 @@ public sealed class PassGateRun
     /// <summary>Elmore delay from the driving stage to the last gate's output (the figure PW2001 reports).</summary>
     public Time ElmoreDelay { get; }
 
-    /// <summary>The 50 % delay of a single-pole response with that Elmore time constant (ln 2 · τ).</summary>
+    /// <summary>The 50 % delay of a single-pole response with that Elmore time constant (0.69 ≈ ln 2, times τ).</summary>
     public Time FiftyPercentDelay => Electrical.FiftyPercentDelay.FromElmore(ElmoreDelay);
 
     /// <summary>The most gates in series PW2001 allows under the policy it was computed with.</summary>

@@ -1,5 +1,6 @@
 using System;
 using System.Threading;
+using Phaseward.Clocking;
 using Phaseward.Electrical;
 using Phaseward.Netlists;
 
@@ -17,6 +18,8 @@ namespace Phaseward.Rules.PassGatePaths;
 /// gate conducts (<see cref="PassGateNetwork.RootLoad"/>), plus, for every gate on the run, its
 /// on-resistance times the downstream capacitance it charges. Where several runs end at a gate, the longer one is
 /// kept (then the slower one, then the lower device id), so every gate has one predecessor and the runs form a tree.
+/// A run continues only through gates that can conduct at the same time (<see cref="ConductionOverlap"/>): a gate on
+/// clk.High followed by one on clk.Low is two runs, each ending at a node the other phase stores.
 /// </remarks>
 internal sealed class SeriesChains
 {
@@ -27,6 +30,7 @@ internal sealed class SeriesChains
     private readonly double[] ohmsIn;
     private readonly double[] faradsIn;
     private readonly bool[] assumesIn;
+    private readonly PhaseWindowCache windows = new();
     private readonly CancellationToken cancellationToken;
 
     // The runs continuing from each gate: the second sweep, made on first use. A rule that only needs the runs ending
@@ -82,7 +86,7 @@ internal sealed class SeriesChains
             var ohms = netlist.ResistanceOf(gate).Ohms;
             var farads = netlist.CapacitanceOf(gate.Output).Farads;
             var step = ohms * network.ChargedThrough(gate).Farads;
-            var before = network.IsInputEdgeKept(gate) ? netBestDriver[input.Id] : -1;
+            var before = network.IsInputEdgeKept(gate) ? BestDriverConductingWith(gate, netBestDriver[input.Id]) : -1;
             previous[gate.Id] = before;
             if (before < 0)
             {
@@ -103,6 +107,28 @@ internal sealed class SeriesChains
                 assumesIn[gate.Id] = assumesIn[before] || network.AssumesUnknownBranchesConduct(gate);
             }
         }
+    }
+
+    // Two gates in series carry data through both only if they can conduct at the same time: gates on opposite phases
+    // of a clock (beyond the skew-long overlap, which is PW1002's race) or on provably exclusive data controls are two
+    // runs, not one. The net's best driver is usually compatible; only when it is not are the others searched.
+    private bool ConductTogether(Device a, Device b)
+        => ConductionOverlap.MayConductTogether(Network.Netlist, a, b, windows, SkewOverlapCounts.No);
+
+    private int BestDriverConductingWith(Device gate, int best)
+    {
+        if (best < 0 || ConductTogether(Network.Netlist.Devices[best], gate))
+            return best;
+        best = -1;
+        foreach (var driver in Network.Netlist.DriverList(gate.Inputs[0]))
+        {
+            if (!driver.IsPassDevice || !Network.IsOutputEdgeKept(driver) || !ConductTogether(driver, gate)) continue;
+            if (best < 0 || depthIn[driver.Id] > depthIn[best]
+                || (depthIn[driver.Id] == depthIn[best] && elmoreIn[driver.Id] > elmoreIn[best]))
+                best = driver.Id;
+        }
+
+        return best;
     }
 
     // Backward in postorder: the longest run continuing from each gate.
@@ -148,7 +174,7 @@ internal sealed class SeriesChains
             }
 
             var gate = devices[node];
-            var after = network.IsOutputEdgeKept(gate) ? netBestLoad[gate.Output.Id] : -1;
+            var after = network.IsOutputEdgeKept(gate) ? BestLoadConductingWith(gate, netBestLoad[gate.Output.Id], depthOut, elmoreAfter) : -1;
             next[gate.Id] = after;
             if (after < 0)
             {
@@ -170,6 +196,30 @@ internal sealed class SeriesChains
         this.faradsAfter = faradsAfter;
         this.assumesAfter = assumesAfter;
         this.depthOut = depthOut;
+    }
+
+    private int BestLoadConductingWith(Device gate, int best, int[] depthOut, double[] elmoreAfter)
+    {
+        if (best < 0 || ConductTogether(gate, Network.Netlist.Devices[best]))
+            return best;
+        var network = Network;
+        var netlist = network.Netlist;
+        var net = gate.Output;
+        best = -1;
+        var bestDelay = 0.0;
+        for (var position = network.PassLoadStart(net); position < network.PassLoadEnd(net); position++)
+        {
+            var load = network.PassLoadAt(position);
+            if (!network.IsInputEdgeKept(load) || !ConductTogether(gate, load)) continue;
+            var delay = netlist.ResistanceOf(load).Ohms * network.ChargedThrough(load).Farads + elmoreAfter[load.Id];
+            if (best < 0 || depthOut[load.Id] > depthOut[best] || (depthOut[load.Id] == depthOut[best] && delay > bestDelay))
+            {
+                best = load.Id;
+                bestDelay = delay;
+            }
+        }
+
+        return best;
     }
 
     public PassGateNetwork Network { get; }

@@ -62,7 +62,7 @@ public sealed class LatchLoop
 /// </summary>
 public static class LatchBorrowing
 {
-    /// <summary>The steady state of borrowing over the design's latch paths.</summary>
+    /// <summary>The steady state of borrowing over the design's latch paths, at the corner of <paramref name="figures"/> (the rules use the slow corner).</summary>
     public static BorrowingSolution Solve(TimingFigures figures, CancellationToken cancellationToken = default)
     {
         if (figures is null) throw new ArgumentNullException(nameof(figures));
@@ -101,7 +101,7 @@ public static class LatchBorrowing
             {
                 var from = edge.Path.From;
                 var to = edge.Path.To;
-                var arrival = figures.Of(from).EntryDelay.Seconds + borrow[from.Index] + edge.Path.MaxDelay.Seconds - edge.Gap.Seconds;
+                var arrival = figures.Of(from).EntryDelay.Seconds + borrow[from.Index] + figures.AtCorner(edge.Path.MaxDelay).Seconds - edge.Gap.Seconds;
                 var next = Math.Max(0, arrival);
                 if (capped)
                     next = Math.Min(Math.Max(0, figures.Of(to).BorrowLimit.Seconds), next);
@@ -162,7 +162,7 @@ public static class LatchBorrowing
             var b = edge.Path.To;
             if (!IsReportable(model, a, b))
                 continue;
-            var arrival = figures.Of(a).EntryDelay + new Time(borrow[a.Index]) + edge.Path.MaxDelay - edge.Gap;
+            var arrival = figures.Of(a).EntryDelay + new Time(borrow[a.Index]) + figures.AtCorner(edge.Path.MaxDelay) - edge.Gap;
             var limit = figures.Of(b).BorrowLimit;
             if (worst[b.Index] is null || arrival > worst[b.Index]!.Arrival)
                 worst[b.Index] = new LatchArrival(edge.Path, arrival, limit - arrival, new Time(borrow[a.Index]), new Time(borrow[b.Index]));
@@ -215,7 +215,7 @@ public static class LatchBorrowing
                 var path = paths[(first + i) % paths.Count];
                 ordered.Add(path);
                 onReportedLoop[path.To.Index] = true;
-                delay += figures.Of(path.From).EntryDelay + path.MaxDelay;
+                delay += figures.Of(path.From).EntryDelay + figures.AtCorner(path.MaxDelay);
                 allowed += gapOf[path];
             }
 

@@ -2,6 +2,7 @@ using System.Collections.Generic;
 using System.Globalization;
 using Phaseward.Checking;
 using Phaseward.Clocking;
+using Phaseward.Electrical;
 using Phaseward.Netlists;
 using Phaseward.Rules.ClockPhases;
 using Phaseward.Sequencing;
@@ -18,7 +19,8 @@ namespace Phaseward.Rules.Timing;
 /// fails (PW4003) when the slack B_B − a is below <see cref="RulePolicy.MinimumTimingSlack"/>. A loop of latches whose
 /// delays Σ(t_entry + t_path,max) exceed the time its phases give it, Σ g, gains borrowing every cycle and has no
 /// steady state (PW4005), whatever each latch's window (Sakallah, Mudge &amp; Olukotun, 1990, the steady-state
-/// latch-loop constraint; from memory).
+/// latch-loop constraint; from memory). Every delay is taken at the slow corner (<see cref="Process.SlowDelayFactor"/>),
+/// the messages say so.
 /// </summary>
 /// <remarks>
 /// Borrowing is carried forward to its fixed point (<see cref="LatchBorrowing"/>). Latches fed only from primary
@@ -31,7 +33,7 @@ public sealed class LatchBorrowingRule : Rule
 
     public override IEnumerable<Finding> Check(RuleContext context)
     {
-        var figures = TimingFigures.For(context.Netlist);
+        var figures = TimingFigures.For(context.Netlist, Corner.Slow);
         var result = LatchBorrowing.Solve(figures, context.CancellationToken);
         var onLoop = new HashSet<LatchPath>();
         foreach (var loop in result.DivergentLoops)
@@ -42,7 +44,7 @@ public sealed class LatchBorrowingRule : Rule
             for (var i = 1; i < loop.Paths.Count; i++)
                 related.Add(loop.Paths[i].EntryGate.Span);
             yield return new Finding(RuleCatalog.LatchLoop, first.EntryGate.Span,
-                new object[] { loop.Describe(), loop.Paths.Count, loop.TotalDelay, loop.TimeAllowed, loop.Growth },
+                new object[] { loop.Describe(), loop.Paths.Count, loop.TotalDelay, loop.TimeAllowed, loop.Growth, figures.CornerText },
                 related,
                 new Dictionary<string, string>
                 {
@@ -65,7 +67,7 @@ public sealed class LatchBorrowingRule : Rule
                 new object[]
                 {
                     b.Name, a.Name, arrival.Arrival, timingB.Window.NominalLength, timingB.Setup + timingB.Latch.Phase.Clock.ComplementSkew,
-                    timingB.BorrowLimit, arrival.Slack, arrival.SourceBorrow,
+                    timingB.BorrowLimit, arrival.Slack, arrival.SourceBorrow, figures.CornerText,
                 },
                 new[] { a.Span },
                 new Dictionary<string, string>

@@ -2,6 +2,7 @@ using System.Collections.Generic;
 using System.Globalization;
 using Phaseward.Checking;
 using Phaseward.Clocking;
+using Phaseward.Electrical;
 using Phaseward.Rules.ClockPhases;
 using Phaseward.Sequencing;
 
@@ -22,6 +23,8 @@ namespace Phaseward.Rules.Timing;
 /// capacitance, the 50 % point of a single RC step response (t_p = 0.69·R·C: Rabaey, Chandrakasan, Nikolić,
 /// "Digital Integrated Circuits: A Design Perspective", 2nd ed., ch. 5; section from memory). The window must be at
 /// least that long: a latch's minimum pulse width is its setup requirement (common practice).</para>
+/// <para>At the slow corner: R (hence the delay) times <see cref="Process.SlowDelayFactor"/>, where a write is
+/// hardest to complete.</para>
 /// <para>Reported at the latch's entry gate, the clock as related location, when window − entry delay is below
 /// <see cref="RulePolicy.MinimumTimingSlack"/>. A first-order estimate.</para>
 /// </remarks>
@@ -43,7 +46,7 @@ public sealed class LatchWriteWindowRule : Rule
                 new object[]
                 {
                     latch.Name, write.Window, write.FullyOn, write.Skew, write.EntryDelay, latch.Storage.Name,
-                    write.Resistance, write.Capacitance, write.Margin,
+                    write.Resistance, write.Capacitance, write.Margin, CornerText.Of(netlist.Process, Corner.Slow),
                 },
                 new[] { latch.Phase.Clock.Span },
                 new Dictionary<string, string>
@@ -78,10 +81,10 @@ public sealed class LatchWriteWindow
     /// <summary>The part of the window in which both halves of the entry gate conduct: window − 2 · skew (at least 0).</summary>
     public Time FullyOn { get; }
 
-    /// <summary>0.69 · R · C of the slowest entry gate charging the storage node.</summary>
+    /// <summary>0.69 · R · C of the slowest entry gate charging the storage node, at the slow corner.</summary>
     public Time EntryDelay { get; }
 
-    /// <summary>The slowest entry gate's on-resistance.</summary>
+    /// <summary>The slowest entry gate's on-resistance at the slow corner.</summary>
     public Resistance Resistance { get; }
 
     /// <summary>The storage node's capacitance.</summary>
@@ -99,7 +102,8 @@ public sealed class LatchWriteWindow
         foreach (var gate in latch.EntryGates)
             if (model.StageDelay(gate) > model.StageDelay(slowest))
                 slowest = gate;
-        return new LatchWriteWindow(PhaseWindow.Of(latch.Phase).Length, latch.Phase.Clock.ComplementSkew, model.EntryDelay(latch),
-            netlist.ResistanceOf(slowest), netlist.CapacitanceOf(latch.Storage));
+        var slow = netlist.Process.SlowDelayFactor;
+        return new LatchWriteWindow(PhaseWindow.Of(latch.Phase).Length, latch.Phase.Clock.ComplementSkew, model.EntryDelay(latch) * slow,
+            netlist.ResistanceOf(slowest) * slow, netlist.CapacitanceOf(latch.Storage));
     }
 }

@@ -4,6 +4,7 @@ using System.Globalization;
 using System.Threading;
 using Phaseward.Checking;
 using Phaseward.Clocking;
+using Phaseward.Electrical;
 using Phaseward.Rules.ClockPhases;
 using Phaseward.Sequencing;
 
@@ -22,8 +23,10 @@ namespace Phaseward.Rules.Timing;
 /// plus the clock skew between the registers (the capture edge before the one that setup uses). With
 /// t_hold = t_overlap − t_T1 this is the race model of PW1002 (<see cref="RaceModel"/>): one race, one model.</item>
 /// </list>
-/// Reported at the capturing register, the launching one as related location, when the slack is below
-/// <see cref="RulePolicy.MinimumTimingSlack"/>.
+/// Setup is checked at the slow corner (every delay times <see cref="Process.SlowDelayFactor"/>), hold at the fast
+/// corner (<see cref="Process.FastDelayFactor"/>): each where it is hardest to meet. Reported at the capturing
+/// register, the launching one as related location, when the slack is below
+/// <see cref="RulePolicy.MinimumTimingSlack"/>; the message names the corner.
 /// </summary>
 public sealed class RegisterTimingRule : Rule
 {
@@ -31,8 +34,8 @@ public sealed class RegisterTimingRule : Rule
 
     public override IEnumerable<Finding> Check(RuleContext context)
     {
-        var figures = TimingFigures.For(context.Netlist);
-        foreach (var result in RegisterPathChecks.For(figures, context.CancellationToken))
+        var process = context.Netlist.Process;
+        foreach (var result in RegisterPathChecks.For(context.Netlist, context.CancellationToken))
         {
             var check = result.Check;
             var launch = result.Launch;
@@ -43,6 +46,7 @@ public sealed class RegisterTimingRule : Rule
                     {
                         capture.Name, launch.Name, check.ClockToOutput, check.PathMax, check.Setup,
                         check.ClockToOutput + check.PathMax + check.Setup, check.Available, check.SetupSlack,
+                        CornerText.Of(process, Corner.Slow),
                     },
                     new[] { launch.Span }, Properties(launch, capture, check.SetupSlack));
             if (check.HoldSlack < context.Policy.MinimumTimingSlack)
@@ -50,7 +54,7 @@ public sealed class RegisterTimingRule : Rule
                     new object[]
                     {
                         capture.Name, launch.Name, check.ClockToOutputMin, check.PathMin, check.ClockToOutputMin + check.PathMin,
-                        check.Hold, check.Skew, check.HoldSlack,
+                        check.Hold, check.Skew, check.HoldSlack, CornerText.Of(process, Corner.Fast),
                     },
                     new[] { launch.Span }, Properties(launch, capture, check.HoldSlack));
         }
@@ -84,19 +88,24 @@ public sealed class RegisterPathResult
 }
 
 /// <summary>
-/// The setup and hold checks behind PW4001 and PW4002, for every pair of registers on one root clock joined by a
-/// path (the worst path of each pair), in the order the rule reports them. For reports: the same figures as the
-/// findings' messages, passing checks included.
+/// The setup and hold checks behind PW4001 and PW4002, for every pair of registers on related clocks joined by a
+/// path (the worst path of each pair), in the order the rule reports them: setup figures at the slow corner, hold
+/// figures at the fast corner. For reports: the same figures as the findings' messages, passing checks included.
 /// </summary>
 public static class RegisterPathChecks
 {
-    public static IReadOnlyList<RegisterPathResult> For(TimingFigures figures, CancellationToken cancellationToken = default)
+    public static IReadOnlyList<RegisterPathResult> For(Netlists.Netlist netlist, CancellationToken cancellationToken = default)
     {
-        if (figures is null) throw new ArgumentNullException(nameof(figures));
-        var model = figures.Model;
-        var timingOf = new Dictionary<Register, RegisterTiming>();
-        foreach (var timing in figures.Registers)
-            timingOf[timing.Register] = timing;
+        if (netlist is null) throw new ArgumentNullException(nameof(netlist));
+        var slow = TimingFigures.For(netlist, Corner.Slow);
+        var fast = TimingFigures.For(netlist, Corner.Fast);
+        var model = slow.Model;
+        var slowOf = new Dictionary<Register, RegisterTiming>();
+        foreach (var timing in slow.Registers)
+            slowOf[timing.Register] = timing;
+        var fastOf = new Dictionary<Register, RegisterTiming>();
+        foreach (var timing in fast.Registers)
+            fastOf[timing.Register] = timing;
 
         var checks = new Dictionary<(Register, Register), RegisterPathCheck>();
         var order = new List<(Register, Register)>();
@@ -109,7 +118,7 @@ public static class RegisterPathChecks
             var capture = model.RegisterOf(path.To)!;
             if (!TimeBase.Related(launch.Clock, capture.Clock))
                 continue;
-            var check = RegisterPathCheck.Of(model, timingOf[launch], timingOf[capture], path);
+            var check = RegisterPathCheck.Of(model, slow, fast, (slowOf[launch], slowOf[capture]), (fastOf[launch], fastOf[capture]), path);
             var key = (launch, capture);
             if (!checks.TryGetValue(key, out var seen))
             {
@@ -168,15 +177,17 @@ public sealed class RegisterPathCheck
 
     public Time HoldSlack => ClockToOutputMin + PathMin - (Hold + Skew);
 
-    internal static RegisterPathCheck Of(LatchModel model, RegisterTiming launch, RegisterTiming capture, LatchPath path)
+    // Setup from the slow corner's figures and the slowest path at that corner; hold from the fast corner's.
+    internal static RegisterPathCheck Of(LatchModel model, TimingFigures slow, TimingFigures fast,
+        (RegisterTiming Launch, RegisterTiming Capture) atSlow, (RegisterTiming Launch, RegisterTiming Capture) atFast, LatchPath path)
     {
         var output = model.OutputDelay(path.From);
-        var pathMax = Time.Max(Time.Zero, path.MaxDelay - output);
-        var pathMin = Time.Max(Time.Zero, path.MinDelay - output);
-        var available = AvailableTime(model, launch.Register, capture.Register);
-        var period = capture.Clock.Period;
-        return new RegisterPathCheck(launch.ClockToOutput, launch.ClockToOutputMin, pathMax, pathMin, capture.Setup, capture.Hold,
-            available, period);
+        var pathMax = slow.AtCorner(Time.Max(Time.Zero, path.MaxDelay - output));
+        var pathMin = fast.AtCorner(Time.Max(Time.Zero, path.MinDelay - output));
+        var available = AvailableTime(model, atSlow.Launch.Register, atSlow.Capture.Register);
+        var period = atSlow.Capture.Clock.Period;
+        return new RegisterPathCheck(atSlow.Launch.ClockToOutput, atFast.Launch.ClockToOutputMin, pathMax, pathMin, atSlow.Capture.Setup,
+            atFast.Capture.Hold, available, period);
     }
 
     // From the launching edge to the capturing edge. On copies of one root clock a capture clock's extra delay is skew:

@@ -38,7 +38,7 @@ public class ClockGateEnableRuleTests
         // The slave opens at 0: its entry gate 34.5 ps, then its output inverter 27.6 ps: the enable moves until 62.1 ps.
         Assert.Equal("PW1004", finding.RuleId);
         Assert.Equal("Clock gate 'gclk' passes clock 'clk' during [0 s, 5 ns) (while it is high), but its enable 'en_reg' can change during "
-            + "[0 s, 62.1 ps) (from latch 'en_reg.slave', transparent in clk.High, through a 27.6 ps path): the gated clock can be clipped or get an extra pulse",
+            + "[0 s, 62.1 ps) (from latch 'en_reg.slave', transparent in clk.High, through a 27.6 ps path; slow corner, delays ×1): the gated clock can be clipped or get an extra pulse",
             finding.Message);
         Assert.Equal(netlist.Clock("gclk").Span, finding.Location);
         Assert.Equal("clk.Low", finding.Properties[FindingPropertyKeys.BlockingPhase]);
@@ -86,7 +86,7 @@ public class ClockGateEnableRuleTests
                 en = c.Inverter(en);
             c.ClockGate(clk, en, name: "gclk");
         }));
-        Assert.Contains("can change during [500 ps, 1.09 ns) (from latch 'en_latch', transparent in clk.Low, through a 552 ps path)", finding.Message);
+        Assert.Contains("can change during [500 ps, 1.09 ns) (from latch 'en_latch', transparent in clk.Low, through a 552 ps path; slow corner, delays ×1)", finding.Message);
         Assert.Equal("false", finding.Properties[FindingPropertyKeys.OpensWhilePassing]); // the right latch: only the path is slow
     }
 

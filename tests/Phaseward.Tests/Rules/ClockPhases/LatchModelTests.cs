@@ -1,4 +1,5 @@
 using System.Linq;
+using Phaseward.Electrical;
 using Phaseward.Sequencing;
 
 namespace Phaseward.Tests.Rules.ClockPhases;
@@ -84,7 +85,7 @@ public class LatchModelTests
         Assert.Equal("hkq", model.Latches[1].Output.Name);
 
         // The same structure gives the same timing figures.
-        var figures = TimingFigures.For(c.ToNetlist());
+        var figures = TimingFigures.For(c.ToNetlist(), Corner.Nominal);
         Assert.Equal(figures.Latches[2].Setup, figures.Latches[0].Setup);
         Assert.Equal(figures.Latches[2].DataToOutput, figures.Latches[0].DataToOutput);
     }

@@ -8,7 +8,7 @@ namespace Phaseward.Tests.Rules.DynamicStorage;
 
 /// <summary>
 /// PW3002. A High-phase dynamic latch floats for (1 − D)·T − s per period (the Low time less the complement skew;
-/// common practice), against t_ret = 270 µs for the default 4.5 fF node (see <see cref="DynamicNodeOnGatedClockRuleTests"/>).
+/// common practice), against t_ret = 1.35 µs for the default 4.5 fF node (see <see cref="DynamicNodeOnGatedClockRuleTests"/>).
 /// The lowest safe frequency is then (1 − D)/(t_ret + s), rounded up to three significant digits.
 /// </summary>
 public class ClockTooSlowForDynamicStorageRuleTests
@@ -33,25 +33,25 @@ public class ClockTooSlowForDynamicStorageRuleTests
         });
 
         var finding = Assert.Single(findings);
-        // Isolation 500 µs − 30 ps; f_min = 0.5 / (270 µs + 30 ps) = 1851.85 Hz → 1.86 kHz.
+        // Isolation 500 µs − 30 ps; f_min = 0.5 / (1.35 µs + 30 ps) = 370.362 kHz → 371 kHz.
         Assert.Equal(
-            "Dynamic node 'l.x' floats for up to 500 µs of every 1 ms period of clock 'tick', longer than its retention time 270 µs "
-            + "(C·ΔV/I_leak with C = 4.5 fF, ΔV = 300 mV, I_leak = 5 pA); run the clock at 1.86 kHz or faster",
+            "Dynamic node 'l.x' floats for up to 500 µs of every 1 ms period of clock 'tick', longer than its retention time 1.35 µs "
+            + "(C·ΔV/I_leak with C = 4.5 fF, ΔV = 300 mV, I_leak = 1 nA at the hot corner); run the clock at 371 kHz or faster",
             finding.Message);
         Assert.Equal(clk!.Span, Assert.Single(finding.RelatedLocations));
         var hertz = double.Parse(finding.Properties[FindingPropertyKeys.MinimumFrequencyHertz], CultureInfo.InvariantCulture);
-        Assert.Equal(1860, hertz, 1e-6);
+        Assert.Equal(371_000, hertz, 1e-6);
         Assert.Equal(500e-6 - 30e-12, double.Parse(finding.Properties[FindingPropertyKeys.IsolationSeconds], CultureInfo.InvariantCulture), 1e-15);
         Assert.Equal("tick", finding.Properties[FindingPropertyKeys.RootClock]);
         Assert.Equal("StaticLatch", finding.Properties[FindingPropertyKeys.StaticReplacement]);
     }
 
     [Theory]
-    [InlineData(1860.0, false)] // the reported frequency is safe
-    [InlineData(1852.0, false)] // just above 1851.85 Hz
-    [InlineData(1851.0, true)]  // just below
+    [InlineData(371_000.0, false)] // the reported frequency is safe
+    [InlineData(370_400.0, false)] // just above 370.362 kHz
+    [InlineData(370_300.0, true)]  // just below
     [InlineData(100.0, true)]
-    [InlineData(10_000.0, false)]
+    [InlineData(10_000_000.0, false)]
     public void TheBoundaryIsWhereIsolationEqualsRetention(double hertz, bool reported)
     {
         var findings = Check(c => c.DynamicLatch(c.Input("d"), c.Clock("tick", new Frequency(hertz).ToPeriod()).High, "l"));
@@ -61,19 +61,19 @@ public class ClockTooSlowForDynamicStorageRuleTests
     [Fact]
     public void DutyDecidesWhichLatchFloatsLonger()
     {
-        // D = 0.25 at 500 µs: the High latch floats 375 µs − 30 ps (> 270 µs), the Low latch 125 µs − 30 ps (< 270 µs).
+        // D = 0.25 at 2 µs: the High latch floats 1.5 µs − 30 ps (> 1.35 µs), the Low latch 500 ns − 30 ps (< 1.35 µs).
         var findings = Check(c =>
         {
-            var clk = c.Clock("tick", 500.Microseconds(), 0.25);
+            var clk = c.Clock("tick", 2.Microseconds(), 0.25);
             var d = c.Input("d");
             c.DynamicLatch(d, clk.High, "hi");
             c.DynamicLatch(d, clk.Low, "lo");
         });
         var finding = Assert.Single(findings);
         Assert.Equal("hi.x", finding.Properties[FindingPropertyKeys.Node]);
-        Assert.Contains("floats for up to 375 µs", finding.Message);
-        // f_min = 0.75 / (270 µs + 30 ps) = 2777.77 Hz → 2.78 kHz.
-        Assert.Contains("run the clock at 2.78 kHz or faster", finding.Message);
+        Assert.Contains("floats for up to 1.5 µs", finding.Message);
+        // f_min = 0.75 / (1.35 µs + 30 ps) = 555.543 kHz → 556 kHz.
+        Assert.Contains("run the clock at 556 kHz or faster", finding.Message);
     }
 
     [Fact]

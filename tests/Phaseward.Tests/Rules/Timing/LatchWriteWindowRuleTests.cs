@@ -11,8 +11,9 @@ namespace Phaseward.Tests.Rules.Timing;
 /// PW4004: a latch window too short for its entry gate to charge the storage node. Entry delay 0.69 · R · C, the 50 %
 /// point of a single RC step response (Rabaey, Chandrakasan, Nikolić, "Digital Integrated Circuits: A Design
 /// Perspective", 2nd ed., ch. 5, t_p = 0.69·R_eq·C_L; from memory); the window must be at least that long (common
-/// practice: a latch's minimum pulse width is its setup requirement). Illustrative process: pass gates 5 kΩ, so a
-/// 60 fF node needs 0.69 · 5 kΩ · 60 fF = 207 ps.
+/// practice: a latch's minimum pulse width is its setup requirement). Illustrative process: pass gates 5 kΩ nominal,
+/// checked at the slow corner (×1.3, the invented default): 6.5 kΩ, so a 60 fF node needs 0.69 · 6.5 kΩ · 60 fF =
+/// 269.1 ps.
 /// </summary>
 public class LatchWriteWindowRuleTests
 {
@@ -37,9 +38,9 @@ public class LatchWriteWindowRuleTests
         var finding = Assert.Single(Run(PulseLatch(30)));
         Assert.Equal(RuleCatalog.LatchWriteWindow.Id, finding.RuleId);
         Assert.Equal("Latch 'pl' cannot be written in its window: it is open 30 ps, 30 ps of it with both halves of its entry gate on " +
-                     "(complement skew 0 s), but the entry gate needs 207 ps to charge storage node 'pl.x' (0.69·R·C with R = 5 kΩ, " +
-                     "C = 60 fF; margin -177 ps)", finding.Message);
-        Assert.Equal(-177e-12, double.Parse(finding.Properties[FindingPropertyKeys.MarginSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-18);
+                     "(complement skew 0 s), but the entry gate needs 269 ps to charge storage node 'pl.x' (0.69·R·C with R = 6.5 kΩ, " +
+                     "C = 60 fF; margin -239 ps; slow corner, delays ×1.3)", finding.Message);
+        Assert.Equal(-239.1e-12, double.Parse(finding.Properties[FindingPropertyKeys.MarginSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-18);
         Assert.Equal("pl", finding.Properties[FindingPropertyKeys.TargetLatch]);
     }
 
@@ -57,20 +58,21 @@ public class LatchWriteWindowRuleTests
     [Fact]
     public void A_window_long_enough_to_write_the_node_passes()
     {
-        Assert.Empty(Run(PulseLatch(210)));
-        // 207 ps exactly: margin 0, not below the default minimum slack of 0.
-        Assert.Empty(Run(PulseLatch(207)));
-        Assert.Single(Run(PulseLatch(220), new RulePolicy { MinimumTimingSlack = 20.Picoseconds() }));
+        Assert.Empty(Run(PulseLatch(270)));
+        Assert.Single(Run(PulseLatch(269)));
+        // The nominal figure (207 ps) would pass a 230 ps window; the slow corner does not.
+        Assert.Single(Run(PulseLatch(230)));
+        Assert.Single(Run(PulseLatch(280), new RulePolicy { MinimumTimingSlack = 20.Picoseconds() }));
     }
 
     [Fact]
     public void Complement_skew_is_taken_off_both_ends_of_the_window()
     {
-        // High time 230 ps: the gate is fully on for 230 − skew (the window, 230 + skew, less a skew tail at each end).
-        Assert.Empty(Run(PulseLatch(230, skewPs: 15)));  // 215 ps ≥ 207 ps
-        var finding = Assert.Single(Run(PulseLatch(230, skewPs: 25))); // 205 ps < 207 ps
-        Assert.Contains("it is open 255 ps, 205 ps of it with both halves of its entry gate on (complement skew 25 ps)", finding.Message);
-        Assert.Contains("margin -2 ps", finding.Message);
+        // High time 290 ps: the gate is fully on for 290 − skew (the window, 290 + skew, less a skew tail at each end).
+        Assert.Empty(Run(PulseLatch(290, skewPs: 15)));  // 275 ps ≥ 269.1 ps
+        var finding = Assert.Single(Run(PulseLatch(290, skewPs: 25))); // 265 ps < 269.1 ps
+        Assert.Contains("it is open 315 ps, 265 ps of it with both halves of its entry gate on (complement skew 25 ps)", finding.Message);
+        Assert.Contains("margin -4.1 ps", finding.Message);
     }
 
     [Fact]

@@ -1,6 +1,7 @@
 using System;
 using System.Linq;
 using Phaseward.Checking;
+using Phaseward.Electrical;
 using Phaseward.Rules.ClockPhases;
 using Phaseward.Rules.Timing;
 using Phaseward.Sequencing;
@@ -27,7 +28,7 @@ public class TimingFiguresTests
         var clk = c.Clock("clk", 1.Nanoseconds(), 0.5, 45.Picoseconds());
         c.DynamicRegister(c.Input("d"), clk, "R");
 
-        var register = TimingFigures.For(c.ToNetlist()).Registers.Single();
+        var register = TimingFigures.For(c.ToNetlist(), Corner.Nominal).Registers.Single();
 
         Assert.Equal(34.5, Figures.Ps(register.Setup), 9);
         Assert.Equal(89.7, Figures.Ps(register.ClockToOutput), 9);
@@ -47,7 +48,7 @@ public class TimingFiguresTests
         var clk = c.Clock("clk", 1.Nanoseconds(), 0.5, 0.Picoseconds());
         c.StaticRegister(c.Input("d"), clk, "R");
 
-        var register = TimingFigures.For(c.ToNetlist()).Registers.Single();
+        var register = TimingFigures.For(c.ToNetlist(), Corner.Nominal).Registers.Single();
 
         Assert.Equal(89.7, Figures.Ps(register.Setup), 9);
         Assert.Equal(62.1, Figures.Ps(register.ClockToOutput), 9);
@@ -69,7 +70,7 @@ public class TimingFiguresTests
         c.DynamicLatch(d, clk.High, "dyn");
         c.StaticLatch(d, clk.Low, "stat");
 
-        var figures = TimingFigures.For(c.ToNetlist());
+        var figures = TimingFigures.For(c.ToNetlist(), Corner.Nominal);
         var dyn = figures.Latches.Single(l => l.Name == "dyn");
         var stat = figures.Latches.Single(l => l.Name == "stat");
 
@@ -116,7 +117,7 @@ public class RegisterTimingRuleTests
         var finding = Assert.Single(Figures.Run(Rule, Pipeline(280, 5)));
         Assert.Equal("PW4001", finding.RuleId);
         Assert.Equal("Register 'R2' misses its setup time on the path from register 'R1': clock-to-output 89.7 ps + path 166 ps + " +
-                     "setup 34.5 ps = 290 ps exceeds the 280 ps available (slack -9.8 ps)", finding.Message);
+                     "setup 34.5 ps = 290 ps exceeds the 280 ps available (slack -9.8 ps; slow corner, delays ×1)", finding.Message);
         Assert.Equal(-9.8e-12, double.Parse(finding.Properties[FindingPropertyKeys.MarginSeconds], System.Globalization.CultureInfo.InvariantCulture), 1e-18);
     }
 
@@ -132,7 +133,7 @@ public class RegisterTimingRuleTests
         var finding = Assert.Single(Figures.Run(Rule, Pipeline(1000, 1, 110)));
         Assert.Equal("PW4002", finding.RuleId);
         Assert.Equal("Register 'R2' can lose its data on the path from register 'R1': minimum clock-to-output 62.1 ps + shortest path 27.6 ps = " +
-                     "89.7 ps is less than its hold time -4.5 ps plus clock skew 110 ps (slack -15.8 ps)", finding.Message);
+                     "89.7 ps is less than its hold time -4.5 ps plus clock skew 110 ps (slack -15.8 ps; fast corner, delays ×1)", finding.Message);
     }
 
     [Fact]
@@ -141,8 +142,7 @@ public class RegisterTimingRuleTests
         // The same race seen by PW4002 (register to register) and PW1002 (the same latches built as a latch pair):
         // t_ccq + t_path + t_T1 − (overlap + skew) both ways. Capture 70 ps late: 62.1 + 27.6 + 34.5 − (30 + 70) = +24.2 ps.
         var registers = Pipeline(1000, 1, 70);
-        var figures = TimingFigures.For(registers.ToNetlist());
-        var check = RegisterPathChecks.For(figures).Single().Check;
+        var check = RegisterPathChecks.For(registers.ToNetlist()).Single().Check;
         Assert.Equal(24.2, Figures.Ps(check.HoldSlack), 9);
 
         var c = Figures.NewCircuit("pair");
@@ -173,7 +173,7 @@ public class RegisterTimingRuleTests
         Assert.Empty(Figures.Run(Rule, c));
         Assert.Empty(new OverlapRaceRule().Check(new RuleContext(netlist, RulePolicy.Default)));
         Assert.Empty(new SameWindowLatchesRule().Check(new RuleContext(netlist, RulePolicy.Default)));
-        var checks = RegisterPathChecks.For(TimingFigures.For(netlist));
+        var checks = RegisterPathChecks.For(netlist);
         Assert.Equal(7, checks.Count);
         Assert.All(checks, r => Assert.Equal(66.6, Figures.Ps(r.Check.HoldSlack), 9));
     }
@@ -196,7 +196,7 @@ public class RegisterTimingRuleTests
         Assert.Empty(new SameWindowLatchesRule().Check(new RuleContext(netlist, RulePolicy.Default)));
         var finding = Assert.Single(Figures.Run(Rule, c));
         Assert.Equal("PW4001", finding.RuleId);
-        Assert.Contains("exceeds the 500 ps available (slack -38.2 ps)", finding.Message);
+        Assert.Contains("exceeds the 500 ps available (slack -38.2 ps; slow corner, delays ×1)", finding.Message);
     }
 
     [Fact]
@@ -249,8 +249,8 @@ public class LatchBorrowingRuleTests
 
         Assert.Equal("PW4003", finding.RuleId);
         Assert.Equal("Data from latch 'L2' reaches latch 'L3' 477 ps after 'L3' opens, but its phase (500 ps) less its setup time and clock skew (34.5 ps) " +
-                     "allows only 466 ps (slack -11.1 ps; 'L2' had borrowed 142 ps)", finding.Message);
-        var arrival = LatchBorrowing.Compute(TimingFigures.For(Chain(20, 27).ToNetlist())).Single(a => a.Path.To.Name == "L3");
+                     "allows only 466 ps (slack -11.1 ps; 'L2' had borrowed 142 ps; slow corner, delays ×1)", finding.Message);
+        var arrival = LatchBorrowing.Compute(TimingFigures.For(Chain(20, 27).ToNetlist(), Corner.Nominal)).Single(a => a.Path.To.Name == "L3");
         Assert.Equal(476.6, Figures.Ps(arrival.Arrival), 6);
         Assert.Equal(141.7, Figures.Ps(arrival.SourceBorrow), 6);
     }
@@ -308,12 +308,12 @@ public class LatchBorrowingRuleTests
         // nothing at P (Q→P arrives 34.5 + 362.5 + 82.8 − 500 = −20.2 ps, before P opens).
         var clean = Figures.Run(Rule, Loop(28));
         Assert.Empty(clean);
-        var q = LatchBorrowing.Solve(TimingFigures.For(Loop(28).ToNetlist())).Arrivals.Single(a => a.Path.To.Name == "Q");
+        var q = LatchBorrowing.Solve(TimingFigures.For(Loop(28).ToNetlist(), Corner.Nominal)).Arrivals.Single(a => a.Path.To.Name == "Q");
         Assert.Equal(362.5, Figures.Ps(q.Arrival), 6);
 
         var finding = Assert.Single(Figures.Run(Rule, Loop(29)));
         Assert.Equal("PW4005", finding.RuleId);
         Assert.Equal("The latch loop P → Q → P (2 paths) takes 1.01 ns round but its phases give it only 1 ns: each latch borrows " +
-                     "7.4 ps more every time round until one misses its window", finding.Message);
+                     "7.4 ps more every time round until one misses its window (slow corner, delays ×1)", finding.Message);
     }
 }
