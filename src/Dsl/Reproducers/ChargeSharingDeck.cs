@@ -25,12 +25,11 @@ internal static class ChargeSharingDeck
         if (device is null)
             throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: no pass device joins '{charged.Net.Name}' to '{other.Net.Name}' in design '{netlist.DesignName}'.", nameof(finding));
 
-        var partners = SharingPartners.Of(netlist, device, charged, other, new PhaseWindowCache());
-        var c1 = charged.Retention.Capacitance;
-        var c2 = other.Retention.Capacitance;
-        foreach (var partner in partners)
-            c2 += partner.Node.Retention.Capacitance;
-        var sharing = ChargeSharing.Of(c1, c2, netlist.Process.Supply);
+        // The rule's own computation (partners, C2, the shared level), so the deck's estimates are the finding's.
+        if (!ChargeSharingPaths.TryShare(netlist, device, new PhaseWindowCache(), out _, out _, out var partners, out var sharing))
+            throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: '{device.Name}' does not share charge between floating nodes in design '{netlist.DesignName}'.", nameof(finding));
+        var c1 = sharing.ChargedCapacitance;
+        var c2 = sharing.OtherCapacitance;
         var deck = new DeckWriter(finding, netlist);
         deck.Describe($"Sub-circuit: '{device.Name}' between floating nodes '{charged.Net.Name}' (C1 = {c1}) and '{other.Net.Name}' (C2 = {c2} in all)"
             + (partners.Count == 0 ? "." : $", with the {partners.Count} floating node(s) joined to '{other.Net.Name}' through gates that may conduct at the same time."));

@@ -60,10 +60,9 @@ internal static class SharingPartners
                 return;
             if (!StorageIsolation.MayFloatWhile(node, opening, except: gate))
                 return;
-            foreach (var known in partners ?? (IEnumerable<SharingPartner>)System.Array.Empty<SharingPartner>())
-                if (ReferenceEquals(known.Node, node))
-                    return;
-            (partners ??= new List<SharingPartner>(2)).Add(new SharingPartner(node, gate));
+            partners ??= new List<SharingPartner>(2);
+            if (!partners.Exists(known => ReferenceEquals(known.Node, node)))
+                partners.Add(new SharingPartner(node, gate));
         }
     }
 }
