@@ -7,9 +7,11 @@ using Microsoft.CodeAnalysis.Operations;
 
 namespace Phaseward.Analyzers.Elaboration;
 
+// Assignments: simple, compound, '??=', increments and deconstructions, each through the StoragePlace its target
+// denotes (a variable, an array or list slot, a property of the design or of a library or DSL object).
 internal sealed partial class Interpreter
 {
-    private object? Assign(ISimpleAssignmentOperation assignment, Frame frame)
+    private object? VisitSimpleAssignment(ISimpleAssignmentOperation assignment, Frame frame)
     {
         var place = PlaceOf(assignment.Target, frame);
         var value = CopyIfValue(Evaluate(assignment.Value, frame));
@@ -18,7 +20,7 @@ internal sealed partial class Interpreter
         return value;
     }
 
-    private object? CompoundAssign(ICompoundAssignmentOperation assignment, Frame frame)
+    private object? VisitCompoundAssignment(ICompoundAssignmentOperation assignment, Frame frame)
     {
         var place = PlaceOf(assignment.Target, frame);
         if (!place.IsKnown) return Unknown.Value;
@@ -39,7 +41,7 @@ internal sealed partial class Interpreter
         return result;
     }
 
-    private object? CoalesceAssign(ICoalesceAssignmentOperation assignment, Frame frame)
+    private object? VisitCoalesceAssignment(ICoalesceAssignmentOperation assignment, Frame frame)
     {
         var place = PlaceOf(assignment.Target, frame);
         if (!place.IsKnown) return Unknown.Value;
@@ -47,6 +49,17 @@ internal sealed partial class Interpreter
         if (current is not null) return current;
         var value = Evaluate(assignment.Value, frame);
         place.Set(value);
+        return value;
+    }
+
+    private object? VisitIncrement(IIncrementOrDecrementOperation increment, Frame frame) => IncrementOrDecrement(increment, frame);
+
+    private object? VisitDecrement(IIncrementOrDecrementOperation decrement, Frame frame) => IncrementOrDecrement(decrement, frame);
+
+    private object? VisitDeconstructionAssignment(IDeconstructionAssignmentOperation deconstruction, Frame frame)
+    {
+        var value = Evaluate(deconstruction.Value, frame);
+        Deconstruct(deconstruction.Target, value, frame);
         return value;
     }
 
@@ -66,20 +79,6 @@ internal sealed partial class Interpreter
             after = BinaryValue(operation, kind, before, 1, operation.Target.Type, operation.IsChecked);
         place.Set(after);
         return operation.IsPostfix ? before : after;
-    }
-
-    private object? BinaryValue(IOperation site, BinaryOperatorKind kind, object left, object right, ITypeSymbol type, bool isChecked)
-    {
-        try
-        {
-            return Arithmetic.Binary(kind, left, right, type, isChecked)
-                ?? Unsupported(site, "operator " + kind + " on " + type.ToDisplayString(), "it is outside the subset");
-        }
-        catch (ArithmeticException e)
-        {
-            Throws(site.Syntax, e.GetType().Name + ": " + e.Message);
-            return Unknown.Value;
-        }
     }
 
     /// <summary>Assigns the parts of a tuple value to the targets of a deconstruction (<c>var (a, b) = ...</c>).</summary>
