@@ -47,9 +47,11 @@ public class InterpreterDispatchTests
         var kinds = new HashSet<string>(StringComparer.Ordinal);
         foreach (var section in dispatch.Sections)
         {
-            var label = Assert.Single(section.Labels);
-            var statement = Assert.Single(section.Statements);
-            var call = Assert.IsType<InvocationExpressionSyntax>(Assert.IsType<ReturnStatementSyntax>(statement).Expression);
+            Assert.True(section.Labels.Count == 1, $"'{section.Labels}' shares one case: give each kind its own Visit<Kind>");
+            var label = section.Labels[0];
+            Assert.True(section.Statements is [ReturnStatementSyntax { Expression: InvocationExpressionSyntax { Expression: IdentifierNameSyntax } }],
+                $"'{label}' is not one 'return Visit<Kind>(...)': put its code in the visit method");
+            var call = (InvocationExpressionSyntax)((ReturnStatementSyntax)section.Statements[0]).Expression!;
             var called = ((IdentifierNameSyntax)call.Expression).Identifier.Text;
             if (label is DefaultSwitchLabelSyntax)
             {

@@ -131,15 +131,9 @@ internal sealed partial class Interpreter
                 var index = Evaluate(element.Indices[0], frame);
                 if (Unknown.Is(array) || Unknown.Is(index)) return default;
                 if (array is not object?[] items) break;
-                if (index is not (int or long or short or byte or sbyte or ushort or uint or ulong or char)) break; // broken code
-                var i = System.Convert.ToInt32(index, CultureInfo.InvariantCulture);
-                if (i < 0 || i >= items.Length)
-                {
-                    Throws(element.Syntax, $"IndexOutOfRangeException: index {i} is outside the bounds of an array of length {items.Length}");
-                    return default;
-                }
-
-                return new StoragePlace(() => items[i], v => items[i] = v);
+                if (!IsWholeNumber(index)) break; // broken code
+                var i = SlotIndex(element, index!, items);
+                return i < 0 ? default : new StoragePlace(() => items[i], v => items[i] = v);
 
             case IPropertyReferenceOperation property:
                 return PropertyPlace(property, frame);
@@ -159,14 +153,8 @@ internal sealed partial class Interpreter
         {
             var index = Evaluate(reference.Arguments[0].Value, frame);
             if (Unknown.Is(index)) return default;
-            var i = System.Convert.ToInt32(index, CultureInfo.InvariantCulture);
-            if (i < 0 || i >= list.Count)
-            {
-                Throws(reference.Syntax, $"ArgumentOutOfRangeException: index {i} is outside a list of {list.Count} elements");
-                return default;
-            }
-
-            return new StoragePlace(() => list[i], v => list[i] = v);
+            var i = SlotIndex(reference, index!, list);
+            return i < 0 ? default : new StoragePlace(() => list[i], v => list[i] = v);
         }
 
         if (receiver is InterpretedObject instance || (receiver is null && property.IsStatic && session.IsInSource(property)))

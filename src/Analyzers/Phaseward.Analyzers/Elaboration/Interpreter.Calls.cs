@@ -272,16 +272,25 @@ internal sealed partial class Interpreter
         };
     }
 
-    private static IMethodSymbol? FindOverride(INamedTypeSymbol type, IMethodSymbol method)
+    /// <summary>The member of <paramref name="type"/> (or its nearest base) that overrides or is <paramref name="member"/> (a method or property).</summary>
+    private static T? FindOverride<T>(INamedTypeSymbol type, T member)
+        where T : class, ISymbol
     {
         for (var current = type; current is not null; current = current.BaseType)
-            foreach (var member in current.GetMembers(method.Name))
-                if (member is IMethodSymbol candidate)
-                    for (var m = candidate; m is not null; m = m.OverriddenMethod)
-                        if (SymbolEqualityComparer.Default.Equals(m.OriginalDefinition, method.OriginalDefinition))
-                            return candidate;
+            foreach (var candidate in current.GetMembers(member.Name))
+                if (candidate is T overriding)
+                    for (ISymbol? m = overriding; m is not null; m = Overridden(m))
+                        if (SymbolEqualityComparer.Default.Equals(m.OriginalDefinition, member.OriginalDefinition))
+                            return overriding;
         return null;
     }
+
+    private static ISymbol? Overridden(ISymbol member) => member switch
+    {
+        IMethodSymbol method => method.OverriddenMethod,
+        IPropertySymbol property => property.OverriddenProperty,
+        _ => null,
+    };
 
     /// <summary>The variable an operation denotes (for ref/out arguments), declaring 'out var' locals.</summary>
     private Variable? VariableOf(IOperation operation, Frame frame)

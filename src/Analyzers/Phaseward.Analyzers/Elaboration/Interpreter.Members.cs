@@ -2,11 +2,9 @@ using System;
 using System.Collections.Generic;
 using System.Globalization;
 using System.Linq;
-using System.Text;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Operations;
-using Phaseward.Checking;
 
 namespace Phaseward.Analyzers.Elaboration;
 
@@ -76,10 +74,8 @@ internal sealed partial class Interpreter
             case List<object?> list when property.IsIndexer:
                 var index = Evaluate(reference.Arguments[0].Value, frame);
                 if (Unknown.Is(index)) return index;
-                var i = System.Convert.ToInt32(index, System.Globalization.CultureInfo.InvariantCulture);
-                if (i >= 0 && i < list.Count) return list[i];
-                Throws(reference.Syntax, $"ArgumentOutOfRangeException: index {i} is outside a list of {list.Count} elements");
-                return Unknown.Value;
+                var i = SlotIndex(reference, index!, list);
+                return i < 0 ? Unknown.Value : list[i];
             case string text when property.Name == "Length":
                 return text.Length;
             case InterpretedObject instance:
@@ -145,17 +141,6 @@ internal sealed partial class Interpreter
         => record.GetMembers(parameter.Name).OfType<IPropertySymbol>()
             .FirstOrDefault(p => p.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax() is ParameterSyntax);
 
-    private static IPropertySymbol? FindOverride(INamedTypeSymbol type, IPropertySymbol property)
-    {
-        for (var current = type; current is not null; current = current.BaseType)
-            foreach (var member in current.GetMembers(property.Name))
-                if (member is IPropertySymbol candidate)
-                    for (var p = candidate; p is not null; p = p.OverriddenProperty)
-                        if (SymbolEqualityComparer.Default.Equals(p.OriginalDefinition, property.OriginalDefinition))
-                            return candidate;
-        return null;
-    }
-
     /// <summary>
     /// A static field or auto-property of this compilation. The first use of any static member of a type runs the type's
     /// static initialization the way C# does: every static field and auto-property initializer in declaration order,
@@ -205,7 +190,7 @@ internal sealed partial class Interpreter
                 continue;
             if (ModelOf(declaration).GetOperation(declaration, cancellationToken) is not IConstructorBodyOperation body)
             {
-                Report(RuleCatalog.NotElaborated.Id, declaration, "the static constructor of " + Describe(type), "its body could not be read", DesignName);
+                Unsupported(declaration, "the static constructor of " + Describe(type), "its body could not be read");
                 continue;
             }
 
@@ -248,16 +233,28 @@ internal sealed partial class Interpreter
         if (index is IndexValue or RangeValue)
             return Indexed(element, items, index);
         // In code that does not compile yet the index can be a value of another type (a net, a string).
-        if (index is not (int or long or short or byte or sbyte or ushort or uint or ulong or char))
+        if (!IsWholeNumber(index))
             return Unsupported(element, "this array index", "it is not a whole number");
-        var i = System.Convert.ToInt32(index, CultureInfo.InvariantCulture);
-        if (i < 0 || i >= items.Length)
-        {
-            Throws(element.Syntax, $"IndexOutOfRangeException: index {i} is outside the bounds of an array of length {items.Length}");
-            return Unknown.Value;
-        }
+        var i = SlotIndex(element, index!, items);
+        return i < 0 ? Unknown.Value : items[i];
+    }
 
-        return items[i];
+    private static bool IsWholeNumber(object? value) => value is int or long or short or byte or sbyte or ushort or uint or ulong or char;
+
+    /// <summary>
+    /// The slot a whole-number index denotes in an array or list; -1 when it is outside, reported as what the run would
+    /// throw (IndexOutOfRangeException for an array, ArgumentOutOfRangeException for a list).
+    /// </summary>
+    private int SlotIndex(IOperation site, object index, System.Collections.IList items)
+    {
+        var i = System.Convert.ToInt32(index, CultureInfo.InvariantCulture);
+        if (i >= 0 && i < items.Count)
+            return i;
+        var isArray = items is object?[];
+        Throws(site.Syntax, isArray
+            ? $"IndexOutOfRangeException: index {i} is outside the bounds of an array of length {items.Count}"
+            : $"ArgumentOutOfRangeException: index {i} is outside a list of {items.Count} elements");
+        return -1;
     }
 
     /// <summary><c>list[^1]</c>, <c>text[1..3]</c>: an Index or Range on a type that only has a Count/Length and an int indexer.</summary>

@@ -1,12 +1,9 @@
 using System;
-using System.Collections.Generic;
 using System.Globalization;
 using System.Linq;
 using System.Text;
 using Microsoft.CodeAnalysis;
-using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Operations;
-using Phaseward.Checking;
 
 namespace Phaseward.Analyzers.Elaboration;
 
@@ -83,16 +80,8 @@ internal sealed partial class Interpreter
 
         if (leftType is null || left is null || right is null)
             return Unsupported(binary, "this operator", "its operand types are not known");
-        try
-        {
-            return Arithmetic.Binary(binary.OperatorKind, left, right, leftType, binary.IsChecked)
-                ?? Unsupported(binary, "operator " + binary.OperatorKind + " on " + leftType.ToDisplayString(), "the elaborator handles arithmetic, comparisons and logic on int, long, float, double, bool, string and enums");
-        }
-        catch (ArithmeticException e)
-        {
-            Throws(binary.Syntax, e.GetType().Name + ": " + e.Message);
-            return Unknown.Value;
-        }
+        return BinaryValue(binary, binary.OperatorKind, left, right, leftType, binary.IsChecked,
+            "the elaborator handles arithmetic, comparisons and logic on int, long, float, double, bool, string and enums");
     }
 
     private object? VisitUnary(IUnaryOperation unary, Frame frame)
@@ -204,12 +193,14 @@ internal sealed partial class Interpreter
         return joined;
     }
 
-    private object? BinaryValue(IOperation site, BinaryOperatorKind kind, object left, object right, ITypeSymbol type, bool isChecked)
+    /// <summary>A built-in binary operator on known operands; an overflow or a division by zero is what the run would throw.</summary>
+    private object? BinaryValue(IOperation site, BinaryOperatorKind kind, object left, object right, ITypeSymbol type, bool isChecked,
+        string whyUnsupported = "it is outside the subset")
     {
         try
         {
             return Arithmetic.Binary(kind, left, right, type, isChecked)
-                ?? Unsupported(site, "operator " + kind + " on " + type.ToDisplayString(), "it is outside the subset");
+                ?? Unsupported(site, "operator " + kind + " on " + type.ToDisplayString(), whyUnsupported);
         }
         catch (ArithmeticException e)
         {
