@@ -272,10 +272,20 @@ internal sealed partial class Interpreter
         };
     }
 
-    /// <summary>The member of <paramref name="type"/> (or its nearest base) that overrides or is <paramref name="member"/> (a method or property).</summary>
+    /// <summary>
+    /// The member that runs for <paramref name="member"/> (a method or property) on an object of <paramref name="type"/>:
+    /// the nearest override, or for an interface member the type's implementation (itself perhaps overridden).
+    /// </summary>
     private static T? FindOverride<T>(INamedTypeSymbol type, T member)
         where T : class, ISymbol
     {
+        if (member.ContainingType?.TypeKind == TypeKind.Interface)
+        {
+            if (type.FindImplementationForInterfaceMember(member) is not T implementation)
+                return null;
+            member = implementation;
+        }
+
         for (var current = type; current is not null; current = current.BaseType)
             foreach (var candidate in current.GetMembers(member.Name))
                 if (candidate is T overriding)

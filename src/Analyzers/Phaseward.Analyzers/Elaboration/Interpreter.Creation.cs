@@ -84,8 +84,18 @@ internal sealed partial class Interpreter
         var element = ((IArrayTypeSymbol)creation.Type!).ElementType;
         var items = new object?[length];
         var initial = DefaultOf(element);
-        for (var i = 0; i < length; i++)
-            items[i] = initial;
+        if (initial is InterpretedObject && length > 0)
+        {
+            // Elements of a struct type are values: one default each, not one shared by every slot.
+            items[0] = initial;
+            for (var i = 1; i < length; i++)
+                items[i] = CopyIfValue(initial);
+        }
+        else
+        {
+            for (var i = 0; i < length; i++)
+                items[i] = initial;
+        }
         if (creation.Initializer is { } initializer)
             for (var i = 0; i < initializer.ElementValues.Length && i < length; i++)
                 items[i] = Evaluate(initializer.ElementValues[i], frame);

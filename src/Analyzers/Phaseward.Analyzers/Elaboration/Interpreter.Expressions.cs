@@ -145,7 +145,29 @@ internal sealed partial class Interpreter
             return null;
         if (ClrTypes.IsDsl(type) && ClrTypes.Resolve(type) is { } clr)
             return Activator.CreateInstance(clr);
+        if (type is INamedTypeSymbol structType && session.IsInSource(structType))
+            return DefaultStruct(structType);
+        // A library struct that is not generic (byte, decimal, DateTime...): its real default value, so what is then read
+        // from it is run or reported like any library member. (A generic one would be erased to object: left unknown.)
+        if (type is INamedTypeSymbol { IsGenericType: false } && ClrTypes.Resolve(type) is { IsValueType: true } libraryStruct)
+            return Activator.CreateInstance(libraryStruct);
         return Unknown.Value;
+    }
+
+    /// <summary>The default of a struct of the design's source: every field and auto-property at its default.</summary>
+    private object? DefaultStruct(INamedTypeSymbol type)
+    {
+        // A struct that contains itself does not compile: its default is unknown (the compiler reports it), not a stack overflow.
+        if (!structsBeingDefaulted.Add(type))
+            return Unknown.Value;
+        try
+        {
+            return NewObject(type);
+        }
+        finally
+        {
+            structsBeingDefaulted.Remove(type);
+        }
     }
 
     private object? VisitConditionalAccess(IConditionalAccessOperation access, Frame frame)

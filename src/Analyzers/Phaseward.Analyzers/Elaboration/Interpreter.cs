@@ -60,6 +60,9 @@ internal sealed partial class Interpreter
     // Types whose static initializers and static constructor have run (C# runs them once).
     private readonly HashSet<INamedTypeSymbol> initializedTypes = new(SymbolEqualityComparer.Default);
 
+    // The structs of the design's source whose default value is being made (see DefaultStruct).
+    private readonly HashSet<INamedTypeSymbol> structsBeingDefaulted = new(SymbolEqualityComparer.Default);
+
     // ---- where the interpretation is ----
 
     // The loops being run (innermost on top): the budget report points at the loop, and loop sites share spans.
