@@ -88,15 +88,3 @@ internal static class Callbacks
 
     private static Converter<T1, TR> Converter<T1, TR>(Func<object?[], object?> call) => a => Result<TR>(call(new object?[] { a }));
 }
-
-/// <summary>
-/// Thrown through a library method when a callback's result is unknown (reported where it arose): the library call then
-/// yields Unknown.
-/// </summary>
-internal sealed class UnknownValueException : Exception
-{
-    public UnknownValueException()
-        : base("A value the elaborator could not compute reached a library method.")
-    {
-    }
-}

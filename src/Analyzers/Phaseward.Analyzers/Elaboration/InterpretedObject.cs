@@ -57,13 +57,3 @@ internal sealed class InterpretedObject
 
     public override int GetHashCode() => Semantics.HashOf(this);
 }
-
-/// <summary>What ToString, Equals and GetHashCode mean for an interpreted object (answered by the interpreter).</summary>
-internal interface IObjectSemantics
-{
-    string TextOf(InterpretedObject value);
-
-    bool AreEqual(InterpretedObject value, object? other);
-
-    int HashOf(InterpretedObject value);
-}

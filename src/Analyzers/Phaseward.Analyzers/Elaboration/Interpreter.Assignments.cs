@@ -9,27 +9,6 @@ namespace Phaseward.Analyzers.Elaboration;
 
 internal sealed partial class Interpreter
 {
-    /// <summary>Somewhere a value can be stored: a variable, an array or list slot, a property of a DSL object.</summary>
-    private readonly struct Place
-    {
-        private readonly Func<object?> get;
-        private readonly Action<object?> set;
-
-        public Place(Func<object?> get, Action<object?> set)
-        {
-            this.get = get;
-            this.set = set;
-        }
-
-        public bool IsKnown => get is not null;
-
-        public object? Get() => get();
-
-        public void Set(object? value) => set(value);
-
-        public static Place Of(Variable variable) => new(() => variable.Value, v => variable.Value = v);
-    }
-
     private object? Assign(ISimpleAssignmentOperation assignment, Frame frame)
     {
         var place = PlaceOf(assignment.Target, frame);
@@ -130,23 +109,23 @@ internal sealed partial class Interpreter
     }
 
     /// <summary>The storage an assignment target denotes; a default (unknown) place when it cannot be written.</summary>
-    private Place PlaceOf(IOperation target, Frame frame)
+    private StoragePlace PlaceOf(IOperation target, Frame frame)
     {
         switch (target)
         {
             case ILocalReferenceOperation local:
                 if (local.IsDeclaration || frame.Find(local.Local) is null)
                     frame.Declare(local.Local, DefaultOf(local.Local.Type));
-                return Place.Of(frame.Find(local.Local)!);
+                return StoragePlace.Of(frame.Find(local.Local)!);
 
             case IDeclarationExpressionOperation declaration:
                 return PlaceOf(declaration.Expression, frame);
 
             case IDiscardOperation:
-                return new Place(() => null, _ => { });
+                return new StoragePlace(() => null, _ => { });
 
             case IParameterReferenceOperation or IFieldReferenceOperation when VariableOf(target, frame) is { } variable:
-                return Place.Of(variable);
+                return StoragePlace.Of(variable);
 
             case IArrayElementReferenceOperation element when element.Indices.Length == 1:
                 var array = Evaluate(element.ArrayReference, frame);
@@ -161,7 +140,7 @@ internal sealed partial class Interpreter
                     return default;
                 }
 
-                return new Place(() => items[i], v => items[i] = v);
+                return new StoragePlace(() => items[i], v => items[i] = v);
 
             case IPropertyReferenceOperation property:
                 return PropertyPlace(property, frame);
@@ -171,7 +150,7 @@ internal sealed partial class Interpreter
         return default;
     }
 
-    private Place PropertyPlace(IPropertyReferenceOperation reference, Frame frame)
+    private StoragePlace PropertyPlace(IPropertyReferenceOperation reference, Frame frame)
     {
         var property = reference.Property;
         var receiver = reference.Instance is null ? null : Evaluate(reference.Instance, frame);
@@ -188,7 +167,7 @@ internal sealed partial class Interpreter
                 return default;
             }
 
-            return new Place(() => list[i], v => list[i] = v);
+            return new StoragePlace(() => list[i], v => list[i] = v);
         }
 
         if (receiver is InterpretedObject instance || (receiver is null && property.IsStatic && session.IsInSource(property)))
@@ -197,9 +176,9 @@ internal sealed partial class Interpreter
             if (interpretedObject is not null && FindOverride(interpretedObject.Type, property) is { } overriding)
                 property = overriding;
             if (IsAutoProperty(property))
-                return Place.Of(property.IsStatic ? StaticVariable(property, frame) : interpretedObject!.GetOrAdd(property));
+                return StoragePlace.Of(property.IsStatic ? StaticVariable(property, frame) : interpretedObject!.GetOrAdd(property));
             if (property.SetMethod is { } setter && session.IsInSource(setter))
-                return new Place(() => CallGetter(reference, property, interpretedObject, frame),
+                return new StoragePlace(() => CallGetter(reference, property, interpretedObject, frame),
                     v => InvokeUser(setter, interpretedObject, new[] { v }, new Variable?[1], reference, frame));
         }
         else if (receiver is not null && !ClrTypes.IsDsl(property) && Library.IsPure(property) && property.SetMethod is { } librarySetter)
@@ -208,7 +187,7 @@ internal sealed partial class Interpreter
             var (indexArguments, _) = Arguments(reference.Arguments, librarySetter, frame);
             if (indexArguments is null) return default;
             var getter = property.GetMethod;
-            return new Place(
+            return new StoragePlace(
                 () => getter is null ? Unknown.Value : CallClr(reference, getter, receiver, indexArguments.Take(getter.Parameters.Length).ToArray()),
                 v =>
                 {
@@ -221,7 +200,7 @@ internal sealed partial class Interpreter
         else if (receiver is not null && ClrTypes.IsDsl(property) && property.SetMethod is { } dslSetter)
         {
             // Object initializers of DSL objects: new Process { PassGateResistance = ... } calls the real init accessor.
-            return new Place(() => null, v =>
+            return new StoragePlace(() => null, v =>
             {
                 if (!Unknown.Is(v)) CallClr(reference.Parent ?? reference, dslSetter, receiver, new[] { v });
             });

@@ -144,19 +144,6 @@ internal sealed partial class Interpreter
         }
     }
 
-    // The most variables a call of each method body has held: the next call's frame starts that large instead of
-    // growing its table step by step (a helper called once per loop iteration would otherwise regrow it every time).
-    private readonly Dictionary<IOperation, int> frameSizes = new();
-
-    private IOperation? clrSite;
-    private SourceSpan[] clrSiteCallers = Array.Empty<SourceSpan>();
-    private Func<SourceSpan>? clrSiteProvider;
-
-    // Inside a loop the same call is made with the same caller chain (chains are interned, see PushCaller) on every
-    // iteration: its span is built once and shared by every device made there. Straight-line code makes each call
-    // once, so nothing is cached for it.
-    private readonly Dictionary<(SyntaxNode Site, SourceSpan[] Callers), SourceSpan> loopSites = new();
-
     private SourceSpan CurrentClrSite()
     {
         var syntax = clrSite!.Syntax;
@@ -272,9 +259,6 @@ internal sealed partial class Interpreter
             LeaveCall();
         }
     }
-
-    // Iterators are run to completion when called, their yielded values kept in a list (see docs/elaboration.md).
-    private readonly Dictionary<IOperation, bool> iterators = new();
 
     private bool IsIterator(IOperation body)
     {

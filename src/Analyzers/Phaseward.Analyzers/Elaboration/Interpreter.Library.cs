@@ -16,12 +16,6 @@ namespace Phaseward.Analyzers.Elaboration;
 // budget before the call.
 internal sealed partial class Interpreter
 {
-    /// <summary>Marks an argument that cannot be given the parameter's type.</summary>
-    private sealed class Unconvertible
-    {
-        public static readonly Unconvertible Value = new();
-    }
-
     private object? ToClr(object? value, Type type)
     {
         if (type.IsByRef) type = type.GetElementType()!;

@@ -7,15 +7,6 @@ using Phaseward.Netlists;
 
 namespace Phaseward.Analyzers.Elaboration;
 
-/// <summary>How a statement ended.</summary>
-internal enum Completion
-{
-    Normal,
-    Break,
-    Continue,
-    Return,
-}
-
 internal sealed partial class Interpreter
 {
     public Completion Execute(IOperation statement, Frame frame)

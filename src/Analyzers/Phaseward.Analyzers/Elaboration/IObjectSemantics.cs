@@ -1,0 +1,11 @@
+namespace Phaseward.Analyzers.Elaboration;
+
+/// <summary>What ToString, Equals and GetHashCode mean for an interpreted object (answered by the interpreter).</summary>
+internal interface IObjectSemantics
+{
+    string TextOf(InterpretedObject value);
+
+    bool AreEqual(InterpretedObject value, object? other);
+
+    int HashOf(InterpretedObject value);
+}
