@@ -1,7 +1,7 @@
 using System.IO;
 using System.Linq;
-using Phaseward.Checking;
 using Phaseward.Benchmarks;
+using Phaseward.Checking;
 using Phaseward.Netlists;
 
 namespace Phaseward.Analyzers.Tests.Elaboration;
