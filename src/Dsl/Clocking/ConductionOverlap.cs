@@ -1,11 +1,12 @@
 using System;
+using System.Collections.Generic;
 using Phaseward.Netlists;
 
 namespace Phaseward.Clocking;
 
 /// <summary>
 /// Whether two pass devices can conduct at the same instant: the one decision the rules that pair pass gates share
-/// (fighting drivers, charge sharing).
+/// (fighting drivers, charge sharing, the series runs of pass gates through <see cref="ConductionDecisions"/>).
 /// </summary>
 /// <remarks>
 /// Two clocked gates conduct together when their transparency windows overlap on the clocks' common cycle (with
@@ -38,6 +39,60 @@ internal static class ConductionOverlap
             return ReferenceEquals(ca, cb) || !netlist.AreExclusive(ca, cb);
         return true;
     }
+}
+
+/// <summary>
+/// <see cref="ConductionOverlap.MayConductTogether"/> for one netlist and one reading of the skew-long overlap, asked
+/// many times: each pair of clock phases is decided once (window arithmetic allocates), and a gate that can never
+/// keep another from conducting with it is known without asking (<see cref="CanExclude"/>). The series runs of pass
+/// gates ask it for every gate against the controls met earlier on its run.
+/// </summary>
+internal sealed class ConductionDecisions
+{
+    private readonly PhaseWindowCache windows = new();
+    private readonly Dictionary<(Phase, Phase), bool> phasePairs = new();
+    private readonly bool[] mayHavePartner;
+    private readonly SkewOverlapCounts skewOverlap;
+
+    public ConductionDecisions(Netlist netlist, SkewOverlapCounts skewOverlap)
+    {
+        Netlist = netlist ?? throw new ArgumentNullException(nameof(netlist));
+        this.skewOverlap = skewOverlap;
+        mayHavePartner = ExclusiveControls.MayHavePartner(netlist);
+    }
+
+    public Netlist Netlist { get; }
+
+    /// <summary>The decision of <see cref="ConductionOverlap.MayConductTogether"/>.</summary>
+    public bool MayConductTogether(Device a, Device b)
+    {
+        if (a.ClockControl is { } pa && b.ClockControl is { } pb)
+        {
+            if (!phasePairs.TryGetValue((pa, pb), out var together))
+            {
+                together = ConductionOverlap.MayConductTogether(Netlist, a, b, windows, skewOverlap);
+                phasePairs[(pa, pb)] = together;
+                phasePairs[(pb, pa)] = together;
+            }
+
+            return together;
+        }
+
+        if (!CanExclude(a) || !CanExclude(b))
+            return true;
+        return ConductionOverlap.MayConductTogether(Netlist, a, b, windows, skewOverlap);
+    }
+
+    /// <summary>
+    /// False when the gate conducts together with every other pass gate whatever it is: a gate on a data control
+    /// that has no possible exclusive partner (<see cref="ExclusiveControls.MayHavePartner"/>). A clocked gate can
+    /// exclude gates on other phases; a data-controlled one, gates on an exclusive control.
+    /// </summary>
+    public bool CanExclude(Device gate)
+        => gate.ClockControl is not null || (gate.DataControl is { } control && mayHavePartner[control.Id]);
+
+    /// <summary>What decides whether the gate conducts: its phase or its control net; gates with one key conduct together.</summary>
+    public static object KeyOf(Device gate) => (object?)gate.ClockControl ?? gate.DataControl!;
 }
 
 /// <summary>Whether an overlap of two clocked gates no longer than the clocks' complement skew counts as conducting together.</summary>

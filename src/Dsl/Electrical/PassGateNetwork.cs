@@ -105,7 +105,7 @@ internal sealed class PassGateNetwork
                 passLoads[fill[device.Inputs[0].Id]++] = device.Id;
 
         postorder = Walk(cancellationToken);
-        hasExclusivePartner = ExclusivePartners(netlist);
+        hasExclusivePartner = ExclusiveControls.MayHavePartner(netlist);
         downstreamAssumes = new bool[nets.Count];
         downstreamFarads = SumDownstream(cancellationToken);
         chargedFarads = new double[devices.Count];
@@ -113,24 +113,6 @@ internal sealed class PassGateNetwork
         rootFarads = new double[devices.Count];
         rootAssumes = new bool[devices.Count];
         ComputeGateLoads(cancellationToken);
-    }
-
-    // Nets that may be exclusive with some other net: in a stated group, or an inverter's input or output. Branches
-    // on other nets need no comparing (and no sorting).
-    private static bool[] ExclusivePartners(Netlist netlist)
-    {
-        var partners = new bool[netlist.Nets.Count];
-        foreach (var group in netlist.ExclusiveGroups)
-            foreach (var net in group)
-                partners[net.Id] = true;
-        foreach (var device in netlist.Devices)
-            if (device.Kind == DeviceKind.Inverter && !device.IsWeak)
-            {
-                partners[device.Inputs[0].Id] = true;
-                partners[device.Output.Id] = true;
-            }
-
-        return partners;
     }
 
     /// <summary>Nets feeding more pass gates than this count them all, without comparing their controls.</summary>

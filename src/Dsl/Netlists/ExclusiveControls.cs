@@ -60,4 +60,25 @@ internal sealed class ExclusiveControls
         var driver = drivers[0];
         return driver.Kind == DeviceKind.Inverter && !driver.IsWeak && ReferenceEquals(driver.Inputs[0], net);
     }
+
+    /// <summary>
+    /// The nets that may be exclusive with some other net (indexed by net id): those in a stated group, and the input
+    /// and output of every inverter that is not a weak keeper. A pass gate on any other net conducts with every other
+    /// data-controlled gate as far as anything known goes, so it needs no comparing.
+    /// </summary>
+    public static bool[] MayHavePartner(Netlist netlist)
+    {
+        var partners = new bool[netlist.Nets.Count];
+        foreach (var group in netlist.ExclusiveGroups)
+            foreach (var net in group)
+                partners[net.Id] = true;
+        foreach (var device in netlist.Devices)
+            if (device.Kind == DeviceKind.Inverter && !device.IsWeak)
+            {
+                partners[device.Inputs[0].Id] = true;
+                partners[device.Output.Id] = true;
+            }
+
+        return partners;
+    }
 }

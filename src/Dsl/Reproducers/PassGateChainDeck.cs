@@ -21,12 +21,7 @@ internal static class PassGateChainDeck
         var reported = DeckInputs.DeviceById(finding, netlist, FindingPropertyKeys.ReportedGateId);
         var network = PassGateNetwork.Of(netlist);
         var chains = new SeriesChains(network);
-        var gates = new List<Device>();
-        for (Device? g = chains.Previous(reported); g is not null; g = chains.Previous(g))
-            gates.Add(g);
-        gates.Reverse();
-        for (Device? g = reported; g is not null; g = chains.Next(g))
-            gates.Add(g);
+        var gates = chains.ChainGates(reported);
         var chain = chains.ChainThrough(reported);
         var fifty = FiftyPercentDelay.FromElmore(chain.Elmore);
 

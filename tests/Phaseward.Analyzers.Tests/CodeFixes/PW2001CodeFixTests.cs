@@ -427,8 +427,9 @@ public class PW2001CodeFixTests
             PW2001.WithLocation(0).WithLocation(0), PW2001.WithLocation(1).WithLocation(0)).RunAsync();
     }
 
-    // Two arms of a mux, each three gates deep, into one node and then two route gates: two findings whose fixes share
-    // the buffer before the second route gate. FixAll applies each edit once.
+    // Two arms of a mux, each three gates deep, into one node and then two route gates, all on phases that conduct
+    // together (route gates on clk.Low would make each arm's run end at the mux: PW2001Tests): two findings whose fixes
+    // share the buffer before the second route gate. FixAll applies each edit once.
     [Fact]
     public Task FixAllMergesSharedSplitPoints()
     {
@@ -449,8 +450,8 @@ public class PW2001CodeFixTests
                     var b1 = {|#2:c.TransmissionGate(c.Input("b"), clk.High)|};
                     var b2 = c.TransmissionGate(b1, clk.High);
                     {|#3:c.TransmissionGate(b2, sb, pick)|};
-                    var r1 = c.TransmissionGate(pick, clk.Low);
-                    var r2 = c.TransmissionGate(r1, clk.Low);
+                    var r1 = c.TransmissionGate(pick, clk.High);
+                    var r2 = c.TransmissionGate(r1, clk.High);
                     c.Output("y", c.Inverter(r2));
                 }
             }
@@ -471,8 +472,8 @@ public class PW2001CodeFixTests
                     var b1 = c.TransmissionGate(c.Input("b"), clk.High);
                     var b2 = c.TransmissionGate(b1, clk.High);
                     c.TransmissionGate(c.Buffer(b2), sb, pick);
-                    var r1 = c.TransmissionGate(pick, clk.Low);
-                    var r2 = c.TransmissionGate(c.Buffer(r1), clk.Low);
+                    var r1 = c.TransmissionGate(pick, clk.High);
+                    var r2 = c.TransmissionGate(c.Buffer(r1), clk.High);
                     c.Output("y", c.Inverter(r2));
                 }
             }

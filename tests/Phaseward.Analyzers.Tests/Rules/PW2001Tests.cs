@@ -68,6 +68,64 @@ public class PW2001Tests
     // n1 24.5, a 27 fF. Elmore = 4 kΩ·27 fF + 5 kΩ·87 fF = 108 + 435 = 543 ps; 50 %: 376 ps.
     // Restored: mean C = 24.5/6 fF, R·C = 20.42 ps; t = 6·(ln 2·20.42 ps·3/2 + 10 ps) = 187 ps.
     // The loop's single call is both the first gate and the first gate beyond the limit.
+    // hop (sample.High) → mux1, mux2 (on the input 'route') → leg (sample.Low) → inverter. Neighbours can all conduct
+    // together, but hop and leg never do: the runs are hop, mux1, mux2 (while high) and mux1, mux2, leg (while low), each
+    // of 3 > 2, not one of 4. Nets: a 2.5 fF; h, m1, m2 4 fF; l = 1 + 1.5 + inverter gate 2 = 4.5 fF.
+    // Downstream: l 4.5, m2 8.5, m1 12.5, h 16.5, a 19 fF.
+    //   hop..mux2: Elmore = 4 kΩ·19 fF + 5 kΩ·(16.5 + 12.5 + 8.5) fF = 76 + 187.5 = 263.5 ps; 50 %: 0.69·263.5 = 181.8 ps;
+    //     restored every 2 (mean node C (4 + 4 + 4)/3 = 4 fF, R·C = 20 ps, input a 2.5 fF):
+    //     0.69·4 kΩ·(2.5 + 2·4) fF + 0.69·20 ps·(3 + 1) + 20 ps = 28.98 + 55.2 + 20 = 104.2 ps.
+    //   mux1..leg, driven from h through the 4 kΩ driver resistance (no restoring stage drives h):
+    //     Elmore = 4 kΩ·16.5 fF + 5 kΩ·(12.5 + 8.5 + 4.5) fF = 66 + 127.5 = 193.5 ps; 50 %: 133.5 ps;
+    //     restored (mean C 12.5/3 fF, R·C = 20.83 ps, input h 4 fF): 0.69·4 kΩ·(4 + 8.33) fF + 0.69·20.83 ps·4 + 20 ps
+    //     = 34.04 + 57.5 + 20 = 111.5 ps.
+    // (Elmore, J. Appl. Phys. 19(1), 1948; the tree sum of Rubinstein, Penfield and Horowitz, IEEE Trans. CAD 2(3), 1983.)
+    [Fact]
+    public Task GatesOnOppositePhasesWithDataGatesBetweenAreNotOneRun()
+        => new PhasewardAnalyzerTest<PassGatePathAnalyzer>("""
+            using Phaseward;
+
+            public sealed class Crossover : Design
+            {
+                protected override void Describe(Circuit c)
+                {
+                    var clk = c.Clock("sample", 10.Nanoseconds());
+                    var route = c.Input("route");
+                    var h = {|#0:c.TransmissionGate(c.Input("a"), clk.High, "hop")|};
+                    var m1 = {|#1:c.TransmissionGate(h, route, "mux1")|};
+                    var m2 = {|#2:c.TransmissionGate(m1, route, "mux2")|};
+                    var l = {|#3:c.TransmissionGate(m2, clk.Low, "leg")|};
+                    c.Output("y", c.Inverter(l));
+                }
+            }
+            """,
+            PW2001.WithLocation(2).WithLocation(0).WithArguments("3", "2", "264 ps", "182 ps", "2", "104 ps", "", "hop", "mux2", "Crossover"),
+            PW2001.WithLocation(3).WithLocation(1).WithArguments("3", "2", "194 ps", "134 ps", "2", "112 ps", "", "mux1", "leg", "Crossover"))
+            .RunAsync();
+
+    // The same gates with the limit raised to 3: both runs of 3 are within it (the four gates would not be).
+    [Fact]
+    public Task PhaseBrokenRunsWithinTheLimitAreClean()
+        => new PhasewardAnalyzerTest<PassGatePathAnalyzer>("""
+            using Phaseward;
+
+            public sealed class Crossover : Design
+            {
+                protected override void Describe(Circuit c)
+                {
+                    var clk = c.Clock("sample", 10.Nanoseconds());
+                    var route = c.Input("route");
+                    var h = c.TransmissionGate(c.Input("a"), clk.High, "hop");
+                    var m1 = c.TransmissionGate(h, route, "mux1");
+                    var m2 = c.TransmissionGate(m1, route, "mux2");
+                    var l = c.TransmissionGate(m2, clk.Low, "leg");
+                    c.Output("y", c.Inverter(l));
+                }
+            }
+            """)
+            .WithEditorConfig("phaseward.max_series_pass_gates = 3")
+            .RunAsync();
+
     [Fact]
     public Task ChainBuiltInALoopIsReportedAtTheLoopsCall()
         => new PhasewardAnalyzerTest<PassGatePathAnalyzer>("""

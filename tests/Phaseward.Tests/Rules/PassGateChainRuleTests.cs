@@ -120,6 +120,108 @@ public class PassGateChainRuleTests
         Assert.Empty(Check(e, 3));
     }
 
+    // sample.High gate 'hop' → data gates mux1, mux2 (on 'route', an input: nothing makes it exclusive with anything) →
+    // sample.Low gates leg1, leg2. Each gate can conduct with its neighbours, but hop never with leg1 or leg2: data
+    // runs through hop, mux1, mux2 while sample is high and route is on, and through mux1, mux2, leg1, leg2 while sample
+    // is low, never through all five. The worst conducting sub-run is mux1..leg2, driven from hop's output node (left
+    // holding the data when hop turned off; taken as driven through the process's 4 kΩ driver resistance, like every
+    // run that starts on a node no restoring stage drives).
+    // Nets (illustrative process: wire 1 fF, diffusion 1.5 fF, pass gate 5 kΩ, driver 4 kΩ): sensor 2.5 fF (one
+    // terminal), hop's output h, m1, m2, l1 4 fF (two terminals), l2 2.5 fF. Downstream: l2 2.5, l1 6.5, m2 10.5,
+    // m1 14.5, h 18.5, sensor 21 fF.
+    //   mux1..leg2: Elmore = 4 kΩ·18.5 fF + 5 kΩ·(14.5 + 10.5 + 6.5 + 2.5) fF = 74 + 170 = 244 ps (the RC-tree sum,
+    //   W. C. Elmore, J. Appl. Phys. 19(1), 1948; the tree form of J. Rubinstein, P. Penfield, M. A. Horowitz, IEEE
+    //   Trans. CAD 2(3), 1983). ngspice-39 on that ladder (tests/reference/ngspice/netlists/rc_tree_phase_break.cir):
+    //   the first moment ∫(1 − v) dt = 243.99 ps, t50 = 185.0 ps.
+    //   hop..mux2: Elmore = 4 kΩ·21 fF + 5 kΩ·(18.5 + 14.5 + 10.5) fF = 84 + 217.5 = 301.5 ps. mux2's step still counts
+    //   leg1's branch as load although leg1 is off while hop conducts: the load model knows exclusive data controls,
+    //   not phases (pessimistic, first order).
+    // The whole five-gate run the neighbours alone would make: 4 kΩ·21 fF + 5 kΩ·52.5 fF = 346.5 ps, reported at leg1.
+    [Fact]
+    public void A_run_never_holds_gates_that_cannot_conduct_together_whatever_lies_between_them()
+    {
+        var c = new Circuit("Buoy");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        var route = c.Input("route");
+        var h = c.TransmissionGate(c.Input("sensor"), clock.High, "hop");
+        var m = c.TransmissionGate(c.TransmissionGate(h, route, "mux1"), route, "mux2");
+        c.TransmissionGate(c.TransmissionGate(m, clock.Low, "leg1"), clock.Low, "leg2");
+
+        var finding = Assert.Single(Check(c, 3));
+        Assert.Equal("4", finding.Properties[FindingPropertyKeys.ChainLength]);
+        Assert.Equal("mux1", finding.Properties[FindingPropertyKeys.FirstGate]);
+        Assert.Equal("leg2", Name(c, finding.Properties[FindingPropertyKeys.ReportedGateId]));
+        var elmore = double.Parse(finding.Properties[FindingPropertyKeys.ElmoreDelaySeconds], CultureInfo.InvariantCulture);
+        Assert.Equal(244e-12, elmore, 1e-21);
+        // ngspice: the simulated 50 % delay lies below the Elmore delay (its bound for an RC tree's step response:
+        // R. Gupta, B. Tutuianu, L. T. Pileggi, IEEE Trans. CAD 16(1), 1997, from memory) and near 0.69 of it.
+        var t50 = NgspiceReference.TreeT50("rc_tree_phase_break", "l2");
+        Assert.InRange(t50 / elmore, 0.69, 0.77);
+
+        var runs = PassGateChains.Of(c.ToNetlist(), new RulePolicy { MaxSeriesPassGates = 3 });
+        Assert.Equal(new[] { "hop mux1 mux2", "mux1 mux2 leg1 leg2" }, runs.Select(r => string.Join(" ", r.Gates.Select(g => g.Name))).OrderBy(n => n));
+        Assert.Equal(301.5e-12, runs.Single(r => r.First.Name == "hop").ElmoreDelay.Seconds, 1e-21);
+        Assert.Equal(244e-12, runs.Single(r => r.First.Name == "mux1").ElmoreDelay.Seconds, 1e-21);
+
+        // With one phase throughout, the five gates are one run (the run above is broken by the phases, not by the
+        // data gates): Elmore 346.5 ps, reported where it passes the limit.
+        var d = new Circuit("Buoy");
+        var clk = d.Clock("sample", 10.Nanoseconds());
+        var r = d.Input("route");
+        var n = d.TransmissionGate(d.TransmissionGate(d.TransmissionGate(d.Input("sensor"), clk.High, "hop"), r, "mux1"), r, "mux2");
+        d.TransmissionGate(d.TransmissionGate(n, clk.High, "leg1"), clk.High, "leg2");
+        var whole = Assert.Single(Check(d, 3));
+        Assert.Equal("5", whole.Properties[FindingPropertyKeys.ChainLength]);
+        Assert.Equal("leg1", Name(d, whole.Properties[FindingPropertyKeys.ReportedGateId]));
+        Assert.Equal(346.5e-12, double.Parse(whole.Properties[FindingPropertyKeys.ElmoreDelaySeconds], CultureInfo.InvariantCulture), 1e-21);
+    }
+
+    [Fact]
+    public void Exclusive_data_controls_break_a_run_across_a_clocked_gate_between_them()
+    {
+        // select → a sample.High gate → select's inverse: the first and last never conduct together, so the runs are
+        // on1, mid and mid, off1 (two gates each, within a limit of 2), not one of three.
+        var c = new Circuit("Buoy");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        var select = c.Input("select");
+        var on = c.TransmissionGate(c.Input("sensor"), select, "on1");
+        var mid = c.TransmissionGate(on, clock.High, "mid");
+        c.TransmissionGate(mid, c.Inverter(select, "select_b"), "off1");
+        Assert.Empty(Check(c, 2));
+        Assert.Equal(new[] { "mid off1", "on1 mid" },
+            PassGateChains.Of(c.ToNetlist(), minimumLength: 2).Select(r => string.Join(" ", r.Gates.Select(g => g.Name))).OrderBy(n => n));
+
+        // Not exclusive (two independent inputs): one run of three.
+        var d = new Circuit("Buoy");
+        var clk = d.Clock("sample", 10.Nanoseconds());
+        var x = d.TransmissionGate(d.TransmissionGate(d.Input("sensor"), d.Input("select"), "on1"), clk.High, "mid");
+        d.TransmissionGate(x, d.Input("other"), "off1");
+        Assert.Equal("3", Assert.Single(Check(d, 2)).Properties[FindingPropertyKeys.ChainLength]);
+    }
+
+    // A run remembers at most ControlTrails.MaxTracked (16) distinct controls. hop (sample.High), then k gates on
+    // distinct data controls that each have a possible exclusive partner (an inverter of it), then leg (sample.Low):
+    // with k = 15 the run still holds hop's phase and is broken there; with k = 16 hop's phase is forgotten and the run
+    // stays whole, the longer, worst case (documented on PW2001's page).
+    [Theory]
+    [InlineData(15, new[] { 16, 16 })]
+    [InlineData(16, new[] { 18 })]
+    public void A_run_forgets_its_oldest_control_beyond_the_tracked_number_and_then_stays_whole(int dataGates, int[] runLengths)
+    {
+        var c = new Circuit("Buoy");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        var net = c.TransmissionGate(c.Input("sensor"), clock.High, "hop");
+        for (var i = 1; i <= dataGates; i++)
+        {
+            var control = c.Input("sel" + i);
+            c.Output("sel" + i + "_b", c.Inverter(control));
+            net = c.TransmissionGate(net, control, "d" + i);
+        }
+
+        c.TransmissionGate(net, clock.Low, "leg");
+        Assert.Equal(runLengths, PassGateChains.Of(c.ToNetlist(), new RulePolicy { MaxSeriesPassGates = 40 }).Select(r => r.Length).ToArray());
+    }
+
     [Fact]
     public void A_larger_stage_delay_raises_the_computed_limit()
     {

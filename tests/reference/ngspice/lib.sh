@@ -180,7 +180,7 @@ ref_build_csvs() {
     local spec tree leaves leaf
     {
         echo "tree,leaf,t50_seconds"
-        for spec in "rc_tree_a:a2 b4" "rc_tree_b:c1 e2 f1 g3" "rc_tree_rotator:m2 x" "rc_tree_rotator_all:xa"; do
+        for spec in "rc_tree_a:a2 b4" "rc_tree_b:c1 e2 f1 g3" "rc_tree_rotator:m2 x" "rc_tree_rotator_all:xa" "rc_tree_phase_break:l2"; do
             tree="${spec%%:*}"
             leaves="${spec#*:}"
             cir="$nd/${tree}.cir"

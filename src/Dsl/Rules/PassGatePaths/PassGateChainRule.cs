@@ -21,9 +21,12 @@ namespace Phaseward.Rules.PassGatePaths;
 /// <para>Once per over-long run, at its first gate beyond the limit: the gates whose longest incoming run is exactly
 /// limit + 1 long. Where runs branch out (a shared trunk feeding several branches) the trunk's gate is reported once;
 /// where they branch in (a mux tree) each gate at that depth is reported once, with the longest run through it. A
-/// shorter branch that joins a run already beyond the limit is reported with that run, not again.</para>
+/// shorter branch that joins a run already beyond the limit is reported with that run, not again. A run holds only
+/// gates that can all conduct together (<see cref="SeriesChains"/>): where a gate cannot conduct with an earlier one,
+/// the run is broken after that one, and the conducting sub-run that remains, if it is already beyond the limit at
+/// that gate, is reported there.</para>
 /// <para>O(devices + nets) for the analysis; each finding then lists at most <see cref="MaxListedSplitPoints"/> split
-/// points, walking at most limit + 1 + <see cref="MaxListedSplitPoints"/> × spacing gates.</para>
+/// points, walking at most its depth + <see cref="MaxListedSplitPoints"/> × spacing gates.</para>
 /// </remarks>
 public sealed class PassGateChainRule : Rule
 {
@@ -77,7 +80,7 @@ public sealed class PassGateChainRule : Rule
         Dictionary<SiteKey, (int Gates, bool HasCallers)>? siteGates = null;
         foreach (var gate in netlist.Devices)
         {
-            if (!gate.IsPassDevice || chains.DepthIn(gate) != limit + 1) continue;
+            if (!chains.IsFirstBeyond(gate, limit)) continue;
             context.CancellationToken.ThrowIfCancellationRequested();
             findings.Add(Report(netlist, chains, gate, limit, optimum, spacing, ref siteGates));
         }
@@ -98,7 +101,7 @@ public sealed class PassGateChainRule : Rule
         var restored = RestoringStageSpacing.RestoredChainDelay(chain.Length, spacing, meanResistance, meanCapacitance, process.StageDelay,
             chains.Network.RootResistanceOf(input), netlist.CapacitanceOf(input));
 
-        var window = ChainWindow(chains, gate, chain.Length, limit, spacing);
+        var window = ChainWindow(chains, gate, chain.Length, spacing);
         var splitCount = (chain.Length - 1) / spacing;
         var listed = Math.Min(splitCount, MaxListedSplitPoints);
         var ids = new StringBuilder();
@@ -147,20 +150,11 @@ public sealed class PassGateChainRule : Rule
     }
 
     // The chain through the reported gate from its first gate (index 0 = position 1), as far as the listed split points
-    // and the run of gates at the last one's call need: the gate sits at position limit + 1; earlier gates are found
-    // walking back, later ones along the longest continuation. At most limit + 1 + (MaxListedSplitPoints + 1) · spacing
-    // gates, whatever the chain's length.
-    private static List<Device> ChainWindow(SeriesChains chains, Device gate, int length, int limit, int spacing)
-    {
-        var end = (int)Math.Min(length, (long)limit + 1 + (long)(MaxListedSplitPoints + 1) * spacing);
-        var window = new List<Device>(end);
-        for (Device? g = chains.Previous(gate); g is not null; g = chains.Previous(g))
-            window.Add(g);
-        window.Reverse();
-        for (Device? g = gate; g is not null && window.Count < end; g = chains.Next(g))
-            window.Add(g);
-        return window;
-    }
+    // and the run of gates at the last one's call need: the gate sits at its depth (limit + 1, or beyond where a broken
+    // run begins late); later gates follow the longest continuation. At most that depth + (MaxListedSplitPoints + 1) ·
+    // spacing gates, whatever the chain's length.
+    private static List<Device> ChainWindow(SeriesChains chains, Device gate, int length, int spacing)
+        => chains.ChainGates(gate, (int)Math.Min(length, (long)chains.DepthIn(gate) + (long)(MaxListedSplitPoints + 1) * spacing));
 
     // The split site of the gate at window[index] (chain position index + 1).
     private static SplitSite SiteOf(List<Device> window, int index, Dictionary<SiteKey, (int Gates, bool HasCallers)> siteGates)

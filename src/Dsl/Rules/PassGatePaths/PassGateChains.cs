@@ -43,8 +43,9 @@ public sealed class PassGateRun
 }
 
 /// <summary>
-/// The runs of pass gates in series of a netlist, for reports: one run per gate that feeds no further pass gate,
-/// traced back along the longest run that ends there (the same runs and Elmore delays as PW2001 uses).
+/// The runs of pass gates in series of a netlist, for reports: one run per gate where the longest run through it ends
+/// (it feeds no further pass gate that can conduct with the run), traced back along the longest run that ends there
+/// (the same runs and Elmore delays as PW2001 uses).
 /// </summary>
 public static class PassGateChains
 {
@@ -64,14 +65,13 @@ public static class PassGateChains
         var chains = new SeriesChains(PassGateNetwork.Of(netlist, cancellationToken), cancellationToken);
         foreach (var gate in netlist.Devices)
         {
-            if (!gate.IsPassDevice || chains.Next(gate) is not null || chains.DepthIn(gate) < minimumLength)
+            if (!gate.IsPassDevice || chains.DepthIn(gate) < minimumLength)
+                continue;
+            var chain = chains.ChainThrough(gate);
+            if (chain.Length != chains.DepthIn(gate))
                 continue;
             cancellationToken.ThrowIfCancellationRequested();
-            var gates = new List<Device>(chains.DepthIn(gate));
-            for (Device? g = gate; g is not null; g = chains.Previous(g))
-                gates.Add(g);
-            gates.Reverse();
-            runs.Add(new PassGateRun(gates, chains.ChainThrough(gate).Elmore, limit));
+            runs.Add(new PassGateRun(chains.ChainGates(gate), chain.Elmore, limit));
         }
 
         return runs;
