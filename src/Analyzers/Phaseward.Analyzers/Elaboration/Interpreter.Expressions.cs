@@ -66,7 +66,14 @@ internal sealed partial class Interpreter
     };
 
     private object? VisitDefaultValue(IDefaultValueOperation defaultValue, Frame frame)
-        => defaultValue.Type is null ? null : DefaultOf(defaultValue.Type);
+    {
+        if (defaultValue.Type is null)
+            return null;
+        var value = DefaultOf(defaultValue.Type);
+        return Unknown.Is(value) && defaultValue.Type.TypeKind != TypeKind.Error
+            ? Unsupported(defaultValue, "the default value of " + Describe(defaultValue.Type), "it is a library struct outside the pure library")
+            : value;
+    }
 
     private object? VisitParenthesized(IParenthesizedOperation parenthesized, Frame frame) => Evaluate(parenthesized.Operand, frame);
 
@@ -147,9 +154,10 @@ internal sealed partial class Interpreter
             return Activator.CreateInstance(clr);
         if (type is INamedTypeSymbol structType && session.IsInSource(structType))
             return DefaultStruct(structType);
-        // A library struct that is not generic (byte, decimal, DateTime...): its real default value, so what is then read
-        // from it is run or reported like any library member. (A generic one would be erased to object: left unknown.)
-        if (type is INamedTypeSymbol { IsGenericType: false } && ClrTypes.Resolve(type) is { IsValueType: true } libraryStruct)
+        // A struct of the pure library that is not generic (byte, short, decimal...): its real default. Any other library
+        // struct is not made (making one may run its code; a generic one would be erased to object): it stays unknown.
+        if (type is INamedTypeSymbol { IsGenericType: false, IsRefLikeType: false, SpecialType: not SpecialType.System_Void } && Library.IsPureType(type)
+            && ClrTypes.Resolve(type) is { IsValueType: true } libraryStruct)
             return Activator.CreateInstance(libraryStruct);
         return Unknown.Value;
     }

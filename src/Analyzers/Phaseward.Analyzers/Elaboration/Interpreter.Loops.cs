@@ -143,6 +143,13 @@ internal sealed partial class Interpreter
 
             return Completion.Normal;
         }
+        catch (UnknownValueException)
+        {
+            // A lazy library sequence (OrderBy, Select...) called back a lambda whose value is not known: the iterations
+            // left are skipped, and what the body assigns made unknown.
+            Poison(loop.Body, frame);
+            return Completion.Normal;
+        }
         finally
         {
             loops.Pop();
