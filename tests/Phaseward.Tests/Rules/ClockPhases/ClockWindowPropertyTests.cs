@@ -95,7 +95,7 @@ public class ClockWindowPropertyTests
     {
         var broken = new Rule[] { new SelfLoopBlindSameWindowRule(), new OverlapRaceRule(), new ClockCrossingRule() };
 
-        var failure = Assert.Throws<CsCheckException>(() => Pipelines.Sample(choices => { CheckPipeline(choices, broken); }, iter: 3000, print: Describe));
+        var failure = Assert.Throws<CsCheckException>(() => Pipelines.Sample(choices => { CheckPipeline(choices, broken); }, iter: 10000, print: Describe));
 
         Assert.Contains("CsCheck_Seed", failure.Message, StringComparison.Ordinal);
         Assert.Contains("missing [(PW1001,", failure.ToString(), StringComparison.Ordinal);
