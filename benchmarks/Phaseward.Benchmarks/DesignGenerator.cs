@@ -12,6 +12,12 @@ public enum DesignShape
 
     /// <summary>A loop over a lane helper: a few lines of source, any number of devices.</summary>
     Loop,
+
+    /// <summary>
+    /// Everyday C#: a lane written as a <c>Block</c> class placed once per lane (hierarchical names), its wiring in a
+    /// record copied with <c>with</c>, the lanes chained by LINQ's <c>Aggregate</c> over a lambda that closes over locals.
+    /// </summary>
+    Blocks,
 }
 
 /// <summary>
@@ -48,16 +54,29 @@ public static class DesignGenerator
     {
         var lanes = LanesFor(devices);
         var text = new StringBuilder(shape == DesignShape.Loop ? 2048 : 128 + lanes * 700);
+        if (shape == DesignShape.Blocks)
+            text.Append("using System;\nusing System.Linq;\n");
         text.Append("using Phaseward;\n\n");
         text.Append("/// <summary>Generated benchmark design: ").Append(lanes.ToString(CultureInfo.InvariantCulture))
             .Append(" lanes, ").Append(DevicesOf(lanes).ToString(CultureInfo.InvariantCulture)).Append(" devices (")
             .Append(shape).Append("). Figures invented for the benchmark.</summary>\n");
         text.Append("public sealed class ").Append(className).Append(" : Design\n{\n");
-        if (shape == DesignShape.Loop)
-            WriteLoop(text, lanes);
-        else
-            WriteStraightLine(text, lanes);
+        switch (shape)
+        {
+            case DesignShape.Loop:
+                WriteLoop(text, lanes);
+                break;
+            case DesignShape.Blocks:
+                WriteBlocks(text, lanes);
+                break;
+            default:
+                WriteStraightLine(text, lanes);
+                break;
+        }
+
         text.Append("}\n");
+        if (shape == DesignShape.Blocks)
+            WriteLaneBlock(text);
         return text.ToString();
     }
 
@@ -84,6 +103,36 @@ public static class DesignGenerator
         text.Append("    private static Net Lane(Circuit c, Clock clk, Clock gated, Net sel, Net selb, Net en, Net d)\n    {\n");
         WriteLaneBody(text, "        ", "", "d", "return ");
         text.Append("    }\n");
+    }
+
+    private static void WriteBlocks(StringBuilder text, int lanes)
+    {
+        text.Append("    private const int Lanes = ").Append(lanes.ToString(CultureInfo.InvariantCulture)).Append(";\n\n");
+        text.Append("    protected override void Describe(Circuit c)\n    {\n");
+        text.Append("        var clk = c.Clock(\"clk\", 4.Nanoseconds());\n");
+        text.Append("        var sel = c.Input(\"sel\");\n");
+        text.Append("        var wiring = new LaneWiring(clk, sel, c.Inverter(sel, \"sel_b\"), c.Input(\"en\"));\n");
+        text.Append("        Func<int, Net, Net> place = (i, d) =>\n        {\n");
+        text.Append("            if (i % ").Append(LanesPerBlock.ToString(CultureInfo.InvariantCulture))
+            .Append(" == 0)\n                wiring = wiring with { Gated = c.ClockGate(clk, wiring.Enable, maxIdle: 1.Nanoseconds()) };\n");
+        text.Append("            return c.Place(new Lane(wiring, d), $\"lane{i}\").Output;\n        };\n\n");
+        text.Append("        var q = Enumerable.Range(0, Lanes).Aggregate(c.Input(\"d\"), (d, i) => place(i, d));\n");
+        text.Append("        c.Output(\"q\", q);\n    }\n");
+    }
+
+    /// <summary>The lane as a block class and its wiring as a record (the <see cref="DesignShape.Blocks"/> shape).</summary>
+    private static void WriteLaneBlock(StringBuilder text)
+    {
+        text.Append("\npublic sealed record LaneWiring(Clock Clock, Net Select, Net SelectBar, Net Enable, Clock? Gated = null);\n\n");
+        text.Append("public sealed class Lane : Block\n{\n");
+        text.Append("    private readonly LaneWiring wiring;\n    private readonly Net input;\n\n");
+        text.Append("    public Lane(LaneWiring wiring, Net input)\n    {\n        this.wiring = wiring;\n        this.input = input;\n    }\n\n");
+        text.Append("    public Net Output { get; private set; } = null!;\n\n");
+        text.Append("    protected override void Describe(Circuit c)\n    {\n");
+        text.Append("        var (clk, sel, selb, en) = (wiring.Clock, wiring.Select, wiring.SelectBar, wiring.Enable);\n");
+        text.Append("        var gated = wiring.Gated!;\n");
+        WriteLaneBody(text, "        ", "", "input", "Output = ");
+        text.Append("    }\n}\n");
     }
 
     private static void WriteStraightLine(StringBuilder text, int lanes)

@@ -60,19 +60,18 @@ public static class Program
         var cases = new List<Case>();
         foreach (var size in settings.Sizes)
         {
-            cases.Add(new Case(DesignShape.StraightLine, size));
-            cases.Add(new Case(DesignShape.Loop, size));
+            foreach (var shape in settings.Shapes)
+                cases.Add(new Case(shape, size));
         }
 
         cases.RemoveAll(c => c.Shape == DesignShape.StraightLine && c.Size > settings.StraightLineMax);
 
         // Warm-up: every measurement once on the smallest design, so JIT and first-use costs stay out of the table.
-        var warm = new Bench(new Case(DesignShape.Loop, 1_000), references, phaseward, sdk);
-        var warmStraight = new Bench(new Case(DesignShape.StraightLine, 1_000), references, phaseward, sdk);
+        var warm = settings.Shapes.Select(shape => new Bench(new Case(shape, 1_000), references, phaseward, sdk)).ToList();
         for (var i = 0; i < 3; i++)
         {
-            warm.RunOnce(record: false);
-            warmStraight.RunOnce(record: false);
+            foreach (var bench in warm)
+                bench.RunOnce(record: false);
         }
 
         var results = new List<Bench>();
@@ -412,7 +411,7 @@ public static class Program
     private sealed class Settings
     {
         public const string Usage = "usage: Phaseward.Benchmarks [--sizes 1000,10000,100000,1000000] [--straight-line-max 100000] [--runs 5] " +
-                                    "[--large-size 100000] [--large-runs 3] [--sdk-analyzers DIR | --no-sdk] [--out FILE] | --profile DEVICES [--profile-shape loop|straight-line]  [--wall: wall-clock instead of CPU time]";
+                                    "[--large-size 100000] [--large-runs 3] [--sdk-analyzers DIR | --no-sdk] [--shapes straight-line,loop,blocks] [--out FILE] | --profile DEVICES [--profile-shape loop|straight-line|blocks]  [--wall: wall-clock instead of CPU time]";
 
         public int[] Sizes { get; private set; } = { 1_000, 10_000, 100_000, 1_000_000 };
 
@@ -433,6 +432,16 @@ public static class Program
         public int? Profile { get; private set; }
 
         public DesignShape ProfileShape { get; private set; } = DesignShape.Loop;
+
+        public DesignShape[] Shapes { get; private set; } = { DesignShape.StraightLine, DesignShape.Loop, DesignShape.Blocks };
+
+        private static DesignShape ShapeNamed(string option, string shape) => shape switch
+        {
+            "loop" => DesignShape.Loop,
+            "straight-line" => DesignShape.StraightLine,
+            "blocks" => DesignShape.Blocks,
+            _ => throw new ArgumentException($"Option '{option}' takes 'loop', 'straight-line' or 'blocks' (was '{shape}')."),
+        };
 
         public static Settings Parse(string[] args)
         {
@@ -455,14 +464,9 @@ public static class Program
                     case "--out": s.Output = Value(); break;
                     case "--profile": s.Profile = Positive(option, Value()); break;
                     case "--profile-shape":
-                        var shape = Value();
-                        s.ProfileShape = shape switch
-                        {
-                            "loop" => DesignShape.Loop,
-                            "straight-line" => DesignShape.StraightLine,
-                            _ => throw new ArgumentException($"Option '{option}' takes 'loop' or 'straight-line' (was '{shape}')."),
-                        };
+                        s.ProfileShape = ShapeNamed(option, Value());
                         break;
+                    case "--shapes": s.Shapes = Value().Split(',').Select(t => ShapeNamed(option, t)).ToArray(); break;
                     case "--wall": Samples.CpuTime = false; break;
                     default: throw new ArgumentException($"Unknown option '{option}'.");
                 }

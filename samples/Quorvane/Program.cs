@@ -33,6 +33,8 @@ public static class Program
             new BurstGateLatched(),
             new WaveLog(),
             new WaveLogDecoded(),
+            new SpectrumBins(),
+            new SpectrumBinsTwoPhase(),
         };
 
         var findings = 0;

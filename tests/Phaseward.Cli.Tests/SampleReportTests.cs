@@ -227,7 +227,21 @@ public sealed class SampleReportTests : IDisposable
         new WakeLogic(), new WakeLogicRegistered(), new MooringHold(), new MooringHoldWeakKeeper(),
         new TelemetryBus(), new TelemetryBusSelected(), new BurstGate(), new BurstGateLatched(),
         new TwoPhaseTally(), new RadioHandoff(), new RadioHandoffSynchronized(), new WaveLog(), new WaveLogDecoded(),
+        new SpectrumBins(), new SpectrumBinsTwoPhase(),
     };
+
+    [Fact]
+    public void TheSpectrumSampleWrittenWithBlocksKeepsEveryBinAtRunTimeAndItsFixIsClean()
+    {
+        // Six bins placed from LINQ, each a same-phase latch pair: six findings at run time, one per bin, named by the
+        // bin's place in the hierarchy (the analyzers group them into one diagnostic: SpectrumBinsSampleTests).
+        var findings = new SpectrumBins().Check().Findings;
+        Assert.Equal(6, findings.Count);
+        Assert.All(findings, f => Assert.Equal(RuleCatalog.SameWindowLatches.Id, f.RuleId));
+        foreach (var bin in new[] { "swell", "groundswell", "sea", "chop", "ripple", "spray" })
+            Assert.Single(findings, f => f.Message.StartsWith($"Latch '{bin}.count' takes its data from latch '{bin}.held'", StringComparison.Ordinal));
+        Assert.Empty(new SpectrumBinsTwoPhase().Check().Findings);
+    }
 
     [Fact]
     public void TheNonOverlappingTwoPhaseSampleIsCleanAndTheCrossingSampleShowsPw1003AndItsFix()

@@ -38,6 +38,10 @@ internal sealed class PassGateNetwork
 {
     private const byte White = 0, Grey = 1, Black = 2;
 
+    // One network per netlist: PW2001, the latch paths' worst-case delays and the reports all read the same figures,
+    // and building it is a few sweeps over the whole netlist (read-only once built, so it is safe to share).
+    private static readonly System.Runtime.CompilerServices.ConditionalWeakTable<Netlist, PassGateNetwork> Cache = new();
+
     private readonly bool[] restored;
     private readonly bool[] inputEdgeKept;
     private readonly bool[] outputEdgeKept;
@@ -54,7 +58,20 @@ internal sealed class PassGateNetwork
     private readonly int[] passLoadStart;
     private readonly int[] passLoads;
 
-    public PassGateNetwork(Netlist netlist, CancellationToken cancellationToken = default)
+    /// <summary>The network of a netlist, built on first use and kept for the netlist's lifetime (a build cancelled
+    /// by <paramref name="cancellationToken"/> keeps nothing).</summary>
+    public static PassGateNetwork Of(Netlist netlist, CancellationToken cancellationToken = default)
+    {
+        if (netlist is null) throw new ArgumentNullException(nameof(netlist));
+        if (Cache.TryGetValue(netlist, out var network))
+            return network;
+        network = new PassGateNetwork(netlist, cancellationToken);
+        // Two threads may build it at once (the analyzers of two rule families run concurrently): both results are
+        // equal, and every caller then reads the one kept.
+        return Cache.GetValue(netlist, _ => network);
+    }
+
+    private PassGateNetwork(Netlist netlist, CancellationToken cancellationToken)
     {
         Netlist = netlist ?? throw new ArgumentNullException(nameof(netlist));
         var devices = netlist.Devices;

@@ -19,7 +19,7 @@ internal static class PassGateChainDeck
     public static SpiceDeck Build(Finding finding, Netlist netlist)
     {
         var reported = DeckInputs.DeviceById(finding, netlist, FindingPropertyKeys.ReportedGateId);
-        var network = new PassGateNetwork(netlist);
+        var network = PassGateNetwork.Of(netlist);
         var chains = new SeriesChains(network);
         var gates = chains.ChainGates(reported);
         var chain = chains.ChainThrough(reported);

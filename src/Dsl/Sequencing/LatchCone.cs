@@ -67,5 +67,5 @@ internal sealed class LatchCone
     /// <see cref="FirstOrderDelay"/>.
     /// </summary>
     public double MaxDelaySeconds(Device device)
-        => (network ??= new PassGateNetwork(netlist)).ElmoreTerm(device).Seconds * FiftyPercentDelay.SinglePoleFactor;
+        => (network ??= PassGateNetwork.Of(netlist)).ElmoreTerm(device).Seconds * FiftyPercentDelay.SinglePoleFactor;
 }

@@ -21,6 +21,8 @@ public sealed class LatchModel
 
     private readonly Latch?[] entryLatchOfDevice;
     private readonly Register?[] registerOfLatch;
+    // Asked by the rules of two families at once (the clock-phase and timing analyzers run concurrently on one
+    // netlist): both memo tables are locked.
     private readonly PhaseWindowCache windows = new();
     private readonly Dictionary<(Phase, Phase), WindowRelation> relations = new();
 
@@ -83,14 +85,21 @@ public sealed class LatchModel
     }
 
     /// <summary>The window of a latch's phase, or of any phase (made once per model).</summary>
-    public PhaseWindow WindowOf(Phase phase) => windows.Of(phase);
+    public PhaseWindow WindowOf(Phase phase)
+    {
+        lock (windows)
+            return windows.Of(phase);
+    }
 
     /// <summary>How the windows of two phases lie (see <see cref="WindowRelation"/>), computed once per pair of phases.</summary>
     public WindowRelation Relation(Phase a, Phase b)
     {
-        if (!relations.TryGetValue((a, b), out var relation))
-            relations[(a, b)] = relation = WindowRelations.Of(WindowOf(a), WindowOf(b));
-        return relation;
+        lock (relations)
+        {
+            if (!relations.TryGetValue((a, b), out var relation))
+                relations[(a, b)] = relation = WindowRelations.Of(WindowOf(a), WindowOf(b));
+            return relation;
+        }
     }
 
     /// <summary>A path from a register's slave to a register's master: a register-to-register path (setup and hold, PW4001/PW4002).</summary>

@@ -1,5 +1,6 @@
 using System.IO;
 using System.Linq;
+using Phaseward.Benchmarks;
 using Phaseward.Checking;
 using Phaseward.Netlists;
 
@@ -61,6 +62,21 @@ public class ParityTests
         // still match exactly, and nothing else may be reported.
         foreach (var design in samples.DesignNames)
             AssertParity(samples, design, allowNotElaborated: true);
+    }
+
+    [Theory]
+    [InlineData(DesignShape.StraightLine)]
+    [InlineData(DesignShape.Loop)]
+    [InlineData(DesignShape.Blocks)]
+    public void EveryBenchmarkShapeMatchesRunTime(DesignShape shape)
+    {
+        // 130 lanes: three gated clocks, so the block shape's closure-written record copy is exercised twice.
+        var devices = DesignGenerator.DevicesOf(130);
+        var designs = new InMemoryDesigns(("/bench/Generated.cs", DesignGenerator.Generate(shape, devices)));
+        AssertParity(designs, "Generated");
+        Assert.Equal(devices, designs.CompileTime("Generated").Netlist!.Devices.Count);
+        if (shape == DesignShape.Blocks)
+            Assert.Contains(designs.CompileTime("Generated").Netlist!.Nets, n => n.Name.StartsWith("lane129.", System.StringComparison.Ordinal));
     }
 
     internal static void AssertParity(InMemoryDesigns designs, string design, params object[] constructorArguments)

@@ -163,12 +163,12 @@ public class OneHotShifterLoadTests
         // inverter. Its driver sees 10 + 10 fF with one select on (the other three branches off), 10 + 4 · 10 fF when
         // the selects are not known to be exclusive (and then says it assumes so).
         var (stated, gate) = Shifter(stated: true);
-        var network = new PassGateNetwork(stated);
+        var network = PassGateNetwork.Of(stated);
         Assert.Equal(20.0, network.RootLoad(gate).Farads * 1e15, 9);
         Assert.False(network.RootLoadAssumes(gate));
 
         var (unstated, first) = Shifter(stated: false);
-        var all = new PassGateNetwork(unstated);
+        var all = PassGateNetwork.Of(unstated);
         Assert.Equal(50.0, all.RootLoad(first).Farads * 1e15, 9);
         Assert.True(all.RootLoadAssumes(first));
     }

@@ -75,7 +75,7 @@ public sealed class PassGateChainRule : Rule
             if (device.IsPassDevice) { hasPassGates = true; break; }
         if (!hasPassGates) return findings;
 
-        var network = new PassGateNetwork(netlist, context.CancellationToken);
+        var network = PassGateNetwork.Of(netlist, context.CancellationToken);
         var chains = new SeriesChains(network, context.CancellationToken);
         Dictionary<SiteKey, (int Gates, bool HasCallers)>? siteGates = null;
         foreach (var gate in netlist.Devices)

@@ -62,7 +62,7 @@ public static class PassGateChains
         if (!hasPassGates) return runs;
 
         var limit = PassGateChainRule.LimitFor(netlist.Process, policy ?? RulePolicy.Default);
-        var chains = new SeriesChains(new PassGateNetwork(netlist, cancellationToken), cancellationToken);
+        var chains = new SeriesChains(PassGateNetwork.Of(netlist, cancellationToken), cancellationToken);
         foreach (var gate in netlist.Devices)
         {
             if (!gate.IsPassDevice || chains.DepthIn(gate) < minimumLength)
