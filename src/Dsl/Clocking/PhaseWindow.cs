@@ -20,8 +20,9 @@ namespace Phaseward.Clocking;
 /// </remarks>
 public sealed class PhaseWindow
 {
-    // Times closer than this fraction of the cycle are one instant (edges entered as decimal figures).
-    private const double Tolerance = 1e-9;
+    /// <summary>Times closer than this fraction of the common cycle are one instant (edges are entered as decimal
+    /// figures, so window arithmetic lands a rounding error either side of an exact touch or tie).</summary>
+    internal const double Tolerance = 1e-9;
 
     private PhaseWindow(Phase phase, Time period, Time opens, Time length)
     {
@@ -143,7 +144,10 @@ public sealed class PhaseWindow
         for (var i = 0; i < Repeats(cycle); i++)
         {
             var since = Modulo(Opens.Seconds + i * Period.Seconds - late.Opens.Seconds, late.Period.Seconds, Tolerance * cycle.Seconds);
-            worst = Math.Max(worst, Math.Min(late.Length.Seconds - since, Length.Seconds));
+            var open = Math.Min(late.Length.Seconds - since, Length.Seconds);
+            // A window that closes as this one opens (a rounding error either side) is shut at the opening.
+            if (open > Tolerance * cycle.Seconds)
+                worst = Math.Max(worst, open);
         }
 
         return new Time(worst);

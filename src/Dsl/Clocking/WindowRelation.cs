@@ -43,12 +43,15 @@ public static class WindowRelations
     {
         if (a is null) throw new ArgumentNullException(nameof(a));
         if (b is null) throw new ArgumentNullException(nameof(b));
-        if (a.CommonCycleWith(b) is null)
+        if (a.CommonCycleWith(b) is not { } cycle)
             return WindowRelation.Unrelated;
         var longest = a.LongestOverlapWith(b);
         if (longest <= Time.Zero)
             return WindowRelation.Apart;
-        return longest > OverlapAllowance(a, b) ? WindowRelation.TransparentTogether : WindowRelation.ShortOverlap;
+        // An overlap exactly as long as the allowance is within it, whatever rounding the window arithmetic left.
+        return longest.Seconds > OverlapAllowance(a, b).Seconds + PhaseWindow.Tolerance * cycle.Seconds
+            ? WindowRelation.TransparentTogether
+            : WindowRelation.ShortOverlap;
     }
 
     /// <summary>The relation of two phases' windows.</summary>

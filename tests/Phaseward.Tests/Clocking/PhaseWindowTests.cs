@@ -94,4 +94,28 @@ public class PhaseWindowTests
         var period = window.Period.Seconds;
         return (t >= opens && t < closes) || (t + period >= opens && t + period < closes);
     }
+
+    // Exact ties, entered as decimal figures, found by the clock-window property test (ClockWindowPropertyTests) once
+    // its clocks could have no skew: window arithmetic lands a rounding error either side of the tie, and the answer
+    // must be the exact one. Waveforms worked by hand (no skew: a gate on High conducts exactly while the clock is high).
+    [Fact]
+    public void WindowsThatTouchOrOverlapExactlyByTheAllowanceAreReadAtTheTie()
+    {
+        var c = new Circuit("ties");
+        // 'slow' (1 ns, no skew, rising at 400 ps) is high over [400, 900) ps; 'late' (1 ns, 30 ps skew, rising at
+        // 400 ps) has its Low window [900, 1430) ps. late.Low opens at 900 ps exactly as slow.High closes: nothing of
+        // slow.High is still open at that opening (the race an overlap opens has nothing to run through).
+        var slow = c.Clock("slow", 1.Nanoseconds(), 0.5, 0.Picoseconds(), 400.Picoseconds());
+        var late = c.Clock("late", 1.Nanoseconds(), 0.5, 30.Picoseconds(), 400.Picoseconds());
+        Assert.Equal(Time.Zero, PhaseWindow.Of(late.Low).StillOpenAfterOpening(PhaseWindow.Of(slow.High)));
+        Assert.Equal(30e-12, PhaseWindow.Of(slow.High).StillOpenAfterOpening(PhaseWindow.Of(late.Low)).Seconds, 1e-21);
+
+        // 'edge' (2 ns, no skew, rising at 750 ps) is low over [1750, 2750) ps; its copy buffered by 250 ps is high over
+        // [1000, 2000) ps: together for exactly 250 ps, a quarter of the 1 ns windows, the allowance itself: not
+        // transparent together (PW1001 asks for longer), a short overlap.
+        var edge = c.Clock("edge", 2.Nanoseconds(), 0.5, 0.Picoseconds(), 750.Picoseconds());
+        var copy = c.BufferedClock(edge, 250.Picoseconds());
+        Assert.Equal(250e-12, PhaseWindow.Of(copy.High).LongestOverlapWith(PhaseWindow.Of(edge.Low)).Seconds, 1e-21);
+        Assert.Equal(WindowRelation.ShortOverlap, WindowRelations.Of(copy.High, edge.Low));
+    }
 }

@@ -11,7 +11,8 @@ namespace Phaseward.Tests.Rules.ClockPhases;
 /// <summary>
 /// PW1001, PW1002 and PW1003 against an independent simulation of the clock waveforms. Random pipelines of latches
 /// (library cells, hand-built dynamic, keeper and static latches, registers, two-register synchronizers) on random
-/// phases of one to three root clocks (periods of 1, 2 or 3 ns, or 1.414 ns, with offsets; some declared independent)
+/// phases of one to three root clocks (periods of 1, 2 or 3 ns, or 1.414 ns, with offsets, complement skews of 0, 30
+/// or 80 ps; some declared independent)
 /// and their gated and buffered copies, joined by random logic (inverters, buffers, NANDs, data-controlled pass gates,
 /// loops included), drawn by CsCheck from a choice sequence (<see cref="ChoiceSequence"/>, so a failure shrinks), are
 /// built twice: as a netlist through the DSL, and as an abstract model that knows only "latch on
@@ -20,7 +21,7 @@ namespace Phaseward.Tests.Rules.ClockPhases;
 /// <remarks>
 /// The simulation never calls Phaseward's window code. It samples the waveforms every picosecond over the common
 /// cycle: a clock is high while ((t − offset − delay) mod T) &lt; T/2 and its complement is the inverse of the clock
-/// delayed by the skew, so a transmission gate on High conducts while clk(t) or clk(t − skew) is high (its nMOS on the
+/// delayed by its root's skew, so a transmission gate on High conducts while clk(t) or clk(t − skew) is high (its nMOS on the
 /// clock, its pMOS on the late complement) and one on Low while either is low. Clocks are related when neither is
 /// declared independent and their periods are both among {1, 2, 3} ns or both 1.414 ns (500/707 is no small ratio);
 /// a clock's copies share its root. For every pair of latches joined by logic (no latch between), the expected
@@ -33,7 +34,8 @@ namespace Phaseward.Tests.Rules.ClockPhases;
 /// </remarks>
 public class ClockWindowPropertyTests
 {
-    private const int SkewPs = 30;
+    // Complement skews a root clock may have (its copies inherit it): none, the common 30 ps, and a late 80 ps.
+    private static readonly int[] SkewsPs = { 0, 30, 80 };
     private const int OddPeriodPs = 1414;
 
     private enum Style { DynamicCell, StaticCell, HandDynamic, HandKeeper, HandStatic, DynamicRegister, StaticRegister, Synchronizer }
@@ -42,7 +44,7 @@ public class ClockWindowPropertyTests
 
     private readonly record struct Signal(char Kind, int Index);
 
-    private sealed record AbstractClock(int Root, int PeriodPs, int OffsetPs, int DelayPs, bool Independent);
+    private sealed record AbstractClock(int Root, int PeriodPs, int OffsetPs, int DelayPs, bool Independent, int SkewPs);
 
     private sealed record AbstractLatch(string Name, int Clock, ClockPolarity Polarity, Signal Input, string? Register, bool IsMaster);
 
@@ -93,7 +95,7 @@ public class ClockWindowPropertyTests
     {
         var broken = new Rule[] { new SelfLoopBlindSameWindowRule(), new OverlapRaceRule(), new ClockCrossingRule() };
 
-        var failure = Assert.Throws<CsCheckException>(() => Pipelines.Sample(choices => { CheckPipeline(choices, broken); }, iter: 3000, print: Describe));
+        var failure = Assert.Throws<CsCheckException>(() => Pipelines.Sample(choices => { CheckPipeline(choices, broken); }, iter: 10000, print: Describe));
 
         Assert.Contains("CsCheck_Seed", failure.Message, StringComparison.Ordinal);
         Assert.Contains("missing [(PW1001,", failure.ToString(), StringComparison.Ordinal);
@@ -235,7 +237,7 @@ public class ClockWindowPropertyTests
         {
             var t = k + 0.5;
             var now = High(clock, t);
-            var skewed = High(clock, t - SkewPs);
+            var skewed = High(clock, t - clock.SkewPs);
             open[k] = polarity == ClockPolarity.High ? now || skewed : !now || !skewed;
         }
 
@@ -285,16 +287,17 @@ public class ClockWindowPropertyTests
             var period = random.Next(5) switch { 0 => OddPeriodPs, 1 => 2000, 2 => 3000, _ => 1000 };
             var offset = new[] { 0, 100, 250, 400, 500, 750 }[random.Next(6)];
             var independent = r > 0 && random.Next(5) == 0;
-            var root = c.Clock("clk" + r, period.Picoseconds(), 0.5, SkewPs.Picoseconds(), offset.Picoseconds(), independent);
-            Add(root, new AbstractClock(r, period, offset, 0, independent));
+            var skew = SkewsPs[random.Next(SkewsPs.Length)];
+            var root = c.Clock("clk" + r, period.Picoseconds(), 0.5, skew.Picoseconds(), offset.Picoseconds(), independent);
+            Add(root, new AbstractClock(r, period, offset, 0, independent, skew));
             if (random.Next(2) == 0)
-                Add(c.ClockGate(root, c.Input("en" + r)), new AbstractClock(r, period, offset, 0, independent));
+                Add(c.ClockGate(root, c.Input("en" + r)), new AbstractClock(r, period, offset, 0, independent, skew));
             if (random.Next(2) == 0)
             {
                 // Delays either side of the overlap allowance: a 1 ns High window (530 ps) and its copy 390 ps later
                 // are together for 140 ps (> 132.5 ps), 400 ps later for 130 ps.
                 var delay = new[] { 20, 35, 120, 250, 390, 400, 500 }[random.Next(7)];
-                Add(c.BufferedClock(root, delay.Picoseconds()), new AbstractClock(r, period, offset, delay, independent));
+                Add(c.BufferedClock(root, delay.Picoseconds()), new AbstractClock(r, period, offset, delay, independent, skew));
             }
         }
 
