@@ -5,8 +5,10 @@ namespace Phaseward.Analyzers.Tests.Elaboration;
 
 /// <summary>
 /// Nothing the elaborator cannot evaluate is read as a default. A design takes its stage count (3) through one kind of
-/// member access per row; at compile time it is either interpreted (then the netlist equals the run-time one) or it is
-/// PW9001 at that access -- never a silent 0, false or null.
+/// member access per row -- fields, properties, indexers, events and methods; static and instance; of the design's own
+/// types, of the library (pure, and outside: file, environment, clock, randomness, reflection, threads, network,
+/// processes) and of the DSL -- and at compile time it is either interpreted (then the netlist equals the run-time one)
+/// or it is PW9001 at that access: never a silent 0, false or null.
 /// </summary>
 public class MemberAccessSweepTests
 {
@@ -41,6 +43,61 @@ public class MemberAccessSweepTests
         { "library constant", "", "", "int.MaxValue / int.MaxValue * 3", true },
         { "library static field", "", "", "string.Empty.Length + 3", true },
         { "captured local read by a local function", "", "", "Local(); int Local() => 3;", true },
+
+        // fields, continued
+        { "static field of a user class with an initializer", "public static class Plan { public static int Stages = 3; }", "", "Plan.Stages", true },
+        { "field of a user struct left at its default", "public struct Pair { public int A; }", "private Pair pair;", "pair.A + 3", true },
+        { "default of a user struct", "public struct Pair { public int A; public int B; }", "", "default(Pair).B + 3", true },
+        { "default of a library struct outside the pure library", "", "", "default(System.DateTime).Year * 0 + 3", false },
+        { "default of a pure library struct", "", "", "(int)(default(decimal) + 3m)", true },
+        { "elements of a struct array, each its own value", "public struct Pair { public int A; }", "",
+            "Fill(new Pair[2]); static int Fill(Pair[] pairs) { pairs[0].A = 5; return pairs[1].A + 3; }", true },
+        { "static field of a library type outside the pure set (file system)", "", "", "System.IO.Path.DirectorySeparatorChar * 0 + 3", false },
+
+        // properties, continued
+        { "explicit property over a field", "", "private readonly int n = 3; private int N { get { return n; } }", "N", true },
+        { "virtual property overridden by the design",
+            "public abstract class Base : Design { protected virtual int N => 1; }", "protected override int N => 3;", "N", true },
+        { "property read through an interface", "public interface IPlan { int Stages { get; } } public sealed class Plan : IPlan { public int Stages => 3; }",
+            "", "((IPlan)new Plan()).Stages", true },
+        { "instance property of a library type", "", "", "\"abc\".Length", true },
+        { "static property of a pure library type", "", "", "System.Globalization.CultureInfo.InvariantCulture.Name.Length + 3", true },
+        { "static and instance property of the DSL", "", "", "Process.Illustrative.Name.Length * 0 + 3", true },
+        { "threads", "", "", "System.Threading.Thread.CurrentThread.ManagedThreadId * 0 + 3", false },
+
+        // indexers
+        { "indexer of a user type", "public sealed class Row { private readonly int[] values = { 1, 3 }; public int this[int i] => values[i]; }", "",
+            "new Row()[1]", true },
+        { "list indexer", "", "", "new System.Collections.Generic.List<int> { 1, 3 }[1]", true },
+        { "dictionary indexer", "", "", "new System.Collections.Generic.Dictionary<string, int> { [\"n\"] = 3 }[\"n\"]", true },
+        { "string indexer", "", "", "\"a3\"[1] - '0'", true },
+
+        // events
+        { "event of the design read as a value", "", "private event System.Action? Changed;", "Changed is null ? 3 : 0", false },
+
+        // methods
+        { "static method of the design", "", "private static int Three() => 3;", "Three()", true },
+        { "instance method of a user object", "public sealed class Plan { private readonly int n = 3; public int Stages() => n; }", "", "new Plan().Stages()", true },
+        { "virtual method overridden by the design",
+            "public abstract class Base : Design { protected virtual int N() => 1; }", "protected override int N() => 3;", "N()", true },
+        { "method called through an interface", "public interface IPlan { int Stages(); } public sealed class Plan : IPlan { public int Stages() => 3; }",
+            "", "((IPlan)new Plan()).Stages()", true },
+        { "extension method", "public static class Counting { public static int Triple(this int x) => 3 * x; }", "", "1.Triple()", true },
+        { "delegate of a lambda", "", "", "((System.Func<int>)(() => 3))()", true },
+        { "delegate of a method group", "", "private static int Three() => 3;", "new System.Func<int>(Three)()", true },
+        { "static method of a pure library type", "", "", "System.Math.Max(1, 3)", true },
+        { "instance method of a pure library type", "", "", "\"a,b,c\".Split(',').Length", true },
+        { "method of the DSL", "", "", "c.Input(\"n\").Name.Length + 2", true },
+        { "file system", "", "", "System.IO.File.Exists(\"stages.txt\") ? 3 : 3", false },
+        { "clock through a static method", "", "", "(int)(System.Diagnostics.Stopwatch.GetTimestamp() * 0) + 3", false },
+        { "randomness through a static method", "", "", "System.Guid.NewGuid().ToString().Length * 0 + 3", false },
+        { "reflection", "", "", "typeof(int).Name.Length * 0 + 3", false },
+        { "reflection through GetType", "", "", "GetType().Name.Length * 0 + 3", false },
+        { "environment read by a lambda of a lazy sequence a foreach runs", "", "",
+            "Sum(); int Sum() { var total = 0; foreach (var n in System.Linq.Enumerable.OrderBy(new[] { 3 }, x => System.Environment.ProcessorCount)) total += n; return total; }",
+            false },
+        { "network", "", "", "System.Net.Dns.GetHostName().Length * 0 + 3", false },
+        { "process", "", "", "System.Diagnostics.Process.GetCurrentProcess().Id * 0 + 3", false },
         { "clock of the machine", "", "", "System.DateTime.Now.Second * 0 + 3", false },
         { "environment", "", "", "System.Environment.ProcessorCount * 0 + 3", false },
         { "randomness", "", "", "new System.Random().Next(3, 4)", false },

@@ -89,4 +89,15 @@ internal static class ClrTypes
         return Type.GetType(name, throwOnError: false)
             ?? typeof(System.Collections.Generic.List<>).Assembly.GetType(name, throwOnError: false);
     }
+
+    /// <summary>Does a run-time member take exactly the parameter types of the method symbol?</summary>
+    public static bool ParametersMatch(ParameterInfo[] parameters, IMethodSymbol method)
+    {
+        if (parameters.Length != method.Parameters.Length)
+            return false;
+        for (var i = 0; i < parameters.Length; i++)
+            if (!ClrTypes.Matches(method.Parameters[i].Type, parameters[i].ParameterType))
+                return false;
+        return true;
+    }
 }

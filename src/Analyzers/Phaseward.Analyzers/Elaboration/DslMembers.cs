@@ -34,9 +34,9 @@ internal static class DslMembers
 
         var definition = method.IsGenericMethod ? method.OriginalDefinition : method;
         if (method.MethodKind == MethodKind.Constructor)
-            return containing.GetConstructors(All).FirstOrDefault(c => ParametersMatch(c.GetParameters(), definition));
+            return containing.GetConstructors(All).FirstOrDefault(c => ClrTypes.ParametersMatch(c.GetParameters(), definition));
 
-        var candidates = containing.GetMethods(All).Where(m => m.Name == method.MetadataName && ParametersMatch(m.GetParameters(), definition));
+        var candidates = containing.GetMethods(All).Where(m => m.Name == method.MetadataName && ClrTypes.ParametersMatch(m.GetParameters(), definition));
         var found = candidates.FirstOrDefault(m => m.GetGenericArguments().Length == method.TypeArguments.Length);
         if (found is null)
             return null;
@@ -47,13 +47,4 @@ internal static class DslMembers
         return arguments.Any(a => a is null) ? null : found.MakeGenericMethod(arguments!);
     }
 
-    private static bool ParametersMatch(ParameterInfo[] parameters, IMethodSymbol method)
-    {
-        if (parameters.Length != method.Parameters.Length)
-            return false;
-        for (var i = 0; i < parameters.Length; i++)
-            if (!ClrTypes.Matches(method.Parameters[i].Type, parameters[i].ParameterType))
-                return false;
-        return true;
-    }
 }

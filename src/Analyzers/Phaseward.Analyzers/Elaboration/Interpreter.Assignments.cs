@@ -7,9 +7,11 @@ using Microsoft.CodeAnalysis.Operations;
 
 namespace Phaseward.Analyzers.Elaboration;
 
+// Assignments: simple, compound, '??=', increments and deconstructions, each through the StoragePlace its target
+// denotes (a variable, an array or list slot, a property of the design or of a library or DSL object).
 internal sealed partial class Interpreter
 {
-    private object? Assign(ISimpleAssignmentOperation assignment, Frame frame)
+    private object? VisitSimpleAssignment(ISimpleAssignmentOperation assignment, Frame frame)
     {
         var place = PlaceOf(assignment.Target, frame);
         var value = CopyIfValue(Evaluate(assignment.Value, frame));
@@ -18,7 +20,7 @@ internal sealed partial class Interpreter
         return value;
     }
 
-    private object? CompoundAssign(ICompoundAssignmentOperation assignment, Frame frame)
+    private object? VisitCompoundAssignment(ICompoundAssignmentOperation assignment, Frame frame)
     {
         var place = PlaceOf(assignment.Target, frame);
         if (!place.IsKnown) return Unknown.Value;
@@ -39,7 +41,7 @@ internal sealed partial class Interpreter
         return result;
     }
 
-    private object? CoalesceAssign(ICoalesceAssignmentOperation assignment, Frame frame)
+    private object? VisitCoalesceAssignment(ICoalesceAssignmentOperation assignment, Frame frame)
     {
         var place = PlaceOf(assignment.Target, frame);
         if (!place.IsKnown) return Unknown.Value;
@@ -47,6 +49,17 @@ internal sealed partial class Interpreter
         if (current is not null) return current;
         var value = Evaluate(assignment.Value, frame);
         place.Set(value);
+        return value;
+    }
+
+    private object? VisitIncrement(IIncrementOrDecrementOperation increment, Frame frame) => IncrementOrDecrement(increment, frame);
+
+    private object? VisitDecrement(IIncrementOrDecrementOperation decrement, Frame frame) => IncrementOrDecrement(decrement, frame);
+
+    private object? VisitDeconstructionAssignment(IDeconstructionAssignmentOperation deconstruction, Frame frame)
+    {
+        var value = Evaluate(deconstruction.Value, frame);
+        Deconstruct(deconstruction.Target, value, frame);
         return value;
     }
 
@@ -66,20 +79,6 @@ internal sealed partial class Interpreter
             after = BinaryValue(operation, kind, before, 1, operation.Target.Type, operation.IsChecked);
         place.Set(after);
         return operation.IsPostfix ? before : after;
-    }
-
-    private object? BinaryValue(IOperation site, BinaryOperatorKind kind, object left, object right, ITypeSymbol type, bool isChecked)
-    {
-        try
-        {
-            return Arithmetic.Binary(kind, left, right, type, isChecked)
-                ?? Unsupported(site, "operator " + kind + " on " + type.ToDisplayString(), "it is outside the subset");
-        }
-        catch (ArithmeticException e)
-        {
-            Throws(site.Syntax, e.GetType().Name + ": " + e.Message);
-            return Unknown.Value;
-        }
     }
 
     /// <summary>Assigns the parts of a tuple value to the targets of a deconstruction (<c>var (a, b) = ...</c>).</summary>
@@ -132,15 +131,9 @@ internal sealed partial class Interpreter
                 var index = Evaluate(element.Indices[0], frame);
                 if (Unknown.Is(array) || Unknown.Is(index)) return default;
                 if (array is not object?[] items) break;
-                if (index is not (int or long or short or byte or sbyte or ushort or uint or ulong or char)) break; // broken code
-                var i = System.Convert.ToInt32(index, CultureInfo.InvariantCulture);
-                if (i < 0 || i >= items.Length)
-                {
-                    Throws(element.Syntax, $"IndexOutOfRangeException: index {i} is outside the bounds of an array of length {items.Length}");
-                    return default;
-                }
-
-                return new StoragePlace(() => items[i], v => items[i] = v);
+                if (!IsWholeNumber(index)) break; // broken code
+                var i = SlotIndex(element, index!, items);
+                return i < 0 ? default : new StoragePlace(() => items[i], v => items[i] = v);
 
             case IPropertyReferenceOperation property:
                 return PropertyPlace(property, frame);
@@ -160,14 +153,8 @@ internal sealed partial class Interpreter
         {
             var index = Evaluate(reference.Arguments[0].Value, frame);
             if (Unknown.Is(index)) return default;
-            var i = System.Convert.ToInt32(index, CultureInfo.InvariantCulture);
-            if (i < 0 || i >= list.Count)
-            {
-                Throws(reference.Syntax, $"ArgumentOutOfRangeException: index {i} is outside a list of {list.Count} elements");
-                return default;
-            }
-
-            return new StoragePlace(() => list[i], v => list[i] = v);
+            var i = SlotIndex(reference, index!, list);
+            return i < 0 ? default : new StoragePlace(() => list[i], v => list[i] = v);
         }
 
         if (receiver is InterpretedObject instance || (receiver is null && property.IsStatic && session.IsInSource(property)))

@@ -12,9 +12,12 @@ internal sealed partial class Interpreter
     // ---- reporting ----
 
     /// <summary>Reports PW9001 once for this site and returns <see cref="Unknown"/>.</summary>
-    public object Unsupported(IOperation operation, string what, string why)
+    public object Unsupported(IOperation operation, string what, string why) => Unsupported(operation.Syntax, what, why);
+
+    /// <summary>Reports PW9001 once for this site and returns <see cref="Unknown"/>.</summary>
+    public object Unsupported(SyntaxNode site, string what, string why)
     {
-        Report(RuleCatalog.NotElaborated.Id, operation.Syntax, what, why, DesignName);
+        Report(RuleCatalog.NotElaborated.Id, site, what, why, DesignName);
         return Unknown.Value;
     }
 

@@ -11,9 +11,11 @@ using Phaseward.Netlists;
 
 namespace Phaseward.Analyzers.Elaboration;
 
+// Calls: methods and local functions of the design interpreted in a new frame; the DSL and pure library members called
+// natively (CallClr) with the circuit told where the call was written; arguments in parameter order, ref/out included.
 internal sealed partial class Interpreter
 {
-    private object? Invoke(IInvocationOperation invocation, Frame frame)
+    private object? VisitInvocation(IInvocationOperation invocation, Frame frame)
     {
         Step(invocation);
         var method = invocation.TargetMethod;
@@ -154,26 +156,6 @@ internal sealed partial class Interpreter
         return span;
     }
 
-    private object? CallOperator(IOperation site, IMethodSymbol method, object?[] operands, Frame frame)
-    {
-        if (operands.Any(Unknown.Is)) return Unknown.Value;
-        Step(site);
-        if (method.IsImplicitlyDeclared && operands.Length == 2 && operands[0] is InterpretedObject { Type.IsRecord: true } record
-            && method.Name is "op_Equality" or "op_Inequality")
-        {
-            var equal = AreEqualOrUnknown(record, operands[1]);
-            return equal is null ? Unknown.Value : method.Name == "op_Equality" ? equal.Value : !equal.Value;
-        }
-
-        if (session.IsInSource(method))
-            return InvokeUser(method, null, operands, new Variable?[operands.Length], site, frame);
-        if (Library.IsPure(method))
-            return CallClr(site, method, null, operands);
-        if (ClrTypes.IsDsl(method))
-            return CallClr(site, method, null, operands);
-        return Unsupported(site, "operator " + Describe(method), "only operators of the Phaseward DSL and of this compilation are elaborated");
-    }
-
     /// <summary>
     /// Evaluates arguments into parameter order. Returns null values when an argument is unknown (the call is then skipped
     /// without a report: the unknown value was reported where it arose).
@@ -290,190 +272,35 @@ internal sealed partial class Interpreter
         };
     }
 
-    private static IMethodSymbol? FindOverride(INamedTypeSymbol type, IMethodSymbol method)
-    {
-        for (var current = type; current is not null; current = current.BaseType)
-            foreach (var member in current.GetMembers(method.Name))
-                if (member is IMethodSymbol candidate)
-                    for (var m = candidate; m is not null; m = m.OverriddenMethod)
-                        if (SymbolEqualityComparer.Default.Equals(m.OriginalDefinition, method.OriginalDefinition))
-                            return candidate;
-        return null;
-    }
-
-    private static IPropertySymbol? FindOverride(INamedTypeSymbol type, IPropertySymbol property)
-    {
-        for (var current = type; current is not null; current = current.BaseType)
-            foreach (var member in current.GetMembers(property.Name))
-                if (member is IPropertySymbol candidate)
-                    for (var p = candidate; p is not null; p = p.OverriddenProperty)
-                        if (SymbolEqualityComparer.Default.Equals(p.OriginalDefinition, property.OriginalDefinition))
-                            return candidate;
-        return null;
-    }
-
-    private object? ReadProperty(IPropertyReferenceOperation reference, Frame frame)
-    {
-        var property = reference.Property;
-        var receiver = reference.Instance is null ? null : Evaluate(reference.Instance, frame);
-        if (Unknown.Is(receiver)) return receiver;
-
-        switch (receiver)
-        {
-            case object?[] array when property.Name == "Length":
-                return array.Length;
-            case List<object?> list when property.Name == "Count":
-                return list.Count;
-            case List<object?> list when property.IsIndexer:
-                var index = Evaluate(reference.Arguments[0].Value, frame);
-                if (Unknown.Is(index)) return index;
-                var i = System.Convert.ToInt32(index, System.Globalization.CultureInfo.InvariantCulture);
-                if (i >= 0 && i < list.Count) return list[i];
-                Throws(reference.Syntax, $"ArgumentOutOfRangeException: index {i} is outside a list of {list.Count} elements");
-                return Unknown.Value;
-            case string text when property.Name == "Length":
-                return text.Length;
-            case InterpretedObject instance:
-                return ReadDesignProperty(reference, instance, frame);
-        }
-
-        if (session.IsInSource(property))
-        {
-            if (property.IsStatic)
-                return IsAutoProperty(property) ? StaticVariable(property, frame).Value : CallGetter(reference, property, null, frame);
-            return Unsupported(reference, "property " + Describe(property), "only properties of the design and static properties are elaborated");
-        }
-
-        if (!ClrTypes.IsDsl(property) && Library.IsPure(property))
-            return ReadLibraryProperty(reference, property, receiver, frame);
-
-        if (!ClrTypes.IsDsl(property) || property.GetMethod is not { } getter)
-            return Unsupported(reference, "property " + Describe(property),
-                "it is outside what compile-time elaboration reads (only the Phaseward DSL, members of this compilation and pure library members)");
-
-        var (arguments, _) = Arguments(reference.Arguments, getter, frame);
-        return arguments is null ? Unknown.Value : CallClr(reference, getter, receiver, arguments);
-    }
-
-    private object? ReadDesignProperty(IPropertyReferenceOperation reference, InterpretedObject instance, Frame frame)
-    {
-        var property = reference.Property;
-        if (FindOverride(instance.Type, property) is { } overriding)
-            property = overriding;
-        if (ClrTypes.IsDsl(property))
-            return property.Name == nameof(Design.Name)
-                ? DesignName
-                : Unsupported(reference, "property " + Describe(property), "the design's inherited Phaseward members are not read at compile time");
-        if (!session.IsInSource(property))
-            return Unsupported(reference, "property " + Describe(property), "it is not declared in this compilation");
-        if (IsAutoProperty(property))
-            return instance.Find(property) is { } stored
-                ? stored.Value
-                : Unsupported(reference, "property " + Describe(property), "it was not initialized by the elaborator");
-        return CallGetter(reference, property, instance, frame);
-    }
-
-    private object? CallGetter(IPropertyReferenceOperation reference, IPropertySymbol property, InterpretedObject? instance, Frame frame)
-    {
-        if (property.GetMethod is not { } getter)
-            return Unsupported(reference, "property " + Describe(property), "it has no getter");
-        Step(reference);
-        var (arguments, references) = Arguments(reference.Arguments, getter, frame);
-        return arguments is null ? Unknown.Value : InvokeUser(getter, instance, arguments, references, reference, frame);
-    }
-
-    /// <summary>A property that stores its value (auto-property, or a record's positional property).</summary>
-    private static bool IsAutoProperty(IPropertySymbol property)
-        => property.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax() switch
-        {
-            PropertyDeclarationSyntax { ExpressionBody: null, AccessorList: { } accessors } => accessors.Accessors.All(a => a.Body is null && a.ExpressionBody is null),
-            ParameterSyntax => true,
-            _ => false,
-        };
-
-    /// <summary>The property a record's positional parameter declares (null when the record declares its own).</summary>
-    private static IPropertySymbol? PositionalProperty(INamedTypeSymbol record, IParameterSymbol parameter)
-        => record.GetMembers(parameter.Name).OfType<IPropertySymbol>()
-            .FirstOrDefault(p => p.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax() is ParameterSyntax);
-
     /// <summary>
-    /// A static field or auto-property of this compilation. The first use of any static member of a type runs the type's
-    /// static initialization the way C# does: every static field and auto-property initializer in declaration order,
-    /// then the static constructor's body; values it assigns are never read as defaults.
+    /// The member that runs for <paramref name="member"/> (a method or property) on an object of <paramref name="type"/>:
+    /// the nearest override, or for an interface member the type's implementation (itself perhaps overridden).
     /// </summary>
-    private Variable StaticVariable(ISymbol member, Frame frame)
+    private static T? FindOverride<T>(INamedTypeSymbol type, T member)
+        where T : class, ISymbol
     {
-        var key = member.OriginalDefinition;
-        if (statics.TryGetValue(key, out var variable))
-            return variable;
-        if (member.ContainingType is { } type)
-            InitializeStatics(type.OriginalDefinition);
-        if (!statics.TryGetValue(key, out variable))
-            statics[key] = variable = new Variable(DefaultOf(member is IFieldSymbol f ? f.Type : ((IPropertySymbol)member).Type));
-        return variable;
-    }
-
-    private void InitializeStatics(INamedTypeSymbol type)
-    {
-        if (!initializedTypes.Add(type))
-            return;
-        var storage = new List<(ISymbol Member, Variable Variable)>();
-        foreach (var member in type.GetMembers())
+        if (member.ContainingType?.TypeKind == TypeKind.Interface)
         {
-            ISymbol? stored = member switch
-            {
-                IFieldSymbol { IsStatic: true, IsConst: false, AssociatedSymbol: null } field => field,
-                IPropertySymbol { IsStatic: true } property when IsAutoProperty(property) => property,
-                _ => null,
-            };
-            if (stored is null)
-                continue;
-            var variable = new Variable(DefaultOf(stored is IFieldSymbol f ? f.Type : ((IPropertySymbol)stored).Type));
-            statics[stored.OriginalDefinition] = variable;
-            storage.Add((stored, variable));
+            if (type.FindImplementationForInterfaceMember(member) is not T implementation)
+                return null;
+            member = implementation;
         }
 
-        var frame = new Frame(null, null, null);
-        foreach (var (member, variable) in storage)
-            if (InitializerOf(member) is { } initializer)
-                variable.Value = Evaluate(initializer, frame);
-
-        foreach (var constructor in type.StaticConstructors)
-        {
-            var syntax = constructor.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken);
-            if (syntax is not ConstructorDeclarationSyntax declaration)
-                continue;
-            if (ModelOf(declaration).GetOperation(declaration, cancellationToken) is not IConstructorBodyOperation body)
-            {
-                Report(RuleCatalog.NotElaborated.Id, declaration, "the static constructor of " + Describe(type), "its body could not be read", DesignName);
-                continue;
-            }
-
-            var statements = (IOperation?)body.BlockBody ?? body.ExpressionBody;
-            if (statements is not null)
-                Execute(statements, new Frame(constructor, null, null));
-        }
+        for (var current = type; current is not null; current = current.BaseType)
+            foreach (var candidate in current.GetMembers(member.Name))
+                if (candidate is T overriding)
+                    for (ISymbol? m = overriding; m is not null; m = Overridden(m))
+                        if (SymbolEqualityComparer.Default.Equals(m.OriginalDefinition, member.OriginalDefinition))
+                            return overriding;
+        return null;
     }
 
-    /// <summary>The value operation of a field's or property's initializer (<c>= value</c>), if it has one.</summary>
-    private IOperation? InitializerOf(ISymbol member)
+    private static ISymbol? Overridden(ISymbol member) => member switch
     {
-        var syntax = member.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken);
-        EqualsValueClauseSyntax? clause = syntax switch
-        {
-            VariableDeclaratorSyntax declarator => declarator.Initializer,
-            PropertyDeclarationSyntax property => property.Initializer,
-            _ => null,
-        };
-        if (clause is null)
-            return null;
-        return ModelOf(clause).GetOperation(clause, cancellationToken) switch
-        {
-            IFieldInitializerOperation field => field.Value,
-            IPropertyInitializerOperation property => property.Value,
-            _ => null,
-        };
-    }
+        IMethodSymbol method => method.OverriddenMethod,
+        IPropertySymbol property => property.OverriddenProperty,
+        _ => null,
+    };
 
     /// <summary>The variable an operation denotes (for ref/out arguments), declaring 'out var' locals.</summary>
     private Variable? VariableOf(IOperation operation, Frame frame)

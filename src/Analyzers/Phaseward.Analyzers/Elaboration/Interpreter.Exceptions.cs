@@ -6,43 +6,11 @@ using Microsoft.CodeAnalysis.Operations;
 
 namespace Phaseward.Analyzers.Elaboration;
 
-// Exceptions the design throws and catches itself (try/catch/finally, throw, using), blocks with 'using var', and
-// iterators. An exception inside a try is a DesignException carried to the design's catch clauses; one that no clause
+// Exceptions the design throws and catches itself (try/catch/finally, throw) and resources it disposes (using
+// statements and declarations). An exception inside a try is a DesignException carried to the design's catch clauses; one that no clause
 // catches is PW9003 at the throw, as an exception outside any try is.
 internal sealed partial class Interpreter
 {
-    private Completion Block(IBlockOperation block, Frame frame)
-    {
-        var hasUsing = false;
-        foreach (var inner in block.Operations)
-            hasUsing |= inner is IUsingDeclarationOperation;
-        if (hasUsing)
-            usingScopes.Push(new List<object?>());
-        var disposed = false;
-        try
-        {
-            foreach (var inner in block.Operations)
-            {
-                var completion = Execute(inner, frame);
-                if (completion != Completion.Normal)
-                    return completion;
-            }
-
-            return Completion.Normal;
-        }
-        catch (DesignException) when (hasUsing)
-        {
-            disposed = true;
-            DisposeAll(usingScopes.Pop(), block);
-            throw;
-        }
-        finally
-        {
-            if (hasUsing && !disposed && usingScopes.Count > 0)
-                DisposeAll(usingScopes.Pop(), block);
-        }
-    }
-
     private object? VisitThrow(IThrowOperation thrown, Frame frame)
     {
         var value = thrown.Exception is null ? (caught.Count > 0 ? caught.Peek() : null) : Evaluate(thrown.Exception, frame);
@@ -54,7 +22,7 @@ internal sealed partial class Interpreter
         throw new ElaborationStopped();
     }
 
-    private Completion Try(ITryOperation statement, Frame frame)
+    private Completion VisitTry(ITryOperation statement, Frame frame)
     {
         var completion = Completion.Normal;
         DesignException? uncaught = null;
@@ -123,7 +91,7 @@ internal sealed partial class Interpreter
         return clause.Filter is null || Condition(clause.Filter, frame) == true;
     }
 
-    private Completion Using(IUsingOperation statement, Frame frame)
+    private Completion VisitUsing(IUsingOperation statement, Frame frame)
     {
         var resources = new List<object?>();
         switch (statement.Resources)
@@ -148,7 +116,7 @@ internal sealed partial class Interpreter
         }
     }
 
-    private Completion UsingDeclaration(IUsingDeclarationOperation statement, Frame frame)
+    private Completion VisitUsingDeclaration(IUsingDeclarationOperation statement, Frame frame)
     {
         Execute(statement.DeclarationGroup, frame);
         if (usingScopes.Count > 0)
@@ -172,24 +140,6 @@ internal sealed partial class Interpreter
         }
     }
 
-    private Completion YieldReturn(IReturnOperation yielded, Frame frame)
-    {
-        Step(yielded);
-        var value = yielded.ReturnedValue is null ? null : CopyIfValue(Evaluate(yielded.ReturnedValue, frame));
-        var owner = frame;
-        while (owner.Yielded is null && owner.LexicalParent is not null)
-            owner = owner.LexicalParent;
-        if (owner.Yielded is null)
-        {
-            Unsupported(yielded, "this yield return", "its iterator is not running");
-            return Completion.Return;
-        }
-
-        owner.Yielded.Add(value);
-        ChargeMemory(yielded, 8);
-        return Completion.Normal;
-    }
-
     /// <summary>A .NET exception for a message "TypeName: text" (as the interpreter words what a run would throw).</summary>
     private static Exception ExceptionNamed(string message)
     {
@@ -205,5 +155,18 @@ internal sealed partial class Interpreter
         }
 
         return new InvalidOperationException(message);
+    }
+
+    private static string DescribeThrow(IThrowOperation thrown, object? value)
+    {
+        if (value is Exception exception)
+        {
+            // The message as written (ArgumentException's Message adds the parameter name).
+            var creation = thrown.Exception is IConversionOperation { Operand: IObjectCreationOperation c } ? c : thrown.Exception as IObjectCreationOperation;
+            var written = creation?.Arguments.FirstOrDefault(a => a.Parameter?.Name == "message")?.Value.ConstantValue;
+            return exception.GetType().Name + ": " + (written is { HasValue: true, Value: string text } ? text : exception.Message);
+        }
+
+        return value is InterpretedObject instance ? instance.Type.Name : "the design's code throws an exception";
     }
 }

@@ -8,8 +8,8 @@ using Microsoft.CodeAnalysis.Operations;
 namespace Phaseward.Analyzers.Elaboration;
 
 // What objects of the design's own types mean: ToString, Equals and GetHashCode (the design's overrides interpreted,
-// or the members C# generates for records and structs), struct copies, record 'with', and the members a user type
-// inherits from object.
+// or the members C# generates for records and structs), struct copies, record deconstruction, and the members a user
+// type inherits from object.
 internal sealed partial class Interpreter : IObjectSemantics
 {
     public string TextOf(InterpretedObject value)
@@ -94,29 +94,6 @@ internal sealed partial class Interpreter : IObjectSemantics
         return Unsupported(invocation, "the call to " + Describe(method), ClrTypes.IsDsl(method)
             ? "the design's inherited Phaseward members are not called at compile time"
             : "it is not declared in this compilation");
-    }
-
-    /// <summary><c>value with { P = ... }</c>: a copy, then the initializer on the copy.</summary>
-    private object? VisitWith(IWithOperation with, Frame frame)
-    {
-        var original = Evaluate(with.Operand, frame);
-        if (Unknown.Is(original)) return original;
-        if (original is not InterpretedObject source)
-            return Unsupported(with, "this 'with' expression", "only records and structs of this compilation are copied with 'with'");
-        var copy = source.Copy();
-        implicitReceivers.Push(copy);
-        try
-        {
-            foreach (var initializer in with.Initializer.Initializers)
-                if (Unknown.Is(Evaluate(initializer, frame)))
-                    return Unknown.Value;
-        }
-        finally
-        {
-            implicitReceivers.Pop();
-        }
-
-        return copy;
     }
 
     /// <summary>The parts a deconstruction takes from a value that is not a tuple: a KeyValuePair, a record's positional values.</summary>

@@ -5,66 +5,92 @@ using Microsoft.CodeAnalysis.Operations;
 
 namespace Phaseward.Analyzers.Elaboration;
 
+// Patterns: Match pushes the value being matched (PatternInput) and dispatches the pattern; each pattern's visit gives
+// true, false, or null when whether it matches cannot be known.
 internal sealed partial class Interpreter
 {
+    // Boxed once: a pattern's visit gives true, false or null (cannot be known) through the dispatch's object?.
+    private static readonly object MatchedTrue = true;
+    private static readonly object MatchedFalse = false;
+
+    private static object? Matched(bool? result) => result is null ? null : result.Value ? MatchedTrue : MatchedFalse;
+
+    /// <summary>The value the pattern being visited is matched against.</summary>
+    private object? PatternInput => patternInputs.Peek();
+
     /// <summary>Does the value match the pattern? Null when that cannot be known.</summary>
     private bool? Match(IPatternOperation pattern, object? value, Frame frame)
     {
-        switch (pattern)
+        patternInputs.Push(value);
+        try
         {
-            case IConstantPatternOperation constant:
-                var expected = Evaluate(constant.Value, frame);
-                return Unknown.Is(expected) ? null : Equal(value, expected);
-
-            case IRelationalPatternOperation relational:
-                var bound = Evaluate(relational.Value, frame);
-                if (Unknown.Is(bound) || value is null || bound is null || !IsComparable(value) || !IsComparable(bound)) return null;
-                var a = System.Convert.ToDouble(value, CultureInfo.InvariantCulture);
-                var b = System.Convert.ToDouble(bound, CultureInfo.InvariantCulture);
-                return relational.OperatorKind switch
-                {
-                    BinaryOperatorKind.LessThan => a < b,
-                    BinaryOperatorKind.LessThanOrEqual => a <= b,
-                    BinaryOperatorKind.GreaterThan => a > b,
-                    BinaryOperatorKind.GreaterThanOrEqual => a >= b,
-                    _ => null,
-                };
-
-            case IDiscardPatternOperation:
-                return true;
-
-            case IDeclarationPatternOperation declaration:
-                bool? matches = declaration.MatchesNull ? true
-                    : declaration.MatchedType is { } declared && !SymbolEqualityComparer.Default.Equals(declared, declaration.InputType) ? IsOfType(value, declared)
-                    : value is not null;
-                if (matches == true && declaration.DeclaredSymbol is { } symbol)
-                    frame.Declare(symbol, value);
-                return matches;
-
-            case ITypePatternOperation typePattern:
-                return IsOfType(value, typePattern.MatchedType);
-
-            case IRecursivePatternOperation recursive:
-                return MatchRecursive(recursive, value, frame);
-
-            case IListPatternOperation list:
-                return MatchList(list, value, frame);
-
-            case INegatedPatternOperation negated:
-                return Match(negated.Pattern, value, frame) is { } inner ? !inner : null;
-
-            case IBinaryPatternOperation binary:
-                var left = Match(binary.LeftPattern, value, frame);
-                if (binary.OperatorKind == BinaryOperatorKind.Or && left == true) return true;
-                if (binary.OperatorKind == BinaryOperatorKind.And && left == false) return false;
-                var right = Match(binary.RightPattern, value, frame);
-                return left is null || right is null ? null : binary.OperatorKind == BinaryOperatorKind.Or ? left.Value || right.Value : left.Value && right.Value;
-
-            default:
-                Unsupported(pattern, "this pattern", "the elaborator matches constant, relational, declaration, discard, 'not', 'and' and 'or' patterns");
-                return null;
+            return Visit(pattern, frame) is bool matched ? matched : null;
+        }
+        finally
+        {
+            patternInputs.Pop();
         }
     }
+
+    private object? VisitIsPattern(IIsPatternOperation isPattern, Frame frame)
+    {
+        var subject = Evaluate(isPattern.Value, frame);
+        return Unknown.Is(subject) ? subject : Matched(Match(isPattern.Pattern, subject, frame))
+            ?? Unsupported(isPattern.Pattern, "this pattern", "whether the value matches it cannot be decided at compile time");
+    }
+
+    private object? VisitConstantPattern(IConstantPatternOperation constant, Frame frame)
+    {
+        var expected = Evaluate(constant.Value, frame);
+        return Unknown.Is(expected) ? null : Matched(Equal(PatternInput, expected));
+    }
+
+    private object? VisitRelationalPattern(IRelationalPatternOperation relational, Frame frame)
+    {
+        var value = PatternInput;
+        var bound = Evaluate(relational.Value, frame);
+        if (Unknown.Is(bound) || value is null || bound is null || !IsComparable(value) || !IsComparable(bound)) return null;
+        var a = System.Convert.ToDouble(value, CultureInfo.InvariantCulture);
+        var b = System.Convert.ToDouble(bound, CultureInfo.InvariantCulture);
+        return Matched(relational.OperatorKind switch
+        {
+            BinaryOperatorKind.LessThan => a < b,
+            BinaryOperatorKind.LessThanOrEqual => a <= b,
+            BinaryOperatorKind.GreaterThan => a > b,
+            BinaryOperatorKind.GreaterThanOrEqual => a >= b,
+            _ => null,
+        });
+    }
+
+    private object? VisitDiscardPattern(IDiscardPatternOperation discard, Frame frame) => MatchedTrue;
+
+    private object? VisitDeclarationPattern(IDeclarationPatternOperation declaration, Frame frame)
+    {
+        var value = PatternInput;
+        bool? matches = declaration.MatchesNull ? true
+            : declaration.MatchedType is { } declared && !SymbolEqualityComparer.Default.Equals(declared, declaration.InputType) ? IsOfType(value, declared)
+            : value is not null;
+        if (matches == true && declaration.DeclaredSymbol is { } symbol)
+            frame.Declare(symbol, value);
+        return Matched(matches);
+    }
+
+    private object? VisitTypePattern(ITypePatternOperation typePattern, Frame frame) => Matched(IsOfType(PatternInput, typePattern.MatchedType));
+
+    private object? VisitNegatedPattern(INegatedPatternOperation negated, Frame frame)
+        => Matched(Match(negated.Pattern, PatternInput, frame) is { } inner ? !inner : null);
+
+    private object? VisitBinaryPattern(IBinaryPatternOperation binary, Frame frame)
+    {
+        var value = PatternInput;
+        var left = Match(binary.LeftPattern, value, frame);
+        if (binary.OperatorKind == BinaryOperatorKind.Or && left == true) return MatchedTrue;
+        if (binary.OperatorKind == BinaryOperatorKind.And && left == false) return MatchedFalse;
+        var right = Match(binary.RightPattern, value, frame);
+        return left is null || right is null ? null : Matched(binary.OperatorKind == BinaryOperatorKind.Or ? left.Value || right.Value : left.Value && right.Value);
+    }
+
+    private object? VisitRecursivePattern(IRecursivePatternOperation pattern, Frame frame) => Matched(MatchRecursive(pattern, PatternInput, frame));
 
     private bool? MatchRecursive(IRecursivePatternOperation pattern, object? value, Frame frame)
     {
@@ -84,17 +110,8 @@ internal sealed partial class Interpreter
 
         foreach (var property in pattern.PropertySubpatterns)
         {
-            patternInputs.Push(value);
-            object? member;
-            try
-            {
-                member = Evaluate(property.Member, frame);
-            }
-            finally
-            {
-                patternInputs.Pop();
-            }
-
+            // The member is read from the pattern's input (PatternInput, on top of patternInputs while this pattern is matched).
+            var member = Evaluate(property.Member, frame);
             if (Unknown.Is(member)) return null;
             if (Match(property.Pattern, member, frame) is not true and var result)
                 return result;
@@ -104,6 +121,8 @@ internal sealed partial class Interpreter
             frame.Declare(symbol, value);
         return true;
     }
+
+    private object? VisitListPattern(IListPatternOperation pattern, Frame frame) => Matched(MatchList(pattern, PatternInput, frame));
 
     private bool? MatchList(IListPatternOperation pattern, object? value, Frame frame)
     {

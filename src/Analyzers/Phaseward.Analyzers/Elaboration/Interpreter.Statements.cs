@@ -7,98 +7,49 @@ using Phaseward.Netlists;
 
 namespace Phaseward.Analyzers.Elaboration;
 
+// Statements other than loops and exception handling: blocks (disposing their 'using var' resources), declarations,
+// return and 'yield' (iterators run to completion, their values kept in a list), break/continue, switch. Code skipped
+// because its condition is unknown has what it assigns made unknown (Poison).
 internal sealed partial class Interpreter
 {
-    public Completion Execute(IOperation statement, Frame frame)
+    private Completion VisitVariableDeclarationGroup(IVariableDeclarationGroupOperation group, Frame frame)
     {
-        Current = statement;
-        switch (statement)
-        {
-            case IBlockOperation block:
-                return Block(block, frame);
+        foreach (var declaration in group.Declarations)
+            foreach (var declarator in declaration.Declarators)
+            {
+                var initializer = declarator.Initializer ?? declaration.Initializer;
+                frame.Declare(declarator.Symbol, initializer is null ? DefaultOf(declarator.Symbol.Type) : CopyIfValue(Evaluate(initializer.Value, frame)));
+            }
 
-            case IVariableDeclarationGroupOperation group:
-                foreach (var declaration in group.Declarations)
-                    foreach (var declarator in declaration.Declarators)
-                    {
-                        var initializer = declarator.Initializer ?? declaration.Initializer;
-                        frame.Declare(declarator.Symbol, initializer is null ? DefaultOf(declarator.Symbol.Type) : CopyIfValue(Evaluate(initializer.Value, frame)));
-                    }
-
-                return Completion.Normal;
-
-            case IExpressionStatementOperation expression:
-                Evaluate(expression.Operation, frame);
-                return Completion.Normal;
-
-            case IReturnOperation { Kind: OperationKind.Return } ret:
-                frame.ReturnValue = ret.ReturnedValue is null ? null : CopyIfValue(Evaluate(ret.ReturnedValue, frame));
-                return Completion.Return;
-
-            case IReturnOperation { Kind: OperationKind.YieldReturn } yielded:
-                return YieldReturn(yielded, frame);
-
-            case IReturnOperation { Kind: OperationKind.YieldBreak }:
-                return Completion.Return;
-
-            case ITryOperation tryStatement:
-                return Try(tryStatement, frame);
-
-            case IUsingOperation usingStatement:
-                return Using(usingStatement, frame);
-
-            case IUsingDeclarationOperation usingDeclaration:
-                return UsingDeclaration(usingDeclaration, frame);
-
-            case IConditionalOperation conditional:
-                switch (Condition(conditional.Condition, frame))
-                {
-                    case true:
-                        return Execute(conditional.WhenTrue, frame);
-                    case false:
-                        return conditional.WhenFalse is null ? Completion.Normal : Execute(conditional.WhenFalse, frame);
-                    default:
-                        Poison(conditional.WhenTrue, frame);
-                        if (conditional.WhenFalse is not null) Poison(conditional.WhenFalse, frame);
-                        return Completion.Normal;
-                }
-
-            case IWhileLoopOperation loop:
-                return While(loop, frame);
-
-            case IForLoopOperation loop:
-                return For(loop, frame);
-
-            case IForEachLoopOperation loop:
-                return ForEach(loop, frame);
-
-            case IBranchOperation { BranchKind: BranchKind.Break }:
-                return Completion.Break;
-
-            case IBranchOperation { BranchKind: BranchKind.Continue }:
-                return Completion.Continue;
-
-            case ISwitchOperation switchStatement:
-                return Switch(switchStatement, frame);
-
-            case IThrowOperation thrown:
-                VisitThrow(thrown, frame);
-                return Completion.Normal;
-
-            case IEmptyOperation:
-            case ILocalFunctionOperation:
-                return Completion.Normal;
-
-            case IInvalidOperation:
-                Poison(statement, frame);
-                return Completion.Normal;
-
-            default:
-                Unsupported(statement, StatementName(statement), "this kind of statement is outside the subset the elaborator interprets");
-                Poison(statement, frame);
-                return Completion.Normal;
-        }
+        return Completion.Normal;
     }
+
+    private Completion VisitExpressionStatement(IExpressionStatementOperation statement, Frame frame)
+    {
+        Evaluate(statement.Operation, frame);
+        return Completion.Normal;
+    }
+
+    private Completion VisitReturn(IReturnOperation ret, Frame frame)
+    {
+        frame.ReturnValue = ret.ReturnedValue is null ? null : CopyIfValue(Evaluate(ret.ReturnedValue, frame));
+        return Completion.Return;
+    }
+
+    private Completion VisitYieldBreak(IReturnOperation yieldBreak, Frame frame) => Completion.Return;
+
+    /// <summary><c>break</c> and <c>continue</c>; <c>goto</c> is not interpreted.</summary>
+    private object? VisitBranch(IBranchOperation branch, Frame frame) => branch.BranchKind switch
+    {
+        BranchKind.Break => Completion.Break,
+        BranchKind.Continue => Completion.Continue,
+        _ => NotInterpreted(branch, frame),
+    };
+
+    private Completion VisitEmpty(IEmptyOperation empty, Frame frame) => Completion.Normal;
+
+    // A local function is called where it is used (see InvokeUser); its declaration does nothing.
+    private Completion VisitLocalFunction(ILocalFunctionOperation localFunction, Frame frame) => Completion.Normal;
 
     /// <summary>Evaluates a condition: true, false, or null when it is unknown.</summary>
     private bool? Condition(IOperation? condition, Frame frame)
@@ -109,138 +60,7 @@ internal sealed partial class Interpreter
         return value is bool b ? b : null;
     }
 
-    private Completion While(IWhileLoopOperation loop, Frame frame)
-    {
-        loops.Push(loop);
-        try
-        {
-            var first = true;
-            while (true)
-            {
-                Step(loop);
-                if (loop.ConditionIsTop || !first)
-                {
-                    var condition = Condition(loop.Condition, frame);
-                    if (condition is null)
-                    {
-                        Poison(loop.Body, frame);
-                        return Completion.Normal;
-                    }
-
-                    if (condition.Value == loop.ConditionIsUntil)
-                        return Completion.Normal;
-                }
-
-                first = false;
-                var completion = Execute(loop.Body, frame);
-                if (completion == Completion.Break)
-                    return Completion.Normal;
-                if (completion == Completion.Return)
-                    return completion;
-            }
-        }
-        finally
-        {
-            loops.Pop();
-        }
-    }
-
-    private Completion For(IForLoopOperation loop, Frame frame)
-    {
-        foreach (var before in loop.Before)
-            Execute(before, frame);
-        loops.Push(loop);
-        try
-        {
-            while (true)
-            {
-                Step(loop);
-                var condition = Condition(loop.Condition, frame);
-                if (condition is null)
-                {
-                    Poison(loop.Body, frame);
-                    foreach (var bottom in loop.AtLoopBottom) Poison(bottom, frame);
-                    return Completion.Normal;
-                }
-
-                if (!condition.Value)
-                    return Completion.Normal;
-                var completion = Execute(loop.Body, frame);
-                if (completion == Completion.Break)
-                    return Completion.Normal;
-                if (completion == Completion.Return)
-                    return completion;
-                foreach (var bottom in loop.AtLoopBottom)
-                    Execute(bottom, frame);
-            }
-        }
-        finally
-        {
-            loops.Pop();
-        }
-    }
-
-    private Completion ForEach(IForEachLoopOperation loop, Frame frame)
-    {
-        var collection = Evaluate(StripConversions(loop.Collection), frame);
-        if (Unknown.Is(collection))
-        {
-            Poison(loop.Body, frame);
-            return Completion.Normal;
-        }
-
-        IEnumerable? items = collection switch
-        {
-            object?[] array => array,
-            List<object?> list => list.ToArray(),
-            string text => text,
-            InterpretedObject => null,
-            IEnumerable enumerable => enumerable,
-            _ => null,
-        };
-        if (items is null)
-        {
-            Unsupported(loop.Collection, "this foreach collection", "only arrays, strings, the library's collections and sequences, and iterators are enumerated");
-            Poison(loop.Body, frame);
-            return Completion.Normal;
-        }
-
-        var variableType = (loop.LoopControlVariable as IVariableDeclaratorOperation)?.Symbol.Type;
-        loops.Push(loop);
-        try
-        {
-            foreach (var raw in items)
-            {
-                Step(loop);
-                var item = FromClr(raw);
-                if (variableType is not null && item is not null && !Unknown.Is(item) && IsNumeric(variableType) && IsNumericValue(item))
-                    item = Arithmetic.ConvertNumber(item, variableType.SpecialType, isChecked: false) ?? item;
-                switch (loop.LoopControlVariable)
-                {
-                    case IVariableDeclaratorOperation declarator:
-                        frame.Declare(declarator.Symbol, item);
-                        break;
-                    default:
-                        Deconstruct(loop.LoopControlVariable, item, frame);
-                        break;
-                }
-
-                var completion = Execute(loop.Body, frame);
-                if (completion == Completion.Break)
-                    return Completion.Normal;
-                if (completion == Completion.Return)
-                    return completion;
-            }
-
-            return Completion.Normal;
-        }
-        finally
-        {
-            loops.Pop();
-        }
-    }
-
-    private Completion Switch(ISwitchOperation switchStatement, Frame frame)
+    private Completion VisitSwitch(ISwitchOperation switchStatement, Frame frame)
     {
         var value = Evaluate(switchStatement.Value, frame);
         if (Unknown.Is(value))
@@ -337,21 +157,53 @@ internal sealed partial class Interpreter
         }
     }
 
-    private static IOperation StripConversions(IOperation operation)
+    private Completion VisitBlock(IBlockOperation block, Frame frame)
     {
-        while (operation is IConversionOperation { IsImplicit: true } conversion)
-            operation = conversion.Operand;
-        return operation;
+        var hasUsing = false;
+        foreach (var inner in block.Operations)
+            hasUsing |= inner is IUsingDeclarationOperation;
+        if (hasUsing)
+            usingScopes.Push(new List<object?>());
+        var disposed = false;
+        try
+        {
+            foreach (var inner in block.Operations)
+            {
+                var completion = Execute(inner, frame);
+                if (completion != Completion.Normal)
+                    return completion;
+            }
+
+            return Completion.Normal;
+        }
+        catch (DesignException) when (hasUsing)
+        {
+            disposed = true;
+            DisposeAll(usingScopes.Pop(), block);
+            throw;
+        }
+        finally
+        {
+            if (hasUsing && !disposed && usingScopes.Count > 0)
+                DisposeAll(usingScopes.Pop(), block);
+        }
     }
 
-    private static string StatementName(IOperation statement) => statement switch
+    private Completion VisitYieldReturn(IReturnOperation yielded, Frame frame)
     {
-        ITryOperation => "a try statement",
-        IUsingOperation => "a using statement",
-        ILockOperation => "a lock statement",
-        IBranchOperation => "a goto statement",
-        ILabeledOperation => "a labeled statement",
-        IReturnOperation => "a yield statement",
-        _ => "this statement",
-    };
+        Step(yielded);
+        var value = yielded.ReturnedValue is null ? null : CopyIfValue(Evaluate(yielded.ReturnedValue, frame));
+        var owner = frame;
+        while (owner.Yielded is null && owner.LexicalParent is not null)
+            owner = owner.LexicalParent;
+        if (owner.Yielded is null)
+        {
+            Unsupported(yielded, "this yield return", "its iterator is not running");
+            return Completion.Return;
+        }
+
+        owner.Yielded.Add(value);
+        ChargeMemory(yielded, 8);
+        return Completion.Normal;
+    }
 }

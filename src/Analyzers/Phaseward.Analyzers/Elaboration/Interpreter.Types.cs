@@ -4,25 +4,9 @@ using Microsoft.CodeAnalysis.Operations;
 
 namespace Phaseward.Analyzers.Elaboration;
 
-// Run-time type tests ('is T', type patterns) and '?.'.
+// Run-time type tests: 'is T', and the type tests of patterns.
 internal sealed partial class Interpreter
 {
-    private object? VisitConditionalAccess(IConditionalAccessOperation access, Frame frame)
-    {
-        var receiver = Evaluate(access.Operation, frame);
-        if (Unknown.Is(receiver) || receiver is null)
-            return receiver;
-        conditionalReceivers.Push(receiver);
-        try
-        {
-            return Evaluate(access.WhenNotNull, frame);
-        }
-        finally
-        {
-            conditionalReceivers.Pop();
-        }
-    }
-
     private object? VisitIsType(IIsTypeOperation test, Frame frame)
     {
         var value = Evaluate(test.ValueOperand, frame);

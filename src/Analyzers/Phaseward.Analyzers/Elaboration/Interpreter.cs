@@ -12,8 +12,11 @@ namespace Phaseward.Analyzers.Elaboration;
 /// and yields <see cref="Unknown"/>, which silently poisons everything computed from it.
 /// </summary>
 /// <remarks>
-/// This file declares all of the interpreter's state; the partial files Interpreter.&lt;Family&gt;.cs interpret each
-/// family of operations and hold what those share (library crossing, construction, reporting and budgets).
+/// This file declares all of the interpreter's state. <c>Interpreter.Dispatch.cs</c> is the one dispatch: one
+/// <c>Visit&lt;Kind&gt;</c> method per operation kind, each in the partial file of its family (Statements, Loops,
+/// Exceptions, Expressions, Operators, Members, Calls, Creation, Assignments, Delegates, Types, Patterns); the other
+/// partial files hold what those share (Library: values crossing into native code; Construction; Objects; Blocks;
+/// Budgets: reporting and budgets).
 /// </remarks>
 internal sealed partial class Interpreter
 {
@@ -56,6 +59,9 @@ internal sealed partial class Interpreter
 
     // Types whose static initializers and static constructor have run (C# runs them once).
     private readonly HashSet<INamedTypeSymbol> initializedTypes = new(SymbolEqualityComparer.Default);
+
+    // The structs of the design's source whose default value is being made (see DefaultStruct).
+    private readonly HashSet<INamedTypeSymbol> structsBeingDefaulted = new(SymbolEqualityComparer.Default);
 
     // ---- where the interpretation is ----
 

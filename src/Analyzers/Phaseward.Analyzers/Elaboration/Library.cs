@@ -80,9 +80,9 @@ internal static class Library
         var definition = method.OriginalDefinition;
         const BindingFlags all = BindingFlags.Public | BindingFlags.Instance | BindingFlags.Static | BindingFlags.DeclaredOnly;
         MethodBase? open = method.MethodKind == MethodKind.Constructor
-            ? openType.GetConstructors(all).FirstOrDefault(c => ParametersMatch(c.GetParameters(), definition))
+            ? openType.GetConstructors(all).FirstOrDefault(c => ClrTypes.ParametersMatch(c.GetParameters(), definition))
             : openType.GetMethods(all).FirstOrDefault(m => m.Name == method.MetadataName
-                && m.GetGenericArguments().Length == method.TypeArguments.Length && ParametersMatch(m.GetParameters(), definition));
+                && m.GetGenericArguments().Length == method.TypeArguments.Length && ClrTypes.ParametersMatch(m.GetParameters(), definition));
         if (open is null)
             return null;
 
@@ -187,13 +187,4 @@ internal static class Library
         }
     }
 
-    private static bool ParametersMatch(ParameterInfo[] parameters, IMethodSymbol method)
-    {
-        if (parameters.Length != method.Parameters.Length)
-            return false;
-        for (var i = 0; i < parameters.Length; i++)
-            if (!ClrTypes.Matches(method.Parameters[i].Type, parameters[i].ParameterType))
-                return false;
-        return true;
-    }
 }

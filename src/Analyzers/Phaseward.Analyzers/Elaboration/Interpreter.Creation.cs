@@ -8,11 +8,11 @@ using Microsoft.CodeAnalysis.Operations;
 
 namespace Phaseward.Analyzers.Elaboration;
 
-// Object creation, arrays, List<T>, tuples. Arrays are object?[] and lists List<object?> whatever their element type,
+// Object creation, arrays, collection expressions, tuples, 'with'. Arrays are object?[] and lists List<object?> whatever their element type,
 // so they can hold Unknown elements; they become typed .NET collections only when passed to the DSL.
 internal sealed partial class Interpreter
 {
-    private object? Create(IObjectCreationOperation creation, Frame frame)
+    private object? VisitObjectCreation(IObjectCreationOperation creation, Frame frame)
     {
         var type = creation.Type as INamedTypeSymbol;
         if (type is not null && session.IsInSource(type) && creation.Constructor is { } sourceConstructor)
@@ -66,7 +66,7 @@ internal sealed partial class Interpreter
         return made;
     }
 
-    private object? CreateArray(IArrayCreationOperation creation, Frame frame)
+    private object? VisitArrayCreation(IArrayCreationOperation creation, Frame frame)
     {
         if (creation.DimensionSizes.Length != 1)
             return Unsupported(creation, "a multi-dimensional array", "only one-dimensional arrays are elaborated");
@@ -84,15 +84,25 @@ internal sealed partial class Interpreter
         var element = ((IArrayTypeSymbol)creation.Type!).ElementType;
         var items = new object?[length];
         var initial = DefaultOf(element);
-        for (var i = 0; i < length; i++)
-            items[i] = initial;
+        if (initial is InterpretedObject && length > 0)
+        {
+            // Elements of a struct type are values: one default each, not one shared by every slot.
+            items[0] = initial;
+            for (var i = 1; i < length; i++)
+                items[i] = CopyIfValue(initial);
+        }
+        else
+        {
+            for (var i = 0; i < length; i++)
+                items[i] = initial;
+        }
         if (creation.Initializer is { } initializer)
             for (var i = 0; i < initializer.ElementValues.Length && i < length; i++)
                 items[i] = Evaluate(initializer.ElementValues[i], frame);
         return items;
     }
 
-    private object? CreateCollection(ICollectionExpressionOperation collection, Frame frame)
+    private object? VisitCollectionExpression(ICollectionExpressionOperation collection, Frame frame)
     {
         var items = new List<object?>();
         foreach (var element in collection.Elements)
@@ -120,7 +130,7 @@ internal sealed partial class Interpreter
         };
     }
 
-    private object? CreateTuple(ITupleOperation tuple, Frame frame)
+    private object? VisitTuple(ITupleOperation tuple, Frame frame)
     {
         var items = new object?[tuple.Elements.Length];
         for (var i = 0; i < items.Length; i++)
@@ -134,55 +144,32 @@ internal sealed partial class Interpreter
         "System.Collections.Generic.IList`1" or "System.Collections.Generic.IReadOnlyList`1" or "System.Collections.Generic.IEnumerable`1"
         or "System.Collections.Generic.ICollection`1" or "System.Collections.Generic.IReadOnlyCollection`1";
 
-    private object? VisitRange(IRangeOperation range, Frame frame)
-    {
-        var start = range.LeftOperand is null ? new IndexValue(0, false) : Evaluate(range.LeftOperand, frame);
-        var end = range.RightOperand is null ? new IndexValue(0, true) : Evaluate(range.RightOperand, frame);
-        if (Unknown.Is(start) || Unknown.Is(end)) return Unknown.Value;
-        return start is IndexValue from && end is IndexValue to ? new RangeValue(from, to) : Unsupported(range, "this range", "its ends are not indices");
-    }
+    private object? VisitObjectOrCollectionInitializer(IObjectOrCollectionInitializerOperation initializer, Frame frame)
+        => Unsupported(initializer, "this initializer", "it is only interpreted as part of an object creation");
 
-    /// <summary><c>list[^1]</c>, <c>text[1..3]</c>: an Index or Range on a type that only has a Count/Length and an int indexer.</summary>
-    private object? VisitImplicitIndexer(IImplicitIndexerReferenceOperation reference, Frame frame)
+    private object? VisitAnonymousObjectCreation(IAnonymousObjectCreationOperation creation, Frame frame)
+        => Unsupported(creation, "an anonymous object", "anonymous types are outside the subset the elaborator interprets");
+
+    /// <summary><c>value with { P = ... }</c>: a copy, then the initializer on the copy.</summary>
+    private object? VisitWith(IWithOperation with, Frame frame)
     {
-        var instance = Evaluate(reference.Instance, frame);
-        var argument = Evaluate(reference.Argument, frame);
-        if (Unknown.Is(instance) || Unknown.Is(argument)) return Unknown.Value;
-        System.Collections.IList? items = instance switch
+        var original = Evaluate(with.Operand, frame);
+        if (Unknown.Is(original)) return original;
+        if (original is not InterpretedObject source)
+            return Unsupported(with, "this 'with' expression", "only records and structs of this compilation are copied with 'with'");
+        var copy = source.Copy();
+        implicitReceivers.Push(copy);
+        try
         {
-            object?[] array => array,
-            List<object?> list => list,
-            _ => null,
-        };
-        if (instance is string text)
+            foreach (var initializer in with.Initializer.Initializers)
+                if (Unknown.Is(Evaluate(initializer, frame)))
+                    return Unknown.Value;
+        }
+        finally
         {
-            if (argument is IndexValue at && at.OffsetIn(text.Length) is var i && i >= 0 && i < text.Length) return text[i];
-            if (argument is RangeValue span && Bounds(span, text.Length) is var (start, length) && length >= 0) return text.Substring(start, length);
-            return ThrowsUnknown(reference, "ArgumentOutOfRangeException: the index or range is outside a string of length " + text.Length);
+            implicitReceivers.Pop();
         }
 
-        return items is null ? Unsupported(reference, "this index", "only arrays, lists and strings are indexed from the end or by range") : Indexed(reference, items, argument);
-    }
-
-    private object? Indexed(IOperation site, System.Collections.IList items, object? index)
-    {
-        switch (index)
-        {
-            case IndexValue at when at.OffsetIn(items.Count) is var i && i >= 0 && i < items.Count:
-                return items[i];
-            case RangeValue span when Bounds(span, items.Count) is var (start, length) && length >= 0 && start >= 0 && start + length <= items.Count:
-                var slice = new object?[length];
-                for (var k = 0; k < length; k++) slice[k] = items[start + k];
-                ChargeMemory(site, 8L * length);
-                return items is List<object?> ? new List<object?>(slice) : slice;
-            default:
-                return ThrowsUnknown(site, $"IndexOutOfRangeException: the index or range is outside a collection of {items.Count} elements");
-        }
-    }
-
-    private static (int Start, int Length) Bounds(RangeValue range, int count)
-    {
-        var start = range.Start.OffsetIn(count);
-        return (start, range.End.OffsetIn(count) - start);
+        return copy;
     }
 }

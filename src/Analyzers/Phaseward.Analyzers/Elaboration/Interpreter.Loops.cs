@@ -1,0 +1,165 @@
+using System.Collections;
+using System.Collections.Generic;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Operations;
+
+namespace Phaseward.Analyzers.Elaboration;
+
+// Loops: every iteration is a step (against the step budget), and a loop whose condition or collection is unknown is
+// skipped with what its body assigns made unknown (Poison).
+internal sealed partial class Interpreter
+{
+    /// <summary>All loops share one OperationKind; their LoopKind says which.</summary>
+    private object? VisitLoop(ILoopOperation loop, Frame frame) => loop.LoopKind switch
+    {
+        LoopKind.While => VisitWhileLoop((IWhileLoopOperation)loop, frame),
+        LoopKind.For => VisitForLoop((IForLoopOperation)loop, frame),
+        LoopKind.ForEach => VisitForEachLoop((IForEachLoopOperation)loop, frame),
+        _ => NotInterpreted(loop, frame),
+    };
+
+    private Completion VisitWhileLoop(IWhileLoopOperation loop, Frame frame)
+    {
+        loops.Push(loop);
+        try
+        {
+            var first = true;
+            while (true)
+            {
+                Step(loop);
+                if (loop.ConditionIsTop || !first)
+                {
+                    var condition = Condition(loop.Condition, frame);
+                    if (condition is null)
+                    {
+                        Poison(loop.Body, frame);
+                        return Completion.Normal;
+                    }
+
+                    if (condition.Value == loop.ConditionIsUntil)
+                        return Completion.Normal;
+                }
+
+                first = false;
+                var completion = Execute(loop.Body, frame);
+                if (completion == Completion.Break)
+                    return Completion.Normal;
+                if (completion == Completion.Return)
+                    return completion;
+            }
+        }
+        finally
+        {
+            loops.Pop();
+        }
+    }
+
+    private Completion VisitForLoop(IForLoopOperation loop, Frame frame)
+    {
+        foreach (var before in loop.Before)
+            Execute(before, frame);
+        loops.Push(loop);
+        try
+        {
+            while (true)
+            {
+                Step(loop);
+                var condition = Condition(loop.Condition, frame);
+                if (condition is null)
+                {
+                    Poison(loop.Body, frame);
+                    foreach (var bottom in loop.AtLoopBottom) Poison(bottom, frame);
+                    return Completion.Normal;
+                }
+
+                if (!condition.Value)
+                    return Completion.Normal;
+                var completion = Execute(loop.Body, frame);
+                if (completion == Completion.Break)
+                    return Completion.Normal;
+                if (completion == Completion.Return)
+                    return completion;
+                foreach (var bottom in loop.AtLoopBottom)
+                    Execute(bottom, frame);
+            }
+        }
+        finally
+        {
+            loops.Pop();
+        }
+    }
+
+    private Completion VisitForEachLoop(IForEachLoopOperation loop, Frame frame)
+    {
+        var collection = Evaluate(StripConversions(loop.Collection), frame);
+        if (Unknown.Is(collection))
+        {
+            Poison(loop.Body, frame);
+            return Completion.Normal;
+        }
+
+        IEnumerable? items = collection switch
+        {
+            object?[] array => array,
+            List<object?> list => list.ToArray(),
+            string text => text,
+            InterpretedObject => null,
+            IEnumerable enumerable => enumerable,
+            _ => null,
+        };
+        if (items is null)
+        {
+            Unsupported(loop.Collection, "this foreach collection", "only arrays, strings, the library's collections and sequences, and iterators are enumerated");
+            Poison(loop.Body, frame);
+            return Completion.Normal;
+        }
+
+        var variableType = (loop.LoopControlVariable as IVariableDeclaratorOperation)?.Symbol.Type;
+        loops.Push(loop);
+        try
+        {
+            foreach (var raw in items)
+            {
+                Step(loop);
+                var item = FromClr(raw);
+                if (variableType is not null && item is not null && !Unknown.Is(item) && IsNumeric(variableType) && IsNumericValue(item))
+                    item = Arithmetic.ConvertNumber(item, variableType.SpecialType, isChecked: false) ?? item;
+                switch (loop.LoopControlVariable)
+                {
+                    case IVariableDeclaratorOperation declarator:
+                        frame.Declare(declarator.Symbol, item);
+                        break;
+                    default:
+                        Deconstruct(loop.LoopControlVariable, item, frame);
+                        break;
+                }
+
+                var completion = Execute(loop.Body, frame);
+                if (completion == Completion.Break)
+                    return Completion.Normal;
+                if (completion == Completion.Return)
+                    return completion;
+            }
+
+            return Completion.Normal;
+        }
+        catch (UnknownValueException)
+        {
+            // A lazy library sequence (OrderBy, Select...) called back a lambda whose value is not known: the iterations
+            // left are skipped, and what the body assigns made unknown.
+            Poison(loop.Body, frame);
+            return Completion.Normal;
+        }
+        finally
+        {
+            loops.Pop();
+        }
+    }
+
+    private static IOperation StripConversions(IOperation operation)
+    {
+        while (operation is IConversionOperation { IsImplicit: true } conversion)
+            operation = conversion.Operand;
+        return operation;
+    }
+}

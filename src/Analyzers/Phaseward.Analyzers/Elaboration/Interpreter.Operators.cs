@@ -1,0 +1,236 @@
+using System;
+using System.Globalization;
+using System.Linq;
+using System.Text;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Operations;
+
+namespace Phaseward.Analyzers.Elaboration;
+
+// Operators: arithmetic, comparison and logic (C#'s rules, checked or not, lifted over nullable values), conversions,
+// string concatenation and interpolation, and user-defined operators (interpreted when the design declares them).
+internal sealed partial class Interpreter
+{
+
+    private object? VisitBinary(IBinaryOperation binary, Frame frame)
+    {
+        var left = Evaluate(binary.LeftOperand, frame);
+        if (Unknown.Is(left)) return left;
+
+        if (binary.OperatorKind is BinaryOperatorKind.ConditionalAnd or BinaryOperatorKind.ConditionalOr && binary.OperatorMethod is null)
+        {
+            if (left is not bool l) return Unsupported(binary, "this logical operator", "its operands are not bool");
+            if (binary.OperatorKind == BinaryOperatorKind.ConditionalAnd ? !l : l) return l;
+            var rightValue = Evaluate(binary.RightOperand, frame);
+            return Unknown.Is(rightValue) || rightValue is bool ? rightValue : Unsupported(binary, "this logical operator", "its operands are not bool");
+        }
+
+        var right = Evaluate(binary.RightOperand, frame);
+        if (Unknown.Is(right)) return right;
+
+        if (binary.OperatorMethod is { } method)
+            return CallOperator(binary, method, new[] { left, right }, frame);
+        if (binary.IsLifted && (left is null || right is null))
+            return binary.OperatorKind switch
+            {
+                BinaryOperatorKind.Equals => left is null && right is null,
+                BinaryOperatorKind.NotEquals => !(left is null && right is null),
+                BinaryOperatorKind.LessThan or BinaryOperatorKind.LessThanOrEqual or BinaryOperatorKind.GreaterThan or BinaryOperatorKind.GreaterThanOrEqual => false,
+                _ => null,
+            };
+        if (binary.IsLifted && binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals)
+        {
+            var same = Equal(left, right);
+            return same is null ? Unknown.Value : binary.OperatorKind == BinaryOperatorKind.Equals ? same.Value : !same.Value;
+        }
+
+        if (NullableUnderlying(binary.LeftOperand.Type) is { } liftedType && binary.IsLifted)
+        {
+            try
+            {
+                return Arithmetic.Binary(binary.OperatorKind, left!, right!, liftedType, binary.IsChecked)
+                    ?? Unsupported(binary, "operator " + binary.OperatorKind + " on " + liftedType.ToDisplayString(), "it is outside the subset");
+            }
+            catch (ArithmeticException e)
+            {
+                return RaiseLibraryException(binary, e);
+            }
+        }
+
+        var leftType = binary.LeftOperand.Type;
+        var rightType = binary.RightOperand.Type;
+        if (binary.OperatorKind == BinaryOperatorKind.Add
+            && (leftType?.SpecialType == SpecialType.System_String || rightType?.SpecialType == SpecialType.System_String))
+        {
+            return Concatenate(binary, left, right);
+        }
+
+        if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals && left is InterpretedObject { Type.IsRecord: true } record)
+        {
+            var equal = AreEqualOrUnknown(record, right);
+            return equal is null ? Unknown.Value : binary.OperatorKind == BinaryOperatorKind.Equals ? equal.Value : !equal.Value;
+        }
+
+        if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals
+            && (left is null || right is null || (leftType?.IsReferenceType == true && leftType.SpecialType != SpecialType.System_String)))
+        {
+            var same = left is null || right is null ? left is null && right is null : ReferenceEquals(left, right);
+            return binary.OperatorKind == BinaryOperatorKind.Equals ? same : !same;
+        }
+
+        if (leftType is null || left is null || right is null)
+            return Unsupported(binary, "this operator", "its operand types are not known");
+        return BinaryValue(binary, binary.OperatorKind, left, right, leftType, binary.IsChecked,
+            "the elaborator handles arithmetic, comparisons and logic on int, long, float, double, bool, string and enums");
+    }
+
+    private object? VisitUnary(IUnaryOperation unary, Frame frame)
+    {
+        var operand = Evaluate(unary.Operand, frame);
+        if (Unknown.Is(operand)) return operand;
+        if (unary.OperatorKind == UnaryOperatorKind.Hat && operand is int fromEnd)
+            return new IndexValue(fromEnd, fromEnd: true);
+        if (unary.OperatorMethod is { } method)
+            return CallOperator(unary, method, new[] { operand }, frame);
+        if (operand is null || unary.Operand.Type is null || unary.IsLifted)
+            return Unsupported(unary, "this operator", "operators on nullable values are outside the subset");
+        try
+        {
+            return Arithmetic.Unary(unary.OperatorKind, operand, unary.Operand.Type, unary.IsChecked)
+                ?? Unsupported(unary, "operator " + unary.OperatorKind + " on " + unary.Operand.Type.ToDisplayString(), "it is outside the subset");
+        }
+        catch (ArithmeticException e)
+        {
+            Throws(unary.Syntax, e.GetType().Name + ": " + e.Message);
+            return Unknown.Value;
+        }
+    }
+
+    private object? VisitConversion(IConversionOperation conversion, Frame frame)
+    {
+        var value = Evaluate(conversion.Operand, frame);
+        if (Unknown.Is(value))
+            return value;
+        // Code that does not compile (half-typed, or a type that does not convert) is never given a meaning.
+        if (!conversion.Conversion.Exists)
+            return Unsupported(conversion, "this conversion", "it does not compile");
+        if (conversion.Type?.ToDisplayString() == "System.Index" && value is int index)
+            return new IndexValue(index, fromEnd: false);
+        if (conversion.OperatorMethod is { } method)
+            return CallOperator(conversion, method, new[] { value }, frame);
+        var target = conversion.Type;
+        if (target is null || value is null)
+            return value;
+        if (target is INamedTypeSymbol { OriginalDefinition.SpecialType: SpecialType.System_Nullable_T } nullable)
+            target = nullable.TypeArguments[0];
+        if (target.TypeKind == TypeKind.Enum)
+            return ToEnum(value, target);
+        if (IsNumeric(target) && (IsNumericValue(value) || value is Enum))
+        {
+            var number = value is Enum ? System.Convert.ToInt64(value, CultureInfo.InvariantCulture) : value;
+            return Arithmetic.ConvertNumber(number, target.SpecialType, conversion.IsChecked)
+                ?? Unsupported(conversion, "this numeric conversion", "the elaborator handles int, long, float, double and char");
+        }
+
+        return value;
+    }
+
+    private object? VisitInterpolatedString(IInterpolatedStringOperation interpolated, Frame frame)
+    {
+        try
+        {
+            return InterpolateParts(interpolated, frame);
+        }
+        catch (UnknownValueException)
+        {
+            return Unknown.Value;
+        }
+    }
+
+    private object? InterpolateParts(IInterpolatedStringOperation interpolated, Frame frame)
+    {
+        var text = new StringBuilder();
+        foreach (var part in interpolated.Parts)
+        {
+            switch (part)
+            {
+                case IInterpolatedStringTextOperation literal:
+                    text.Append(literal.Text.ConstantValue.Value as string);
+                    break;
+                case IInterpolationOperation hole:
+                    var value = Evaluate(hole.Expression, frame);
+                    if (Unknown.Is(value)) return value;
+                    var alignment = hole.Alignment is null ? null : Evaluate(hole.Alignment, frame);
+                    var format = hole.FormatString is null ? null : Evaluate(hole.FormatString, frame) as string;
+                    if (Unknown.Is(alignment)) return alignment;
+                    var composite = "{0" + (alignment is null ? "" : "," + System.Convert.ToInt32(alignment, CultureInfo.InvariantCulture).ToString(CultureInfo.InvariantCulture))
+                        + (format is null ? "" : ":" + format) + "}";
+                    text.Append(string.Format(CultureInfo.InvariantCulture, composite, value is bool b ? (b ? "True" : "False") : value));
+                    break;
+                default:
+                    return Unsupported(part, "this interpolated string", "interpolated string handlers are outside the subset");
+            }
+        }
+
+        ChargeMemory(interpolated, 2L * text.Length);
+        return text.ToString();
+    }
+
+    /// <summary>String concatenation (an interpreted ToString may be called), charged to the memory budget.</summary>
+    private object? Concatenate(IOperation site, object? left, object? right)
+    {
+        string joined;
+        try
+        {
+            joined = Arithmetic.Concatenate(left, right);
+        }
+        catch (UnknownValueException)
+        {
+            return Unknown.Value;
+        }
+
+        ChargeMemory(site, 2L * joined.Length);
+        return joined;
+    }
+
+    /// <summary>A built-in binary operator on known operands; an overflow or a division by zero is what the run would throw.</summary>
+    private object? BinaryValue(IOperation site, BinaryOperatorKind kind, object left, object right, ITypeSymbol type, bool isChecked,
+        string whyUnsupported = "it is outside the subset")
+    {
+        try
+        {
+            return Arithmetic.Binary(kind, left, right, type, isChecked)
+                ?? Unsupported(site, "operator " + kind + " on " + type.ToDisplayString(), whyUnsupported);
+        }
+        catch (ArithmeticException e)
+        {
+            Throws(site.Syntax, e.GetType().Name + ": " + e.Message);
+            return Unknown.Value;
+        }
+    }
+
+    private object? CallOperator(IOperation site, IMethodSymbol method, object?[] operands, Frame frame)
+    {
+        if (operands.Any(Unknown.Is)) return Unknown.Value;
+        Step(site);
+        if (method.IsImplicitlyDeclared && operands.Length == 2 && operands[0] is InterpretedObject { Type.IsRecord: true } record
+            && method.Name is "op_Equality" or "op_Inequality")
+        {
+            var equal = AreEqualOrUnknown(record, operands[1]);
+            return equal is null ? Unknown.Value : method.Name == "op_Equality" ? equal.Value : !equal.Value;
+        }
+
+        if (session.IsInSource(method))
+            return InvokeUser(method, null, operands, new Variable?[operands.Length], site, frame);
+        if (Library.IsPure(method))
+            return CallClr(site, method, null, operands);
+        if (ClrTypes.IsDsl(method))
+            return CallClr(site, method, null, operands);
+        return Unsupported(site, "operator " + Describe(method), "only operators of the Phaseward DSL and of this compilation are elaborated");
+    }
+
+    private static bool IsNumeric(ITypeSymbol type) => type.SpecialType is SpecialType.System_Int32 or SpecialType.System_Int64
+        or SpecialType.System_Double or SpecialType.System_Single or SpecialType.System_Char;
+
+    private static bool IsNumericValue(object value) => value is int or long or double or float or char or short or byte or uint or ulong;
+}
