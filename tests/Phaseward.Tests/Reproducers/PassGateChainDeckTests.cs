@@ -3,6 +3,7 @@ using System.Linq;
 using Phaseward.Checking;
 using Phaseward.Reproducers;
 using Phaseward.Rules.PassGatePaths;
+using Phaseward.Tests.Reference;
 
 namespace Phaseward.Tests.Reproducers;
 
@@ -37,5 +38,27 @@ public class PassGateChainDeckTests
 
         var t50 = Ngspice.Run(deck).Value("t50", deck);
         Assert.InRange(t50, estimate * 0.85, estimate * 1.15);
+    }
+
+    // A run broken by phases (hop on sample.High → mux1, mux2 on 'route' → leg1, leg2 on sample.Low, limit 3): the deck
+    // is the conducting sub-run alone, mux1..leg2 driven from hop's output through the 4 kΩ driver resistance, the
+    // ladder of tests/reference/ngspice/netlists/rc_tree_phase_break.cir (Elmore 244 ps by hand; ngspice t50 185.0 ps).
+    [Fact]
+    public void ThePhaseBrokenSubRunsDeckIsTheLadderOfTheSubRun()
+    {
+        var c = new Circuit("Buoy");
+        var clock = c.Clock("sample", 10.Nanoseconds());
+        var route = c.Input("route");
+        var h = c.TransmissionGate(c.Input("sensor"), clock.High, "hop");
+        var m = c.TransmissionGate(c.TransmissionGate(h, route, "mux1"), route, "mux2");
+        c.TransmissionGate(c.TransmissionGate(m, clock.Low, "leg1"), clock.Low, "leg2");
+        var report = Checker.Check(c.ToNetlist(), new RulePolicy { MaxSeriesPassGates = 3 });
+        var finding = report.Findings.Single(f => f.RuleId == "PW2001");
+
+        var deck = Reproducer.Deck(finding, report.Netlist);
+        Assert.Equal(4, deck.Text.Split('\n').Count(l => l.StartsWith("X", System.StringComparison.Ordinal) && l.Contains(" pw_tg ")));
+        Assert.Equal(0.69 * 244e-12, deck.Estimates.Single(e => e.Name == "t50").Value, 1e-21);
+        var t50 = Ngspice.Run(deck).Value("t50", deck);
+        Assert.Equal(NgspiceReference.TreeT50("rc_tree_phase_break", "l2"), t50, 0.01 * t50);
     }
 }
