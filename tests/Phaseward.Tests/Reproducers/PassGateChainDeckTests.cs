@@ -4,6 +4,7 @@ using Phaseward.Checking;
 using Phaseward.Reproducers;
 using Phaseward.Rules.PassGatePaths;
 using Phaseward.Tests.Reference;
+using Phaseward.Tests.Support;
 
 namespace Phaseward.Tests.Reproducers;
 
@@ -46,13 +47,7 @@ public class PassGateChainDeckTests
     [Fact]
     public void ThePhaseBrokenSubRunsDeckIsTheLadderOfTheSubRun()
     {
-        var c = new Circuit("Buoy");
-        var clock = c.Clock("sample", 10.Nanoseconds());
-        var route = c.Input("route");
-        var h = c.TransmissionGate(c.Input("sensor"), clock.High, "hop");
-        var m = c.TransmissionGate(c.TransmissionGate(h, route, "mux1"), route, "mux2");
-        c.TransmissionGate(c.TransmissionGate(m, clock.Low, "leg1"), clock.Low, "leg2");
-        var report = Checker.Check(c.ToNetlist(), new RulePolicy { MaxSeriesPassGates = 3 });
+        var report = Checker.Check(PhaseBrokenRun.Circuit().ToNetlist(), new RulePolicy { MaxSeriesPassGates = 3 });
         var finding = report.Findings.Single(f => f.RuleId == "PW2001");
 
         var deck = Reproducer.Deck(finding, report.Netlist);

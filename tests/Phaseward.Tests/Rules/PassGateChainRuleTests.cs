@@ -6,6 +6,7 @@ using Phaseward.Checking;
 using Phaseward.Netlists;
 using Phaseward.Rules.PassGatePaths;
 using Phaseward.Tests.Reference;
+using Phaseward.Tests.Support;
 
 namespace Phaseward.Tests.Rules;
 
@@ -140,12 +141,7 @@ public class PassGateChainRuleTests
     [Fact]
     public void A_run_never_holds_gates_that_cannot_conduct_together_whatever_lies_between_them()
     {
-        var c = new Circuit("Buoy");
-        var clock = c.Clock("sample", 10.Nanoseconds());
-        var route = c.Input("route");
-        var h = c.TransmissionGate(c.Input("sensor"), clock.High, "hop");
-        var m = c.TransmissionGate(c.TransmissionGate(h, route, "mux1"), route, "mux2");
-        c.TransmissionGate(c.TransmissionGate(m, clock.Low, "leg1"), clock.Low, "leg2");
+        var c = PhaseBrokenRun.Circuit();
 
         var finding = Assert.Single(Check(c, 3));
         Assert.Equal("4", finding.Properties[FindingPropertyKeys.ChainLength]);
@@ -165,11 +161,7 @@ public class PassGateChainRuleTests
 
         // With one phase throughout, the five gates are one run (the run above is broken by the phases, not by the
         // data gates): Elmore 346.5 ps, reported where it passes the limit.
-        var d = new Circuit("Buoy");
-        var clk = d.Clock("sample", 10.Nanoseconds());
-        var r = d.Input("route");
-        var n = d.TransmissionGate(d.TransmissionGate(d.TransmissionGate(d.Input("sensor"), clk.High, "hop"), r, "mux1"), r, "mux2");
-        d.TransmissionGate(d.TransmissionGate(n, clk.High, "leg1"), clk.High, "leg2");
+        var d = PhaseBrokenRun.Circuit(legsOnLowPhase: false);
         var whole = Assert.Single(Check(d, 3));
         Assert.Equal("5", whole.Properties[FindingPropertyKeys.ChainLength]);
         Assert.Equal("leg1", Name(d, whole.Properties[FindingPropertyKeys.ReportedGateId]));
