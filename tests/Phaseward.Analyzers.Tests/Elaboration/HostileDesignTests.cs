@@ -57,6 +57,81 @@ public class HostileDesignTests
         AssertNoStage(source);
     }
 
+    [Fact]
+    public void ARefLocalIsAnotherNameForItsVariable()
+    {
+        // 'ref' locals alias what they refer to (a write through either is seen by both), and 'r = ref other' rebinds.
+        var designs = new InMemoryDesigns(("/hostile/D.cs", Design("""
+            var first = 0;
+            ref var alias = ref first;
+            alias += 2;
+            var second = 10;
+            alias = ref second;
+            alias -= 9;
+            ref var field = ref extra;
+            field++;
+            count = first + second + extra - 1;
+            """, members: "private int extra;")));
+        ParityTests.AssertParity(designs, "Hostile.D");
+        Assert.Equal(3, designs.CompileTime("Hostile.D").Netlist!.Devices.Count);
+    }
+
+    [Fact]
+    public async Task ARefToAnArrayElementIsPW9001AndTheArrayIsNotReadAsBefore()
+    {
+        var source = Design("""
+            var slots = new int[3];
+            ref var slot = ref {|#0:slots[1]|};
+            slot = 3;
+            count = slots[1];
+            """);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source, NotElaborated(0, "the ref local 'slot'",
+            "only a ref to a local, parameter or field of the design is elaborated (not to an array element or a ref return)")).RunAsync();
+        AssertNoStage(source);
+    }
+
+    [Fact]
+    public async Task AMethodOfTheDesignGivenAnUnknownArgumentStillDoesWhatDoesNotDependOnIt()
+    {
+        // Add counts every call whatever it is given: the count is 3 at run time, and the call is not skipped.
+        var source = Design("""
+            var tally = new Tally();
+            tally.Add({|#0:System.Environment.ProcessorCount|});
+            tally.Add(1);
+            count = tally.Calls + 1;
+            """, declarations: "public sealed class Tally { public int Calls; public int Sum; public void Add(int k) { Calls++; Sum += k; } }");
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source, NotElaborated(0, "property 'Environment.ProcessorCount'", Outside)).RunAsync();
+        var result = new InMemoryDesigns(("/hostile/D.cs", Plain(source))).CompileTime("Hostile.D");
+        Assert.Equal(new[] { "s0", "s1", "s2" }, result.Netlist!.Devices.Select(d => d.Name));
+    }
+
+    [Fact]
+    public async Task ALibraryCallThatCannotBeMadeLeavesItsCollectionUnknown()
+    {
+        // Before: the Add was skipped and the list read as if it had never been called (one stage made).
+        var source = Design("""
+            var names = new System.Collections.Generic.List<string> { "a" };
+            names.Add({|#0:System.Environment.MachineName|});
+            count = names.Count;
+            """);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source, NotElaborated(0, "property 'Environment.MachineName'", Outside)).RunAsync();
+        AssertNoStage(source);
+    }
+
+    [Fact]
+    public async Task ASortWhoseComparerIsUnknownIsNotAnExceptionOfTheDesign()
+    {
+        // Array.Sort wraps what the comparer threw; that is the unknown value, not an exception the design throws (PW9003),
+        // and the half-sorted array is not read.
+        var source = Design("""
+            var widths = new[] { 3, 1, 2 };
+            System.Array.Sort(widths, (a, b) => a < {|#0:System.Environment.ProcessorCount|} ? a - b : b - a);
+            count = widths[0];
+            """);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source, NotElaborated(0, "property 'Environment.ProcessorCount'", Outside)).RunAsync();
+        AssertNoStage(source);
+    }
+
     private static DiagnosticResult NotElaborated(int location, string what, string why)
         => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
 

@@ -33,17 +33,17 @@ internal sealed partial class Interpreter
         {
             if (invocation.IsVirtual && receiver is InterpretedObject instance)
                 method = FindOverride(instance.Type, method) ?? method;
-            var (arguments, references) = Arguments(invocation.Arguments, method, frame);
-            if (arguments is null) return Unknown.Value;
-            return InvokeUser(method, receiver as InterpretedObject ?? (method.IsStatic ? null : frame.Instance), arguments, references, invocation, frame);
+            // Run even when an argument is unknown: what depends on it stays unknown inside, and the rest of what the
+            // method does (state it changes, devices it makes) is not lost.
+            var (arguments, references) = Arguments(invocation.Arguments, method, frame, keepUnknown: true);
+            return InvokeUser(method, receiver as InterpretedObject ?? (method.IsStatic ? null : frame.Instance), arguments!, references, invocation, frame);
         }
 
         if (method.MethodKind == MethodKind.DelegateInvoke)
         {
-            var (delegateArguments, _) = Arguments(invocation.Arguments, method, frame);
-            if (delegateArguments is null) return Unknown.Value;
+            var (delegateArguments, _) = Arguments(invocation.Arguments, method, frame, keepUnknown: true);
             return receiver is Closure closure
-                ? CallClosure(closure, delegateArguments, invocation)
+                ? CallClosure(closure, delegateArguments!, invocation)
                 : Unsupported(invocation, "this delegate call", "the delegate was not made by the design's code");
         }
 
@@ -64,8 +64,12 @@ internal sealed partial class Interpreter
                 "it is outside what compile-time elaboration runs (only the Phaseward DSL, methods of this compilation and pure library members such as string, Math, LINQ and the collections)");
 
         var (values, byReference) = Arguments(invocation.Arguments, method, frame);
-        if (values is null) return Unknown.Value;
-        return CallClr(invocation, method, receiver, values, byReference);
+        var result = values is null ? Unknown.Value : CallClr(invocation, method, receiver, values, byReference);
+        // A library call that could not be made (or failed half-way) may have changed the collections it was given or
+        // called on: they become unknown, never read as they were before the call.
+        if (Unknown.Is(result) && !ClrTypes.IsDsl(method))
+            PoisonMutables(invocation, frame);
+        return result;
     }
 
     /// <summary>
@@ -125,9 +129,11 @@ internal sealed partial class Interpreter
                 Charge(site, result);
             return FromClr(result);
         }
-        catch (TargetInvocationException e) when (e.InnerException is ElaborationStopped or UnknownValueException or DesignException)
+        catch (TargetInvocationException e) when (e.InnerException is ElaborationStopped or UnknownValueException or DesignException
+            || e.InnerException?.InnerException is UnknownValueException)
         {
-            if (e.InnerException is UnknownValueException unknown) return UnknownFrom(unknown, site);
+            // A library method may wrap what a callback threw (Array.Sort: "Failed to compare two elements").
+            if ((e.InnerException as UnknownValueException ?? e.InnerException?.InnerException) is UnknownValueException unknown) return UnknownFrom(unknown, site);
             System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e.InnerException).Throw();
             throw;
         }
@@ -157,10 +163,11 @@ internal sealed partial class Interpreter
     }
 
     /// <summary>
-    /// Evaluates arguments into parameter order. Returns null values when an argument is unknown (the call is then skipped
-    /// without a report: the unknown value was reported where it arose).
+    /// Evaluates arguments into parameter order. Returns null values when an argument is unknown (a native call is then
+    /// skipped without a report: the unknown value was reported where it arose).
     /// </summary>
-    private (object?[]? Values, Variable?[] References) Arguments(ImmutableArray<IArgumentOperation> arguments, IMethodSymbol method, Frame frame)
+    /// <param name="keepUnknown">Give the values even when one is unknown (for the design's own methods, which are run anyway).</param>
+    private (object?[]? Values, Variable?[] References) Arguments(ImmutableArray<IArgumentOperation> arguments, IMethodSymbol method, Frame frame, bool keepUnknown = false)
     {
         var values = new object?[method.Parameters.Length];
         // Allocated only when a ref/out argument needs it (DSL calls never do); an empty array means none.
@@ -192,7 +199,7 @@ internal sealed partial class Interpreter
             values[ordinal] = value;
         }
 
-        return (unknown ? null : values, references ?? Array.Empty<Variable?>());
+        return (unknown && !keepUnknown ? null : values, references ?? Array.Empty<Variable?>());
     }
 
     /// <summary>Runs a method, local function or accessor declared in this compilation.</summary>
