@@ -132,6 +132,51 @@ public class HostileDesignTests
         AssertNoStage(source);
     }
 
+    [Fact]
+    public void CastsAndAsTestTheValuesType()
+    {
+        // 'as' gives null for a value of another type, a failing cast throws InvalidCastException (caught here); before,
+        // both gave the value unchanged (a Buf read as an Inv, a string as an int).
+        var designs = new InMemoryDesigns(("/hostile/D.cs", Design("""
+            var cells = new System.Collections.Generic.List<Cell> { new Inv(), new Buf() };
+            count = 0;
+            foreach (var cell in cells)
+                count += (cell as Inv)?.N ?? 1;
+            object text = "s";
+            try { count += (int)text; }
+            catch (System.InvalidCastException) { count -= 1; }
+            object boxed = new Pt { X = 1 };
+            count += ((Pt)boxed).X + ((text as string) is null ? 10 : 0);
+            """, declarations: "public abstract class Cell { } public sealed class Inv : Cell { public int N = 2; } public sealed class Buf : Cell { } public struct Pt { public int X; }")));
+        ParityTests.AssertParity(designs, "Hostile.D");
+        Assert.Equal(3, designs.CompileTime("Hostile.D").Netlist!.Devices.Count);
+    }
+
+    [Fact]
+    public void AStructMethodCalledOnAValueRunsOnACopy()
+    {
+        // C# runs a struct method on a copy when its receiver is not a variable: a readonly field (outside the constructor),
+        // a property, an 'in' parameter. Before, the interpreter changed the stored struct (4 and more stages).
+        var designs = new InMemoryDesigns(("/hostile/D.cs", Design("""
+            ro.Inc();
+            rw.Inc();
+            Auto.Inc();
+            var holder = new Holder();
+            holder.Prop.Inc();
+            holder.Ro.Inc();
+            var local = new Counter();
+            Bump(local);
+            count = ro.N + rw.N + Auto.N + holder.Prop.N + holder.Ro.N + local.N + 1;
+            """,
+            members: "private readonly Counter ro; private Counter rw; private Counter Auto { get; set; } private static void Bump(in Counter c) => c.Inc();",
+            declarations: """
+                public struct Counter { public int N; public void Inc() => N++; }
+                public sealed class Holder { public Counter Prop { get; set; } public readonly Counter Ro; public Holder() { Ro.Inc(); } }
+                """)));
+        ParityTests.AssertParity(designs, "Hostile.D");
+        Assert.Equal(3, designs.CompileTime("Hostile.D").Netlist!.Devices.Count);
+    }
+
     private static DiagnosticResult NotElaborated(int location, string what, string why)
         => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
 

@@ -31,6 +31,10 @@ internal sealed partial class Interpreter
 
         if (session.IsInSource(method) && !method.IsImplicitlyDeclared && (method.MethodKind is MethodKind.Ordinary or MethodKind.LocalFunction or MethodKind.ExplicitInterfaceImplementation))
         {
+            // A struct method called on a value that is not a variable (a readonly field, a property, a call's result)
+            // runs on a copy, as in C#: what it changes is not kept.
+            if (receiver is InterpretedObject { Type.IsValueType: true } structValue && !IsVariable(invocation.Instance!, frame))
+                receiver = structValue.Copy();
             if (invocation.IsVirtual && receiver is InterpretedObject instance)
                 method = FindOverride(instance.Type, method) ?? method;
             // Run even when an argument is unknown: what depends on it stays unknown inside, and the rest of what the
@@ -308,6 +312,25 @@ internal sealed partial class Interpreter
         IPropertySymbol property => property.OverriddenProperty,
         _ => null,
     };
+
+    /// <summary>
+    /// Does the operation denote a variable (a struct method called on it changes it), rather than a value (a readonly
+    /// field outside its constructor, an 'in' parameter, a property, a call's result: the method runs on a copy)?
+    /// </summary>
+    private static bool IsVariable(IOperation operation, Frame frame) => operation switch
+    {
+        ILocalReferenceOperation local => local.Local.RefKind != RefKind.RefReadOnly,
+        IParameterReferenceOperation parameter => parameter.Parameter.RefKind is not (RefKind.In or RefKind.RefReadOnlyParameter),
+        IInstanceReferenceOperation or IArrayElementReferenceOperation => true,
+        IFieldReferenceOperation field => (!field.Field.IsReadOnly || IsConstructorOf(frame, field.Field.ContainingType))
+            && (field.Field.IsStatic || field.Instance is null || field.Instance.Type?.IsReferenceType == true || IsVariable(field.Instance, frame)),
+        _ => false,
+    };
+
+    /// <summary>Is the code running in a constructor of the type (where its readonly fields may still be written)?</summary>
+    private static bool IsConstructorOf(Frame frame, INamedTypeSymbol type)
+        => frame.Method is { MethodKind: MethodKind.Constructor or MethodKind.StaticConstructor } method
+            && SymbolEqualityComparer.Default.Equals(method.ContainingType.OriginalDefinition, type.OriginalDefinition);
 
     /// <summary>The variable an operation denotes (for ref/out arguments), declaring 'out var' locals.</summary>
     private Variable? VariableOf(IOperation operation, Frame frame)
