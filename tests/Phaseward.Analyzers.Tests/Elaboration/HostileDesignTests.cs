@@ -177,6 +177,68 @@ public class HostileDesignTests
         Assert.Equal(3, designs.CompileTime("Hostile.D").Netlist!.Devices.Count);
     }
 
+    [Theory]
+    [InlineData("Generic.Defaults")]
+    [InlineData("Generic.PerTypeStatics")]
+    [InlineData("Generic.MadeInGenericCode")]
+    public void GenericCodeRunsWithItsTypeArguments(string design)
+    {
+        // default(T), 'is T' and 'as T' with what T stands for in the call (before: default(T) was null for T = int);
+        // a generic type's statics per constructed type (before: Slot<int> and Slot<string> shared one Count).
+        var designs = new InMemoryDesigns(("/hostile/Generic.cs", """
+            using System.Collections.Generic;
+            using Phaseward;
+
+            namespace Generic
+            {
+                public static class G
+                {
+                    public static T Dflt<T>() => default!;
+                    public static T Twice<T>() => Dflt<T>();
+                    public static bool Is<T>(object o) => o is T;
+                    public static string Show<T>(T v) => "v" + v;
+                    public static bool TryFirst<T>(IEnumerable<T> items, out T value) { foreach (var i in items) { value = i; return true; } value = default!; return false; }
+                }
+
+                public sealed class Box<T> { public T Value = default!; public T Get() => Value; public T Fresh() => default!; }
+                public static class Make { public static Box<T> New<T>() => new Box<T>(); public static T Of<T>() => New<T>().Get(); }
+                public static class Slot<T> { public static int Count; public static T Last = default!; static Slot() { Count = 10; } public static void Put(T v) { Last = v; Count++; } }
+
+                public sealed class Defaults : Design
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var b = new Box<int>();
+                        var found = G.TryFirst(new int[0], out var first) ? 1 : 0;
+                        c.Inverter(c.Input("a"), $"d{G.Dflt<int>()}_{b.Get()}_{b.Fresh()}_{G.Show(b.Value)}_{G.Twice<double>()}_{first}{found}_{G.Is<string>(3)}{G.Is<int>(3)}");
+                        var x = c.Input("b");
+                        for (var i = 0; i < b.Value + 2; i++)
+                            x = c.Inverter(x, "g" + i);
+                    }
+                }
+
+                public sealed class PerTypeStatics : Design
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        Slot<int>.Put(4);
+                        Slot<int>.Put(5);
+                        Slot<string>.Put("s");
+                        var n = Slot<int>.Count + Slot<string>.Count * 100 + Slot<long>.Count * 10000;
+                        c.Inverter(c.Input("a"), "n" + n + Slot<int>.Last + Slot<string>.Last + Slot<double>.Last);
+                    }
+                }
+
+                public sealed class MadeInGenericCode : Design
+                {
+                    protected override void Describe(Circuit c)
+                        => c.Inverter(c.Input("a"), "n" + Make.Of<int>() + Make.New<double>().Value + (Make.Of<string>() is null));
+                }
+            }
+            """));
+        ParityTests.AssertParity(designs, design);
+    }
+
     private static DiagnosticResult NotElaborated(int location, string what, string why)
         => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
 

@@ -127,7 +127,7 @@ internal sealed partial class Interpreter
         {
             case ILocalReferenceOperation local:
                 if (local.IsDeclaration || frame.Find(local.Local) is null)
-                    frame.Declare(local.Local, DefaultOf(local.Local.Type));
+                    frame.Declare(local.Local, DefaultOf(local.Local.Type, frame));
                 return StoragePlace.Of(frame.Find(local.Local)!);
 
             case IDeclarationExpressionOperation declaration:

@@ -238,6 +238,7 @@ internal sealed partial class Interpreter
                     frame.Declare(parameters[i], CopyIfValue(arguments[i]));
             }
 
+            frame.TypeArguments = TypeArgumentsOf(method, caller);
             if (IsIterator(body))
                 frame.Yielded = new List<object?>();
             Execute(body, frame);
@@ -251,6 +252,31 @@ internal sealed partial class Interpreter
             callers = outerCallers;
             LeaveCall();
         }
+    }
+
+    /// <summary>
+    /// The type arguments a call of a generic method (or of a method of a generic type) runs with, each resolved through
+    /// the caller's own (a generic helper calling another with its T). Null for a method that is not generic.
+    /// </summary>
+    private static Dictionary<ITypeParameterSymbol, ITypeSymbol>? TypeArgumentsOf(IMethodSymbol method, Frame caller)
+    {
+        Dictionary<ITypeParameterSymbol, ITypeSymbol>? arguments = null;
+        void Add(ImmutableArray<ITypeParameterSymbol> parameters, ImmutableArray<ITypeSymbol> types)
+        {
+            for (var i = 0; i < parameters.Length && i < types.Length; i++)
+            {
+                var type = types[i] is ITypeParameterSymbol outer ? caller.TypeArgumentOf(outer) ?? outer : types[i];
+                if (!SymbolEqualityComparer.Default.Equals(type, parameters[i]))
+                    (arguments ??= new(SymbolEqualityComparer.Default))[(ITypeParameterSymbol)parameters[i].OriginalDefinition] = type;
+            }
+        }
+
+        if (method.IsGenericMethod)
+            Add(method.OriginalDefinition.TypeParameters, method.TypeArguments);
+        for (var type = method.ContainingType; type is not null; type = type.ContainingType)
+            if (type.IsGenericType)
+                Add(type.OriginalDefinition.TypeParameters, type.TypeArguments);
+        return arguments;
     }
 
     private bool IsIterator(IOperation body)
@@ -338,7 +364,7 @@ internal sealed partial class Interpreter
         switch (operation)
         {
             case IDeclarationExpressionOperation { Expression: ILocalReferenceOperation local }:
-                frame.Declare(local.Local, DefaultOf(local.Local.Type));
+                frame.Declare(local.Local, DefaultOf(local.Local.Type, frame));
                 return frame.Find(local.Local);
             case ILocalReferenceOperation local:
                 return frame.Find(local.Local);

@@ -21,7 +21,7 @@ internal sealed partial class Interpreter
                 if (declarator.Symbol.IsRef && initializer is not null)
                     BindRefLocal(declarator.Symbol, initializer.Value, frame);
                 else
-                    frame.Declare(declarator.Symbol, initializer is null ? DefaultOf(declarator.Symbol.Type) : CopyIfValue(Evaluate(initializer.Value, frame)));
+                    frame.Declare(declarator.Symbol, initializer is null ? DefaultOf(declarator.Symbol.Type, frame) : CopyIfValue(Evaluate(initializer.Value, frame)));
             }
 
         return Completion.Normal;
