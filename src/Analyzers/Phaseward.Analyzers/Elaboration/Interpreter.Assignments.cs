@@ -24,7 +24,7 @@ internal sealed partial class Interpreter
     {
         var place = PlaceOf(assignment.Target, frame);
         if (!place.IsKnown) return Unknown.Value;
-        var current = place.Get();
+        var current = ReadPlace(place, assignment.Target);
         var operand = Evaluate(assignment.Value, frame);
         object? result;
         if (Unknown.Is(current) || Unknown.Is(operand))
@@ -45,7 +45,7 @@ internal sealed partial class Interpreter
     {
         var place = PlaceOf(assignment.Target, frame);
         if (!place.IsKnown) return Unknown.Value;
-        var current = place.Get();
+        var current = ReadPlace(place, assignment.Target);
         if (current is not null) return current;
         var value = Evaluate(assignment.Value, frame);
         place.Set(value);
@@ -67,7 +67,7 @@ internal sealed partial class Interpreter
     {
         var place = PlaceOf(operation.Target, frame);
         if (!place.IsKnown) return Unknown.Value;
-        var before = place.Get();
+        var before = ReadPlace(place, operation.Target);
         if (Unknown.Is(before)) return before;
         var kind = operation.Kind == OperationKind.Increment ? BinaryOperatorKind.Add : BinaryOperatorKind.Subtract;
         object? after;
@@ -79,6 +79,13 @@ internal sealed partial class Interpreter
             after = BinaryValue(operation, kind, before, 1, operation.Target.Type, operation.IsChecked);
         place.Set(after);
         return operation.IsPostfix ? before : after;
+    }
+
+    /// <summary>What a compound assignment, '??=' or increment reads from its target; an unmade library-struct default is PW9001.</summary>
+    private object? ReadPlace(StoragePlace place, IOperation target)
+    {
+        var value = place.Get();
+        return value is UnmadeDefault unread ? ReadOfUnmadeDefault(target, unread) : value;
     }
 
     /// <summary>Assigns the parts of a tuple value to the targets of a deconstruction (<c>var (a, b) = ...</c>).</summary>

@@ -21,6 +21,24 @@ internal sealed partial class Interpreter
         return Unknown.Value;
     }
 
+    /// <summary>
+    /// A field, local, property or element of a library struct outside the pure library (DateTime, Guid, a generic library
+    /// struct) read while it still holds its default, which the elaborator does not make: PW9001 at the read, naming it.
+    /// </summary>
+    private object ReadOfUnmadeDefault(IOperation read, UnmadeDefault unread)
+        => Unsupported(read, "the default value of " + Describe(unread.Type),
+            "'" + read.Syntax + "' is read before a value is assigned to it, and the default of a library struct outside the pure library is not made at compile time");
+
+    /// <summary>
+    /// What a library call (or an interpreted ToString, Equals, GetHashCode it made) gives when it met a value that is not
+    /// known: Unknown, reported once more only when the value is an unmade library-struct default (its first report).
+    /// </summary>
+    private object UnknownFrom(UnknownValueException exception, IOperation site)
+        => exception.Unread is { } unread
+            ? Unsupported(site, "the default value of " + Describe(unread.Type),
+                "a value used here holds it (a field or element never assigned), and the default of a library struct outside the pure library is not made at compile time")
+            : Unknown.Value;
+
     /// <summary>Reports PW9003 at the site: the design throws here when it runs.</summary>
     public void Throws(SyntaxNode site, string message)
     {

@@ -127,7 +127,7 @@ internal sealed partial class Interpreter
         }
         catch (TargetInvocationException e) when (e.InnerException is ElaborationStopped or UnknownValueException or DesignException)
         {
-            if (e.InnerException is UnknownValueException) return Unknown.Value;
+            if (e.InnerException is UnknownValueException unknown) return UnknownFrom(unknown, site);
             System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e.InnerException).Throw();
             throw;
         }

@@ -14,7 +14,9 @@ internal sealed partial class Interpreter
     {
         if (MayBeConstant(operation) && operation.ConstantValue is { HasValue: true } constant)
             return FromConstant(constant.Value, operation.Type);
-        return Visit(operation, frame);
+        var value = Visit(operation, frame);
+        // A library struct's default the elaborator does not make is reported where it is read, never used.
+        return value is UnmadeDefault unread ? ReadOfUnmadeDefault(operation, unread) : value;
     }
 
     /// <summary>Runs a statement; says how it ended.</summary>

@@ -70,7 +70,7 @@ internal sealed partial class Interpreter
         if (defaultValue.Type is null)
             return null;
         var value = DefaultOf(defaultValue.Type);
-        return Unknown.Is(value) && defaultValue.Type.TypeKind != TypeKind.Error
+        return value is UnmadeDefault
             ? Unsupported(defaultValue, "the default value of " + Describe(defaultValue.Type), "it is a library struct outside the pure library")
             : value;
     }
@@ -100,8 +100,8 @@ internal sealed partial class Interpreter
         if (Unknown.Is(value)) return value;
         foreach (var arm in switchExpression.Arms)
         {
-            var matches = Match(arm.Pattern, value, frame);
-            if (matches is null) return Unsupported(arm.Pattern, "this pattern", "whether the value matches it cannot be decided at compile time");
+            var matches = Decide(arm.Pattern, value, frame);
+            if (matches is null) return Unknown.Value;
             if (!matches.Value) continue;
             if (arm.Guard is not null)
             {
@@ -155,11 +155,12 @@ internal sealed partial class Interpreter
         if (type is INamedTypeSymbol structType && session.IsInSource(structType))
             return DefaultStruct(structType);
         // A struct of the pure library that is not generic (byte, short, decimal...): its real default. Any other library
-        // struct is not made (making one may run its code; a generic one would be erased to object): it stays unknown.
+        // struct is not made (making one may run its code; a generic one would be erased to object): reading it is PW9001.
         if (type is INamedTypeSymbol { IsGenericType: false, IsRefLikeType: false, SpecialType: not SpecialType.System_Void } && Library.IsPureType(type)
             && ClrTypes.Resolve(type) is { IsValueType: true } libraryStruct)
             return Activator.CreateInstance(libraryStruct);
-        return Unknown.Value;
+        // Code that does not compile yet (a type not found): the compiler reports it; what depends on it is skipped.
+        return type.TypeKind == TypeKind.Error ? Unknown.Value : new UnmadeDefault(type);
     }
 
     /// <summary>The default of a struct of the design's source: every field and auto-property at its default.</summary>

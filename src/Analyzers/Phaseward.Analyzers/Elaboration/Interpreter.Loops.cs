@@ -143,10 +143,11 @@ internal sealed partial class Interpreter
 
             return Completion.Normal;
         }
-        catch (UnknownValueException)
+        catch (UnknownValueException e)
         {
             // A lazy library sequence (OrderBy, Select...) called back a lambda whose value is not known: the iterations
             // left are skipped, and what the body assigns made unknown.
+            UnknownFrom(e, loop.Collection);
             Poison(loop.Body, frame);
             return Completion.Normal;
         }

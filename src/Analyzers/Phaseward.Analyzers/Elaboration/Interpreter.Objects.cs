@@ -86,9 +86,9 @@ internal sealed partial class Interpreter : IObjectSemantics
                     return null;
             }
         }
-        catch (UnknownValueException)
+        catch (UnknownValueException e)
         {
-            return Unknown.Value;
+            return UnknownFrom(e, invocation);
         }
 
         return Unsupported(invocation, "the call to " + Describe(method), ClrTypes.IsDsl(method)

@@ -67,8 +67,7 @@ internal sealed partial class Interpreter
 
         if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals && left is InterpretedObject { Type.IsRecord: true } record)
         {
-            var equal = AreEqualOrUnknown(record, right);
-            return equal is null ? Unknown.Value : binary.OperatorKind == BinaryOperatorKind.Equals ? equal.Value : !equal.Value;
+            return RecordEquality(binary, record, right, negated: binary.OperatorKind == BinaryOperatorKind.NotEquals);
         }
 
         if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals
@@ -141,9 +140,9 @@ internal sealed partial class Interpreter
         {
             return InterpolateParts(interpolated, frame);
         }
-        catch (UnknownValueException)
+        catch (UnknownValueException e)
         {
-            return Unknown.Value;
+            return UnknownFrom(e, interpolated);
         }
     }
 
@@ -184,9 +183,9 @@ internal sealed partial class Interpreter
         {
             joined = Arithmetic.Concatenate(left, right);
         }
-        catch (UnknownValueException)
+        catch (UnknownValueException e)
         {
-            return Unknown.Value;
+            return UnknownFrom(e, site);
         }
 
         ChargeMemory(site, 2L * joined.Length);
@@ -216,8 +215,7 @@ internal sealed partial class Interpreter
         if (method.IsImplicitlyDeclared && operands.Length == 2 && operands[0] is InterpretedObject { Type.IsRecord: true } record
             && method.Name is "op_Equality" or "op_Inequality")
         {
-            var equal = AreEqualOrUnknown(record, operands[1]);
-            return equal is null ? Unknown.Value : method.Name == "op_Equality" ? equal.Value : !equal.Value;
+            return RecordEquality(site, record, operands[1], negated: method.Name == "op_Inequality");
         }
 
         if (session.IsInSource(method))

@@ -21,6 +21,12 @@ internal sealed partial class Interpreter
     /// <summary>Does the value match the pattern? Null when that cannot be known.</summary>
     private bool? Match(IPatternOperation pattern, object? value, Frame frame)
     {
+        if (Unknown.Is(value))
+        {
+            patternMetUnknown = true;
+            return null;
+        }
+
         patternInputs.Push(value);
         try
         {
@@ -32,11 +38,26 @@ internal sealed partial class Interpreter
         }
     }
 
+    /// <summary>
+    /// Matches the pattern of an <c>is</c>, a switch arm or a case label: true, false, or null when that cannot be known,
+    /// then reported as PW9001 at the pattern, unless a value it met was unknown (reported where it arose).
+    /// </summary>
+    private bool? Decide(IPatternOperation pattern, object? value, Frame frame)
+    {
+        var outer = patternMetUnknown;
+        patternMetUnknown = false;
+        var matches = Match(pattern, value, frame);
+        var metUnknown = patternMetUnknown;
+        patternMetUnknown = outer;
+        if (matches is null && !metUnknown)
+            Unsupported(pattern, "this pattern", "whether the value matches it cannot be decided at compile time");
+        return matches;
+    }
+
     private object? VisitIsPattern(IIsPatternOperation isPattern, Frame frame)
     {
         var subject = Evaluate(isPattern.Value, frame);
-        return Unknown.Is(subject) ? subject : Matched(Match(isPattern.Pattern, subject, frame))
-            ?? Unsupported(isPattern.Pattern, "this pattern", "whether the value matches it cannot be decided at compile time");
+        return Unknown.Is(subject) ? subject : Matched(Decide(isPattern.Pattern, subject, frame)) ?? Unknown.Value;
     }
 
     private object? VisitConstantPattern(IConstantPatternOperation constant, Frame frame)
@@ -112,7 +133,6 @@ internal sealed partial class Interpreter
         {
             // The member is read from the pattern's input (PatternInput, on top of patternInputs while this pattern is matched).
             var member = Evaluate(property.Member, frame);
-            if (Unknown.Is(member)) return null;
             if (Match(property.Pattern, member, frame) is not true and var result)
                 return result;
         }

@@ -77,15 +77,22 @@ internal sealed partial class Interpreter
             {
                 bool? matches = clause switch
                 {
-                    IDefaultCaseClauseOperation => null,
+                    IDefaultCaseClauseOperation => false,
                     ISingleValueCaseClauseOperation single => Equal(value, Evaluate(single.Value, frame)),
-                    IPatternCaseClauseOperation pattern => Match(pattern.Pattern, value, frame) is { } m
-                        ? m && (pattern.Guard is null || Condition(pattern.Guard, frame) == true)
-                        : Unsupported(pattern.Pattern, "this pattern", "whether the value matches it cannot be decided at compile time") is null,
+                    IPatternCaseClauseOperation pattern => Decide(pattern.Pattern, value, frame) is { } m
+                        ? m && pattern.Guard is not null ? Condition(pattern.Guard, frame) : m
+                        : null,
                     _ => false,
                 };
                 if (clause is IDefaultCaseClauseOperation)
                     fallback = section;
+                else if (matches is null)
+                {
+                    // Which section runs is not known (reported where that arose): none is guessed, and what the
+                    // sections assign becomes unknown.
+                    Poison(switchStatement, frame);
+                    return Completion.Normal;
+                }
                 else if (matches == true)
                 {
                     chosen = section;

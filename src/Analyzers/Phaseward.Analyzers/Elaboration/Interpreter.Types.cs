@@ -46,15 +46,16 @@ internal sealed partial class Interpreter
     private static ITypeSymbol? NullableUnderlying(ITypeSymbol? type)
         => type is INamedTypeSymbol { OriginalDefinition.SpecialType: SpecialType.System_Nullable_T } nullable ? nullable.TypeArguments[0] : null;
 
-    private bool? AreEqualOrUnknown(InterpretedObject value, object? other)
+    /// <summary>A record's <c>==</c> (or <c>!=</c>): true or false, or Unknown when a member compared is not known.</summary>
+    private object RecordEquality(IOperation site, InterpretedObject value, object? other, bool negated)
     {
         try
         {
-            return AreEqual(value, other);
+            return AreEqual(value, other) != negated;
         }
-        catch (UnknownValueException)
+        catch (UnknownValueException e)
         {
-            return null;
+            return UnknownFrom(e, site);
         }
     }
 }

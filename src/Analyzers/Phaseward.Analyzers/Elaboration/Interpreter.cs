@@ -77,6 +77,10 @@ internal sealed partial class Interpreter
     // The values being matched by patterns (innermost on top): what a property subpattern's member is read from.
     private readonly Stack<object?> patternInputs = new();
 
+    // Set while a pattern is decided when a value it is matched against is unknown (reported where it arose): the
+    // pattern's undecided result is then not reported a second time (see Decide).
+    private bool patternMetUnknown;
+
     // The call chain as it stands, outermost call first (interned: see chains).
     private SourceSpan[] callers = Array.Empty<SourceSpan>();
 

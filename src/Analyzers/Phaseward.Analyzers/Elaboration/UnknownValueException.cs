@@ -3,8 +3,9 @@ using System;
 namespace Phaseward.Analyzers.Elaboration;
 
 /// <summary>
-/// Thrown through a library method when a callback's result is unknown (reported where it arose): the library call then
-/// yields Unknown.
+/// Thrown through a library method when a callback's result is unknown (reported where it arose), or when library code
+/// meets a library struct's default the elaborator does not make (<see cref="Unread"/>, reported where the call is):
+/// the library call then yields Unknown.
 /// </summary>
 internal sealed class UnknownValueException : Exception
 {
@@ -12,4 +13,11 @@ internal sealed class UnknownValueException : Exception
         : base("A value the elaborator could not compute reached a library method.")
     {
     }
+
+    public UnknownValueException(UnmadeDefault unread)
+        : base("The default value of a library struct outside the pure library reached a library method.")
+        => Unread = unread;
+
+    /// <summary>The unmade default library code met; null when the value was unknown for a cause already reported.</summary>
+    public UnmadeDefault? Unread { get; }
 }
