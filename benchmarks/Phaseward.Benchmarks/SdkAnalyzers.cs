@@ -4,7 +4,6 @@ using System.Collections.Immutable;
 using System.IO;
 using System.Linq;
 using System.Reflection;
-using System.Runtime.InteropServices;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 
@@ -17,18 +16,7 @@ namespace Phaseward.Benchmarks;
 /// </summary>
 internal static class SdkAnalyzers
 {
-    public static string DefaultDirectory()
-    {
-        // .../dotnet/shared/Microsoft.NETCore.App/<version>/ -> .../dotnet
-        var root = Path.GetFullPath(Path.Combine(RuntimeEnvironment.GetRuntimeDirectory(), "..", "..", ".."));
-        var sdks = Directory.Exists(Path.Combine(root, "sdk"))
-            ? Directory.GetDirectories(Path.Combine(root, "sdk")).Where(d => Version.TryParse(Path.GetFileName(d).Split('-')[0], out _))
-                .OrderBy(d => Version.Parse(Path.GetFileName(d).Split('-')[0])).ToList()
-            : new List<string>();
-        if (sdks.Count == 0)
-            throw new InvalidOperationException($"No .NET SDK found under '{root}'; pass --sdk-analyzers <directory>.");
-        return Path.Combine(sdks[^1], "Sdks", "Microsoft.NET.Sdk", "analyzers");
-    }
+    public static string DefaultDirectory() => Path.Combine(DotnetInstall.NewestSdk(), "Sdks", "Microsoft.NET.Sdk", "analyzers");
 
     public static ImmutableArray<DiagnosticAnalyzer> Load(string directory)
     {

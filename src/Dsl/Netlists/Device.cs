@@ -3,9 +3,15 @@ using System.Collections.Generic;
 namespace Phaseward.Netlists;
 
 /// <summary>A primitive: a restoring stage or a pass device, with its connections and where it was written.</summary>
+/// <remarks>
+/// A large design holds millions of these, so the fields are kept few and small: the inputs live in the device
+/// (<see cref="DeviceInputs"/>), the kind is one byte and a resistance set in the design is a number (NaN: none).
+/// </remarks>
 public sealed class Device
 {
     private readonly string? nameInCell;
+    private readonly double resistanceOhms;
+    private readonly byte kind;
     private string? name;
 
     /// <summary>A device named <paramref name="name"/>, or, when that is null, a part of a cell named
@@ -18,12 +24,12 @@ public sealed class Device
         Id = id;
         this.name = name;
         this.nameInCell = nameInCell;
-        Kind = kind;
-        Inputs = inputs;
+        this.kind = (byte)kind;
+        Inputs = new DeviceInputs(inputs);
         Output = output;
         ClockControl = clockControl;
         DataControl = dataControl;
-        ResistanceOverride = resistance;
+        resistanceOhms = resistance is { } r ? r.Ohms : double.NaN;
         IsWeak = isWeak;
         Span = span;
         Macro = macro;
@@ -38,10 +44,10 @@ public sealed class Device
     public string Name => name ??= Macro!.Name + "." + nameInCell;
 
     /// <summary>What kind of primitive this is.</summary>
-    public DeviceKind Kind { get; }
+    public DeviceKind Kind => (DeviceKind)kind;
 
     /// <summary>Data inputs (one for inverters, buffers and pass gates; two for NAND and NOR).</summary>
-    public IReadOnlyList<Net> Inputs { get; }
+    public DeviceInputs Inputs { get; }
 
     /// <summary>The net the device drives.</summary>
     public Net Output { get; }
@@ -53,7 +59,7 @@ public sealed class Device
     public Net? DataControl { get; }
 
     /// <summary>An on-resistance set in the design for this device (null: the process figure applies).</summary>
-    public Resistance? ResistanceOverride { get; }
+    public Resistance? ResistanceOverride => double.IsNaN(resistanceOhms) ? null : new Resistance(resistanceOhms);
 
     /// <summary>A deliberately weak driver (a keeper's feedback stage).</summary>
     public bool IsWeak { get; }
