@@ -239,6 +239,32 @@ public class HostileDesignTests
         ParityTests.AssertParity(designs, design);
     }
 
+    [Fact]
+    public void PatternsCompareWholeNumbersExactly()
+    {
+        // A long above 2^53 and a ulong above long.MaxValue in patterns: before, the first was rounded through double (a
+        // wrong arm) and the second made the elaborator fail (OverflowException).
+        var designs = new InMemoryDesigns(("/hostile/D.cs", Design("""
+            long wide = 9007199254740993L;
+            ulong top = ulong.MaxValue;
+            count = (wide is > 9007199254740992L ? 1 : 0) + (top is 18446744073709551615UL ? 1 : 0)
+                + top switch { 0 => 10, 18446744073709551615UL => 1, _ => 20 } + (double.NaN is 0.0 ? 5 : 0);
+            """)));
+        ParityTests.AssertParity(designs, "Hostile.D");
+        Assert.Equal(3, designs.CompileTime("Hostile.D").Netlist!.Devices.Count);
+    }
+
+    [Fact]
+    public Task AnArrayWithALongLengthIsChargedToTheMemoryBudget()
+        => new PhasewardAnalyzerTest<ElaborationAnalyzer>(Design("""
+                long lanes = 5_000_000_000L;
+                var nets = {|#0:new Net[lanes]|};
+                count = nets.Length;
+                """),
+                new DiagnosticResult(RuleCatalog.ElaborationBudgetExceeded.Id, DiagnosticSeverity.Warning).WithLocation(0).WithArguments("D",
+                    "the memory budget of 268435456 bytes (arrays, strings and collections the design's code makes; phaseward.elaboration_memory_budget) would be exceeded by 40000000000 more"))
+            .RunAsync();
+
     private static DiagnosticResult NotElaborated(int location, string what, string why)
         => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
 
