@@ -265,6 +265,156 @@ public class HostileDesignTests
                     "the memory budget of 268435456 bytes (arrays, strings and collections the design's code makes; phaseward.elaboration_memory_budget) would be exceeded by 40000000000 more"))
             .RunAsync();
 
+    [Theory]
+    [InlineData("Iterators.EndlessWithBreak")]
+    [InlineData("Iterators.MakingDevices")]
+    [InlineData("Iterators.ThrowingConsumer")]
+    [InlineData("Iterators.Nested")]
+    public void AForeachOverAnIteratorRunsItOnlyAsFarAsTheLoopTakesIt(string design)
+    {
+        // Before, an iterator was run to completion when called: an endless one stopped at the step budget (PW9002), one
+        // that makes devices made all of them, before the loop's own, and its finally ran before the loop body.
+        var designs = new InMemoryDesigns(("/hostile/Iterators.cs", """
+            using System;
+            using System.Collections.Generic;
+            using System.Linq;
+            using Phaseward;
+
+            namespace Iterators
+            {
+                public sealed class EndlessWithBreak : Design
+                {
+                    private int made;
+
+                    private IEnumerable<int> Numbers()
+                    {
+                        for (var i = 0; ; i++)
+                        {
+                            made++;
+                            yield return i;
+                        }
+                    }
+
+                    protected override void Describe(Circuit c)
+                    {
+                        var x = c.Input("a");
+                        foreach (var i in Numbers())
+                        {
+                            if (i >= 3) break;
+                            x = c.Inverter(x, "it" + i);
+                        }
+
+                        c.Inverter(x, "made" + made);
+                    }
+                }
+
+                public sealed class MakingDevices : Design
+                {
+                    private static IEnumerable<Net> Stages(Circuit c, Net x, string prefix)
+                    {
+                        try
+                        {
+                            for (var i = 0; i < 10; i++)
+                            {
+                                x = c.Inverter(x, prefix + i);
+                                yield return x;
+                            }
+                        }
+                        finally
+                        {
+                            c.Buffer(x, prefix + "end");
+                        }
+                    }
+
+                    private static int Find(Circuit c)
+                    {
+                        foreach (var n in Stages(c, c.Input("b"), "u"))
+                            if (n.Name == "u1") return 2;
+                        return 0;
+                    }
+
+                    protected override void Describe(Circuit c)
+                    {
+                        var taken = 0;
+                        foreach (var n in Stages(c, c.Input("a"), "st"))
+                        {
+                            c.Inverter(n, "after" + taken);
+                            if (++taken == 2) break;
+                        }
+
+                        c.Inverter(c.Input("z"), "found" + Find(c));
+                    }
+                }
+
+                public sealed class ThrowingConsumer : Design
+                {
+                    private static readonly List<string> Log = new();
+
+                    private static IEnumerable<int> Three()
+                    {
+                        try
+                        {
+                            yield return 1;
+                            yield return 2;
+                            yield return 3;
+                        }
+                        finally
+                        {
+                            Log.Add("done");
+                        }
+                    }
+
+                    protected override void Describe(Circuit c)
+                    {
+                        try
+                        {
+                            foreach (var i in Three())
+                            {
+                                if (i == 2) throw new InvalidOperationException("stop");
+                                Log.Add("i" + i);
+                            }
+                        }
+                        catch (InvalidOperationException)
+                        {
+                            Log.Add("caught");
+                        }
+
+                        c.Inverter(c.Input("a"), string.Join("_", Log));
+                    }
+                }
+
+                public sealed class Nested : Design
+                {
+                    private static IEnumerable<int> Upto(int n)
+                    {
+                        for (var i = 0; i < n; i++)
+                            yield return i;
+                    }
+
+                    private static IEnumerable<int> Pairs()
+                    {
+                        foreach (var a in Upto(3))
+                            foreach (var b in Upto(a))
+                                yield return a * 10 + b;
+                    }
+
+                    protected override void Describe(Circuit c)
+                    {
+                        var names = new List<string>();
+                        foreach (var p in Pairs())
+                        {
+                            if (p > 20) break;
+                            names.Add("p" + p);
+                        }
+
+                        c.Inverter(c.Input("a"), string.Join("_", names) + Upto(4).Sum());
+                    }
+                }
+            }
+            """));
+        ParityTests.AssertParity(designs, design);
+    }
+
     private static DiagnosticResult NotElaborated(int location, string what, string why)
         => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
 

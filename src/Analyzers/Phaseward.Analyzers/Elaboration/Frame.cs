@@ -57,6 +57,12 @@ internal sealed class Frame
         return null;
     }
 
+    /// <summary>
+    /// Where an iterator run by a foreach hands each yielded value (the loop body); false back means the loop stopped
+    /// (break or return), so the iterator stops too. Null when the iterator collects its values (<see cref="Yielded"/>).
+    /// </summary>
+    public System.Func<object?, bool>? Consumer { get; set; }
+
     /// <summary>What an iterator method has yielded so far (null when the method is not an iterator).</summary>
     public List<object?>? Yielded { get; set; }
 

@@ -240,11 +240,22 @@ internal sealed partial class Interpreter
 
             frame.TypeArguments = TypeArgumentsOf(method, caller);
             if (IsIterator(body))
-                frame.Yielded = new List<object?>();
+            {
+                if (streamTo is { } stream && ReferenceEquals(stream.Site, site))
+                {
+                    streamTo = null;
+                    frame.Consumer = stream.Consume;
+                }
+                else
+                {
+                    frame.Yielded = new List<object?>();
+                }
+            }
+
             Execute(body, frame);
             if (frame.Count > expectedVariables)
                 frameSizes[body] = frame.Count;
-            return frame.Yielded ?? frame.ReturnValue;
+            return frame.Consumer is not null ? StreamedIterator.Value : frame.Yielded ?? frame.ReturnValue;
         }
         finally
         {
