@@ -415,6 +415,47 @@ public class HostileDesignTests
         ParityTests.AssertParity(designs, design);
     }
 
+    [Theory]
+    [InlineData("var first = {|#0:Numbers()|}.First(); count = first + 3;")]
+    [InlineData("var numbers = {|#0:Numbers()|}; var before = made; count = before + numbers.Count() - 2;")]
+    public async Task AnIteratorWithEffectsRunToCompletionWhenCalledIsPW9001(string statements)
+    {
+        // Not enumerated straight by a foreach, the iterator runs to completion when called: its effects (here 'made++')
+        // would come earlier than in C# (First takes one value; a sequence stored first has not run yet).
+        var source = Design(statements, members: """
+            private int made;
+            private System.Collections.Generic.IEnumerable<int> Numbers() { for (var i = 0; i < 5; i++) { made++; yield return i; } }
+            """);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>("using System.Linq;\n" + source, NotElaborated(0, "the iterator 'D.Numbers()'",
+            "it changes state outside itself as it runs (a field, a captured variable, a collection it did not make, devices), and an iterator not enumerated "
+            + "straight by a foreach is run to completion when called, so those changes would come earlier than in C#")).RunAsync();
+        AssertNoStage("using System.Linq;\n" + source);
+    }
+
+    [Fact]
+    public void AnIteratorWithoutEffectsIsRunToCompletionSilently()
+    {
+        // An iterator that only fills what it makes itself (a local list, new objects) and reads fields is not reported.
+        var designs = new InMemoryDesigns(("/hostile/D.cs", "using System.Linq;\n" + Design("count = Stages().Sum(s => s.N) - 12;", members: """
+            private readonly int[] widths = { 1, 2 };
+            private System.Collections.Generic.IEnumerable<Stage> Stages()
+            {
+                var seen = new System.Collections.Generic.List<int>();
+                foreach (var w in widths)
+                {
+                    seen.Add(w);
+                    var stage = new Stage { N = w };
+                    stage.N += seen.Count;
+                    yield return stage;
+                }
+
+                yield return new Stage { N = seen.Sum() * 3 };
+            }
+            """, declarations: "public sealed class Stage { public int N; }")));
+        ParityTests.AssertParity(designs, "Hostile.D");
+        Assert.Equal(3, designs.CompileTime("Hostile.D").Netlist!.Devices.Count);
+    }
+
     private static DiagnosticResult NotElaborated(int location, string what, string why)
         => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
 

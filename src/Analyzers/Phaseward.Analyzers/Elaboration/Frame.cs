@@ -70,6 +70,9 @@ internal sealed class Frame
 
     public void Bind(ISymbol symbol, Variable variable) => variables[symbol] = variable;
 
+    /// <summary>Is the local or parameter this frame's own (not one it captures from an enclosing method)?</summary>
+    public bool Declares(ISymbol symbol) => variables.ContainsKey(symbol);
+
     /// <summary>Finds a local or parameter here or in an enclosing method's frame (captured variables).</summary>
     public Variable? Find(ISymbol symbol)
     {
