@@ -456,6 +456,34 @@ public class HostileDesignTests
         Assert.Equal(3, designs.CompileTime("Hostile.D").Netlist!.Devices.Count);
     }
 
+    [Theory]
+    [InlineData("var parts = new object[] { \"a\", {|#0:System.Environment.MachineName|} }; name = string.Join(\"_\", parts);", "property 'Environment.MachineName'")]
+    [InlineData("var tag = new Tag({|#0:System.Environment.MachineName|}, 2); name = \"t\" + tag;", "property 'Environment.MachineName'")]
+    [InlineData("var set = new System.Collections.Generic.HashSet<object> { 1, {|#0:System.Environment.ProcessorCount|} }; name = \"s\" + set.Count;",
+        "property 'Environment.ProcessorCount'")]
+    public async Task AnUnknownInsideACollectionOrRecordIsNeverPrintedOrCompared(string statements, string what)
+    {
+        // Before, library code printed it as "(unknown)": a net named "a_(unknown)" or "tTag { Name = (unknown), N = 2 }".
+        var source = Design("var name = \"\";\n" + statements + "\nc.Inverter(c.Input(\"n\"), \"s\" + name);", declarations: "public sealed record Tag(string Name, int N);");
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source, NotElaborated(0, what, Outside)).RunAsync();
+        var result = new InMemoryDesigns(("/hostile/D.cs", Plain(source))).CompileTime("Hostile.D");
+        Assert.DoesNotContain(result.Netlist!.Nets, n => n.Name.Contains("unknown", StringComparison.Ordinal) || n.Name.StartsWith("ss", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public async Task AnEventHandlerThatIsNotRunLeavesWhatItWouldAssignUnknown()
+    {
+        // Events are outside the subset; the handler subscribed would change 'count' when raised: count is not read as 3.
+        var source = Design("""
+            {|#0:Changed += k => count += k|};
+            {|#1:Changed|}?.Invoke(1);
+            """, members: "private event System.Action<int>? Changed;");
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source,
+            NotElaborated(0, "this event assignment", "it is outside the subset the elaborator interprets"),
+            NotElaborated(1, "this event reference", "it is outside the subset the elaborator interprets")).RunAsync();
+        AssertNoStage(source);
+    }
+
     private static DiagnosticResult NotElaborated(int location, string what, string why)
         => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
 

@@ -208,7 +208,12 @@ internal sealed partial class Interpreter
     private object? NotInterpreted(IOperation operation, Frame frame)
     {
         if (!IsStatement(operation))
+        {
+            // What the skipped expression may have assigned (an event handler it subscribes, say) becomes unknown too.
+            Poison(operation, frame);
             return Unsupported(operation, "this " + KindName(operation), "it is outside the subset the elaborator interprets");
+        }
+
         Unsupported(operation, StatementName(operation), "this kind of statement is outside the subset the elaborator interprets");
         // What the skipped statement may have assigned becomes unknown.
         Poison(operation, frame);
