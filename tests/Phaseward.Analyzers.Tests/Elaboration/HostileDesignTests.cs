@@ -484,6 +484,50 @@ public class HostileDesignTests
         AssertNoStage(source);
     }
 
+    [Fact]
+    public void CallbacksStoredAndCalledLaterSeeTheVariablesOfTheirIteration()
+    {
+        // Lambdas kept in a List<Func<...>> and a dictionary, called after the loop that made them: each sees its own
+        // iteration's 'k' (a foreach variable too), all see the one shared 'for' variable and 'count'. Before, the list
+        // could not hold them (PW9001), and lambdas kept in an array all saw the last iteration's 'k'.
+        var designs = new InMemoryDesigns(("/hostile/D.cs", "using System.Linq;\n" + Design("""
+            var stages = new System.Collections.Generic.List<System.Func<Net, Net>>();
+            var labels = new System.Func<string>[2];
+            var actions = new System.Collections.Generic.Dictionary<string, System.Action>();
+            for (var i = 0; i < 2; i++)
+            {
+                var k = i;
+                stages.Add(n => c.Inverter(n, "cb" + k));
+                labels[i] = () => "l" + k + i;
+            }
+
+            foreach (var name in new[] { "p", "q" })
+                actions[name] = () => count += name == "p" ? 1 : 10;
+            actions["q"]();
+            var y = c.Input("y");
+            foreach (var stage in stages)
+                y = stage(y);
+            c.Inverter(y, string.Concat(labels.Select(l => l())));
+            count -= 10;
+            """)));
+        ParityTests.AssertParity(designs, "Hostile.D");
+        Assert.Equal(6, designs.CompileTime("Hostile.D").Netlist!.Devices.Count);
+    }
+
+    [Fact]
+    public async Task LibraryCodeComparingTwoDelegatesIsPW9001()
+    {
+        // C# compares delegates by target and method (lambdas made in one scope can be equal); that is not modelled.
+        var source = "using System.Linq;\n" + Design("""
+            var made = new System.Collections.Generic.List<System.Func<int>>();
+            for (var i = 0; i < 3; i++)
+                made.Add(() => i);
+            count = {|#0:made.Distinct().Count()|};
+            """);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source, NotElaborated(0, "the equality of delegates made by the design",
+            "C# compares a delegate's target and method, which the elaborator does not model")).RunAsync();
+    }
+
     private static DiagnosticResult NotElaborated(int location, string what, string why)
         => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
 

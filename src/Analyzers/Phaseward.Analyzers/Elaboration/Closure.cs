@@ -35,4 +35,11 @@ internal sealed class Closure
     public static Closure Of(IMethodSymbol method, object? receiver, Frame captured) => new(method, null, captured, receiver);
 
     public override string ToString() => "System.Func";
+
+    // C# compares delegates by target and method (two lambdas made in one scope can be equal); the elaborator does not
+    // model that: library code comparing or hashing two closures (Distinct, a dictionary key) is PW9001 at the call.
+    public override bool Equals(object? obj)
+        => ReferenceEquals(this, obj) || obj is not Closure ? ReferenceEquals(this, obj) : throw UnknownValueException.DelegateEquality;
+
+    public override int GetHashCode() => throw UnknownValueException.DelegateEquality;
 }

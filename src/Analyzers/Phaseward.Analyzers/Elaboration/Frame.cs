@@ -70,6 +70,20 @@ internal sealed class Frame
 
     public void Bind(ISymbol symbol, Variable variable) => variables[symbol] = variable;
 
+    /// <summary>
+    /// The variables as they are now, for a lambda made here: the same cells (a write through either is seen by both), but
+    /// a variable declared afresh later (the next iteration's 'var k' or foreach variable) is not the one captured, as
+    /// in C#, where each execution of a declaration makes a new variable. What it does not hold yet (a local declared
+    /// later, read by a local function the lambda calls) is still found in this frame, its lexical parent.
+    /// </summary>
+    public Frame Snapshot()
+    {
+        var copy = new Frame(Method, this, Instance, variables.Count) { TypeArguments = TypeArguments };
+        foreach (var variable in variables)
+            copy.variables.Add(variable.Key, variable.Value);
+        return copy;
+    }
+
     /// <summary>Is the local or parameter this frame's own (not one it captures from an enclosing method)?</summary>
     public bool Declares(ISymbol symbol) => variables.ContainsKey(symbol);
 

@@ -40,7 +40,9 @@ internal sealed partial class Interpreter
         => exception.Unread is { } unread
             ? Unsupported(site, "the default value of " + Describe(unread.Type),
                 "a value used here holds it (a field or element never assigned), and " + WhyNotMade(unread))
-            : Unknown.Value;
+            : exception.Construct is { } construct
+                ? Unsupported(site, construct.What, construct.Why)
+                : Unknown.Value;
 
     /// <summary>Reports PW9003 at the site: the design throws here when it runs.</summary>
     public void Throws(SyntaxNode site, string message)

@@ -9,20 +9,22 @@ namespace Phaseward.Analyzers.Elaboration;
 // lexical parent is the frame it was made in, so it reads and writes the locals it captures.
 internal sealed partial class Interpreter
 {
-    private object? VisitAnonymousFunction(IAnonymousFunctionOperation lambda, Frame frame) => Closure.Of(lambda, frame);
+    // A closure captures the variables as they are when it is made (Frame.Snapshot): a lambda made in a loop body sees
+    // that iteration's variables, not the last iteration's.
+    private object? VisitAnonymousFunction(IAnonymousFunctionOperation lambda, Frame frame) => Closure.Of(lambda, frame.Snapshot());
 
     private object? VisitDelegateCreation(IDelegateCreationOperation creation, Frame frame)
     {
         switch (creation.Target)
         {
             case IAnonymousFunctionOperation lambda:
-                return Closure.Of(lambda, frame);
+                return Closure.Of(lambda, frame.Snapshot());
             case IMethodReferenceOperation reference:
                 var receiver = reference.Instance is null ? null : Evaluate(reference.Instance, frame);
                 if (Unknown.Is(receiver)) return receiver;
                 if (!session.IsInSource(reference.Method))
                     return Unsupported(creation, "the method group " + Describe(reference.Method), "only methods and local functions of this compilation are passed as delegates; wrap it in a lambda");
-                return Closure.Of(reference.Method, receiver ?? (reference.Method.IsStatic ? null : frame.Instance), frame);
+                return Closure.Of(reference.Method, receiver ?? (reference.Method.IsStatic ? null : frame.Instance), frame.Snapshot());
             default:
                 return Unsupported(creation, "this delegate", "it is not a lambda or a method group");
         }

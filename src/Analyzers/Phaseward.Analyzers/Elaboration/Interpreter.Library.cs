@@ -26,6 +26,10 @@ internal sealed partial class Interpreter
                 return null;
             case Closure closure when typeof(Delegate).IsAssignableFrom(type):
                 return (object?)ToDelegate(closure, type) ?? Unconvertible.Value;
+            case Closure when type == typeof(object):
+                // Kept as it is in a collection of delegates (List<Func<Net, Net>> is erased to List<object>): it is only
+                // called when the design's code takes it out and calls it, through the interpreter.
+                return value;
             case Closure:
                 return Unconvertible.Value;
             case object?[] items when type.IsArray:

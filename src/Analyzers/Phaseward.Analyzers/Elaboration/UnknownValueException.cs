@@ -18,6 +18,17 @@ internal sealed class UnknownValueException : Exception
         : base("The default value of a library struct outside the pure library reached a library method.")
         => Unread = unread;
 
+    private UnknownValueException(string construct, string why)
+        : base(construct + ": " + why)
+        => Construct = (construct, why);
+
+    /// <summary>Library code compared or hashed two of the design's delegates.</summary>
+    public static UnknownValueException DelegateEquality
+        => new("the equality of delegates made by the design", "C# compares a delegate's target and method, which the elaborator does not model");
+
     /// <summary>The unmade default library code met; null when the value was unknown for a cause already reported.</summary>
     public UnmadeDefault? Unread { get; }
+
+    /// <summary>A construct library code met that the elaborator does not interpret (reported at the call), if any.</summary>
+    public (string What, string Why)? Construct { get; }
 }
