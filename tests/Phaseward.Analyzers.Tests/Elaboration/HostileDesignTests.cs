@@ -57,6 +57,188 @@ public class HostileDesignTests
         AssertNoStage(source);
     }
 
+    [Fact]
+    public void ARefLocalIsAnotherNameForItsVariable()
+    {
+        // 'ref' locals alias what they refer to (a write through either is seen by both), and 'r = ref other' rebinds.
+        var designs = new InMemoryDesigns(("/hostile/D.cs", Design("""
+            var first = 0;
+            ref var alias = ref first;
+            alias += 2;
+            var second = 10;
+            alias = ref second;
+            alias -= 9;
+            ref var field = ref extra;
+            field++;
+            count = first + second + extra - 1;
+            """, members: "private int extra;")));
+        ParityTests.AssertParity(designs, "Hostile.D");
+        Assert.Equal(3, designs.CompileTime("Hostile.D").Netlist!.Devices.Count);
+    }
+
+    [Fact]
+    public async Task ARefToAnArrayElementIsPW9001AndTheArrayIsNotReadAsBefore()
+    {
+        var source = Design("""
+            var slots = new int[3];
+            ref var slot = ref {|#0:slots[1]|};
+            slot = 3;
+            count = slots[1];
+            """);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source, NotElaborated(0, "the ref local 'slot'",
+            "only a ref to a local, parameter or field of the design is elaborated (not to an array element or a ref return)")).RunAsync();
+        AssertNoStage(source);
+    }
+
+    [Fact]
+    public async Task AMethodOfTheDesignGivenAnUnknownArgumentStillDoesWhatDoesNotDependOnIt()
+    {
+        // Add counts every call whatever it is given: the count is 3 at run time, and the call is not skipped.
+        var source = Design("""
+            var tally = new Tally();
+            tally.Add({|#0:System.Environment.ProcessorCount|});
+            tally.Add(1);
+            count = tally.Calls + 1;
+            """, declarations: "public sealed class Tally { public int Calls; public int Sum; public void Add(int k) { Calls++; Sum += k; } }");
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source, NotElaborated(0, "property 'Environment.ProcessorCount'", Outside)).RunAsync();
+        var result = new InMemoryDesigns(("/hostile/D.cs", Plain(source))).CompileTime("Hostile.D");
+        Assert.Equal(new[] { "s0", "s1", "s2" }, result.Netlist!.Devices.Select(d => d.Name));
+    }
+
+    [Fact]
+    public async Task ALibraryCallThatCannotBeMadeLeavesItsCollectionUnknown()
+    {
+        // Before: the Add was skipped and the list read as if it had never been called (one stage made).
+        var source = Design("""
+            var names = new System.Collections.Generic.List<string> { "a" };
+            names.Add({|#0:System.Environment.MachineName|});
+            count = names.Count;
+            """);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source, NotElaborated(0, "property 'Environment.MachineName'", Outside)).RunAsync();
+        AssertNoStage(source);
+    }
+
+    [Fact]
+    public async Task ASortWhoseComparerIsUnknownIsNotAnExceptionOfTheDesign()
+    {
+        // Array.Sort wraps what the comparer threw; that is the unknown value, not an exception the design throws (PW9003),
+        // and the half-sorted array is not read.
+        var source = Design("""
+            var widths = new[] { 3, 1, 2 };
+            System.Array.Sort(widths, (a, b) => a < {|#0:System.Environment.ProcessorCount|} ? a - b : b - a);
+            count = widths[0];
+            """);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source, NotElaborated(0, "property 'Environment.ProcessorCount'", Outside)).RunAsync();
+        AssertNoStage(source);
+    }
+
+    [Fact]
+    public void CastsAndAsTestTheValuesType()
+    {
+        // 'as' gives null for a value of another type, a failing cast throws InvalidCastException (caught here); before,
+        // both gave the value unchanged (a Buf read as an Inv, a string as an int).
+        var designs = new InMemoryDesigns(("/hostile/D.cs", Design("""
+            var cells = new System.Collections.Generic.List<Cell> { new Inv(), new Buf() };
+            count = 0;
+            foreach (var cell in cells)
+                count += (cell as Inv)?.N ?? 1;
+            object text = "s";
+            try { count += (int)text; }
+            catch (System.InvalidCastException) { count -= 1; }
+            object boxed = new Pt { X = 1 };
+            count += ((Pt)boxed).X + ((text as string) is null ? 10 : 0);
+            """, declarations: "public abstract class Cell { } public sealed class Inv : Cell { public int N = 2; } public sealed class Buf : Cell { } public struct Pt { public int X; }")));
+        ParityTests.AssertParity(designs, "Hostile.D");
+        Assert.Equal(3, designs.CompileTime("Hostile.D").Netlist!.Devices.Count);
+    }
+
+    [Fact]
+    public void AStructMethodCalledOnAValueRunsOnACopy()
+    {
+        // C# runs a struct method on a copy when its receiver is not a variable: a readonly field (outside the constructor),
+        // a property, an 'in' parameter. Before, the interpreter changed the stored struct (4 and more stages).
+        var designs = new InMemoryDesigns(("/hostile/D.cs", Design("""
+            ro.Inc();
+            rw.Inc();
+            Auto.Inc();
+            var holder = new Holder();
+            holder.Prop.Inc();
+            holder.Ro.Inc();
+            var local = new Counter();
+            Bump(local);
+            count = ro.N + rw.N + Auto.N + holder.Prop.N + holder.Ro.N + local.N + 1;
+            """,
+            members: "private readonly Counter ro; private Counter rw; private Counter Auto { get; set; } private static void Bump(in Counter c) => c.Inc();",
+            declarations: """
+                public struct Counter { public int N; public void Inc() => N++; }
+                public sealed class Holder { public Counter Prop { get; set; } public readonly Counter Ro; public Holder() { Ro.Inc(); } }
+                """)));
+        ParityTests.AssertParity(designs, "Hostile.D");
+        Assert.Equal(3, designs.CompileTime("Hostile.D").Netlist!.Devices.Count);
+    }
+
+    [Theory]
+    [InlineData("Generic.Defaults")]
+    [InlineData("Generic.PerTypeStatics")]
+    [InlineData("Generic.MadeInGenericCode")]
+    public void GenericCodeRunsWithItsTypeArguments(string design)
+    {
+        // default(T), 'is T' and 'as T' with what T stands for in the call (before: default(T) was null for T = int);
+        // a generic type's statics per constructed type (before: Slot<int> and Slot<string> shared one Count).
+        var designs = new InMemoryDesigns(("/hostile/Generic.cs", """
+            using System.Collections.Generic;
+            using Phaseward;
+
+            namespace Generic
+            {
+                public static class G
+                {
+                    public static T Dflt<T>() => default!;
+                    public static T Twice<T>() => Dflt<T>();
+                    public static bool Is<T>(object o) => o is T;
+                    public static string Show<T>(T v) => "v" + v;
+                    public static bool TryFirst<T>(IEnumerable<T> items, out T value) { foreach (var i in items) { value = i; return true; } value = default!; return false; }
+                }
+
+                public sealed class Box<T> { public T Value = default!; public T Get() => Value; public T Fresh() => default!; }
+                public static class Make { public static Box<T> New<T>() => new Box<T>(); public static T Of<T>() => New<T>().Get(); }
+                public static class Slot<T> { public static int Count; public static T Last = default!; static Slot() { Count = 10; } public static void Put(T v) { Last = v; Count++; } }
+
+                public sealed class Defaults : Design
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var b = new Box<int>();
+                        var found = G.TryFirst(new int[0], out var first) ? 1 : 0;
+                        c.Inverter(c.Input("a"), $"d{G.Dflt<int>()}_{b.Get()}_{b.Fresh()}_{G.Show(b.Value)}_{G.Twice<double>()}_{first}{found}_{G.Is<string>(3)}{G.Is<int>(3)}");
+                        var x = c.Input("b");
+                        for (var i = 0; i < b.Value + 2; i++)
+                            x = c.Inverter(x, "g" + i);
+                    }
+                }
+
+                public sealed class PerTypeStatics : Design
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        Slot<int>.Put(4);
+                        Slot<int>.Put(5);
+                        Slot<string>.Put("s");
+                        var n = Slot<int>.Count + Slot<string>.Count * 100 + Slot<long>.Count * 10000;
+                        c.Inverter(c.Input("a"), "n" + n + Slot<int>.Last + Slot<string>.Last + Slot<double>.Last);
+                    }
+                }
+
+                public sealed class MadeInGenericCode : Design
+                {
+                    protected override void Describe(Circuit c)
+                        => c.Inverter(c.Input("a"), "n" + Make.Of<int>() + Make.New<double>().Value + (Make.Of<string>() is null));
+                }
+            }
+            """));
+        ParityTests.AssertParity(designs, design);
+    }
+
     private static DiagnosticResult NotElaborated(int location, string what, string why)
         => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
 

@@ -30,6 +30,8 @@ public class InterpreterDispatchTests
         ["VariableOf"] = "the variable a ref/out argument denotes",
         ["Deconstruct"] = "the targets of a deconstruction",
         ["Poison"] = "which variables skipped code may have assigned (it is not run)",
+        ["IsVariable"] = "whether a struct method's receiver is a variable or a value (it then runs on a copy)",
+        ["VariableNamed"] = "the variable a name denotes, for skipped code and calls that could not be made (not its value)",
         ["InitializerOf"] = "the value of a field's or property's initializer found by its declaration",
         ["BodyOf"] = "the body of a method found by its declaration",
         ["Construct"] = "the ': this(...)'/': base(...)' initializer of a constructor",

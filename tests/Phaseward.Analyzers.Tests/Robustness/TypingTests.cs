@@ -2,6 +2,7 @@ using System;
 using System.Collections.Generic;
 using System.Linq;
 using System.Text;
+using System.Text.RegularExpressions;
 using System.Threading.Tasks;
 using CsCheck;
 using Microsoft.CodeAnalysis;
@@ -21,7 +22,7 @@ public class TypingTests
     /// <summary>Prefixes per sample file: one per stride, at a seeded random offset inside it, plus every line end.</summary>
     private const int PrefixesPerFile = 30;
 
-    /// <summary>Mutated variants per sample file (9 files: 2,070 in all).</summary>
+    /// <summary>Mutated variants per sample file.</summary>
     private const int MutationsPerFile = 230;
 
     public static IEnumerable<object[]> SampleFiles() => BoundedAnalysis.Samples.Select(s => new object[] { s.Path });
@@ -44,21 +45,105 @@ public class TypingTests
             await AnalyseVariant(baseline, tree, text.Substring(0, cut), $"{path} cut at {cut} of {text.Length}");
     }
 
+    /// <summary>
+    /// Set to the value a failure message gives ("File.cs:choice,choice,...") to analyse exactly that mutation, and no
+    /// other: a failure is reproduced without the random draw. (CsCheck_Seed, from CsCheck's own message, replays its
+    /// shrunk case as the first variant of a full run.)
+    /// </summary>
+    public const string ReplayVariable = "PHASEWARD_TYPING_MUTATION";
+
     // The mutations are drawn by CsCheck from a choice sequence (Phaseward.Tests' ChoiceSequence): a mutation that makes
     // an analyzer fail is shrunk to fewer, earlier edits and reported with the seed that reproduces it (CsCheck_Seed).
+    // The choices are the mutation's own seed: every failure message names them and the edits they make, so a failure
+    // that never reaches CsCheck's report (a hang, a crashed test host) can still be replayed through ReplayVariable.
     [Theory]
     [MemberData(nameof(SampleFiles))]
     public void RandomTokenMutationsOfASample(string path)
     {
-        var (baseline, tree, text) = Setup(path);
-        var tokens = tree.GetRoot().DescendantTokens().Where(t => t.Span.Length > 0).ToList();
-        ChoiceSequence.Of(12).Sample(
-            choices =>
-            {
-                var (variant, describe) = Mutate(new ChoiceSequence(choices), text, tokens);
-                AnalyseVariant(baseline, tree, variant, $"{path} mutation:{describe}").GetAwaiter().GetResult();
-            },
-            iter: MutationsPerFile, threads: 1, print: choices => Mutate(new ChoiceSequence(choices), text, tokens).Describe);
+        var (baseline, tree, _) = Setup(path);
+        SampleMutations(path, (variant, what) => AnalyseVariant(baseline, tree, variant, what).GetAwaiter().GetResult());
+    }
+
+    /// <summary>A failure names the mutation's choices and edits, and replaying those choices makes the same variant.</summary>
+    [Fact]
+    public void AFailingMutationIsNamedWithItsSeedAndEdits()
+    {
+        var path = BoundedAnalysis.Samples[0].Path;
+        var failing = new List<(string Variant, string What)>();
+        var failure = Assert.ThrowsAny<Exception>(() => SampleMutations(path, (variant, what) =>
+        {
+            if (!what.Contains(" delete ", StringComparison.Ordinal)) return;
+            failing.Add((variant, what));
+            throw new InvalidOperationException("analysis failed on " + what);
+        }));
+
+        var message = failure.ToString();
+        var seed = Regex.Match(message, ReplayVariable + "=(?<value>[^)\\s]+)");
+        Assert.True(seed.Success, "no seed in the failure:\n" + message);
+        Assert.Contains(" delete '", message, StringComparison.Ordinal);
+        var (file, choices) = ParseReplay(seed.Groups["value"].Value);
+        Assert.Equal(path.Substring(path.LastIndexOf('/') + 1), file);
+
+        // Replayed, the seed makes a variant that fails again (the one CsCheck reported after shrinking).
+        var (_, tree, text) = Setup(path);
+        var tokens = Tokens(tree);
+        var (replayed, edits) = Mutate(new ChoiceSequence(choices), text, tokens);
+        Assert.Contains(" delete '", edits, StringComparison.Ordinal);
+        Assert.Contains(failing, f => f.Variant == replayed);
+    }
+
+    [Theory]
+    [InlineData("WakeLogic.cs", "the form File.cs:choice")]
+    [InlineData("WakeLogic.cs:1,x", "'x' is not a choice")]
+    [InlineData("WakeLogic.cs:-3", "'-3' is not a choice")]
+    public void AReplayValueThatCannotBeReadNamesTheVariableAndTheValue(string value, string expected)
+    {
+        var error = Assert.Throws<ArgumentException>(() => ParseReplay(value));
+        Assert.Contains(ReplayVariable + "='" + value.Split(':')[0], error.Message, StringComparison.Ordinal);
+        Assert.Contains(expected, error.Message, StringComparison.Ordinal);
+    }
+
+    /// <summary>
+    /// Draws the mutations of one sample file (or, with <see cref="ReplayVariable"/> set, only the one it names) and hands
+    /// each variant to <paramref name="analyse"/> with a description that carries its seed and edits.
+    /// </summary>
+    private static void SampleMutations(string path, Action<string, string> analyse)
+    {
+        var (_, tree, text) = Setup(path);
+        var tokens = Tokens(tree);
+        var file = path.Substring(path.LastIndexOf('/') + 1);
+        if (Environment.GetEnvironmentVariable(ReplayVariable) is { Length: > 0 } replay)
+        {
+            var (replayFile, replayChoices) = ParseReplay(replay);
+            if (replayFile == file)
+                Analyse(replayChoices);
+            return;
+        }
+
+        ChoiceSequence.Of(12).Sample(Analyse, iter: MutationsPerFile, threads: 1, print: Describe);
+
+        void Analyse(int[] choices) => analyse(Mutate(new ChoiceSequence(choices), text, tokens).Variant, path + " " + Describe(choices));
+
+        string Describe(int[] choices)
+            => "mutation:" + Mutate(new ChoiceSequence(choices), text, tokens).Describe
+                + $" (seed {ReplayVariable}={file}:{string.Join(",", choices)})";
+    }
+
+    private static List<SyntaxToken> Tokens(SyntaxTree tree) => tree.GetRoot().DescendantTokens().Where(t => t.Span.Length > 0).ToList();
+
+    /// <summary>"File.cs:1,2,3" into the file name and the choices; a clear error naming the variable and the value otherwise.</summary>
+    internal static (string File, int[] Choices) ParseReplay(string value)
+    {
+        var colon = value.LastIndexOf(':');
+        var choices = new List<int>();
+        if (colon > 0)
+            foreach (var part in value.Substring(colon + 1).Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries))
+                choices.Add(int.TryParse(part, System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out var choice)
+                    ? choice
+                    : throw new ArgumentException($"{ReplayVariable}='{value}': '{part}' is not a choice (a whole number from 0)", nameof(value)));
+        if (colon <= 0)
+            throw new ArgumentException($"{ReplayVariable}='{value}' is not of the form File.cs:choice,choice,... (as a failure message prints it)", nameof(value));
+        return (value.Substring(0, colon), choices.ToArray());
     }
 
     /// <summary>One to three token edits (delete, duplicate, replace, insert, swap with the next token).</summary>

@@ -33,6 +33,30 @@ internal sealed class Frame
     /// <summary>Set by <c>return</c>.</summary>
     public object? ReturnValue { get; set; }
 
+    /// <summary>The type arguments of the generic method or type this frame runs, by type parameter (null when none).</summary>
+    public Dictionary<ITypeParameterSymbol, ITypeSymbol>? TypeArguments { get; set; }
+
+    /// <summary>
+    /// What a type parameter stands for here: from this frame's or an enclosing frame's type arguments, or from the
+    /// constructed type of the object the code runs on. Null when it is not known.
+    /// </summary>
+    public ITypeSymbol? TypeArgumentOf(ITypeParameterSymbol parameter)
+    {
+        var definition = (ITypeParameterSymbol)parameter.OriginalDefinition;
+        for (var frame = this; frame is not null; frame = frame.LexicalParent)
+        {
+            if (frame.TypeArguments is { } arguments && arguments.TryGetValue(definition, out var argument))
+                return argument;
+            if (definition.TypeParameterKind == TypeParameterKind.Type && frame.Instance?.Type is { } type)
+                for (var current = type; current is not null; current = current.BaseType)
+                    if (SymbolEqualityComparer.Default.Equals(current.OriginalDefinition, definition.DeclaringType?.OriginalDefinition)
+                        && definition.Ordinal < current.TypeArguments.Length && current.TypeArguments[definition.Ordinal] is not ITypeParameterSymbol)
+                        return current.TypeArguments[definition.Ordinal];
+        }
+
+        return null;
+    }
+
     /// <summary>What an iterator method has yielded so far (null when the method is not an iterator).</summary>
     public List<object?>? Yielded { get; set; }
 

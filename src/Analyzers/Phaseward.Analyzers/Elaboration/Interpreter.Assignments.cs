@@ -13,6 +13,12 @@ internal sealed partial class Interpreter
 {
     private object? VisitSimpleAssignment(ISimpleAssignmentOperation assignment, Frame frame)
     {
+        if (assignment.IsRef && assignment.Target is ILocalReferenceOperation refLocal)
+        {
+            BindRefLocal(refLocal.Local, assignment.Value, frame);
+            return frame.Find(refLocal.Local)?.Value;
+        }
+
         var place = PlaceOf(assignment.Target, frame);
         var value = CopyIfValue(Evaluate(assignment.Value, frame));
         if (!place.IsKnown) return Unknown.Value;
@@ -121,7 +127,7 @@ internal sealed partial class Interpreter
         {
             case ILocalReferenceOperation local:
                 if (local.IsDeclaration || frame.Find(local.Local) is null)
-                    frame.Declare(local.Local, DefaultOf(local.Local.Type));
+                    frame.Declare(local.Local, DefaultOf(local.Local.Type, frame));
                 return StoragePlace.Of(frame.Find(local.Local)!);
 
             case IDeclarationExpressionOperation declaration:

@@ -26,8 +26,11 @@ internal sealed partial class Interpreter
     /// struct) read while it still holds its default, which the elaborator does not make: PW9001 at the read, naming it.
     /// </summary>
     private object ReadOfUnmadeDefault(IOperation read, UnmadeDefault unread)
-        => Unsupported(read, "the default value of " + Describe(unread.Type),
-            "'" + read.Syntax + "' is read before a value is assigned to it, and the default of a library struct outside the pure library is not made at compile time");
+        => Unsupported(read, "the default value of " + Describe(unread.Type), "'" + read.Syntax + "' is read before a value is assigned to it, and " + WhyNotMade(unread));
+
+    private static string WhyNotMade(UnmadeDefault unread) => unread.Type is ITypeParameterSymbol
+        ? "the type argument it stands for is not known where the generic code is interpreted"
+        : "the default of a library struct outside the pure library is not made at compile time";
 
     /// <summary>
     /// What a library call (or an interpreted ToString, Equals, GetHashCode it made) gives when it met a value that is not
@@ -36,7 +39,7 @@ internal sealed partial class Interpreter
     private object UnknownFrom(UnknownValueException exception, IOperation site)
         => exception.Unread is { } unread
             ? Unsupported(site, "the default value of " + Describe(unread.Type),
-                "a value used here holds it (a field or element never assigned), and the default of a library struct outside the pure library is not made at compile time")
+                "a value used here holds it (a field or element never assigned), and " + WhyNotMade(unread))
             : Unknown.Value;
 
     /// <summary>Reports PW9003 at the site: the design throws here when it runs.</summary>

@@ -31,19 +31,23 @@ internal sealed partial class Interpreter
 
         if (session.IsInSource(method) && !method.IsImplicitlyDeclared && (method.MethodKind is MethodKind.Ordinary or MethodKind.LocalFunction or MethodKind.ExplicitInterfaceImplementation))
         {
+            // A struct method called on a value that is not a variable (a readonly field, a property, a call's result)
+            // runs on a copy, as in C#: what it changes is not kept.
+            if (receiver is InterpretedObject { Type.IsValueType: true } structValue && !IsVariable(invocation.Instance!, frame))
+                receiver = structValue.Copy();
             if (invocation.IsVirtual && receiver is InterpretedObject instance)
                 method = FindOverride(instance.Type, method) ?? method;
-            var (arguments, references) = Arguments(invocation.Arguments, method, frame);
-            if (arguments is null) return Unknown.Value;
-            return InvokeUser(method, receiver as InterpretedObject ?? (method.IsStatic ? null : frame.Instance), arguments, references, invocation, frame);
+            // Run even when an argument is unknown: what depends on it stays unknown inside, and the rest of what the
+            // method does (state it changes, devices it makes) is not lost.
+            var (arguments, references) = Arguments(invocation.Arguments, method, frame, keepUnknown: true);
+            return InvokeUser(method, receiver as InterpretedObject ?? (method.IsStatic ? null : frame.Instance), arguments!, references, invocation, frame);
         }
 
         if (method.MethodKind == MethodKind.DelegateInvoke)
         {
-            var (delegateArguments, _) = Arguments(invocation.Arguments, method, frame);
-            if (delegateArguments is null) return Unknown.Value;
+            var (delegateArguments, _) = Arguments(invocation.Arguments, method, frame, keepUnknown: true);
             return receiver is Closure closure
-                ? CallClosure(closure, delegateArguments, invocation)
+                ? CallClosure(closure, delegateArguments!, invocation)
                 : Unsupported(invocation, "this delegate call", "the delegate was not made by the design's code");
         }
 
@@ -64,8 +68,12 @@ internal sealed partial class Interpreter
                 "it is outside what compile-time elaboration runs (only the Phaseward DSL, methods of this compilation and pure library members such as string, Math, LINQ and the collections)");
 
         var (values, byReference) = Arguments(invocation.Arguments, method, frame);
-        if (values is null) return Unknown.Value;
-        return CallClr(invocation, method, receiver, values, byReference);
+        var result = values is null ? Unknown.Value : CallClr(invocation, method, receiver, values, byReference);
+        // A library call that could not be made (or failed half-way) may have changed the collections it was given or
+        // called on: they become unknown, never read as they were before the call.
+        if (Unknown.Is(result) && !ClrTypes.IsDsl(method))
+            PoisonMutables(invocation, frame);
+        return result;
     }
 
     /// <summary>
@@ -125,9 +133,11 @@ internal sealed partial class Interpreter
                 Charge(site, result);
             return FromClr(result);
         }
-        catch (TargetInvocationException e) when (e.InnerException is ElaborationStopped or UnknownValueException or DesignException)
+        catch (TargetInvocationException e) when (e.InnerException is ElaborationStopped or UnknownValueException or DesignException
+            || e.InnerException?.InnerException is UnknownValueException)
         {
-            if (e.InnerException is UnknownValueException unknown) return UnknownFrom(unknown, site);
+            // A library method may wrap what a callback threw (Array.Sort: "Failed to compare two elements").
+            if ((e.InnerException as UnknownValueException ?? e.InnerException?.InnerException) is UnknownValueException unknown) return UnknownFrom(unknown, site);
             System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e.InnerException).Throw();
             throw;
         }
@@ -157,10 +167,11 @@ internal sealed partial class Interpreter
     }
 
     /// <summary>
-    /// Evaluates arguments into parameter order. Returns null values when an argument is unknown (the call is then skipped
-    /// without a report: the unknown value was reported where it arose).
+    /// Evaluates arguments into parameter order. Returns null values when an argument is unknown (a native call is then
+    /// skipped without a report: the unknown value was reported where it arose).
     /// </summary>
-    private (object?[]? Values, Variable?[] References) Arguments(ImmutableArray<IArgumentOperation> arguments, IMethodSymbol method, Frame frame)
+    /// <param name="keepUnknown">Give the values even when one is unknown (for the design's own methods, which are run anyway).</param>
+    private (object?[]? Values, Variable?[] References) Arguments(ImmutableArray<IArgumentOperation> arguments, IMethodSymbol method, Frame frame, bool keepUnknown = false)
     {
         var values = new object?[method.Parameters.Length];
         // Allocated only when a ref/out argument needs it (DSL calls never do); an empty array means none.
@@ -192,7 +203,7 @@ internal sealed partial class Interpreter
             values[ordinal] = value;
         }
 
-        return (unknown ? null : values, references ?? Array.Empty<Variable?>());
+        return (unknown && !keepUnknown ? null : values, references ?? Array.Empty<Variable?>());
     }
 
     /// <summary>Runs a method, local function or accessor declared in this compilation.</summary>
@@ -227,6 +238,7 @@ internal sealed partial class Interpreter
                     frame.Declare(parameters[i], CopyIfValue(arguments[i]));
             }
 
+            frame.TypeArguments = TypeArgumentsOf(method, caller);
             if (IsIterator(body))
                 frame.Yielded = new List<object?>();
             Execute(body, frame);
@@ -240,6 +252,31 @@ internal sealed partial class Interpreter
             callers = outerCallers;
             LeaveCall();
         }
+    }
+
+    /// <summary>
+    /// The type arguments a call of a generic method (or of a method of a generic type) runs with, each resolved through
+    /// the caller's own (a generic helper calling another with its T). Null for a method that is not generic.
+    /// </summary>
+    private static Dictionary<ITypeParameterSymbol, ITypeSymbol>? TypeArgumentsOf(IMethodSymbol method, Frame caller)
+    {
+        Dictionary<ITypeParameterSymbol, ITypeSymbol>? arguments = null;
+        void Add(ImmutableArray<ITypeParameterSymbol> parameters, ImmutableArray<ITypeSymbol> types)
+        {
+            for (var i = 0; i < parameters.Length && i < types.Length; i++)
+            {
+                var type = types[i] is ITypeParameterSymbol outer ? caller.TypeArgumentOf(outer) ?? outer : types[i];
+                if (!SymbolEqualityComparer.Default.Equals(type, parameters[i]))
+                    (arguments ??= new(SymbolEqualityComparer.Default))[(ITypeParameterSymbol)parameters[i].OriginalDefinition] = type;
+            }
+        }
+
+        if (method.IsGenericMethod)
+            Add(method.OriginalDefinition.TypeParameters, method.TypeArguments);
+        for (var type = method.ContainingType; type is not null; type = type.ContainingType)
+            if (type.IsGenericType)
+                Add(type.OriginalDefinition.TypeParameters, type.TypeArguments);
+        return arguments;
     }
 
     private bool IsIterator(IOperation body)
@@ -302,13 +339,32 @@ internal sealed partial class Interpreter
         _ => null,
     };
 
+    /// <summary>
+    /// Does the operation denote a variable (a struct method called on it changes it), rather than a value (a readonly
+    /// field outside its constructor, an 'in' parameter, a property, a call's result: the method runs on a copy)?
+    /// </summary>
+    private static bool IsVariable(IOperation operation, Frame frame) => operation switch
+    {
+        ILocalReferenceOperation local => local.Local.RefKind != RefKind.RefReadOnly,
+        IParameterReferenceOperation parameter => parameter.Parameter.RefKind is not (RefKind.In or RefKind.RefReadOnlyParameter),
+        IInstanceReferenceOperation or IArrayElementReferenceOperation => true,
+        IFieldReferenceOperation field => (!field.Field.IsReadOnly || IsConstructorOf(frame, field.Field.ContainingType))
+            && (field.Field.IsStatic || field.Instance is null || field.Instance.Type?.IsReferenceType == true || IsVariable(field.Instance, frame)),
+        _ => false,
+    };
+
+    /// <summary>Is the code running in a constructor of the type (where its readonly fields may still be written)?</summary>
+    private static bool IsConstructorOf(Frame frame, INamedTypeSymbol type)
+        => frame.Method is { MethodKind: MethodKind.Constructor or MethodKind.StaticConstructor } method
+            && SymbolEqualityComparer.Default.Equals(method.ContainingType.OriginalDefinition, type.OriginalDefinition);
+
     /// <summary>The variable an operation denotes (for ref/out arguments), declaring 'out var' locals.</summary>
     private Variable? VariableOf(IOperation operation, Frame frame)
     {
         switch (operation)
         {
             case IDeclarationExpressionOperation { Expression: ILocalReferenceOperation local }:
-                frame.Declare(local.Local, DefaultOf(local.Local.Type));
+                frame.Declare(local.Local, DefaultOf(local.Local.Type, frame));
                 return frame.Find(local.Local);
             case ILocalReferenceOperation local:
                 return frame.Find(local.Local);

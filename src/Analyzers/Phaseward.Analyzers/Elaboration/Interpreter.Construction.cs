@@ -28,15 +28,15 @@ internal sealed partial class Interpreter
     private object? CreateObject(IObjectCreationOperation creation, INamedTypeSymbol type, IMethodSymbol constructor, Frame frame)
     {
         Step(creation);
-        var (arguments, _) = Arguments(creation.Arguments, constructor, frame);
-        if (arguments is null) return Unknown.Value;
+        // Built even when an argument is unknown: the fields that depend on it stay unknown, the others are known.
+        var (arguments, _) = Arguments(creation.Arguments, constructor, frame, keepUnknown: true);
         var made = NewObject(type);
         EnterCall(creation);
         var outerCallers = callers;
         PushCaller(creation.Syntax);
         try
         {
-            Construct(made, constructor, arguments, creation);
+            Construct(made, constructor, arguments!, creation);
         }
         finally
         {

@@ -16,7 +16,7 @@ internal sealed partial class Interpreter
     {
         var type = creation.Type as INamedTypeSymbol;
         if (type is not null && session.IsInSource(type) && creation.Constructor is { } sourceConstructor)
-            return CreateObject(creation, type, sourceConstructor, frame);
+            return CreateObject(creation, ConstructedIn(type, frame) ?? type, sourceConstructor, frame);
 
         if (type is not null && !ClrTypes.IsDsl(type) && creation.Constructor is { } libraryConstructor && Library.IsPure(libraryConstructor))
             return CreateLibraryObject(creation, libraryConstructor, frame);
@@ -83,7 +83,7 @@ internal sealed partial class Interpreter
         ChargeMemory(creation, 8L * length);
         var element = ((IArrayTypeSymbol)creation.Type!).ElementType;
         var items = new object?[length];
-        var initial = DefaultOf(element);
+        var initial = DefaultOf(element, frame);
         if (initial is InterpretedObject && length > 0)
         {
             // Elements of a struct type are values: one default each, not one shared by every slot.

@@ -84,7 +84,7 @@ internal sealed partial class Interpreter
     private bool Catches(ICatchClauseOperation clause, object thrown, Frame frame)
     {
         var type = clause.ExceptionType;
-        if (type.SpecialType != SpecialType.System_Object && type.ToDisplayString() != "System.Exception" && IsOfType(thrown, type) != true)
+        if (type.SpecialType != SpecialType.System_Object && type.ToDisplayString() != "System.Exception" && IsOfType(thrown, type, frame) != true)
             return false;
         if (clause.ExceptionDeclarationOrExpression is IVariableDeclaratorOperation declarator)
             frame.Declare(declarator.Symbol, thrown);

@@ -69,9 +69,11 @@ internal sealed partial class Interpreter
     {
         if (defaultValue.Type is null)
             return null;
-        var value = DefaultOf(defaultValue.Type);
-        return value is UnmadeDefault
-            ? Unsupported(defaultValue, "the default value of " + Describe(defaultValue.Type), "it is a library struct outside the pure library")
+        var value = DefaultOf(defaultValue.Type, frame);
+        return value is UnmadeDefault unmade
+            ? Unsupported(defaultValue, "the default value of " + Describe(defaultValue.Type), unmade.Type is ITypeParameterSymbol
+                ? "the type argument it stands for is not known where the generic code is interpreted"
+                : "it is a library struct outside the pure library")
             : value;
     }
 
@@ -132,8 +134,16 @@ internal sealed partial class Interpreter
         return clr is { IsEnum: true } ? Enum.ToObject(clr, number) : System.Convert.ToInt32(number, CultureInfo.InvariantCulture);
     }
 
-    private object? DefaultOf(ITypeSymbol type)
+    private object? DefaultOf(ITypeSymbol type, Frame? frame = null)
     {
+        if (type is ITypeParameterSymbol parameter)
+        {
+            // default(T) is what T stands for where the generic code runs; unknown, it is reported where it is read.
+            if (frame?.TypeArgumentOf(parameter) is { } argument and not ITypeParameterSymbol)
+                return DefaultOf(argument);
+            return parameter.HasReferenceTypeConstraint ? null : new UnmadeDefault(parameter);
+        }
+
         switch (type.SpecialType)
         {
             case SpecialType.System_Int32: return 0;
@@ -147,7 +157,7 @@ internal sealed partial class Interpreter
         if (type.TypeKind == TypeKind.Enum)
             return ToEnum(0, type);
         if (type.IsTupleType && type is INamedTypeSymbol tuple)
-            return new TupleValue(tuple.TupleElements.Select(e => DefaultOf(e.Type)).ToArray());
+            return new TupleValue(tuple.TupleElements.Select(e => DefaultOf(e.Type, frame)).ToArray());
         if (!type.IsValueType || type.OriginalDefinition.SpecialType == SpecialType.System_Nullable_T)
             return null;
         if (ClrTypes.IsDsl(type) && ClrTypes.Resolve(type) is { } clr)

@@ -146,16 +146,46 @@ internal sealed partial class Interpreter
     /// static initialization the way C# does: every static field and auto-property initializer in declaration order,
     /// then the static constructor's body; values it assigns are never read as defaults.
     /// </summary>
+    /// <remarks>
+    /// A generic type has static storage per constructed type (<c>Holder&lt;int&gt;.Value</c> is not
+    /// <c>Holder&lt;long&gt;.Value</c>): inside its own code, its type parameters are resolved through the frame.
+    /// </remarks>
     private Variable StaticVariable(ISymbol member, Frame frame)
     {
-        var key = member.OriginalDefinition;
+        var type = member.ContainingType is { } containing ? StaticOwner(containing, frame) : null;
+        var key = type is null || SymbolEqualityComparer.Default.Equals(type, type.OriginalDefinition)
+            ? member.OriginalDefinition
+            : type.GetMembers(member.Name).FirstOrDefault(m => SymbolEqualityComparer.Default.Equals(m.OriginalDefinition, member.OriginalDefinition)) ?? member.OriginalDefinition;
         if (statics.TryGetValue(key, out var variable))
             return variable;
-        if (member.ContainingType is { } type)
-            InitializeStatics(type.OriginalDefinition);
+        if (type is not null)
+            InitializeStatics(type);
         if (!statics.TryGetValue(key, out variable))
-            statics[key] = variable = new Variable(DefaultOf(member is IFieldSymbol f ? f.Type : ((IPropertySymbol)member).Type));
+            statics[key] = variable = new Variable(DefaultOf(key is IFieldSymbol f ? f.Type : ((IPropertySymbol)key).Type));
         return variable;
+    }
+
+    /// <summary>The type whose static storage a member lives in: its generic definition's type arguments resolved, else the definition.</summary>
+    private static INamedTypeSymbol StaticOwner(INamedTypeSymbol type, Frame frame)
+        => !type.IsGenericType || type.ContainingType is not null ? type.OriginalDefinition : ConstructedIn(type, frame) ?? type.OriginalDefinition;
+
+    /// <summary>
+    /// A generic type (not nested) with the type parameters among its type arguments resolved through the frame
+    /// (<c>Box&lt;T&gt;</c> in a call with T = int is <c>Box&lt;int&gt;</c>); null when one is not known there.
+    /// </summary>
+    private static INamedTypeSymbol? ConstructedIn(INamedTypeSymbol type, Frame frame)
+    {
+        if (!type.IsGenericType || type.ContainingType is not null || !type.TypeArguments.Any(a => a is ITypeParameterSymbol))
+            return type;
+        var arguments = new ITypeSymbol[type.TypeArguments.Length];
+        for (var i = 0; i < arguments.Length; i++)
+        {
+            arguments[i] = type.TypeArguments[i] is ITypeParameterSymbol parameter ? frame.TypeArgumentOf(parameter) ?? parameter : type.TypeArguments[i];
+            if (arguments[i] is ITypeParameterSymbol)
+                return null;
+        }
+
+        return type.OriginalDefinition.Construct(arguments);
     }
 
     private void InitializeStatics(INamedTypeSymbol type)
@@ -174,11 +204,15 @@ internal sealed partial class Interpreter
             if (stored is null)
                 continue;
             var variable = new Variable(DefaultOf(stored is IFieldSymbol f ? f.Type : ((IPropertySymbol)stored).Type));
-            statics[stored.OriginalDefinition] = variable;
+            statics[SymbolEqualityComparer.Default.Equals(type, type.OriginalDefinition) ? stored.OriginalDefinition : stored] = variable;
             storage.Add((stored, variable));
         }
 
-        var frame = new Frame(null, null, null);
+        // The initializers and the static constructor see the type's own type arguments (default(T), Holder<T>.Value).
+        var typeArguments = SymbolEqualityComparer.Default.Equals(type, type.OriginalDefinition) ? null
+            : type.OriginalDefinition.TypeParameters.Zip(type.TypeArguments, (p, a) => (p, a))
+                .ToDictionary(pair => pair.p, pair => pair.a, (IEqualityComparer<ITypeParameterSymbol>)SymbolEqualityComparer.Default);
+        var frame = new Frame(null, null, null) { TypeArguments = typeArguments };
         foreach (var (member, variable) in storage)
             if (InitializerOf(member) is { } initializer)
                 variable.Value = Evaluate(initializer, frame);
@@ -196,7 +230,7 @@ internal sealed partial class Interpreter
 
             var statements = (IOperation?)body.BlockBody ?? body.ExpressionBody;
             if (statements is not null)
-                Execute(statements, new Frame(constructor, null, null));
+                Execute(statements, new Frame(constructor, null, null) { TypeArguments = typeArguments });
         }
     }
 

@@ -120,6 +120,9 @@ internal sealed partial class Interpreter
         var target = conversion.Type;
         if (target is null || value is null)
             return value;
+        if (conversion.IsTryCast || !conversion.Conversion.IsImplicit && !conversion.Conversion.IsNumeric
+            && Microsoft.CodeAnalysis.CSharp.CSharpExtensions.GetConversion(conversion) is { IsUnboxing: true } or { IsReference: true })
+            return CheckedCast(conversion, value, target, frame);
         if (target is INamedTypeSymbol { OriginalDefinition.SpecialType: SpecialType.System_Nullable_T } nullable)
             target = nullable.TypeArguments[0];
         if (target.TypeKind == TypeKind.Enum)
@@ -132,6 +135,30 @@ internal sealed partial class Interpreter
         }
 
         return value;
+    }
+
+    /// <summary>
+    /// A cast that tests the value's type at run time (a downcast, an unboxing, <c>as</c>): the value when it is of the
+    /// type; for <c>as</c> null when not, for a cast the InvalidCastException the run throws. Never the value unchanged.
+    /// </summary>
+    private object? CheckedCast(IConversionOperation conversion, object value, ITypeSymbol target, Frame frame)
+    {
+        var underlying = NullableUnderlying(target) ?? target;
+        if (underlying is ITypeParameterSymbol parameter && frame.TypeArgumentOf(parameter) is { } argument and not ITypeParameterSymbol)
+            underlying = NullableUnderlying(argument) ?? argument;
+        // Numbers may be held in a wider type than declared (a short as an int): for an unboxing only their kind is tested.
+        var fits = IsNumeric(underlying) || underlying.SpecialType is SpecialType.System_Byte or SpecialType.System_SByte or SpecialType.System_Int16
+                or SpecialType.System_UInt16 or SpecialType.System_UInt32 or SpecialType.System_UInt64 or SpecialType.System_Decimal
+            ? IsNumericValue(value) || value is Enum || value is decimal
+            : IsOfType(value, underlying, frame);
+        if (fits is null)
+            return Unsupported(conversion, "this cast to " + Describe(target), "whether the value is of that type cannot be decided at compile time");
+        if (fits.Value)
+            return value;
+        if (conversion.IsTryCast)
+            return null;
+        Throws(conversion.Syntax, "InvalidCastException: the value cannot be cast to " + Describe(target));
+        return Unknown.Value;
     }
 
     private object? VisitInterpolatedString(IInterpolatedStringOperation interpolated, Frame frame)

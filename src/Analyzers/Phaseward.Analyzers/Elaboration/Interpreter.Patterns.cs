@@ -89,14 +89,14 @@ internal sealed partial class Interpreter
     {
         var value = PatternInput;
         bool? matches = declaration.MatchesNull ? true
-            : declaration.MatchedType is { } declared && !SymbolEqualityComparer.Default.Equals(declared, declaration.InputType) ? IsOfType(value, declared)
+            : declaration.MatchedType is { } declared && !SymbolEqualityComparer.Default.Equals(declared, declaration.InputType) ? IsOfType(value, declared, frame)
             : value is not null;
         if (matches == true && declaration.DeclaredSymbol is { } symbol)
             frame.Declare(symbol, value);
         return Matched(matches);
     }
 
-    private object? VisitTypePattern(ITypePatternOperation typePattern, Frame frame) => Matched(IsOfType(PatternInput, typePattern.MatchedType));
+    private object? VisitTypePattern(ITypePatternOperation typePattern, Frame frame) => Matched(IsOfType(PatternInput, typePattern.MatchedType, frame));
 
     private object? VisitNegatedPattern(INegatedPatternOperation negated, Frame frame)
         => Matched(Match(negated.Pattern, PatternInput, frame) is { } inner ? !inner : null);
@@ -116,8 +116,8 @@ internal sealed partial class Interpreter
     private bool? MatchRecursive(IRecursivePatternOperation pattern, object? value, Frame frame)
     {
         if (value is null) return false;
-        if (!SymbolEqualityComparer.Default.Equals(pattern.MatchedType, pattern.InputType) && IsOfType(value, pattern.MatchedType) is not true)
-            return IsOfType(value, pattern.MatchedType) is null ? null : false;
+        if (!SymbolEqualityComparer.Default.Equals(pattern.MatchedType, pattern.InputType) && IsOfType(value, pattern.MatchedType, frame) is not true)
+            return IsOfType(value, pattern.MatchedType, frame) is null ? null : false;
         if (!pattern.DeconstructionSubpatterns.IsEmpty)
         {
             var parts = value as TupleValue ?? DeconstructedParts(value);

@@ -18,10 +18,32 @@ internal sealed partial class Interpreter
             foreach (var declarator in declaration.Declarators)
             {
                 var initializer = declarator.Initializer ?? declaration.Initializer;
-                frame.Declare(declarator.Symbol, initializer is null ? DefaultOf(declarator.Symbol.Type) : CopyIfValue(Evaluate(initializer.Value, frame)));
+                if (declarator.Symbol.IsRef && initializer is not null)
+                    BindRefLocal(declarator.Symbol, initializer.Value, frame);
+                else
+                    frame.Declare(declarator.Symbol, initializer is null ? DefaultOf(declarator.Symbol.Type, frame) : CopyIfValue(Evaluate(initializer.Value, frame)));
             }
 
         return Completion.Normal;
+    }
+
+    /// <summary>
+    /// <c>ref var r = ref x;</c> (or <c>r = ref x;</c>): r becomes another name for x's variable, so writes through either
+    /// are seen by both. A ref to something that is not a variable of the design (an array element, a ref return) is PW9001,
+    /// never a copy that would silently lose the writes.
+    /// </summary>
+    private void BindRefLocal(ILocalSymbol local, IOperation target, Frame frame)
+    {
+        if (VariableOf(target, frame) is { } variable)
+        {
+            frame.Bind(local, variable);
+            return;
+        }
+
+        var unknown = Unsupported(target, "the ref local " + Describe(local), "only a ref to a local, parameter or field of the design is elaborated (not to an array element or a ref return)");
+        frame.Declare(local, unknown);
+        // What it refers to may be written through it: the arrays and objects it was taken from become unknown.
+        PoisonMutables(target, frame);
     }
 
     private Completion VisitExpressionStatement(IExpressionStatementOperation statement, Frame frame)
@@ -148,21 +170,38 @@ internal sealed partial class Interpreter
                 collectionOnly = true;
             }
 
-            var variable = target switch
-            {
-                ILocalReferenceOperation local => frame.Find(local.Local),
-                IParameterReferenceOperation parameter => frame.Find(parameter.Parameter) ?? frame.Instance?.Find(parameter.Parameter),
-                IFieldReferenceOperation { Field.IsStatic: false } field => frame.Instance?.Find(field.Field),
-                IFieldReferenceOperation { Field.IsStatic: true } field when session.IsInSource(field.Field) => StaticVariable(field.Field, frame),
-                IPropertyReferenceOperation { Property.IsStatic: true } property when session.IsInSource(property.Property) && IsAutoProperty(property.Property)
-                    => StaticVariable(property.Property, frame),
-                IPropertyReferenceOperation { Property.IsStatic: false } property => frame.Instance?.Find(property.Property),
-                _ => null,
-            };
+            var variable = target is null ? null : VariableNamed(target, frame);
             if (variable is not null && (!collectionOnly || variable.Value is object?[] || variable.Value is List<object?>))
                 variable.Value = Unknown.Value;
         }
     }
+
+    /// <summary>
+    /// A library call (or a ref) that could not be evaluated may have changed the collections and objects it was given:
+    /// the variables its arguments and receiver name that hold one become unknown, never read as they were before.
+    /// </summary>
+    private void PoisonMutables(IOperation skipped, Frame frame)
+    {
+        foreach (var operation in skipped.DescendantsAndSelf())
+            if (VariableNamed(operation, frame) is { Value: { } value } variable && MayChange(value))
+                variable.Value = Unknown.Value;
+    }
+
+    private static bool MayChange(object value)
+        => value is object?[] or ICollection or System.Text.StringBuilder or InterpretedObject { Type.IsValueType: false };
+
+    /// <summary>The variable a local, parameter, field or auto-property reference names in this frame (null for anything else).</summary>
+    private Variable? VariableNamed(IOperation reference, Frame frame) => reference switch
+    {
+        ILocalReferenceOperation local => frame.Find(local.Local),
+        IParameterReferenceOperation parameter => frame.Find(parameter.Parameter) ?? frame.Instance?.Find(parameter.Parameter),
+        IFieldReferenceOperation { Field.IsStatic: false, Instance: null or IInstanceReferenceOperation } field => frame.Instance?.Find(field.Field),
+        IFieldReferenceOperation { Field.IsStatic: true } field when session.IsInSource(field.Field) => StaticVariable(field.Field, frame),
+        IPropertyReferenceOperation { Property.IsStatic: true } property when session.IsInSource(property.Property) && IsAutoProperty(property.Property)
+            => StaticVariable(property.Property, frame),
+        IPropertyReferenceOperation { Property.IsStatic: false, Instance: null or IInstanceReferenceOperation } property => frame.Instance?.Find(property.Property),
+        _ => null,
+    };
 
     private Completion VisitBlock(IBlockOperation block, Frame frame)
     {

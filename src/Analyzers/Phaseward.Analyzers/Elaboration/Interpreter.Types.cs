@@ -11,15 +11,23 @@ internal sealed partial class Interpreter
     {
         var value = Evaluate(test.ValueOperand, frame);
         if (Unknown.Is(value)) return value;
-        var result = IsOfType(value, test.TypeOperand);
+        var result = IsOfType(value, test.TypeOperand, frame);
         if (result is null) return Unsupported(test, "this type test", "the type " + test.TypeOperand.ToDisplayString() + " cannot be tested at compile time");
         return test.IsNegated ? !result.Value : result.Value;
     }
 
     /// <summary>Is the (non-null) value of the given type? Null when that cannot be decided.</summary>
-    private bool? IsOfType(object? value, ITypeSymbol type)
+    private bool? IsOfType(object? value, ITypeSymbol type, Frame? frame)
     {
         if (value is null) return false;
+        if (type is ITypeParameterSymbol parameter)
+        {
+            // 'is T' tests what T stands for where the generic code runs; not known, it cannot be decided.
+            if (frame?.TypeArgumentOf(parameter) is not { } argument || argument is ITypeParameterSymbol)
+                return null;
+            type = argument;
+        }
+
         if (type.SpecialType == SpecialType.System_Object) return true;
         if (NullableUnderlying(type) is { } underlying) type = underlying;
         if (value is InterpretedObject instance)
