@@ -239,6 +239,223 @@ public class HostileDesignTests
         ParityTests.AssertParity(designs, design);
     }
 
+    [Fact]
+    public void PatternsCompareWholeNumbersExactly()
+    {
+        // A long above 2^53 and a ulong above long.MaxValue in patterns: before, the first was rounded through double (a
+        // wrong arm) and the second made the elaborator fail (OverflowException).
+        var designs = new InMemoryDesigns(("/hostile/D.cs", Design("""
+            long wide = 9007199254740993L;
+            ulong top = ulong.MaxValue;
+            count = (wide is > 9007199254740992L ? 1 : 0) + (top is 18446744073709551615UL ? 1 : 0)
+                + top switch { 0 => 10, 18446744073709551615UL => 1, _ => 20 } + (double.NaN is 0.0 ? 5 : 0);
+            """)));
+        ParityTests.AssertParity(designs, "Hostile.D");
+        Assert.Equal(3, designs.CompileTime("Hostile.D").Netlist!.Devices.Count);
+    }
+
+    [Fact]
+    public Task AnArrayWithALongLengthIsChargedToTheMemoryBudget()
+        => new PhasewardAnalyzerTest<ElaborationAnalyzer>(Design("""
+                long lanes = 5_000_000_000L;
+                var nets = {|#0:new Net[lanes]|};
+                count = nets.Length;
+                """),
+                new DiagnosticResult(RuleCatalog.ElaborationBudgetExceeded.Id, DiagnosticSeverity.Warning).WithLocation(0).WithArguments("D",
+                    "the memory budget of 268435456 bytes (arrays, strings and collections the design's code makes; phaseward.elaboration_memory_budget) would be exceeded by 40000000000 more"))
+            .RunAsync();
+
+    [Theory]
+    [InlineData("Iterators.EndlessWithBreak")]
+    [InlineData("Iterators.MakingDevices")]
+    [InlineData("Iterators.ThrowingConsumer")]
+    [InlineData("Iterators.Nested")]
+    public void AForeachOverAnIteratorRunsItOnlyAsFarAsTheLoopTakesIt(string design)
+    {
+        // Before, an iterator was run to completion when called: an endless one stopped at the step budget (PW9002), one
+        // that makes devices made all of them, before the loop's own, and its finally ran before the loop body.
+        var designs = new InMemoryDesigns(("/hostile/Iterators.cs", """
+            using System;
+            using System.Collections.Generic;
+            using System.Linq;
+            using Phaseward;
+
+            namespace Iterators
+            {
+                public sealed class EndlessWithBreak : Design
+                {
+                    private int made;
+
+                    private IEnumerable<int> Numbers()
+                    {
+                        for (var i = 0; ; i++)
+                        {
+                            made++;
+                            yield return i;
+                        }
+                    }
+
+                    protected override void Describe(Circuit c)
+                    {
+                        var x = c.Input("a");
+                        foreach (var i in Numbers())
+                        {
+                            if (i >= 3) break;
+                            x = c.Inverter(x, "it" + i);
+                        }
+
+                        c.Inverter(x, "made" + made);
+                    }
+                }
+
+                public sealed class MakingDevices : Design
+                {
+                    private static IEnumerable<Net> Stages(Circuit c, Net x, string prefix)
+                    {
+                        try
+                        {
+                            for (var i = 0; i < 10; i++)
+                            {
+                                x = c.Inverter(x, prefix + i);
+                                yield return x;
+                            }
+                        }
+                        finally
+                        {
+                            c.Buffer(x, prefix + "end");
+                        }
+                    }
+
+                    private static int Find(Circuit c)
+                    {
+                        foreach (var n in Stages(c, c.Input("b"), "u"))
+                            if (n.Name == "u1") return 2;
+                        return 0;
+                    }
+
+                    protected override void Describe(Circuit c)
+                    {
+                        var taken = 0;
+                        foreach (var n in Stages(c, c.Input("a"), "st"))
+                        {
+                            c.Inverter(n, "after" + taken);
+                            if (++taken == 2) break;
+                        }
+
+                        c.Inverter(c.Input("z"), "found" + Find(c));
+                    }
+                }
+
+                public sealed class ThrowingConsumer : Design
+                {
+                    private static readonly List<string> Log = new();
+
+                    private static IEnumerable<int> Three()
+                    {
+                        try
+                        {
+                            yield return 1;
+                            yield return 2;
+                            yield return 3;
+                        }
+                        finally
+                        {
+                            Log.Add("done");
+                        }
+                    }
+
+                    protected override void Describe(Circuit c)
+                    {
+                        try
+                        {
+                            foreach (var i in Three())
+                            {
+                                if (i == 2) throw new InvalidOperationException("stop");
+                                Log.Add("i" + i);
+                            }
+                        }
+                        catch (InvalidOperationException)
+                        {
+                            Log.Add("caught");
+                        }
+
+                        c.Inverter(c.Input("a"), string.Join("_", Log));
+                    }
+                }
+
+                public sealed class Nested : Design
+                {
+                    private static IEnumerable<int> Upto(int n)
+                    {
+                        for (var i = 0; i < n; i++)
+                            yield return i;
+                    }
+
+                    private static IEnumerable<int> Pairs()
+                    {
+                        foreach (var a in Upto(3))
+                            foreach (var b in Upto(a))
+                                yield return a * 10 + b;
+                    }
+
+                    protected override void Describe(Circuit c)
+                    {
+                        var names = new List<string>();
+                        foreach (var p in Pairs())
+                        {
+                            if (p > 20) break;
+                            names.Add("p" + p);
+                        }
+
+                        c.Inverter(c.Input("a"), string.Join("_", names) + Upto(4).Sum());
+                    }
+                }
+            }
+            """));
+        ParityTests.AssertParity(designs, design);
+    }
+
+    [Theory]
+    [InlineData("var first = {|#0:Numbers()|}.First(); count = first + 3;")]
+    [InlineData("var numbers = {|#0:Numbers()|}; var before = made; count = before + numbers.Count() - 2;")]
+    public async Task AnIteratorWithEffectsRunToCompletionWhenCalledIsPW9001(string statements)
+    {
+        // Not enumerated straight by a foreach, the iterator runs to completion when called: its effects (here 'made++')
+        // would come earlier than in C# (First takes one value; a sequence stored first has not run yet).
+        var source = Design(statements, members: """
+            private int made;
+            private System.Collections.Generic.IEnumerable<int> Numbers() { for (var i = 0; i < 5; i++) { made++; yield return i; } }
+            """);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>("using System.Linq;\n" + source, NotElaborated(0, "the iterator 'D.Numbers()'",
+            "it changes state outside itself as it runs (a field, a captured variable, a collection it did not make, devices), and an iterator not enumerated "
+            + "straight by a foreach is run to completion when called, so those changes would come earlier than in C#")).RunAsync();
+        AssertNoStage("using System.Linq;\n" + source);
+    }
+
+    [Fact]
+    public void AnIteratorWithoutEffectsIsRunToCompletionSilently()
+    {
+        // An iterator that only fills what it makes itself (a local list, new objects) and reads fields is not reported.
+        var designs = new InMemoryDesigns(("/hostile/D.cs", "using System.Linq;\n" + Design("count = Stages().Sum(s => s.N) - 12;", members: """
+            private readonly int[] widths = { 1, 2 };
+            private System.Collections.Generic.IEnumerable<Stage> Stages()
+            {
+                var seen = new System.Collections.Generic.List<int>();
+                foreach (var w in widths)
+                {
+                    seen.Add(w);
+                    var stage = new Stage { N = w };
+                    stage.N += seen.Count;
+                    yield return stage;
+                }
+
+                yield return new Stage { N = seen.Sum() * 3 };
+            }
+            """, declarations: "public sealed class Stage { public int N; }")));
+        ParityTests.AssertParity(designs, "Hostile.D");
+        Assert.Equal(3, designs.CompileTime("Hostile.D").Netlist!.Devices.Count);
+    }
+
     private static DiagnosticResult NotElaborated(int location, string what, string why)
         => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
 

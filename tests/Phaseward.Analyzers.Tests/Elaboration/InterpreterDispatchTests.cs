@@ -35,7 +35,7 @@ public class InterpreterDispatchTests
         ["InitializerOf"] = "the value of a field's or property's initializer found by its declaration",
         ["BodyOf"] = "the body of a method found by its declaration",
         ["Construct"] = "the ': this(...)'/': base(...)' initializer of a constructor",
-        ["VisitForEachLoop"] = "the loop variable of one foreach (a declared variable or a deconstruction)",
+        ["RunForEachBody"] = "the loop variable of one foreach (a declared variable or a deconstruction)",
         ["VisitSwitch"] = "the clauses of one switch statement (case value, pattern, default)",
         ["InterpolateParts"] = "the text and holes of one interpolated string",
         ["VisitUsing"] = "the resources of one using statement (declarations or a value)",

@@ -57,12 +57,21 @@ internal sealed class Frame
         return null;
     }
 
+    /// <summary>
+    /// Where an iterator run by a foreach hands each yielded value (the loop body); false back means the loop stopped
+    /// (break or return), so the iterator stops too. Null when the iterator collects its values (<see cref="Yielded"/>).
+    /// </summary>
+    public System.Func<object?, bool>? Consumer { get; set; }
+
     /// <summary>What an iterator method has yielded so far (null when the method is not an iterator).</summary>
     public List<object?>? Yielded { get; set; }
 
     public void Declare(ISymbol symbol, object? value) => variables[symbol] = new Variable(value);
 
     public void Bind(ISymbol symbol, Variable variable) => variables[symbol] = variable;
+
+    /// <summary>Is the local or parameter this frame's own (not one it captures from an enclosing method)?</summary>
+    public bool Declares(ISymbol symbol) => variables.ContainsKey(symbol);
 
     /// <summary>Finds a local or parameter here or in an enclosing method's frame (captured variables).</summary>
     public Variable? Find(ISymbol symbol)

@@ -14,10 +14,14 @@ namespace Phaseward.Analyzers.Elaboration;
 /// </remarks>
 internal sealed class InterpretedObject
 {
+    // Serials issued so far, by every interpreter (objects made later have larger serials).
+    private static long serials;
+
     private readonly Dictionary<ISymbol, Variable> members;
 
     public InterpretedObject(INamedTypeSymbol type, IObjectSemantics semantics)
     {
+        Serial = System.Threading.Interlocked.Increment(ref serials);
         Type = type;
         Semantics = semantics;
         members = new Dictionary<ISymbol, Variable>(SymbolEqualityComparer.Default);
@@ -25,12 +29,19 @@ internal sealed class InterpretedObject
 
     private InterpretedObject(InterpretedObject original)
     {
+        Serial = System.Threading.Interlocked.Increment(ref serials);
         Type = original.Type;
         Semantics = original.Semantics;
         members = new Dictionary<ISymbol, Variable>(original.members.Count, SymbolEqualityComparer.Default);
         foreach (var member in original.members)
             members.Add(member.Key, new Variable(member.Value.Value));
     }
+
+    /// <summary>The serial last issued: every object made after this moment has a larger <see cref="Serial"/>.</summary>
+    public static long LastSerial => System.Threading.Interlocked.Read(ref serials);
+
+    /// <summary>When the object was made, relative to the others (a copy is a new object).</summary>
+    public long Serial { get; }
 
     public INamedTypeSymbol Type { get; }
 

@@ -128,6 +128,8 @@ internal sealed partial class Interpreter
             case ILocalReferenceOperation local:
                 if (local.IsDeclaration || frame.Find(local.Local) is null)
                     frame.Declare(local.Local, DefaultOf(local.Local.Type, frame));
+                else if (!frame.Declares(local.Local))
+                    NoteEffect(); // a captured variable
                 return StoragePlace.Of(frame.Find(local.Local)!);
 
             case IDeclarationExpressionOperation declaration:
@@ -145,6 +147,7 @@ internal sealed partial class Interpreter
                 if (Unknown.Is(array) || Unknown.Is(index)) return default;
                 if (array is not object?[] items) break;
                 if (!IsWholeNumber(index)) break; // broken code
+                NoteStoreThrough(element.ArrayReference, frame);
                 var i = SlotIndex(element, index!, items);
                 return i < 0 ? default : new StoragePlace(() => items[i], v => items[i] = v);
 
@@ -164,6 +167,7 @@ internal sealed partial class Interpreter
 
         if (receiver is List<object?> list && property.IsIndexer)
         {
+            NoteStoreThrough(reference.Instance, frame);
             var index = Evaluate(reference.Arguments[0].Value, frame);
             if (Unknown.Is(index)) return default;
             var i = SlotIndex(reference, index!, list);
@@ -176,7 +180,11 @@ internal sealed partial class Interpreter
             if (interpretedObject is not null && FindOverride(interpretedObject.Type, property) is { } overriding)
                 property = overriding;
             if (IsAutoProperty(property))
+            {
+                NoteStoreInto(property.IsStatic ? null : interpretedObject);
                 return StoragePlace.Of(property.IsStatic ? StaticVariable(property, frame) : interpretedObject!.GetOrAdd(property));
+            }
+
             if (property.SetMethod is { } setter && session.IsInSource(setter))
                 return new StoragePlace(() => CallGetter(reference, property, interpretedObject, frame),
                     v => InvokeUser(setter, interpretedObject, new[] { v }, new Variable?[1], reference, frame));
@@ -184,6 +192,7 @@ internal sealed partial class Interpreter
         else if (receiver is not null && !ClrTypes.IsDsl(property) && Library.IsPure(property) && property.SetMethod is { } librarySetter)
         {
             // A dictionary entry, a StringBuilder's Length, an element of a library collection.
+            NoteStoreThrough(reference.Instance, frame);
             var (indexArguments, _) = Arguments(reference.Arguments, librarySetter, frame);
             if (indexArguments is null) return default;
             var getter = property.GetMethod;

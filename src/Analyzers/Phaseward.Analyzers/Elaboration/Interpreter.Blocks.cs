@@ -10,6 +10,7 @@ internal sealed partial class Interpreter
 {
     private object? PlaceBlock(IInvocationOperation invocation, Circuit circuit, Frame frame)
     {
+        NoteEffect();
         var (arguments, _) = Arguments(invocation.Arguments, invocation.TargetMethod, frame);
         if (arguments is null) return Unknown.Value;
         if (arguments[0] is not InterpretedObject block)

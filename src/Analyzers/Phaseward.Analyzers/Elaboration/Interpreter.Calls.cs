@@ -67,6 +67,8 @@ internal sealed partial class Interpreter
             return Unsupported(invocation, "the call to " + Describe(method),
                 "it is outside what compile-time elaboration runs (only the Phaseward DSL, methods of this compilation and pure library members such as string, Math, LINQ and the collections)");
 
+        if (!method.IsStatic && Mutators.Contains(method.Name) && receiver is not string)
+            NoteStoreThrough(invocation.Instance, frame);
         var (values, byReference) = Arguments(invocation.Arguments, method, frame);
         var result = values is null ? Unknown.Value : CallClr(invocation, method, receiver, values, byReference);
         // A library call that could not be made (or failed half-way) may have changed the collections it was given or
@@ -75,6 +77,14 @@ internal sealed partial class Interpreter
             PoisonMutables(invocation, frame);
         return result;
     }
+
+    /// <summary>The members of the pure library's collections and StringBuilder that change the object they are called on.</summary>
+    private static readonly HashSet<string> Mutators = new(StringComparer.Ordinal)
+    {
+        "Add", "AddRange", "Insert", "InsertRange", "Remove", "RemoveAt", "RemoveAll", "RemoveRange", "RemoveWhere", "Clear", "Push", "Pop",
+        "Enqueue", "Dequeue", "TryAdd", "TryPop", "TryDequeue", "TryRemove", "Sort", "Reverse", "Append", "AppendLine", "AppendFormat",
+        "AppendJoin", "Replace", "UnionWith", "IntersectWith", "ExceptWith", "SymmetricExceptWith", "TrimExcess", "EnsureCapacity", "CopyTo",
+    };
 
     /// <summary>
     /// Calls the real DSL (or library) member behind <paramref name="method"/>, telling the circuit where the call is.
@@ -106,6 +116,8 @@ internal sealed partial class Interpreter
         }
 
         var circuit = Circuit;
+        if (isDsl && receiver is Circuit)
+            NoteEffect();
         if (circuit is not null)
         {
             // One delegate per interpreter (not a closure per call): the DSL asks for the site synchronously, during
@@ -240,11 +252,24 @@ internal sealed partial class Interpreter
 
             frame.TypeArguments = TypeArgumentsOf(method, caller);
             if (IsIterator(body))
-                frame.Yielded = new List<object?>();
+            {
+                if (streamTo is { } stream && ReferenceEquals(stream.Site, site))
+                {
+                    streamTo = null;
+                    frame.Consumer = stream.Consume;
+                }
+                else
+                {
+                    frame.Yielded = new List<object?>();
+                }
+            }
+
+            if (frame.Yielded is not null)
+                return RunToCompletion(method, body, frame, site);
             Execute(body, frame);
             if (frame.Count > expectedVariables)
                 frameSizes[body] = frame.Count;
-            return frame.Yielded ?? frame.ReturnValue;
+            return frame.Consumer is not null ? StreamedIterator.Value : frame.ReturnValue;
         }
         finally
         {
@@ -277,6 +302,49 @@ internal sealed partial class Interpreter
             if (type.IsGenericType)
                 Add(type.OriginalDefinition.TypeParameters, type.TypeArguments);
         return arguments;
+    }
+
+    /// <summary>
+    /// An iterator not enumerated straight by a foreach runs to completion when called, its values kept in a list. If it
+    /// changes anything outside itself meanwhile (a field, a captured variable, a collection it did not make, devices),
+    /// those changes come earlier than in C#: PW9001 at the call, and its values are not used.
+    /// </summary>
+    private object? RunToCompletion(IMethodSymbol method, IOperation body, Frame frame, IOperation site)
+    {
+        var effectsBefore = externalEffects;
+        var outerObjects = iteratorObjectsAfter;
+        iteratorObjectsAfter = InterpretedObject.LastSerial;
+        try
+        {
+            Execute(body, frame);
+        }
+        finally
+        {
+            iteratorObjectsAfter = outerObjects;
+        }
+
+        if (externalEffects == effectsBefore)
+            return frame.Yielded;
+        return Unsupported(site, "the iterator " + Describe(method),
+            "it changes state outside itself as it runs (a field, a captured variable, a collection it did not make, devices), and an iterator not enumerated "
+            + "straight by a foreach is run to completion when called, so those changes would come earlier than in C#");
+    }
+
+    /// <summary>Counts a store or call that changes state outside the code's own frame (see externalEffects).</summary>
+    private void NoteEffect() => externalEffects++;
+
+    /// <summary>A store into a field of this object: an effect unless the iterator being run made the object.</summary>
+    private void NoteStoreInto(InterpretedObject? owner)
+    {
+        if (owner is null || owner.Serial <= iteratorObjectsAfter)
+            externalEffects++;
+    }
+
+    /// <summary>A store into (or a mutating call on) what this operation holds: an effect unless it is a local of this frame.</summary>
+    private void NoteStoreThrough(IOperation? holder, Frame frame)
+    {
+        if (holder is not ILocalReferenceOperation local || !frame.Declares(local.Local))
+            externalEffects++;
     }
 
     private bool IsIterator(IOperation body)
@@ -367,14 +435,23 @@ internal sealed partial class Interpreter
                 frame.Declare(local.Local, DefaultOf(local.Local.Type, frame));
                 return frame.Find(local.Local);
             case ILocalReferenceOperation local:
+                if (!frame.Declares(local.Local)) NoteEffect();
                 return frame.Find(local.Local);
             case IParameterReferenceOperation parameter:
+                if (!frame.Declares(parameter.Parameter)) NoteEffect();
                 return frame.Find(parameter.Parameter) ?? frame.Instance?.Find(parameter.Parameter);
             case IDiscardOperation:
                 return new Variable(null);
             case IFieldReferenceOperation field when session.IsInSource(field.Field):
-                if (field.Field.IsStatic) return StaticVariable(field.Field, frame);
-                return (field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame)) is InterpretedObject instance ? instance.GetOrAdd(field.Field) : null;
+                if (field.Field.IsStatic)
+                {
+                    NoteEffect();
+                    return StaticVariable(field.Field, frame);
+                }
+
+                var owner = (field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame)) as InterpretedObject;
+                NoteStoreInto(owner);
+                return owner?.GetOrAdd(field.Field);
             default:
                 return null;
         }

@@ -66,13 +66,17 @@ internal sealed partial class Interpreter
         return made;
     }
 
+    /// <summary>The most elements .NET gives a one-dimensional array (Array.MaxLength, not in netstandard2.0).</summary>
+    private const long MaxArrayLength = 0x7FFFFFC7;
+
     private object? VisitArrayCreation(IArrayCreationOperation creation, Frame frame)
     {
         if (creation.DimensionSizes.Length != 1)
             return Unsupported(creation, "a multi-dimensional array", "only one-dimensional arrays are elaborated");
         var size = Evaluate(creation.DimensionSizes[0], frame);
         if (Unknown.Is(size)) return size;
-        var length = System.Convert.ToInt32(size, CultureInfo.InvariantCulture);
+        // The size may be a long or ulong (C# allows them): charged to the memory budget before anything is made.
+        var length = size is ulong huge ? (huge > long.MaxValue ? long.MaxValue : (long)huge) : System.Convert.ToInt64(size, CultureInfo.InvariantCulture);
         if (length < 0)
         {
             Throws(creation.Syntax, $"OverflowException: an array cannot have a negative length ({length})");
@@ -80,7 +84,13 @@ internal sealed partial class Interpreter
         }
 
         Step(creation);
-        ChargeMemory(creation, 8L * length);
+        ChargeMemory(creation, length > long.MaxValue / 8 ? long.MaxValue : 8L * length);
+        if (length > MaxArrayLength)
+        {
+            Throws(creation.Syntax, $"OutOfMemoryException: an array of {length} elements is larger than .NET makes ({MaxArrayLength})");
+            return Unknown.Value;
+        }
+
         var element = ((IArrayTypeSymbol)creation.Type!).ElementType;
         var items = new object?[length];
         var initial = DefaultOf(element, frame);

@@ -91,7 +91,52 @@ internal sealed partial class Interpreter
 
     private Completion VisitForEachLoop(IForEachLoopOperation loop, Frame frame)
     {
-        var collection = Evaluate(StripConversions(loop.Collection), frame);
+        // A foreach straight over a call of the design's iterator runs its body at each 'yield return', as C# does: the
+        // iterator stops where the loop breaks, and what each side does happens in C#'s order (see streamTo).
+        var source = StripConversions(loop.Collection);
+        var variableType = (loop.LoopControlVariable as IVariableDeclaratorOperation)?.Symbol.Type;
+        var streamed = false;
+        var outcome = Completion.Normal;
+        var consumerCallers = callers;
+        var consumerTryDepth = tryDepth;
+        bool Consume(object? value)
+        {
+            streamed = true;
+            var iteratorCallers = callers;
+            var iteratorTryDepth = tryDepth;
+            callers = consumerCallers;
+            tryDepth = consumerTryDepth;
+            loops.Push(loop);
+            try
+            {
+                Step(loop);
+                var completion = RunForEachBody(loop, frame, value, variableType);
+                if (completion == Completion.Return)
+                    outcome = Completion.Return;
+                return completion != Completion.Break && completion != Completion.Return;
+            }
+            finally
+            {
+                loops.Pop();
+                callers = iteratorCallers;
+                tryDepth = iteratorTryDepth;
+            }
+        }
+
+        var outerStream = streamTo;
+        streamTo = source is IInvocationOperation ? (source, Consume) : null;
+        object? collection;
+        try
+        {
+            collection = Evaluate(source, frame);
+        }
+        finally
+        {
+            streamTo = outerStream;
+        }
+
+        if (streamed || collection is StreamedIterator)
+            return outcome;
         if (Unknown.Is(collection))
         {
             Poison(loop.Body, frame);
@@ -114,27 +159,13 @@ internal sealed partial class Interpreter
             return Completion.Normal;
         }
 
-        var variableType = (loop.LoopControlVariable as IVariableDeclaratorOperation)?.Symbol.Type;
         loops.Push(loop);
         try
         {
             foreach (var raw in items)
             {
                 Step(loop);
-                var item = FromClr(raw);
-                if (variableType is not null && item is not null && !Unknown.Is(item) && IsNumeric(variableType) && IsNumericValue(item))
-                    item = Arithmetic.ConvertNumber(item, variableType.SpecialType, isChecked: false) ?? item;
-                switch (loop.LoopControlVariable)
-                {
-                    case IVariableDeclaratorOperation declarator:
-                        frame.Declare(declarator.Symbol, item);
-                        break;
-                    default:
-                        Deconstruct(loop.LoopControlVariable, item, frame);
-                        break;
-                }
-
-                var completion = Execute(loop.Body, frame);
+                var completion = RunForEachBody(loop, frame, raw, variableType);
                 if (completion == Completion.Break)
                     return Completion.Normal;
                 if (completion == Completion.Return)
@@ -155,6 +186,25 @@ internal sealed partial class Interpreter
         {
             loops.Pop();
         }
+    }
+
+    /// <summary>One iteration of a foreach: the loop variable (or deconstruction) set to the item, then the body.</summary>
+    private Completion RunForEachBody(IForEachLoopOperation loop, Frame frame, object? raw, ITypeSymbol? variableType)
+    {
+        var item = FromClr(raw);
+        if (variableType is not null && item is not null && !Unknown.Is(item) && IsNumeric(variableType) && IsNumericValue(item))
+            item = Arithmetic.ConvertNumber(item, variableType.SpecialType, isChecked: false) ?? item;
+        switch (loop.LoopControlVariable)
+        {
+            case IVariableDeclaratorOperation declarator:
+                frame.Declare(declarator.Symbol, item);
+                break;
+            default:
+                Deconstruct(loop.LoopControlVariable, item, frame);
+                break;
+        }
+
+        return Execute(loop.Body, frame);
     }
 
     private static IOperation StripConversions(IOperation operation)

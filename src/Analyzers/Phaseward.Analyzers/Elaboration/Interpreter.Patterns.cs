@@ -71,14 +71,13 @@ internal sealed partial class Interpreter
         var value = PatternInput;
         var bound = Evaluate(relational.Value, frame);
         if (Unknown.Is(bound) || value is null || bound is null || !IsComparable(value) || !IsComparable(bound)) return null;
-        var a = System.Convert.ToDouble(value, CultureInfo.InvariantCulture);
-        var b = System.Convert.ToDouble(bound, CultureInfo.InvariantCulture);
+        var order = Compare(value, bound);
         return Matched(relational.OperatorKind switch
         {
-            BinaryOperatorKind.LessThan => a < b,
-            BinaryOperatorKind.LessThanOrEqual => a <= b,
-            BinaryOperatorKind.GreaterThan => a > b,
-            BinaryOperatorKind.GreaterThanOrEqual => a >= b,
+            BinaryOperatorKind.LessThan => order < 0,
+            BinaryOperatorKind.LessThanOrEqual => order <= 0,
+            BinaryOperatorKind.GreaterThan => order > 0,
+            BinaryOperatorKind.GreaterThanOrEqual => order >= 0,
             _ => null,
         });
     }
@@ -190,11 +189,7 @@ internal sealed partial class Interpreter
         if (Unknown.Is(a) || Unknown.Is(b)) return null;
         if (a is null || b is null) return a is null && b is null;
         if (IsComparable(a) && IsComparable(b))
-        {
-            if (a is double or float || b is double or float)
-                return System.Convert.ToDouble(a, CultureInfo.InvariantCulture) == System.Convert.ToDouble(b, CultureInfo.InvariantCulture);
-            return System.Convert.ToInt64(a, CultureInfo.InvariantCulture) == System.Convert.ToInt64(b, CultureInfo.InvariantCulture);
-        }
+            return Compare(a, b) == 0;
 
         if (a is string s) return b is string t && string.Equals(s, t, StringComparison.Ordinal);
         if (a is bool x) return b is bool y && x == y;
@@ -202,4 +197,22 @@ internal sealed partial class Interpreter
     }
 
     private static bool IsComparable(object value) => IsNumericValue(value) || value is Enum;
+
+    /// <summary>
+    /// Orders two numbers exactly: whole numbers as whole numbers (a long above 2^53 or a ulong above long.MaxValue is
+    /// not rounded through double), anything with a fraction as double (NaN compares unequal, as in C#).
+    /// </summary>
+    private static int? Compare(object a, object b)
+    {
+        if (a is double or float || b is double or float)
+        {
+            var x = System.Convert.ToDouble(a, CultureInfo.InvariantCulture);
+            var y = System.Convert.ToDouble(b, CultureInfo.InvariantCulture);
+            return x < y ? -1 : x > y ? 1 : x == y ? 0 : null;
+        }
+
+        if (a is ulong || b is ulong)
+            return System.Convert.ToDecimal(a, CultureInfo.InvariantCulture).CompareTo(System.Convert.ToDecimal(b, CultureInfo.InvariantCulture));
+        return System.Convert.ToInt64(a, CultureInfo.InvariantCulture).CompareTo(System.Convert.ToInt64(b, CultureInfo.InvariantCulture));
+    }
 }

@@ -240,8 +240,10 @@ internal sealed partial class Interpreter
         Step(yielded);
         var value = yielded.ReturnedValue is null ? null : CopyIfValue(Evaluate(yielded.ReturnedValue, frame));
         var owner = frame;
-        while (owner.Yielded is null && owner.LexicalParent is not null)
+        while (owner.Yielded is null && owner.Consumer is null && owner.LexicalParent is not null)
             owner = owner.LexicalParent;
+        if (owner.Consumer is { } consume)
+            return consume(value) ? Completion.Normal : Completion.Return; // the loop stopped: so does the iterator
         if (owner.Yielded is null)
         {
             Unsupported(yielded, "this yield return", "its iterator is not running");

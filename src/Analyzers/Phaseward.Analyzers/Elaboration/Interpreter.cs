@@ -98,6 +98,19 @@ internal sealed partial class Interpreter
     // The exceptions being handled by catch clauses (innermost last), for 'throw;'.
     private readonly Stack<object> caught = new();
 
+    // The call a foreach is about to enumerate, and the loop's body as a callback: when that call runs the design's
+    // iterator, each 'yield return' hands its value to the body at once instead of collecting a list, so the iterator
+    // runs only as far as the loop takes it and both sides' effects interleave as in C# (see VisitForEachLoop).
+    private (IOperation Site, Func<object?, bool> Consume)? streamTo;
+
+    // What the design's code has done outside the frame it runs in (calls on the circuit; stores to fields, statics,
+    // captured variables and collections held there), counted while an iterator runs to completion when called: if it
+    // changes, the iterator had effects that would come earlier than in C# (PW9001, see InvokeUser).
+    private long externalEffects;
+
+    // Objects made after this serial belong to the iterator being run to completion: stores to them are not effects.
+    private long iteratorObjectsAfter = long.MaxValue;
+
     // Resources of 'using var' declarations, per block that has them (innermost last): disposed when the block ends.
     private readonly Stack<List<object?>> usingScopes = new();
 
