@@ -45,8 +45,8 @@ public sealed partial class Circuit
 
         var cell = AddMacro(MacroKind.Keeper, cellName, span, null);
         var sensed = NewNet(cellName);
-        AddDevice(null, DeviceKind.Inverter, new[] { node }, sensed, null, null, null, false, span, cell, "sense-inverter", nameInCell: "sense");
-        AddDevice(null, DeviceKind.Inverter, new[] { sensed }, node, null, null, keeperResistance, true, span, cell, "weak-feedback-inverter", nameInCell: "feedback");
+        AddDevice(null, DeviceKind.Inverter, new DeviceInputs(node), sensed, null, null, null, false, span, cell, "sense-inverter", nameInCell: "sense");
+        AddDevice(null, DeviceKind.Inverter, new DeviceInputs(sensed), node, null, null, keeperResistance, true, span, cell, "weak-feedback-inverter", nameInCell: "feedback");
         return sensed;
     }
 
@@ -109,13 +109,13 @@ public sealed partial class Circuit
         var cell = AddMacro(kind, cellName, span, parent);
         var storage = NewNet(cellName + ".x");
         var output = NewNet(outputName);
-        AddDevice(null, DeviceKind.TransmissionGate, new[] { d }, storage, transparent, null, null, false, span, cell, "pass", nameInCell: "pass");
-        AddDevice(null, DeviceKind.Inverter, new[] { storage }, output, null, null, null, false, span, cell, "inverter", nameInCell: "inverter");
+        AddDevice(null, DeviceKind.TransmissionGate, new DeviceInputs(d), storage, transparent, null, null, false, span, cell, "pass", nameInCell: "pass");
+        AddDevice(null, DeviceKind.Inverter, new DeviceInputs(storage), output, null, null, null, false, span, cell, "inverter", nameInCell: "inverter");
         if (kind == MacroKind.StaticLatch)
         {
             var feedback = NewNet(cellName + ".fb");
-            AddDevice(null, DeviceKind.Inverter, new[] { output }, feedback, null, null, null, false, span, cell, "feedback-inverter", nameInCell: "feedback-inverter");
-            AddDevice(null, DeviceKind.TransmissionGate, new[] { feedback }, storage, transparent.Complement, null, null, false, span, cell, "feedback-pass", nameInCell: "feedback-pass");
+            AddDevice(null, DeviceKind.Inverter, new DeviceInputs(output), feedback, null, null, null, false, span, cell, "feedback-inverter", nameInCell: "feedback-inverter");
+            AddDevice(null, DeviceKind.TransmissionGate, new DeviceInputs(feedback), storage, transparent.Complement, null, null, false, span, cell, "feedback-pass", nameInCell: "feedback-pass");
         }
 
         return output;

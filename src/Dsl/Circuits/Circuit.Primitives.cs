@@ -20,42 +20,42 @@ public sealed partial class Circuit
 
     /// <summary>An inverter driven by <paramref name="input"/>; returns its new output net (named <paramref name="name"/>, or an automatic name).</summary>
     public Net Inverter(Net input, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-        => AddPrimitive(DeviceKind.Inverter, new[] { input }, OneInput, null, null, name, null, null, Site(callerFile, callerLine));
+        => AddPrimitive(DeviceKind.Inverter, input, null, OneInput, null, null, name, null, null, Site(callerFile, callerLine));
 
     /// <summary>An inverter from <paramref name="input"/> driving <paramref name="output"/>, a net declared earlier with Node().</summary>
     public void Inverter(Net input, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-        => AddPrimitive(DeviceKind.Inverter, new[] { input }, OneInput, null, null, null, Existing(output), null, Site(callerFile, callerLine));
+        => AddPrimitive(DeviceKind.Inverter, input, null, OneInput, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 
     /// <summary>A non-inverting restoring stage (two inverters).</summary>
     public Net Buffer(Net input, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-        => AddPrimitive(DeviceKind.Buffer, new[] { input }, OneInput, null, null, name, null, null, Site(callerFile, callerLine));
+        => AddPrimitive(DeviceKind.Buffer, input, null, OneInput, null, null, name, null, null, Site(callerFile, callerLine));
 
     /// <summary>A non-inverting restoring stage from <paramref name="input"/> driving <paramref name="output"/>, a net declared earlier with Node().</summary>
     public void Buffer(Net input, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-        => AddPrimitive(DeviceKind.Buffer, new[] { input }, OneInput, null, null, null, Existing(output), null, Site(callerFile, callerLine));
+        => AddPrimitive(DeviceKind.Buffer, input, null, OneInput, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 
     /// <summary>A two-input NAND of <paramref name="a"/> and <paramref name="b"/>; returns its new output net.</summary>
     public Net Nand(Net a, Net b, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-        => AddPrimitive(DeviceKind.Nand, new[] { a, b }, TwoInputs, null, null, name, null, null, Site(callerFile, callerLine));
+        => AddPrimitive(DeviceKind.Nand, a, b, TwoInputs, null, null, name, null, null, Site(callerFile, callerLine));
 
     /// <summary>A two-input NAND of <paramref name="a"/> and <paramref name="b"/> driving <paramref name="output"/>, a net declared earlier with Node().</summary>
     public void Nand(Net a, Net b, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-        => AddPrimitive(DeviceKind.Nand, new[] { a, b }, TwoInputs, null, null, null, Existing(output), null, Site(callerFile, callerLine));
+        => AddPrimitive(DeviceKind.Nand, a, b, TwoInputs, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 
     /// <summary>A two-input NOR of <paramref name="a"/> and <paramref name="b"/>; returns its new output net.</summary>
     public Net Nor(Net a, Net b, string? name = null, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-        => AddPrimitive(DeviceKind.Nor, new[] { a, b }, TwoInputs, null, null, name, null, null, Site(callerFile, callerLine));
+        => AddPrimitive(DeviceKind.Nor, a, b, TwoInputs, null, null, name, null, null, Site(callerFile, callerLine));
 
     /// <summary>A two-input NOR of <paramref name="a"/> and <paramref name="b"/> driving <paramref name="output"/>, a net declared earlier with Node().</summary>
     public void Nor(Net a, Net b, Net output, [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
-        => AddPrimitive(DeviceKind.Nor, new[] { a, b }, TwoInputs, null, null, null, Existing(output), null, Site(callerFile, callerLine));
+        => AddPrimitive(DeviceKind.Nor, a, b, TwoInputs, null, null, null, Existing(output), null, Site(callerFile, callerLine));
 
     /// <summary>A transmission gate that conducts while <paramref name="when"/> is active.</summary>
     public Net TransmissionGate(Net input, Phase when, string? name = null, Resistance? onResistance = null,
         [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
     {
         CheckPhase(when, nameof(when));
-        return AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, when, null, name, null,
+        return AddPrimitive(DeviceKind.TransmissionGate, input, null, OneInput, when, null, name, null,
             CheckResistance(onResistance, nameof(onResistance)), Site(callerFile, callerLine));
     }
 
@@ -64,7 +64,7 @@ public sealed partial class Circuit
         [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
     {
         CheckPhase(when, nameof(when));
-        AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, when, null, null, Existing(output),
+        AddPrimitive(DeviceKind.TransmissionGate, input, null, OneInput, when, null, null, Existing(output),
             CheckResistance(onResistance, nameof(onResistance)), Site(callerFile, callerLine));
     }
 
@@ -73,7 +73,7 @@ public sealed partial class Circuit
         [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
     {
         CheckNet(control, nameof(control));
-        return AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, null, control, name, null,
+        return AddPrimitive(DeviceKind.TransmissionGate, input, null, OneInput, null, control, name, null,
             CheckResistance(onResistance, nameof(onResistance)), Site(callerFile, callerLine));
     }
 
@@ -82,7 +82,7 @@ public sealed partial class Circuit
         [CallerFilePath] string callerFile = "", [CallerLineNumber] int callerLine = 0)
     {
         CheckNet(control, nameof(control));
-        AddPrimitive(DeviceKind.TransmissionGate, new[] { input }, OneInput, null, control, null, Existing(output),
+        AddPrimitive(DeviceKind.TransmissionGate, input, null, OneInput, null, control, null, Existing(output),
             CheckResistance(onResistance, nameof(onResistance)), Site(callerFile, callerLine));
     }
 }

@@ -161,7 +161,7 @@ public sealed partial class Circuit
         return net;
     }
 
-    private Device AddDevice(string? name, DeviceKind kind, Net[] deviceInputs, Net output, Phase? clockControl, Net? dataControl,
+    private Device AddDevice(string? name, DeviceKind kind, DeviceInputs deviceInputs, Net output, Phase? clockControl, Net? dataControl,
         Resistance? resistance, bool isWeak, SourceSpan span, MacroInstance? macro = null, string? role = null, string? nameInCell = null)
     {
         var device = new Device(devices.Count, name, kind, deviceInputs, output, clockControl, dataControl, resistance, isWeak, span, macro, role, nameInCell);
@@ -198,11 +198,14 @@ public sealed partial class Circuit
         => value is { } r ? new Resistance(Guard.Positive(r.Ohms, parameter, "Ω")) : null;
 
     // The one shape every primitive shares: validate, then make (or reuse) the output net and add the device.
-    private Net AddPrimitive(DeviceKind kind, Net[] deviceInputs, string[] inputParameters, Phase? clockControl, Net? dataControl,
+    // The inputs come as one or two nets (second null for one-input stages), not an array: a DSL call then makes no
+    // garbage for them, and the device keeps them in itself (DeviceInputs).
+    private Net AddPrimitive(DeviceKind kind, Net input, Net? second, string[] inputParameters, Phase? clockControl, Net? dataControl,
         string? name, Net? output, Resistance? resistance, SourceSpan span)
     {
-        for (var i = 0; i < deviceInputs.Length; i++)
-            CheckNet(deviceInputs[i], inputParameters[i]);
+        CheckNet(input, inputParameters[0]);
+        if (inputParameters.Length > 1)
+            CheckNet(second, inputParameters[1]);
         name = ScopedOrNull(name);
         if (output is not null)
         {
@@ -216,7 +219,7 @@ public sealed partial class Circuit
 
         var outputNet = output ?? NewNet(name ?? AutoName(Scoped(Prefix(kind))));
         var deviceName = output is null ? outputNet.Name : AutoName(ScopedOnce(outputNet.Name + "." + Prefix(kind)));
-        AddDevice(deviceName, kind, deviceInputs, outputNet, clockControl, dataControl, resistance, false, span);
+        AddDevice(deviceName, kind, new DeviceInputs(input, second), outputNet, clockControl, dataControl, resistance, false, span);
         return outputNet;
     }
 }

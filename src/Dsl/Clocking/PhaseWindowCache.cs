@@ -9,10 +9,12 @@ namespace Phaseward.Clocking;
 /// </summary>
 internal sealed class PhaseWindowCache
 {
-    private readonly Dictionary<Phase, PhaseWindow> windows = new();
+    // Made on the first window asked for: some owners (one droop budget per storage node) never ask.
+    private Dictionary<Phase, PhaseWindow>? windows;
 
     public PhaseWindow Of(Phase phase)
     {
+        windows ??= new Dictionary<Phase, PhaseWindow>();
         if (!windows.TryGetValue(phase, out var window))
             windows.Add(phase, window = PhaseWindow.Of(phase));
         return window;

@@ -16,7 +16,7 @@ public sealed class Device
 
     /// <summary>A device named <paramref name="name"/>, or, when that is null, a part of a cell named
     /// <paramref name="nameInCell"/> inside it.</summary>
-    internal Device(int id, string? name, DeviceKind kind, IReadOnlyList<Net> inputs, Net output, Phase? clockControl,
+    internal Device(int id, string? name, DeviceKind kind, DeviceInputs inputs, Net output, Phase? clockControl,
         Net? dataControl, Resistance? resistance, bool isWeak, SourceSpan span, MacroInstance? macro, string? role, string? nameInCell = null)
     {
         if (name is null && (macro is null || nameInCell is null))
@@ -25,7 +25,7 @@ public sealed class Device
         this.name = name;
         this.nameInCell = nameInCell;
         this.kind = (byte)kind;
-        Inputs = new DeviceInputs(inputs);
+        Inputs = inputs;
         Output = output;
         ClockControl = clockControl;
         DataControl = dataControl;

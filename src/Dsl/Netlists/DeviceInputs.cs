@@ -14,13 +14,10 @@ public readonly struct DeviceInputs : IReadOnlyList<Net>
     private readonly Net first;
     private readonly Net? second;
 
-    internal DeviceInputs(IReadOnlyList<Net> inputs)
+    internal DeviceInputs(Net first, Net? second = null)
     {
-        if (inputs is null) throw new ArgumentNullException(nameof(inputs));
-        if (inputs.Count is < 1 or > 2)
-            throw new ArgumentException($"A device has one or two data inputs, not {inputs.Count}.", nameof(inputs));
-        first = inputs[0] ?? throw new ArgumentNullException(nameof(inputs), "A device's first input is null.");
-        second = inputs.Count == 2 ? inputs[1] ?? throw new ArgumentNullException(nameof(inputs), "A device's second input is null.") : null;
+        this.first = first ?? throw new ArgumentNullException(nameof(first), "A device's first input is null.");
+        this.second = second;
     }
 
     /// <summary>How many inputs the device has (1 or 2; 0 only for <c>default(DeviceInputs)</c>, which no device has).</summary>

@@ -44,6 +44,7 @@ internal static class LatchFinder
         var entries = new List<Device>(4);
         var feedback = new List<Device>(2);
         var windowFirsts = new List<Device>(1);
+        var sameWindow = new SameWindowPairs();
 
         foreach (var net in netlist.Nets)
         {
@@ -57,19 +58,19 @@ internal static class LatchFinder
                 continue;
             clocked.Sort((a, b) => a.Id.CompareTo(b.Id));
 
-            var feedbackStage = SplitEntryAndFeedback(netlist, net, clocked, loopStages, entries, feedback);
+            var feedbackStage = SplitEntryAndFeedback(netlist, net, clocked, loopStages, entries, feedback, sameWindow);
             isStorage[net.Id] = true;
             var outputStage = StorageNodeShape.OutputStageOf(netlist, net, entries[0]);
 
             // One latch per entry window (almost always exactly one), each window named by its first entry gate.
             windowFirsts.Clear();
             foreach (var gate in entries)
-                if (WindowFirstOf(windowFirsts, gate) is null)
+                if (WindowFirstOf(windowFirsts, gate, sameWindow) is null)
                     windowFirsts.Add(gate);
 
             foreach (var first in windowFirsts)
             {
-                var group = EntriesInWindowOf(entries, first);
+                var group = EntriesInWindowOf(entries, first, sameWindow);
                 var cell = first.Macro is { Kind: MacroKind.DynamicLatch or MacroKind.StaticLatch } macro ? macro : null;
                 var name = cell?.Name ?? net.Name;
                 if (windowFirsts.Count > 1)
@@ -87,7 +88,7 @@ internal static class LatchFinder
 
     // Sorts the clocked drivers of a storage node into entry and feedback gates; returns the first feedback stage.
     private static Device? SplitEntryAndFeedback(Netlist netlist, Net storage, List<Device> clocked, List<Device?> loopStages,
-        List<Device> entries, List<Device> feedback)
+        List<Device> entries, List<Device> feedback, SameWindowPairs sameWindow)
     {
         loopStages.Clear();
         Phase? entryPhase = null;
@@ -107,7 +108,7 @@ internal static class LatchFinder
         {
             var gate = clocked[i];
             var stage = loopStages[i];
-            if (stage is not null && !SameWindow(gate.ClockControl!, entryPhase))
+            if (stage is not null && !sameWindow.Of(gate.ClockControl!, entryPhase))
             {
                 feedback.Add(gate);
                 feedbackStage ??= stage;
@@ -122,30 +123,41 @@ internal static class LatchFinder
     }
 
     // Two phases open in the same window: transparent together for longer than the overlap allowance (a gated or
-    // slightly delayed copy of a phase counts).
-    private static bool SameWindow(Phase a, Phase b)
-        => ReferenceEquals(a, b) || WindowRelations.Of(a, b) == WindowRelation.TransparentTogether;
+    // slightly delayed copy of a phase counts). Decided once per pair of phases: a design has few phases and many
+    // latches, and each decision builds both windows.
+    private sealed class SameWindowPairs
+    {
+        private readonly Dictionary<(Phase, Phase), bool> decided = new();
+
+        public bool Of(Phase a, Phase b)
+        {
+            if (ReferenceEquals(a, b)) return true;
+            if (!decided.TryGetValue((a, b), out var same))
+                decided[(a, b)] = same = WindowRelations.Of(a, b) == WindowRelation.TransparentTogether;
+            return same;
+        }
+    }
 
     // The first gate of the window the gate opens in, among the windows found so far, or null.
-    private static Device? WindowFirstOf(List<Device> windowFirsts, Device gate)
+    private static Device? WindowFirstOf(List<Device> windowFirsts, Device gate, SameWindowPairs sameWindow)
     {
         foreach (var first in windowFirsts)
-            if (SameWindow(first.ClockControl!, gate.ClockControl!))
+            if (sameWindow.Of(first.ClockControl!, gate.ClockControl!))
                 return first;
         return null;
     }
 
     // The entry gates that open in the window of 'first', in order.
-    private static Device[] EntriesInWindowOf(List<Device> entries, Device first)
+    private static Device[] EntriesInWindowOf(List<Device> entries, Device first, SameWindowPairs sameWindow)
     {
         var count = 0;
         foreach (var gate in entries)
-            if (SameWindow(first.ClockControl!, gate.ClockControl!))
+            if (sameWindow.Of(first.ClockControl!, gate.ClockControl!))
                 count++;
         var group = new Device[count];
         count = 0;
         foreach (var gate in entries)
-            if (SameWindow(first.ClockControl!, gate.ClockControl!))
+            if (sameWindow.Of(first.ClockControl!, gate.ClockControl!))
                 group[count++] = gate;
         return group;
     }

@@ -11,7 +11,7 @@ namespace Phaseward.Sequencing;
 /// <summary>First-order timing figures of one latch, derived from its devices (see <see cref="TimingFigures"/>).</summary>
 public sealed class LatchTiming
 {
-    internal LatchTiming(Latch latch, Time entry, Time fastestEntry, Time output, Time feedback)
+    internal LatchTiming(Latch latch, PhaseWindow window, Time entry, Time fastestEntry, Time output, Time feedback)
     {
         Latch = latch;
         EntryDelay = entry;
@@ -19,7 +19,7 @@ public sealed class LatchTiming
         OutputDelay = output;
         Setup = entry + (latch.FeedbackGates.Count > 0 ? output + feedback : Time.Zero);
         DataToOutput = entry + output;
-        Window = PhaseWindow.Of(latch.Phase);
+        Window = window;
         Hold = Window.Length - (latch.Phase.Polarity == ClockPolarity.High
             ? latch.Phase.Clock.Period * latch.Phase.Clock.Duty
             : latch.Phase.Clock.Period * (1 - latch.Phase.Clock.Duty));
@@ -145,7 +145,7 @@ public sealed class TimingFigures
         foreach (var latch in model.Latches)
         {
             var feedback = latch.FeedbackStage is { } stage ? model.StageDelay(stage) : Time.Zero;
-            byLatch[latch.Index] = new LatchTiming(latch, AtCorner(model.EntryDelay(latch)), AtCorner(model.FastestEntryDelay(latch)),
+            byLatch[latch.Index] = new LatchTiming(latch, model.WindowOf(latch.Phase), AtCorner(model.EntryDelay(latch)), AtCorner(model.FastestEntryDelay(latch)),
                 AtCorner(model.OutputDelay(latch)), AtCorner(feedback));
         }
 

@@ -37,9 +37,7 @@ internal sealed partial class Interpreter
             case List<object?> list when type.IsArray:
                 return TypedArray(list.ToArray(), type.GetElementType()!);
             case TupleValue tuple when type.IsGenericType && type.FullName?.StartsWith("System.ValueTuple`", StringComparison.Ordinal) == true:
-                var elementTypes = type.GetGenericArguments();
-                if (elementTypes.Length != tuple.Items.Length) return Unconvertible.Value;
-                return Activator.CreateInstance(type, tuple.Items.Select((item, i) => ToClr(item, elementTypes[i])).ToArray());
+                return ValueTupleToClr(tuple, type);
         }
 
         if (type.IsInstanceOfType(value) && !(value is IEnumerable && !IsMaterialized(value) && type != typeof(object)))
@@ -126,6 +124,18 @@ internal sealed partial class Interpreter
         }
     }
 
+    // Kept out of ToClr: a lambda there would make the compiler allocate its closure on every call, tuple or not (every
+    // DSL call passes through ToClr once per argument).
+    private object? ValueTupleToClr(TupleValue tuple, Type type)
+    {
+        var elementTypes = type.GetGenericArguments();
+        if (elementTypes.Length != tuple.Items.Length) return Unconvertible.Value;
+        var items = new object?[elementTypes.Length];
+        for (var i = 0; i < items.Length; i++)
+            items[i] = ToClr(tuple.Items[i], elementTypes[i]);
+        return Activator.CreateInstance(type, items);
+    }
+
     /// <summary>Values the DSL and the library return, in the interpreter's shapes: arrays as object?[], tuples as TupleValue.</summary>
     private static object? FromClr(object? value)
     {
@@ -138,10 +148,12 @@ internal sealed partial class Interpreter
         }
 
         var type = value.GetType();
-        if (type.IsGenericType && type.FullName!.StartsWith("System.ValueTuple`", StringComparison.Ordinal))
-            return new TupleValue(type.GetFields().OrderBy(f => f.Name, StringComparer.Ordinal).Take(7).Select(f => FromClr(f.GetValue(value))).ToArray());
-        return value;
+        return type.IsGenericType && type.FullName!.StartsWith("System.ValueTuple`", StringComparison.Ordinal) ? ValueTupleFromClr(value, type) : value;
     }
+
+    // Kept out of FromClr for the same reason as ValueTupleToClr: the closure over 'value' was allocated on every call.
+    private static TupleValue ValueTupleFromClr(object value, Type type)
+        => new(type.GetFields().OrderBy(f => f.Name, StringComparer.Ordinal).Take(7).Select(f => FromClr(f.GetValue(value))).ToArray());
 
     /// <summary>A library member threw: inside a try the design may catch it; outside, it is PW9003 and the value is unknown.</summary>
     private object? RaiseLibraryException(IOperation site, Exception exception)

@@ -103,7 +103,7 @@ public sealed class LatchWriteWindow
             if (model.StageDelay(gate) > model.StageDelay(slowest))
                 slowest = gate;
         var slow = netlist.Process.SlowDelayFactor;
-        return new LatchWriteWindow(PhaseWindow.Of(latch.Phase).Length, latch.Phase.Clock.ComplementSkew, model.EntryDelay(latch) * slow,
+        return new LatchWriteWindow(model.WindowOf(latch.Phase).Length, latch.Phase.Clock.ComplementSkew, model.EntryDelay(latch) * slow,
             netlist.ResistanceOf(slowest) * slow, netlist.CapacitanceOf(latch.Storage));
     }
 }
