@@ -64,6 +64,22 @@ public class TypingTests
         SampleMutations(path, (variant, what) => AnalyseVariant(baseline, tree, variant, what).GetAwaiter().GetResult());
     }
 
+    /// <summary>
+    /// Mutations the random draw once found failing, replayed from the seed their failure message gave (the edits depend on
+    /// the sample's text: if it changes, these become other mutations, still checked the same way).
+    /// </summary>
+    [Theory]
+    [InlineData("Housekeeping.cs:694270,613676,178313,204947,755262,691529,680847")] // 'bit < $"...': FormatException inside the elaborator
+    [InlineData("StrainLanes.cs:1024346,812870,448986,56392,203150,364757,568003,996586,80545")] // a comparison with "strict"
+    public async Task AMutationThatOnceFailedStaysFixed(string seed)
+    {
+        var (file, choices) = ParseReplay(seed);
+        var path = BoundedAnalysis.Samples.Single(s => s.Path.EndsWith("/" + file, StringComparison.Ordinal)).Path;
+        var (baseline, tree, text) = Setup(path);
+        var (variant, edits) = Mutate(new ChoiceSequence(choices), text, Tokens(tree));
+        await AnalyseVariant(baseline, tree, variant, $"{path} mutation:{edits} (seed {ReplayVariable}={seed})");
+    }
+
     /// <summary>A failure names the mutation's choices and edits, and replaying those choices makes the same variant.</summary>
     [Fact]
     public void AFailingMutationIsNamedWithItsSeedAndEdits()

@@ -233,6 +233,11 @@ internal sealed partial class Interpreter
             Throws(site.Syntax, e.GetType().Name + ": " + e.Message);
             return Unknown.Value;
         }
+        catch (Exception e) when (e is FormatException or InvalidCastException)
+        {
+            // Only code that does not compile yet gets here ('bit < "text"' while it is typed): never given a value.
+            return Unsupported(site, "operator " + kind + " on " + type.ToDisplayString(), "its operands are not numbers");
+        }
     }
 
     private object? CallOperator(IOperation site, IMethodSymbol method, object?[] operands, Frame frame)
