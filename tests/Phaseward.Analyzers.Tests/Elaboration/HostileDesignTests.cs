@@ -1,6 +1,5 @@
 using System;
 using System.Linq;
-using System.Text.RegularExpressions;
 using System.Threading.Tasks;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Testing;
@@ -539,29 +538,7 @@ public class HostileDesignTests
         Assert.DoesNotContain(result.Netlist!.Devices, d => d.Name.StartsWith("s", StringComparison.Ordinal));
     }
 
-    private static string Design(string statements, string members = "", string declarations = "") => $$"""
-        using Phaseward;
+    private static string Design(string statements, string members = "", string declarations = "") => InverterChainDesign.Source("Hostile", declarations, members, statements);
 
-        namespace Hostile
-        {
-            {{declarations}}
-
-            public sealed class D : Design
-            {
-                {{members}}
-
-                protected override void Describe(Circuit c)
-                {
-                    var count = 3;
-                    {{statements}}
-                    var x = c.Input("x");
-                    for (var i = 0; i < count; i++)
-                        x = c.Inverter(x, "s" + i);
-                    c.Output("y", x);
-                }
-            }
-        }
-        """;
-
-    private static string Plain(string marked) => Regex.Replace(marked, @"\{\|#\d:|\|\}", "");
+    private static string Plain(string marked) => InverterChainDesign.WithoutMarkup(marked);
 }

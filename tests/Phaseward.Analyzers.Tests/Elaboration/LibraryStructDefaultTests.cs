@@ -1,5 +1,4 @@
 using System;
-using System.Text.RegularExpressions;
 using System.Threading.Tasks;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Testing;
@@ -102,29 +101,7 @@ public class LibraryStructDefaultTests
         Assert.Equal(3, designs.CompileTime("Defaults.D").Netlist!.Devices.Count);
     }
 
-    private static string Source(string declarations, string members, string statements) => $$"""
-        using Phaseward;
+    private static string Source(string declarations, string members, string statements) => InverterChainDesign.Source("Defaults", declarations, members, statements);
 
-        namespace Defaults
-        {
-            {{declarations}}
-
-            public sealed class D : Design
-            {
-                {{members}}
-
-                protected override void Describe(Circuit c)
-                {
-                    var count = 3;
-                    {{statements}}
-                    var x = c.Input("x");
-                    for (var i = 0; i < count; i++)
-                        x = c.Inverter(x, "s" + i);
-                    c.Output("y", x);
-                }
-            }
-        }
-        """;
-
-    private static string Plain(string marked) => Regex.Replace(marked, @"\{\|#\d:|\|\}", "");
+    private static string Plain(string marked) => InverterChainDesign.WithoutMarkup(marked);
 }
