@@ -1,5 +1,3 @@
-using System.Collections.Generic;
-
 namespace Phaseward.Netlists;
 
 /// <summary>A primitive: a restoring stage or a pass device, with its connections and where it was written.</summary>
