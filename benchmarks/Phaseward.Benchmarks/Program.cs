@@ -109,6 +109,7 @@ public static class Program
         var elaborationsOutsideGc = new Samples();
         var rules = new Samples();
         var rulesOutsideGc = new Samples();
+        using var largeObjects = new LargeObjectAllocations();
         for (var run = 0; run < runs; run++)
         {
             // Each run starts from a collected heap, so one run's garbage is not collected in the next one's time.
@@ -131,18 +132,23 @@ public static class Program
             // Bytes allocated on this thread: a figure the shared machine's load does not disturb.
             var allocatedBefore = GC.GetAllocatedBytesForCurrentThread();
             var gcBefore = GcCounts.Now();
+            var elaborateStart = DateTime.UtcNow;
             var elaborate = Samples.Time(() => result = DesignElaborator.Elaborate(session, design, ElaborationLimits.Default, CancellationToken.None));
             var elaborateMb = (GC.GetAllocatedBytesForCurrentThread() - allocatedBefore) / 1e6;
             var elaborateGc = GcCounts.Now() - gcBefore;
+            var elaborateEnd = DateTime.UtcNow;
             var netlist = result!.Netlist!;
             line.Append($"bind {bind:N0} ms, elaborate {elaborate:N0} ms, {elaborateMb:N0} MB allocated, {elaborateGc} ({result.Steps:N0} steps, {netlist.Devices.Count:N0} devices); rules:");
             var rulesGcBefore = GcCounts.Now();
             var total = 0.0;
             var findings = new List<Finding>();
+            var ruleSpans = new List<(string Rule, DateTime Start, DateTime End)>();
             foreach (var rule in Checker.Rules)
             {
                 var ruleAllocated = GC.GetAllocatedBytesForCurrentThread();
+                var ruleStart = DateTime.UtcNow;
                 var ms = Samples.Time(() => findings.AddRange(Checker.Check(netlist, new[] { rule }, RulePolicy.Default).Findings));
+                ruleSpans.Add((rule.GetType().Name, ruleStart, DateTime.UtcNow));
                 total += ms;
                 line.Append($" {rule.GetType().Name} {ms:N0} ({(GC.GetAllocatedBytesForCurrentThread() - ruleAllocated) / 1e6:N0} MB)");
             }
@@ -156,6 +162,11 @@ public static class Program
             // What stays alive while the design is checked (the netlist and the models the rules cache on it), after the
             // timed phases so the forced collection does not change their figures: a number the machine's load does not move.
             line.Append($"; retained {RetainedMegabytes(netlist):N0} MB");
+            // Large-object bytes by phase: what starts the full collections (sampled, about 0.1 MB per event).
+            LargeObjectAllocations.AwaitLateEvents();
+            line.Append($"; large-object MB: elaboration {largeObjects.MegabytesBetween(elaborateStart, elaborateEnd):N1}, rules");
+            foreach (var (name, start, end) in ruleSpans)
+                line.Append($" {name} {largeObjects.MegabytesBetween(start, end):N1}");
             Console.WriteLine(line);
             if (run == 0)
                 continue;   // the first run also pays for JIT compilation and first use
