@@ -147,10 +147,13 @@ public static class Program
             {
                 var ruleAllocated = GC.GetAllocatedBytesForCurrentThread();
                 var ruleStart = DateTime.UtcNow;
+                var ruleGcBefore = GcCounts.Now();
                 var ms = Samples.Time(() => findings.AddRange(Checker.Check(netlist, new[] { rule }, RulePolicy.Default).Findings));
                 ruleSpans.Add((rule.GetType().Name, ruleStart, DateTime.UtcNow));
+                var ruleGc = GcCounts.Now() - ruleGcBefore;
                 total += ms;
-                line.Append($" {rule.GetType().Name} {ms:N0} ({(GC.GetAllocatedBytesForCurrentThread() - ruleAllocated) / 1e6:N0} MB)");
+                line.Append($" {rule.GetType().Name} {ms:N0} ({(GC.GetAllocatedBytesForCurrentThread() - ruleAllocated) / 1e6:N0} MB")
+                    .Append(ruleGc.Gen2 > 0 ? $", full GC {ruleGc.Paused.TotalMilliseconds:N0} ms)" : ")");
             }
 
             var mapper = new DiagnosticMapper(session, design);

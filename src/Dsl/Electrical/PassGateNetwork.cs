@@ -43,6 +43,12 @@ internal sealed class PassGateNetwork
     private static readonly System.Runtime.CompilerServices.ConditionalWeakTable<Netlist, PassGateNetwork> Cache = new();
 
     private readonly bool[] restored;
+
+    // The pass gates numbered densely in device order (their pass index), so that everything kept per gate here and in
+    // the rules is as long as the pass gates, not the whole device list: at a million devices, arrays indexed by
+    // device id were the rules' main large-object allocations, which start the runtime's full collections.
+    private readonly int[] passGates;
+    private readonly int[] passIndexOfDevice;
     private readonly bool[] inputEdgeKept;
     private readonly bool[] outputEdgeKept;
     private readonly double[] downstreamFarads;
@@ -76,19 +82,24 @@ internal sealed class PassGateNetwork
         Netlist = netlist ?? throw new ArgumentNullException(nameof(netlist));
         var devices = netlist.Devices;
         var nets = netlist.Nets;
-        DeviceCount = devices.Count;
-
         restored = new bool[nets.Count];
         foreach (var net in nets)
             restored[net.Id] = IsRestoredNet(netlist, net);
 
-        inputEdgeKept = new bool[devices.Count];
-        outputEdgeKept = new bool[devices.Count];
+        passIndexOfDevice = new int[devices.Count];
+        var count = 0;
+        foreach (var device in devices)
+            passIndexOfDevice[device.Id] = device.IsPassDevice ? count++ : -1;
+        passGates = new int[count];
+        inputEdgeKept = new bool[count];
+        outputEdgeKept = new bool[count];
         foreach (var device in devices)
         {
             if (!device.IsPassDevice) continue;
-            inputEdgeKept[device.Id] = true;
-            outputEdgeKept[device.Id] = !restored[device.Output.Id];
+            var index = passIndexOfDevice[device.Id];
+            passGates[index] = device.Id;
+            inputEdgeKept[index] = true;
+            outputEdgeKept[index] = !restored[device.Output.Id];
         }
 
         // The pass gates each net feeds, as one flat array (net i's are passLoads[passLoadStart[i] .. passLoadStart[i+1]]).
@@ -102,16 +113,16 @@ internal sealed class PassGateNetwork
         var fill = (int[])passLoadStart.Clone();
         foreach (var device in devices)
             if (device.IsPassDevice)
-                passLoads[fill[device.Inputs[0].Id]++] = device.Id;
+                passLoads[fill[device.Inputs[0].Id]++] = passIndexOfDevice[device.Id];
 
         postorder = Walk(cancellationToken);
         hasExclusivePartner = ExclusiveControls.MayHavePartner(netlist);
         downstreamAssumes = new bool[nets.Count];
         downstreamFarads = SumDownstream(cancellationToken);
-        chargedFarads = new double[devices.Count];
-        chargedAssumes = new bool[devices.Count];
-        rootFarads = new double[devices.Count];
-        rootAssumes = new bool[devices.Count];
+        chargedFarads = new double[count];
+        chargedAssumes = new bool[count];
+        rootFarads = new double[count];
+        rootAssumes = new bool[count];
         ComputeGateLoads(cancellationToken);
     }
 
@@ -120,24 +131,37 @@ internal sealed class PassGateNetwork
 
     public Netlist Netlist { get; }
 
-    public int DeviceCount { get; }
+    /// <summary>The number of pass gates: their pass indexes run from 0 to this count, in device order.</summary>
+    public int PassGateCount => passGates.Length;
 
-    /// <summary>Graph nodes in depth-first postorder: device ids, and nets encoded as <see cref="DeviceCount"/> + net id.
-    /// For every kept edge u → v, v comes before u.</summary>
+    /// <summary>The pass gate with this pass index.</summary>
+    public Device GateAt(int passIndex) => Netlist.Devices[passGates[passIndex]];
+
+    /// <summary>The pass index of a pass gate of this network's netlist (dense, in device order).</summary>
+    public int IndexOf(Device gate)
+    {
+        if (gate is null) throw new ArgumentNullException(nameof(gate));
+        if ((uint)gate.Id >= (uint)passIndexOfDevice.Length || passIndexOfDevice[gate.Id] < 0 || !ReferenceEquals(Netlist.Devices[gate.Id], gate))
+            throw new ArgumentException($"'{nameof(gate)}' must be a pass device of design '{Netlist.DesignName}' (was {gate}).", nameof(gate));
+        return passIndexOfDevice[gate.Id];
+    }
+
+    /// <summary>Graph nodes in depth-first postorder: pass indexes for gates, and nets encoded as
+    /// <see cref="PassGateCount"/> + net id. For every kept edge u → v, v comes before u.</summary>
     public IReadOnlyList<int> Postorder => postorder;
 
-    public bool IsNetNode(int node) => node >= DeviceCount;
+    public bool IsNetNode(int node) => node >= passGates.Length;
 
-    public int NetIdOf(int node) => node - DeviceCount;
+    public int NetIdOf(int node) => node - passGates.Length;
 
     /// <summary>True when the net is a primary input or has a restoring driver that is not a weak keeper.</summary>
     public bool IsRestored(Net net) => restored[net.Id];
 
     /// <summary>The pass gate's input net feeds it through a series edge that was kept (not one closing a loop).</summary>
-    public bool IsInputEdgeKept(Device gate) => inputEdgeKept[gate.Id];
+    public bool IsInputEdgeKept(Device gate) => inputEdgeKept[IndexOf(gate)];
 
     /// <summary>The pass gate continues into its output net (the net is not restored and the edge closes no loop).</summary>
-    public bool IsOutputEdgeKept(Device gate) => outputEdgeKept[gate.Id];
+    public bool IsOutputEdgeKept(Device gate) => outputEdgeKept[IndexOf(gate)];
 
     /// <summary>Where the pass gates this net feeds (as their data input) begin among <see cref="PassLoadAt"/>; they
     /// run, in netlist order, up to <see cref="PassLoadEnd"/> (an index range rather than an enumerable, which would
@@ -148,7 +172,10 @@ internal sealed class PassGateNetwork
     public int PassLoadEnd(Net net) => passLoadStart[net.Id + 1];
 
     /// <summary>The pass gate at a position of the flat pass-load index.</summary>
-    public Device PassLoadAt(int position) => Netlist.Devices[passLoads[position]];
+    public Device PassLoadAt(int position) => GateAt(passLoads[position]);
+
+    /// <summary>The pass index of the gate at a position of the flat pass-load index.</summary>
+    public int PassLoadIndexAt(int position) => passLoads[position];
 
     /// <summary>The net's load when it is driven with nothing known about which of its pass gates conduct: its own
     /// capacitance plus the heaviest set of branches that may conduct together (F).</summary>
@@ -163,19 +190,19 @@ internal sealed class PassGateNetwork
     /// conduct while it does (those exclusive with it are off); only the net's own capacitance when the chain cannot
     /// continue there (a restored net, a loop).
     /// </summary>
-    public Capacitance ChargedThrough(Device gate) => new(chargedFarads[PassGateId(gate)]);
+    public Capacitance ChargedThrough(Device gate) => new(chargedFarads[IndexOf(gate)]);
 
     /// <summary>True when <see cref="ChargedThrough"/> makes the assumption of <see cref="AssumesUnknownBranchesConduct(Net)"/>.</summary>
-    public bool AssumesUnknownBranchesConduct(Device gate) => chargedAssumes[PassGateId(gate)];
+    public bool AssumesUnknownBranchesConduct(Device gate) => chargedAssumes[IndexOf(gate)];
 
     /// <summary>
     /// The load the driver of <paramref name="gate"/>'s input net sees while the gate conducts: the net, the gate's
     /// branch, and the other branches that may conduct with it (those exclusive with the gate are off).
     /// </summary>
-    public Capacitance RootLoad(Device gate) => new(rootFarads[PassGateId(gate)]);
+    public Capacitance RootLoad(Device gate) => new(rootFarads[IndexOf(gate)]);
 
     /// <summary>True when <see cref="RootLoad"/> makes the assumption of <see cref="AssumesUnknownBranchesConduct(Net)"/>.</summary>
-    public bool RootLoadAssumes(Device gate) => rootAssumes[PassGateId(gate)];
+    public bool RootLoadAssumes(Device gate) => rootAssumes[IndexOf(gate)];
 
     /// <summary>
     /// The Elmore term of one restoring stage or pass gate on a conducting path, in the worst case: its resistance
@@ -190,28 +217,20 @@ internal sealed class PassGateNetwork
         return Netlist.ResistanceOf(device) * load;
     }
 
-    private int PassGateId(Device gate)
-    {
-        if (gate is null) throw new ArgumentNullException(nameof(gate));
-        if (!gate.IsPassDevice || (uint)gate.Id >= (uint)DeviceCount || !ReferenceEquals(Netlist.Devices[gate.Id], gate))
-            throw new ArgumentException($"'{nameof(gate)}' must be a pass device of design '{Netlist.DesignName}' (was {gate}).", nameof(gate));
-        return gate.Id;
-    }
-
     // Every gate's charged and root loads, made once here so that the network is read-only (and safe to share)
     // afterwards. A net with more branches than are compared gives every gate the same load: computed once per net.
     private void ComputeGateLoads(CancellationToken cancellationToken)
     {
         var uncompared = new Dictionary<int, (double Farads, bool Assumes)>();
-        foreach (var gate in Netlist.Devices)
+        for (var index = 0; index < passGates.Length; index++)
         {
-            if (!gate.IsPassDevice) continue;
-            if ((gate.Id & 0xFFF) == 0) cancellationToken.ThrowIfCancellationRequested();
-            if (outputEdgeKept[gate.Id])
-                chargedFarads[gate.Id] = LoadOf(gate.Output, gate, null, uncompared, out chargedAssumes[gate.Id]);
+            if ((index & 0xFFF) == 0) cancellationToken.ThrowIfCancellationRequested();
+            var gate = GateAt(index);
+            if (outputEdgeKept[index])
+                chargedFarads[index] = LoadOf(gate.Output, gate, null, uncompared, out chargedAssumes[index]);
             else
-                chargedFarads[gate.Id] = Netlist.CapacitanceOf(gate.Output).Farads;
-            rootFarads[gate.Id] = LoadOf(gate.Inputs[0], gate, gate, uncompared, out rootAssumes[gate.Id]);
+                chargedFarads[index] = Netlist.CapacitanceOf(gate.Output).Farads;
+            rootFarads[index] = LoadOf(gate.Inputs[0], gate, gate, uncompared, out rootAssumes[index]);
         }
     }
 
@@ -237,10 +256,11 @@ internal sealed class PassGateNetwork
         assumes = false;
         for (var position = passLoadStart[net.Id]; position < passLoadStart[net.Id + 1]; position++)
         {
-            var load = Netlist.Devices[passLoads[position]];
-            if (!inputEdgeKept[load.Id]) continue;
+            var loadIndex = passLoads[position];
+            if (!inputEdgeKept[loadIndex]) continue;
+            var load = GateAt(loadIndex);
             if (compare && conducting is not null && !ReferenceEquals(load, required) && AreExclusive(load, conducting)) continue;
-            var kept = outputEdgeKept[load.Id];
+            var kept = outputEdgeKept[loadIndex];
             assumes |= kept && downstreamAssumes[load.Output.Id];
             anyExclusive |= compare && load.DataControl is { } control && hasExclusivePartner[control.Id];
             branches.Add((kept ? sums[load.Output.Id] : 0.0, load));
@@ -329,22 +349,23 @@ internal sealed class PassGateNetwork
     private int[] Walk(CancellationToken cancellationToken)
     {
         var nets = Netlist.Nets;
-        var nodeCount = DeviceCount + nets.Count;
+        var gateCount = passGates.Length;
+        var nodeCount = gateCount + nets.Count;
         var colour = new byte[nodeCount];
         var order = new List<int>(nodeCount);
         var stack = new Stack<(int Node, int Next)>();
         var steps = 0;
 
         var hasPassDriver = new bool[nets.Count];
-        foreach (var device in Netlist.Devices)
-            if (device.IsPassDevice && outputEdgeKept[device.Id])
-                hasPassDriver[device.Output.Id] = true;
+        for (var index = 0; index < gateCount; index++)
+            if (outputEdgeKept[index])
+                hasPassDriver[GateAt(index).Output.Id] = true;
 
         for (var round = 0; round < 2; round++)
         {
             foreach (var net in nets)
             {
-                var node = DeviceCount + net.Id;
+                var node = gateCount + net.Id;
                 if (colour[node] != White || (round == 0 && hasPassDriver[net.Id])) continue;
                 colour[node] = Grey;
                 stack.Push((node, 0));
@@ -383,16 +404,16 @@ internal sealed class PassGateNetwork
     // successors are the pass gates it feeds.
     private int ChildOf(int node, int index, out int gate, out bool isOutputEdge)
     {
-        if (node < DeviceCount)
+        var gateCount = passGates.Length;
+        if (node < gateCount)
         {
             gate = node;
             isOutputEdge = true;
-            var device = Netlist.Devices[node];
-            return index == 0 && outputEdgeKept[node] ? DeviceCount + device.Output.Id : -1;
+            return index == 0 && outputEdgeKept[node] ? gateCount + GateAt(node).Output.Id : -1;
         }
 
         isOutputEdge = false;
-        var net = node - DeviceCount;
+        var net = node - gateCount;
         var position = passLoadStart[net] + index;
         gate = position < passLoadStart[net + 1] ? passLoads[position] : -1;
         return gate;
@@ -406,8 +427,8 @@ internal sealed class PassGateNetwork
         {
             if ((i & 0xFFF) == 0) cancellationToken.ThrowIfCancellationRequested();
             var node = postorder[i];
-            if (node < DeviceCount) continue;
-            var net = nets[node - DeviceCount];
+            if (node < passGates.Length) continue;
+            var net = nets[node - passGates.Length];
             // Children come first in postorder: their sums are final when the net is reached.
             sums[net.Id] = PassLoadStart(net) == PassLoadEnd(net)
                 ? Netlist.CapacitanceOf(net).Farads

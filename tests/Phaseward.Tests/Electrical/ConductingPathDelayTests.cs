@@ -94,6 +94,34 @@ public class ConductingPathDelayTests
     }
 
     [Fact]
+    public void An_assumption_made_inside_a_run_is_reported_with_it()
+    {
+        // in → g1 → n1 → g2 → n2 → g3 → n3, and n3 feeds g4 (on p) and g5 (on q), selects not known to be exclusive:
+        // only g3, in the middle of the run, charges branches counted as conducting together. The same Elmore sum on
+        // the flat figures: 4 kΩ · 60 fF + 5 kΩ · (50 + 40 + 30 + 10) fF = 240 + 650 = 890 ps at the end of g4.
+        var c = Figures.NewCircuit("spur");
+        var n1 = c.Node("n1");
+        var n2 = c.Node("n2");
+        var n3 = c.Node("n3");
+        c.TransmissionGate(c.Input("in"), c.Input("e1"), n1);
+        c.TransmissionGate(n1, c.Input("e2"), n2);
+        c.TransmissionGate(n2, c.Input("e3"), n3);
+        foreach (var (select, name) in new[] { (c.Input("p"), "o1"), (c.Input("q"), "o2") })
+        {
+            var o = c.Node(name);
+            c.TransmissionGate(n3, select, o);
+            c.Inverter(o, name + "_b");
+        }
+
+        var finding = new PassGateChainRule().Check(new RuleContext(c.ToNetlist(), new RulePolicy { MaxSeriesPassGates = 2 })).Single();
+        Assert.EndsWith(PassGateChainRule.ExclusivityAssumption, finding.Message);
+        Assert.Equal("true", finding.Properties[FindingPropertyKeys.AssumesUnknownBranchesConduct]);
+        var runs = PassGateChains.Of(c.ToNetlist()).Where(r => r.Length == 4).ToList();
+        Assert.Equal(new[] { "o1", "o2" }, runs.Select(r => r.Last.Output.Name).OrderBy(n => n));
+        Assert.All(runs, r => Assert.Equal(890.0, Figures.Ps(r.ElmoreDelay), 9));
+    }
+
+    [Fact]
     public void The_setup_path_and_the_entry_delay_add_up_to_the_same_Elmore_delay()
     {
         // The latch-to-latch path ends at L0's input m2_0: 0.69 · T(m2) = 0.69 · 410 ps; L0's entry (the latch table's

@@ -1,11 +1,12 @@
 using System.Collections.Generic;
 using Phaseward.Clocking;
+using Phaseward.Electrical;
 using Phaseward.Netlists;
 
 namespace Phaseward.Rules.PassGatePaths;
 
 /// <summary>
-/// For every pass gate, the controls met so far along the run through it: one entry per distinct phase or data
+/// For every pass gate (by its pass index, <see cref="PassGateNetwork.IndexOf"/>), the controls met so far along the run through it: one entry per distinct phase or data
 /// control that can keep a gate from conducting with it (<see cref="ConductionDecisions.CanExclude"/>), holding the
 /// gate where that control was met last and the gate that follows it on the run. A gate joins a run only if it can
 /// conduct with every entry; the last entry it cannot conduct with is where the run must be broken, and the gate that
@@ -24,17 +25,17 @@ internal sealed class ControlTrails
     /// <summary>The most distinct controls a run remembers.</summary>
     public const int MaxTracked = 16;
 
-    private readonly IReadOnlyList<Device> devices;
+    private readonly PassGateNetwork network;
     private readonly ConductionDecisions decisions;
     private readonly int[] head;
     private readonly List<Node> nodes = new();
     private readonly List<(int Gate, int Beyond)> scratch = new();
 
-    public ControlTrails(IReadOnlyList<Device> devices, ConductionDecisions decisions)
+    public ControlTrails(PassGateNetwork network, ConductionDecisions decisions)
     {
-        this.devices = devices;
+        this.network = network;
         this.decisions = decisions;
-        head = new int[devices.Count];
+        head = new int[network.PassGateCount];
     }
 
     /// <summary>The newest entry on the trail of gate <paramref name="last"/> that <paramref name="gate"/> cannot conduct
@@ -43,7 +44,7 @@ internal sealed class ControlTrails
     {
         if (last < 0 || !decisions.CanExclude(gate)) return -1;
         for (var node = head[last]; node >= 0; node = nodes[node].Next)
-            if (!decisions.MayConductTogether(devices[nodes[node].Gate], gate))
+            if (!decisions.MayConductTogether(network.GateAt(nodes[node].Gate), gate))
                 return node;
         return -1;
     }
@@ -54,7 +55,7 @@ internal sealed class ControlTrails
     {
         for (var node = head[of]; node >= 0; node = nodes[node].Next)
         {
-            var gate = devices[nodes[node].Gate];
+            var gate = network.GateAt(nodes[node].Gate);
             if (nodes[node].Gate == skip || !decisions.CanExclude(gate)) continue;
             if (with.FirstConflict(withOf, gate) >= 0) return node;
         }
@@ -69,13 +70,14 @@ internal sealed class ControlTrails
     public int BeyondOf(int node) => nodes[node].Beyond;
 
     /// <summary>
-    /// Makes the trail of <paramref name="gate"/>, which follows gate <paramref name="last"/> on its run (-1: the gate
-    /// begins a run): <paramref name="last"/>'s trail without the entry <paramref name="cut"/> and everything older
-    /// (-1: nothing cut), with <paramref name="gate"/> as the follower of <paramref name="last"/>'s own entry and its
-    /// own control as the newest entry.
+    /// Makes the trail of gate <paramref name="gateIndex"/>, which follows gate <paramref name="last"/> on its run (-1:
+    /// the gate begins a run): <paramref name="last"/>'s trail without the entry <paramref name="cut"/> and everything
+    /// older (-1: nothing cut), with the gate as the follower of <paramref name="last"/>'s own entry and its own
+    /// control as the newest entry.
     /// </summary>
-    public void Extend(int last, int cut, Device gate)
+    public void Extend(int last, int cut, int gateIndex)
     {
+        var gate = network.GateAt(gateIndex);
         var keyed = decisions.CanExclude(gate);
         var key = keyed ? ConductionDecisions.KeyOf(gate) : null;
         var source = last >= 0 ? head[last] : -1;
@@ -86,7 +88,7 @@ internal sealed class ControlTrails
         for (var node = source; node >= 0; node = nodes[node].Next, index++)
         {
             if (node == cut) { cutIndex = index; break; }
-            if (keyed && ReferenceEquals(ConductionDecisions.KeyOf(devices[nodes[node].Gate]), key)) keyIndex = index;
+            if (keyed && ReferenceEquals(ConductionDecisions.KeyOf(network.GateAt(nodes[node].Gate)), key)) keyIndex = index;
             count++;
         }
 
@@ -104,7 +106,7 @@ internal sealed class ControlTrails
             if (index > copyTo) { tail = node; break; }
             if (index == keyIndex) continue;
             var entry = nodes[node];
-            scratch.Add((entry.Gate, entry.Gate == last ? gate.Id : entry.Beyond));
+            scratch.Add((entry.Gate, entry.Gate == last ? gateIndex : entry.Beyond));
         }
 
         var room = MaxTracked - (keyed ? 1 : 0);
@@ -112,12 +114,9 @@ internal sealed class ControlTrails
         var top = tail;
         for (var i = scratch.Count - 1; i >= 0; i--)
             top = Add(scratch[i].Gate, scratch[i].Beyond, top);
-        if (keyed) top = Add(gate.Id, -1, top);
-        head[gate.Id] = top;
+        if (keyed) top = Add(gateIndex, -1, top);
+        head[gateIndex] = top;
     }
-
-    /// <summary>Gives the gate an empty trail (a gate that is not on any run).</summary>
-    public void Clear(Device gate) => head[gate.Id] = -1;
 
     private int Add(int gate, int beyond, int next)
     {

@@ -31,16 +31,17 @@ namespace Phaseward.Rules.PassGatePaths;
 /// </remarks>
 internal sealed class SeriesChains
 {
+    // Everything here is indexed by the gates' pass indexes (PassGateNetwork.IndexOf), links included: only pass gates
+    // are on runs, and arrays as long as the device list were, at a million devices, large-object allocations enough
+    // to start a full collection of the whole heap.
     private readonly int[] depthIn;
     private readonly int[] previous;
     private readonly int[] start;
     private readonly double[] elmoreIn;
-    private readonly double[] ohmsIn;
-    private readonly double[] faradsIn;
-    private readonly bool[] assumesIn;
 
     // Along the tree of predecessors (a run broken part-way still has its predecessor there): each gate's own Elmore
-    // step, and sums from the tree's root, so that a sub-run's figures are two differences.
+    // step, and sums from the tree's root, so that a sub-run's figures are two differences. The run ending at a gate is
+    // the sub-run from its start, so its totals are read from these when a chain is reported, not kept per gate.
     private readonly double[] step;
     private readonly int[] treeIndex;
     private readonly double[] stepSum;
@@ -67,15 +68,11 @@ internal sealed class SeriesChains
     {
         Network = network ?? throw new ArgumentNullException(nameof(network));
         var netlist = network.Netlist;
-        var devices = netlist.Devices;
-        var n = devices.Count;
+        var n = network.PassGateCount;
         depthIn = new int[n];
         previous = new int[n];
         start = new int[n];
         elmoreIn = new double[n];
-        ohmsIn = new double[n];
-        faradsIn = new double[n];
-        assumesIn = new bool[n];
         step = new double[n];
         treeIndex = new int[n];
         stepSum = new double[n];
@@ -83,10 +80,12 @@ internal sealed class SeriesChains
         faradsSum = new double[n];
         assumesSum = new int[n];
         decisions = new ConductionDecisions(netlist, SkewOverlapCounts.No);
-        trails = new ControlTrails(devices, decisions);
+        trails = new ControlTrails(network, decisions);
         this.cancellationToken = cancellationToken;
 
-        var netBestDriver = new int[netlist.Nets.Count];
+        // The best run ending at each gate's input net, written to the gates that net feeds when the net is reached
+        // (before them in this order): kept per gate, not per net, for the same reason as above.
+        var bestDriverOfInput = new int[n];
         var order = network.Postorder;
 
         // Forward in topological order (reverse postorder): the longest run ending at each gate.
@@ -101,68 +100,60 @@ internal sealed class SeriesChains
                 foreach (var driver in netlist.DriverList(net))
                 {
                     if (!driver.IsPassDevice || !network.IsOutputEdgeKept(driver)) continue;
-                    if (best < 0 || depthIn[driver.Id] > depthIn[best]
-                        || (depthIn[driver.Id] == depthIn[best] && elmoreIn[driver.Id] > elmoreIn[best]))
-                        best = driver.Id;
+                    var d = network.IndexOf(driver);
+                    if (best < 0 || depthIn[d] > depthIn[best] || (depthIn[d] == depthIn[best] && elmoreIn[d] > elmoreIn[best]))
+                        best = d;
                 }
 
-                netBestDriver[net.Id] = best;
+                for (var position = network.PassLoadStart(net); position < network.PassLoadEnd(net); position++)
+                    bestDriverOfInput[network.PassLoadIndexAt(position)] = best;
                 continue;
             }
 
-            var gate = devices[node];
+            var g = node;
+            var gate = network.GateAt(g);
             var ohms = netlist.ResistanceOf(gate).Ohms;
             var farads = netlist.CapacitanceOf(gate.Output).Farads;
             var own = network.AssumesUnknownBranchesConduct(gate);
-            step[gate.Id] = ohms * network.ChargedThrough(gate).Farads;
-            var join = network.IsInputEdgeKept(gate) ? BestJoin(gate, netBestDriver[gate.Inputs[0].Id]) : Join.None;
+            step[g] = ohms * network.ChargedThrough(gate).Farads;
+            var join = network.IsInputEdgeKept(gate) ? BestJoin(gate, bestDriverOfInput[g]) : Join.None;
             var before = join.Previous;
-            previous[gate.Id] = before;
-            treeIndex[gate.Id] = before < 0 ? 0 : treeIndex[before] + 1;
-            stepSum[gate.Id] = (before < 0 ? 0 : stepSum[before]) + step[gate.Id];
-            ohmsSum[gate.Id] = (before < 0 ? 0 : ohmsSum[before]) + ohms;
-            faradsSum[gate.Id] = (before < 0 ? 0 : faradsSum[before]) + farads;
-            assumesSum[gate.Id] = (before < 0 ? 0 : assumesSum[before]) + (own ? 1 : 0);
-            trails.Extend(before, join.Cut, gate);
+            previous[g] = before;
+            treeIndex[g] = before < 0 ? 0 : treeIndex[before] + 1;
+            stepSum[g] = (before < 0 ? 0 : stepSum[before]) + step[g];
+            ohmsSum[g] = (before < 0 ? 0 : ohmsSum[before]) + ohms;
+            faradsSum[g] = (before < 0 ? 0 : faradsSum[before]) + farads;
+            assumesSum[g] = (before < 0 ? 0 : assumesSum[before]) + (own ? 1 : 0);
+            trails.Extend(before, join.Cut, g);
             if (before < 0)
             {
-                depthIn[gate.Id] = 1;
-                start[gate.Id] = gate.Id;
-                elmoreIn[gate.Id] = RootTerm(gate) + step[gate.Id];
-                ohmsIn[gate.Id] = ohms;
-                faradsIn[gate.Id] = farads;
-                assumesIn[gate.Id] = network.RootLoadAssumes(gate) || own;
+                depthIn[g] = 1;
+                start[g] = g;
+                elmoreIn[g] = RootTerm(gate) + step[g];
             }
             else if (join.Start < 0)
             {
-                depthIn[gate.Id] = depthIn[before] + 1;
-                start[gate.Id] = start[before];
-                elmoreIn[gate.Id] = elmoreIn[before] + step[gate.Id];
-                ohmsIn[gate.Id] = ohmsIn[before] + ohms;
-                faradsIn[gate.Id] = faradsIn[before] + farads;
-                assumesIn[gate.Id] = assumesIn[before] || own;
+                depthIn[g] = depthIn[before] + 1;
+                start[g] = start[before];
+                elmoreIn[g] = elmoreIn[before] + step[g];
             }
             else
             {
                 // The run is broken before join.Start: the sub-run from there, its first gate driven from the node the
                 // run was broken at.
-                var first = devices[join.Start];
-                depthIn[gate.Id] = treeIndex[gate.Id] - treeIndex[first.Id] + 1;
-                start[gate.Id] = first.Id;
-                elmoreIn[gate.Id] = RootTerm(first) + stepSum[gate.Id] - stepSum[first.Id] + step[first.Id];
-                ohmsIn[gate.Id] = ohmsSum[gate.Id] - ohmsSum[first.Id] + netlist.ResistanceOf(first).Ohms;
-                faradsIn[gate.Id] = faradsSum[gate.Id] - faradsSum[first.Id] + netlist.CapacitanceOf(first.Output).Farads;
-                assumesIn[gate.Id] = network.RootLoadAssumes(first) || assumesSum[gate.Id] - assumesSum[first.Id] > 0
-                                     || network.AssumesUnknownBranchesConduct(first);
+                var f = join.Start;
+                depthIn[g] = treeIndex[g] - treeIndex[f] + 1;
+                start[g] = f;
+                elmoreIn[g] = RootTerm(network.GateAt(f)) + stepSum[g] - stepSum[f] + step[f];
             }
         }
     }
 
     private double RootTerm(Device first) => Network.RootResistanceOf(first.Inputs[0]).Ohms * Network.RootLoad(first).Farads;
 
-    /// <summary>How a gate joins the run of a driver: the driver (-1: the gate begins a run), the entry of the driver's
-    /// trail where the run is broken (-1: not broken) and the first gate of the sub-run that remains (-1: the driver's
-    /// run whole).</summary>
+    /// <summary>How a gate joins the run of a driver (pass indexes): the driver (-1: the gate begins a run), the entry
+    /// of the driver's trail where the run is broken (-1: not broken) and the first gate of the sub-run that remains
+    /// (-1: the driver's run whole).</summary>
     private readonly struct Join
     {
         public static readonly Join None = new(-1, -1, -1, 1, 0);
@@ -189,6 +180,7 @@ internal sealed class SeriesChains
 
     // The longest run the gate can extend among its input net's pass drivers. The net's best driver usually takes it
     // whole (its run is the longest, and the gate conducts with all of it); only when it does not are the others tried.
+    // Pass indexes follow device order, so the lower index is the lower device id.
     private Join BestJoin(Device gate, int best)
     {
         if (best < 0) return Join.None;
@@ -196,10 +188,12 @@ internal sealed class SeriesChains
         if (join.Cut < 0) return join;
         foreach (var driver in Network.Netlist.DriverList(gate.Inputs[0]))
         {
-            if (!driver.IsPassDevice || !Network.IsOutputEdgeKept(driver) || driver.Id == best) continue;
-            var other = JoinOf(gate, driver.Id);
+            if (!driver.IsPassDevice || !Network.IsOutputEdgeKept(driver)) continue;
+            var d = Network.IndexOf(driver);
+            if (d == best) continue;
+            var other = JoinOf(gate, d);
             if (other.Depth > join.Depth || (other.Depth == join.Depth && other.Elmore > join.Elmore)
-                                         || (other.Depth == join.Depth && other.Elmore == join.Elmore && driver.Id < join.Previous))
+                                         || (other.Depth == join.Depth && other.Elmore == join.Elmore && d < join.Previous))
                 join = other;
         }
 
@@ -215,7 +209,7 @@ internal sealed class SeriesChains
         if (trails.GateOf(cut) == driver || first < 0)
             return new Join(-1, -1, -1, 1, 0);
         var depth = treeIndex[driver] - treeIndex[first] + 2;
-        return new Join(driver, cut, first, depth, RootTerm(Network.Netlist.Devices[first]) + stepSum[driver] - stepSum[first] + step[first]);
+        return new Join(driver, cut, first, depth, RootTerm(Network.GateAt(first)) + stepSum[driver] - stepSum[first] + step[first]);
     }
 
     // Backward in postorder: the longest run continuing from each gate.
@@ -225,9 +219,8 @@ internal sealed class SeriesChains
             return;
         var network = Network;
         var netlist = network.Netlist;
-        var devices = netlist.Devices;
         var order = network.Postorder;
-        var n = devices.Count;
+        var n = network.PassGateCount;
         var depthOut = new int[n];
         var next = new int[n];
         var end = new int[n];
@@ -236,8 +229,11 @@ internal sealed class SeriesChains
         var sufOhms = new double[n];
         var sufFarads = new double[n];
         var sufAssumes = new int[n];
-        var continuation = new ControlTrails(devices, decisions);
-        var netBestLoad = new int[netlist.Nets.Count];
+        var continuation = new ControlTrails(network, decisions);
+
+        // The best run continuing from each gate's output net, written to the gates that drive it when the net is
+        // reached (before them in postorder).
+        var bestLoadOfOutput = new int[n];
         for (var i = 0; i < order.Count; i++)
         {
             if ((i & 0xFFF) == 0) cancellationToken.ThrowIfCancellationRequested();
@@ -249,39 +245,42 @@ internal sealed class SeriesChains
                 var bestDelay = 0.0;
                 for (var position = network.PassLoadStart(net); position < network.PassLoadEnd(net); position++)
                 {
-                    var load = network.PassLoadAt(position);
-                    if (!network.IsInputEdgeKept(load)) continue;
-                    var delay = step[load.Id] + sufStep[load.Id] - sufStep[end[load.Id]];
-                    if (best < 0 || depthOut[load.Id] > depthOut[best] || (depthOut[load.Id] == depthOut[best] && delay > bestDelay))
+                    if (!network.IsInputEdgeKept(network.PassLoadAt(position))) continue;
+                    var load = network.PassLoadIndexAt(position);
+                    var delay = step[load] + sufStep[load] - sufStep[end[load]];
+                    if (best < 0 || depthOut[load] > depthOut[best] || (depthOut[load] == depthOut[best] && delay > bestDelay))
                     {
-                        best = load.Id;
+                        best = load;
                         bestDelay = delay;
                     }
                 }
 
-                netBestLoad[net.Id] = best;
+                foreach (var driver in netlist.DriverList(net))
+                    if (driver.IsPassDevice)
+                        bestLoadOfOutput[network.IndexOf(driver)] = best;
                 continue;
             }
 
-            var gate = devices[node];
-            var (after, cut, last) = network.IsOutputEdgeKept(gate) ? BestContinuation(gate, netBestLoad[gate.Output.Id], continuation, depthOut, end, index, sufStep) : (-1, -1, -1);
-            next[gate.Id] = after;
-            continuation.Extend(after, cut, gate);
+            var g = node;
+            var gate = network.GateAt(g);
+            var (after, cut, last) = network.IsOutputEdgeKept(gate) ? BestContinuation(gate, bestLoadOfOutput[g], continuation, depthOut, end, index, sufStep) : (-1, -1, -1);
+            next[g] = after;
+            continuation.Extend(after, cut, g);
             if (after < 0)
             {
-                depthOut[gate.Id] = 1;
-                end[gate.Id] = gate.Id;
+                depthOut[g] = 1;
+                end[g] = g;
                 continue;
             }
 
-            var afterGate = devices[after];
-            index[gate.Id] = index[after] + 1;
-            sufStep[gate.Id] = step[after] + sufStep[after];
-            sufOhms[gate.Id] = netlist.ResistanceOf(afterGate).Ohms + sufOhms[after];
-            sufFarads[gate.Id] = netlist.CapacitanceOf(afterGate.Output).Farads + sufFarads[after];
-            sufAssumes[gate.Id] = (network.AssumesUnknownBranchesConduct(afterGate) ? 1 : 0) + sufAssumes[after];
-            end[gate.Id] = last;
-            depthOut[gate.Id] = index[gate.Id] - index[last] + 1;
+            var afterGate = network.GateAt(after);
+            index[g] = index[after] + 1;
+            sufStep[g] = step[after] + sufStep[after];
+            sufOhms[g] = netlist.ResistanceOf(afterGate).Ohms + sufOhms[after];
+            sufFarads[g] = netlist.CapacitanceOf(afterGate.Output).Farads + sufFarads[after];
+            sufAssumes[g] = (network.AssumesUnknownBranchesConduct(afterGate) ? 1 : 0) + sufAssumes[after];
+            end[g] = last;
+            depthOut[g] = index[g] - index[last] + 1;
         }
 
         this.next = next;
@@ -296,7 +295,7 @@ internal sealed class SeriesChains
     }
 
     // The load the gate's run continues into, the entry of that load's continuation trail where it must stop (-1: it
-    // goes on to the load's own end), and the last gate it reaches.
+    // goes on to the load's own end), and the last gate it reaches (pass indexes).
     private (int After, int Cut, int Last) BestContinuation(Device gate, int best, ControlTrails continuation, int[] depthOut, int[] end, int[] index, double[] sufStep)
     {
         if (best < 0) return (-1, -1, -1);
@@ -306,9 +305,9 @@ internal sealed class SeriesChains
         var net = gate.Output;
         for (var position = network.PassLoadStart(net); position < network.PassLoadEnd(net); position++)
         {
-            var load = network.PassLoadAt(position);
-            if (!network.IsInputEdgeKept(load) || load.Id == best) continue;
-            var other = Candidate(load.Id);
+            var load = network.PassLoadIndexAt(position);
+            if (load == best || !network.IsInputEdgeKept(network.PassLoadAt(position))) continue;
+            var other = Candidate(load);
             if (other.Depth > chosen.Depth || (other.Depth == chosen.Depth && other.Delay > chosen.Delay))
                 chosen = other;
         }
@@ -330,10 +329,14 @@ internal sealed class SeriesChains
     public PassGateNetwork Network { get; }
 
     /// <summary>Pass gates in the longest run that ends at this gate, the gate included (0 for a restoring stage).</summary>
-    public int DepthIn(Device gate) => depthIn[gate.Id];
+    public int DepthIn(Device gate)
+    {
+        if (gate is null) throw new ArgumentNullException(nameof(gate));
+        return gate.IsPassDevice ? depthIn[Network.IndexOf(gate)] : 0;
+    }
 
     /// <summary>The first gate of the longest run that ends at this gate.</summary>
-    public Device StartOf(Device gate) => Network.Netlist.Devices[start[gate.Id]];
+    public Device StartOf(Device gate) => Network.GateAt(start[Network.IndexOf(gate)]);
 
     /// <summary>
     /// True when the gate is the first of its run beyond <paramref name="limit"/> gates: the run reaches limit + 1
@@ -342,10 +345,13 @@ internal sealed class SeriesChains
     /// </summary>
     public bool IsFirstBeyond(Device gate, int limit)
     {
-        var depth = depthIn[gate.Id];
-        if (!gate.IsPassDevice || depth <= limit) return false;
-        var before = previous[gate.Id];
-        return depth == limit + 1 || before < 0 || start[before] != start[gate.Id];
+        if (gate is null) throw new ArgumentNullException(nameof(gate));
+        if (!gate.IsPassDevice) return false;
+        var g = Network.IndexOf(gate);
+        var depth = depthIn[g];
+        if (depth <= limit) return false;
+        var before = previous[g];
+        return depth == limit + 1 || before < 0 || start[before] != start[g];
     }
 
     /// <summary>The whole run through this gate: the longest run ending at it, continued by the longest run from it as
@@ -355,18 +361,26 @@ internal sealed class SeriesChains
         if (gate is null) throw new ArgumentNullException(nameof(gate));
         if (!gate.IsPassDevice) throw new ArgumentException($"'{nameof(gate)}' must be a pass device (was {gate}).", nameof(gate));
         EnsureContinuations();
-        var id = gate.Id;
+        var network = Network;
+        var netlist = network.Netlist;
+        var id = network.IndexOf(gate);
         var last = LastOf(id);
         var after = suffixIndex![id] - suffixIndex[last];
-        var devices = Network.Netlist.Devices;
+
+        // The run ending at the gate, from its first gate f: the sums along the tree from f on, and f's own terms.
+        var f = start[id];
+        var first = network.GateAt(f);
+        var ohmsIn = ohmsSum[id] - ohmsSum[f] + netlist.ResistanceOf(first).Ohms;
+        var faradsIn = faradsSum[id] - faradsSum[f] + netlist.CapacitanceOf(first.Output).Farads;
+        var assumesIn = network.RootLoadAssumes(first) || network.AssumesUnknownBranchesConduct(first) || assumesSum[id] - assumesSum[f] > 0;
         return new Chain(
-            StartOf(gate),
-            devices[last],
+            first,
+            network.GateAt(last),
             depthIn[id] + after,
             new Time(elmoreIn[id] + suffixStep![id] - suffixStep[last]),
-            new Resistance(ohmsIn[id] + suffixOhms![id] - suffixOhms[last]),
-            new Capacitance(faradsIn[id] + suffixFarads![id] - suffixFarads[last]),
-            assumesIn[id] || suffixAssumes![id] - suffixAssumes[last] > 0);
+            new Resistance(ohmsIn + suffixOhms![id] - suffixOhms[last]),
+            new Capacitance(faradsIn + suffixFarads![id] - suffixFarads[last]),
+            assumesIn || suffixAssumes![id] - suffixAssumes[last] > 0);
     }
 
     /// <summary>The gates of <see cref="ChainThrough"/> in order from its first, at most <paramref name="limit"/> of them.</summary>
@@ -374,21 +388,23 @@ internal sealed class SeriesChains
     {
         if (gate is null) throw new ArgumentNullException(nameof(gate));
         var chain = ChainThrough(gate);
-        var devices = Network.Netlist.Devices;
+        var network = Network;
+        var id = network.IndexOf(gate);
         var gates = new List<Device>(Math.Min(chain.Length, limit));
-        var first = start[gate.Id];
-        for (var g = gate.Id; ; g = previous[g])
+        var first = start[id];
+        for (var g = id; ; g = previous[g])
         {
-            gates.Add(devices[g]);
+            gates.Add(network.GateAt(g));
             if (g == first) break;
         }
 
         gates.Reverse();
         if (gates.Count > limit) gates.RemoveRange(limit, gates.Count - limit);
-        for (var g = gate.Id; g != chain.Last.Id && gates.Count < limit;)
+        var last = network.IndexOf(chain.Last);
+        for (var g = id; g != last && gates.Count < limit;)
         {
             g = next![g];
-            gates.Add(devices[g]);
+            gates.Add(network.GateAt(g));
         }
 
         return gates;
