@@ -23,7 +23,7 @@ internal sealed class LargeObjectAllocations : EventListener
     private const uint LargeObjectKind = 1;
 
     private readonly object gate = new();
-    private readonly List<(DateTime At, long Bytes)> samples = new();
+    private readonly List<(DateTime At, long Bytes, string Type)> samples = new();
 
     protected override void OnEventSourceCreated(EventSource source)
     {
@@ -36,9 +36,10 @@ internal sealed class LargeObjectAllocations : EventListener
         if (e.EventId != AllocationTickEvent || e.Payload is null || e.PayloadNames is null) return;
         var kind = e.PayloadNames.IndexOf("AllocationKind");
         var amount = e.PayloadNames.IndexOf("AllocationAmount64");
+        var type = e.PayloadNames.IndexOf("TypeName");
         if (kind < 0 || amount < 0 || Convert.ToUInt32(e.Payload[kind]) != LargeObjectKind) return;
         lock (gate)
-            samples.Add((e.TimeStamp.ToUniversalTime(), Convert.ToInt64(e.Payload[amount])));
+            samples.Add((e.TimeStamp.ToUniversalTime(), Convert.ToInt64(e.Payload[amount]), type < 0 ? "?" : Convert.ToString(e.Payload[type]) ?? "?"));
     }
 
     /// <summary>Gives events still on their way time to arrive (call once, before reading a finished phase).</summary>
@@ -50,11 +51,30 @@ internal sealed class LargeObjectAllocations : EventListener
         long bytes = 0;
         lock (gate)
         {
-            foreach (var (at, amount) in samples)
+            foreach (var (at, amount, _) in samples)
                 if (at >= from && at < to)
                     bytes += amount;
         }
 
         return bytes / 1e6;
+    }
+
+    /// <summary>The types that took most of the large-object bytes between two instants, largest first.</summary>
+    public string TopTypesBetween(DateTime from, DateTime to, int count)
+    {
+        var byType = new Dictionary<string, long>(StringComparer.Ordinal);
+        lock (gate)
+        {
+            foreach (var (at, amount, type) in samples)
+                if (at >= from && at < to)
+                    byType[type] = (byType.TryGetValue(type, out var sum) ? sum : 0) + amount;
+        }
+
+        var top = new List<KeyValuePair<string, long>>(byType);
+        top.Sort((a, b) => b.Value.CompareTo(a.Value));
+        var text = new System.Text.StringBuilder();
+        for (var i = 0; i < top.Count && i < count; i++)
+            text.Append(i == 0 ? "" : ", ").Append(top[i].Key).Append(' ').Append((top[i].Value / 1e6).ToString("N1", System.Globalization.CultureInfo.InvariantCulture));
+        return text.ToString();
     }
 }

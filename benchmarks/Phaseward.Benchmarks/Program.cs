@@ -167,7 +167,7 @@ public static class Program
             line.Append($"; retained {RetainedMegabytes(netlist):N0} MB");
             // Large-object bytes by phase: what starts the full collections (sampled, about 0.1 MB per event).
             LargeObjectAllocations.AwaitLateEvents();
-            line.Append($"; large-object MB: elaboration {largeObjects.MegabytesBetween(elaborateStart, elaborateEnd):N1}, rules");
+            line.Append($"; large-object MB: elaboration {largeObjects.MegabytesBetween(elaborateStart, elaborateEnd):N1} ({largeObjects.TopTypesBetween(elaborateStart, elaborateEnd, 6)}), rules");
             foreach (var (name, start, end) in ruleSpans)
                 line.Append($" {name} {largeObjects.MegabytesBetween(start, end):N1}");
             Console.WriteLine(line);
