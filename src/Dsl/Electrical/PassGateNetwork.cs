@@ -352,7 +352,10 @@ internal sealed class PassGateNetwork
         var gateCount = passGates.Length;
         var nodeCount = gateCount + nets.Count;
         var colour = new byte[nodeCount];
-        var order = new List<int>(nodeCount);
+        // Every node is reached (each gate from its input net, every net as a root at the latest): the order fills
+        // the array exactly, with no copy of it at the end.
+        var order = new int[nodeCount];
+        var placed = 0;
         var stack = new Stack<(int Node, int Next)>();
         var steps = 0;
 
@@ -377,7 +380,7 @@ internal sealed class PassGateNetwork
                     if (child < 0)
                     {
                         colour[current] = Black;
-                        order.Add(current);
+                        order[placed++] = current;
                         continue;
                     }
 
@@ -397,7 +400,9 @@ internal sealed class PassGateNetwork
             }
         }
 
-        return order.ToArray();
+        if (placed != nodeCount)
+            Array.Resize(ref order, placed);
+        return order;
     }
 
     // The index-th successor of a node, or -1. A gate's only successor is its output net (when not restored); a net's
