@@ -1,6 +1,7 @@
 using System;
 using System.Collections.Generic;
 using System.Threading;
+using Phaseward.Clocking;
 using Phaseward.Netlists;
 
 namespace Phaseward.Electrical;
@@ -14,11 +15,13 @@ namespace Phaseward.Electrical;
 /// restoring nets; an edge that closes a loop of pass gates (a back edge of the walk) is dropped, so what remains is
 /// acyclic and every later sweep terminates;</item>
 /// <item>the load of every net: its own capacitance (from <see cref="Netlist.CapacitanceOf"/>, fan-out gate loads
-/// included) plus the side branches that may conduct with it, each a capacitive load of everything it feeds. Of
-/// branches whose controls are exclusive (<see cref="Netlist.AreExclusive"/>: stated with
-/// <see cref="Circuit.Exclusive"/>, or a net and its inverse) at most one conducts, so only the heaviest such set
-/// counts; a branch exclusive with the gate that charges the net is off. Branches on data nets not known to be
-/// exclusive are counted as conducting together (the worst case), and the model says so
+/// included) plus the side branches that may conduct with it, each a capacitive load of what its gate charges while
+/// it conducts. Of branches that cannot conduct together (<see cref="ConductionDecisions"/>, as for the series runs:
+/// exclusive data controls, <see cref="Netlist.AreExclusive"/>, stated with <see cref="Circuit.Exclusive"/> or a net
+/// and its inverse; or clock phases whose windows never overlap beyond the complement skew) at most one conducts, so
+/// only the heaviest such set counts; a branch that cannot conduct with the gate that charges the net is off, and so
+/// is everything below a branch that cannot conduct with that branch's own gate. Branches on data nets not known to
+/// be exclusive are counted as conducting together (the worst case), and the model says so
 /// (<see cref="AssumesUnknownBranchesConduct(Net)"/>).</item>
 /// </list>
 /// </summary>
@@ -57,7 +60,9 @@ internal sealed class PassGateNetwork
     private readonly bool[] chargedAssumes;
     private readonly double[] rootFarads;
     private readonly bool[] rootAssumes;
-    private readonly bool[] hasExclusivePartner;
+
+    // Which branches can conduct while another does: used while the network is built (single-threaded), never after.
+    private readonly ConductionDecisions conduction;
     private readonly List<(double Farads, Device Gate)> branchScratch = new();
     private readonly List<Device> countedScratch = new();
     private readonly int[] postorder;
@@ -116,14 +121,15 @@ internal sealed class PassGateNetwork
                 passLoads[fill[device.Inputs[0].Id]++] = passIndexOfDevice[device.Id];
 
         postorder = Walk(cancellationToken);
-        hasExclusivePartner = ExclusiveControls.MayHavePartner(netlist);
+        conduction = new ConductionDecisions(netlist, SkewOverlapCounts.No);
+        downstreamFarads = new double[nets.Count];
         downstreamAssumes = new bool[nets.Count];
-        downstreamFarads = SumDownstream(cancellationToken);
         chargedFarads = new double[count];
         chargedAssumes = new bool[count];
+        SumDownstream(cancellationToken);
         rootFarads = new double[count];
         rootAssumes = new bool[count];
-        ComputeGateLoads(cancellationToken);
+        ComputeRootLoads(cancellationToken);
     }
 
     /// <summary>Nets feeding more pass gates than this count them all, without comparing their controls.</summary>
@@ -217,41 +223,60 @@ internal sealed class PassGateNetwork
         return Netlist.ResistanceOf(device) * load;
     }
 
-    // Every gate's charged and root loads, made once here so that the network is read-only (and safe to share)
-    // afterwards. A net with more branches than are compared gives every gate the same load: computed once per net.
-    private void ComputeGateLoads(CancellationToken cancellationToken)
+    // Every gate's root load, once every charged load is final, so that the network is read-only (and safe to share)
+    // afterwards.
+    private void ComputeRootLoads(CancellationToken cancellationToken)
     {
-        var uncompared = new Dictionary<int, (double Farads, bool Assumes)>();
         for (var index = 0; index < passGates.Length; index++)
         {
             if ((index & 0xFFF) == 0) cancellationToken.ThrowIfCancellationRequested();
             var gate = GateAt(index);
-            if (outputEdgeKept[index])
-                chargedFarads[index] = LoadOf(gate.Output, gate, null, uncompared, out chargedAssumes[index]);
-            else
-                chargedFarads[index] = Netlist.CapacitanceOf(gate.Output).Farads;
-            rootFarads[index] = LoadOf(gate.Inputs[0], gate, gate, uncompared, out rootAssumes[index]);
+            rootFarads[index] = LoadOf(gate.Inputs[0], gate, gate, out rootAssumes[index]);
         }
     }
 
-    private double LoadOf(Net net, Device conducting, Device? required, Dictionary<int, (double Farads, bool Assumes)> uncompared, out bool assumes)
+    // One sweep in postorder, so that everything below a node is final when it is reached: a gate's charged load
+    // (its output net, with the branches that may conduct while it does) and a net's downstream load (with the
+    // heaviest set of branches that may conduct together). A branch weighs what its gate charges while it conducts, so
+    // what cannot conduct with the gate is left out all the way down, not only beside it.
+    private void SumDownstream(CancellationToken cancellationToken)
     {
-        if (PassLoadEnd(net) - PassLoadStart(net) <= MaxBranchesCompared)
-            return LoadOf(downstreamFarads, net, conducting, required, out assumes);
-        if (!uncompared.TryGetValue(net.Id, out var load))
-            uncompared[net.Id] = load = (LoadOf(downstreamFarads, net, null, null, out var all), all);
-        assumes = load.Assumes;
-        return load.Farads;
+        var nets = Netlist.Nets;
+        for (var i = 0; i < postorder.Length; i++)
+        {
+            if ((i & 0xFFF) == 0) cancellationToken.ThrowIfCancellationRequested();
+            var node = postorder[i];
+            if (node < passGates.Length)
+            {
+                var gate = GateAt(node);
+                chargedFarads[node] = outputEdgeKept[node]
+                    ? LoadOf(gate.Output, gate, null, out chargedAssumes[node])
+                    : Netlist.CapacitanceOf(gate.Output).Farads;
+                continue;
+            }
+
+            var net = nets[node - passGates.Length];
+            downstreamFarads[net.Id] = PassLoadStart(net) == PassLoadEnd(net)
+                ? Netlist.CapacitanceOf(net).Farads
+                : LoadOf(net, null, null, out downstreamAssumes[net.Id]);
+        }
     }
 
-    // The net's capacitance plus the heaviest set of its branches that conduct together, none exclusive with
-    // 'conducting' (the gate charging the net, or the gate a path leaves it by), 'required' always included. 'sums'
-    // holds the downstream loads of the nets below (final for them when the sweep reaches this net).
-    private double LoadOf(double[] sums, Net net, Device? conducting, Device? required, out bool assumes)
+    // The net's capacitance plus the heaviest set of its branches that conduct together, none of them unable to
+    // conduct with 'conducting' (the gate charging the net, or the gate a path leaves it by), 'required' always
+    // included; each branch weighs its gate's charged load (final for it when the sweep reaches this net). A net
+    // with more branches than are compared counts them all, whichever gate conducts: its downstream load.
+    private double LoadOf(Net net, Device? conducting, Device? required, out bool assumes)
     {
+        var compare = PassLoadEnd(net) - PassLoadStart(net) <= MaxBranchesCompared;
+        if (!compare && conducting is not null)
+        {
+            assumes = downstreamAssumes[net.Id];
+            return downstreamFarads[net.Id];
+        }
+
         var branches = branchScratch;
         branches.Clear();
-        var compare = PassLoadEnd(net) - PassLoadStart(net) <= MaxBranchesCompared;
         var anyExclusive = false;
         assumes = false;
         for (var position = passLoadStart[net.Id]; position < passLoadStart[net.Id + 1]; position++)
@@ -259,11 +284,11 @@ internal sealed class PassGateNetwork
             var loadIndex = passLoads[position];
             if (!inputEdgeKept[loadIndex]) continue;
             var load = GateAt(loadIndex);
-            if (compare && conducting is not null && !ReferenceEquals(load, required) && AreExclusive(load, conducting)) continue;
+            if (compare && conducting is not null && !ReferenceEquals(load, required) && CannotConductTogether(load, conducting)) continue;
             var kept = outputEdgeKept[loadIndex];
-            assumes |= kept && downstreamAssumes[load.Output.Id];
-            anyExclusive |= compare && load.DataControl is { } control && hasExclusivePartner[control.Id];
-            branches.Add((kept ? sums[load.Output.Id] : 0.0, load));
+            assumes |= kept && chargedAssumes[loadIndex];
+            anyExclusive |= compare && conduction.CanExclude(load);
+            branches.Add((kept ? chargedFarads[loadIndex] : 0.0, load));
         }
 
         return Netlist.CapacitanceOf(net).Farads + SelectConducting(branches, required, anyExclusive, ref assumes);
@@ -296,7 +321,7 @@ internal sealed class PassGateNetwork
             var keep = true;
             if (compare)
                 foreach (var other in counted)
-                    if (AreExclusive(gate, other)) { keep = false; break; }
+                    if (CannotConductTogether(gate, other)) { keep = false; break; }
             if (!keep) continue;
             if (!assumes)
                 foreach (var other in counted)
@@ -311,8 +336,9 @@ internal sealed class PassGateNetwork
     private static readonly Comparison<(double Farads, Device Gate)> HeaviestFirst
         = static (a, b) => b.Farads != a.Farads ? b.Farads.CompareTo(a.Farads) : a.Gate.Id.CompareTo(b.Gate.Id);
 
-    private bool AreExclusive(Device a, Device b)
-        => a.DataControl is { } ca && b.DataControl is { } cb && Netlist.AreExclusive(ca, cb);
+    // Exclusive data controls, or clock phases whose windows never overlap beyond the complement skew: the decision
+    // that breaks a series run (so a run and its side loads agree on what conducts).
+    private bool CannotConductTogether(Device a, Device b) => !conduction.MayConductTogether(a, b);
 
     // Two branches on different data nets whose exclusivity is not known: counted together as an assumption.
     private bool IsUnknownPair(Device a, Device b)
@@ -423,24 +449,4 @@ internal sealed class PassGateNetwork
         gate = position < passLoadStart[net + 1] ? passLoads[position] : -1;
         return gate;
     }
-
-    private double[] SumDownstream(CancellationToken cancellationToken)
-    {
-        var nets = Netlist.Nets;
-        var sums = new double[nets.Count];
-        for (var i = 0; i < postorder.Length; i++)
-        {
-            if ((i & 0xFFF) == 0) cancellationToken.ThrowIfCancellationRequested();
-            var node = postorder[i];
-            if (node < passGates.Length) continue;
-            var net = nets[node - passGates.Length];
-            // Children come first in postorder: their sums are final when the net is reached.
-            sums[net.Id] = PassLoadStart(net) == PassLoadEnd(net)
-                ? Netlist.CapacitanceOf(net).Farads
-                : LoadOf(sums, net, null, null, out downstreamAssumes[net.Id]);
-        }
-
-        return sums;
-    }
-
 }

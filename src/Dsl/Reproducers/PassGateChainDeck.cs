@@ -36,7 +36,9 @@ internal static class PassGateChainDeck
         deck.Pwl(step, new[] { (0.0, 0.0), (stepAt.Seconds, 0.0), ((stepAt + rise).Seconds, deck.Supply) }, "the driving stage switches");
         var inputNode = deck.Node(input);
         deck.Element($"R_drive {step} {inputNode} {SpiceNumbers.Of(network.RootResistanceOf(input).Ohms)}   $ output resistance of the stage driving '{input.Name}'");
-        deck.Capacitor(inputNode, network.DownstreamCapacitanceOf(input) - network.ChargedThrough(gates[0]), $"'{input.Name}' and the branches it feeds besides the chain");
+        // What the driver charges while the chain's first gate conducts (the root load of the estimate), less what that
+        // gate charges, so that the deck's ladder has the estimate's Elmore delay exactly.
+        deck.Capacitor(inputNode, network.RootLoad(gates[0]) - network.ChargedThrough(gates[0]), $"'{input.Name}' and the branches it feeds besides the chain that may conduct with it");
 
         var on = deck.Fresh("on_always");
         deck.Dc(on, "{vdd}", "every gate of the chain conducting (the chain's delay, as the estimate takes it)");

@@ -121,6 +121,45 @@ public class ConductingPathDelayTests
         Assert.All(runs, r => Assert.Equal(890.0, Figures.Ps(r.ElmoreDelay), 9));
     }
 
+    // The rotator's conducting path again, in -4k- a -5k- n1 -5k- n2 -5k- n3 (flat figures), its three gates on
+    // clk.High, with a 40 fF branch s1 leaving n1 through a gate on the phase given.
+    private static double PathWithBranchOn(bool sameClockPhase)
+    {
+        var c = Figures.NewCircuit("branch");
+        var clk = c.Clock("clk", 2.Nanoseconds(), 0.5, 0.Picoseconds());
+        var a = c.Inverter(c.Input("in"), "a");
+        var n1 = c.Node("n1");
+        var n2 = c.Node("n2");
+        var n3 = c.Node("n3");
+        var s1 = c.Node("s1");
+        c.TransmissionGate(a, clk.High, n1);
+        c.TransmissionGate(n1, clk.High, n2);
+        c.TransmissionGate(n2, clk.High, n3);
+        c.TransmissionGate(n1, sameClockPhase ? clk.High : clk.Low, s1);
+        c.SetCapacitance(s1, 40.Femtofarads());
+        c.Inverter(n3, "out");
+        c.Inverter(s1, "side");
+        return Figures.Ps(PassGateChains.Of(c.ToNetlist()).Single(r => r.Last.Output.Name == "n3").ElmoreDelay);
+    }
+
+    [Fact]
+    public void A_branch_on_a_phase_that_cannot_conduct_with_the_path_is_not_its_load()
+    {
+        // While the path's clk.High gates conduct, the clk.Low gate is off (the two phases of one clock do not overlap
+        // beyond its skew), so the path is the ladder of tests/reference/ngspice/netlists/rc_tree_rotator.cir:
+        // 4 kΩ · 40 fF + 5 kΩ · (30 + 20 + 10) fF = 460 ps, and ngspice-39's t50 at its far end is bounded by it (Gupta,
+        // Tutuianu, Pileggi, IEEE Trans. CAD 16(1), 1997), 0.69 · T within 10 % of it.
+        var elmore = PathWithBranchOn(sameClockPhase: false);
+        Assert.Equal(460.0, elmore, 9);
+        var t50 = NgspiceReference.TreeT50("rc_tree_rotator", "x") * 1e12;
+        Assert.True(elmore >= t50, $"Elmore {elmore} ps below simulated t50 {t50} ps");
+        Assert.InRange(0.69 * elmore / t50, 0.90, 1.10);
+
+        // On the same phase the branch conducts with the path and loads it where it leaves, at n1:
+        // 4 kΩ · 80 fF + 5 kΩ · (70 + 20 + 10) fF = 820 ps (the side-branch form of Rubinstein, Penfield, Horowitz).
+        Assert.Equal(820.0, PathWithBranchOn(sameClockPhase: true), 9);
+    }
+
     [Fact]
     public void The_setup_path_and_the_entry_delay_add_up_to_the_same_Elmore_delay()
     {
