@@ -84,6 +84,25 @@ public class RobustnessTests
         Assert.Contains(diagnostics, d => d.Id == RuleCatalog.ElaborationBudgetExceeded.Id && d.GetMessage().Contains("nest deeper"));
     }
 
+    [Theory]
+    [InlineData("for (var i = 0; ; i < 4; i++)")]   // a stray ';' where the condition goes: no condition, so no end
+    [InlineData("for (var i = 0; i < 4; i+)")]      // a half-typed increment: i never changes
+    [InlineData("for (var i = 0; i < 4; i < 4)")]   // a comparison where the increment goes (CS0201)
+    public async Task ALoopWhoseHeaderDoesNotCompileIsSkipped(string header)
+    {
+        // Run as written, each of these loops makes inverters until the device budget stops it (PW9002): seconds of
+        // work, and devices that are not in the design, on every keystroke while the header is being typed.
+        var source = "using Phaseward;\npublic sealed class Half : Design\n{\n    protected override void Describe(Circuit c)\n    {\n" +
+                     "        var n = c.Input(\"a\");\n        " + header + "\n            n = c.Inverter(n);\n" +
+                     "        c.Output(\"y\", c.Inverter(c.Input(\"b\")));\n    }\n}\n";
+        var tree = BoundedAnalysis.Parse("/src/Half.cs", source);
+        var compilation = BoundedAnalysis.Compile(new[] { tree });
+        Assert.Contains(compilation.GetDiagnostics(), d => d.Severity == DiagnosticSeverity.Error);
+
+        var diagnostics = await BoundedAnalysis.DocumentAsync(compilation, tree, header);
+        Assert.DoesNotContain(diagnostics, d => d.Id == RuleCatalog.ElaborationBudgetExceeded.Id);
+    }
+
     [Fact]
     public void EndlessLoopMakingDevicesStopsAtTheDeviceBudget()
     {

@@ -1,7 +1,9 @@
 using System.Collections;
 using System.Collections.Generic;
 using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Operations;
+using Microsoft.CodeAnalysis.Text;
 
 namespace Phaseward.Analyzers.Elaboration;
 
@@ -56,6 +58,15 @@ internal sealed partial class Interpreter
 
     private Completion VisitForLoop(IForLoopOperation loop, Frame frame)
     {
+        // A header the compiler rejects (a stray ';' where the condition goes, a half-typed increment) means nothing to
+        // run, and while it is being typed it would run to the step or device budget: the loop is skipped, like any
+        // code that does not compile (the compiler reports it), with what it assigns made unknown.
+        if (HeaderDoesNotCompile(loop))
+        {
+            Poison(loop, frame);
+            return Completion.Normal;
+        }
+
         foreach (var before in loop.Before)
             Execute(before, frame);
         loops.Push(loop);
@@ -87,6 +98,21 @@ internal sealed partial class Interpreter
         {
             loops.Pop();
         }
+    }
+
+    private bool HeaderDoesNotCompile(IForLoopOperation loop)
+    {
+        if (brokenLoopHeaders.TryGetValue(loop, out var broken))
+            return broken;
+        broken = false;
+        if (loop.Syntax is ForStatementSyntax header && loop.SemanticModel is { } model)
+        {
+            foreach (var diagnostic in model.GetDiagnostics(TextSpan.FromBounds(header.SpanStart, header.Statement.SpanStart), cancellationToken))
+                broken |= diagnostic.Severity == DiagnosticSeverity.Error;
+        }
+
+        brokenLoopHeaders[loop] = broken;
+        return broken;
     }
 
     private Completion VisitForEachLoop(IForEachLoopOperation loop, Frame frame)

@@ -144,6 +144,10 @@ internal sealed partial class Interpreter
     // yielded values kept in a list (see docs/elaboration.md).
     private readonly Dictionary<IOperation, bool> iterators = new();
 
+    // Whether each for loop's header has a compile error, asked once per loop (a loop in a helper is reached once per
+    // call): such a loop is skipped, not run (see VisitForLoop).
+    private readonly Dictionary<IOperation, bool> brokenLoopHeaders = new();
+
     public Interpreter(ElaborationSession session, string designName, ElaborationLimits limits, CancellationToken cancellationToken)
     {
         this.session = session;
