@@ -1,6 +1,7 @@
 using System;
 using System.Collections.Generic;
 using System.Runtime.CompilerServices;
+using System.Threading;
 using Phaseward.Clocking;
 using Phaseward.Netlists;
 
@@ -26,14 +27,14 @@ public sealed class LatchModel
     private readonly PhaseWindowCache windows = new();
     private readonly Dictionary<(Phase, Phase), WindowRelation> relations = new();
 
-    private LatchModel(Netlist netlist)
+    private LatchModel(Netlist netlist, CancellationToken cancellationToken)
     {
         Netlist = netlist;
         var found = LatchFinder.Find(netlist);
         Latches = found.Latches;
         entryLatchOfDevice = found.EntryLatchOfDevice;
         Registers = RegisterFinder.Find(this, out registerOfLatch);
-        Paths = LatchPathFinder.Find(new LatchCone(netlist, found.EntryLatchOfDevice, found.IsLatchStorage), found.Latches);
+        Paths = LatchPathFinder.Find(new LatchCone(netlist, found.EntryLatchOfDevice, found.IsLatchStorage), found.Latches, cancellationToken);
     }
 
     /// <summary>The netlist the latches were found in.</summary>
@@ -49,10 +50,22 @@ public sealed class LatchModel
     public IReadOnlyList<LatchPath> Paths { get; }
 
     /// <summary>The model of a netlist (computed once and cached for the netlist's lifetime).</summary>
-    public static LatchModel Of(Netlist netlist)
+    public static LatchModel Of(Netlist netlist) => Of(netlist, CancellationToken.None);
+
+    /// <summary>
+    /// The model of a netlist (computed once and cached for the netlist's lifetime). Listing the latch-to-latch paths
+    /// can take seconds on a large design (a long chain of logic through many latches has a path per pair):
+    /// <paramref name="cancellationToken"/> stops it, and a model whose making was cancelled is not kept.
+    /// </summary>
+    public static LatchModel Of(Netlist netlist, CancellationToken cancellationToken)
     {
         if (netlist is null) throw new ArgumentNullException(nameof(netlist));
-        return Cache.GetValue(netlist, static n => new LatchModel(n));
+        if (Cache.TryGetValue(netlist, out var model))
+            return model;
+        model = new LatchModel(netlist, cancellationToken);
+        // Two analyzers may make it at once (the clock-phase and timing families run concurrently): both are equal,
+        // and every caller then reads the one kept.
+        return Cache.GetValue(netlist, _ => model);
     }
 
     /// <summary>The register a latch is the master or slave of, or null.</summary>

@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using System.Threading;
 
 namespace Phaseward.Sequencing;
 
@@ -9,13 +10,14 @@ namespace Phaseward.Sequencing;
 /// </summary>
 internal static class LatchPathFinder
 {
-    public static IReadOnlyList<LatchPath> Find(LatchCone cone, IReadOnlyList<Latch> latches)
+    public static IReadOnlyList<LatchPath> Find(LatchCone cone, IReadOnlyList<Latch> latches, CancellationToken cancellationToken = default)
     {
         var paths = new List<LatchPath>();
         var shortest = new ShortestPathSearch(cone);
         var longest = new LongestPathSearch(cone);
         foreach (var source in latches)
         {
+            cancellationToken.ThrowIfCancellationRequested();
             shortest.Run(source.Storage);
             if (shortest.Gates.Count == 0)
                 continue;

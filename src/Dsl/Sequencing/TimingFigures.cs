@@ -2,6 +2,7 @@ using System;
 using System.Collections.Generic;
 using System.Globalization;
 using System.Text;
+using System.Threading;
 using Phaseward.Clocking;
 using Phaseward.Electrical;
 using Phaseward.Netlists;
@@ -177,12 +178,16 @@ public sealed class TimingFigures
     public IReadOnlyList<RegisterTiming> Registers { get; }
 
     /// <summary>The figures of <paramref name="netlist"/> at <paramref name="corner"/>.</summary>
-    public static TimingFigures For(Netlist netlist, Corner corner)
+    public static TimingFigures For(Netlist netlist, Corner corner) => For(netlist, corner, CancellationToken.None);
+
+    /// <summary>The figures of <paramref name="netlist"/> at <paramref name="corner"/>; <paramref name="cancellationToken"/>
+    /// stops the making of the latch model if it is not made yet (<see cref="LatchModel.Of(Netlist, CancellationToken)"/>).</summary>
+    public static TimingFigures For(Netlist netlist, Corner corner, CancellationToken cancellationToken)
     {
         if (netlist is null) throw new ArgumentNullException(nameof(netlist));
         if (corner is not (Corner.Nominal or Corner.Slow or Corner.Fast))
             throw new ArgumentException($"'{nameof(corner)}' must be Nominal, Slow or Fast (was {(int)corner}).", nameof(corner));
-        return new(LatchModel.Of(netlist), corner);
+        return new(LatchModel.Of(netlist, cancellationToken), corner);
     }
 
     /// <summary>The figures of <paramref name="latch"/>.</summary>

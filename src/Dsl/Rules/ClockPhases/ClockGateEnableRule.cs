@@ -47,7 +47,7 @@ public sealed class ClockGateEnableRule : Rule
             if (gate.Kind != ClockKind.Gated || gate.Enable is not { } enable || gate.Source is not { } source)
                 continue;
 
-            model ??= LatchModel.Of(netlist);
+            model ??= LatchModel.Of(netlist, context.CancellationToken);
             var passes = PassInterval(gate, source);
             foreach (var origin in EnableOrigins.Of(netlist, model, enable))
             {

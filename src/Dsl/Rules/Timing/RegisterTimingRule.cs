@@ -97,7 +97,7 @@ public static class RegisterPathChecks
     public static IReadOnlyList<RegisterPathResult> For(Netlists.Netlist netlist, CancellationToken cancellationToken = default)
     {
         if (netlist is null) throw new ArgumentNullException(nameof(netlist));
-        var slow = TimingFigures.For(netlist, Corner.Slow);
+        var slow = TimingFigures.For(netlist, Corner.Slow, cancellationToken);
         var fast = TimingFigures.For(netlist, Corner.Fast);
         var model = slow.Model;
         var slowOf = new Dictionary<Register, RegisterTiming>();

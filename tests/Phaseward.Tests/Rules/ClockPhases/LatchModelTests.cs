@@ -30,6 +30,33 @@ public class LatchModelTests
     }
 
     [Fact]
+    public void A_ripple_chain_has_a_path_per_pair_and_its_listing_can_be_cancelled()
+    {
+        // n registers, each taking its input from the previous stage's NAND, which also feeds the next NAND: register k's
+        // slave reaches every later master through the NAND chain, and each master its own slave, so the model lists
+        // n + n(n − 1)/2 paths (counted on the chain's structure; this is why such a chain costs the square of its length).
+        const int n = 40;
+        var c = Figures.NewCircuit("ripple");
+        var tick = c.Clock("tick", 1.Nanoseconds());
+        var carry = c.Input("count_enable");
+        for (var bit = 0; bit < n; bit++)
+            carry = c.Nand(c.DynamicRegister(carry, tick, "count" + bit), carry);
+        c.Output("carry_out", carry);
+        var netlist = c.ToNetlist();
+
+        using var cancelled = new System.Threading.CancellationTokenSource();
+        cancelled.Cancel();
+        Assert.ThrowsAny<System.OperationCanceledException>(() => LatchModel.Of(netlist, cancelled.Token));
+        Assert.ThrowsAny<System.OperationCanceledException>(() => TimingFigures.For(netlist, Corner.Slow, cancelled.Token));
+
+        // Nothing half-made was kept: the model made afterwards is whole.
+        var model = LatchModel.Of(netlist);
+        Assert.Equal(2 * n, model.Latches.Count);
+        Assert.Equal(n + n * (n - 1) / 2, model.Paths.Count);
+        Assert.Same(model, LatchModel.Of(netlist, cancelled.Token));
+    }
+
+    [Fact]
     public void EntryGatesInTwoWindowsMakeTwoLatchesOnOneNode()
     {
         // The model's rule (see LatchModel): entry gates of one window make one latch, named after the node and the
