@@ -104,6 +104,39 @@ public class RobustnessTests
     }
 
     [Fact]
+    public async Task ALoopWhoseHeaderOnlyWarnsIsRunEvenWhenWarningsAreErrors()
+    {
+        // An obsolete member in the header is a warning (CS0618) that TreatWarningsAsErrors makes an error: the header
+        // still compiles to what it says, so the loop runs and its eight pass gates in series are PW2001's finding.
+        var source = """
+            using System;
+            using Phaseward;
+
+            public sealed class Chain : Design
+            {
+                [Obsolete("use Length")]
+                private static int Gates => 8;
+
+                protected override void Describe(Circuit c)
+                {
+                    var clk = c.Clock("clk", 4.Nanoseconds());
+                    var n = c.Inverter(c.Input("a"));
+                    for (var i = 0; i < Gates; i++)
+                        n = c.TransmissionGate(n, clk.High);
+                    c.Output("y", c.Inverter(n));
+                }
+            }
+            """;
+        var tree = BoundedAnalysis.Parse("/src/Chain.cs", source);
+        var compilation = BoundedAnalysis.Compile(new[] { tree });
+        compilation = compilation.WithOptions(compilation.Options.WithGeneralDiagnosticOption(ReportDiagnostic.Error));
+        Assert.Contains(compilation.GetDiagnostics(), d => d.Id == "CS0618" && d.Severity == DiagnosticSeverity.Error);
+
+        var diagnostics = await BoundedAnalysis.DocumentAsync(compilation, tree, "an obsolete member in a loop header");
+        Assert.Contains(diagnostics, d => d.Id == RuleCatalog.SeriesPassGates.Id);
+    }
+
+    [Fact]
     public void EndlessLoopMakingDevicesStopsAtTheDeviceBudget()
     {
         // Steps alone let such a loop make millions of devices (minutes, gigabytes) before the step budget runs out.

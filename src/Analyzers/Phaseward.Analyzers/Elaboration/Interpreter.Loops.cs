@@ -104,11 +104,13 @@ internal sealed partial class Interpreter
     {
         if (brokenLoopHeaders.TryGetValue(loop, out var broken))
             return broken;
+        // A compiler error proper, not a warning the project treats as an error: a header with a nullable warning under
+        // TreatWarningsAsErrors still means what it says.
         broken = false;
         if (loop.Syntax is ForStatementSyntax header && loop.SemanticModel is { } model)
         {
             foreach (var diagnostic in model.GetDiagnostics(TextSpan.FromBounds(header.SpanStart, header.Statement.SpanStart), cancellationToken))
-                broken |= diagnostic.Severity == DiagnosticSeverity.Error;
+                broken |= diagnostic.DefaultSeverity == DiagnosticSeverity.Error;
         }
 
         brokenLoopHeaders[loop] = broken;
