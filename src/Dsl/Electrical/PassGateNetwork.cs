@@ -163,11 +163,13 @@ internal sealed class PassGateNetwork
     /// <summary>True when the net is a primary input or has a restoring driver that is not a weak keeper.</summary>
     public bool IsRestored(Net net) => restored[net.Id];
 
-    /// <summary>The pass gate's input net feeds it through a series edge that was kept (not one closing a loop).</summary>
-    public bool IsInputEdgeKept(Device gate) => inputEdgeKept[IndexOf(gate)];
+    /// <summary>The pass gate with this pass index is fed by its input net through a series edge that was kept (not
+    /// one closing a loop). By index: the sweeps that ask hold the index, not the device.</summary>
+    public bool IsInputEdgeKept(int passIndex) => inputEdgeKept[passIndex];
 
-    /// <summary>The pass gate continues into its output net (the net is not restored and the edge closes no loop).</summary>
-    public bool IsOutputEdgeKept(Device gate) => outputEdgeKept[IndexOf(gate)];
+    /// <summary>The pass gate with this pass index continues into its output net (the net is not restored and the edge
+    /// closes no loop).</summary>
+    public bool IsOutputEdgeKept(int passIndex) => outputEdgeKept[passIndex];
 
     /// <summary>Where the pass gates this net feeds (as their data input) begin among <see cref="PassLoadAt"/>; they
     /// run, in netlist order, up to <see cref="PassLoadEnd"/> (an index range rather than an enumerable, which would
@@ -193,8 +195,8 @@ internal sealed class PassGateNetwork
 
     /// <summary>
     /// The capacitance a pass gate charges through its on-resistance: its output net and the branches beyond that may
-    /// conduct while it does (those exclusive with it are off); only the net's own capacitance when the chain cannot
-    /// continue there (a restored net, a loop).
+    /// conduct while it does (those that cannot conduct with it are off); only the net's own capacitance when the chain
+    /// cannot continue there (a restored net, a loop).
     /// </summary>
     public Capacitance ChargedThrough(Device gate) => new(chargedFarads[IndexOf(gate)]);
 
@@ -203,7 +205,7 @@ internal sealed class PassGateNetwork
 
     /// <summary>
     /// The load the driver of <paramref name="gate"/>'s input net sees while the gate conducts: the net, the gate's
-    /// branch, and the other branches that may conduct with it (those exclusive with the gate are off).
+    /// branch, and the other branches that may conduct with it (those that cannot conduct with the gate are off).
     /// </summary>
     public Capacitance RootLoad(Device gate) => new(rootFarads[IndexOf(gate)]);
 

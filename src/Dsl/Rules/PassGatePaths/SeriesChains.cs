@@ -99,8 +99,9 @@ internal sealed class SeriesChains
                 var best = -1;
                 foreach (var driver in netlist.DriverList(net))
                 {
-                    if (!driver.IsPassDevice || !network.IsOutputEdgeKept(driver)) continue;
+                    if (!driver.IsPassDevice) continue;
                     var d = network.IndexOf(driver);
+                    if (!network.IsOutputEdgeKept(d)) continue;
                     if (best < 0 || depthIn[d] > depthIn[best] || (depthIn[d] == depthIn[best] && elmoreIn[d] > elmoreIn[best]))
                         best = d;
                 }
@@ -116,7 +117,7 @@ internal sealed class SeriesChains
             var farads = netlist.CapacitanceOf(gate.Output).Farads;
             var own = network.AssumesUnknownBranchesConduct(gate);
             step[g] = ohms * network.ChargedThrough(gate).Farads;
-            var join = network.IsInputEdgeKept(gate) ? BestJoin(gate, bestDriverOfInput[g]) : Join.None;
+            var join = network.IsInputEdgeKept(g) ? BestJoin(gate, bestDriverOfInput[g]) : Join.None;
             var before = join.Previous;
             previous[g] = before;
             treeIndex[g] = before < 0 ? 0 : treeIndex[before] + 1;
@@ -188,9 +189,9 @@ internal sealed class SeriesChains
         if (join.Cut < 0) return join;
         foreach (var driver in Network.Netlist.DriverList(gate.Inputs[0]))
         {
-            if (!driver.IsPassDevice || !Network.IsOutputEdgeKept(driver)) continue;
+            if (!driver.IsPassDevice) continue;
             var d = Network.IndexOf(driver);
-            if (d == best) continue;
+            if (d == best || !Network.IsOutputEdgeKept(d)) continue;
             var other = JoinOf(gate, d);
             if (other.Depth > join.Depth || (other.Depth == join.Depth && other.Elmore > join.Elmore)
                                          || (other.Depth == join.Depth && other.Elmore == join.Elmore && d < join.Previous))
@@ -245,8 +246,8 @@ internal sealed class SeriesChains
                 var bestDelay = 0.0;
                 for (var position = network.PassLoadStart(net); position < network.PassLoadEnd(net); position++)
                 {
-                    if (!network.IsInputEdgeKept(network.PassLoadAt(position))) continue;
                     var load = network.PassLoadIndexAt(position);
+                    if (!network.IsInputEdgeKept(load)) continue;
                     var delay = step[load] + sufStep[load] - sufStep[end[load]];
                     if (best < 0 || depthOut[load] > depthOut[best] || (depthOut[load] == depthOut[best] && delay > bestDelay))
                     {
@@ -263,7 +264,7 @@ internal sealed class SeriesChains
 
             var g = node;
             var gate = network.GateAt(g);
-            var (after, cut, last) = network.IsOutputEdgeKept(gate) ? BestContinuation(gate, bestLoadOfOutput[g], continuation, depthOut, end, index, sufStep) : (-1, -1, -1);
+            var (after, cut, last) = network.IsOutputEdgeKept(g) ? BestContinuation(gate, bestLoadOfOutput[g], continuation, depthOut, end, index, sufStep) : (-1, -1, -1);
             next[g] = after;
             continuation.Extend(after, cut, g);
             if (after < 0)
@@ -306,7 +307,7 @@ internal sealed class SeriesChains
         for (var position = network.PassLoadStart(net); position < network.PassLoadEnd(net); position++)
         {
             var load = network.PassLoadIndexAt(position);
-            if (load == best || !network.IsInputEdgeKept(network.PassLoadAt(position))) continue;
+            if (load == best || !network.IsInputEdgeKept(load)) continue;
             var other = Candidate(load);
             if (other.Depth > chosen.Depth || (other.Depth == chosen.Depth && other.Delay > chosen.Delay))
                 chosen = other;
