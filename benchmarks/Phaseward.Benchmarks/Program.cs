@@ -162,6 +162,8 @@ public static class Program
             line.Append($"; rules total {total:N0} ms, {rulesGc}; {findings.Count:N0} findings (")
                 .Append(string.Join(", ", findings.GroupBy(f => f.RuleId).OrderBy(g => g.Key, StringComparer.Ordinal).Select(g => g.Key + " " + g.Count())))
                 .Append($") mapped in {map:N0} ms; process CPU {Cpu():N0} ms so far");
+            var latchModel = Phaseward.Sequencing.LatchModel.Of(netlist);
+            line.Append($"; latch paths {latchModel.Paths.Count:N0} in {latchModel.PathSearchSteps:N0} search steps (budget {latchModel.PathSearchBudget:N0})");
             // What stays alive while the design is checked (the netlist and the models the rules cache on it), after the
             // timed phases so the forced collection does not change their figures: a number the machine's load does not move.
             line.Append($"; retained {RetainedMegabytes(netlist):N0} MB");

@@ -2,6 +2,7 @@ using System;
 using System.Collections.Generic;
 using System.Threading;
 using Phaseward.Netlists;
+using Phaseward.Rules.AnalysisLimits;
 using Phaseward.Rules.ClockPhases;
 using Phaseward.Rules.DynamicStorage;
 using Phaseward.Rules.PassGatePaths;
@@ -29,6 +30,7 @@ public static class Checker
         new ChargeSharingRule(),
         new FightingDriversRule(),
         new KeeperTooStrongRule(),
+        new LatchPathSearchStoppedRule(),
     };
 
     /// <summary>Runs every rule of <see cref="Rules"/> on <paramref name="netlist"/> under <paramref name="policy"/> (the defaults when null).</summary>

@@ -248,4 +248,11 @@ public static class FindingPropertyKeys
 
     /// <summary>PW3005: the supply (V).</summary>
     public const string SupplyVolts = "SupplyVolts";
+
+    // ---- Analysis limits (PW9005)
+    /// <summary>PW9005: the first latch whose paths were not listed.</summary>
+    public const string FirstLatchNotSearched = "FirstLatchNotSearched";
+
+    /// <summary>PW9005: the latch path search's budget of steps.</summary>
+    public const string SearchBudget = "SearchBudget";
 }

@@ -1,6 +1,7 @@
 namespace Phaseward.Checking;
 
-// PW9xxx: elaboration — what the compile-time elaborator could not do, and invalid options.
+// PW9xxx: elaboration and analysis limits — what the compile-time elaborator could not do, searches stopped at their
+// budgets, and invalid options.
 public static partial class RuleCatalog
 {
     /// <summary>Part of a design could not be elaborated at compile time (outside the supported subset).</summary>
@@ -42,4 +43,17 @@ public static partial class RuleCatalog
         description: "A key prefixed 'phaseward.' in .editorconfig or .globalconfig has a value Phaseward cannot read. "
             + "The default is used instead. "
             + "See docs/configuration.md for each key's format.");
+
+    /// <summary>The latch-to-latch path search used up its budget: the paths from the remaining latches are not checked.</summary>
+    public static RuleDescriptor LatchPathSearchStopped { get; } = new(
+        "PW9005", RuleFamily.Elaboration, Severity.Warning,
+        title: "Latch-to-latch path search stopped at its budget",
+        messageFormat: "Phaseward stopped listing the latch-to-latch paths of design '{0}' at latch '{1}' after {2} search steps "
+            + "(budget {3}): the {4} paths from the first {5} of {6} latches are checked, the paths from '{1}' and the {7} "
+            + "latches after it are not",
+        description: "Each latch's fan-out cone is searched up to the next latches; a long chain of logic through many "
+            + "latches (a ripple counter, a shift chain with a shared carry) has a path for every pair of latches, so the "
+            + "search grows with the square of the chain. A budget of steps bounds it. Past it, the rules that read the "
+            + "paths (PW1001 to PW1004, PW4001 to PW4003 and PW4005) check only the paths listed. Raise "
+            + "phaseward.latch_path_search_budget if the design is merely large.");
 }

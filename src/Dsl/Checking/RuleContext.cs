@@ -1,5 +1,6 @@
 using System.Threading;
 using Phaseward.Netlists;
+using Phaseward.Sequencing;
 
 namespace Phaseward.Checking;
 
@@ -19,6 +20,10 @@ public sealed class RuleContext
 
     /// <summary>The thresholds and switches the rules apply.</summary>
     public RulePolicy Policy { get; }
+
+    /// <summary>The latches, registers and latch-to-latch paths, searched within the policy's
+    /// <see cref="RulePolicy.LatchPathSearchBudget"/> (made once per netlist and budget, shared by the rules).</summary>
+    public LatchModel LatchModel => LatchModel.Of(Netlist, Policy.LatchPathSearchBudget, CancellationToken);
 
     /// <summary>Cancelled when the caller (the editor, the compiler) no longer needs the result.</summary>
     public CancellationToken CancellationToken { get; }

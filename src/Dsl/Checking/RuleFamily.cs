@@ -11,6 +11,6 @@ public enum RuleFamily
     DynamicStorage = 3,
     /// <summary>PW4xxx: setup, hold and time borrowing of latches and registers.</summary>
     Timing = 4,
-    /// <summary>PW9xxx: what could not be elaborated at compile time, budgets, invalid parameters.</summary>
+    /// <summary>PW9xxx: what could not be elaborated at compile time, budgets of elaboration and analysis, invalid parameters.</summary>
     Elaboration = 9,
 }

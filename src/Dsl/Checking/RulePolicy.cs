@@ -13,6 +13,15 @@ public sealed class RulePolicy
     private readonly Time minimumTimingSlack = Time.Zero;
     private readonly int? maxSeriesPassGates;
     private readonly double keeperWriteMargin = 0.1;
+    private readonly long latchPathSearchBudget = DefaultLatchPathSearchBudget;
+
+    /// <summary>
+    /// The default of <see cref="LatchPathSearchBudget"/>: 5,000,000 steps. The benchmark's 10^6-device design takes
+    /// 1.85 million (about 12 a path), so a design of that style at the compile-time device budget (2 million devices)
+    /// fits with room to spare; a ripple chain, whose paths grow with the square of its length (3 steps a path), stops
+    /// at about 1.7 million paths, about 1,800 registers (BENCHMARKS.md, "Latch paths").
+    /// </summary>
+    public const long DefaultLatchPathSearchBudget = 5_000_000;
 
     /// <summary>
     /// PW1004: false (default) takes a clock gate's enable that comes from a primary input as stable (the outside world
@@ -56,6 +65,23 @@ public sealed class RulePolicy
             if (double.IsNaN(value) || value < 0 || value >= 0.5)
                 throw new ArgumentException($"'{nameof(KeeperWriteMargin)}' must be at least 0 and below 0.5 of the supply (was {value.ToString("R", System.Globalization.CultureInfo.InvariantCulture)}).", nameof(KeeperWriteMargin));
             keeperWriteMargin = value;
+        }
+    }
+
+    /// <summary>
+    /// Steps the latch-to-latch path search may take (each net its searches reach and each path listed is a step;
+    /// <see cref="Sequencing.LatchModel"/>). Past it the paths from the remaining latches are not listed, the rules
+    /// that read paths (PW1001–PW1004, PW4001–PW4003, PW4005) check those listed, and PW9005 says so. Key
+    /// <c>phaseward.latch_path_search_budget</c>. At least 1.
+    /// </summary>
+    public long LatchPathSearchBudget
+    {
+        get => latchPathSearchBudget;
+        init
+        {
+            if (value < 1)
+                throw new ArgumentException($"'{nameof(LatchPathSearchBudget)}' must be at least 1 step (was {value}).", nameof(LatchPathSearchBudget));
+            latchPathSearchBudget = value;
         }
     }
 

@@ -62,6 +62,10 @@ internal static class OptionCatalog
 
     public static PhasewardOption<double> KeeperWriteMargin { get; } = NumberBelow("phaseward.keeper_write_margin", RulePolicy.Default.KeeperWriteMargin, 0, 0.5);
 
+    /// <summary>The latch-to-latch path search's step budget (PW9005 when it is used up).</summary>
+    public static PhasewardOption<long> LatchPathSearchBudget { get; } =
+        WholeNumber("phaseward.latch_path_search_budget", RulePolicy.DefaultLatchPathSearchBudget, 1, long.MaxValue / 2);
+
     /// <summary>PW1004: whether a clock gate's enable that comes from a primary input may change at any time.</summary>
     public static PhasewardOption<bool> ClockGateInputsMayChange { get; } =
         TrueOrFalse("phaseward.clock_gate_inputs_may_change", RulePolicy.Default.EnablesFromInputsMayChange);
@@ -70,6 +74,7 @@ internal static class OptionCatalog
     {
         ElaborationStepBudget, ElaborationRecursionLimit, ElaborationDeviceBudget, ElaborationMemoryBudget,
         MaxSeriesPassGates, MinimumRaceMargin, MinimumTimingSlack, KeeperWriteMargin, ClockGateInputsMayChange,
+        LatchPathSearchBudget,
     };
 
     /// <summary>The definition of <paramref name="key"/> (any case), or null for a key Phaseward does not know.</summary>

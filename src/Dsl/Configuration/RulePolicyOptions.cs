@@ -20,5 +20,6 @@ internal static class RulePolicyOptions
         MinimumTimingSlack = OptionCatalog.MinimumTimingSlack.Read(lookup, problems),
         EnablesFromInputsMayChange = OptionCatalog.ClockGateInputsMayChange.Read(lookup, problems),
         KeeperWriteMargin = OptionCatalog.KeeperWriteMargin.Read(lookup, problems),
+        LatchPathSearchBudget = OptionCatalog.LatchPathSearchBudget.Read(lookup, problems),
     };
 }

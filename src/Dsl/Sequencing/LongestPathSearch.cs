@@ -35,6 +35,9 @@ internal sealed class LongestPathSearch
     /// <summary>The longest delay to each entry gate's input, in seconds.</summary>
     public Dictionary<Device, double> GateDelay { get; } = new();
 
+    /// <summary>How many nets the last search reached (its share of the path search's budget).</summary>
+    public int NetsReached => postOrder.Count;
+
     /// <summary>Searches from <paramref name="source"/>; the results replace the previous search's.</summary>
     public void Run(Net source)
     {

@@ -16,22 +16,22 @@ internal static class RegisterFinder
         var registers = new List<Register>();
         var byLatch = new Register?[latches.Count];
 
-        // Register cells: their two latches are parts named "<reg>.master" and "<reg>.slave".
-        foreach (var macro in netlist.Macros)
+        // Register cells: their two latches are parts named "<reg>.master" and "<reg>.slave". One pass over the latches,
+        // keyed by the register cell they are part of (a pass per cell would cost cells × latches).
+        var halvesOf = new Dictionary<MacroInstance, (Latch? Master, Latch? Slave)>();
+        foreach (var latch in latches)
         {
-            if (macro.Kind is not (MacroKind.DynamicRegister or MacroKind.StaticRegister))
+            if (latch.Cell?.Parent is not { Kind: MacroKind.DynamicRegister or MacroKind.StaticRegister } macro)
                 continue;
-            Latch? master = null, slave = null;
-            foreach (var latch in latches)
-            {
-                if (latch.Cell is null || !ReferenceEquals(latch.Cell.Parent, macro)) continue;
-                if (latch.Cell.Name == macro.Name + ".master") master = latch;
-                else if (latch.Cell.Name == macro.Name + ".slave") slave = latch;
-            }
-
-            if (master is not null && slave is not null)
-                Add(new Register(macro.Name, master, slave, macro));
+            halvesOf.TryGetValue(macro, out var halves);
+            if (latch.Cell.Name == macro.Name + ".master") halves.Master = latch;
+            else if (latch.Cell.Name == macro.Name + ".slave") halves.Slave = latch;
+            halvesOf[macro] = halves;
         }
+
+        foreach (var macro in netlist.Macros)
+            if (halvesOf.TryGetValue(macro, out var halves) && halves.Master is { } master && halves.Slave is { } slave)
+                Add(new Register(macro.Name, master, slave, macro));
 
         foreach (var master in latches)
             if (byLatch[master.Index] is null && HandBuiltSlaveOf(model, master) is { } slave && byLatch[slave.Index] is null)

@@ -28,10 +28,14 @@ internal sealed class ShortestPathSearch
     /// <summary>The shortest delay to each entry gate's input, in seconds.</summary>
     public Dictionary<Device, double> GateDelay { get; } = new();
 
+    /// <summary>How many nets the last search settled (its share of the path search's budget).</summary>
+    public int NetsReached { get; private set; }
+
     /// <summary>Searches from <paramref name="source"/>; the results replace the previous search's.</summary>
     public void Run(Net source)
     {
         run++;
+        NetsReached = 0;
         Gates.Clear();
         GateDelay.Clear();
         stamp[source.Id] = run;
@@ -40,6 +44,7 @@ internal sealed class ShortestPathSearch
         while (heap.TryPop(out var net, out var d))
         {
             if (d > distance[net.Id]) continue;
+            NetsReached++;
             var count = cone.EdgeCount(net);
             for (var i = 0; i < count; i++)
             {

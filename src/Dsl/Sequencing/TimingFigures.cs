@@ -185,9 +185,23 @@ public sealed class TimingFigures
     public static TimingFigures For(Netlist netlist, Corner corner, CancellationToken cancellationToken)
     {
         if (netlist is null) throw new ArgumentNullException(nameof(netlist));
+        RequireCorner(corner);
+        return For(LatchModel.Of(netlist, cancellationToken), corner);
+    }
+
+    /// <summary>The figures of the latches of <paramref name="model"/> at <paramref name="corner"/>.</summary>
+    public static TimingFigures For(LatchModel model, Corner corner)
+    {
+        if (model is null) throw new ArgumentNullException(nameof(model));
+        RequireCorner(corner);
+        return new(model, corner);
+    }
+
+    // Checked before a latch model is made for the netlist: a wrong corner costs nothing.
+    private static void RequireCorner(Corner corner)
+    {
         if (corner is not (Corner.Nominal or Corner.Slow or Corner.Fast))
             throw new ArgumentException($"'{nameof(corner)}' must be Nominal, Slow or Fast (was {(int)corner}).", nameof(corner));
-        return new(LatchModel.Of(netlist, cancellationToken), corner);
     }
 
     /// <summary>The figures of <paramref name="latch"/>.</summary>

@@ -1,4 +1,4 @@
-using System.Collections.Immutable;
+using System.Collections.Generic;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 using Phaseward.Analyzers.Diagnostics;
@@ -10,14 +10,18 @@ namespace Phaseward.Analyzers;
 
 /// <summary>
 /// Reports what the compile-time elaborator met in each design: code it could not interpret (PW9001), budgets used up
-/// (PW9002), the design throwing (PW9003), and unusable <c>phaseward.</c> options (PW9004).
+/// (PW9002), the design throwing (PW9003), and unusable <c>phaseward.</c> options (PW9004); and, as the family's rule,
+/// a latch path search stopped at its budget (PW9005).
 /// </summary>
 [DiagnosticAnalyzer(LanguageNames.CSharp)]
-public sealed class ElaborationAnalyzer : PhasewardAnalyzer
+public sealed class ElaborationAnalyzer : FindingAnalyzer
 {
-    public override ImmutableArray<DiagnosticDescriptor> SupportedDiagnostics { get; } = ImmutableArray.Create(
-        Descriptors.Of(RuleCatalog.NotElaborated), Descriptors.Of(RuleCatalog.ElaborationBudgetExceeded),
-        Descriptors.Of(RuleCatalog.DesignThrows), Descriptors.Of(RuleCatalog.InvalidOption));
+    protected override RuleFamily Family => RuleFamily.Elaboration;
+
+    private protected override IEnumerable<RuleDescriptor> OtherDescriptors { get; } = new[]
+    {
+        RuleCatalog.NotElaborated, RuleCatalog.ElaborationBudgetExceeded, RuleCatalog.DesignThrows, RuleCatalog.InvalidOption,
+    };
 
     internal override void AnalyzeDocumentOptions(SemanticModelAnalysisContext context, PhasewardOptions options, DesignInfo firstDesign)
     {
@@ -30,5 +34,6 @@ public sealed class ElaborationAnalyzer : PhasewardAnalyzer
     {
         foreach (var issue in context.Elaboration.Issues)
             context.Report(context.Mapper.FromIssue(issue));
+        base.AnalyzeDesign(context);
     }
 }

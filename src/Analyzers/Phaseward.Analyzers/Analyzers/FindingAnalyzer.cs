@@ -28,6 +28,9 @@ public abstract class FindingAnalyzer : PhasewardAnalyzer
     /// <summary>The family whose rules this analyzer runs.</summary>
     protected abstract RuleFamily Family { get; }
 
+    /// <summary>Diagnostics the analyzer reports besides its rules' findings (none unless overridden).</summary>
+    private protected virtual IEnumerable<RuleDescriptor> OtherDescriptors => Array.Empty<RuleDescriptor>();
+
     /// <summary>The rules this analyzer runs (virtual for test-only analyzers).</summary>
     internal virtual IReadOnlyList<Rule> Rules => rules ??= Checker.Rules.Where(r => r.Descriptors.Any(d => d.Family == Family)).ToArray();
 
@@ -38,6 +41,7 @@ public abstract class FindingAnalyzer : PhasewardAnalyzer
             if (supported.IsDefault)
             {
                 supported = Rules.SelectMany(r => r.Descriptors)
+                    .Concat(OtherDescriptors)
                     .Select(Descriptors.Of)
                     .Distinct()
                     .ToImmutableArray();
@@ -47,7 +51,7 @@ public abstract class FindingAnalyzer : PhasewardAnalyzer
         }
     }
 
-    internal sealed override void AnalyzeDesign(DesignAnalysisContext context)
+    internal override void AnalyzeDesign(DesignAnalysisContext context)
     {
         if (context.Elaboration.Netlist is not { } netlist)
             return;

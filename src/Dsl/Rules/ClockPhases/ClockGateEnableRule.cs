@@ -47,7 +47,7 @@ public sealed class ClockGateEnableRule : Rule
             if (gate.Kind != ClockKind.Gated || gate.Enable is not { } enable || gate.Source is not { } source)
                 continue;
 
-            model ??= LatchModel.Of(netlist, context.CancellationToken);
+            model ??= context.LatchModel;
             var passes = PassInterval(gate, source);
             foreach (var origin in EnableOrigins.Of(netlist, model, enable))
             {
@@ -161,7 +161,7 @@ public sealed class ClockGateEnableRule : Rule
     private static Dictionary<int, Time> BorrowByLatch(LatchModel model)
     {
         var borrow = new Dictionary<int, Time>();
-        foreach (var arrival in LatchBorrowing.Compute(TimingFigures.For(model.Netlist, Corner.Slow)))
+        foreach (var arrival in LatchBorrowing.Compute(TimingFigures.For(model, Corner.Slow)))
         {
             var index = arrival.Path.To.Index;
             if (!borrow.TryGetValue(index, out var seen) || arrival.Borrow > seen)

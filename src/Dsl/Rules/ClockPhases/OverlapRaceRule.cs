@@ -26,7 +26,7 @@ public sealed class OverlapRaceRule : Rule
 
     public override IEnumerable<Finding> Check(RuleContext context)
     {
-        var model = LatchModel.Of(context.Netlist, context.CancellationToken);
+        var model = context.LatchModel;
         foreach (var race in OverlapRaces.For(model, context.CancellationToken))
         {
             var (path, fastest, overlap, margin) = (race.Path, race.Fastest, race.Overlap, race.Margin);

@@ -25,7 +25,7 @@ public sealed class SameWindowLatchesRule : Rule
 
     public override IEnumerable<Finding> Check(RuleContext context)
     {
-        var model = LatchModel.Of(context.Netlist, context.CancellationToken);
+        var model = context.LatchModel;
         var reported = new HashSet<(int, int)>();
         foreach (var path in model.Paths)
         {

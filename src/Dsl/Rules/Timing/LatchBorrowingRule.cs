@@ -33,7 +33,7 @@ public sealed class LatchBorrowingRule : Rule
 
     public override IEnumerable<Finding> Check(RuleContext context)
     {
-        var figures = TimingFigures.For(context.Netlist, Corner.Slow, context.CancellationToken);
+        var figures = TimingFigures.For(context.LatchModel, Corner.Slow);
         var result = LatchBorrowing.Solve(figures, context.CancellationToken);
         var onLoop = new HashSet<LatchPath>();
         foreach (var loop in result.DivergentLoops)

@@ -35,7 +35,7 @@ public sealed class LatchWriteWindowRule : Rule
     public override IEnumerable<Finding> Check(RuleContext context)
     {
         var netlist = context.Netlist;
-        var model = LatchModel.Of(netlist, context.CancellationToken);
+        var model = context.LatchModel;
         foreach (var latch in model.Latches)
         {
             context.CancellationToken.ThrowIfCancellationRequested();

@@ -35,7 +35,7 @@ public sealed class RegisterTimingRule : Rule
     public override IEnumerable<Finding> Check(RuleContext context)
     {
         var process = context.Netlist.Process;
-        foreach (var result in RegisterPathChecks.For(context.Netlist, context.CancellationToken))
+        foreach (var result in RegisterPathChecks.For(context.LatchModel, context.CancellationToken))
         {
             var check = result.Check;
             var launch = result.Launch;
@@ -97,9 +97,15 @@ public static class RegisterPathChecks
     public static IReadOnlyList<RegisterPathResult> For(Netlists.Netlist netlist, CancellationToken cancellationToken = default)
     {
         if (netlist is null) throw new ArgumentNullException(nameof(netlist));
-        var slow = TimingFigures.For(netlist, Corner.Slow, cancellationToken);
-        var fast = TimingFigures.For(netlist, Corner.Fast);
-        var model = slow.Model;
+        return For(LatchModel.Of(netlist, cancellationToken), cancellationToken);
+    }
+
+    /// <summary>The checks of the paths <paramref name="model"/> lists.</summary>
+    public static IReadOnlyList<RegisterPathResult> For(LatchModel model, CancellationToken cancellationToken = default)
+    {
+        if (model is null) throw new ArgumentNullException(nameof(model));
+        var slow = TimingFigures.For(model, Corner.Slow);
+        var fast = TimingFigures.For(model, Corner.Fast);
         var slowOf = new Dictionary<Register, RegisterTiming>();
         foreach (var timing in slow.Registers)
             slowOf[timing.Register] = timing;
