@@ -26,6 +26,7 @@ public sealed partial class Circuit
             throw new ArgumentException(
                 $"'{nameof(controls)}' must name at least two nets (was {controls.Length}{(controls.Length == 1 && controls[0] is { } only ? ": '" + only.Name + "'" : "")}); a single net is exclusive with nothing.",
                 nameof(controls));
+        var firstIndexOf = new Dictionary<Net, int>(controls.Length); // a one-hot group may hold thousands of nets
         for (var i = 0; i < controls.Length; i++)
         {
             var net = controls[i];
@@ -35,10 +36,10 @@ public sealed partial class Circuit
                 throw new ArgumentException(
                     $"'{nameof(controls)}' element {i} is net '{net.Name}' of another circuit ('{net.Owner.DesignName}'); nets cannot be shared between circuits.",
                     nameof(controls));
-            for (var j = 0; j < i; j++)
-                if (ReferenceEquals(controls[j], net))
-                    throw new ArgumentException(
-                        $"'{nameof(controls)}' names net '{net.Name}' twice (elements {j} and {i}); each net may appear once.", nameof(controls));
+            if (firstIndexOf.TryGetValue(net, out var j))
+                throw new ArgumentException(
+                    $"'{nameof(controls)}' names net '{net.Name}' twice (elements {j} and {i}); each net may appear once.", nameof(controls));
+            firstIndexOf.Add(net, i);
         }
 
         exclusiveGroups.Add((Net[])controls.Clone());

@@ -34,7 +34,8 @@ namespace Phaseward.Electrical;
 /// Networks", IEEE Trans. CAD 2(3), 1983, the shared-resistance form T_i = Σ_k R_ki C_k).</para>
 /// <para>Choosing the heaviest set of mutually non-exclusive branches is done greedily (heaviest first); it is exact
 /// when exclusive pairs form disjoint groups (one-hot groups, complementary pairs), the usual case. Nets feeding more
-/// than <see cref="MaxBranchesCompared"/> pass gates count them all. A net reached twice from the same net along
+/// than <see cref="MaxBranchesCompared"/> pass gates count them all; their figure is an assumption unless one stated
+/// exclusive group holds all their data controls (checked in one pass, not pair by pair). A net reached twice from the same net along
 /// different pass paths (a diamond) is counted on each path, which keeps the delay pessimistic.</para>
 /// </remarks>
 internal sealed class PassGateNetwork
@@ -65,6 +66,8 @@ internal sealed class PassGateNetwork
     private readonly ConductionDecisions conduction;
     private readonly List<(double Farads, Device Gate)> branchScratch = new();
     private readonly List<Device> countedScratch = new();
+    private readonly List<Net> controlScratch = new();
+    private readonly HashSet<Net> controlSeen = new();
     private readonly int[] postorder;
     private readonly int[] passLoadStart;
     private readonly int[] passLoads;
@@ -317,6 +320,9 @@ internal sealed class PassGateNetwork
 
         var counted = countedScratch;
         counted.Clear();
+        var controls = controlScratch;
+        controls.Clear();
+        controlSeen.Clear();
         var total = 0.0;
         foreach (var (farads, gate) in branches)
         {
@@ -325,14 +331,30 @@ internal sealed class PassGateNetwork
                 foreach (var other in counted)
                     if (CannotConductTogether(gate, other)) { keep = false; break; }
             if (!keep) continue;
-            if (!assumes)
-                foreach (var other in counted)
-                    if (IsUnknownPair(gate, other)) { assumes = true; break; }
             counted.Add(gate);
             total += farads;
+            if (gate.DataControl is { } control && controlSeen.Add(control))
+                controls.Add(control);
         }
 
+        assumes |= HasUnknownPair(controls);
         return total;
+    }
+
+    // Whether two of the distinct data controls of the branches counted together are not known to be exclusive: then
+    // the figure is an assumption. Compared pair by pair up to MaxBranchesCompared controls; past that (a wide one-hot
+    // mux) only one stated group holding them all proves them exclusive, so that the cost stays linear.
+    private bool HasUnknownPair(List<Net> controls)
+    {
+        if (controls.Count < 2)
+            return false;
+        if (controls.Count > MaxBranchesCompared)
+            return !Netlist.OneExclusiveGroupHolds(controls);
+        for (var j = 1; j < controls.Count; j++)
+            for (var i = 0; i < j; i++)
+                if (!Netlist.AreExclusive(controls[i], controls[j]))
+                    return true;
+        return false;
     }
 
     private static readonly Comparison<(double Farads, Device Gate)> HeaviestFirst
@@ -341,10 +363,6 @@ internal sealed class PassGateNetwork
     // Exclusive data controls, or clock phases whose windows never overlap beyond the complement skew: the decision
     // that breaks a series run (so a run and its side loads agree on what conducts).
     private bool CannotConductTogether(Device a, Device b) => !conduction.MayConductTogether(a, b);
-
-    // Two branches on different data nets whose exclusivity is not known: counted together as an assumption.
-    private bool IsUnknownPair(Device a, Device b)
-        => a.DataControl is { } ca && b.DataControl is { } cb && !ReferenceEquals(ca, cb) && !Netlist.AreExclusive(ca, cb);
 
     /// <summary>
     /// The resistance that drives a tree rooted at this net: its strongest restoring driver's; the process's driver

@@ -52,6 +52,24 @@ internal sealed class ExclusiveControls
         return false;
     }
 
+    /// <summary>True when one stated group holds every net of <paramref name="nets"/> (then any two distinct ones are
+    /// exclusive): the candidates are the first net's groups, each looked up in the others' runs.</summary>
+    public bool OneGroupHoldsAll(IReadOnlyList<Net> nets)
+    {
+        if (nets.Count == 0) return false;
+        var first = nets[0].Id;
+        for (var k = start[first]; k < start[first + 1]; k++)
+        {
+            var group = groupsOfNet[k];
+            var all = true;
+            for (var n = 1; n < nets.Count && all; n++)
+                all = Array.BinarySearch(groupsOfNet, start[nets[n].Id], start[nets[n].Id + 1] - start[nets[n].Id], group) >= 0;
+            if (all) return true;
+        }
+
+        return false;
+    }
+
     /// <summary>True when <paramref name="inverse"/> is driven by one inverter, and only by it, whose input is <paramref name="net"/>.</summary>
     public static bool IsInverseOf(Netlist netlist, Net inverse, Net net)
     {

@@ -17,6 +17,7 @@ public sealed class Netlist
     private readonly Capacitance[] capacitances;
     private readonly IReadOnlyDictionary<int, Current> leakageOverrides;
     private readonly bool[] isInput;
+    private Dictionary<Net, Port>? inputPortOf; // made on first use: few rules need it
     private readonly ExclusiveControls exclusive;
 
     internal Netlist(string designName, Process process, IReadOnlyList<Net> nets, IReadOnlyList<Device> devices,
@@ -113,6 +114,10 @@ public sealed class Netlist
         return exclusive.StatedTogether(a, b) || ExclusiveControls.IsInverseOf(this, a, b) || ExclusiveControls.IsInverseOf(this, b, a);
     }
 
+    /// <summary>True when one stated <see cref="Circuit.Exclusive"/> group holds every net of <paramref name="controls"/>:
+    /// any two distinct ones are exclusive, known in one pass instead of a comparison per pair.</summary>
+    internal bool OneExclusiveGroupHolds(IReadOnlyList<Net> controls) => exclusive.OneGroupHoldsAll(controls);
+
     /// <summary>True when exactly one of <paramref name="a"/> and <paramref name="b"/> is high at any time: one is the
     /// other's inverse (a stated exclusive group says at most one, not exactly one).</summary>
     public bool AreComplementary(Net a, Net b)
@@ -124,6 +129,22 @@ public sealed class Netlist
 
     /// <summary>True for a primary input (driven from outside through the process's driver resistance).</summary>
     public bool IsInput(Net net) => isInput[Index(net)];
+
+    /// <summary>The input port <paramref name="net"/> comes in through, or null when it is not a primary input (one
+    /// lookup: a design can have as many inputs as devices).</summary>
+    internal Port? InputPortOf(Net net)
+    {
+        if (!IsInput(net)) return null;
+        var ports = System.Threading.LazyInitializer.EnsureInitialized(ref inputPortOf, () =>
+        {
+            var byNet = new Dictionary<Net, Port>(Inputs.Count);
+            foreach (var port in Inputs)
+                if (!byNet.ContainsKey(port.Net)) // the first port, as a scan in port order would find
+                    byNet.Add(port.Net, port);
+            return byNet;
+        })!;
+        return ports[net];
+    }
 
     /// <summary>
     /// The net's capacitance: the value set in the design, else the process estimate

@@ -121,6 +121,39 @@ public class ConductingPathDelayTests
         Assert.All(runs, r => Assert.Equal(890.0, Figures.Ps(r.ElmoreDelay), 9));
     }
 
+    [Theory]
+    [InlineData(true)]
+    [InlineData(false)]
+    public void A_mux_wider_than_the_branches_compared_counts_them_all_and_is_an_assumption_unless_one_group_holds_them(bool stated)
+    {
+        // in → g1 → n1 → g2 → n2, and n2 feeds 70 branches (more than PassGateNetwork.MaxBranchesCompared), each a gate
+        // on its own select into a 10 fF node. All 70 are counted either way; with the selects in one stated group no
+        // two of them conduct together as far as anything known goes, so the figure is no assumption. The Elmore sum
+        // on the flat figures: 4 kΩ · 730 fF + 5 kΩ · 720 fF + 5 kΩ · 710 fF + 5 kΩ · 10 fF = 10,120 ps at a branch's end.
+        const int width = 70;
+        Assert.True(width > PassGateNetwork.MaxBranchesCompared);
+        var c = Figures.NewCircuit("wide");
+        var n1 = c.Node("n1");
+        var n2 = c.Node("n2");
+        c.TransmissionGate(c.Input("in"), c.Input("e1"), n1);
+        c.TransmissionGate(n1, c.Input("e2"), n2);
+        var selects = Enumerable.Range(0, width).Select(i => c.Input("s" + i)).ToArray();
+        if (stated) c.Exclusive(selects);
+        for (var i = 0; i < width; i++)
+        {
+            var o = c.Node("o" + i);
+            c.TransmissionGate(n2, selects[i], o);
+            c.Inverter(o, "o" + i + "_b");
+        }
+
+        var netlist = c.ToNetlist();
+        var runs = PassGateChains.Of(netlist).Where(r => r.Length == 3).ToList();
+        Assert.Equal(width, runs.Count);
+        Assert.All(runs, r => Assert.Equal(10_120.0, Figures.Ps(r.ElmoreDelay), 6));
+        var finding = new PassGateChainRule().Check(new RuleContext(netlist, new RulePolicy { MaxSeriesPassGates = 2 })).First();
+        Assert.Equal(stated ? "false" : "true", finding.Properties[FindingPropertyKeys.AssumesUnknownBranchesConduct]);
+    }
+
     // The rotator's conducting path again, in -4k- a -5k- n1 -5k- n2 -5k- n3 (flat figures), its three gates on
     // clk.High, with a 40 fF branch s1 leaving n1 through a gate on the phase given.
     private static double PathWithBranchOn(bool sameClockPhase)

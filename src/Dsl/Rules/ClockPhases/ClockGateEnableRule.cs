@@ -214,6 +214,7 @@ internal static class EnableOrigins
         work.Push(enable);
         var latches = new Dictionary<Latch, double>();
         var inputs = new List<Net>();
+        var inputSeen = new HashSet<Net>();
         while (work.Count > 0)
         {
             var net = work.Pop();
@@ -223,7 +224,7 @@ internal static class EnableOrigins
             var d = delay[net];
             if (netlist.IsInput(net))
             {
-                if (!inputs.Contains(net)) inputs.Add(net);
+                if (inputSeen.Add(net)) inputs.Add(net);
                 continue;
             }
 
@@ -262,11 +263,5 @@ internal static class EnableOrigins
         }
     }
 
-    private static SourceSpan SpanOfInput(Netlist netlist, Net input)
-    {
-        foreach (var port in netlist.Inputs)
-            if (ReferenceEquals(port.Net, input))
-                return port.Span;
-        return SourceSpan.Unknown;
-    }
+    private static SourceSpan SpanOfInput(Netlist netlist, Net input) => netlist.InputPortOf(input)?.Span ?? SourceSpan.Unknown;
 }

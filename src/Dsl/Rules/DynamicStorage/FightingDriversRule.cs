@@ -102,6 +102,8 @@ public sealed class FightingDriversRule : Rule
     // of one root clock, for how long per period.
     private static (Device First, Device Second, string When, Time? Overlap)? FirstFight(Netlist netlist, List<Device> drivers, PhaseWindowCache windows)
     {
+        if (IsOneHotBus(netlist, drivers))
+            return null;
         for (var j = 1; j < drivers.Count; j++)
         {
             for (var i = 0; i < j; i++)
@@ -116,6 +118,24 @@ public sealed class FightingDriversRule : Rule
         }
 
         return null;
+    }
+
+    // A bus whose gates are all on distinct data controls of one stated exclusive group (a register file's read bus):
+    // no two conduct together. Known in one pass, where comparing every pair would cost the square of a wide bus.
+    private static bool IsOneHotBus(Netlist netlist, List<Device> drivers)
+    {
+        if (drivers.Count < 3)
+            return false;
+        var controls = new List<Net>(drivers.Count);
+        var distinct = new HashSet<Net>();
+        foreach (var driver in drivers)
+        {
+            if (!driver.IsPassDevice || driver.ClockControl is not null || driver.DataControl is not { } control || !distinct.Add(control))
+                return false;
+            controls.Add(control);
+        }
+
+        return netlist.OneExclusiveGroupHolds(controls);
     }
 
     private static (string When, Time? Overlap)? Together(Netlist netlist, Device a, Device b, PhaseWindowCache windows)
