@@ -45,6 +45,9 @@ public static class Program
             return 2;
         }
 
+        if (settings.Scaling is { } scalingSize)
+            return ScalingRuns.Run(scalingSize, settings.Runs, settings.Output);
+
         if (settings.Compiler)
             return CompilerRuns.Run(settings.Shapes, settings.Sizes, settings.Runs, settings.LargeSize, settings.LargeRuns, settings.Output);
 
@@ -440,11 +443,14 @@ public static class Program
     private sealed class Settings
     {
         public const string Usage = "usage: Phaseward.Benchmarks [--sizes 1000,10000,100000,1000000] [--straight-line-max 100000] [--runs 5] " +
-                                    "[--large-size 100000] [--large-runs 3] [--sdk-analyzers DIR | --no-sdk] [--shapes straight-line,loop,blocks] [--out FILE] [--compiler: the SDK's compiler as a child process instead] | --profile DEVICES [--profile-shape loop|straight-line|blocks]  [--wall: wall-clock instead of CPU time]";
+                                    "[--large-size 100000] [--large-runs 3] [--sdk-analyzers DIR | --no-sdk] [--shapes straight-line,loop,blocks] [--out FILE] [--compiler: the SDK's compiler as a child process instead] | --profile DEVICES [--profile-shape loop|straight-line|blocks] | --scaling PARTS [--runs 3]  [--wall: wall-clock instead of CPU time]";
 
         public int[] Sizes { get; private set; } = { 1_000, 10_000, 100_000, 1_000_000 };
 
         public int StraightLineMax { get; private set; } = 100_000;
+
+        /// <summary>Designs whose size sits in one net or one chain, at this many parts and ten times more (<see cref="ScalingRuns"/>).</summary>
+        public int? Scaling { get; private set; }
 
         /// <summary>Measure with the SDK's compiler as a child process (<see cref="CompilerRuns"/>).</summary>
         public bool Compiler { get; private set; }
@@ -501,6 +507,7 @@ public static class Program
                     case "--shapes": s.Shapes = Value().Split(',').Select(t => ShapeNamed(option, t)).ToArray(); break;
                     case "--wall": Samples.CpuTime = false; break;
                     case "--compiler": s.Compiler = true; break;
+                    case "--scaling": s.Scaling = Positive(option, Value()); break;
                     default: throw new ArgumentException($"Unknown option '{option}'.");
                 }
             }

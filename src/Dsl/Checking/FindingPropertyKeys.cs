@@ -255,4 +255,7 @@ public static class FindingPropertyKeys
 
     /// <summary>PW9005: the latch path search's budget of steps.</summary>
     public const string SearchBudget = "SearchBudget";
+
+    /// <summary>PW4001, PW4002: how many launching registers other than the reported (worst) one fail the same check into the register.</summary>
+    public const string OtherFailingLaunches = "OtherFailingLaunches";
 }

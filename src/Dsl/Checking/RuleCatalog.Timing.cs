@@ -8,22 +8,25 @@ public static partial class RuleCatalog
         "PW4001", RuleFamily.Timing, Severity.Warning,
         title: "Register setup time violated",
         messageFormat: "Register '{0}' misses its setup time on the path from register '{1}': clock-to-output {2} + path {3} + "
-            + "setup {4} = {5} exceeds the {6} available (slack {7}; {8})",
+            + "setup {4} = {5} exceeds the {6} available (slack {7}; {8}){9}",
         description: "On a register-to-register path the launching register's clock-to-output, the slowest path and the "
             + "capturing register's setup time must fit in the time between the launching and the capturing edge (a "
             + "clock period, corrected for clock skew). First-order estimate at the slow corner (every delay times the "
-            + "process's slow-corner factor).");
+            + "process's slow-corner factor). One finding per capturing register, for its worst path; the message counts the "
+            + "other launching registers that fail it.");
 
     /// <summary>A register-to-register path is shorter than the capturing register's hold time (plus clock skew).</summary>
     public static RuleDescriptor RegisterHold { get; } = new(
         "PW4002", RuleFamily.Timing, Severity.Warning,
         title: "Register hold time violated",
         messageFormat: "Register '{0}' can lose its data on the path from register '{1}': minimum clock-to-output {2} + "
-            + "shortest path {3} = {4} is less than its hold time {5} plus clock skew {6} (slack {7}; {8})",
+            + "shortest path {3} = {4} is less than its hold time {5} plus clock skew {6} (slack {7}; {8}){9}",
         description: "New data launched by a register must not reach the next register's input before that register's master "
             + "has closed: the shortest clock-to-output plus the shortest path must exceed the capturing register's "
             + "hold time (the clock overlap after its edge, less its master's pass-gate delay) plus the clock skew between the "
-            + "two registers. First-order estimate at the fast corner (every delay times the process's fast-corner factor).");
+            + "two registers. First-order estimate at the fast corner (every delay times the process's fast-corner factor). "
+            + "One finding per capturing register, for its worst path; the message counts the other launching registers "
+            + "that fail it.");
 
     /// <summary>A two-phase latch path arrives after the capturing latch closes, even with time borrowing.</summary>
     public static RuleDescriptor LatchBorrowing { get; } = new(

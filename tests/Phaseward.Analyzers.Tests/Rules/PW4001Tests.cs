@@ -64,7 +64,7 @@ public class PW4001Tests
             // Primary: R2's call in Describe; additional: the helper's register call (R2's own span), then R1's span
             // (the related location, which is exact and so stays in the helper's file).
             new DiagnosticResult(RuleCatalog.RegisterSetup.Id, DiagnosticSeverity.Warning).WithLocation(0).WithLocation(2).WithLocation(2)
-                .WithArguments("R2", "R1", "89.7 ps", "166 ps", "34.5 ps", "290 ps", "280 ps", "-9.8 ps", "slow corner, delays ×1"));
+                .WithArguments("R2", "R1", "89.7 ps", "166 ps", "34.5 ps", "290 ps", "280 ps", "-9.8 ps", "slow corner, delays ×1", ""));
         test.TestState.Sources.Add(("/0/Cells.cs", """
             using Phaseward;
 

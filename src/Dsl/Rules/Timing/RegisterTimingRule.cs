@@ -35,33 +35,85 @@ public sealed class RegisterTimingRule : Rule
     public override IEnumerable<Finding> Check(RuleContext context)
     {
         var process = context.Netlist.Process;
+        var minimum = context.Policy.MinimumTimingSlack;
+        // One finding per capturing register and check, for its worst path: a register at the end of a long carry can be
+        // missed by thousands of launching registers, and one fix (a shorter path into it) serves them all.
+        var setup = new WorstPaths();
+        var hold = new WorstPaths();
         foreach (var result in RegisterPathChecks.For(context.LatchModel, context.CancellationToken))
         {
-            var check = result.Check;
-            var launch = result.Launch;
-            var capture = result.Capture;
-            if (check.SetupSlack < context.Policy.MinimumTimingSlack)
-                yield return new Finding(RuleCatalog.RegisterSetup, capture.Span,
-                    new object[]
-                    {
-                        capture.Name, launch.Name, check.ClockToOutput, check.PathMax, check.Setup,
-                        check.ClockToOutput + check.PathMax + check.Setup, check.Available, check.SetupSlack,
-                        CornerText.Of(process, Corner.Slow),
-                    },
-                    new[] { launch.Span }, Properties(launch, capture, check.SetupSlack));
-            if (check.HoldSlack < context.Policy.MinimumTimingSlack)
-                yield return new Finding(RuleCatalog.RegisterHold, capture.Span,
-                    new object[]
-                    {
-                        capture.Name, launch.Name, check.ClockToOutputMin, check.PathMin, check.ClockToOutputMin + check.PathMin,
-                        check.Hold, check.Skew, check.HoldSlack, CornerText.Of(process, Corner.Fast),
-                    },
-                    new[] { launch.Span }, Properties(launch, capture, check.HoldSlack));
+            if (result.Check.SetupSlack < minimum)
+                setup.Add(result, result.Check.SetupSlack);
+            if (result.Check.HoldSlack < minimum)
+                hold.Add(result, result.Check.HoldSlack);
+        }
+
+        foreach (var capture in setup.Captures)
+        {
+            var (worst, others) = setup.Of(capture);
+            var check = worst.Check;
+            yield return new Finding(RuleCatalog.RegisterSetup, capture.Span,
+                new object[]
+                {
+                    capture.Name, worst.Launch.Name, check.ClockToOutput, check.PathMax, check.Setup,
+                    check.ClockToOutput + check.PathMax + check.Setup, check.Available, check.SetupSlack,
+                    CornerText.Of(process, Corner.Slow), Others(others),
+                },
+                new[] { worst.Launch.Span }, Properties(worst.Launch, capture, check.SetupSlack, others));
+        }
+
+        foreach (var capture in hold.Captures)
+        {
+            var (worst, others) = hold.Of(capture);
+            var check = worst.Check;
+            yield return new Finding(RuleCatalog.RegisterHold, capture.Span,
+                new object[]
+                {
+                    capture.Name, worst.Launch.Name, check.ClockToOutputMin, check.PathMin, check.ClockToOutputMin + check.PathMin,
+                    check.Hold, check.Skew, check.HoldSlack, CornerText.Of(process, Corner.Fast), Others(others),
+                },
+                new[] { worst.Launch.Span }, Properties(worst.Launch, capture, check.HoldSlack, others));
         }
     }
 
-    private static Dictionary<string, string> Properties(Register launch, Register capture, Time slack) => new()
+    private static string Others(int count) => count switch
     {
+        0 => "",
+        1 => "; 1 more launching register fails it too",
+        _ => string.Format(CultureInfo.InvariantCulture, "; {0:N0} more launching registers fail it too", count),
+    };
+
+    /// <summary>The worst failing path into each capturing register, and how many other launching registers fail it,
+    /// the registers in the order their first failing path was found.</summary>
+    private sealed class WorstPaths
+    {
+        private readonly Dictionary<Register, (RegisterPathResult Worst, Time Slack, int Others)> byCapture = new();
+
+        public List<Register> Captures { get; } = new();
+
+        public void Add(RegisterPathResult result, Time slack)
+        {
+            if (!byCapture.TryGetValue(result.Capture, out var seen))
+            {
+                byCapture[result.Capture] = (result, slack, 0);
+                Captures.Add(result.Capture);
+            }
+            else
+            {
+                byCapture[result.Capture] = slack < seen.Slack ? (result, slack, seen.Others + 1) : (seen.Worst, seen.Slack, seen.Others + 1);
+            }
+        }
+
+        public (RegisterPathResult Worst, int Others) Of(Register capture)
+        {
+            var entry = byCapture[capture];
+            return (entry.Worst, entry.Others);
+        }
+    }
+
+    private static Dictionary<string, string> Properties(Register launch, Register capture, Time slack, int others) => new()
+    {
+        [FindingPropertyKeys.OtherFailingLaunches] = others.ToString(CultureInfo.InvariantCulture),
         [FindingPropertyKeys.TargetLatch] = capture.Name,
         [FindingPropertyKeys.SourceLatch] = launch.Name,
         [FindingPropertyKeys.Register] = capture.Name,

@@ -119,13 +119,26 @@ public class LatchPathSearchBudgetTests
         var model = LatchModel.Of(netlist, 200);
         Assert.True(model.PathSearchStopped);
         var searched = model.Latches.Take(model.LatchesSearched).Select(l => l.Name).ToHashSet();
+        // PW4001 by its definition on the whole search's register paths, kept to the launching registers whose slave
+        // was searched: for each capturing register with a failing path, the worst slack among them.
+        var expected = Phaseward.Rules.Timing.RegisterPathChecks.For(LatchModel.Of(Ripple(n, 1), Unlimited))
+            .Where(r => searched.Contains(r.Launch.Slave.Name) && r.Check.SetupSlack < Time.Zero)
+            .GroupBy(r => r.Capture.Name)
+            .ToDictionary(g => g.Key, g => (Worst: g.Min(r => r.Check.SetupSlack), Count: g.Count()));
         var setupWhole = whole.Findings.Where(f => f.RuleId == RuleCatalog.RegisterSetup.Id).ToList();
         var setupStopped = stopped.Findings.Where(f => f.RuleId == RuleCatalog.RegisterSetup.Id).ToList();
-        // PW4001 names the launching register (SourceLatch); a register is searched when its slave is.
-        Assert.Equal(
-            setupWhole.Where(f => searched.Contains(f.Properties[FindingPropertyKeys.SourceLatch] + ".slave")).Select(f => f.Message),
-            setupStopped.Select(f => f.Message));
-        Assert.True(setupStopped.Count < setupWhole.Count);
+        Assert.Equal(expected.Keys.OrderBy(k => k, StringComparer.Ordinal),
+            setupStopped.Select(f => f.Properties[FindingPropertyKeys.Register]).OrderBy(k => k, StringComparer.Ordinal));
+        foreach (var finding in setupStopped)
+        {
+            var (worst, count) = expected[finding.Properties[FindingPropertyKeys.Register]];
+            Assert.Contains(finding.Properties[FindingPropertyKeys.SourceLatch] + ".slave", searched);
+            Assert.Equal(worst.Seconds, double.Parse(finding.Properties[FindingPropertyKeys.MarginSeconds], System.Globalization.CultureInfo.InvariantCulture));
+            Assert.Equal(count - 1, int.Parse(finding.Properties[FindingPropertyKeys.OtherFailingLaunches], System.Globalization.CultureInfo.InvariantCulture));
+        }
+
+        Assert.True(setupStopped.Sum(f => 1 + int.Parse(f.Properties[FindingPropertyKeys.OtherFailingLaunches], System.Globalization.CultureInfo.InvariantCulture))
+            < setupWhole.Sum(f => 1 + int.Parse(f.Properties[FindingPropertyKeys.OtherFailingLaunches], System.Globalization.CultureInfo.InvariantCulture)));
 
         var notice = Assert.Single(stopped.Findings, f => f.RuleId == RuleCatalog.LatchPathSearchStopped.Id);
         var firstNotSearched = model.Latches[model.LatchesSearched];

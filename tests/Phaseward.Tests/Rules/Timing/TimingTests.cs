@@ -217,6 +217,48 @@ public class RegisterTimingRuleTests
 }
 
 /// <summary>
+/// PW4001/PW4002 report each capturing register once per check, for its worst path, and count the other launching
+/// registers that fail it. Checked against the per-pair figures (<see cref="RegisterPathChecks"/>), grouped by hand.
+/// </summary>
+public class RegisterTimingPerCaptureTests
+{
+    [Fact]
+    public void A_register_missed_from_many_launching_registers_is_reported_once_for_the_worst()
+    {
+        // A ripple counter on a 400 ps clock: register k's carry passes the NANDs of every bit before it, so the late bits
+        // miss setup from many earlier registers (first-order figures of the flat test process).
+        const int n = 12;
+        var c = Figures.NewCircuit("ripple");
+        var tick = c.Clock("tick", 400.Picoseconds());
+        var carry = c.Input("count_enable");
+        for (var bit = 0; bit < n; bit++)
+            carry = c.Nand(c.DynamicRegister(carry, tick, "count" + bit), carry);
+        c.Output("carry_out", carry);
+        var netlist = c.ToNetlist();
+
+        var failing = RegisterPathChecks.For(netlist).Where(r => r.Check.SetupSlack < Time.Zero).GroupBy(r => r.Capture).ToList();
+        Assert.Contains(failing, g => g.Count() > 1);
+        var findings = new RegisterTimingRule().Check(new RuleContext(netlist, RulePolicy.Default))
+            .Where(f => f.RuleId == RuleCatalog.RegisterSetup.Id).ToList();
+
+        Assert.Equal(failing.Count, findings.Count);
+        foreach (var group in failing)
+        {
+            var finding = Assert.Single(findings, f => f.Properties[FindingPropertyKeys.Register] == group.Key.Name);
+            var worst = group.OrderBy(r => r.Check.SetupSlack).First();
+            Assert.Equal(worst.Launch.Name, finding.Properties[FindingPropertyKeys.SourceLatch]);
+            Assert.Equal(worst.Check.SetupSlack.Seconds, double.Parse(finding.Properties[FindingPropertyKeys.MarginSeconds], System.Globalization.CultureInfo.InvariantCulture));
+            var others = group.Count() - 1;
+            Assert.Equal(others.ToString(System.Globalization.CultureInfo.InvariantCulture), finding.Properties[FindingPropertyKeys.OtherFailingLaunches]);
+            if (others == 0)
+                Assert.EndsWith(")", finding.Message);
+            else
+                Assert.EndsWith(others == 1 ? "; 1 more launching register fails it too" : $"; {others} more launching registers fail it too", finding.Message);
+        }
+    }
+}
+
+/// <summary>
 /// PW4003: two-phase latch paths with time borrowing (Weste &amp; Harris, "CMOS VLSI Design", 4th ed., ch. 10, time
 /// borrowing; section from memory): data arriving after a latch opens passes through and the lateness is borrowed
 /// from the next half-cycle; it must arrive before the window closes less the setup time.
