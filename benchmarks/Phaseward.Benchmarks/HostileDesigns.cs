@@ -43,82 +43,82 @@ internal sealed class HostileDesign : Design
         switch (shape)
         {
             case "register-file":
-            {
-                var d = c.Input("d");
-                for (var i = 0; i < n; i++) c.Output("q" + i, c.StaticRegister(d, clk, "r" + i));
-                break;
-            }
-            case "one-hot-bus":
-            {
-                var bus = c.Node("bus");
-                var selects = Enumerable.Range(0, n).Select(i => c.Input("sel" + i)).ToArray();
-                c.Exclusive(selects);
-                for (var i = 0; i < n; i++) c.TransmissionGate(c.Input("d" + i), selects[i], bus);
-                c.Output("q", c.Inverter(bus));
-                break;
-            }
-            case "gated-clocks":
-            {
-                var d = c.Input("d");
-                for (var i = 0; i < n; i++)
                 {
-                    var gated = c.ClockGate(clk, c.Input("en" + i), maxIdle: 1.Microseconds());
-                    c.Output("q" + i, c.DynamicLatch(d, gated.High, "l" + i));
+                    var d = c.Input("d");
+                    for (var i = 0; i < n; i++) c.Output("q" + i, c.StaticRegister(d, clk, "r" + i));
+                    break;
                 }
-
-                break;
-            }
-            case "mux-tree":
-            {
-                var level = Enumerable.Range(0, n).Select(i => c.Input("d" + i)).ToList();
-                for (var depth = 0; level.Count > 1; depth++)
+            case "one-hot-bus":
                 {
-                    var select = c.Input("s" + depth);
-                    var inverse = c.Inverter(select);
-                    var next = new List<Net>();
-                    for (var i = 0; i + 1 < level.Count; i += 2)
+                    var bus = c.Node("bus");
+                    var selects = Enumerable.Range(0, n).Select(i => c.Input("sel" + i)).ToArray();
+                    c.Exclusive(selects);
+                    for (var i = 0; i < n; i++) c.TransmissionGate(c.Input("d" + i), selects[i], bus);
+                    c.Output("q", c.Inverter(bus));
+                    break;
+                }
+            case "gated-clocks":
+                {
+                    var d = c.Input("d");
+                    for (var i = 0; i < n; i++)
                     {
-                        var o = c.Node();
-                        c.TransmissionGate(level[i], select, o);
-                        c.TransmissionGate(level[i + 1], inverse, o);
-                        next.Add(depth % 3 == 2 ? c.Inverter(c.Inverter(o)) : o);
+                        var gated = c.ClockGate(clk, c.Input("en" + i), maxIdle: 1.Microseconds());
+                        c.Output("q" + i, c.DynamicLatch(d, gated.High, "l" + i));
                     }
 
-                    level = next;
+                    break;
                 }
+            case "mux-tree":
+                {
+                    var level = Enumerable.Range(0, n).Select(i => c.Input("d" + i)).ToList();
+                    for (var depth = 0; level.Count > 1; depth++)
+                    {
+                        var select = c.Input("s" + depth);
+                        var inverse = c.Inverter(select);
+                        var next = new List<Net>();
+                        for (var i = 0; i + 1 < level.Count; i += 2)
+                        {
+                            var o = c.Node();
+                            c.TransmissionGate(level[i], select, o);
+                            c.TransmissionGate(level[i + 1], inverse, o);
+                            next.Add(depth % 3 == 2 ? c.Inverter(c.Inverter(o)) : o);
+                        }
 
-                c.Output("q", c.Inverter(level[0]));
-                break;
-            }
+                        level = next;
+                    }
+
+                    c.Output("q", c.Inverter(level[0]));
+                    break;
+                }
             case "shift-chain":
-            {
-                var x = c.Input("d");
-                for (var i = 0; i < n; i++) x = c.StaticLatch(x, i % 2 == 0 ? clk.High : clk.Low, "s" + i);
-                c.Output("q", x);
-                break;
-            }
+                {
+                    var x = c.Input("d");
+                    for (var i = 0; i < n; i++) x = c.StaticLatch(x, i % 2 == 0 ? clk.High : clk.Low, "s" + i);
+                    c.Output("q", x);
+                    break;
+                }
             case "keeper-bus":
-            {
-                var node = c.Node("kept");
-                c.Keeper(node);
-                for (var i = 0; i < n; i++) c.TransmissionGate(c.Inverter(c.Input("d" + i)), c.Input("w" + i), node);
-                c.Output("q", c.Inverter(node));
-                break;
-            }
+                {
+                    var node = c.Node("kept");
+                    c.Keeper(node);
+                    for (var i = 0; i < n; i++) c.TransmissionGate(c.Inverter(c.Input("d" + i)), c.Input("w" + i), node);
+                    c.Output("q", c.Inverter(node));
+                    break;
+                }
             case "ripple-counter":
-            {
-                var carry = c.Input("count_enable");
-                for (var bit = 0; bit < n; bit++) carry = c.Nand(c.DynamicRegister(carry, clk, "count" + bit), carry);
-                c.Output("carry_out", carry);
-                break;
-            }
+                {
+                    var carry = c.Input("count_enable");
+                    for (var bit = 0; bit < n; bit++) carry = c.Nand(c.DynamicRegister(carry, clk, "count" + bit), carry);
+                    c.Output("carry_out", carry);
+                    break;
+                }
             case "reduction-chain":
-            {
-                var folded = c.StaticLatch(c.Input("a0"), clk.High, "s0");
-                for (var i = 1; i < n; i++) folded = c.Nand(folded, c.StaticLatch(c.Input("a" + i), clk.High, "s" + i));
-                c.Output("q", c.DynamicLatch(folded, clk.Low, "sink"));
-                break;
-            }
+                {
+                    var folded = c.StaticLatch(c.Input("a0"), clk.High, "s0");
+                    for (var i = 1; i < n; i++) folded = c.Nand(folded, c.StaticLatch(c.Input("a" + i), clk.High, "s" + i));
+                    c.Output("q", c.DynamicLatch(folded, clk.Low, "sink"));
+                    break;
+                }
         }
     }
 }
