@@ -18,18 +18,7 @@ public class LatchPathSearchBudgetTests
 {
     private const long Unlimited = long.MaxValue / 2;
 
-    // n dynamic registers, each fed by the previous stage's NAND, which also feeds the next NAND: register k's slave
-    // reaches the master of every later register, and each master its own slave.
-    private static Netlist Ripple(int n, double periodNs = 1000)
-    {
-        var c = Figures.NewCircuit("ripple");
-        var tick = c.Clock("tick", periodNs.Nanoseconds());
-        var carry = c.Input("count_enable");
-        for (var bit = 0; bit < n; bit++)
-            carry = c.Nand(c.DynamicRegister(carry, tick, "count" + bit), carry);
-        c.Output("carry_out", carry);
-        return c.ToNetlist();
-    }
+    private static Netlist Ripple(int n, double periodNs = 1000) => Figures.Ripple(n, periodNs.Nanoseconds());
 
     // The paths from one latch of the chain, from its structure: a master reaches its own slave; the slave of bit k
     // reaches the masters of bits k + 1 … n − 1.

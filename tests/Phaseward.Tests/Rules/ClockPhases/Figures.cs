@@ -1,5 +1,6 @@
 using System.Linq;
 using Phaseward.Checking;
+using Phaseward.Netlists;
 
 namespace Phaseward.Tests.Rules.ClockPhases;
 
@@ -33,6 +34,22 @@ internal static class Figures
         var circuit = new Circuit(name);
         if (flat) circuit.UseProcess(Flat);
         return circuit;
+    }
+
+    /// <summary>
+    /// A ripple counter of <paramref name="bits"/> dynamic registers on the flat figures: each register takes the
+    /// previous stage's NAND, which also feeds the next NAND, so register k's slave reaches the master of every later
+    /// register and each master its own slave: bits + bits(bits − 1)/2 latch-to-latch paths.
+    /// </summary>
+    public static Netlist Ripple(int bits, Time period)
+    {
+        var c = NewCircuit("ripple");
+        var tick = c.Clock("tick", period);
+        var carry = c.Input("count_enable");
+        for (var bit = 0; bit < bits; bit++)
+            carry = c.Nand(c.DynamicRegister(carry, tick, "count" + bit), carry);
+        c.Output("carry_out", carry);
+        return c.ToNetlist();
     }
 
     public static Finding[] Run(Rule rule, Circuit circuit, RulePolicy? policy = null)

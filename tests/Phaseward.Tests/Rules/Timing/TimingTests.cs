@@ -227,14 +227,7 @@ public class RegisterTimingPerCaptureTests
     {
         // A ripple counter on a 400 ps clock: register k's carry passes the NANDs of every bit before it, so the late bits
         // miss setup from many earlier registers (first-order figures of the flat test process).
-        const int n = 12;
-        var c = Figures.NewCircuit("ripple");
-        var tick = c.Clock("tick", 400.Picoseconds());
-        var carry = c.Input("count_enable");
-        for (var bit = 0; bit < n; bit++)
-            carry = c.Nand(c.DynamicRegister(carry, tick, "count" + bit), carry);
-        c.Output("carry_out", carry);
-        var netlist = c.ToNetlist();
+        var netlist = Figures.Ripple(12, 400.Picoseconds());
 
         var failing = RegisterPathChecks.For(netlist).Where(r => r.Check.SetupSlack < Time.Zero).GroupBy(r => r.Capture).ToList();
         Assert.Contains(failing, g => g.Count() > 1);
