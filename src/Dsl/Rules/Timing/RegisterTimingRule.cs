@@ -165,33 +165,45 @@ public static class RegisterPathChecks
         foreach (var timing in fast.Registers)
             fastOf[timing.Register] = timing;
 
-        var checks = new Dictionary<(Register, Register), RegisterPathCheck>();
-        var order = new List<(Register, Register)>();
+        // The paths come grouped by source latch, so a pair of registers recurs only within its launching register's
+        // group: what depends on the launch, and which captures it has reached, are kept for the group alone, and the
+        // time available once per pair of phases (a long chain has a path per pair of registers).
+        var results = new List<RegisterPathResult>();
+        var resultOfCapture = new Dictionary<Register, int>();
+        var available = new Dictionary<(Phase, Phase), Time>();
+        Latch? from = null;
+        Register? launch = null;
+        var output = Time.Zero;
         foreach (var path in model.Paths)
         {
             cancellationToken.ThrowIfCancellationRequested();
-            if (!model.IsRegisterToRegister(path.From, path.To))
+            if (!ReferenceEquals(path.From, from))
+            {
+                from = path.From;
+                launch = model.RegisterOf(from) is { } register && ReferenceEquals(register.Slave, from) ? register : null;
+                output = launch is null ? Time.Zero : model.OutputDelay(from);
+                resultOfCapture.Clear();
+            }
+
+            if (launch is null || model.RegisterOf(path.To) is not { } capture || !ReferenceEquals(capture.Master, path.To))
                 continue;
-            var launch = model.RegisterOf(path.From)!;
-            var capture = model.RegisterOf(path.To)!;
             if (!TimeBase.Related(launch.Clock, capture.Clock))
                 continue;
-            var check = RegisterPathCheck.Of(model, slow, fast, (slowOf[launch], slowOf[capture]), (fastOf[launch], fastOf[capture]), path);
-            var key = (launch, capture);
-            if (!checks.TryGetValue(key, out var seen))
+            var phases = (launch.Slave.Phase, capture.Slave.Phase);
+            if (!available.TryGetValue(phases, out var time))
+                available[phases] = time = RegisterPathCheck.AvailableTime(model, launch, capture);
+            var check = RegisterPathCheck.Of(slow, fast, (slowOf[launch], slowOf[capture]), (fastOf[launch], fastOf[capture]), path, output, time);
+            if (resultOfCapture.TryGetValue(capture, out var index))
             {
-                order.Add(key);
-                checks[key] = check;
+                results[index] = new RegisterPathResult(launch, capture, RegisterPathCheck.Worse(results[index].Check, check));
             }
             else
             {
-                checks[key] = RegisterPathCheck.Worse(seen, check);
+                resultOfCapture[capture] = results.Count;
+                results.Add(new RegisterPathResult(launch, capture, check));
             }
         }
 
-        var results = new List<RegisterPathResult>(order.Count);
-        foreach (var key in order)
-            results.Add(new RegisterPathResult(key.Item1, key.Item2, checks[key]));
         return results;
     }
 }
@@ -235,14 +247,13 @@ public sealed class RegisterPathCheck
 
     public Time HoldSlack => ClockToOutputMin + PathMin - (Hold + Skew);
 
-    // Setup from the slow corner's figures and the slowest path at that corner; hold from the fast corner's.
-    internal static RegisterPathCheck Of(LatchModel model, TimingFigures slow, TimingFigures fast,
-        (RegisterTiming Launch, RegisterTiming Capture) atSlow, (RegisterTiming Launch, RegisterTiming Capture) atFast, LatchPath path)
+    // Setup from the slow corner's figures and the slowest path at that corner; hold from the fast corner's. The path's
+    // delays run from the launching latch's storage node: its output stage (part of clock-to-output) is taken off.
+    internal static RegisterPathCheck Of(TimingFigures slow, TimingFigures fast, (RegisterTiming Launch, RegisterTiming Capture) atSlow,
+        (RegisterTiming Launch, RegisterTiming Capture) atFast, LatchPath path, Time output, Time available)
     {
-        var output = model.OutputDelay(path.From);
         var pathMax = slow.AtCorner(Time.Max(Time.Zero, path.MaxDelay - output));
         var pathMin = fast.AtCorner(Time.Max(Time.Zero, path.MinDelay - output));
-        var available = AvailableTime(model, atSlow.Launch.Register, atSlow.Capture.Register);
         var period = atSlow.Capture.Clock.Period;
         return new RegisterPathCheck(atSlow.Launch.ClockToOutput, atFast.Launch.ClockToOutputMin, pathMax, pathMin, atSlow.Capture.Setup,
             atFast.Capture.Hold, available, period);
@@ -253,7 +264,7 @@ public sealed class RegisterPathCheck
     // counts as early); on opposite edges the next capturing edge after the launch (a half-cycle path). Between
     // different root clocks the clocks' offsets are deliberate: the next capturing edge after the launch, the
     // shortest over the launching edges of their common cycle.
-    private static Time AvailableTime(LatchModel model, Register launch, Register capture)
+    internal static Time AvailableTime(LatchModel model, Register launch, Register capture)
     {
         var launchEdges = model.WindowOf(launch.Slave.Phase);
         var captureEdges = model.WindowOf(capture.Slave.Phase);
