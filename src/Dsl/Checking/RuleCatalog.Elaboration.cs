@@ -52,7 +52,7 @@ public static partial class RuleCatalog
             + "(budget {3}): the {4} paths from the first {5} of {6} latches are checked, the paths from '{1}' and the {7} "
             + "latches after it are not",
         description: "Each latch's fan-out cone is searched up to the next latches; a long chain of logic through many "
-            + "latches (a ripple counter, a shift chain with a shared carry) has a path for every pair of latches, so the "
+            + "latches (a ripple counter, a chain of gates folding many latched bits) has a path for every pair of latches, so the "
             + "search grows with the square of the chain. A budget of steps bounds it. Past it, the rules that read the "
             + "paths (PW1001 to PW1004, PW4001 to PW4003 and PW4005) check only the paths listed. Raise "
             + "phaseward.latch_path_search_budget if the design is merely large.");

@@ -18,8 +18,8 @@ public sealed class RulePolicy
     /// <summary>
     /// The default of <see cref="LatchPathSearchBudget"/>: 5,000,000 steps. The benchmark's 10^6-device design takes
     /// 1.85 million (about 12 a path), so a design of that style at the compile-time device budget (2 million devices)
-    /// fits with room to spare; a ripple chain, whose paths grow with the square of its length (3 steps a path), stops
-    /// at about 1.7 million paths, about 1,800 registers (BENCHMARKS.md, "Latch paths").
+    /// fits with room to spare. A ripple chain, whose paths grow with the square of its length (about 3 steps a path),
+    /// stops at about 1.7 million paths: a chain longer than about 1,800 registers has more (BENCHMARKS.md, "Latch paths").
     /// </summary>
     public const long DefaultLatchPathSearchBudget = 5_000_000;
 

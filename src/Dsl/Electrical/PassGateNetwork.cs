@@ -35,8 +35,8 @@ namespace Phaseward.Electrical;
 /// <para>Choosing the heaviest set of mutually non-exclusive branches is done greedily (heaviest first); it is exact
 /// when exclusive pairs form disjoint groups (one-hot groups, complementary pairs), the usual case. Nets feeding more
 /// than <see cref="MaxBranchesCompared"/> pass gates count them all; their figure is an assumption unless one stated
-/// exclusive group holds all their data controls (checked in one pass, not pair by pair). A net reached twice from the same net along
-/// different pass paths (a diamond) is counted on each path, which keeps the delay pessimistic.</para>
+/// exclusive group holds all their data controls (checked in one pass, not pair by pair). A net reached twice from the
+/// same net along different pass paths (a diamond) is counted on each path, which keeps the delay pessimistic.</para>
 /// </remarks>
 internal sealed class PassGateNetwork
 {
@@ -337,7 +337,8 @@ internal sealed class PassGateNetwork
                 controls.Add(control);
         }
 
-        assumes |= HasUnknownPair(controls);
+        if (!assumes)
+            assumes = HasUnknownPair(controls);
         return total;
     }
 
