@@ -333,8 +333,8 @@ internal sealed class PassGateNetwork
             if (!keep) continue;
             counted.Add(gate);
             total += farads;
-            if (gate.DataControl is { } control && controlSeen.Add(control))
-                controls.Add(control);
+            if (!assumes && gate.DataControl is { } control && controlSeen.Add(control))
+                controls.Add(control); // once the figure is an assumption, the controls need not be collected
         }
 
         if (!assumes)

@@ -124,7 +124,8 @@ public sealed class FightingDriversRule : Rule
     // no two conduct together. Known in one pass, where comparing every pair would cost the square of a wide bus.
     private static bool IsOneHotBus(Netlist netlist, List<Device> drivers)
     {
-        if (drivers.Count < 3)
+        // Only a stated group proves it: with none (most designs) nothing is allocated on this per-net path.
+        if (drivers.Count < 3 || netlist.ExclusiveGroups.Count == 0)
             return false;
         var controls = new List<Net>(drivers.Count);
         var distinct = new HashSet<Net>();
