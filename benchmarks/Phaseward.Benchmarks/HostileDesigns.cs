@@ -17,6 +17,7 @@ internal sealed class HostileDesign : Design
         ("register-file", "n static registers written from one shared data net"),
         ("one-hot-bus", "n pass gates onto one bus, their selects stated exclusive in one group"),
         ("gated-clocks", "n clock gates on one clock, each clocking a dynamic latch from one shared data net"),
+        ("shared-stall", "n/2 clock gates whose enables all take one stall signal made by a chain of n/2 stages from one latch"),
         ("mux-tree", "a binary pass-gate mux tree of n inputs, restored every third level"),
         ("shift-chain", "n static latches in series on alternate phases"),
         ("keeper-bus", "n write paths onto one kept node"),
@@ -63,6 +64,19 @@ internal sealed class HostileDesign : Design
                     for (var i = 0; i < n; i++)
                     {
                         var gated = c.ClockGate(clk, c.Input("en" + i), maxIdle: 1.Microseconds());
+                        c.Output("q" + i, c.DynamicLatch(d, gated.High, "l" + i));
+                    }
+
+                    break;
+                }
+            case "shared-stall":
+                {
+                    var stall = c.StaticLatch(c.Input("stall_request"), clk.Low, "stall_latch");
+                    for (var i = 0; i < n / 2; i++) stall = c.Inverter(stall);
+                    var d = c.Input("d");
+                    for (var i = 0; i < n / 2; i++)
+                    {
+                        var gated = c.ClockGate(clk, c.Nand(c.Input("want" + i), stall), maxIdle: 1.Microseconds());
                         c.Output("q" + i, c.DynamicLatch(d, gated.High, "l" + i));
                     }
 

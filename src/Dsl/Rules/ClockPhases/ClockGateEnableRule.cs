@@ -25,8 +25,9 @@ namespace Phaseward.Rules.ClockPhases;
 /// steady while the clock passes — is common practice for glitch-free clock gating. Windows are nominal edges on the
 /// design's time base, compared over the two clocks' common cycle; delays are first-order 0.69·R·C stages at the slow
 /// corner (<see cref="Process.SlowDelayFactor"/>: the latest change is the one that reaches into the passing phase). One
-/// finding per gate (the first storage that breaks the condition), at the gate's call. The search of each gate's
-/// enable stops at storage and inputs: its cost is the enable's fan-in logic.
+/// finding per gate, at the gate's call: of each phase's latches the one whose data changes the enable latest
+/// (<see cref="EnableOrigins"/>), the first in latch order that breaks the condition, else the first primary input.
+/// Each net's origins are found once for all the enables that share it: the cost is the enables' fan-in logic.
 /// </remarks>
 public sealed class ClockGateEnableRule : Rule
 {
@@ -41,6 +42,7 @@ public sealed class ClockGateEnableRule : Rule
         var netlist = context.Netlist;
         LatchModel? model = null;
         Dictionary<int, Time>? borrow = null;
+        EnableOrigins? origins = null;
         foreach (var gate in netlist.Clocks)
         {
             context.CancellationToken.ThrowIfCancellationRequested();
@@ -48,8 +50,10 @@ public sealed class ClockGateEnableRule : Rule
                 continue;
 
             model ??= context.LatchModel;
+            // The latches' timing for the whole design: computed only once an enable comes from a latch.
+            origins ??= new EnableOrigins(netlist, model, latch => (borrow ??= BorrowByLatch(model)).TryGetValue(latch.Index, out var late) ? late : Time.Zero);
             var passes = PassInterval(gate, source);
-            foreach (var origin in EnableOrigins.Of(netlist, model, enable))
+            foreach (var origin in origins.Of(enable))
             {
                 string changes;
                 TimeInterval? change = null;
@@ -64,8 +68,7 @@ public sealed class ClockGateEnableRule : Rule
                     else
                     {
                         var opens = PhaseWindow.Of(phase).Opens;
-                        borrow ??= BorrowByLatch(model); // the whole design's latch timing: only once an enable comes from a latch
-                        borrow.TryGetValue(latch.Index, out var late);
+                        borrow!.TryGetValue(latch.Index, out var late);
                         var slow = netlist.Process.SlowDelayFactor;
                         var until = opens + late + (model.EntryDelay(latch) + origin.Delay) * slow;
                         change = new TimeInterval(opens, until);
@@ -174,94 +177,4 @@ public sealed class ClockGateEnableRule : Rule
     private static string Interval(TimeInterval interval) => $"[{interval.Start}, {interval.End})";
 
     private static string Format(string format, params object[] arguments) => string.Format(CultureInfo.InvariantCulture, format, arguments);
-}
-
-/// <summary>Where a clock gate's enable comes from: a latch (with the slowest path from its storage) or a primary input.</summary>
-internal sealed class EnableOrigin
-{
-    public EnableOrigin(Latch latch, Time delay)
-    {
-        Latch = latch;
-        Delay = delay;
-    }
-
-    public EnableOrigin(Net input, SourceSpan span)
-    {
-        Input = input;
-        InputSpan = span;
-    }
-
-    public Latch? Latch { get; }
-
-    /// <summary>The slowest path from the latch's storage node to the enable (its output stage included).</summary>
-    public Time Delay { get; }
-
-    public Net? Input { get; }
-
-    public SourceSpan? InputSpan { get; }
-}
-
-/// <summary>The backward search from an enable to its storage and inputs.</summary>
-internal static class EnableOrigins
-{
-    public static List<EnableOrigin> Of(Netlist netlist, LatchModel model, Net enable)
-    {
-        // Longest delay from each net back to the enable, relaxed over the fan-in logic; a net is searched again only
-        // when a slower path to it is found, and never more than a few times (a combinational loop ends there).
-        var delay = new Dictionary<Net, double> { [enable] = 0 };
-        var visits = new Dictionary<Net, int>();
-        var work = new Stack<Net>();
-        work.Push(enable);
-        var latches = new Dictionary<Latch, double>();
-        var inputs = new List<Net>();
-        var inputSeen = new HashSet<Net>();
-        while (work.Count > 0)
-        {
-            var net = work.Pop();
-            visits.TryGetValue(net, out var seen);
-            if (seen >= 4) continue;
-            visits[net] = seen + 1;
-            var d = delay[net];
-            if (netlist.IsInput(net))
-            {
-                if (inputSeen.Add(net)) inputs.Add(net);
-                continue;
-            }
-
-            foreach (var driver in netlist.DriverList(net))
-            {
-                if (driver.IsWeak) continue;
-                if (driver.IsPassDevice && driver.ClockControl is not null)
-                {
-                    if (model.LatchEnteredBy(driver) is { } latch && (!latches.TryGetValue(latch, out var known) || d > known))
-                        latches[latch] = d;
-                    continue;
-                }
-
-                var next = d + FirstOrderDelay.Of(netlist, driver).Seconds;
-                foreach (var input in driver.Inputs)
-                    Relax(input, next);
-                if (driver.DataControl is { } control)
-                    Relax(control, next);
-            }
-        }
-
-        var origins = new List<EnableOrigin>();
-        foreach (var pair in latches)
-            origins.Add(new EnableOrigin(pair.Key, new Time(pair.Value)));
-        origins.Sort((a, b) => a.Latch!.Index.CompareTo(b.Latch!.Index));
-        foreach (var input in inputs)
-            origins.Add(new EnableOrigin(input, SpanOfInput(netlist, input)));
-        return origins;
-
-        void Relax(Net net, double value)
-        {
-            if (delay.TryGetValue(net, out var known) && known >= value)
-                return;
-            delay[net] = value;
-            work.Push(net);
-        }
-    }
-
-    private static SourceSpan SpanOfInput(Netlist netlist, Net input) => netlist.InputPortOf(input)?.Span ?? SourceSpan.Unknown;
 }
