@@ -180,10 +180,13 @@ public class HostileDesignTests
     [InlineData("Generic.Defaults")]
     [InlineData("Generic.PerTypeStatics")]
     [InlineData("Generic.MadeInGenericCode")]
+    [InlineData("Generic.NestedStatics")]
     public void GenericCodeRunsWithItsTypeArguments(string design)
     {
         // default(T), 'is T' and 'as T' with what T stands for in the call (before: default(T) was null for T = int);
-        // a generic type's statics per constructed type (before: Slot<int> and Slot<string> shared one Count).
+        // a generic type's statics per constructed type (before: Slot<int> and Slot<string> shared one Count), and a
+        // type nested in a generic type's too, with its initializers seeing the outer type argument (before:
+        // Outer<int>.Inner and Outer<long>.Inner shared one N, silently, and default(T) there was PW9001).
         var designs = new InMemoryDesigns(("/hostile/Generic.cs", """
             using System.Collections.Generic;
             using Phaseward;
@@ -225,6 +228,31 @@ public class HostileDesignTests
                         Slot<string>.Put("s");
                         var n = Slot<int>.Count + Slot<string>.Count * 100 + Slot<long>.Count * 10000;
                         c.Inverter(c.Input("a"), "n" + n + Slot<int>.Last + Slot<string>.Last + Slot<double>.Last);
+                    }
+                }
+
+                public static class Outer<T>
+                {
+                    public static class Inner { public static int N; public static readonly int Made = default(T) is null ? 3 : 5; }
+                    public sealed class Tally<U> { public static int Count; public static void Add() => Count += Outer<U>.Inner.Made; }
+                    public static void Bump() => Inner.N += 7;
+                }
+
+                public sealed class NestedStatics : Design
+                {
+                    private static int Through<T>() { Outer<T>.Inner.N++; return Outer<T>.Inner.N; }
+
+                    protected override void Describe(Circuit c)
+                    {
+                        Outer<int>.Inner.N = 2;
+                        Outer<long>.Inner.N = 3;
+                        Outer<int>.Bump();
+                        Outer<int>.Tally<string>.Add();
+                        Outer<int>.Tally<string>.Add();
+                        Outer<long>.Tally<int>.Add();
+                        var n = $"{Outer<int>.Inner.N}_{Outer<long>.Inner.N}_{Outer<string>.Inner.N}_{Through<int>()}_{Through<string>()}_"
+                            + $"{Outer<int>.Inner.Made}{Outer<string>.Inner.Made}_{Outer<int>.Tally<string>.Count}_{Outer<long>.Tally<int>.Count}_{Outer<int>.Tally<int>.Count}";
+                        c.Inverter(c.Input("a"), "n" + n);
                     }
                 }
 
@@ -525,6 +553,67 @@ public class HostileDesignTests
             """);
         await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source, NotElaborated(0, "the equality of delegates made by the design",
             "C# compares a delegate's target and method, which the elaborator does not model")).RunAsync();
+    }
+
+    private const string NullTypes = """
+        public sealed class Cell { public string? Label; public Cell? Next; public int[]? Taps; public int Width => 4; public int Self() => 5; }
+        public static class Fragile { public static readonly int Stages; static Fragile() { Stages = 2; throw new System.InvalidOperationException("no plan"); } }
+        """;
+
+    [Theory]
+    [InlineData("count = first.Next!.Self();")]
+    [InlineData("count = first.Next!.Width;")]
+    [InlineData("count = first.Next!.Label!.Length;")]
+    [InlineData("count = first.Taps![0];")]
+    [InlineData("count = first.Label!.Length;")]
+    [InlineData("count = first.Next!.Next!.Self();")]
+    public void AMemberReachedThroughNullThrowsWhatTheDesignCatches(string access)
+    {
+        // C# throws a NullReferenceException there. Before: the call ran on the design object itself (count 5, a wrong
+        // chain, silently), and a field read through null was PW9001 as if the object were not the design's.
+        var designs = new InMemoryDesigns(("/hostile/D.cs", Plain(Design($$"""
+            var first = new Cell();
+            try { {{access}} } catch (System.NullReferenceException) { count = 6; }
+            """, declarations: NullTypes))));
+        ParityTests.AssertParity(designs, "Hostile.D");
+        Assert.Equal(6, designs.CompileTime("Hostile.D").Netlist!.Devices.Count);
+    }
+
+    [Fact]
+    public async Task AMemberReachedThroughNullOutsideATryIsPW9003NamingIt()
+    {
+        var source = Design("""
+            var first = new Cell();
+            count = {|#0:first.Next!.Self()|};
+            """, declarations: NullTypes);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source, new DiagnosticResult(RuleCatalog.DesignThrows.Id, DiagnosticSeverity.Error)
+            .WithLocation(0).WithArguments("D", "'first.Next' is null, so the call to 'Cell.Self()' cannot be reached through it")).RunAsync();
+        AssertNoStage(source);
+    }
+
+    [Fact]
+    public void AStaticConstructorThatThrowsIsATypeInitializationExceptionAtEveryUse()
+    {
+        // C# wraps the exception in a TypeInitializationException and throws it again at every later use; the statics
+        // are never read. Before: PW9003 although the design catches it.
+        var designs = new InMemoryDesigns(("/hostile/D.cs", Plain(Design("""
+            try { count = Fragile.Stages; } catch (System.TypeInitializationException) { count = 4; }
+            try { count += Fragile.Stages; } catch (System.TypeInitializationException e) when (e.InnerException is System.InvalidOperationException) { count += 3; }
+            """, declarations: NullTypes))));
+        ParityTests.AssertParity(designs, "Hostile.D");
+        Assert.Equal(7, designs.CompileTime("Hostile.D").Netlist!.Devices.Count);
+    }
+
+    [Fact]
+    public async Task ATypeWhoseInitializationFailedIsPW9003WhenUsedAgainOutsideATry()
+    {
+        var source = Design("""
+            try { count = Fragile.Stages; } catch (System.TypeInitializationException) { count = 4; }
+            count = {|#0:Fragile.Stages|};
+            """, declarations: NullTypes);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source, new DiagnosticResult(RuleCatalog.DesignThrows.Id, DiagnosticSeverity.Error)
+            .WithLocation(0).WithArguments("D", "The type initializer for 'Hostile.Fragile' threw an exception.")).RunAsync();
+        AssertNoStage(source);
     }
 
     private static DiagnosticResult NotElaborated(int location, string what, string why)

@@ -182,7 +182,7 @@ internal sealed partial class Interpreter
             if (IsAutoProperty(property))
             {
                 NoteStoreInto(property.IsStatic ? null : interpretedObject);
-                return StoragePlace.Of(property.IsStatic ? StaticVariable(property, frame) : interpretedObject!.GetOrAdd(property));
+                return StoragePlace.Of(property.IsStatic ? StaticVariable(property, frame, reference.Syntax) : interpretedObject!.GetOrAdd(property));
             }
 
             if (property.SetMethod is { } setter && session.IsInSource(setter))

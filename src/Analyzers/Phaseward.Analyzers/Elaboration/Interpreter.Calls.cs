@@ -21,6 +21,9 @@ internal sealed partial class Interpreter
         var method = invocation.TargetMethod;
         var receiver = invocation.Instance is null ? null : Evaluate(invocation.Instance, frame);
         if (Unknown.Is(receiver)) return receiver;
+        // An instance method called through null throws in C#; it must never run on the frame's own object instead.
+        if (receiver is null && !method.IsStatic && ThroughReference(invocation.Instance) is { } nullReceiver)
+            return NullReference(invocation, nullReceiver, "the call to " + Describe(method));
 
         if (receiver is Circuit circuit && method.Name == nameof(Circuit.Place) && ClrTypes.IsDsl(method))
             return PlaceBlock(invocation, circuit, frame);
@@ -155,7 +158,7 @@ internal sealed partial class Interpreter
         }
         catch (TargetInvocationException e) when (e.InnerException is { } inner && inner is not OperationCanceledException)
         {
-            return RaiseLibraryException(site, inner);
+            return Raise(site.Syntax, inner);
         }
         catch (Exception e) when (e is ArgumentException or TargetParameterCountException or InvalidCastException or MemberAccessException or TargetException)
         {
@@ -446,7 +449,7 @@ internal sealed partial class Interpreter
                 if (field.Field.IsStatic)
                 {
                     NoteEffect();
-                    return StaticVariable(field.Field, frame);
+                    return StaticVariable(field.Field, frame, field.Syntax);
                 }
 
                 var owner = (field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame)) as InterpretedObject;

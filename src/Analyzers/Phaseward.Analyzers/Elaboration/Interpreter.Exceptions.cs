@@ -157,6 +157,30 @@ internal sealed partial class Interpreter
         return new InvalidOperationException(message);
     }
 
+    /// <summary>
+    /// An exception thrown for the design by a library member or by the runtime (a null dereference, a type whose
+    /// initialization failed): inside a try the design may catch it; outside, it is PW9003 and the value is unknown.
+    /// </summary>
+    private object? Raise(SyntaxNode site, Exception exception)
+    {
+        if (tryDepth > 0)
+            throw new DesignException(exception, site);
+        Throws(site, exception.Message);
+        return Unknown.Value;
+    }
+
+    /// <summary>
+    /// A member reached through an expression that is null: C# throws a NullReferenceException there. Inside a try the
+    /// design may catch it; outside it is PW9003 naming the expression and the member. Never a read of some other
+    /// object, nor a guessed value.
+    /// </summary>
+    private object? NullReference(IOperation site, IOperation receiver, string member)
+        => Raise(site.Syntax, new NullReferenceException($"'{receiver.Syntax}' is null, so {member} cannot be reached through it"));
+
+    // The receiver when it is of a reference type, so that null there is a null reference (a null Nullable<T> is a
+    // value: x.HasValue); else null.
+    private static IOperation? ThroughReference(IOperation? receiver) => receiver?.Type is { IsReferenceType: true } ? receiver : null;
+
     private static string DescribeThrow(IThrowOperation thrown, object? value)
     {
         if (value is Exception exception)

@@ -155,15 +155,6 @@ internal sealed partial class Interpreter
     private static TupleValue ValueTupleFromClr(object value, Type type)
         => new(type.GetFields().OrderBy(f => f.Name, StringComparer.Ordinal).Take(7).Select(f => FromClr(f.GetValue(value))).ToArray());
 
-    /// <summary>A library member threw: inside a try the design may catch it; outside, it is PW9003 and the value is unknown.</summary>
-    private object? RaiseLibraryException(IOperation site, Exception exception)
-    {
-        if (tryDepth > 0)
-            throw new DesignException(exception, site.Syntax);
-        Throws(site.Syntax, exception.Message);
-        return Unknown.Value;
-    }
-
     // ---- library members other than calls ----
 
     private object? ReadLibraryProperty(IPropertyReferenceOperation reference, IPropertySymbol property, object? receiver, Frame frame)
@@ -172,7 +163,7 @@ internal sealed partial class Interpreter
         {
             if (property.Name == "HasValue") return receiver is not null;
             if (property.Name == "Value")
-                return receiver ?? RaiseLibraryException(reference, new InvalidOperationException("Nullable object must have a value."));
+                return receiver ?? Raise(reference.Syntax, new InvalidOperationException("Nullable object must have a value."));
         }
 
         if (property.GetMethod is not { } getter)

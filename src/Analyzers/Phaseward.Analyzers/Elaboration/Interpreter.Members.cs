@@ -40,10 +40,12 @@ internal sealed partial class Interpreter
             return Unsupported(field, "field " + Describe(symbol), "only fields declared in this compilation or the Phaseward DSL are read");
 
         if (symbol.IsStatic)
-            return StaticVariable(symbol, frame).Value;
+            return StaticVariable(symbol, frame, field.Syntax).Value;
 
         var owner = field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame);
         if (Unknown.Is(owner)) return owner;
+        if (owner is null && ThroughReference(field.Instance) is { } nullOwner)
+            return NullReference(field, nullOwner, "field " + Describe(symbol));
         if (owner is InterpretedObject instance && instance.Find(symbol) is { } stored)
             return stored.Value;
         return Unsupported(field, "field " + Describe(symbol), owner is InterpretedObject
@@ -64,6 +66,8 @@ internal sealed partial class Interpreter
         var property = reference.Property;
         var receiver = reference.Instance is null ? null : Evaluate(reference.Instance, frame);
         if (Unknown.Is(receiver)) return receiver;
+        if (receiver is null && !property.IsStatic && ThroughReference(reference.Instance) is { } nullReceiver)
+            return NullReference(reference, nullReceiver, "property " + Describe(property));
 
         switch (receiver)
         {
@@ -85,7 +89,7 @@ internal sealed partial class Interpreter
         if (session.IsInSource(property))
         {
             if (property.IsStatic)
-                return IsAutoProperty(property) ? StaticVariable(property, frame).Value : CallGetter(reference, property, null, frame);
+                return IsAutoProperty(property) ? StaticVariable(property, frame, reference.Syntax).Value : CallGetter(reference, property, null, frame);
             return Unsupported(reference, "property " + Describe(property), "only properties of the design and static properties are elaborated");
         }
 
@@ -150,7 +154,7 @@ internal sealed partial class Interpreter
     /// A generic type has static storage per constructed type (<c>Holder&lt;int&gt;.Value</c> is not
     /// <c>Holder&lt;long&gt;.Value</c>): inside its own code, its type parameters are resolved through the frame.
     /// </remarks>
-    private Variable StaticVariable(ISymbol member, Frame frame)
+    private Variable StaticVariable(ISymbol member, Frame frame, SyntaxNode site)
     {
         var type = member.ContainingType is { } containing ? StaticOwner(containing, frame) : null;
         var key = type is null || SymbolEqualityComparer.Default.Equals(type, type.OriginalDefinition)
@@ -159,7 +163,16 @@ internal sealed partial class Interpreter
         if (statics.TryGetValue(key, out var variable))
             return variable;
         if (type is not null)
+        {
             InitializeStatics(type);
+            // A type whose initialization threw throws again at every use, as in C#; its statics are never read.
+            if (failedTypes.TryGetValue(type, out var failure))
+            {
+                Raise(site, TypeInitializationFailure(type, failure));
+                return new Variable(Unknown.Value);
+            }
+        }
+
         if (!statics.TryGetValue(key, out variable))
             statics[key] = variable = new Variable(DefaultOf(key is IFieldSymbol f ? f.Type : ((IPropertySymbol)key).Type));
         return variable;
@@ -167,16 +180,31 @@ internal sealed partial class Interpreter
 
     /// <summary>The type whose static storage a member lives in: its generic definition's type arguments resolved, else the definition.</summary>
     private static INamedTypeSymbol StaticOwner(INamedTypeSymbol type, Frame frame)
-        => !type.IsGenericType || type.ContainingType is not null ? type.OriginalDefinition : ConstructedIn(type, frame) ?? type.OriginalDefinition;
+        => !type.IsGenericType ? type.OriginalDefinition : ConstructedIn(type, frame) ?? type.OriginalDefinition;
 
     /// <summary>
-    /// A generic type (not nested) with the type parameters among its type arguments resolved through the frame
-    /// (<c>Box&lt;T&gt;</c> in a call with T = int is <c>Box&lt;int&gt;</c>); null when one is not known there.
+    /// A generic type with the type parameters among its and its containing types' type arguments resolved through the
+    /// frame (<c>Box&lt;T&gt;</c> in a call with T = int is <c>Box&lt;int&gt;</c>, and <c>Outer&lt;T&gt;.Inner</c> is
+    /// <c>Outer&lt;int&gt;.Inner</c>: a type nested in a generic type has its own statics per construction too);
+    /// null when one is not known there.
     /// </summary>
     private static INamedTypeSymbol? ConstructedIn(INamedTypeSymbol type, Frame frame)
     {
-        if (!type.IsGenericType || type.ContainingType is not null || !type.TypeArguments.Any(a => a is ITypeParameterSymbol))
+        if (!HasOpenTypeArguments(type))
             return type;
+        var resolved = type.OriginalDefinition;
+        if (type.ContainingType is { IsGenericType: true } containing)
+        {
+            if (ConstructedIn(containing, frame) is not { } outer)
+                return null;
+            resolved = outer.GetTypeMembers(type.Name, type.Arity)
+                .FirstOrDefault(t => SymbolEqualityComparer.Default.Equals(t.OriginalDefinition, type.OriginalDefinition));
+            if (resolved is null)
+                return null;
+        }
+
+        if (type.Arity == 0)
+            return resolved;
         var arguments = new ITypeSymbol[type.TypeArguments.Length];
         for (var i = 0; i < arguments.Length; i++)
         {
@@ -185,7 +213,16 @@ internal sealed partial class Interpreter
                 return null;
         }
 
-        return type.OriginalDefinition.Construct(arguments);
+        return resolved.Construct(arguments);
+    }
+
+    // True when a type parameter stands among the type arguments of the type or of a type containing it.
+    private static bool HasOpenTypeArguments(INamedTypeSymbol type)
+    {
+        for (var current = type; current is not null; current = current.ContainingType)
+            if (current.TypeArguments.Any(a => a is ITypeParameterSymbol))
+                return true;
+        return false;
     }
 
     private void InitializeStatics(INamedTypeSymbol type)
@@ -209,30 +246,53 @@ internal sealed partial class Interpreter
         }
 
         // The initializers and the static constructor see the type's own type arguments (default(T), Holder<T>.Value).
-        var typeArguments = SymbolEqualityComparer.Default.Equals(type, type.OriginalDefinition) ? null
-            : type.OriginalDefinition.TypeParameters.Zip(type.TypeArguments, (p, a) => (p, a))
-                .ToDictionary(pair => pair.p, pair => pair.a, (IEqualityComparer<ITypeParameterSymbol>)SymbolEqualityComparer.Default);
-        var frame = new Frame(null, null, null) { TypeArguments = typeArguments };
-        foreach (var (member, variable) in storage)
-            if (InitializerOf(member) is { } initializer)
-                variable.Value = Evaluate(initializer, frame);
-
-        foreach (var constructor in type.StaticConstructors)
+        // A nested type sees its containing types' type arguments as well.
+        Dictionary<ITypeParameterSymbol, ITypeSymbol>? typeArguments = null;
+        for (var current = type; current is not null; current = current.ContainingType)
         {
-            var syntax = constructor.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken);
-            if (syntax is not ConstructorDeclarationSyntax declaration)
+            if (SymbolEqualityComparer.Default.Equals(current, current.OriginalDefinition))
                 continue;
-            if (ModelOf(declaration).GetOperation(declaration, cancellationToken) is not IConstructorBodyOperation body)
-            {
-                Unsupported(declaration, "the static constructor of " + Describe(type), "its body could not be read");
-                continue;
-            }
+            var parameters = current.OriginalDefinition.TypeParameters;
+            for (var i = 0; i < parameters.Length && i < current.TypeArguments.Length; i++)
+                (typeArguments ??= new(SymbolEqualityComparer.Default))[parameters[i]] = current.TypeArguments[i];
+        }
 
-            var statements = (IOperation?)body.BlockBody ?? body.ExpressionBody;
-            if (statements is not null)
-                Execute(statements, new Frame(constructor, null, null) { TypeArguments = typeArguments });
+        // An exception the design catches (the first use was inside a try) leaves the type failed: C# wraps it in a
+        // TypeInitializationException, and every later use throws that again.
+        try
+        {
+            var frame = new Frame(null, null, null) { TypeArguments = typeArguments };
+            foreach (var (member, variable) in storage)
+                if (InitializerOf(member) is { } initializer)
+                    variable.Value = Evaluate(initializer, frame);
+
+            foreach (var constructor in type.StaticConstructors)
+            {
+                var syntax = constructor.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken);
+                if (syntax is not ConstructorDeclarationSyntax declaration)
+                    continue;
+                if (ModelOf(declaration).GetOperation(declaration, cancellationToken) is not IConstructorBodyOperation body)
+                {
+                    Unsupported(declaration, "the static constructor of " + Describe(type), "its body could not be read");
+                    continue;
+                }
+
+                var statements = (IOperation?)body.BlockBody ?? body.ExpressionBody;
+                if (statements is not null)
+                    Execute(statements, new Frame(constructor, null, null) { TypeArguments = typeArguments });
+            }
+        }
+        catch (DesignException e)
+        {
+            foreach (var (member, _) in storage)
+                statics.Remove(SymbolEqualityComparer.Default.Equals(type, type.OriginalDefinition) ? member.OriginalDefinition : member);
+            failedTypes[type] = e.Thrown as Exception;
+            throw new DesignException(TypeInitializationFailure(type, e.Thrown as Exception), e.Site);
         }
     }
+
+    private static TypeInitializationException TypeInitializationFailure(INamedTypeSymbol type, Exception? inner)
+        => new(type.ToDisplayString(), inner);
 
     /// <summary>The value operation of a field's or property's initializer (<c>= value</c>), if it has one.</summary>
     private IOperation? InitializerOf(ISymbol member)
@@ -262,6 +322,8 @@ internal sealed partial class Interpreter
             return Unsupported(element, "a multi-dimensional array", "only one-dimensional arrays are elaborated");
         var index = Evaluate(element.Indices[0], frame);
         if (Unknown.Is(index)) return index;
+        if (array is null)
+            return NullReference(element, element.ArrayReference, "an element");
         if (array is not object?[] items)
             return Unsupported(element, "this array", "it does not come from the design's code");
         if (index is IndexValue or RangeValue)

@@ -53,7 +53,7 @@ internal sealed partial class Interpreter
             }
             catch (ArithmeticException e)
             {
-                return RaiseLibraryException(binary, e);
+                return Raise(binary.Syntax, e);
             }
         }
 

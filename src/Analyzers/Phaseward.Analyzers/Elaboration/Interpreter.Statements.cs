@@ -196,9 +196,9 @@ internal sealed partial class Interpreter
         ILocalReferenceOperation local => frame.Find(local.Local),
         IParameterReferenceOperation parameter => frame.Find(parameter.Parameter) ?? frame.Instance?.Find(parameter.Parameter),
         IFieldReferenceOperation { Field.IsStatic: false, Instance: null or IInstanceReferenceOperation } field => frame.Instance?.Find(field.Field),
-        IFieldReferenceOperation { Field.IsStatic: true } field when session.IsInSource(field.Field) => StaticVariable(field.Field, frame),
+        IFieldReferenceOperation { Field.IsStatic: true } field when session.IsInSource(field.Field) => StaticVariable(field.Field, frame, field.Syntax),
         IPropertyReferenceOperation { Property.IsStatic: true } property when session.IsInSource(property.Property) && IsAutoProperty(property.Property)
-            => StaticVariable(property.Property, frame),
+            => StaticVariable(property.Property, frame, property.Syntax),
         IPropertyReferenceOperation { Property.IsStatic: false, Instance: null or IInstanceReferenceOperation } property => frame.Instance?.Find(property.Property),
         _ => null,
     };

@@ -59,6 +59,8 @@ internal sealed partial class Interpreter
 
     // Types whose static initializers and static constructor have run (C# runs them once).
     private readonly HashSet<INamedTypeSymbol> initializedTypes = new(SymbolEqualityComparer.Default);
+    // Types whose static initialization threw, with the exception it threw when that is a library one.
+    private readonly Dictionary<INamedTypeSymbol, Exception?> failedTypes = new(SymbolEqualityComparer.Default);
 
     // The structs of the design's source whose default value is being made (see DefaultStruct).
     private readonly HashSet<INamedTypeSymbol> structsBeingDefaulted = new(SymbolEqualityComparer.Default);
@@ -173,6 +175,7 @@ internal sealed partial class Interpreter
             {
                 statics.Clear();
                 initializedTypes.Clear();
+                failedTypes.Clear();
             }
 
             silent = value;
