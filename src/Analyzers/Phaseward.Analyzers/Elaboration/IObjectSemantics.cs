@@ -1,6 +1,6 @@
 namespace Phaseward.Analyzers.Elaboration;
 
-/// <summary>What ToString, Equals and GetHashCode mean for an interpreted object (answered by the interpreter).</summary>
+/// <summary>What ToString, Equals, GetHashCode and CompareTo mean for an interpreted object (answered by the interpreter).</summary>
 internal interface IObjectSemantics
 {
     string TextOf(InterpretedObject value);
@@ -8,4 +8,6 @@ internal interface IObjectSemantics
     bool AreEqual(InterpretedObject value, object? other);
 
     int HashOf(InterpretedObject value);
+
+    int CompareOf(InterpretedObject value, object? other);
 }

@@ -9,10 +9,11 @@ namespace Phaseward.Analyzers.Elaboration;
 /// auto-properties, and the parameters of a primary constructor (which C# lets the whole class read).
 /// </summary>
 /// <remarks>
-/// Library code run natively (string.Join, a Dictionary key, Distinct) may call ToString, Equals or GetHashCode on it:
+/// Library code run natively (string.Join, a Dictionary key, Distinct, Sort, Max) may call ToString, Equals, GetHashCode or
+/// CompareTo on it:
 /// those go back to the interpreter (the design's override, or a record's generated member), never to native code.
 /// </remarks>
-internal sealed class InterpretedObject
+internal sealed class InterpretedObject : System.IComparable
 {
     // Serials issued so far, by every interpreter (objects made later have larger serials).
     private static long serials;
@@ -67,4 +68,7 @@ internal sealed class InterpretedObject
     public override bool Equals(object? obj) => Semantics.AreEqual(this, obj);
 
     public override int GetHashCode() => Semantics.HashOf(this);
+
+    /// <inheritdoc/>
+    public int CompareTo(object? obj) => Semantics.CompareOf(this, obj);
 }

@@ -164,6 +164,11 @@ internal sealed partial class Interpreter
         var property = reference.Property;
         var receiver = reference.Instance is null ? null : Evaluate(reference.Instance, frame);
         if (Unknown.Is(receiver)) return default;
+        if (receiver is null && !property.IsStatic && ThroughReference(reference.Instance) is { } nullReceiver)
+        {
+            NullReference(reference, nullReceiver, "property " + Describe(property));
+            return default;
+        }
 
         if (receiver is List<object?> list && property.IsIndexer)
         {
@@ -186,8 +191,21 @@ internal sealed partial class Interpreter
             }
 
             if (property.SetMethod is { } setter && session.IsInSource(setter))
-                return new StoragePlace(() => CallGetter(reference, property, interpretedObject, frame),
-                    v => InvokeUser(setter, interpretedObject, new[] { v }, new Variable?[1], reference, frame));
+            {
+                // An indexer's setter takes its index arguments, then the value. They are evaluated once, for both the
+                // read and the write of a compound assignment (b[i++] += 1), as in C#.
+                var (setterArguments, _) = Arguments(reference.Arguments, setter, frame, keepUnknown: true);
+                return new StoragePlace(
+                    () => property.GetMethod is { } getter
+                        ? InvokeUser(getter, interpretedObject, setterArguments!.Take(getter.Parameters.Length).ToArray(), new Variable?[getter.Parameters.Length], reference, frame)
+                        : CallGetter(reference, property, interpretedObject, frame),
+                    v =>
+                    {
+                        var values = (object?[])setterArguments!.Clone();
+                        values[values.Length - 1] = v;
+                        InvokeUser(setter, interpretedObject, values, new Variable?[values.Length], reference, frame);
+                    });
+            }
         }
         else if (receiver is not null && !ClrTypes.IsDsl(property) && Library.IsPure(property) && property.SetMethod is { } librarySetter)
         {

@@ -66,6 +66,9 @@ internal sealed partial class Interpreter
         if (receiver is InterpretedObject self)
             return CallObjectMember(invocation, self, method, frame);
 
+        if (IsNullableMember(method))
+            return CallNullableMember(invocation, method, receiver, frame);
+
         if (!ClrTypes.IsDsl(method) && !Library.IsPure(method))
             return Unsupported(invocation, "the call to " + Describe(method),
                 "it is outside what compile-time elaboration runs (only the Phaseward DSL, methods of this compilation and pure library members such as string, Math, LINQ and the collections)");
@@ -452,7 +455,15 @@ internal sealed partial class Interpreter
                     return StaticVariable(field.Field, frame, field.Syntax);
                 }
 
-                var owner = (field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame)) as InterpretedObject;
+                var ownerValue = field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame);
+                if (ownerValue is null && ThroughReference(field.Instance) is { } nullOwner)
+                {
+                    // Nothing is stored: the write is made to a variable nobody reads, after the exception is raised.
+                    NullReference(field, nullOwner, "field " + Describe(field.Field));
+                    return new Variable(Unknown.Value);
+                }
+
+                var owner = ownerValue as InterpretedObject;
                 NoteStoreInto(owner);
                 return owner?.GetOrAdd(field.Field);
             default:

@@ -30,13 +30,19 @@ internal sealed partial class Interpreter
         Step(creation);
         // Built even when an argument is unknown: the fields that depend on it stay unknown, the others are known.
         var (arguments, _) = Arguments(creation.Arguments, constructor, frame, keepUnknown: true);
+        return Initialize(creation, MakeObject(creation, type, constructor, arguments!), frame);
+    }
+
+    // A new object of the design's type, its constructor run with the creation as the caller of what it reports.
+    private InterpretedObject MakeObject(IOperation creation, INamedTypeSymbol type, IMethodSymbol constructor, object?[] arguments)
+    {
         var made = NewObject(type);
         EnterCall(creation);
         var outerCallers = callers;
         PushCaller(creation.Syntax);
         try
         {
-            Construct(made, constructor, arguments!, creation);
+            Construct(made, constructor, arguments, creation);
         }
         finally
         {
@@ -44,7 +50,7 @@ internal sealed partial class Interpreter
             LeaveCall();
         }
 
-        return Initialize(creation, made, frame);
+        return made;
     }
 
     public void Construct(InterpretedObject instance, IMethodSymbol constructor, object?[] arguments, IOperation? site)

@@ -43,6 +43,22 @@ internal sealed partial class Interpreter
         return Initialize(creation, made, frame);
     }
 
+    /// <summary><c>new T()</c> in generic code: an object of the design's type T stands for, or a value type's default.</summary>
+    private object? VisitTypeParameterObjectCreation(ITypeParameterObjectCreationOperation creation, Frame frame)
+    {
+        var stands = creation.Type is ITypeParameterSymbol parameter ? frame.TypeArgumentOf(parameter) : null;
+        if (stands is null)
+            return Unsupported(creation, "new " + creation.Type, "the type argument it stands for is not known where the generic code is interpreted");
+        if (creation.Initializer is null && stands.IsValueType && !session.IsInSource(stands))
+            return DefaultOf(stands, frame);
+        if (creation.Initializer is not null || stands is not INamedTypeSymbol type || !session.IsInSource(type)
+            || type.InstanceConstructors.FirstOrDefault(c => c.Parameters.Length == 0) is not { } constructor)
+            return Unsupported(creation, "new " + creation.Type + " (here " + stands.ToDisplayString() + ")",
+                "only the design's own types, without an initializer, are made through a type parameter");
+        Step(creation);
+        return MakeObject(creation, type, constructor, System.Array.Empty<object?>());
+    }
+
     /// <summary>Runs an object or collection initializer (<c>{ P = v }</c>, <c>{ a, b }</c>) on a new object.</summary>
     private object? Initialize(IObjectCreationOperation creation, object made, Frame frame)
     {

@@ -127,6 +127,8 @@ internal sealed partial class Interpreter
             // ---- creation (Interpreter.Creation) ----
             case OperationKind.ObjectCreation:
                 return VisitObjectCreation((IObjectCreationOperation)operation, frame);
+            case OperationKind.TypeParameterObjectCreation:
+                return VisitTypeParameterObjectCreation((ITypeParameterObjectCreationOperation)operation, frame);
             case OperationKind.ArrayCreation:
                 return VisitArrayCreation((IArrayCreationOperation)operation, frame);
             case OperationKind.CollectionExpression:

@@ -157,9 +157,36 @@ internal sealed partial class Interpreter
 
     // ---- library members other than calls ----
 
+    private static bool IsNullableMember(ISymbol member) => ClrTypes.MetadataName(member.ContainingType.OriginalDefinition) == "System.Nullable`1";
+
+    /// <summary>
+    /// A method of a nullable value type. Its value is kept as the underlying value or null, so its methods are answered
+    /// here: GetValueOrDefault, Equals, GetHashCode and ToString, as Nullable&lt;T&gt; defines them.
+    /// </summary>
+    private object? CallNullableMember(IInvocationOperation invocation, IMethodSymbol method, object? receiver, Frame frame)
+    {
+        var (arguments, _) = Arguments(invocation.Arguments, method, frame);
+        if (arguments is null) return Unknown.Value;
+        switch (method.Name)
+        {
+            case "GetValueOrDefault" when arguments.Length == 0:
+                return receiver ?? DefaultOf(method.ContainingType.TypeArguments[0], frame);
+            case "GetValueOrDefault" when arguments.Length == 1:
+                return receiver ?? arguments[0];
+            case "Equals" when arguments.Length == 1:
+                return receiver is null ? arguments[0] is null : receiver.Equals(arguments[0]);
+            case "GetHashCode" when arguments.Length == 0:
+                return receiver?.GetHashCode() ?? 0;
+            case "ToString" when arguments.Length == 0:
+                return receiver is null ? "" : Arithmetic.Text(receiver);
+            default:
+                return Unsupported(invocation, "the call to " + Describe(method), "it is not a member of Nullable<T> the elaborator answers");
+        }
+    }
+
     private object? ReadLibraryProperty(IPropertyReferenceOperation reference, IPropertySymbol property, object? receiver, Frame frame)
     {
-        if (ClrTypes.MetadataName(property.ContainingType.OriginalDefinition) == "System.Nullable`1")
+        if (IsNullableMember(property))
         {
             if (property.Name == "HasValue") return receiver is not null;
             if (property.Name == "Value")

@@ -171,6 +171,13 @@ internal sealed partial class Interpreter
             return Completion.Normal;
         }
 
+        if (collection is null && ThroughReference(source) is { } nullSource)
+        {
+            NullReference(loop.Collection, nullSource, "its elements");
+            Poison(loop.Body, frame);
+            return Completion.Normal;
+        }
+
         IEnumerable? items = collection switch
         {
             object?[] array => array,

@@ -60,6 +60,34 @@ internal sealed partial class Interpreter : IObjectSemantics
         return combined;
     }
 
+    /// <summary>
+    /// The design's CompareTo, for library code that orders its objects (Sort, Max, OrderBy): its implementation of
+    /// IComparable&lt;T&gt; for the other object's type, else of IComparable. A type that implements neither cannot be
+    /// ordered, and the library throws as it does at run time.
+    /// </summary>
+    public int CompareOf(InterpretedObject value, object? other)
+    {
+        IMethodSymbol? compareTo = null;
+        foreach (var contract in value.Type.AllInterfaces)
+        {
+            var generic = ClrTypes.MetadataName(contract.OriginalDefinition) == "System.IComparable`1";
+            if (!generic && ClrTypes.MetadataName(contract) != "System.IComparable")
+                continue;
+            if (generic && other is InterpretedObject that && IsOfType(that, contract.TypeArguments[0], null) != true)
+                continue;
+            if (contract.GetMembers("CompareTo").FirstOrDefault() is IMethodSymbol member
+                && value.Type.FindImplementationForInterfaceMember(member) is IMethodSymbol implementation && session.IsInSource(implementation))
+            {
+                compareTo = implementation;
+                if (generic) break;
+            }
+        }
+
+        if (compareTo is null)
+            throw new ArgumentException($"'{value.Type.ToDisplayString()}' does not implement IComparable: its objects cannot be ordered.");
+        return InvokeForLibrary(compareTo, value, new[] { other }) is int order ? order : throw new UnknownValueException();
+    }
+
     /// <summary>Struct values are copied when stored or passed; everything else is shared by reference.</summary>
     private static object? CopyIfValue(object? value) => value is InterpretedObject { Type.IsValueType: true } structValue ? structValue.Copy() : value;
 

@@ -1,0 +1,137 @@
+namespace Phaseward.Analyzers.Tests.Elaboration;
+
+/// <summary>
+/// C# as programmers write it every day, each construct elaborated exactly as the compiled design runs it (the
+/// oracle: the design compiled and run by .NET, <see cref="ParityTests"/>). Before: an indexer's setter lost its value
+/// (PW9001), List.Sort and Max on the design's IComparable records were a false PW9003, <c>new T()</c> and
+/// <c>GetValueOrDefault</c> on a nullable were PW9001, and a write or foreach through null was PW9001 instead of the
+/// NullReferenceException the design catches. Multicast delegates and events stay PW9001 (docs/elaboration.md).
+/// </summary>
+public class EverydayCSharpTests
+{
+    [Theory]
+    [InlineData("Everyday.Operators")]
+    [InlineData("Everyday.Conversions")]
+    [InlineData("Everyday.StructCtor")]
+    [InlineData("Everyday.DefaultInterface")]
+    [InlineData("Everyday.FieldWriteNull")]
+    [InlineData("Everyday.ForeachNull")]
+    [InlineData("Everyday.StaticMethodCctor")]
+    [InlineData("Everyday.Formats")]
+    [InlineData("Everyday.Indexers")]
+    [InlineData("Everyday.InitRequired")]
+    [InlineData("Everyday.TupleSwap")]
+    [InlineData("Everyday.LinqGroup")]
+    [InlineData("Everyday.PropertyEffects")]
+    [InlineData("Everyday.CompareRecords")]
+    [InlineData("Everyday.DictOrder")]
+    [InlineData("Everyday.NullableStruct")]
+    [InlineData("Everyday.StringSwitch")]
+    [InlineData("Everyday.GenericConstraint")]
+    public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
+
+    private static readonly InMemoryDesigns Designs = new(("/everyday/Everyday.cs", """
+            using System;
+            using System.Linq;
+            using System.Collections.Generic;
+            using Phaseward;
+
+            namespace Everyday
+            {
+                public abstract class Base : Design { protected void Chain(Circuit c, int n, string p) { var x = c.Input(p + "in"); for (var i = 0; i < n; i++) x = c.Inverter(x, p + i); c.Output(p + "out", x); } }
+                public readonly record struct Width(int Bits) { public static Width operator +(Width a, Width b) => new(a.Bits + b.Bits); public static bool operator >(Width a, int b) => a.Bits > b; public static bool operator <(Width a, int b) => a.Bits < b; public static Width operator ++(Width a) => new(a.Bits + 1); }
+                public sealed class Operators : Base
+                {
+                    protected override void Describe(Circuit c) { var w = new Width(2) + new Width(3); w++; Chain(c, w > 5 ? w.Bits : 1, "o"); }
+                }
+                public sealed class Meters { public double V; public static implicit operator double(Meters m) => m.V; public static explicit operator Meters(double d) => new Meters { V = d * 2 }; }
+                public sealed class Conversions : Base
+                {
+                    protected override void Describe(Circuit c) { var m = (Meters)1.5; double d = m; Chain(c, (int)d, "cv"); }
+                }
+                public struct Counter { public int N; public Counter() { N = 4; } }
+                public sealed class StructCtor : Base
+                {
+                    protected override void Describe(Circuit c) { var a = new Counter(); var b = default(Counter); var arr = new Counter[2]; Chain(c, a.N + b.N + arr[1].N, "sc"); }
+                }
+                public interface IStage { int Count => 2; int Extra(); }
+                public sealed class Stage : IStage { public int Extra() => 3; }
+                public sealed class DefaultInterface : Base
+                {
+                    protected override void Describe(Circuit c) { IStage s = new Stage(); Chain(c, s.Count + s.Extra(), "di"); }
+                }
+                public sealed class Node { public int V; public Node? Next; }
+                public sealed class FieldWriteNull : Base
+                {
+                    protected override void Describe(Circuit c) { var n = new Node(); var k = 1; try { n.Next!.V = 5; k = 2; } catch (NullReferenceException) { k = 3; } Chain(c, k, "fw"); }
+                }
+                public sealed class ForeachNull : Base
+                {
+                    protected override void Describe(Circuit c) { List<int>? l = null; var k = 1; try { foreach (var i in l!) k += i; } catch (NullReferenceException) { k = 4; } Chain(c, k, "fn"); }
+                }
+                public static class Plan { public static int Made; static Plan() { Made = 3; } public static int Get() => Made + 1; }
+                public sealed class StaticMethodCctor : Base
+                {
+                    protected override void Describe(Circuit c) => Chain(c, Plan.Get(), "sm");
+                }
+                public sealed class Formats : Base
+                {
+                    protected override void Describe(Circuit c) { var x = 7; var s = $"{x:D3}_{3.14159:F2}_{x,5}_{0.5:P0}_{1234567:N0}_{x:X}"; c.Inverter(c.Input("a"), s.Replace(" ", "_").Replace(",", "c").Replace("%", "pc")); }
+                }
+                public sealed class Bank { private readonly int[] v = new int[4]; public int this[int i] { get => v[i]; set => v[i] = value * 2; } public int this[string k] => k.Length; }
+                public sealed class Indexers : Base
+                {
+                    protected override void Describe(Circuit c) { var b = new Bank(); b[1] = 2; b[1] += 1; Chain(c, b[1] + b["ab"], "ix"); }
+                }
+                public sealed class Spec { public required int Stages { get; init; } public string Tag { get; init; } = "t"; }
+                public sealed class InitRequired : Base
+                {
+                    protected override void Describe(Circuit c) { var s = new Spec { Stages = 3 }; Chain(c, s.Stages, s.Tag); }
+                }
+                public sealed class TupleSwap : Base
+                {
+                    protected override void Describe(Circuit c) { var (a, b) = (1, 4); (a, b) = (b, a); var arr = new[] { 5, 6 }; (arr[0], arr[1]) = (arr[1], arr[0]); Chain(c, a * 10 + b + arr[0], "ts"); }
+                }
+                public sealed class LinqGroup : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var words = new[] { "ab", "cd", "e", "fgh", "ij" };
+                        var g = words.GroupBy(w => w.Length).OrderByDescending(x => x.Count()).ThenBy(x => x.Key).Select(x => $"{x.Key}:{string.Join("", x)}").ToArray();
+                        var lookup = words.ToLookup(w => w[0] < 'f');
+                        var zipped = words.Zip(Enumerable.Range(1, 9), (w, i) => w + i).Aggregate((p, q) => p + q);
+                        c.Inverter(c.Input("a"), string.Join("_", g).Replace(":", "k") + lookup[true].Count() + zipped);
+                    }
+                }
+                public sealed class Tick { private int n; public int Next => ++n; }
+                public sealed class PropertyEffects : Base
+                {
+                    protected override void Describe(Circuit c) { var t = new Tick(); var s = t.Next + t.Next * 10; Chain(c, s % 9, "pe"); }
+                }
+                public record Part(string Name, int Size) : IComparable<Part> { public int CompareTo(Part? o) => Size.CompareTo(o!.Size); }
+                public sealed class CompareRecords : Base
+                {
+                    protected override void Describe(Circuit c) { var l = new List<Part> { new("a", 3), new("b", 1), new("c", 2) }; l.Sort(); var m = l.Max()!; c.Inverter(c.Input("a"), string.Concat(l.Select(p => p.Name)) + m.Name); }
+                }
+                public sealed class DictOrder : Base
+                {
+                    protected override void Describe(Circuit c) { var d = new Dictionary<string, int> { ["z"] = 1, ["a"] = 2 }; d.Remove("z"); d["m"] = 3; d["q"] = 4; var hs = new HashSet<int> { 5, 1, 9 }; hs.Remove(1); hs.Add(2); c.Inverter(c.Input("a"), string.Concat(d.Keys) + string.Concat(hs)); }
+                }
+                public sealed class NullableStruct : Base
+                {
+                    protected override void Describe(Circuit c) { int? a = null; int? b = 3; var s = (a ?? 1) + (b ?? 0) + (a.HasValue ? 10 : 0) + a.GetValueOrDefault(2) + (a + b ?? 5); Chain(c, s, "ns"); }
+                }
+                public sealed class StringSwitch : Base
+                {
+                    protected override void Describe(Circuit c) { var kind = "latch"; var n = kind switch { "reg" => 1, "latch" when kind.Length > 3 => 2, _ => 3 }; Chain(c, n, "ss"); }
+                }
+                public interface IShape { int Stages { get; } }
+                public sealed class Three : IShape { public int Stages => 3; }
+                public static class Build { public static int Of<T>() where T : IShape, new() => new T().Stages; }
+                public sealed class GenericConstraint : Base
+                {
+                    protected override void Describe(Circuit c) => Chain(c, Build.Of<Three>(), "gc");
+                }
+            }
+            """));
+}
