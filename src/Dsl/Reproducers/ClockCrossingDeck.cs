@@ -29,7 +29,7 @@ internal static class ClockCrossingDeck
         var entryA = a.EntryGates[0];
         var entryB = path.EntryGate;
         var phaseB = entryB.ClockControl!;
-        var stages = LatchPairDeck.Route(netlist, a.Storage, entryB.Inputs[0])
+        var stages = StageRoute.Between(netlist, a.Storage, entryB.Inputs[0])
             ?? throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: no path of stages from '{a.Storage.Name}' to '{entryB.Inputs[0].Name}'.", nameof(finding));
         var inversions = 0;
         foreach (var stage in stages)

@@ -24,9 +24,7 @@ internal static class ClockGateDeck
     public static SpiceDeck Build(Finding finding, Netlist netlist)
     {
         var gateName = DeckInputs.Property(finding, FindingPropertyKeys.GatedClock);
-        Clock? gate = null;
-        foreach (var clock in netlist.Clocks)
-            if (clock.Name == gateName) gate = clock;
+        var gate = DeckLookup.Of(netlist).Clock(gateName);
         if (gate?.Source is not { } source || gate.Enable is not { } enable)
             throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location} names clock gate '{gateName}', which is not a clock gate of design '{netlist.DesignName}'.", nameof(finding));
 
@@ -40,8 +38,7 @@ internal static class ClockGateDeck
         if (fromLatch)
         {
             var storageName = DeckInputs.Property(finding, FindingPropertyKeys.Storage);
-            foreach (var l in model.Latches)
-                if (l.Name == storageName) latch = l;
+            latch = DeckLookup.Of(netlist).Latch(storageName);
             if (latch is null)
                 throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location} names latch '{storageName}', which is not in design '{netlist.DesignName}'.", nameof(finding));
         }
@@ -91,7 +88,7 @@ internal static class ClockGateDeck
         else
         {
             var entry = latch.EntryGates[0];
-            var stages = LatchPairDeck.Route(netlist, latch.Storage, enable)
+            var stages = StageRoute.Between(netlist, latch.Storage, enable)
                 ?? throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: no path of stages from '{latch.Storage.Name}' to '{enable.Name}'.", nameof(finding));
             var inversions = 0;
             foreach (var stage in stages)

@@ -36,10 +36,7 @@ internal static class DeckInputs
     public static Net NetByName(Finding finding, Netlist netlist, string key)
     {
         var name = Property(finding, key);
-        foreach (var net in netlist.Nets)
-            if (string.Equals(net.Name, name, StringComparison.Ordinal))
-                return net;
-        throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location} names net '{name}', which is not in the netlist of design '{netlist.DesignName}'.", nameof(netlist));
+        return DeckLookup.Of(netlist).Net(name) ?? throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location} names net '{name}', which is not in the netlist of design '{netlist.DesignName}'.", nameof(netlist));
     }
 
     public static StorageNode StorageNodeByName(Finding finding, Netlist netlist, string key)
@@ -56,11 +53,8 @@ internal static class DeckInputs
         var targetName = Property(finding, FindingPropertyKeys.TargetLatch);
         var sourceName = Property(finding, FindingPropertyKeys.SourceLatch);
         LatchPath? path = null;
-        foreach (var p in model.Paths)
-        {
-            if (p.From.Name != sourceName || p.To.Name != targetName) continue;
+        foreach (var p in DeckLookup.Of(netlist).Paths(sourceName, targetName))
             if (path is null || p.EntryGate.Span.Equals(finding.Location)) path = p;
-        }
 
         return path ?? throw new ArgumentException(
             $"The {finding.RuleId} finding at {finding.Location}: design '{netlist.DesignName}' has no path from latch '{sourceName}' to latch '{targetName}'.",

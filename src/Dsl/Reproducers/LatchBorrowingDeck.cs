@@ -23,11 +23,7 @@ internal static class LatchBorrowingDeck
         var targetName = DeckInputs.Property(finding, FindingPropertyKeys.TargetLatch);
         var sourceName = DeckInputs.Property(finding, FindingPropertyKeys.SourceLatch);
         var figures = TimingFigures.For(netlist, Corner.Slow);
-        LatchArrival? arrival = null;
-        foreach (var candidate in LatchBorrowing.Compute(figures))
-            if (candidate.Path.From.Name == sourceName && candidate.Path.To.Name == targetName)
-                arrival = candidate;
-        if (arrival is null)
+        if (DeckLookup.Of(netlist).Arrival(sourceName, targetName) is not { } arrival)
             throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: design '{netlist.DesignName}' has no borrowing path from latch '{sourceName}' to latch '{targetName}'.", nameof(finding));
 
         var path = arrival.Path;
@@ -35,7 +31,7 @@ internal static class LatchBorrowingDeck
         var b = path.To;
         var entryA = a.EntryGates[0];
         var entryB = path.EntryGate;
-        var stages = LatchPairDeck.Route(netlist, a.Storage, entryB.Inputs[0])
+        var stages = StageRoute.Between(netlist, a.Storage, entryB.Inputs[0])
             ?? throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: no path of stages from '{a.Storage.Name}' to '{entryB.Inputs[0].Name}'.", nameof(finding));
         var windowA = PhaseWindow.Of(a.Phase);
         var windowB = PhaseWindow.Of(entryB.ClockControl!);

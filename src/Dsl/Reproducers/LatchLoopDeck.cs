@@ -26,11 +26,7 @@ internal static class LatchLoopDeck
         var targetName = DeckInputs.Property(finding, FindingPropertyKeys.TargetLatch);
         var sourceName = DeckInputs.Property(finding, FindingPropertyKeys.SourceLatch);
         var model = LatchModel.Of(netlist);
-        LatchLoop? loop = null;
-        foreach (var candidate in LatchBorrowing.Solve(TimingFigures.For(netlist, Corner.Slow)).DivergentLoops)
-            if (candidate.Paths[0].From.Name == sourceName && candidate.Paths[0].To.Name == targetName)
-                loop = candidate;
-        if (loop is null)
+        if (DeckLookup.Of(netlist).DivergentLoop(sourceName, targetName) is not { } loop)
             throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: design '{netlist.DesignName}' has no latch loop from '{sourceName}' to '{targetName}' that gains time.", nameof(finding));
 
         var first = loop.Paths[0].From;
@@ -60,7 +56,7 @@ internal static class LatchLoopDeck
             deck.PassGate(entry, from, storage, clocks.Control(entry.ClockControl!));
             deck.Capacitor(storage, netlist.CapacitanceOf(latch.Storage), $"'{latch.Storage.Name}', storage of '{latch.Name}'");
             deck.Element($".ic v({storage})={(ReferenceEquals(latch, first) ? "0" : "{vdd/2}")}");
-            var stages = LatchPairDeck.Route(netlist, latch.Storage, path.EntryGate.Inputs[0])
+            var stages = StageRoute.Between(netlist, latch.Storage, path.EntryGate.Inputs[0])
                 ?? throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: no path of stages from '{latch.Storage.Name}' to '{path.EntryGate.Inputs[0].Name}'.", nameof(finding));
             LatchPairDeck.DrawStages(deck, netlist, stages);
             entry = path.EntryGate;

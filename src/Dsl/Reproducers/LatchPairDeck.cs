@@ -31,7 +31,7 @@ internal static class LatchPairDeck
         var entryB = path.EntryGate;
         var phaseA = a.Phase;
         var phaseB = entryB.ClockControl!;
-        var stages = Route(netlist, a.Storage, entryB.Inputs[0])
+        var stages = StageRoute.Between(netlist, a.Storage, entryB.Inputs[0])
             ?? throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: no path of stages from '{a.Storage.Name}' to '{entryB.Inputs[0].Name}'.", nameof(finding));
 
         var sameWindow = finding.RuleId == RuleCatalog.SameWindowLatches.Id;
@@ -149,32 +149,5 @@ internal static class LatchPairDeck
         public Device Device { get; }
 
         public Net From { get; }
-    }
-
-    // The shortest chain of restoring stages and data-controlled pass gates from 'start' to 'target' (breadth first).
-    internal static List<Stage>? Route(Netlist netlist, Net start, Net target)
-    {
-        var reached = new Dictionary<int, Stage?> { [start.Id] = null };
-        var queue = new Queue<Net>();
-        queue.Enqueue(start);
-        while (queue.Count > 0)
-        {
-            var net = queue.Dequeue();
-            if (net.Id == target.Id) break;
-            foreach (var device in netlist.DataLoadsOf(net))
-            {
-                if (device.IsWeak || (device.IsPassDevice && device.ClockControl is not null)) continue;
-                if (reached.ContainsKey(device.Output.Id)) continue;
-                reached[device.Output.Id] = new Stage(device, net);
-                queue.Enqueue(device.Output);
-            }
-        }
-
-        if (!reached.ContainsKey(target.Id)) return null;
-        var stages = new List<Stage>();
-        for (var id = target.Id; reached[id] is { } stage; id = stage.From.Id)
-            stages.Add(stage);
-        stages.Reverse();
-        return stages;
     }
 }

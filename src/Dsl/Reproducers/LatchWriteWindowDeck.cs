@@ -23,10 +23,7 @@ internal static class LatchWriteWindowDeck
     {
         var model = LatchModel.Of(netlist);
         var name = DeckInputs.Property(finding, FindingPropertyKeys.TargetLatch);
-        Latch? latch = null;
-        foreach (var l in model.Latches)
-            if (l.Name == name) latch = l;
-        if (latch is null)
+        if (DeckLookup.Of(netlist).Latch(name) is not { } latch)
             throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location} names latch '{name}', which is not in design '{netlist.DesignName}'.", nameof(finding));
 
         var write = LatchWriteWindow.Of(model, latch);

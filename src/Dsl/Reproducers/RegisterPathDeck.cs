@@ -23,11 +23,7 @@ internal static class RegisterPathDeck
     {
         var captureName = DeckInputs.Property(finding, FindingPropertyKeys.TargetLatch);
         var launchName = DeckInputs.Property(finding, FindingPropertyKeys.SourceLatch);
-        RegisterPathResult? result = null;
-        foreach (var r in RegisterPathChecks.For(netlist))
-            if (r.Launch.Name == launchName && r.Capture.Name == captureName)
-                result = r;
-        if (result is null)
+        if (DeckLookup.Of(netlist).RegisterPath(launchName, captureName) is not { } result)
             throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: design '{netlist.DesignName}' has no register path from '{launchName}' to '{captureName}'.", nameof(finding));
 
         var setup = finding.RuleId == RuleCatalog.RegisterSetup.Id;
@@ -37,12 +33,12 @@ internal static class RegisterPathDeck
         var model = LatchModel.Of(netlist);
         var entryA = a.EntryGates[0];
         LatchPath? path = null;
-        foreach (var p in model.Paths)
+        foreach (var p in DeckLookup.Of(netlist).Paths(a.Name, b.Name))
             if (ReferenceEquals(p.From, a) && ReferenceEquals(p.To, b)) path = p;
         if (path is null)
             throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: no path from '{a.Name}' to '{b.Name}'.", nameof(finding));
         var entryB = path.EntryGate;
-        var stages = LatchPairDeck.Route(netlist, a.Storage, entryB.Inputs[0])
+        var stages = StageRoute.Between(netlist, a.Storage, entryB.Inputs[0])
             ?? throw new ArgumentException($"The {finding.RuleId} finding at {finding.Location}: no path of stages from '{a.Storage.Name}' to '{entryB.Inputs[0].Name}'.", nameof(finding));
 
         var period = PhaseWindow.Of(a.Phase).Period;
