@@ -557,6 +557,9 @@ public class HostileDesignTests
 
     private const string NullTypes = """
         public sealed class Cell { public string? Label; public Cell? Next; public int[]? Taps; public int Width => 4; public int Self() => 5; }
+        public interface ISized { int Size(); }
+        public sealed class Sized : ISized { public int Size() => 5; }
+        public static class Through { public static int SizeOf<T>(T item) where T : ISized => item.Size(); }
         public static class Fragile { public static readonly int Stages; static Fragile() { Stages = 2; throw new System.InvalidOperationException("no plan"); } }
         """;
 
@@ -567,6 +570,8 @@ public class HostileDesignTests
     [InlineData("count = first.Taps![0];")]
     [InlineData("count = first.Label!.Length;")]
     [InlineData("count = first.Next!.Next!.Self();")]
+    [InlineData("count = Through.SizeOf<Sized>(null!);")]
+    [InlineData("System.Func<int>? make = null; count = make!();")]
     public void AMemberReachedThroughNullThrowsWhatTheDesignCatches(string access)
     {
         // C# throws a NullReferenceException there. Before: the call ran on the design object itself (count 5, a wrong

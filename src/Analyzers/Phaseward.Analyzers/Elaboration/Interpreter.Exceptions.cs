@@ -177,9 +177,10 @@ internal sealed partial class Interpreter
     private object? NullReference(IOperation site, IOperation receiver, string member)
         => Raise(site.Syntax, new NullReferenceException($"'{receiver.Syntax}' is null, so {member} cannot be reached through it"));
 
-    // The receiver when it is of a reference type, so that null there is a null reference (a null Nullable<T> is a
-    // value: x.HasValue); else null.
-    private static IOperation? ThroughReference(IOperation? receiver) => receiver?.Type is { IsReferenceType: true } ? receiver : null;
+    // The receiver when null there is a null reference: written out (not the implicit 'this') and not of a value type
+    // (a null Nullable<T> is a value: x.HasValue, x.GetValueOrDefault()); else null.
+    private static IOperation? ThroughReference(IOperation? receiver)
+        => receiver is not null and not IInstanceReferenceOperation && receiver.Type is not { IsValueType: true } ? receiver : null;
 
     private static string DescribeThrow(IThrowOperation thrown, object? value)
     {

@@ -155,8 +155,6 @@ internal sealed partial class Interpreter
     private static TupleValue ValueTupleFromClr(object value, Type type)
         => new(type.GetFields().OrderBy(f => f.Name, StringComparer.Ordinal).Take(7).Select(f => FromClr(f.GetValue(value))).ToArray());
 
-    // ---- library members other than calls ----
-
     private static bool IsNullableMember(ISymbol member) => ClrTypes.MetadataName(member.ContainingType.OriginalDefinition) == "System.Nullable`1";
 
     /// <summary>
@@ -183,6 +181,8 @@ internal sealed partial class Interpreter
                 return Unsupported(invocation, "the call to " + Describe(method), "it is not a member of Nullable<T> the elaborator answers");
         }
     }
+
+    // ---- library members other than calls ----
 
     private object? ReadLibraryProperty(IPropertyReferenceOperation reference, IPropertySymbol property, object? receiver, Frame frame)
     {
