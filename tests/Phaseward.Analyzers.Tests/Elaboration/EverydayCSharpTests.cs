@@ -5,7 +5,8 @@ namespace Phaseward.Analyzers.Tests.Elaboration;
 /// oracle: the design compiled and run by .NET, <see cref="ParityTests"/>). Before: an indexer's setter lost its value
 /// (PW9001), List.Sort and Max on the design's IComparable records were a false PW9003, <c>new T()</c> and
 /// <c>GetValueOrDefault</c> on a nullable were PW9001, and a write or foreach through null was PW9001 instead of the
-/// NullReferenceException the design catches. Multicast delegates and events stay PW9001 (docs/elaboration.md).
+/// NullReferenceException the design catches, and typeof or GetType() (to name what a block makes by its type) was PW9001.
+/// Multicast delegates and events stay PW9001 (docs/elaboration.md).
 /// </summary>
 public class EverydayCSharpTests
 {
@@ -28,6 +29,7 @@ public class EverydayCSharpTests
     [InlineData("Everyday.NullableStruct")]
     [InlineData("Everyday.StringSwitch")]
     [InlineData("Everyday.GenericConstraint")]
+    [InlineData("Everyday.NamedByType")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
 
     private static readonly InMemoryDesigns Designs = new(("/everyday/Everyday.cs", """
@@ -131,6 +133,23 @@ public class EverydayCSharpTests
                 public sealed class GenericConstraint : Base
                 {
                     protected override void Describe(Circuit c) => Chain(c, Build.Of<Three>(), "gc");
+                }
+                public abstract class Unit : Block { protected override void Describe(Circuit c) => c.Output("o", c.Inverter(c.Input("i"), GetType().Name.ToLowerInvariant())); }
+                public sealed class Adder : Unit { }
+                public sealed class Shifter : Unit { public sealed class Inner { } }
+                public sealed class Box<T> { public sealed class Lid { } }
+                public sealed class NamedByType : Base
+                {
+                    private static string Of<T>() => typeof(T).Name + (typeof(T) == typeof(Adder) ? "_is_adder" : "");
+                    protected override void Describe(Circuit c)
+                    {
+                        Unit[] stages = { new Adder(), new Shifter(), new Adder() };
+                        for (var i = 0; i < stages.Length; i++)
+                            c.Place(stages[i], $"{stages[i].GetType().Name}{i}");
+                        var same = stages[0].GetType() == stages[2].GetType() && stages[0].GetType() != typeof(Shifter) && stages[1].GetType().Equals(typeof(Shifter));
+                        var text = $"{typeof(Shifter.Inner)}_{typeof(Box<int>)}_{typeof(Box<string>.Lid)}_{typeof(int[]).Name}_{typeof(Shifter).FullName}_{typeof(Adder).Namespace}";
+                        c.Inverter(c.Input("a"), (GetType().Name + Of<Adder>() + Of<Shifter>() + same + text).Replace(".", "_").Replace("+", "p").Replace("`", "q").Replace("[", "o").Replace("]", "c").Replace(",", "m"));
+                    }
                 }
             }
             """));

@@ -621,6 +621,22 @@ public class HostileDesignTests
         AssertNoStage(source);
     }
 
+    [Fact]
+    public async Task ReflectionBeyondATypesNameIsPW9001()
+    {
+        // typeof and GetType() answer a type's Name, Namespace, FullName (not generic), text and equality; the rest is
+        // reflection, and a generic type's FullName names assemblies the source does not say.
+        var source = Design("""
+            var name = typeof(Cell).Name;
+            count = {|#0:typeof(Cell).GetMethods()|}.Length;
+            var full = {|#1:typeof(System.Collections.Generic.List<int>).FullName|};
+            """, declarations: NullTypes);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source,
+            NotElaborated(0, "the call to 'Type.GetMethods()'", "of a type only its name, text and equality are read: the rest is reflection"),
+            NotElaborated(1, "property 'Type.FullName'", "of a type only its Name, Namespace and FullName (when it is not generic) are read: the rest is reflection")).RunAsync();
+        AssertNoStage(source);
+    }
+
     private static DiagnosticResult NotElaborated(int location, string what, string why)
         => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
 

@@ -149,7 +149,6 @@ public class InterpreterDispatchTests
         { "lock (this) { count = 3; }", "a lock statement" },
         { "goto done; done: count = 3;", "a goto statement" },
         { "var pair = new { A = 3 }; count = pair.A;", "an anonymous object" },
-        { "var type = typeof(int); count = type.Name.Length;", "typeof" },
         { "var grid = new int[2, 2]; count = grid.Length;", "a multi-dimensional array" },
     };
 

@@ -69,6 +69,9 @@ internal sealed partial class Interpreter
         if (IsNullableMember(method))
             return CallNullableMember(invocation, method, receiver, frame);
 
+        if (receiver is TypeValue typeValue)
+            return CallTypeMember(invocation, typeValue, method, frame);
+
         if (!ClrTypes.IsDsl(method) && !Library.IsPure(method))
             return Unsupported(invocation, "the call to " + Describe(method),
                 "it is outside what compile-time elaboration runs (only the Phaseward DSL, methods of this compilation and pure library members such as string, Math, LINQ and the collections)");

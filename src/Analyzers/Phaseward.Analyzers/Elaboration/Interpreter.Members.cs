@@ -84,6 +84,14 @@ internal sealed partial class Interpreter
                 return text.Length;
             case InterpretedObject instance:
                 return ReadDesignProperty(reference, instance, frame);
+            case TypeValue type:
+                return property.Name switch
+                {
+                    "Name" => type.Name,
+                    "Namespace" => type.Namespace,
+                    "FullName" when type.HasPlainFullName => type.ToString(),
+                    _ => Unsupported(reference, "property " + Describe(property), "of a type only its Name, Namespace and FullName (when it is not generic) are read: the rest is reflection"),
+                };
         }
 
         if (session.IsInSource(property))

@@ -106,6 +106,8 @@ internal sealed partial class Interpreter : IObjectSemantics
                     return AreEqual(self, arguments[0]);
                 case "GetHashCode" when arguments.Length == 0 && (self.Type.IsRecord || UserOverride(self.Type, "GetHashCode", 0) is not null):
                     return HashOf(self);
+                case "GetType" when arguments.Length == 0:
+                    return new TypeValue(self.Type);
                 case "Deconstruct" when self.Type.IsRecord && method.IsImplicitlyDeclared:
                     var positional = PositionalValues(self);
                     for (var i = 0; i < references.Length && i < positional.Count; i++)

@@ -250,6 +250,10 @@ internal sealed partial class Interpreter
             return RecordEquality(site, record, operands[1], negated: method.Name == "op_Inequality");
         }
 
+        if (method.Name is "op_Equality" or "op_Inequality" && operands.Length == 2 && ClrTypes.MetadataName(method.ContainingType) == "System.Type"
+            && operands.All(o => o is null or TypeValue))
+            return Equals(operands[0], operands[1]) == (method.Name == "op_Equality");
+
         if (session.IsInSource(method))
             return InvokeUser(method, null, operands, new Variable?[operands.Length], site, frame);
         if (Library.IsPure(method))

@@ -66,4 +66,25 @@ internal sealed partial class Interpreter
             return UnknownFrom(e, site);
         }
     }
+
+    /// <summary>The members of a <see cref="TypeValue"/> that say only what the source says: ToString, Equals, GetHashCode.</summary>
+    private object? CallTypeMember(IInvocationOperation invocation, TypeValue type, IMethodSymbol method, Frame frame)
+    {
+        var (arguments, _) = Arguments(invocation.Arguments, method, frame);
+        if (arguments is null) return Unknown.Value;
+        try
+        {
+            return method.Name switch
+            {
+                "ToString" when arguments.Length == 0 => type.ToString(),
+                "Equals" when arguments.Length == 1 => type.Equals(arguments[0]),
+                "GetHashCode" when arguments.Length == 0 => type.GetHashCode(),
+                _ => Unsupported(invocation, "the call to " + Describe(method), "of a type only its name, text and equality are read: the rest is reflection"),
+            };
+        }
+        catch (UnknownValueException e)
+        {
+            return UnknownFrom(e, invocation);
+        }
+    }
 }
