@@ -109,20 +109,7 @@ public class StageRouteTests
         // Nets driven only at the end, from logic made after them: loops and reconvergence.
         var later = Enumerable.Range(0, random.Next(0, 3)).Select(i => c.Node("back" + i)).ToList();
         pool.AddRange(later);
-        for (var i = 0; i < random.Next(8, 30); i++)
-        {
-            Net Pick() => pool[random.Next(pool.Count)];
-            pool.Add(random.Next(7) switch
-            {
-                0 => c.Inverter(Pick()),
-                1 => c.Nand(Pick(), Pick()),
-                2 => c.Nor(Pick(), Pick()),
-                3 => c.TransmissionGate(Pick(), Pick()),
-                4 => c.TransmissionGate(Pick(), random.Next(2) == 0 ? clk.High : clk.Low),
-                5 => c.Buffer(Pick()),
-                _ => c.Keeper(c.Inverter(Pick())),
-            });
-        }
+        Figures.AddRandomStages(c, pool, random, random.Next(8, 30), clk);
 
         foreach (var back in later)
             c.Inverter(pool[random.Next(pool.Count)], back);

@@ -186,22 +186,11 @@ public class ClockGateEnableOriginsTests
             pool.Add(c.Input($"in{i}"));
         for (var i = 0; i < random.Next(1, 5); i++)
             pool.Add(c.StaticLatch(c.Input($"d{i}"), random.Next(2) == 0 ? clk.High : clk.Low, $"latch{i}"));
-        for (var i = 0; i < random.Next(4, 16); i++)
-        {
-            Net Pick() => pool[random.Next(pool.Count)];
-            pool.Add(random.Next(5) switch
-            {
-                0 => c.Inverter(Pick()),
-                1 => c.Nand(Pick(), Pick()),
-                2 => c.Nor(Pick(), Pick()),
-                3 => c.TransmissionGate(Pick(), Pick()),
-                _ => c.Buffer(Pick()),
-            });
-        }
+        Figures.AddRandomStages(c, pool, random, random.Next(4, 16));
 
         var gates = new List<Clock>();
         for (var i = 0; i < random.Next(1, 5); i++)
             gates.Add(c.ClockGate(clk, pool[random.Next(pool.Count)], name: $"gate{i}"));
-        return (c.ToNetlist(), gates.Select(g => g).ToList());
+        return (c.ToNetlist(), gates);
     }
 }

@@ -1,3 +1,5 @@
+using System;
+using System.Collections.Generic;
 using System.Linq;
 using Phaseward.Checking;
 using Phaseward.Netlists;
@@ -50,6 +52,29 @@ internal static class Figures
             carry = c.Nand(c.DynamicRegister(carry, tick, "count" + bit), carry);
         c.Output("carry_out", carry);
         return c.ToNetlist();
+    }
+
+    /// <summary>
+    /// Adds <paramref name="stages"/> random stages to <paramref name="pool"/>, each taking nets already in it:
+    /// inverters, NANDs, NORs, buffers and data-controlled pass gates, and, given <paramref name="clocked"/>, pass gates
+    /// on its phases and keepers too. For the property tests that check a search against its definition.
+    /// </summary>
+    public static void AddRandomStages(Circuit c, List<Net> pool, Random random, int stages, Clock? clocked = null)
+    {
+        for (var i = 0; i < stages; i++)
+        {
+            Net Pick() => pool[random.Next(pool.Count)];
+            pool.Add(random.Next(clocked is null ? 5 : 7) switch
+            {
+                0 => c.Inverter(Pick()),
+                1 => c.Nand(Pick(), Pick()),
+                2 => c.Nor(Pick(), Pick()),
+                3 => c.TransmissionGate(Pick(), Pick()),
+                4 => c.Buffer(Pick()),
+                5 => c.TransmissionGate(Pick(), random.Next(2) == 0 ? clocked!.High : clocked!.Low),
+                _ => c.Keeper(c.Inverter(Pick())),
+            });
+        }
     }
 
     public static Finding[] Run(Rule rule, Circuit circuit, RulePolicy? policy = null)
