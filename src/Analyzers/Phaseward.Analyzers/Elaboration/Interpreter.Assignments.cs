@@ -196,9 +196,13 @@ internal sealed partial class Interpreter
                 // read and the write of a compound assignment (b[i++] += 1), as in C#.
                 var (setterArguments, _) = Arguments(reference.Arguments, setter, frame, keepUnknown: true);
                 return new StoragePlace(
-                    () => property.GetMethod is { } getter
-                        ? InvokeUser(getter, interpretedObject, setterArguments!.Take(getter.Parameters.Length).ToArray(), new Variable?[getter.Parameters.Length], reference, frame)
-                        : CallGetter(reference, property, interpretedObject, frame),
+                    () =>
+                    {
+                        if (property.GetMethod is not { } getter)
+                            return CallGetter(reference, property, interpretedObject, frame);
+                        Step(reference);
+                        return InvokeUser(getter, interpretedObject, setterArguments!.Take(getter.Parameters.Length).ToArray(), new Variable?[getter.Parameters.Length], reference, frame);
+                    },
                     v =>
                     {
                         var values = (object?[])setterArguments!.Clone();
