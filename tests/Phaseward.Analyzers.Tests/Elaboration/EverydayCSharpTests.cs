@@ -5,8 +5,8 @@ namespace Phaseward.Analyzers.Tests.Elaboration;
 /// oracle: the design compiled and run by .NET, <see cref="ParityTests"/>). Before: an indexer's setter lost its value
 /// (PW9001), List.Sort and Max on the design's IComparable records were a false PW9003, <c>new T()</c> and
 /// <c>GetValueOrDefault</c> on a nullable were PW9001, and a write or foreach through null was PW9001 instead of the
-/// NullReferenceException the design catches, and typeof or GetType() (to name what a block makes by its type) was PW9001.
-/// Multicast delegates and events stay PW9001 (docs/elaboration.md).
+/// NullReferenceException the design catches, typeof or GetType() (to name what a block makes by its type), combined delegates and events
+/// were PW9001.
 /// </summary>
 public class EverydayCSharpTests
 {
@@ -30,6 +30,8 @@ public class EverydayCSharpTests
     [InlineData("Everyday.StringSwitch")]
     [InlineData("Everyday.GenericConstraint")]
     [InlineData("Everyday.NamedByType")]
+    [InlineData("Everyday.Multicast")]
+    [InlineData("Everyday.Events")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
 
     private static readonly InMemoryDesigns Designs = new(("/everyday/Everyday.cs", """
@@ -138,6 +140,54 @@ public class EverydayCSharpTests
                 public sealed class Adder : Unit { }
                 public sealed class Shifter : Unit { public sealed class Inner { } }
                 public sealed class Box<T> { public sealed class Lid { } }
+                public sealed class Multicast : Base
+                {
+                    private int calls;
+                    private int Count() => ++calls;
+                    protected override void Describe(Circuit c)
+                    {
+                        var n = 0;
+                        Action a = () => n += 1;
+                        a += () => n += 10;
+                        a += () => n *= 2;
+                        a();
+                        a -= () => n += 1; // another lambda: not equal, nothing removed
+                        a();
+                        Func<int> f = () => 1;
+                        f += () => 7;
+                        Func<int> g = Count;
+                        g += Count;
+                        g += f;
+                        g -= Count; // the last Count added
+                        var fromG = g() + calls * 100;
+                        Action? none = null;
+                        none += () => n += 1000;
+                        none -= none;
+                        Chain(c, n % 7 + f() + fromG % 5 + (none is null ? 1 : 0), "m");
+                    }
+                }
+                public sealed class Bus
+                {
+                    public event Action<int>? Fired;
+                    public void Fire(int v) => Fired?.Invoke(v);
+                    public bool Quiet => Fired is null;
+                }
+                public sealed class Events : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var b = new Bus();
+                        var quietBefore = b.Quiet;
+                        var t = 0;
+                        Action<int> doubler = v => t *= v;
+                        b.Fired += v => t += v;
+                        b.Fired += doubler;
+                        b.Fire(3);
+                        b.Fired -= doubler;
+                        b.Fire(2);
+                        Chain(c, t % 9 + (quietBefore ? 1 : 0) + (b.Quiet ? 10 : 0), "ev");
+                    }
+                }
                 public sealed class NamedByType : Base
                 {
                     private static string Of<T>() => typeof(T).Name + (typeof(T) == typeof(Adder) ? "_is_adder" : "");

@@ -73,7 +73,8 @@ public class MemberAccessSweepTests
         { "string indexer", "", "", "\"a3\"[1] - '0'", true },
 
         // events
-        { "event of the design read as a value", "", "private event System.Action? Changed;", "Changed is null ? 3 : 0", false },
+        { "event of the design read as a value", "", "private event System.Action? Changed;", "Changed is null ? 3 : 0", true },
+        { "static event of the design read as a value", "", "private static event System.Action? Changed;", "Changed is null ? 3 : 0", false },
 
         // methods
         { "static method of the design", "", "private static int Three() => 3;", "Three()", true },

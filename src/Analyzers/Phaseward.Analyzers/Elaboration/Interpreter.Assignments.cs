@@ -37,6 +37,8 @@ internal sealed partial class Interpreter
             result = Unknown.Value;
         else if (assignment.OperatorMethod is { } method)
             result = CallOperator(assignment, method, new[] { current, operand }, frame);
+        else if (IsDelegate(assignment.Target.Type))
+            result = DelegateArithmetic(assignment, assignment.OperatorKind, current, operand);
         else if (assignment.OperatorKind == BinaryOperatorKind.Add && assignment.Target.Type?.SpecialType == SpecialType.System_String)
             result = Concatenate(assignment, current, operand);
         else if (current is null || operand is null || assignment.Target.Type is null)

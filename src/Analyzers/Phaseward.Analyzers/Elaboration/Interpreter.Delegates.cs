@@ -33,6 +33,15 @@ internal sealed partial class Interpreter
     /// <summary>Calls a closure with its arguments (a lambda, or a method group of the design's code).</summary>
     private object? CallClosure(Closure closure, object?[] arguments, IOperation site)
     {
+        if (closure.Parts is { } parts)
+        {
+            // A combined delegate calls each part in order; its value is the last part's, as in C#.
+            object? last = null;
+            foreach (var part in parts)
+                last = CallClosure(part, arguments, site);
+            return last;
+        }
+
         Step(site);
         if (closure.Lambda is null)
         {
@@ -66,5 +75,72 @@ internal sealed partial class Interpreter
         if (site is null)
             return null;
         return Callbacks.Create(delegateType, arguments => CallClosure(closure, arguments.Select(FromClr).ToArray(), site));
+    }
+
+    /// <summary><c>a + b</c> and <c>a - b</c> on delegates (also <c>+=</c>, <c>-=</c> and an event's add and remove).</summary>
+    private object? DelegateArithmetic(IOperation site, BinaryOperatorKind kind, object? left, object? right)
+    {
+        if (left is not (null or Closure) || right is not (null or Closure))
+            return Unsupported(site, "operator " + kind + " on delegates", "a delegate not made by the design's code");
+        if (kind == BinaryOperatorKind.Add)
+            return Closure.Combine((Closure?)left, (Closure?)right);
+        if (kind != BinaryOperatorKind.Subtract)
+            return Unsupported(site, "operator " + kind + " on delegates", "only + and - combine delegates");
+        var rest = Closure.Remove((Closure?)left, (Closure?)right, out var decided);
+        if (decided)
+            return rest;
+        // Which handlers stay is not known: what any of them assigns becomes unknown.
+        foreach (var part in ((Closure)left!).InvocationList)
+            if (part.Lambda is { } lambda)
+                Poison(lambda.Body, part.Captured);
+        return Unsupported(site, "removing this delegate",
+            "whether it equals one already added cannot be told: C# compares a lambda's target object, which the elaborator does not model");
+    }
+
+    private static bool IsDelegate(ITypeSymbol? type) => type?.TypeKind == TypeKind.Delegate;
+
+    // ---- events: an instance field-like event of the design's types is a delegate stored in its object ----
+
+    private object? VisitEventReference(IEventReferenceOperation reference, Frame frame)
+    {
+        if (EventOwner(reference, reference, frame, out var owner) is { } notRead)
+            return notRead;
+        return owner!.Find(reference.Event)?.Value;
+    }
+
+    private object? VisitEventAssignment(IEventAssignmentOperation assignment, Frame frame)
+    {
+        if (assignment.EventReference is not IEventReferenceOperation reference)
+            return Unsupported(assignment, "this event assignment", "its event is not named directly");
+        if (EventOwner(reference, assignment, frame, out var owner) is { } notRead)
+            return notRead;
+        var handler = Evaluate(assignment.HandlerValue, frame);
+        var handlers = owner!.GetOrAdd(reference.Event);
+        NoteStoreInto(owner);
+        handlers.Value = Unknown.Is(handler) || Unknown.Is(handlers.Value)
+            ? Unknown.Value
+            : DelegateArithmetic(assignment, assignment.Adds ? BinaryOperatorKind.Add : BinaryOperatorKind.Subtract, handlers.Value, handler);
+        return null;
+    }
+
+    // The object whose event this is, or (as the value to return) why it is not read: a static event, one with its own
+    // add and remove accessors, or one of an object the design did not make; through null, C#'s exception.
+    private object? EventOwner(IEventReferenceOperation reference, IOperation site, Frame frame, out InterpretedObject? owner)
+    {
+        owner = null;
+        var declared = reference.Event.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken);
+        if (reference.Event.IsStatic || declared is not Microsoft.CodeAnalysis.CSharp.Syntax.VariableDeclaratorSyntax)
+        {
+            // A handler subscribed here may run later: what it assigns becomes unknown.
+            Poison(site, frame);
+            return Unsupported(site, "event " + Describe(reference.Event), "only instance events declared as fields (without add and remove accessors) of the design's types are elaborated");
+        }
+        var value = reference.Instance is null ? frame.Instance : Evaluate(reference.Instance, frame);
+        if (Unknown.Is(value))
+            return value;
+        if (value is null && ThroughReference(reference.Instance) is { } nullOwner)
+            return NullReference(site, nullOwner, "event " + Describe(reference.Event)) ?? Unknown.Value;
+        owner = value as InterpretedObject;
+        return owner is null ? Unsupported(site, "event " + Describe(reference.Event), "only events of objects the design's code made are elaborated") : null;
     }
 }

@@ -111,6 +111,8 @@ internal sealed partial class Interpreter
             // ---- members, elements and indices (Interpreter.Members) ----
             case OperationKind.FieldReference:
                 return VisitFieldReference((IFieldReferenceOperation)operation, frame);
+            case OperationKind.EventReference:
+                return VisitEventReference((IEventReferenceOperation)operation, frame);
             case OperationKind.PropertyReference:
                 return VisitPropertyReference((IPropertyReferenceOperation)operation, frame);
             case OperationKind.ArrayElementReference:
@@ -145,6 +147,8 @@ internal sealed partial class Interpreter
             // ---- assignments (Interpreter.Assignments) ----
             case OperationKind.SimpleAssignment:
                 return VisitSimpleAssignment((ISimpleAssignmentOperation)operation, frame);
+            case OperationKind.EventAssignment:
+                return VisitEventAssignment((IEventAssignmentOperation)operation, frame);
             case OperationKind.CompoundAssignment:
                 return VisitCompoundAssignment((ICompoundAssignmentOperation)operation, frame);
             case OperationKind.CoalesceAssignment:

@@ -59,6 +59,8 @@ internal sealed partial class Interpreter
 
         var leftType = binary.LeftOperand.Type;
         var rightType = binary.RightOperand.Type;
+        if (IsDelegate(binary.Type) && binary.OperatorKind is BinaryOperatorKind.Add or BinaryOperatorKind.Subtract)
+            return DelegateArithmetic(binary, binary.OperatorKind, left, right);
         if (binary.OperatorKind == BinaryOperatorKind.Add
             && (leftType?.SpecialType == SpecialType.System_String || rightType?.SpecialType == SpecialType.System_String))
         {
