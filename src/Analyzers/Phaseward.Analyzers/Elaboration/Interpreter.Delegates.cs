@@ -135,6 +135,7 @@ internal sealed partial class Interpreter
             Poison(site, frame);
             return Unsupported(site, "event " + Describe(reference.Event), "only instance events declared as fields (without add and remove accessors) of the design's types are elaborated");
         }
+
         var value = reference.Instance is null ? frame.Instance : Evaluate(reference.Instance, frame);
         if (Unknown.Is(value))
             return value;
