@@ -186,7 +186,8 @@ public class HostileDesignTests
         // default(T), 'is T' and 'as T' with what T stands for in the call (before: default(T) was null for T = int);
         // a generic type's statics per constructed type (before: Slot<int> and Slot<string> shared one Count), and a
         // type nested in a generic type's too, with its initializers seeing the outer type argument (before:
-        // Outer<int>.Inner and Outer<long>.Inner shared one N, silently, and default(T) there was PW9001).
+        // Outer<int>.Inner and Outer<long>.Inner shared one N, silently, and default(T) there was PW9001), and a type
+        // argument made from one (Slot<List<T>>: before, one Slot for every T).
         var designs = new InMemoryDesigns(("/hostile/Generic.cs", """
             using System.Collections.Generic;
             using Phaseward;
@@ -241,6 +242,7 @@ public class HostileDesignTests
                 public sealed class NestedStatics : Design
                 {
                     private static int Through<T>() { Outer<T>.Inner.N++; return Outer<T>.Inner.N; }
+                    private static int Deep<T>() { Slot<List<T>>.Put(new List<T>()); return Slot<List<T>>.Count; }
 
                     protected override void Describe(Circuit c)
                     {
@@ -251,7 +253,8 @@ public class HostileDesignTests
                         Outer<int>.Tally<string>.Add();
                         Outer<long>.Tally<int>.Add();
                         var n = $"{Outer<int>.Inner.N}_{Outer<long>.Inner.N}_{Outer<string>.Inner.N}_{Through<int>()}_{Through<string>()}_"
-                            + $"{Outer<int>.Inner.Made}{Outer<string>.Inner.Made}_{Outer<int>.Tally<string>.Count}_{Outer<long>.Tally<int>.Count}_{Outer<int>.Tally<int>.Count}";
+                            + $"{Outer<int>.Inner.Made}{Outer<string>.Inner.Made}_{Outer<int>.Tally<string>.Count}_{Outer<long>.Tally<int>.Count}_{Outer<int>.Tally<int>.Count}"
+                            + $"_{Deep<int>()}_{Deep<string>()}_{Deep<int>()}";
                         c.Inverter(c.Input("a"), "n" + n);
                     }
                 }

@@ -292,14 +292,15 @@ internal sealed partial class Interpreter
     /// The type arguments a call of a generic method (or of a method of a generic type) runs with, each resolved through
     /// the caller's own (a generic helper calling another with its T). Null for a method that is not generic.
     /// </summary>
-    private static Dictionary<ITypeParameterSymbol, ITypeSymbol>? TypeArgumentsOf(IMethodSymbol method, Frame caller)
+    private Dictionary<ITypeParameterSymbol, ITypeSymbol>? TypeArgumentsOf(IMethodSymbol method, Frame caller)
     {
         Dictionary<ITypeParameterSymbol, ITypeSymbol>? arguments = null;
         void Add(ImmutableArray<ITypeParameterSymbol> parameters, ImmutableArray<ITypeSymbol> types)
         {
             for (var i = 0; i < parameters.Length && i < types.Length; i++)
             {
-                var type = types[i] is ITypeParameterSymbol outer ? caller.TypeArgumentOf(outer) ?? outer : types[i];
+                // Resolved wherever the caller's type parameters stand in it (List<T> as well as T).
+                var type = ResolvedIn(types[i], caller) ?? types[i];
                 if (!SymbolEqualityComparer.Default.Equals(type, parameters[i]))
                     (arguments ??= new(SymbolEqualityComparer.Default))[(ITypeParameterSymbol)parameters[i].OriginalDefinition] = type;
             }

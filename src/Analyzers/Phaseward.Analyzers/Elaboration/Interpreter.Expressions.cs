@@ -92,25 +92,9 @@ internal sealed partial class Interpreter
 
     /// <summary><c>typeof(T)</c>, with what a type parameter stands for here (see <see cref="TypeValue"/>).</summary>
     private object? VisitTypeOf(ITypeOfOperation typeOf, Frame frame)
-    {
-        var type = typeOf.TypeOperand switch
-        {
-            ITypeParameterSymbol parameter => frame.TypeArgumentOf(parameter) ?? parameter,
-            INamedTypeSymbol { IsUnboundGenericType: false, IsGenericType: true } named => ConstructedIn(named, frame) ?? named,
-            var other => other,
-        };
-        return type is INamedTypeSymbol { IsUnboundGenericType: true } || MentionsTypeParameter(type)
+        => typeOf.TypeOperand is INamedTypeSymbol { IsUnboundGenericType: true } || ResolvedIn(typeOf.TypeOperand, frame) is not { } type
             ? Unsupported(typeOf, "typeof(" + typeOf.TypeOperand.ToDisplayString() + ")", "an open generic type, or one whose type argument is not known where the generic code is interpreted")
             : new TypeValue(type);
-    }
-
-    private static bool MentionsTypeParameter(ITypeSymbol type) => type switch
-    {
-        ITypeParameterSymbol => true,
-        IArrayTypeSymbol array => MentionsTypeParameter(array.ElementType),
-        INamedTypeSymbol named => named.TypeArguments.Any(MentionsTypeParameter) || (named.ContainingType is { } containing && MentionsTypeParameter(containing)),
-        _ => false,
-    };
 
     private object? VisitAwait(IAwaitOperation await, Frame frame)
         => Unsupported(await, "an await", "asynchronous code is outside the subset the elaborator interprets");

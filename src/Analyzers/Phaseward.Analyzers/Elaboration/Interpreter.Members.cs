@@ -187,51 +187,59 @@ internal sealed partial class Interpreter
     }
 
     /// <summary>The type whose static storage a member lives in: its generic definition's type arguments resolved, else the definition.</summary>
-    private static INamedTypeSymbol StaticOwner(INamedTypeSymbol type, Frame frame)
+    private INamedTypeSymbol StaticOwner(INamedTypeSymbol type, Frame frame)
         => !type.IsGenericType ? type.OriginalDefinition : ConstructedIn(type, frame) ?? type.OriginalDefinition;
 
+    /// <summary>A generic type with its type parameters resolved through the frame (see <see cref="ResolvedIn"/>); null
+    /// when one is not known there.</summary>
+    private INamedTypeSymbol? ConstructedIn(INamedTypeSymbol type, Frame frame) => ResolvedIn(type, frame) as INamedTypeSymbol;
+
     /// <summary>
-    /// A generic type with the type parameters among its and its containing types' type arguments resolved through the
-    /// frame (<c>Box&lt;T&gt;</c> in a call with T = int is <c>Box&lt;int&gt;</c>, and <c>Outer&lt;T&gt;.Inner</c> is
-    /// <c>Outer&lt;int&gt;.Inner</c>: a type nested in a generic type has its own statics per construction too);
-    /// null when one is not known there.
+    /// A type with every type parameter in it resolved through the frame, wherever it stands: <c>Box&lt;T&gt;</c> in a
+    /// call with T = int is <c>Box&lt;int&gt;</c>, <c>Slot&lt;List&lt;T&gt;&gt;</c> is <c>Slot&lt;List&lt;int&gt;&gt;</c>,
+    /// <c>T[]</c> is <c>int[]</c>, and <c>Outer&lt;T&gt;.Inner</c> is <c>Outer&lt;int&gt;.Inner</c> (a type nested in a
+    /// generic type has its own statics per construction too). Null when one is not known there.
     /// </summary>
-    private static INamedTypeSymbol? ConstructedIn(INamedTypeSymbol type, Frame frame)
+    private ITypeSymbol? ResolvedIn(ITypeSymbol type, Frame frame)
     {
-        if (!HasOpenTypeArguments(type))
-            return type;
-        var resolved = type.OriginalDefinition;
-        if (type.ContainingType is { IsGenericType: true } containing)
+        switch (type)
         {
-            if (ConstructedIn(containing, frame) is not { } outer)
-                return null;
-            resolved = outer.GetTypeMembers(type.Name, type.Arity)
-                .FirstOrDefault(t => SymbolEqualityComparer.Default.Equals(t.OriginalDefinition, type.OriginalDefinition));
-            if (resolved is null)
-                return null;
-        }
+            case ITypeParameterSymbol parameter:
+                return frame.TypeArgumentOf(parameter) is { } argument && !MentionsTypeParameter(argument) ? argument : null;
+            case IArrayTypeSymbol array when MentionsTypeParameter(array):
+                return ResolvedIn(array.ElementType, frame) is { } element ? session.Compilation.CreateArrayTypeSymbol(element, array.Rank) : null;
+            case INamedTypeSymbol named when MentionsTypeParameter(named):
+                var resolved = named.OriginalDefinition;
+                if (named.ContainingType is { IsGenericType: true } containing)
+                {
+                    if (ConstructedIn(containing, frame) is not { } outer)
+                        return null;
+                    resolved = outer.GetTypeMembers(named.Name, named.Arity)
+                        .FirstOrDefault(t => SymbolEqualityComparer.Default.Equals(t.OriginalDefinition, named.OriginalDefinition));
+                    if (resolved is null)
+                        return null;
+                }
 
-        if (type.Arity == 0)
-            return resolved;
-        var arguments = new ITypeSymbol[type.TypeArguments.Length];
-        for (var i = 0; i < arguments.Length; i++)
-        {
-            arguments[i] = type.TypeArguments[i] is ITypeParameterSymbol parameter ? frame.TypeArgumentOf(parameter) ?? parameter : type.TypeArguments[i];
-            if (arguments[i] is ITypeParameterSymbol)
-                return null;
+                if (named.Arity == 0)
+                    return resolved;
+                var arguments = new ITypeSymbol[named.TypeArguments.Length];
+                for (var i = 0; i < arguments.Length; i++)
+                    if ((arguments[i] = ResolvedIn(named.TypeArguments[i], frame)!) is null)
+                        return null;
+                return resolved.Construct(arguments);
+            default:
+                return type;
         }
-
-        return resolved.Construct(arguments);
     }
 
-    // True when a type parameter stands among the type arguments of the type or of a type containing it.
-    private static bool HasOpenTypeArguments(INamedTypeSymbol type)
+    // True when a type parameter stands anywhere in the type: its type arguments, its containing types', an array's element.
+    private static bool MentionsTypeParameter(ITypeSymbol type) => type switch
     {
-        for (var current = type; current is not null; current = current.ContainingType)
-            if (current.TypeArguments.Any(a => a is ITypeParameterSymbol))
-                return true;
-        return false;
-    }
+        ITypeParameterSymbol => true,
+        IArrayTypeSymbol array => MentionsTypeParameter(array.ElementType),
+        INamedTypeSymbol named => named.TypeArguments.Any(MentionsTypeParameter) || (named.ContainingType is { } containing && MentionsTypeParameter(containing)),
+        _ => false,
+    };
 
     private void InitializeStatics(INamedTypeSymbol type)
     {
