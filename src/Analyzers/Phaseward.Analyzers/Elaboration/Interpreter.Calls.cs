@@ -20,7 +20,7 @@ internal sealed partial class Interpreter
         Step(invocation);
         var method = invocation.TargetMethod;
         var receiver = invocation.Instance is null ? null : Evaluate(invocation.Instance, frame);
-        if (Unknown.Is(receiver)) return receiver;
+        if (Unknown.Is(receiver)) return Skipped(invocation, frame); // which method or delegate runs is not known
         // An instance method called through null throws in C#; it must never run on the frame's own object instead.
         if (receiver is null && !method.IsStatic && ThroughReference(invocation.Instance) is { } nullReceiver)
             return NullReference(invocation, nullReceiver, "the call to " + Describe(method));
@@ -73,8 +73,8 @@ internal sealed partial class Interpreter
             return CallTypeMember(invocation, typeValue, method, frame);
 
         if (!ClrTypes.IsDsl(method) && !Library.IsPure(method))
-            return Unsupported(invocation, "the call to " + Describe(method),
-                "it is outside what compile-time elaboration runs (only the Phaseward DSL, methods of this compilation and pure library members such as string, Math, LINQ and the collections)");
+            return Skipped(invocation, frame, Unsupported(invocation, "the call to " + Describe(method),
+                "it is outside what compile-time elaboration runs (only the Phaseward DSL, methods of this compilation and pure library members such as string, Math, LINQ and the collections)"));
 
         if (!method.IsStatic && Mutators.Contains(method.Name) && receiver is not string)
             NoteStoreThrough(invocation.Instance, frame);
@@ -83,12 +83,15 @@ internal sealed partial class Interpreter
         // A library call that could not be made (or failed half-way) may have changed the collections it was given or
         // called on: they become unknown, never read as they were before the call.
         if (Unknown.Is(result) && !ClrTypes.IsDsl(method))
+        {
+            Poison(invocation, frame); // the callbacks it was given may not have run, or not to the end
             PoisonMutables(invocation, frame);
+        }
         return result;
     }
 
     /// <summary>The members of the pure library's collections and StringBuilder that change the object they are called on.</summary>
-    private static readonly HashSet<string> Mutators = new(StringComparer.Ordinal)
+    internal static readonly HashSet<string> Mutators = new(StringComparer.Ordinal)
     {
         "Add", "AddRange", "Insert", "InsertRange", "Remove", "RemoveAt", "RemoveAll", "RemoveRange", "RemoveWhere", "Clear", "Push", "Pop",
         "Enqueue", "Dequeue", "TryAdd", "TryPop", "TryDequeue", "TryRemove", "Sort", "Reverse", "Append", "AppendLine", "AppendFormat",
@@ -209,12 +212,15 @@ internal sealed partial class Interpreter
                 if (variable is null)
                 {
                     Unsupported(argument, "this ref/out argument", "only locals, parameters and fields of the design are passed by reference");
+                    // The callee may write through it: what it refers to (an element, a tuple's part) becomes unknown.
+                    Poison(argument, frame);
+                    values[ordinal] = Unknown.Value;
                     unknown = true;
                     continue;
                 }
 
                 (references ??= new Variable?[method.Parameters.Length])[ordinal] = variable;
-                values[ordinal] = variable.Value;
+                values[ordinal] = Read(variable, ReferencedSymbol(argument.Value));
                 continue;
             }
 
@@ -275,7 +281,7 @@ internal sealed partial class Interpreter
 
             if (frame.Yielded is not null)
                 return RunToCompletion(method, body, frame, site);
-            Execute(body, frame);
+            LeaveBody(Execute(body, frame), frame);
             if (frame.Count > expectedVariables)
                 frameSizes[body] = frame.Count;
             return frame.Consumer is not null ? StreamedIterator.Value : frame.ReturnValue;
@@ -324,14 +330,19 @@ internal sealed partial class Interpreter
         var effectsBefore = externalEffects;
         var outerObjects = iteratorObjectsAfter;
         iteratorObjectsAfter = InterpretedObject.LastSerial;
+        Completion completion;
         try
         {
-            Execute(body, frame);
+            completion = Execute(body, frame);
         }
         finally
         {
             iteratorObjectsAfter = outerObjects;
         }
+
+        // It may have stopped (yield break) or thrown in code that was skipped: which values it yields is not known.
+        if (completion.IsMaybe)
+            return Unknown.Value;
 
         if (externalEffects == effectsBefore)
             return frame.Yielded;
@@ -460,6 +471,8 @@ internal sealed partial class Interpreter
                 }
 
                 var ownerValue = field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame);
+                if (Unknown.Is(ownerValue))
+                    return WriteToUnknownOwner(field.Field);
                 if (ownerValue is null && ThroughReference(field.Instance) is { } nullOwner)
                 {
                     // Nothing is stored: the write is made to a variable nobody reads, after the exception is raised.

@@ -90,7 +90,7 @@ internal sealed partial class Interpreter
         if (creation.DimensionSizes.Length != 1)
             return Unsupported(creation, "a multi-dimensional array", "only one-dimensional arrays are elaborated");
         var size = Evaluate(creation.DimensionSizes[0], frame);
-        if (Unknown.Is(size)) return size;
+        if (Unknown.Is(size)) return Skipped(creation, frame);
         // The size may be a long or ulong (C# allows them): charged to the memory budget before anything is made.
         var length = size is ulong huge ? (huge > long.MaxValue ? long.MaxValue : (long)huge) : System.Convert.ToInt64(size, CultureInfo.InvariantCulture);
         if (length < 0)
@@ -136,7 +136,7 @@ internal sealed partial class Interpreter
             if (element is ISpreadOperation spread)
             {
                 var source = Evaluate(spread.Operand, frame);
-                if (Unknown.Is(source)) return source;
+                if (Unknown.Is(source)) return Skipped(collection, frame);
                 if (source is object?[] array) items.AddRange(array);
                 else if (source is List<object?> list) items.AddRange(list);
                 else return Unsupported(spread, "this spread element", "only arrays and lists are spread");
@@ -180,7 +180,7 @@ internal sealed partial class Interpreter
     private object? VisitWith(IWithOperation with, Frame frame)
     {
         var original = Evaluate(with.Operand, frame);
-        if (Unknown.Is(original)) return original;
+        if (Unknown.Is(original)) return Skipped(with, frame);
         if (original is not InterpretedObject source)
             return Unsupported(with, "this 'with' expression", "only records and structs of this compilation are copied with 'with'");
         var copy = source.Copy();

@@ -62,6 +62,15 @@ internal sealed partial class Interpreter
             }
         }
 
+        // The body may have thrown in code that was skipped: a catch clause may then have run, and what it does is not
+        // known either; after it, the code runs on as after any catch.
+        if (completion == Completion.MaybeThrow && statement.Catches.Length > 0)
+        {
+            completion = Completion.Normal;
+            foreach (var clause in statement.Catches)
+                completion = Completion.Farther(completion, SkipStatement(clause.Handler, frame));
+        }
+
         if (statement.Finally is not null)
         {
             var afterFinally = Execute(statement.Finally, frame);

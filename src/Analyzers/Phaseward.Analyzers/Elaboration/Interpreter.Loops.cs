@@ -33,21 +33,15 @@ internal sealed partial class Interpreter
                 {
                     var condition = Condition(loop.Condition, frame);
                     if (condition is null)
-                    {
-                        Poison(loop.Body, frame);
-                        return Completion.Normal;
-                    }
+                        return SkipStatement(loop, frame);
 
                     if (condition.Value == loop.ConditionIsUntil)
                         return Completion.Normal;
                 }
 
                 first = false;
-                var completion = Execute(loop.Body, frame);
-                if (completion == Completion.Break)
-                    return Completion.Normal;
-                if (completion == Completion.Return)
-                    return completion;
+                if (AfterIteration(Execute(loop.Body, frame), loop, frame) is { } after)
+                    return after;
             }
         }
         finally
@@ -62,10 +56,7 @@ internal sealed partial class Interpreter
         // run, and while it is being typed it would run to the step or device budget: the loop is skipped, like any
         // code that does not compile (the compiler reports it), with what it assigns made unknown.
         if (HeaderDoesNotCompile(loop))
-        {
-            Poison(loop, frame);
-            return Completion.Normal;
-        }
+            return SkipStatement(loop, frame);
 
         foreach (var before in loop.Before)
             Execute(before, frame);
@@ -77,19 +68,12 @@ internal sealed partial class Interpreter
                 Step(loop);
                 var condition = Condition(loop.Condition, frame);
                 if (condition is null)
-                {
-                    Poison(loop.Body, frame);
-                    foreach (var bottom in loop.AtLoopBottom) Poison(bottom, frame);
-                    return Completion.Normal;
-                }
+                    return SkipStatement(loop, frame);
 
                 if (!condition.Value)
                     return Completion.Normal;
-                var completion = Execute(loop.Body, frame);
-                if (completion == Completion.Break)
-                    return Completion.Normal;
-                if (completion == Completion.Return)
-                    return completion;
+                if (AfterIteration(Execute(loop.Body, frame), loop, frame) is { } after)
+                    return after;
                 foreach (var bottom in loop.AtLoopBottom)
                     Execute(bottom, frame);
             }
@@ -139,9 +123,13 @@ internal sealed partial class Interpreter
             {
                 Step(loop);
                 var completion = RunForEachBody(loop, frame, value, variableType);
-                if (completion == Completion.Return)
-                    outcome = Completion.Return;
-                return completion != Completion.Break && completion != Completion.Return;
+                if (AfterIteration(completion, loop, frame) is not { } after)
+                    return true;
+                outcome = after;
+                // The iterator stops here; if the loop only may have stopped, what the iterator would do next is not known.
+                if (completion.IsMaybe)
+                    Poison(source, frame);
+                return false;
             }
             finally
             {
@@ -166,16 +154,12 @@ internal sealed partial class Interpreter
         if (streamed || collection is StreamedIterator)
             return outcome;
         if (Unknown.Is(collection))
-        {
-            Poison(loop.Body, frame);
-            return Completion.Normal;
-        }
+            return SkipStatement(loop, frame);
 
         if (collection is null && ThroughReference(source) is { } nullSource)
         {
             NullReference(loop.Collection, nullSource, "its elements");
-            Poison(loop.Body, frame);
-            return Completion.Normal;
+            return SkipStatement(loop, frame);
         }
 
         IEnumerable? items = collection switch
@@ -190,8 +174,7 @@ internal sealed partial class Interpreter
         if (items is null)
         {
             Unsupported(loop.Collection, "this foreach collection", "only arrays, strings, the library's collections and sequences, and iterators are enumerated");
-            Poison(loop.Body, frame);
-            return Completion.Normal;
+            return SkipStatement(loop, frame);
         }
 
         loops.Push(loop);
@@ -200,11 +183,8 @@ internal sealed partial class Interpreter
             foreach (var raw in items)
             {
                 Step(loop);
-                var completion = RunForEachBody(loop, frame, raw, variableType);
-                if (completion == Completion.Break)
-                    return Completion.Normal;
-                if (completion == Completion.Return)
-                    return completion;
+                if (AfterIteration(RunForEachBody(loop, frame, raw, variableType), loop, frame) is { } after)
+                    return after;
             }
 
             return Completion.Normal;
@@ -214,8 +194,7 @@ internal sealed partial class Interpreter
             // A lazy library sequence (OrderBy, Select...) called back a lambda whose value is not known: the iterations
             // left are skipped, and what the body assigns made unknown.
             UnknownFrom(e, loop.Collection);
-            Poison(loop.Body, frame);
-            return Completion.Normal;
+            return SkipStatement(loop, frame);
         }
         finally
         {

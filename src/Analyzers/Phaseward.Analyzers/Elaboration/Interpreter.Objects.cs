@@ -43,7 +43,7 @@ internal sealed partial class Interpreter : IObjectSemantics
         if (other is not InterpretedObject that || !SymbolEqualityComparer.Default.Equals(value.Type, that.Type))
             return false;
         foreach (var member in value.Members)
-            if (member.Key is not IParameterSymbol && !Equals(member.Value.Value, that.Find(member.Key)?.Value))
+            if (member.Key is not IParameterSymbol && !Equals(Read(member.Value, member.Key), MemberValue(that, member.Key)))
                 return false;
         return true;
     }
@@ -56,7 +56,7 @@ internal sealed partial class Interpreter : IObjectSemantics
             return System.Runtime.CompilerServices.RuntimeHelpers.GetHashCode(value);
         var combined = 17;
         foreach (var member in value.Members.Where(m => m.Key is not IParameterSymbol).OrderBy(m => m.Key.Name, StringComparer.Ordinal))
-            combined = combined * 31 + (member.Value.Value?.GetHashCode() ?? 0);
+            combined = combined * 31 + (Read(member.Value, member.Key)?.GetHashCode() ?? 0);
         return combined;
     }
 
@@ -137,6 +137,9 @@ internal sealed partial class Interpreter : IObjectSemantics
         return null;
     }
 
+    // A stored member of an object, read as the design's code reads it (null when it has none).
+    private object? MemberValue(InterpretedObject value, ISymbol member) => value.Find(member) is { } stored ? Read(stored, member) : null;
+
     /// <summary>The values of a record's positional parameters, in order (what its generated Deconstruct gives).</summary>
     private List<object?> PositionalValues(InterpretedObject record)
     {
@@ -144,7 +147,7 @@ internal sealed partial class Interpreter : IObjectSemantics
         var values = new List<object?>();
         if (constructor is null) return values;
         foreach (var parameter in constructor.Parameters)
-            values.Add(PositionalProperty(record.Type, parameter) is { } property ? record.Find(property)?.Value : record.Find(parameter)?.Value);
+            values.Add(PositionalProperty(record.Type, parameter) is { } property ? MemberValue(record, property) : MemberValue(record, parameter));
         return values;
     }
 
@@ -160,9 +163,9 @@ internal sealed partial class Interpreter : IObjectSemantics
                 if (member.IsStatic || member.DeclaredAccessibility != Accessibility.Public || member.IsImplicitlyDeclared && member is not IPropertySymbol)
                     continue;
                 if (member is IFieldSymbol field)
-                    yield return (field.Name, record.Find(field)?.Value);
+                    yield return (field.Name, MemberValue(record, field));
                 else if (member is IPropertySymbol { IsIndexer: false, GetMethod: not null } property && property.Name != "EqualityContract")
-                    yield return (property.Name, IsAutoProperty(property) ? record.Find(property)?.Value
+                    yield return (property.Name, IsAutoProperty(property) ? MemberValue(record, property)
                         : InvokeForLibrary(property.GetMethod!, record, Array.Empty<object?>()));
             }
     }

@@ -15,7 +15,7 @@ internal sealed partial class Interpreter
     private object? VisitBinary(IBinaryOperation binary, Frame frame)
     {
         var left = Evaluate(binary.LeftOperand, frame);
-        if (Unknown.Is(left)) return left;
+        if (Unknown.Is(left)) return Skipped(binary.OperatorMethod is null ? binary.RightOperand : binary, frame);
 
         if (binary.OperatorKind is BinaryOperatorKind.ConditionalAnd or BinaryOperatorKind.ConditionalOr && binary.OperatorMethod is null)
         {
@@ -26,7 +26,7 @@ internal sealed partial class Interpreter
         }
 
         var right = Evaluate(binary.RightOperand, frame);
-        if (Unknown.Is(right)) return right;
+        if (Unknown.Is(right)) return binary.OperatorMethod is null ? right : Skipped(binary, frame);
 
         if (binary.OperatorMethod is { } method)
             return CallOperator(binary, method, new[] { left, right }, frame);
@@ -88,7 +88,7 @@ internal sealed partial class Interpreter
     private object? VisitUnary(IUnaryOperation unary, Frame frame)
     {
         var operand = Evaluate(unary.Operand, frame);
-        if (Unknown.Is(operand)) return operand;
+        if (Unknown.Is(operand)) return unary.OperatorMethod is null ? operand : Skipped(unary, frame);
         if (unary.OperatorKind == UnaryOperatorKind.Hat && operand is int fromEnd)
             return new IndexValue(fromEnd, fromEnd: true);
         if (unary.OperatorMethod is { } method)
@@ -111,7 +111,7 @@ internal sealed partial class Interpreter
     {
         var value = Evaluate(conversion.Operand, frame);
         if (Unknown.Is(value))
-            return value;
+            return conversion.OperatorMethod is null ? value : Skipped(conversion, frame);
         // Code that does not compile (half-typed, or a type that does not convert) is never given a meaning.
         if (!conversion.Conversion.Exists)
             return Unsupported(conversion, "this conversion", "it does not compile");
@@ -187,10 +187,10 @@ internal sealed partial class Interpreter
                     break;
                 case IInterpolationOperation hole:
                     var value = Evaluate(hole.Expression, frame);
-                    if (Unknown.Is(value)) return value;
+                    if (Unknown.Is(value)) return Skipped(interpolated, frame);
                     var alignment = hole.Alignment is null ? null : Evaluate(hole.Alignment, frame);
                     var format = hole.FormatString is null ? null : Evaluate(hole.FormatString, frame) as string;
-                    if (Unknown.Is(alignment)) return alignment;
+                    if (Unknown.Is(alignment)) return Skipped(interpolated, frame);
                     var composite = "{0" + (alignment is null ? "" : "," + System.Convert.ToInt32(alignment, CultureInfo.InvariantCulture).ToString(CultureInfo.InvariantCulture))
                         + (format is null ? "" : ":" + format) + "}";
                     text.Append(string.Format(CultureInfo.InvariantCulture, composite, value is bool b ? (b ? "True" : "False") : value));

@@ -116,6 +116,15 @@ internal sealed partial class Interpreter
     // Resources of 'using var' declarations, per block that has them (innermost last): disposed when the block ends.
     private readonly Stack<List<object?>> usingScopes = new();
 
+    // How each piece of skipped code can jump out of itself (see EscapeOf).
+    private readonly Dictionary<IOperation, (Completion Escape, Completion UnlessThrown)> escapes = new();
+
+    // Writes in code the elaborator did not run, and when: what they may have changed reads as unknown (see Read).
+    private readonly SkippedWrites skippedWrites = new();
+
+    // What skipped code may write, found from its source (made when code is first skipped).
+    private SkippedEffects? skippedEffects;
+
     // Bytes charged against the memory budget (see ChargeMemory).
     private long allocatedBytes;
 
