@@ -20,7 +20,7 @@ internal sealed partial class Interpreter
         }
 
         var place = PlaceOf(assignment.Target, frame);
-        var value = CopyIfValue(Evaluate(assignment.Value, frame));
+        var value = CopyIfValue(Evaluate(assignment.Value, frame), assignment.Target.Type, frame);
         if (!place.IsKnown) return Skipped(assignment, frame); // a write to a place not known: any that it may be
         place.Set(value);
         return value;

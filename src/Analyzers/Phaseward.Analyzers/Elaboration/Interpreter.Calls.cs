@@ -257,15 +257,15 @@ internal sealed partial class Interpreter
             frameSizes.TryGetValue(body, out var expectedVariables);
             var frame = new Frame(method.OriginalDefinition, parent, method.IsStatic && method.MethodKind != MethodKind.LocalFunction ? null : instance, expectedVariables);
             var parameters = method.OriginalDefinition.Parameters;
+            frame.TypeArguments = TypeArgumentsOf(method, caller);
             for (var i = 0; i < parameters.Length && i < arguments.Length; i++)
             {
                 if (i < references.Length && references[i] is { } variable)
                     frame.Bind(parameters[i], variable);
                 else
-                    frame.Declare(parameters[i], CopyIfValue(arguments[i]));
+                    frame.Declare(parameters[i], CopyIfValue(arguments[i], parameters[i].Type, frame));
             }
 
-            frame.TypeArguments = TypeArgumentsOf(method, caller);
             if (IsIterator(body))
             {
                 if (streamTo is { } stream && ReferenceEquals(stream.Site, site))
@@ -434,7 +434,10 @@ internal sealed partial class Interpreter
     /// </summary>
     private static bool IsVariable(IOperation operation, Frame frame) => operation switch
     {
-        ILocalReferenceOperation local => local.Local.RefKind != RefKind.RefReadOnly,
+        // A struct reached through a reference type (object, an interface) is a box: the call changes the box itself.
+        _ when IsReferenceType(operation.Type, frame) => true,
+        // A foreach or using variable is read-only: C# calls a method that may change it on a copy.
+        ILocalReferenceOperation local => local.Local.RefKind != RefKind.RefReadOnly && !local.Local.IsForEach && !local.Local.IsUsing,
         IParameterReferenceOperation parameter => parameter.Parameter.RefKind is not (RefKind.In or RefKind.RefReadOnlyParameter),
         IInstanceReferenceOperation or IArrayElementReferenceOperation => true,
         IFieldReferenceOperation field => (!field.Field.IsReadOnly || IsConstructorOf(frame, field.Field.ContainingType))

@@ -115,7 +115,7 @@ internal sealed partial class Interpreter
             // Elements of a struct type are values: one default each, not one shared by every slot.
             items[0] = initial;
             for (var i = 1; i < length; i++)
-                items[i] = CopyIfValue(initial);
+                items[i] = CopyIfValue(initial, element, frame);
         }
         else
         {

@@ -64,7 +64,7 @@ internal sealed partial class Interpreter
             var frame = new Frame(lambda.Symbol, closure.Captured, closure.Captured.Instance);
             var parameters = lambda.Symbol.Parameters;
             for (var i = 0; i < parameters.Length; i++)
-                frame.Declare(parameters[i], i < arguments.Length ? CopyIfValue(arguments[i]) : Unknown.Value);
+                frame.Declare(parameters[i], i < arguments.Length ? CopyIfValue(arguments[i], parameters[i].Type, frame) : Unknown.Value);
             LeaveBody(Execute(lambda.Body, frame), frame);
             return frame.ReturnValue;
         }

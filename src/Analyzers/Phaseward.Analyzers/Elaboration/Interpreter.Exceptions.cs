@@ -111,7 +111,8 @@ internal sealed partial class Interpreter
                     resources.Add(frame.Find(declarator.Symbol)?.Value);
                 break;
             default:
-                resources.Add(Evaluate(statement.Resources, frame));
+                // 'using (s)' disposes a copy of a struct held in a variable, as C# does.
+                resources.Add(CopyIfValue(Evaluate(statement.Resources, frame), statement.Resources.Type, frame));
                 break;
         }
 

@@ -211,7 +211,8 @@ internal sealed partial class Interpreter
         switch (loop.LoopControlVariable)
         {
             case IVariableDeclaratorOperation declarator:
-                frame.Declare(declarator.Symbol, item);
+                // The loop variable is a copy of a struct element: what the body does to it leaves the element as it was.
+                frame.Declare(declarator.Symbol, CopyIfValue(item, declarator.Symbol.Type, frame));
                 break;
             default:
                 Deconstruct(loop.LoopControlVariable, item, frame);

@@ -88,8 +88,16 @@ internal sealed partial class Interpreter : IObjectSemantics
         return InvokeForLibrary(compareTo, value, new[] { other }) is int order ? order : throw new UnknownValueException();
     }
 
-    /// <summary>Struct values are copied when stored or passed; everything else is shared by reference.</summary>
-    private static object? CopyIfValue(object? value) => value is InterpretedObject { Type.IsValueType: true } structValue ? structValue.Copy() : value;
+    /// <summary>
+    /// Struct values are copied when stored or passed; everything else is shared by reference. Stored where the type is
+    /// a reference type (object, an interface) a struct is a box, made by the boxing conversion: then the box is shared.
+    /// </summary>
+    private object? CopyIfValue(object? value, ITypeSymbol? storedAs, Frame frame)
+        => value is InterpretedObject { Type.IsValueType: true } structValue && !IsReferenceType(storedAs, frame) ? structValue.Copy() : value;
+
+    /// <summary>Whether a type is a reference type where the code runs (a type parameter: what it stands for there).</summary>
+    private static bool IsReferenceType(ITypeSymbol? type, Frame frame)
+        => (type is ITypeParameterSymbol parameter ? frame.TypeArgumentOf(parameter) : type)?.IsReferenceType == true;
 
     /// <summary>A call of a member the design's type does not declare in source: generated record members, object's members.</summary>
     private object? CallObjectMember(IInvocationOperation invocation, InterpretedObject self, IMethodSymbol method, Frame frame)

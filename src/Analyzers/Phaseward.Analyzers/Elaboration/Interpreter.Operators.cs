@@ -17,6 +17,20 @@ internal sealed partial class Interpreter
         var left = Evaluate(binary.LeftOperand, frame);
         if (Unknown.Is(left)) return Skipped(binary.OperatorMethod is null ? binary.RightOperand : binary, frame);
 
+        if (binary.OperatorKind is BinaryOperatorKind.ConditionalAnd or BinaryOperatorKind.ConditionalOr && binary.OperatorMethod is { } userOperator)
+        {
+            // A user-defined && or ||: C# asks the type's operator false (for &&) or true (for ||) whether the left
+            // operand decides, and only then evaluates the right one and calls & or |.
+            var decidesName = binary.OperatorKind == BinaryOperatorKind.ConditionalAnd ? "op_False" : "op_True";
+            if (userOperator.ContainingType?.GetMembers(decidesName).OfType<IMethodSymbol>().FirstOrDefault() is not { } decides)
+                return Unsupported(binary, "this logical operator", "its type's operator true or false was not found");
+            var decided = CallOperator(binary, decides, new[] { left }, frame);
+            if (decided is true) return left;
+            if (decided is not false) return Skipped(binary, frame);
+            var rightOperand = Evaluate(binary.RightOperand, frame);
+            return Unknown.Is(rightOperand) ? Skipped(binary, frame) : CallOperator(binary, userOperator, new[] { left, rightOperand }, frame);
+        }
+
         if (binary.OperatorKind is BinaryOperatorKind.ConditionalAnd or BinaryOperatorKind.ConditionalOr && binary.OperatorMethod is null)
         {
             if (left is not bool l) return Unsupported(binary, "this logical operator", "its operands are not bool");
@@ -112,6 +126,10 @@ internal sealed partial class Interpreter
         var value = Evaluate(conversion.Operand, frame);
         if (Unknown.Is(value))
             return conversion.OperatorMethod is null ? value : Skipped(conversion, frame);
+        // Boxing a struct makes a box of its own (later copies of the box share it); unboxing copies the value out.
+        if (value is InterpretedObject { Type.IsValueType: true } structValue
+            && (conversion.Operand.Type?.IsReferenceType == true) != (conversion.Type?.IsReferenceType == true))
+            value = structValue.Copy();
         // Code that does not compile (half-typed, or a type that does not convert) is never given a meaning.
         if (!conversion.Conversion.Exists)
             return Unsupported(conversion, "this conversion", "it does not compile");

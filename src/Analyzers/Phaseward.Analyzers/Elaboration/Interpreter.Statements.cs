@@ -21,7 +21,7 @@ internal sealed partial class Interpreter
                 if (declarator.Symbol.IsRef && initializer is not null)
                     BindRefLocal(declarator.Symbol, initializer.Value, frame);
                 else
-                    frame.Declare(declarator.Symbol, initializer is null ? DefaultOf(declarator.Symbol.Type, frame) : CopyIfValue(Evaluate(initializer.Value, frame)));
+                    frame.Declare(declarator.Symbol, initializer is null ? DefaultOf(declarator.Symbol.Type, frame) : CopyIfValue(Evaluate(initializer.Value, frame), declarator.Symbol.Type, frame));
             }
 
         return Completion.Normal;
@@ -54,7 +54,7 @@ internal sealed partial class Interpreter
 
     private Completion VisitReturn(IReturnOperation ret, Frame frame)
     {
-        frame.ReturnValue = ret.ReturnedValue is null ? null : CopyIfValue(Evaluate(ret.ReturnedValue, frame));
+        frame.ReturnValue = ret.ReturnedValue is null ? null : CopyIfValue(Evaluate(ret.ReturnedValue, frame), ret.ReturnedValue.Type, frame);
         return Completion.Return;
     }
 
@@ -179,7 +179,7 @@ internal sealed partial class Interpreter
     private Completion VisitYieldReturn(IReturnOperation yielded, Frame frame)
     {
         Step(yielded);
-        var value = yielded.ReturnedValue is null ? null : CopyIfValue(Evaluate(yielded.ReturnedValue, frame));
+        var value = yielded.ReturnedValue is null ? null : CopyIfValue(Evaluate(yielded.ReturnedValue, frame), yielded.ReturnedValue.Type, frame);
         var owner = frame;
         while (owner.Yielded is null && owner.Consumer is null && owner.LexicalParent is not null)
             owner = owner.LexicalParent;
