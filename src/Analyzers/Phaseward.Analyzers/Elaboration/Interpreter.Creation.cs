@@ -173,6 +173,29 @@ internal sealed partial class Interpreter
     private object? VisitObjectOrCollectionInitializer(IObjectOrCollectionInitializerOperation initializer, Frame frame)
         => Unsupported(initializer, "this initializer", "it is only interpreted as part of an object creation");
 
+    /// <summary>A nested initializer, <c>new Outer { Inner = { X = 1 }, Items = { a, b } }</c>: it fills in the object the
+    /// member already holds (it makes none).</summary>
+    private object? VisitMemberInitializer(IMemberInitializerOperation nested, Frame frame)
+    {
+        var member = Evaluate(nested.InitializedMember, frame);
+        if (Unknown.Is(member)) return Skipped(nested.Initializer, frame);
+        if (member is null)
+            return NullReference(nested, nested.InitializedMember, "its initializer") ?? Unknown.Value;
+        implicitReceivers.Push(member);
+        try
+        {
+            foreach (var initializer in nested.Initializer.Initializers)
+                if (Unknown.Is(Evaluate(initializer, frame)))
+                    return Unknown.Value;
+        }
+        finally
+        {
+            implicitReceivers.Pop();
+        }
+
+        return member;
+    }
+
     private object? VisitAnonymousObjectCreation(IAnonymousObjectCreationOperation creation, Frame frame)
         => Unsupported(creation, "an anonymous object", "anonymous types are outside the subset the elaborator interprets");
 

@@ -139,6 +139,8 @@ internal sealed partial class Interpreter
                 return VisitTuple((ITupleOperation)operation, frame);
             case OperationKind.ObjectOrCollectionInitializer:
                 return VisitObjectOrCollectionInitializer((IObjectOrCollectionInitializerOperation)operation, frame);
+            case OperationKind.MemberInitializer:
+                return VisitMemberInitializer((IMemberInitializerOperation)operation, frame);
             case OperationKind.AnonymousObjectCreation:
                 return VisitAnonymousObjectCreation((IAnonymousObjectCreationOperation)operation, frame);
             case OperationKind.With:

@@ -1,5 +1,7 @@
+using System;
 using System.Collections;
 using System.Collections.Generic;
+using System.Linq;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Operations;
@@ -153,6 +155,48 @@ internal sealed partial class Interpreter
 
         if (streamed || collection is StreamedIterator)
             return outcome;
+
+        // A sequence of the design's own type (a bus that is IEnumerable<Net>): its GetEnumerator, an iterator streamed
+        // into the loop like any other, or one that hands out a library enumerator.
+        if (collection is InterpretedObject sequence)
+        {
+            if (GetEnumeratorOf(sequence.Type) is not { } getEnumerator)
+            {
+                Unsupported(loop.Collection, "this foreach collection", "its type has no GetEnumerator method of this compilation");
+                return SkipStatement(loop, frame);
+            }
+
+            streamTo = (loop.Collection, Consume);
+            try
+            {
+                collection = InvokeUser(getEnumerator, sequence, Array.Empty<object?>(), Array.Empty<Variable?>(), loop.Collection, frame);
+            }
+            finally
+            {
+                streamTo = outerStream;
+            }
+
+            if (streamed || collection is StreamedIterator)
+                return outcome;
+            if (collection is IEnumerator enumerator)
+            {
+                try
+                {
+                    collection = Drained(enumerator);
+                }
+                catch (UnknownValueException e)
+                {
+                    UnknownFrom(e, loop.Collection);
+                    return SkipStatement(loop, frame);
+                }
+            }
+            else if (collection is InterpretedObject)
+            {
+                Unsupported(loop.Collection, "this foreach collection", "an enumerator written in the design (its own MoveNext and Current) is not run");
+                return SkipStatement(loop, frame);
+            }
+        }
+
         if (Unknown.Is(collection))
             return SkipStatement(loop, frame);
 
@@ -200,6 +244,31 @@ internal sealed partial class Interpreter
         {
             loops.Pop();
         }
+    }
+
+    /// <summary>The GetEnumerator a foreach calls on an object of the design's type: a public one, as C# looks first, else
+    /// its implementation of IEnumerable&lt;T&gt; or IEnumerable.</summary>
+    private static IMethodSymbol? GetEnumeratorOf(INamedTypeSymbol type)
+    {
+        for (var current = type; current is not null; current = current.BaseType)
+            foreach (var member in current.GetMembers("GetEnumerator"))
+                if (member is IMethodSymbol { Parameters.Length: 0, IsStatic: false, DeclaredAccessibility: Accessibility.Public } method)
+                    return method;
+        foreach (var contract in type.AllInterfaces.OrderBy(i => i.IsGenericType ? 0 : 1))
+            if (contract.Name == "IEnumerable" && contract.ContainingNamespace?.ToDisplayString() is "System.Collections.Generic" or "System.Collections"
+                && contract.GetMembers("GetEnumerator").FirstOrDefault() is { } declared
+                && type.FindImplementationForInterfaceMember(declared) is IMethodSymbol implementation)
+                return implementation;
+        return null;
+    }
+
+    // The values a library enumerator the design's GetEnumerator returned hands out, in order.
+    private static List<object?> Drained(IEnumerator enumerator)
+    {
+        var values = new List<object?>();
+        while (enumerator.MoveNext())
+            values.Add(enumerator.Current);
+        return values;
     }
 
     /// <summary>One iteration of a foreach: the loop variable (or deconstruction) set to the item, then the body.</summary>
