@@ -119,6 +119,9 @@ internal sealed partial class Interpreter
         var clrArguments = arguments;
         for (var i = 0; i < parameterTypes.Length; i++)
         {
+            // A lazy sequence made in generic code (its element type a type parameter there) meets its static type here.
+            if (!isDsl && i < method.Parameters.Length)
+                arguments[i] = WithErasedDefaults(arguments[i], method.Parameters[i].Type);
             clrArguments[i] = ToClr(arguments[i], parameterTypes[i]);
             if (clrArguments[i] is Unconvertible)
                 return Unsupported(site, "the call to " + Describe(method), "argument " + (i + 1) + " cannot be passed to the library as " + parameterTypes[i].Name);
@@ -142,7 +145,7 @@ internal sealed partial class Interpreter
             if (references is not null)
                 for (var i = 0; i < references.Length && i < clrArguments.Length; i++)
                     if (references[i] is { } reference)
-                        reference.Value = FromClr(clrArguments[i]);
+                        reference.Value = WithErasedDefaults(FromClr(clrArguments[i]), method.Parameters[i].Type);
             if (circuit is not null && (circuit.DeviceCount > limits.DeviceBudget || circuit.NetCount > limits.DeviceBudget))
             {
                 Report(RuleCatalog.ElaborationBudgetExceeded.Id, loops.Count > 0 ? loops.Peek().Syntax : site.Syntax, DesignName,
@@ -150,9 +153,11 @@ internal sealed partial class Interpreter
                 throw new ElaborationStopped();
             }
 
-            if (!isDsl)
-                Charge(site, result);
-            return FromClr(result);
+            if (isDsl)
+                return FromClr(result);
+            Charge(site, result);
+            RestoreErasedDefaults(site, clrArguments);
+            return WithErasedDefaults(FromClr(result), method.MethodKind == MethodKind.Constructor ? null : method.ReturnType);
         }
         catch (TargetInvocationException e) when (e.InnerException is ElaborationStopped or UnknownValueException or DesignException
             || e.InnerException?.InnerException is UnknownValueException)
