@@ -23,6 +23,12 @@ public class LibraryBoundaryTests
     [InlineData("Boundary.ClearedLongs")]
     [InlineData("Boundary.MissingKey")]
     [InlineData("Boundary.GenericPadding")]
+    [InlineData("Boundary.LogAndRethrow")]
+    [InlineData("Boundary.PlacedTwice")]
+    [InlineData("Boundary.TupleKeys")]
+    [InlineData("Boundary.SetAgainstSet")]
+    [InlineData("Boundary.GenericCompare")]
+    [InlineData("Boundary.RangesAndComparers")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
 
     [Fact]
@@ -113,6 +119,83 @@ public class LibraryBoundaryTests
                 {
                     private static IEnumerable<T> Padded<T>(List<T> items) => items.DefaultIfEmpty();
                     protected override void Describe(Circuit c) => Chain(c, Padded(new List<int>()).Sum() + Padded(new List<int> { 2 }).Sum() + 1, "gp");
+                }
+                public sealed class LogAndRethrow : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var log = "";
+                        try
+                        {
+                            try { throw new InvalidOperationException("bus"); }
+                            catch (InvalidOperationException) { log += "seen"; throw; }
+                        }
+                        catch (InvalidOperationException e) { log += "_" + e.Message; }
+                        try
+                        {
+                            try { throw new ArgumentException("lane"); }
+                            catch (ArgumentException e) { e = new ArgumentException("other"); log += "_" + e.Message; throw; }
+                        }
+                        catch (ArgumentException e) { log += "_" + e.Message; }
+                        Mark(c, log);
+                    }
+                }
+                public sealed class Cell : Block { protected override void Describe(Circuit c) => c.Inverter(c.Input("i"), "n"); }
+                public sealed class PlacedTwice : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        c.Place(new Cell(), "u");
+                        try { c.Place(new Cell(), "u"); }
+                        catch (ArgumentException e) { Mark(c, "p" + e.ParamName + e.Message.Length); }
+                    }
+                }
+                public sealed record Lane(string Name);
+                public sealed class TupleKeys : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var depth = new Dictionary<(int Row, string Col), int> { [(1, "a")] = 5 };
+                        depth[(2, "b")] = 6;
+                        depth[(1, "a")] += 1;
+                        var seen = new HashSet<(int, int)> { (1, 2), (1, 2), (2, 1) };
+                        var lanes = new Dictionary<(Lane, int), string> { [(new Lane("x"), 1)] = "first" };
+                        Mark(c, "k" + depth[(1, "a")] + depth.ContainsKey((2, "b")) + depth.ContainsKey((2, "a")) + seen.Count
+                            + new[] { (1, 2), (1, 2), (2, 2) }.Distinct().Count() + lanes[(new Lane("x"), 1)]);
+                        Chain(c, depth[(1, "a")] - seen.Count, "t");
+                    }
+                }
+                public sealed class SetAgainstSet : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var ports = new HashSet<int> { 5, 3, 1, 7 };
+                        ports.SymmetricExceptWith(new HashSet<int> { 3, 4, 5 });
+                        var pins = new HashSet<int> { 5, 3, 1, 7 };
+                        pins.SymmetricExceptWith(new[] { 3, 4, 5 });
+                        Mark(c, string.Concat(ports) + "_" + string.Concat(pins) + ports.SetEquals(new HashSet<int> { 1, 4, 7 }));
+                    }
+                }
+                public sealed class GenericCompare : Base
+                {
+                    private static T Larger<T>(T a, T b) where T : IComparable<T> => a.CompareTo(b) >= 0 ? a : b;
+                    protected override void Describe(Circuit c)
+                    {
+                        Mark(c, "m" + Larger(3, 7) + Larger("ab", "b") + Larger(2L, 1L));
+                        Chain(c, Larger(2, 4), "g");
+                    }
+                }
+                public sealed class RangesAndComparers : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var widths = new[] { 5, 3, 8, 1 };
+                        var names = new List<string> { "beta", "Alpha", "gamma" };
+                        var caseless = new HashSet<string>(StringComparer.OrdinalIgnoreCase) { "Bus", "BUS", "net" };
+                        var byName = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase) { ["Clk"] = 2 };
+                        Mark(c, widths.Take(..2).Sum() + "_" + widths.Take(^2..).Sum() + "_" + string.Join("_", names.OrderBy(n => n, StringComparer.Ordinal))
+                            + caseless.Count + byName["CLK"] + names.Max(StringComparer.Ordinal));
+                    }
                 }
             }
             """));

@@ -107,6 +107,8 @@ internal sealed partial class Interpreter
             return Unsupported(site, "the call to " + Describe(method), isDsl
                 ? "the Phaseward assembly loaded by the compiler has no such member (is it older than the one the project references?)"
                 : "the library member was not found for the values at hand");
+        if (receiver is not null && !isDsl)
+            member = Library.ForReceiver(member, receiver);
         if (receiver is not null && member.DeclaringType is { IsPrimitive: true } primitive && receiver.GetType() != primitive)
             receiver = ToClr(receiver, primitive);
         if (!isDsl && !ChargeSizes(site, member, arguments))

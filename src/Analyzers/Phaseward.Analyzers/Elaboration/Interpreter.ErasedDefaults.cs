@@ -32,7 +32,7 @@ internal sealed partial class Interpreter
                 for (var i = 0; i < list.Count; i++)
                     list[i] ??= DefaultOf(element);
                 return list;
-            case IEnumerable sequence when value is not ICollection && IsPlainSequence(staticType):
+            case IEnumerable sequence when !IsMaterialized(value) && IsPlainSequence(staticType):
                 // A lazy sequence (DefaultIfEmpty) yields its erased defaults later, to whoever enumerates it.
                 return WithDefaults(sequence, element);
             default:

@@ -45,8 +45,9 @@ internal sealed partial class Interpreter
             var handler = statement.Catches.FirstOrDefault(clause => Catches(clause, uncaught.Thrown, frame));
             if (handler is not null)
             {
+                // 'throw;' rethrows the exception caught, whether or not the clause names it (and whatever its variable now holds).
+                caught.Push(uncaught.Thrown);
                 uncaught = null;
-                caught.Push(handler.ExceptionDeclarationOrExpression is null ? new object() : frame.Find(((IVariableDeclaratorOperation)handler.ExceptionDeclarationOrExpression).Symbol)!.Value!);
                 try
                 {
                     completion = Execute(handler.Handler, frame);
