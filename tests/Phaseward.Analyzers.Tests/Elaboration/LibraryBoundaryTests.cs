@@ -29,6 +29,7 @@ public class LibraryBoundaryTests
     [InlineData("Boundary.SetAgainstSet")]
     [InlineData("Boundary.GenericCompare")]
     [InlineData("Boundary.RangesAndComparers")]
+    [InlineData("Boundary.StaticInit")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
 
     [Fact]
@@ -195,6 +196,25 @@ public class LibraryBoundaryTests
                         var byName = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase) { ["Clk"] = 2 };
                         Mark(c, widths.Take(..2).Sum() + "_" + widths.Take(^2..).Sum() + "_" + string.Join("_", names.OrderBy(n => n, StringComparer.Ordinal))
                             + caseless.Count + byName["CLK"] + names.Max(StringComparer.Ordinal));
+                    }
+                }
+                public static class Logbook { public static readonly List<string> Lines = new(); public static int Note(string s) { Lines.Add(s); return 2; } }
+                public static class Strict { public static int Seed = Logbook.Note("field"); static Strict() { Logbook.Lines.Add("cctor"); } public static void Touch() => Logbook.Lines.Add("touch"); public static int Level => 3; }
+                public static class Gauge { static Gauge() { Logbook.Lines.Add("gauge"); } public static int Level => 1; }
+                public sealed class Sensor { static Sensor() { Logbook.Lines.Add("sensor"); } public Sensor() { Logbook.Lines.Add("made"); } }
+                public static class Relaxed { public static int Seed = Logbook.Note("relaxed"); public static void Touch() => Logbook.Lines.Add("loose"); }
+                public sealed class StaticInit : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        Logbook.Lines.Add("start");
+                        Strict.Touch();
+                        _ = new Sensor();
+                        var level = Gauge.Level;
+                        Relaxed.Touch();
+                        Logbook.Lines.Add("mid");
+                        var seed = Relaxed.Seed + Strict.Seed + level;
+                        Mark(c, string.Join("_", Logbook.Lines) + seed);
                     }
                 }
             }

@@ -43,6 +43,8 @@ internal sealed partial class Interpreter
             // Run even when an argument is unknown: what depends on it stays unknown inside, and the rest of what the
             // method does (state it changes, devices it makes) is not lost.
             var (arguments, references) = Arguments(invocation.Arguments, method, frame, keepUnknown: true);
+            if (method is { IsStatic: true, MethodKind: MethodKind.Ordinary, ContainingType: { } owner } && !InitializeForUse(StaticOwner(owner, frame), invocation.Syntax))
+                return Unknown.Value;
             return InvokeUser(method, receiver as InterpretedObject ?? (method.IsStatic ? null : frame.Instance), arguments!, references, invocation, frame);
         }
 
