@@ -30,6 +30,7 @@ public class LibraryBoundaryTests
     [InlineData("Boundary.GenericCompare")]
     [InlineData("Boundary.RangesAndComparers")]
     [InlineData("Boundary.StaticInit")]
+    [InlineData("Boundary.FilterFirst")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
 
     [Fact]
@@ -215,6 +216,31 @@ public class LibraryBoundaryTests
                         Logbook.Lines.Add("mid");
                         var seed = Relaxed.Seed + Strict.Seed + level;
                         Mark(c, string.Join("_", Logbook.Lines) + seed);
+                    }
+                }
+                public sealed class FilterFirst : Base
+                {
+                    private readonly List<string> trail = new();
+                    private bool Note(string step, bool verdict) { trail.Add(step); return verdict; }
+                    private void Fail(string why) { try { throw new InvalidOperationException(why); } finally { trail.Add("inner-finally"); } }
+                    protected override void Describe(Circuit c)
+                    {
+                        try { Fail("clock"); }
+                        catch (InvalidOperationException e) when (Note("filter-" + e.Message, true)) { trail.Add("caught"); }
+                        try
+                        {
+                            try { throw new ArgumentException("skew"); }
+                            catch (ArgumentException) when (Note("declined", false)) { trail.Add("never"); }
+                            finally { trail.Add("finally2"); }
+                        }
+                        catch (ArgumentException e) when (Note("outer", e.Message == "skew")) { trail.Add("outer-caught"); }
+                        try
+                        {
+                            try { throw new InvalidOperationException("drive"); }
+                            catch (InvalidOperationException) when (((string?)null)!.Length > 0) { trail.Add("never"); }
+                        }
+                        catch (Exception e) { trail.Add("kept-" + e.Message + (e is InvalidOperationException)); }
+                        Mark(c, string.Join("_", trail));
                     }
                 }
             }
