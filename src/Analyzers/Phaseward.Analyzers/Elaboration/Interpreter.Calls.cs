@@ -43,6 +43,8 @@ internal sealed partial class Interpreter
             // Run even when an argument is unknown: what depends on it stays unknown inside, and the rest of what the
             // method does (state it changes, devices it makes) is not lost.
             var (arguments, references) = Arguments(invocation.Arguments, method, frame, keepUnknown: true);
+            if (method is { IsStatic: true, MethodKind: MethodKind.Ordinary, ContainingType: { } owner } && !InitializeForUse(StaticOwner(owner, frame), invocation.Syntax))
+                return Unknown.Value;
             return InvokeUser(method, receiver as InterpretedObject ?? (method.IsStatic ? null : frame.Instance), arguments!, references, invocation, frame);
         }
 
@@ -110,6 +112,8 @@ internal sealed partial class Interpreter
             return Unsupported(site, "the call to " + Describe(method), isDsl
                 ? "the Phaseward assembly loaded by the compiler has no such member (is it older than the one the project references?)"
                 : "the library member was not found for the values at hand");
+        if (receiver is not null && !isDsl)
+            member = Library.ForReceiver(member, receiver);
         if (receiver is not null && member.DeclaringType is { IsPrimitive: true } primitive && receiver.GetType() != primitive)
             receiver = ToClr(receiver, primitive);
         if (!isDsl && !ChargeSizes(site, member, arguments))
@@ -122,6 +126,9 @@ internal sealed partial class Interpreter
         var clrArguments = arguments;
         for (var i = 0; i < parameterTypes.Length; i++)
         {
+            // A lazy sequence made in generic code (its element type a type parameter there) meets its static type here.
+            if (!isDsl && i < method.Parameters.Length)
+                arguments[i] = WithErasedDefaults(arguments[i], method.Parameters[i].Type);
             clrArguments[i] = ToClr(arguments[i], parameterTypes[i]);
             if (clrArguments[i] is Unconvertible)
                 return Unsupported(site, "the call to " + Describe(method), "argument " + (i + 1) + " cannot be passed to the library as " + parameterTypes[i].Name);
@@ -145,7 +152,7 @@ internal sealed partial class Interpreter
             if (references is not null)
                 for (var i = 0; i < references.Length && i < clrArguments.Length; i++)
                     if (references[i] is { } reference)
-                        reference.Value = FromClr(clrArguments[i]);
+                        reference.Value = WithErasedDefaults(FromClr(clrArguments[i]), method.Parameters[i].Type);
             if (circuit is not null && (circuit.DeviceCount > limits.DeviceBudget || circuit.NetCount > limits.DeviceBudget))
             {
                 Report(RuleCatalog.ElaborationBudgetExceeded.Id, loops.Count > 0 ? loops.Peek().Syntax : site.Syntax, DesignName,
@@ -153,9 +160,11 @@ internal sealed partial class Interpreter
                 throw new ElaborationStopped();
             }
 
-            if (!isDsl)
-                Charge(site, result);
-            return FromClr(result);
+            if (isDsl)
+                return FromClr(result);
+            Charge(site, result);
+            RestoreErasedDefaults(site, clrArguments);
+            return WithErasedDefaults(FromClr(result), method.MethodKind == MethodKind.Constructor ? null : method.ReturnType);
         }
         catch (TargetInvocationException e) when (e.InnerException is ElaborationStopped or UnknownValueException or DesignException
             || e.InnerException?.InnerException is UnknownValueException)

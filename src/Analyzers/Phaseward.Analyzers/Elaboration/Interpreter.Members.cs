@@ -136,7 +136,9 @@ internal sealed partial class Interpreter
             return Unsupported(reference, "property " + Describe(property), "it has no getter");
         Step(reference);
         var (arguments, references) = Arguments(reference.Arguments, getter, frame);
-        return arguments is null ? Unknown.Value : InvokeUser(getter, instance, arguments, references, reference, frame);
+        if (arguments is null || property.IsStatic && !InitializeForUse(StaticOwner(property.ContainingType, frame), reference.Syntax))
+            return Unknown.Value;
+        return InvokeUser(getter, instance, arguments, references, reference, frame);
     }
 
     /// <summary>A property that stores its value (auto-property, or a record's positional property).</summary>
@@ -305,6 +307,23 @@ internal sealed partial class Interpreter
             failedTypes[type] = e.Thrown as Exception;
             throw new DesignException(TypeInitializationFailure(type, e.Thrown as Exception), e.Site);
         }
+    }
+
+    /// <summary>
+    /// A static method or property of the type is called, or an object of it made: a type with a static constructor
+    /// (not beforefieldinit) is initialized first, as C# guarantees. One without is initialized at the first read of
+    /// one of its static fields (<see cref="StaticVariable"/>), as the .NET run does. False when its initialization
+    /// failed earlier: the TypeInitializationException is raised again.
+    /// </summary>
+    private bool InitializeForUse(INamedTypeSymbol type, SyntaxNode site)
+    {
+        if (!session.IsInSource(type) || !type.StaticConstructors.Any(c => !c.IsImplicitlyDeclared))
+            return true;
+        InitializeStatics(type);
+        if (!failedTypes.TryGetValue(type, out var failure))
+            return true;
+        Raise(site, TypeInitializationFailure(type, failure));
+        return false;
     }
 
     private static TypeInitializationException TypeInitializationFailure(INamedTypeSymbol type, Exception? inner)

@@ -79,7 +79,12 @@ internal sealed partial class Interpreter
         if (condition is null)
             return true;
         var value = Evaluate(condition, frame);
-        return value is bool b ? b : null;
+        if (value is bool b)
+            return b;
+        // Unknown was reported where it arose; anything else (a null the library left) must not skip the code silently.
+        if (!Unknown.Is(value))
+            Unsupported(condition, "this condition", "its value is " + (value is null ? "null" : "a " + value.GetType().Name) + ", not true or false");
+        return null;
     }
 
     // A switch section's break (or one it may have made) ends the switch only.

@@ -2,6 +2,7 @@ using System;
 using System.Collections.Generic;
 using System.Threading;
 using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Operations;
 using Phaseward.Netlists;
 
 namespace Phaseward.Analyzers.Elaboration;
@@ -99,6 +100,10 @@ internal sealed partial class Interpreter
 
     // The exceptions being handled by catch clauses (innermost last), for 'throw;'.
     private readonly Stack<object> caught = new();
+
+    // The try statements whose bodies are running (innermost last), with their frames and caller chains: an exception's
+    // handler is sought among them, filters included, before any finally runs (see FindHandler).
+    private List<(ITryOperation Statement, Frame Frame, SourceSpan[] Callers)> activeTries = new();
 
     // The call a foreach is about to enumerate, and the loop's body as a callback: when that call runs the design's
     // iterator, each 'yield return' hands its value to the body at once instead of collecting a list, so the iterator
