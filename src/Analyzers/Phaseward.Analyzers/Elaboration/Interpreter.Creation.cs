@@ -61,25 +61,24 @@ internal sealed partial class Interpreter
 
     /// <summary>Runs an object or collection initializer (<c>{ P = v }</c>, <c>{ a, b }</c>) on a new object.</summary>
     private object? Initialize(IObjectCreationOperation creation, object made, Frame frame)
+        => creation.Initializer is null || FillIn(made, creation.Initializer, frame) ? made : Unknown.Value;
+
+    /// <summary>Runs the assignments and Add calls of an initializer on <paramref name="target"/> (what they write into
+    /// with no receiver written out); false when one of them could not be evaluated.</summary>
+    private bool FillIn(object target, IObjectOrCollectionInitializerOperation initializer, Frame frame)
     {
-        if (creation.Initializer is null)
-            return made;
-        implicitReceivers.Push(made);
+        implicitReceivers.Push(target);
         try
         {
-            foreach (var initializer in creation.Initializer.Initializers)
-            {
-                var result = Evaluate(initializer, frame);
-                if (Unknown.Is(result))
-                    return result;
-            }
+            foreach (var part in initializer.Initializers)
+                if (Unknown.Is(Evaluate(part, frame)))
+                    return false;
+            return true;
         }
         finally
         {
             implicitReceivers.Pop();
         }
-
-        return made;
     }
 
     /// <summary>The most elements .NET gives a one-dimensional array (Array.MaxLength, not in netstandard2.0).</summary>
@@ -181,19 +180,7 @@ internal sealed partial class Interpreter
         if (Unknown.Is(member)) return Skipped(nested.Initializer, frame);
         if (member is null)
             return NullReference(nested, nested.InitializedMember, "its initializer") ?? Unknown.Value;
-        implicitReceivers.Push(member);
-        try
-        {
-            foreach (var initializer in nested.Initializer.Initializers)
-                if (Unknown.Is(Evaluate(initializer, frame)))
-                    return Unknown.Value;
-        }
-        finally
-        {
-            implicitReceivers.Pop();
-        }
-
-        return member;
+        return FillIn(member, nested.Initializer, frame) ? member : Unknown.Value;
     }
 
     private object? VisitAnonymousObjectCreation(IAnonymousObjectCreationOperation creation, Frame frame)
@@ -207,18 +194,6 @@ internal sealed partial class Interpreter
         if (original is not InterpretedObject source)
             return Unsupported(with, "this 'with' expression", "only records and structs of this compilation are copied with 'with'");
         var copy = source.Copy();
-        implicitReceivers.Push(copy);
-        try
-        {
-            foreach (var initializer in with.Initializer.Initializers)
-                if (Unknown.Is(Evaluate(initializer, frame)))
-                    return Unknown.Value;
-        }
-        finally
-        {
-            implicitReceivers.Pop();
-        }
-
-        return copy;
+        return FillIn(copy, with.Initializer, frame) ? copy : Unknown.Value;
     }
 }
