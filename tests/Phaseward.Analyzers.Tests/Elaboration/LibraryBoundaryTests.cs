@@ -31,6 +31,7 @@ public class LibraryBoundaryTests
     [InlineData("Boundary.RangesAndComparers")]
     [InlineData("Boundary.StaticInit")]
     [InlineData("Boundary.FilterFirst")]
+    [InlineData("Boundary.BaseStaticInit")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
 
     [Fact]
@@ -204,6 +205,19 @@ public class LibraryBoundaryTests
                 public static class Gauge { static Gauge() { Logbook.Lines.Add("gauge"); } public static int Level => 1; }
                 public sealed class Sensor { static Sensor() { Logbook.Lines.Add("sensor"); } public Sensor() { Logbook.Lines.Add("made"); } }
                 public static class Relaxed { public static int Seed = Logbook.Note("relaxed"); public static void Touch() => Logbook.Lines.Add("loose"); }
+                public static class Ledger { public static readonly List<string> Lines = new(); public static int Note(string s) { Lines.Add(s); return 2; } }
+                public class Housing { public int Made = Ledger.Note("housing-field"); static Housing() { Ledger.Lines.Add("housing-cctor"); } public Housing() { Ledger.Lines.Add("housing"); } }
+                public sealed class Probe : Housing { public int Tip = Ledger.Note("probe-field"); static Probe() { Ledger.Lines.Add("probe-cctor"); } public Probe() { Ledger.Lines.Add("probe"); } }
+                public sealed class BaseStaticInit : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        Ledger.Lines.Add("start");
+                        _ = new Probe();
+                        _ = new Probe();
+                        Mark(c, string.Join("_", Ledger.Lines));
+                    }
+                }
                 public sealed class StaticInit : Base
                 {
                     protected override void Describe(Circuit c)

@@ -63,6 +63,10 @@ internal sealed partial class Interpreter
 
         cancellationToken.ThrowIfCancellationRequested();
         var syntax = constructor.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax(cancellationToken);
+        // A base class's static constructor runs when its constructor is first reached (after the derived class's
+        // field initializers), as in C#.
+        if ((site?.Syntax ?? syntax) is { } reached)
+            InitializeForUse(type, reached);
         switch (syntax)
         {
             case ConstructorDeclarationSyntax declaration when ModelOf(declaration).GetOperation(declaration, cancellationToken) is IConstructorBodyOperation body:
