@@ -6,11 +6,12 @@ using Microsoft.CodeAnalysis.Operations;
 namespace Phaseward.Analyzers.Elaboration;
 
 /// <summary>
-/// C#'s built-in operators on the primitive types designs compute with (int, long, double, float, bool, string, char),
+/// C#'s built-in operators on the primitive types designs compute with (int, long, double, float, bool, string, char;
+/// the other numeric types and every numeric conversion in Arithmetic.Widths.cs),
 /// with C#'s overflow rules: checked arithmetic throws <see cref="OverflowException"/>, unchecked wraps.
 /// Returns null when the operator/type pair is outside the subset.
 /// </summary>
-internal static class Arithmetic
+internal static partial class Arithmetic
 {
     public static object? Binary(BinaryOperatorKind kind, object left, object right, ITypeSymbol operandType, bool isChecked)
     {
@@ -51,7 +52,7 @@ internal static class Arithmetic
                     _ => null,
                 };
             default:
-                return null;
+                return Numeric(kind, left, right, operandType.SpecialType, isChecked);
         }
     }
 
@@ -115,100 +116,7 @@ internal static class Arithmetic
             case SpecialType.System_Boolean:
                 return kind == UnaryOperatorKind.Not ? !(bool)operand : null;
             default:
-                return null;
-        }
-    }
-
-    /// <summary>A numeric conversion to the given special type, as C# does it (checked or not).</summary>
-    public static object? ConvertNumber(object value, SpecialType target, bool isChecked)
-    {
-        if (value is bool || value is string)
-            return null;
-        try
-        {
-            return isChecked ? CheckedConvert(value, target) : UncheckedConvert(value, target);
-        }
-        catch (InvalidCastException)
-        {
-            return null;
-        }
-    }
-
-    private static object? CheckedConvert(object value, SpecialType target)
-    {
-        checked
-        {
-            switch (value)
-            {
-                case double d:
-                    return target switch
-                    {
-                        SpecialType.System_Int32 => (object)(int)d,
-                        SpecialType.System_Int64 => (long)d,
-                        SpecialType.System_Double => d,
-                        SpecialType.System_Single => (float)d,
-                        _ => null,
-                    };
-                case float f:
-                    return target switch
-                    {
-                        SpecialType.System_Int32 => (object)(int)f,
-                        SpecialType.System_Int64 => (long)f,
-                        SpecialType.System_Double => (double)f,
-                        SpecialType.System_Single => f,
-                        _ => null,
-                    };
-                default:
-                    var l = System.Convert.ToInt64(value, CultureInfo.InvariantCulture);
-                    return target switch
-                    {
-                        SpecialType.System_Int32 => (object)(int)l,
-                        SpecialType.System_Int64 => l,
-                        SpecialType.System_Double => (double)l,
-                        SpecialType.System_Single => (float)l,
-                        SpecialType.System_Char => (char)l,
-                        _ => null,
-                    };
-            }
-        }
-    }
-
-    private static object? UncheckedConvert(object value, SpecialType target)
-    {
-        unchecked
-        {
-            switch (value)
-            {
-                case double d:
-                    return target switch
-                    {
-                        SpecialType.System_Int32 => (object)(int)d,
-                        SpecialType.System_Int64 => (long)d,
-                        SpecialType.System_Double => d,
-                        SpecialType.System_Single => (float)d,
-                        _ => null,
-                    };
-                case float f:
-                    return target switch
-                    {
-                        SpecialType.System_Int32 => (object)(int)f,
-                        SpecialType.System_Int64 => (long)f,
-                        SpecialType.System_Double => (double)f,
-                        SpecialType.System_Single => f,
-                        _ => null,
-                    };
-                default:
-                    var l = System.Convert.ToInt64(value, CultureInfo.InvariantCulture);
-                    return target switch
-                    {
-                        SpecialType.System_Int32 => (object)(int)l,
-                        SpecialType.System_Int64 => l,
-                        SpecialType.System_Double => (double)l,
-                        SpecialType.System_Single => (float)l,
-                        SpecialType.System_Char => (char)l,
-                        _ => null,
-                    };
-            }
+                return NumericUnary(kind, operand, type.SpecialType);
         }
     }
 

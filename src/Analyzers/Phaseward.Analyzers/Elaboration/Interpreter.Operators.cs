@@ -150,11 +150,25 @@ internal sealed partial class Interpreter
         if (IsNumeric(target) && (IsNumericValue(value) || value is Enum))
         {
             var number = value is Enum ? System.Convert.ToInt64(value, CultureInfo.InvariantCulture) : value;
-            return Arithmetic.ConvertNumber(number, target.SpecialType, conversion.IsChecked)
-                ?? Unsupported(conversion, "this numeric conversion", "the elaborator handles int, long, float, double and char");
+            return NumericConversion(conversion, number, target);
         }
 
         return value;
+    }
+
+    /// <summary>A numeric conversion as C# makes it: out of range, a checked one (and any from decimal) throws.</summary>
+    private object? NumericConversion(IConversionOperation conversion, object number, ITypeSymbol target)
+    {
+        try
+        {
+            return Arithmetic.ConvertNumber(number, target.SpecialType, conversion.IsChecked)
+                ?? Unsupported(conversion, "this numeric conversion", "its value is not a number");
+        }
+        catch (OverflowException e)
+        {
+            Throws(conversion.Syntax, "OverflowException: " + e.Message);
+            return Unknown.Value;
+        }
     }
 
     /// <summary>
@@ -283,8 +297,9 @@ internal sealed partial class Interpreter
         return Unsupported(site, "operator " + Describe(method), "only operators of the Phaseward DSL and of this compilation are elaborated");
     }
 
-    private static bool IsNumeric(ITypeSymbol type) => type.SpecialType is SpecialType.System_Int32 or SpecialType.System_Int64
-        or SpecialType.System_Double or SpecialType.System_Single or SpecialType.System_Char;
+    private static bool IsNumeric(ITypeSymbol type) => type.SpecialType is SpecialType.System_SByte or SpecialType.System_Byte
+        or SpecialType.System_Int16 or SpecialType.System_UInt16 or SpecialType.System_Char or SpecialType.System_Int32 or SpecialType.System_UInt32
+        or SpecialType.System_Int64 or SpecialType.System_UInt64 or SpecialType.System_Single or SpecialType.System_Double or SpecialType.System_Decimal;
 
-    private static bool IsNumericValue(object value) => value is int or long or double or float or char or short or byte or uint or ulong;
+    private static bool IsNumericValue(object value) => value is int or long or double or float or char or short or byte or uint or ulong or sbyte or ushort or decimal;
 }
