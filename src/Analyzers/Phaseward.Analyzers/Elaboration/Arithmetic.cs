@@ -86,6 +86,8 @@ internal static class Arithmetic
 
     private static object? UnaryOf(UnaryOperatorKind kind, object operand, ITypeSymbol type, bool isChecked)
     {
+        if (type.TypeKind == TypeKind.Enum)
+            return kind == UnaryOperatorKind.BitwiseNegation ? EnumValue(operand, ~System.Convert.ToInt64(operand, CultureInfo.InvariantCulture)) : null;
         switch (type.SpecialType)
         {
             case SpecialType.System_Int32:
@@ -325,7 +327,9 @@ internal static class Arithmetic
         };
     }
 
-    // A flags combination keeps the operand's representation: a DSL enum value, or the int a design's own enum is kept as.
+    // A flags combination keeps the operand's representation: a DSL enum value, or the design's own enum's EnumValue.
     private static object EnumValue(object like, long value)
-        => like is System.Enum ? System.Enum.ToObject(like.GetType(), value) : (object)System.Convert.ToInt32(value, CultureInfo.InvariantCulture);
+        => like is System.Enum ? System.Enum.ToObject(like.GetType(), value)
+            : like is Elaboration.EnumValue designEnum ? designEnum.With(value)
+            : (object)System.Convert.ToInt32(value, CultureInfo.InvariantCulture);
 }

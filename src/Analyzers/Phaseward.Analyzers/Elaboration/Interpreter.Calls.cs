@@ -54,14 +54,12 @@ internal sealed partial class Interpreter
                 : Unsupported(invocation, "this delegate call", "the delegate was not made by the design's code");
         }
 
-        if (method.Name == "HasFlag" && receiver is int flags && invocation.Arguments.Length == 1)
-        {
-            // The design's own enums are kept as int, so Enum.HasFlag is answered here.
-            var flag = Evaluate(invocation.Arguments[0].Value, frame);
-            if (Unknown.Is(flag)) return flag;
-            var bits = System.Convert.ToInt32(flag, System.Globalization.CultureInfo.InvariantCulture);
-            return (flags & bits) == bits;
-        }
+        if (receiver is TupleValue tuple && method.Name is "ToString" or "Equals")
+            return CallTupleMember(invocation, tuple, method, frame);
+        if (receiver is EnumValue enumValue)
+            return CallEnumMember(invocation, enumValue, method, frame);
+        if (DesignEnumOf(invocation, frame) is { } designEnum)
+            return CallDesignEnumStatic(invocation, designEnum, frame);
 
         if (receiver is InterpretedObject self)
             return CallObjectMember(invocation, self, method, frame);

@@ -85,6 +85,71 @@ internal sealed partial class Interpreter
             "the elaborator handles arithmetic, comparisons and logic on int, long, float, double, bool, string and enums");
     }
 
+    /// <summary>
+    /// <c>t1 == t2</c> and <c>!=</c> on tuples: element by element, when the elements are of the types whose built-in
+    /// equality the elaborator knows (numbers, bool, char, string, enums, and tuples of them).
+    /// </summary>
+    private object? VisitTupleBinary(ITupleBinaryOperation binary, Frame frame)
+    {
+        var left = Evaluate(binary.LeftOperand, frame);
+        if (Unknown.Is(left)) return left;
+        var right = Evaluate(binary.RightOperand, frame);
+        if (Unknown.Is(right)) return right;
+        if (binary.OperatorKind is not (BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals)
+            || !HasBuiltInEquality(binary.LeftOperand.Type) || !HasBuiltInEquality(binary.RightOperand.Type))
+            return Unsupported(binary, "this tuple comparison", "the elaborator compares tuples of numbers, bools, chars, strings and enums");
+        var same = TuplesEqual(left, right);
+        return same is null ? Unsupported(binary, "this tuple comparison", "its operands are not tuples of the same length")
+            : binary.OperatorKind == BinaryOperatorKind.Equals ? same.Value : !same.Value;
+    }
+
+    /// <summary><c>ToString()</c> and <c>Equals(other)</c> of a tuple, as ValueTuple defines them (elements' own Equals).</summary>
+    private object? CallTupleMember(IInvocationOperation invocation, TupleValue tuple, IMethodSymbol method, Frame frame)
+    {
+        var (arguments, _) = Arguments(invocation.Arguments, method, frame);
+        if (arguments is null) return Unknown.Value;
+        try
+        {
+            return arguments.Length switch
+            {
+                0 when method.Name == "ToString" => tuple.ToString(),
+                1 when method.Name == "Equals" => tuple.Equals(arguments[0]),
+                _ => Unsupported(invocation, "the call to " + Describe(method), "of a tuple the elaborator answers ToString() and Equals(other)"),
+            };
+        }
+        catch (UnknownValueException e)
+        {
+            return UnknownFrom(e, invocation);
+        }
+    }
+
+    private static bool? TuplesEqual(object? left, object? right)
+    {
+        if (left is not TupleValue a || right is not TupleValue b || a.Items.Length != b.Items.Length)
+            return null;
+        for (var i = 0; i < a.Items.Length; i++)
+        {
+            var same = a.Items[i] is TupleValue || b.Items[i] is TupleValue ? TuplesEqual(a.Items[i], b.Items[i]) : Equal(a.Items[i], b.Items[i]);
+            if (same is not true)
+                return same;
+        }
+
+        return true;
+    }
+
+    private static bool HasBuiltInEquality(ITypeSymbol? type)
+    {
+        if (NullableUnderlying(type) is { } underlying)
+            type = underlying;
+        return type switch
+        {
+            INamedTypeSymbol { IsTupleType: true } tuple => tuple.TupleElements.All(e => HasBuiltInEquality(e.Type)),
+            { TypeKind: TypeKind.Enum } => true,
+            { } known => IsNumeric(known) || known.SpecialType is SpecialType.System_Boolean or SpecialType.System_String,
+            null => false,
+        };
+    }
+
     private object? VisitUnary(IUnaryOperation unary, Frame frame)
     {
         var operand = Evaluate(unary.Operand, frame);
@@ -129,12 +194,17 @@ internal sealed partial class Interpreter
             target = nullable.TypeArguments[0];
         if (target.TypeKind == TypeKind.Enum)
             return ToEnum(value, target);
-        if (IsNumeric(target) && (IsNumericValue(value) || value is Enum))
+        if (IsNumeric(target) && (IsNumericValue(value) || value is Enum or EnumValue))
         {
-            var number = value is Enum ? System.Convert.ToInt64(value, CultureInfo.InvariantCulture) : value;
+            var number = value is Enum or EnumValue ? System.Convert.ToInt64(value, CultureInfo.InvariantCulture) : value;
             return Arithmetic.ConvertNumber(number, target.SpecialType, conversion.IsChecked)
                 ?? Unsupported(conversion, "this numeric conversion", "the elaborator handles int, long, float, double and char");
         }
+
+        // A design's enum cast to another underlying type (byte, uint...): its number, never the enum value itself.
+        if (value is EnumValue enumValue && target.IsValueType && target.SpecialType != SpecialType.None)
+            return SameType(enumValue.Number, target) ? enumValue.Number
+                : Unsupported(conversion, "this conversion of an enum to " + Describe(target), "the elaborator converts an enum to its own underlying type, int, long, float, double and char");
 
         return value;
     }
@@ -149,12 +219,20 @@ internal sealed partial class Interpreter
         if (underlying is ITypeParameterSymbol parameter && frame.TypeArgumentOf(parameter) is { } argument and not ITypeParameterSymbol)
             underlying = NullableUnderlying(argument) ?? argument;
         // Numbers may be held in a wider type than declared (a short as an int): for an unboxing only their kind is tested.
-        var fits = IsNumeric(underlying) || underlying.SpecialType is SpecialType.System_Byte or SpecialType.System_SByte or SpecialType.System_Int16
-                or SpecialType.System_UInt16 or SpecialType.System_UInt32 or SpecialType.System_UInt64 or SpecialType.System_Decimal
-            ? IsNumericValue(value) || value is Enum || value is decimal
+        var numericTarget = IsNumeric(underlying) || underlying.SpecialType is SpecialType.System_Byte or SpecialType.System_SByte or SpecialType.System_Int16
+            or SpecialType.System_UInt16 or SpecialType.System_UInt32 or SpecialType.System_UInt64 or SpecialType.System_Decimal;
+        var fits = numericTarget
+            ? IsNumericValue(value) || value is Enum || value is decimal || value is EnumValue
+            : underlying.TypeKind == TypeKind.Enum && !ClrTypes.IsDsl(underlying) && IsNumericValue(value) ? true
             : IsOfType(value, underlying, frame);
         if (fits is null)
             return Unsupported(conversion, "this cast to " + Describe(target), "whether the value is of that type cannot be decided at compile time");
+        // The run time lets a boxed enum be unboxed as its underlying type and a boxed number as an enum: the value
+        // takes the type the cast names.
+        if (fits.Value && value is EnumValue boxedEnum && numericTarget)
+            return IsNumeric(underlying) ? Arithmetic.ConvertNumber(boxedEnum.Number, underlying.SpecialType, isChecked: false) : boxedEnum.Number;
+        if (fits.Value && underlying.TypeKind == TypeKind.Enum && value is not EnumValue and not Enum)
+            return ToEnum(value, underlying);
         if (fits.Value)
             return value;
         if (conversion.IsTryCast)
@@ -267,6 +345,8 @@ internal sealed partial class Interpreter
 
     private static bool IsNumeric(ITypeSymbol type) => type.SpecialType is SpecialType.System_Int32 or SpecialType.System_Int64
         or SpecialType.System_Double or SpecialType.System_Single or SpecialType.System_Char;
+
+    private static bool SameType(object value, ITypeSymbol type) => ClrTypes.Resolve(type) == value.GetType();
 
     private static bool IsNumericValue(object value) => value is int or long or double or float or char or short or byte or uint or ulong;
 }

@@ -1,0 +1,145 @@
+using System.Threading.Tasks;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Testing;
+using Phaseward.Analyzers.Tests.Verifiers;
+using Phaseward.Checking;
+
+namespace Phaseward.Analyzers.Tests.Elaboration;
+
+/// <summary>
+/// Values as .NET prints, compares and converts them, checked against the design compiled and run by .NET
+/// (<see cref="ParityTests"/>): every design names one inverter with the text it computes, so any difference shows in
+/// the netlist. Before: the design's own enums were plain ints (printed as numbers, matched <c>is int</c>, and
+/// <c>ToString()</c>, <c>Enum.Parse</c> or <c>GetNames</c> on them were PW9001 with the elaborator's own message).
+/// What cannot be known at compile time is PW9001 at the construct, never a value.
+/// </summary>
+public class ValueSemanticsTests
+{
+    [Theory]
+    [InlineData("Values.EnumText")]
+    [InlineData("Values.FlagsText")]
+    [InlineData("Values.BoxedEnum")]
+    [InlineData("Values.EnumLibrary")]
+    [InlineData("Values.EnumArithmetic")]
+    [InlineData("Values.TupleText")]
+    [InlineData("Values.TupleEquality")]
+    public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
+
+    [Fact]
+    public async Task TheNameOfAValueTwoEnumMembersShareIsPW9001()
+    {
+        // .NET does not say which of the names it prints: none is guessed.
+        var source = Design("""
+            var text = {|#0:$"{Alias.First}"|};
+            count = text.Length;
+            """, declarations: "public enum Alias { First = 1, Same = 1 }");
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source,
+            NotElaborated(0, "the name of the value 1 of the enum Alias", "several members have that value, and which name .NET prints is not specified")).RunAsync();
+    }
+
+    private static readonly InMemoryDesigns Designs = new(("/values/Values.cs", """
+            using System;
+            using System.Linq;
+            using System.Collections.Generic;
+            using Phaseward;
+
+            namespace Values
+            {
+                public abstract class Base : Design { protected static void Say(Circuit c, string s) => c.Output("y", c.Inverter(c.Input("a"), "v_" + s)); }
+                public enum Hue { Amber = 1, Teal = 2, Ochre = 4 }
+                [Flags] public enum Trait { None = 0, Gated = 1, Skewed = 2, Latched = 4, Tuned = Gated | Latched }
+                public enum Level : byte { Low = 1, High = 200 }
+                public sealed class EnumText : Base
+                {
+                    private static string Named(Hue hue = Hue.Ochre) => $"{hue}";
+                    private static string Joined(Hue hue) => "" + hue + '/' + hue.ToString();
+                    protected override void Describe(Circuit c)
+                    {
+                        var hue = Hue.Teal;
+                        Say(c, $"{hue}|{Named()}|{Joined(Hue.Amber)}|{hue:D}|{hue:X}|{hue:x}|{Hue.Ochre.ToString("G")}|{(Hue)3}|{(Hue)8}|{Hue.Amber | Hue.Teal:F}|{Level.High}|{(Level)7:X}|{(Hue)(-2)}");
+                    }
+                }
+                public sealed class FlagsText : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var t = Trait.Gated | Trait.Skewed;
+                        var all = t | Trait.Latched;
+                        Say(c, $"{t}|{all}|{Trait.Gated | Trait.Latched}|{(Trait)0}|{(Trait)8}|{Trait.Skewed | (Trait)8}|{all.HasFlag(Trait.Tuned)}|{t.HasFlag(Trait.Latched)}|{all & ~Trait.Skewed}");
+                    }
+                }
+                public sealed class BoxedEnum : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        object o = Hue.Ochre;
+                        var s = o is int ? "int" : "notint";
+                        s += o switch { int n => "i" + n, Hue k => "c" + k, _ => "?" };
+                        switch (o)
+                        {
+                            case int n when n > 3: s += "big"; break;
+                            case Hue h: s += "hue" + h; break;
+                        }
+
+                        object two = 2;
+                        s += (int)o + "_" + (Hue)two + "_" + (o is Hue.Ochre) + "_" + o.Equals(Hue.Ochre) + "_" + o.Equals(4) + "_" + (o as Enum);
+                        Say(c, s);
+                    }
+                }
+                public sealed class EnumLibrary : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var counts = new Dictionary<Hue, int> { [Hue.Teal] = 1 };
+                        counts[Hue.Teal] += 2;
+                        counts[Hue.Amber] = 5;
+                        var list = new List<Hue> { Hue.Teal, Hue.Ochre, Hue.Amber };
+                        var ordered = string.Join(",", list.OrderByDescending(h => h));
+                        var parsed = Enum.Parse<Hue>("Teal");
+                        var flags = Enum.Parse<Trait>(" Gated , Skewed");
+                        var ok = Enum.TryParse<Hue>("Nope", out var missing);
+                        var ok2 = Enum.TryParse("ochre", true, out Hue found);
+                        var names = string.Join("+", Enum.GetNames(typeof(Trait)));
+                        var values = string.Join("+", Enum.GetValues<Hue>());
+                        Say(c, $"{counts[Hue.Teal]}{counts[Hue.Amber]}|{string.Join(",", counts.Keys)}|{ordered}|{parsed}|{flags}|{ok}{missing}|{ok2}{found}|{names}|{values}|{list.Contains(Hue.Ochre)}|{Enum.IsDefined(Hue.Teal)}{Enum.IsDefined((Hue)3)}|{Enum.GetName(Hue.Ochre)}|{Hue.Teal.CompareTo(Hue.Ochre)}|{list.Max()}");
+                    }
+                }
+                public sealed class EnumArithmetic : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var lv = Level.High;
+                        byte raw = (byte)lv;
+                        var mixed = (Hue)(int)Trait.Latched;
+                        Say(c, $"{raw}|{(int)lv}|{Hue.Ochre > Hue.Teal}|{mixed}|{mixed == Hue.Ochre}|{(long)Hue.Teal * 3}|{default(Hue)}|{Hue.Teal is Hue.Teal or Hue.Amber}");
+                    }
+                }
+                public sealed class TupleText : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var a = (1, 2);
+                        var named = (Tag: "x", Hue.Teal, (3, 'c'), (string?)null, true);
+                        var pairs = new List<(int, string)> { (1, "a"), (2, "b") };
+                        Say(c, $"{a}|{"" + a}|{a.ToString()}|{string.Join(";", pairs)}|{named}|{(a, a)}|{pairs[1]}");
+                    }
+                }
+                public sealed class TupleEquality : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var a = (1, "b");
+                        var keys = new Dictionary<(int, string), int> { [(1, "a")] = 5 };
+                        keys[(2, "b")] = 6;
+                        var set = new HashSet<(int, Hue)> { (1, Hue.Teal), (1, Hue.Teal), (2, Hue.Teal) };
+                        Say(c, $"{a == (1, "b")}{a != (1, "c")}{(a, 2.5) == ((1, "b"), 2.5)}{(1, 2L) == (1L, 2)}{a.Equals((1, "b"))}{a.Equals((1, 'b'))}|{keys[(1, "a")]}{keys[(2, "b")]}{keys.ContainsKey((1, "b"))}|{set.Count}");
+                    }
+                }
+            }
+            """));
+
+    private static DiagnosticResult NotElaborated(int location, string what, string why)
+        => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
+
+    private static string Design(string statements, string members = "", string declarations = "") => InverterChainDesign.Source("Values", declarations, members, statements);
+}
