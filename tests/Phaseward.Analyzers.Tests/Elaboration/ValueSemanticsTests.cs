@@ -23,6 +23,7 @@ public class ValueSemanticsTests
     [InlineData("Values.EnumArithmetic")]
     [InlineData("Values.TupleText")]
     [InlineData("Values.TupleEquality")]
+    [InlineData("Values.ReferenceEquality")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
 
     [Fact]
@@ -35,6 +36,24 @@ public class ValueSemanticsTests
             """, declarations: "public enum Alias { First = 1, Same = 1 }");
         await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source,
             NotElaborated(0, "the name of the value 1 of the enum Alias", "several members have that value, and which name .NET prints is not specified")).RunAsync();
+    }
+
+    [Fact]
+    public async Task TheIdentityOfBoxedValuesIsPW9001()
+    {
+        // Each boxing makes a new object in .NET ('a == b' is false for two boxes of 1): which box holds a value is not
+        // modelled, so the answer is not guessed from the values.
+        var source = Design("""
+            object a = 1, b = 1;
+            object s = "cell", t = string.Concat("ce", "ll");
+            if ({|#0:a == b|}) count = 5;
+            if ({|#1:ReferenceEquals(a, b)|}) count = 6;
+            if ({|#2:s == t|}) count = 7;
+            """);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source,
+            NotElaborated(0, "the reference equality of boxed values", "each boxing makes a new object, and which box holds a value is not modelled at compile time"),
+            NotElaborated(1, "the reference equality of boxed values", "each boxing makes a new object, and which box holds a value is not modelled at compile time"),
+            NotElaborated(2, "the reference equality of two equal strings", "whether they are one object depends on interning, which is not modelled at compile time")).RunAsync();
     }
 
     private static readonly InMemoryDesigns Designs = new(("/values/Values.cs", """
@@ -133,6 +152,20 @@ public class ValueSemanticsTests
                         keys[(2, "b")] = 6;
                         var set = new HashSet<(int, Hue)> { (1, Hue.Teal), (1, Hue.Teal), (2, Hue.Teal) };
                         Say(c, $"{a == (1, "b")}{a != (1, "c")}{(a, 2.5) == ((1, "b"), 2.5)}{(1, 2L) == (1L, 2)}{a.Equals((1, "b"))}{a.Equals((1, 'b'))}|{keys[(1, "a")]}{keys[(2, "b")]}{keys.ContainsKey((1, "b"))}|{set.Count}");
+                    }
+                }
+                public sealed record Gauge(int Span);
+                public sealed class Lane { public int N; }
+                public sealed class ReferenceEquality : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var g = new Gauge(1);
+                        object g1 = g, g2 = new Gauge(1);
+                        object l1 = new Lane(), l2 = new Lane();
+                        object s1 = "p", s2 = "q";
+                        var same = l1;
+                        Say(c, $"{g1 == g2}{g1 == (object)g}{g1.Equals(g2)}{ReferenceEquals(g, g1)}{ReferenceEquals(g, g2)}{l1 == l2}{l1 == same}{s1 == s2}{ReferenceEquals(null, null)}{g1 != null}");
                     }
                 }
             }

@@ -54,6 +54,12 @@ internal sealed partial class Interpreter
                 : Unsupported(invocation, "this delegate call", "the delegate was not made by the design's code");
         }
 
+        if (method is { IsStatic: true, Name: "ReferenceEquals", Parameters.Length: 2 } && method.ContainingType?.SpecialType == SpecialType.System_Object)
+        {
+            var (pair, _) = Arguments(invocation.Arguments, method, frame);
+            return pair is null ? Unknown.Value : SameObject(invocation, pair[0], pair[1]);
+        }
+
         if (receiver is TupleValue tuple && method.Name is "ToString" or "Equals")
             return CallTupleMember(invocation, tuple, method, frame);
         if (receiver is EnumValue enumValue)

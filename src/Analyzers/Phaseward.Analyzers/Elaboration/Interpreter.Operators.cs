@@ -67,7 +67,8 @@ internal sealed partial class Interpreter
             return Concatenate(binary, left, right);
         }
 
-        if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals && left is InterpretedObject { Type.IsRecord: true } record)
+        if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals && left is InterpretedObject { Type.IsRecord: true } record
+            && leftType is { IsRecord: true })
         {
             return RecordEquality(binary, record, right, negated: binary.OperatorKind == BinaryOperatorKind.NotEquals);
         }
@@ -75,8 +76,8 @@ internal sealed partial class Interpreter
         if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals
             && (left is null || right is null || (leftType?.IsReferenceType == true && leftType.SpecialType != SpecialType.System_String)))
         {
-            var same = left is null || right is null ? left is null && right is null : ReferenceEquals(left, right);
-            return binary.OperatorKind == BinaryOperatorKind.Equals ? same : !same;
+            var same = SameObject(binary, left, right);
+            return same is bool b ? (binary.OperatorKind == BinaryOperatorKind.Equals ? b : !b) : same;
         }
 
         if (leftType is null || left is null || right is null)
@@ -149,6 +150,28 @@ internal sealed partial class Interpreter
             null => false,
         };
     }
+
+    /// <summary>
+    /// Reference equality (<c>==</c> on operands typed object or an interface, <c>ReferenceEquals</c>): true or false when
+    /// the identity is known, PW9001 when it is not. A value boxed into an object is a new object at each boxing, and which
+    /// box a value is held in is not modelled; two equal strings are one object or two depending on interning.
+    /// </summary>
+    private object SameObject(IOperation site, object? left, object? right)
+    {
+        if (left is null || right is null)
+            return left is null && right is null;
+        // Each type has one Type object.
+        if (left is TypeValue || right is TypeValue)
+            return Equals(left, right);
+        if (IsBoxedValue(left) || IsBoxedValue(right))
+            return Unsupported(site, "the reference equality of boxed values", "each boxing makes a new object, and which box holds a value is not modelled at compile time");
+        if (left is string a && right is string b && !ReferenceEquals(a, b) && string.Equals(a, b, StringComparison.Ordinal))
+            return Unsupported(site, "the reference equality of two equal strings", "whether they are one object depends on interning, which is not modelled at compile time");
+        return ReferenceEquals(left, right);
+    }
+
+    private static bool IsBoxedValue(object value)
+        => value is InterpretedObject instance ? instance.Type.IsValueType : value is not Closure && value.GetType().IsValueType || value is EnumValue or TupleValue;
 
     private object? VisitUnary(IUnaryOperation unary, Frame frame)
     {
