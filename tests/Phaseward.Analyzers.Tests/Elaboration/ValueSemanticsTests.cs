@@ -56,6 +56,29 @@ public class ValueSemanticsTests
             NotElaborated(2, "the reference equality of two equal strings", "whether they are one object depends on interning, which is not modelled at compile time")).RunAsync();
     }
 
+    [Fact]
+    public async Task HashCodesThatDifferFromProcessToProcessArePW9001()
+    {
+        // A record's generated GetHashCode hashes its EqualityContract (a Type): another number in every process. The
+        // design's own GetHashCode is interpreted, and records still work as dictionary keys.
+        var source = Design("""
+            var hash = {|#0:new Probe(1).GetHashCode()|};
+            var typeHash = {|#1:typeof(Probe).GetHashCode()|};
+            Hue? maybe = null;
+            var own = new Keyed(4).GetHashCode() + Hue.Teal.GetHashCode() + maybe.GetHashCode();
+            var seen = new System.Collections.Generic.HashSet<Probe> { new(1), new(1), new(2) };
+            count = own + seen.Count - 8;
+            """, declarations: """
+            public sealed record Probe(int X);
+            public sealed record Keyed(int X) { public override int GetHashCode() => X * 2; }
+            public enum Hue { Amber = 1, Teal = 2 }
+            """);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source,
+            NotElaborated(0, "the hash code of the record 'Probe'", "a record's generated GetHashCode hashes its EqualityContract (a Type), whose hash differs from process to process"),
+            NotElaborated(1, "the call to 'Type.GetHashCode()'", "of a type only its name, text and equality are read: the rest is reflection")).RunAsync();
+        ParityTests.AssertParity(new InMemoryDesigns(("/values/D.cs", InverterChainDesign.WithoutMarkup(source.Replace("{|#0:new Probe(1).GetHashCode()|}", "0").Replace("{|#1:typeof(Probe).GetHashCode()|}", "0")))), "Values.D");
+    }
+
     private static readonly InMemoryDesigns Designs = new(("/values/Values.cs", """
             using System;
             using System.Linq;

@@ -104,8 +104,12 @@ internal sealed partial class Interpreter : IObjectSemantics
                     return TextOf(self);
                 case "Equals" when arguments.Length == 1:
                     return AreEqual(self, arguments[0]);
-                case "GetHashCode" when arguments.Length == 0 && (self.Type.IsRecord || UserOverride(self.Type, "GetHashCode", 0) is not null):
+                case "GetHashCode" when arguments.Length == 0 && UserOverride(self.Type, "GetHashCode", 0) is not null:
                     return HashOf(self);
+                case "GetHashCode" when arguments.Length == 0 && self.Type.IsRecord:
+                    // Library collections may still hash records (where a key goes is not seen): only the number is unknown.
+                    return Unsupported(invocation, "the hash code of the record " + Describe(self.Type),
+                        "a record's generated GetHashCode hashes its EqualityContract (a Type), whose hash differs from process to process");
                 case "GetType" when arguments.Length == 0:
                     return new TypeValue(self.Type);
                 case "Deconstruct" when self.Type.IsRecord && method.IsImplicitlyDeclared:

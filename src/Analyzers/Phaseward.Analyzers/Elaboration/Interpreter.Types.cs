@@ -72,7 +72,7 @@ internal sealed partial class Interpreter
         }
     }
 
-    /// <summary>The members of a <see cref="TypeValue"/> that say only what the source says: ToString, Equals, GetHashCode.</summary>
+    /// <summary>The members of a <see cref="TypeValue"/> that say only what the source says: ToString, Equals (a Type's hash differs from process to process).</summary>
     private object? CallTypeMember(IInvocationOperation invocation, TypeValue type, IMethodSymbol method, Frame frame)
     {
         var (arguments, _) = Arguments(invocation.Arguments, method, frame);
@@ -83,7 +83,6 @@ internal sealed partial class Interpreter
             {
                 "ToString" when arguments.Length == 0 => type.ToString(),
                 "Equals" when arguments.Length == 1 => type.Equals(arguments[0]),
-                "GetHashCode" when arguments.Length == 0 => type.GetHashCode(),
                 _ => Unsupported(invocation, "the call to " + Describe(method), "of a type only its name, text and equality are read: the rest is reflection"),
             };
         }
