@@ -24,6 +24,8 @@ public class ValueSemanticsTests
     [InlineData("Values.TupleText")]
     [InlineData("Values.TupleEquality")]
     [InlineData("Values.ReferenceEquality")]
+    [InlineData("Values.RecordPrinting")]
+    [InlineData("Values.CultureFree")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
 
     [Fact]
@@ -79,6 +81,55 @@ public class ValueSemanticsTests
         ParityTests.AssertParity(new InMemoryDesigns(("/values/D.cs", InverterChainDesign.WithoutMarkup(source.Replace("{|#0:new Probe(1).GetHashCode()|}", "0").Replace("{|#1:typeof(Probe).GetHashCode()|}", "0")))), "Values.D");
     }
 
+    [Fact]
+    public async Task TextThatDependsOnTheCultureIsPW9001()
+    {
+        // The design runs in the current culture of its machine: a fraction prints "1,5" in one culture and "1.5" in
+        // another, a minus sign may be U+2212, "i".ToUpper() is "İ" in Turkish. Only what no culture changes is computed.
+        const string Culture = "it depends on the culture the design runs under (the decimal separator, the minus sign, group separators); format it with CultureInfo.InvariantCulture";
+        const string CallCulture = "what it gives depends on the culture the design runs under (the decimal separator, the minus sign, group separators); pass CultureInfo.InvariantCulture";
+        var source = Design("""
+            var d = 1.5;
+            var n = -3;
+            var a = {|#0:$"{d}"|};
+            var b = {|#1:d.ToString()|};
+            var e = {|#2:"i".ToUpper()|};
+            var f = {|#3:double.Parse("2.5")|};
+            var g = {|#4:string.Format("{0}", 0.5)|};
+            var h = {|#5:"a" + d|};
+            var k = {|#6:System.Convert.ToString(d)|};
+            var m = {|#7:"s" + n|};
+            var p = {|#8:new System.Text.StringBuilder().Append(d)|};
+            var q = {|#9:int.Parse("-4")|};
+            """);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source,
+            NotElaborated(0, "the text of the Double 1.5", Culture),
+            NotElaborated(1, "the call to 'double.ToString()'", CallCulture),
+            NotElaborated(2, "the call to 'string.ToUpper()'", "it changes case by the culture the design runs under, and the text has letters whose case differs between cultures (i, I, letters beyond ASCII); use ToUpperInvariant or ToLowerInvariant"),
+            NotElaborated(3, "the call to 'double.Parse(string)'", CallCulture),
+            NotElaborated(4, "the call to 'string.Format(string, object?)'", CallCulture),
+            NotElaborated(5, "the text of the Double 1.5", Culture),
+            NotElaborated(6, "the call to 'Convert.ToString(double)'", CallCulture),
+            NotElaborated(7, "the text of the Int32 -3", Culture),
+            NotElaborated(8, "the call to 'StringBuilder.Append(double)'", "the text of the Double 1.5: " + Culture),
+            NotElaborated(9, "the call to 'int.Parse(string)'", CallCulture)).RunAsync();
+    }
+
+    [Fact]
+    public async Task TheTextOfACollectionWhoseTypeArgumentsAreNotKnownIsPW9001()
+    {
+        // A collection prints its type with its type arguments: known from a variable's own type, not through an interface.
+        var source = Design("""
+            System.Collections.Generic.IEnumerable<int> items = new System.Collections.Generic.List<int>();
+            var nested = new System.Collections.Generic.List<System.Collections.Generic.List<int>> { new() };
+            var a = {|#0:$"{items}"|};
+            var b = {|#1:string.Join(",", nested)|};
+            """);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source,
+            NotElaborated(0, "the text of a List", "it prints its type with its type arguments, which are not known here (the elaborator holds library collections with object elements)"),
+            NotElaborated(1, "the call to 'string.Join<List<int>>(string?, IEnumerable<List<int>>)'", "it prints a collection's type, whose type arguments are not known here (the elaborator holds library collections with object elements)")).RunAsync();
+    }
+
     private static readonly InMemoryDesigns Designs = new(("/values/Values.cs", """
             using System;
             using System.Linq;
@@ -98,7 +149,7 @@ public class ValueSemanticsTests
                     protected override void Describe(Circuit c)
                     {
                         var hue = Hue.Teal;
-                        Say(c, $"{hue}|{Named()}|{Joined(Hue.Amber)}|{hue:D}|{hue:X}|{hue:x}|{Hue.Ochre.ToString("G")}|{(Hue)3}|{(Hue)8}|{Hue.Amber | Hue.Teal:F}|{Level.High}|{(Level)7:X}|{(Hue)(-2)}");
+                        Say(c, $"{hue}|{Named()}|{Joined(Hue.Amber)}|{hue:D}|{hue:X}|{hue:x}|{Hue.Ochre.ToString("G")}|{(Hue)3}|{(Hue)8}|{Hue.Amber | Hue.Teal:F}|{Level.High}|{(Level)7:X}|{(Hue)(-2):X}");
                     }
                 }
                 public sealed class FlagsText : Base
@@ -143,7 +194,7 @@ public class ValueSemanticsTests
                         var ok2 = Enum.TryParse("ochre", true, out Hue found);
                         var names = string.Join("+", Enum.GetNames(typeof(Trait)));
                         var values = string.Join("+", Enum.GetValues<Hue>());
-                        Say(c, $"{counts[Hue.Teal]}{counts[Hue.Amber]}|{string.Join(",", counts.Keys)}|{ordered}|{parsed}|{flags}|{ok}{missing}|{ok2}{found}|{names}|{values}|{list.Contains(Hue.Ochre)}|{Enum.IsDefined(Hue.Teal)}{Enum.IsDefined((Hue)3)}|{Enum.GetName(Hue.Ochre)}|{Hue.Teal.CompareTo(Hue.Ochre)}|{list.Max()}");
+                        Say(c, $"{counts[Hue.Teal]}{counts[Hue.Amber]}|{string.Join(",", counts.Keys)}|{ordered}|{parsed}|{flags}|{ok}{missing}|{ok2}{found}|{names}|{values}|{list.Contains(Hue.Ochre)}|{Enum.IsDefined(Hue.Teal)}{Enum.IsDefined((Hue)3)}|{Enum.GetName(Hue.Ochre)}|{Hue.Teal.CompareTo(Hue.Ochre) < 0}|{list.Max()}");
                     }
                 }
                 public sealed class EnumArithmetic : Base
@@ -189,6 +240,30 @@ public class ValueSemanticsTests
                         object s1 = "p", s2 = "q";
                         var same = l1;
                         Say(c, $"{g1 == g2}{g1 == (object)g}{g1.Equals(g2)}{ReferenceEquals(g, g1)}{ReferenceEquals(g, g2)}{l1 == l2}{l1 == same}{s1 == s2}{ReferenceEquals(null, null)}{g1 != null}");
+                    }
+                }
+                public sealed record Batch(List<int> Items, Hue[] Hues);
+                public record Plaque(int A) { protected virtual bool PrintMembers(System.Text.StringBuilder b) { b.Append("A is ").Append(A); return true; } }
+                public record Marker(int A);
+                public sealed record Badge(int B) : Marker(7);
+                public sealed record Quiet();
+                public sealed class RecordPrinting : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var list = new List<int>();
+                        var map = new Dictionary<string, Hue>();
+                        int[] numbers = { 1 };
+                        Say(c, $"{new Batch(new List<int>(), new Hue[0])}|{new Plaque(3)}|{list}|{map}|{"" + list}|{list.ToString()}|{numbers}|{new Badge(2)}|{new Quiet()}|{new HashSet<Hue>()}");
+                    }
+                }
+                public sealed class CultureFree : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var inv = System.Globalization.CultureInfo.InvariantCulture;
+                        var b = new System.Text.StringBuilder().Append(3).Append('x').Append(2.0).AppendFormat("{0:D3}", 9).Append(1.5.ToString(inv));
+                        Say(c, $"{7}|{1.0}|{"ab".ToUpper()}|{12.ToString()}|{int.Parse("42")}|{double.Parse("25")}|{string.Format("{0}-{1:D2}", 3, 4)}|{Convert.ToString(5)}|{double.Parse("2.5", inv) * 2}|{b}|{string.Join(",", new[] { 1, 2 })}|{0.25.ToString("F2", inv)}|{int.Parse(" 4 ") + 9}|{true}|{'q'}");
                     }
                 }
             }

@@ -55,22 +55,8 @@ internal static class Arithmetic
         }
     }
 
-    /// <summary><c>a + b</c> where either side is a string: C# calls ToString() on the other side (null gives "").</summary>
-    public static string Concatenate(object? left, object? right) => Text(left) + Text(right);
-
-    /// <summary>
-    /// The text C# would produce for a value in a concatenation or an interpolation hole. Formatted with the invariant
-    /// culture: the culture the design will run under is not known at compile time (analyzers must not depend on the
-    /// compiler's culture), and integers, the usual content of generated names, read the same in every culture.
-    /// </summary>
-    public static string Text(object? value) => value switch
-    {
-        null => string.Empty,
-        string s => s,
-        bool b => b ? "True" : "False",
-        IFormattable f => f.ToString(null, CultureInfo.InvariantCulture),
-        _ => value.ToString() ?? string.Empty,
-    };
+    /// <summary>The text C# would produce for a value in a concatenation or an interpolation hole (see <see cref="ValueText"/>).</summary>
+    public static string Text(object? value) => ValueText.Of(value);
 
     public static object? Unary(UnaryOperatorKind kind, object operand, ITypeSymbol type, bool isChecked)
     {

@@ -64,7 +64,7 @@ internal sealed partial class Interpreter
         if (binary.OperatorKind == BinaryOperatorKind.Add
             && (leftType?.SpecialType == SpecialType.System_String || rightType?.SpecialType == SpecialType.System_String))
         {
-            return Concatenate(binary, left, right);
+            return Concatenate(binary, left, right, SourceType(binary.LeftOperand), SourceType(binary.RightOperand));
         }
 
         if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals && left is InterpretedObject { Type.IsRecord: true } record
@@ -292,9 +292,9 @@ internal sealed partial class Interpreter
                     var alignment = hole.Alignment is null ? null : Evaluate(hole.Alignment, frame);
                     var format = hole.FormatString is null ? null : Evaluate(hole.FormatString, frame) as string;
                     if (Unknown.Is(alignment)) return alignment;
-                    var composite = "{0" + (alignment is null ? "" : "," + System.Convert.ToInt32(alignment, CultureInfo.InvariantCulture).ToString(CultureInfo.InvariantCulture))
-                        + (format is null ? "" : ":" + format) + "}";
-                    text.Append(string.Format(CultureInfo.InvariantCulture, composite, value is bool b ? (b ? "True" : "False") : value));
+                    var composite = "{0" + (alignment is null ? "" : "," + System.Convert.ToInt32(alignment, CultureInfo.InvariantCulture).ToString(CultureInfo.InvariantCulture)) + "}";
+                    // The hole is formatted in the run's current culture: ValueText gives its text when no culture changes it.
+                    text.Append(string.Format(CultureInfo.InvariantCulture, composite, ValueText.Of(value, SourceType(hole.Expression), format)));
                     break;
                 default:
                     return Unsupported(part, "this interpolated string", "interpolated string handlers are outside the subset");
@@ -305,13 +305,16 @@ internal sealed partial class Interpreter
         return text.ToString();
     }
 
-    /// <summary>String concatenation (an interpreted ToString may be called), charged to the memory budget.</summary>
-    private object? Concatenate(IOperation site, object? left, object? right)
+    /// <summary>
+    /// String concatenation (an interpreted ToString may be called), charged to the memory budget. The operands' types in
+    /// the source say how a collection prints its type.
+    /// </summary>
+    private object? Concatenate(IOperation site, object? left, object? right, ITypeSymbol? leftType, ITypeSymbol? rightType)
     {
         string joined;
         try
         {
-            joined = Arithmetic.Concatenate(left, right);
+            joined = ValueText.Of(left, leftType) + ValueText.Of(right, rightType);
         }
         catch (UnknownValueException e)
         {
@@ -368,6 +371,10 @@ internal sealed partial class Interpreter
 
     private static bool IsNumeric(ITypeSymbol type) => type.SpecialType is SpecialType.System_Int32 or SpecialType.System_Int64
         or SpecialType.System_Double or SpecialType.System_Single or SpecialType.System_Char;
+
+    /// <summary>The type an expression has in the source, under the implicit conversion (to object, to string) C# adds.</summary>
+    private static ITypeSymbol? SourceType(IOperation operation)
+        => operation is IConversionOperation { IsImplicit: true } conversion ? conversion.Operand.Type : operation.Type;
 
     private static bool SameType(object value, ITypeSymbol type) => ClrTypes.Resolve(type) == value.GetType();
 
