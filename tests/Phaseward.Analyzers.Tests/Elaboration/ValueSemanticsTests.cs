@@ -101,7 +101,9 @@ public class ValueSemanticsTests
             var m = {|#7:"s" + n|};
             var p = {|#8:new System.Text.StringBuilder().Append(d)|};
             var q = {|#9:int.Parse("-4")|};
-            """);
+            var r = {|#10:string.Join(",", new[] { (Tone)(-2) })|};
+            var t = {|#11:((Tone)(-2)).ToString()|};
+            """, declarations: "public enum Tone { Low = 1 }");
         await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source,
             NotElaborated(0, "the text of the Double 1.5", Culture),
             NotElaborated(1, "the call to 'double.ToString()'", CallCulture),
@@ -112,7 +114,9 @@ public class ValueSemanticsTests
             NotElaborated(6, "the call to 'Convert.ToString(double)'", CallCulture),
             NotElaborated(7, "the text of the Int32 -3", Culture),
             NotElaborated(8, "the call to 'StringBuilder.Append(double)'", "the text of the Double 1.5: " + Culture),
-            NotElaborated(9, "the call to 'int.Parse(string)'", CallCulture)).RunAsync();
+            NotElaborated(9, "the call to 'int.Parse(string)'", CallCulture),
+            NotElaborated(10, "the call to 'string.Join<Tone>(string?, IEnumerable<Tone>)'", CallCulture),
+            NotElaborated(11, "the text of the Tone -2", Culture)).RunAsync();
     }
 
     [Fact]

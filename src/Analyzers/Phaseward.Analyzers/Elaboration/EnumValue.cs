@@ -64,7 +64,9 @@ internal sealed class EnumValue : IFormattable, IComparable, IConvertible
     // Enum.GetHashCode is the underlying value's hash: the same in every process.
     public override int GetHashCode() => Number.GetHashCode();
 
-    public override string ToString() => ToString(null, CultureInfo.InvariantCulture);
+    // Called by library code (string.Join of enums), which runs under the invariant culture or, to tell whether the
+    // culture matters, a contrary one: the thread's culture is the one the library call is made in.
+    public override string ToString() => ToString(null, System.Threading.Thread.CurrentThread.CurrentCulture);
 
     /// <summary>As <c>Enum.ToString(format)</c>: G (names; flags as "A, B"), D (the number), X (hex digits), F (flags).</summary>
     public string ToString(string? format, IFormatProvider? formatProvider)

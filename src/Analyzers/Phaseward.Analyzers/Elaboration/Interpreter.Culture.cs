@@ -173,7 +173,7 @@ internal sealed partial class Interpreter
         {
             foreach (var (value, format) in formatted)
             {
-                if (value is IFormattable formattable and not EnumValue)
+                if (value is IFormattable formattable)
                     ValueText.CultureFree(formattable, format);
                 else if (value is not null && ValueText.PrintsItsType(value) && !(method.Name == "ToString"))
                     return "it prints a collection's type, whose type arguments are not known here (the elaborator holds library collections with object elements)";

@@ -19,8 +19,8 @@ internal sealed partial class Interpreter
         {
             return (method.Name, arguments.Length) switch
             {
-                ("ToString", 0) => value.ToString(),
-                ("ToString", 1) when arguments[0] is string or null => value.ToString(arguments[0] as string, CultureInfo.InvariantCulture),
+                ("ToString", 0) => ValueText.Of(value),
+                ("ToString", 1) when arguments[0] is string or null => ValueText.Of(value, null, arguments[0] as string),
                 ("HasFlag", 1) when arguments[0] is EnumValue flag && SymbolEqualityComparer.Default.Equals(flag.Type, value.Type) => (value.Value & flag.Value) == flag.Value,
                 ("HasFlag", 1) when arguments[0] is not null => Raise(invocation.Syntax, new ArgumentException("The argument type is not the same as the enum type '" + value.Type.Name + "'.")),
                 ("Equals", 1) => value.Equals(arguments[0]),

@@ -118,8 +118,21 @@ internal sealed partial class Interpreter
             return Evaluate(arm.Value, frame);
         }
 
-        Throws(switchExpression.Syntax, "SwitchExpressionException: no arm of the switch expression matches the value " + Arithmetic.Text(value));
+        Throws(switchExpression.Syntax, "SwitchExpressionException: no arm of the switch expression matches the value " + MessageText(value));
         return Unknown.Value;
+    }
+
+    /// <summary>A value's text for a message (not a value of the design): in the invariant culture when no other is known.</summary>
+    private static string MessageText(object? value)
+    {
+        try
+        {
+            return ValueText.Of(value);
+        }
+        catch (UnknownValueException)
+        {
+            return value is IFormattable formattable ? formattable.ToString(null, CultureInfo.InvariantCulture) : "(a value whose text is not known)";
+        }
     }
 
     private object? FromConstant(object? value, ITypeSymbol? type)

@@ -185,7 +185,14 @@ internal sealed partial class Interpreter
                     return UnknownFrom(e, invocation);
                 }
             case "ToString" when arguments.Length == 0:
-                return receiver is null ? "" : Arithmetic.Text(receiver);
+                try
+                {
+                    return receiver is null ? "" : Arithmetic.Text(receiver);
+                }
+                catch (UnknownValueException e)
+                {
+                    return UnknownFrom(e, invocation);
+                }
             default:
                 return Unsupported(invocation, "the call to " + Describe(method), "it is not a member of Nullable<T> the elaborator answers");
         }
