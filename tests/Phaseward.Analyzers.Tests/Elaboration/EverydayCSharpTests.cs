@@ -6,7 +6,8 @@ namespace Phaseward.Analyzers.Tests.Elaboration;
 /// (PW9001), List.Sort and Max on the design's IComparable records were a false PW9003, <c>new T()</c> and
 /// <c>GetValueOrDefault</c> on a nullable were PW9001, and a write or foreach through null was PW9001 instead of the
 /// NullReferenceException the design catches, typeof or GetType() (to name what a block makes by its type), combined delegates and events
-/// were PW9001.
+/// were PW9001; so were a foreach over a sequence of the design's own type (a bus that is IEnumerable&lt;Net&gt;) and a
+/// nested initializer (<c>new Lane { Tap = { Depth = 2 }, Names = { "a" } }</c>).
 /// </summary>
 public class EverydayCSharpTests
 {
@@ -32,6 +33,10 @@ public class EverydayCSharpTests
     [InlineData("Everyday.NamedByType")]
     [InlineData("Everyday.Multicast")]
     [InlineData("Everyday.Events")]
+    [InlineData("Everyday.BusOfOwnType")]
+    [InlineData("Everyday.BusHandingOutAListEnumerator")]
+    [InlineData("Everyday.BusLeftEarly")]
+    [InlineData("Everyday.NestedInitializers")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
 
     private static readonly InMemoryDesigns Designs = new(("/everyday/Everyday.cs", """
@@ -199,6 +204,59 @@ public class EverydayCSharpTests
                         var same = stages[0].GetType() == stages[2].GetType() && stages[0].GetType() != typeof(Shifter) && stages[1].GetType().Equals(typeof(Shifter));
                         var text = $"{typeof(Shifter.Inner)}_{typeof(Box<int>)}_{typeof(Box<string>.Lid)}_{typeof(int[]).Name}_{typeof(Shifter).FullName}_{typeof(Adder).Namespace}";
                         c.Inverter(c.Input("a"), (GetType().Name + Of<Adder>() + Of<Shifter>() + same + text).Replace(".", "_").Replace("+", "p").Replace("`", "q").Replace("[", "o").Replace("]", "c").Replace(",", "m"));
+                    }
+                }
+                public sealed class Wires : IEnumerable<Net>
+                {
+                    private readonly List<Net> bits = new();
+                    public int Yielded;
+                    public void Add(Net n) => bits.Add(n);
+                    public IEnumerator<Net> GetEnumerator() { foreach (var b in bits) { Yielded++; yield return b; } }
+                    System.Collections.IEnumerator System.Collections.IEnumerable.GetEnumerator() => GetEnumerator();
+                }
+                public sealed class BusOfOwnType : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var bus = new Wires { c.Input("d0"), c.Input("d1"), c.Input("d2") };
+                        var k = 0;
+                        foreach (var bit in bus) c.Inverter(bit, "buf" + k++ + "_" + bus.Yielded);
+                    }
+                }
+                public sealed class ListedWires : IEnumerable<Net>
+                {
+                    private readonly List<Net> bits;
+                    public ListedWires(params Net[] nets) => bits = new List<Net>(nets);
+                    public IEnumerator<Net> GetEnumerator() => bits.GetEnumerator();
+                    System.Collections.IEnumerator System.Collections.IEnumerable.GetEnumerator() => bits.GetEnumerator();
+                }
+                public sealed class BusHandingOutAListEnumerator : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var bus = new ListedWires(c.Input("e0"), c.Input("e1"));
+                        var k = 0;
+                        foreach (var bit in bus) c.Inverter(bit, "le" + k++);
+                    }
+                }
+                public sealed class BusLeftEarly : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var bus = new Wires { c.Input("f0"), c.Input("f1"), c.Input("f2") };
+                        foreach (var bit in bus) { c.Inverter(bit, "early" + bus.Yielded); if (bus.Yielded == 2) break; }
+                        Chain(c, bus.Yielded, "ye");
+                    }
+                }
+                public sealed class Tap { public int Depth = 1; public List<string> Names = new(); }
+                public struct Spot { public int X; public int Y; }
+                public sealed class Lane { public Tap Tap { get; } = new(); public Spot At; public List<string> Names { get; } = new() { "z" }; }
+                public sealed class NestedInitializers : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var lane = new Lane { Tap = { Depth = 2, Names = { "p", "q" } }, At = { X = 3 }, Names = { "a", "b" } };
+                        Chain(c, lane.Tap.Depth + lane.Tap.Names.Count + lane.At.X + lane.Names.Count, "ni");
                     }
                 }
             }

@@ -1,5 +1,6 @@
 using System;
 using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Operations;
 
 namespace Phaseward.Analyzers.Elaboration;
 
@@ -20,6 +21,12 @@ internal sealed class DesignException : Exception
     public object Thrown { get; }
 
     public SyntaxNode Site { get; }
+
+    /// <summary>Whether the catch clause that takes it has been sought yet (the first pass, filters included).</summary>
+    public bool HandlerSought { get; set; }
+
+    /// <summary>The catch clause that takes it and the frame of its try statement; null when none does.</summary>
+    public (ICatchClauseOperation Clause, Frame Frame)? Handler { get; set; }
 
     /// <summary>The message C# would show for the thrown exception.</summary>
     public string Describe() => Thrown is Exception e ? e.GetType().Name + ": " + e.Message : Thrown.ToString() ?? "an exception";

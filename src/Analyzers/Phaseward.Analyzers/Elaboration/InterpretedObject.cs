@@ -35,7 +35,7 @@ internal sealed class InterpretedObject : System.IComparable
         Semantics = original.Semantics;
         members = new Dictionary<ISymbol, Variable>(original.members.Count, SymbolEqualityComparer.Default);
         foreach (var member in original.members)
-            members.Add(member.Key, new Variable(member.Value.Value));
+            members.Add(member.Key, member.Value.Copy());
     }
 
     /// <summary>The serial last issued: every object made after this moment has a larger <see cref="Serial"/>.</summary>

@@ -20,8 +20,8 @@ internal sealed partial class Interpreter
         }
 
         var place = PlaceOf(assignment.Target, frame);
-        var value = CopyIfValue(Evaluate(assignment.Value, frame));
-        if (!place.IsKnown) return Unknown.Value;
+        var value = CopyIfValue(Evaluate(assignment.Value, frame), assignment.Target.Type, frame);
+        if (!place.IsKnown) return Skipped(assignment, frame); // a write to a place not known: any that it may be
         place.Set(value);
         return value;
     }
@@ -29,7 +29,7 @@ internal sealed partial class Interpreter
     private object? VisitCompoundAssignment(ICompoundAssignmentOperation assignment, Frame frame)
     {
         var place = PlaceOf(assignment.Target, frame);
-        if (!place.IsKnown) return Unknown.Value;
+        if (!place.IsKnown) return Skipped(assignment, frame);
         var current = ReadPlace(place, assignment.Target);
         var operand = Evaluate(assignment.Value, frame);
         object? result;
@@ -52,7 +52,7 @@ internal sealed partial class Interpreter
     private object? VisitCoalesceAssignment(ICoalesceAssignmentOperation assignment, Frame frame)
     {
         var place = PlaceOf(assignment.Target, frame);
-        if (!place.IsKnown) return Unknown.Value;
+        if (!place.IsKnown) return Skipped(assignment, frame);
         var current = ReadPlace(place, assignment.Target);
         if (current is not null) return current;
         var value = Evaluate(assignment.Value, frame);
@@ -74,7 +74,7 @@ internal sealed partial class Interpreter
     private object? IncrementOrDecrement(IIncrementOrDecrementOperation operation, Frame frame)
     {
         var place = PlaceOf(operation.Target, frame);
-        if (!place.IsKnown) return Unknown.Value;
+        if (!place.IsKnown) return Skipped(operation, frame);
         var before = ReadPlace(place, operation.Target);
         if (Unknown.Is(before)) return before;
         var kind = operation.Kind == OperationKind.Increment ? BinaryOperatorKind.Add : BinaryOperatorKind.Subtract;
@@ -118,6 +118,7 @@ internal sealed partial class Interpreter
             default:
                 var place = PlaceOf(target, frame);
                 if (place.IsKnown) place.Set(value);
+                else Poison(target, frame);
                 return;
         }
     }
@@ -132,7 +133,7 @@ internal sealed partial class Interpreter
                     frame.Declare(local.Local, DefaultOf(local.Local.Type, frame));
                 else if (!frame.Declares(local.Local))
                     NoteEffect(); // a captured variable
-                return StoragePlace.Of(frame.Find(local.Local)!);
+                return PlaceOf(frame.Find(local.Local)!, local.Local);
 
             case IDeclarationExpressionOperation declaration:
                 return PlaceOf(declaration.Expression, frame);
@@ -141,7 +142,7 @@ internal sealed partial class Interpreter
                 return new StoragePlace(() => null, _ => { });
 
             case IParameterReferenceOperation or IFieldReferenceOperation when VariableOf(target, frame) is { } variable:
-                return StoragePlace.Of(variable);
+                return PlaceOf(variable, ReferencedSymbol(target));
 
             case IArrayElementReferenceOperation element when element.Indices.Length == 1:
                 var array = Evaluate(element.ArrayReference, frame);
@@ -189,7 +190,7 @@ internal sealed partial class Interpreter
             if (IsAutoProperty(property))
             {
                 NoteStoreInto(property.IsStatic ? null : interpretedObject);
-                return StoragePlace.Of(property.IsStatic ? StaticVariable(property, frame, reference.Syntax) : interpretedObject!.GetOrAdd(property));
+                return PlaceOf(property.IsStatic ? StaticVariable(property, frame, reference.Syntax) : interpretedObject!.GetOrAdd(property), property);
             }
 
             if (property.SetMethod is { } setter && session.IsInSource(setter))

@@ -29,6 +29,9 @@ internal sealed partial class Interpreter
         }
         catch (System.ArgumentException e)
         {
+            // The circuit's own exception (its ParamName kept) is what a design that catches it sees.
+            if (tryDepth > 0)
+                throw new DesignException(e, invocation.Syntax);
             return ThrowsUnknown(invocation, e.GetType().Name + ": " + e.Message);
         }
 

@@ -20,7 +20,7 @@ internal sealed partial class Interpreter
         Step(invocation);
         var method = invocation.TargetMethod;
         var receiver = invocation.Instance is null ? null : Evaluate(invocation.Instance, frame);
-        if (Unknown.Is(receiver)) return receiver;
+        if (Unknown.Is(receiver)) return Skipped(invocation, frame); // which method or delegate runs is not known
         // An instance method called through null throws in C#; it must never run on the frame's own object instead.
         if (receiver is null && !method.IsStatic && ThroughReference(invocation.Instance) is { } nullReceiver)
             return NullReference(invocation, nullReceiver, "the call to " + Describe(method));
@@ -43,6 +43,8 @@ internal sealed partial class Interpreter
             // Run even when an argument is unknown: what depends on it stays unknown inside, and the rest of what the
             // method does (state it changes, devices it makes) is not lost.
             var (arguments, references) = Arguments(invocation.Arguments, method, frame, keepUnknown: true);
+            if (method is { IsStatic: true, MethodKind: MethodKind.Ordinary, ContainingType: { } owner } && !InitializeForUse(StaticOwner(owner, frame), invocation.Syntax))
+                return Unknown.Value;
             return InvokeUser(method, receiver as InterpretedObject ?? (method.IsStatic ? null : frame.Instance), arguments!, references, invocation, frame);
         }
 
@@ -90,8 +92,8 @@ internal sealed partial class Interpreter
             return CallTypeMember(invocation, typeValue, method, frame);
 
         if (!ClrTypes.IsDsl(method) && !Library.IsPure(method))
-            return Unsupported(invocation, "the call to " + Describe(method),
-                "it is outside what compile-time elaboration runs (only the Phaseward DSL, methods of this compilation and pure library members such as string, Math, LINQ and the collections)");
+            return Skipped(invocation, frame, Unsupported(invocation, "the call to " + Describe(method),
+                "it is outside what compile-time elaboration runs (only the Phaseward DSL, methods of this compilation and pure library members such as string, Math, LINQ and the collections)"));
 
         if (!method.IsStatic && Mutators.Contains(method.Name) && receiver is not string)
             NoteStoreThrough(invocation.Instance, frame);
@@ -100,12 +102,15 @@ internal sealed partial class Interpreter
         // A library call that could not be made (or failed half-way) may have changed the collections it was given or
         // called on: they become unknown, never read as they were before the call.
         if (Unknown.Is(result) && !ClrTypes.IsDsl(method))
+        {
+            Poison(invocation, frame); // the callbacks it was given may not have run, or not to the end
             PoisonMutables(invocation, frame);
+        }
         return result;
     }
 
     /// <summary>The members of the pure library's collections and StringBuilder that change the object they are called on.</summary>
-    private static readonly HashSet<string> Mutators = new(StringComparer.Ordinal)
+    internal static readonly HashSet<string> Mutators = new(StringComparer.Ordinal)
     {
         "Add", "AddRange", "Insert", "InsertRange", "Remove", "RemoveAt", "RemoveAll", "RemoveRange", "RemoveWhere", "Clear", "Push", "Pop",
         "Enqueue", "Dequeue", "TryAdd", "TryPop", "TryDequeue", "TryRemove", "Sort", "Reverse", "Append", "AppendLine", "AppendFormat",
@@ -124,6 +129,8 @@ internal sealed partial class Interpreter
             return Unsupported(site, "the call to " + Describe(method), isDsl
                 ? "the Phaseward assembly loaded by the compiler has no such member (is it older than the one the project references?)"
                 : "the library member was not found for the values at hand");
+        if (receiver is not null && !isDsl)
+            member = Library.ForReceiver(member, receiver);
         if (receiver is not null && member.DeclaringType is { IsPrimitive: true } primitive && receiver.GetType() != primitive)
             receiver = ToClr(receiver, primitive);
         if (!isDsl && !ChargeSizes(site, member, arguments))
@@ -137,6 +144,9 @@ internal sealed partial class Interpreter
         var clrArguments = arguments;
         for (var i = 0; i < parameterTypes.Length; i++)
         {
+            // A lazy sequence made in generic code (its element type a type parameter there) meets its static type here.
+            if (!isDsl && i < method.Parameters.Length)
+                arguments[i] = WithErasedDefaults(arguments[i], method.Parameters[i].Type);
             clrArguments[i] = ToClr(arguments[i], parameterTypes[i]);
             if (clrArguments[i] is Unconvertible)
                 return Unsupported(site, "the call to " + Describe(method), "argument " + (i + 1) + " cannot be passed to the library as " + parameterTypes[i].Name);
@@ -164,7 +174,7 @@ internal sealed partial class Interpreter
             if (references is not null)
                 for (var i = 0; i < references.Length && i < clrArguments.Length; i++)
                     if (references[i] is { } reference)
-                        reference.Value = FromClr(clrArguments[i]);
+                        reference.Value = WithErasedDefaults(FromClr(clrArguments[i]), method.Parameters[i].Type);
             if (circuit is not null && (circuit.DeviceCount > limits.DeviceBudget || circuit.NetCount > limits.DeviceBudget))
             {
                 Report(RuleCatalog.ElaborationBudgetExceeded.Id, loops.Count > 0 ? loops.Peek().Syntax : site.Syntax, DesignName,
@@ -172,9 +182,11 @@ internal sealed partial class Interpreter
                 throw new ElaborationStopped();
             }
 
-            if (!isDsl)
-                Charge(site, result);
-            return FromClr(result);
+            if (isDsl)
+                return FromClr(result);
+            Charge(site, result);
+            RestoreErasedDefaults(site, clrArguments);
+            return WithErasedDefaults(FromClr(result), method.MethodKind == MethodKind.Constructor ? null : method.ReturnType);
         }
         catch (TargetInvocationException e) when (e.InnerException is ElaborationStopped or UnknownValueException or DesignException
             || e.InnerException?.InnerException is UnknownValueException)
@@ -231,12 +243,15 @@ internal sealed partial class Interpreter
                 if (variable is null)
                 {
                     Unsupported(argument, "this ref/out argument", "only locals, parameters and fields of the design are passed by reference");
+                    // The callee may write through it: what it refers to (an element, a tuple's part) becomes unknown.
+                    Poison(argument, frame);
+                    values[ordinal] = Unknown.Value;
                     unknown = true;
                     continue;
                 }
 
                 (references ??= new Variable?[method.Parameters.Length])[ordinal] = variable;
-                values[ordinal] = variable.Value;
+                values[ordinal] = Read(variable, ReferencedSymbol(argument.Value));
                 continue;
             }
 
@@ -273,15 +288,15 @@ internal sealed partial class Interpreter
             frameSizes.TryGetValue(body, out var expectedVariables);
             var frame = new Frame(method.OriginalDefinition, parent, method.IsStatic && method.MethodKind != MethodKind.LocalFunction ? null : instance, expectedVariables);
             var parameters = method.OriginalDefinition.Parameters;
+            frame.TypeArguments = TypeArgumentsOf(method, caller);
             for (var i = 0; i < parameters.Length && i < arguments.Length; i++)
             {
                 if (i < references.Length && references[i] is { } variable)
                     frame.Bind(parameters[i], variable);
                 else
-                    frame.Declare(parameters[i], CopyIfValue(arguments[i]));
+                    frame.Declare(parameters[i], CopyIfValue(arguments[i], parameters[i].Type, frame));
             }
 
-            frame.TypeArguments = TypeArgumentsOf(method, caller);
             if (IsIterator(body))
             {
                 if (streamTo is { } stream && ReferenceEquals(stream.Site, site))
@@ -297,7 +312,7 @@ internal sealed partial class Interpreter
 
             if (frame.Yielded is not null)
                 return RunToCompletion(method, body, frame, site);
-            Execute(body, frame);
+            LeaveBody(Execute(body, frame), frame);
             if (frame.Count > expectedVariables)
                 frameSizes[body] = frame.Count;
             return frame.Consumer is not null ? StreamedIterator.Value : frame.ReturnValue;
@@ -346,14 +361,19 @@ internal sealed partial class Interpreter
         var effectsBefore = externalEffects;
         var outerObjects = iteratorObjectsAfter;
         iteratorObjectsAfter = InterpretedObject.LastSerial;
+        Completion completion;
         try
         {
-            Execute(body, frame);
+            completion = Execute(body, frame);
         }
         finally
         {
             iteratorObjectsAfter = outerObjects;
         }
+
+        // It may have stopped (yield break) or thrown in code that was skipped: which values it yields is not known.
+        if (completion.IsMaybe)
+            return Unknown.Value;
 
         if (externalEffects == effectsBefore)
             return frame.Yielded;
@@ -445,7 +465,10 @@ internal sealed partial class Interpreter
     /// </summary>
     private static bool IsVariable(IOperation operation, Frame frame) => operation switch
     {
-        ILocalReferenceOperation local => local.Local.RefKind != RefKind.RefReadOnly,
+        // A struct reached through a reference type (object, an interface) is a box: the call changes the box itself.
+        _ when IsReferenceType(operation.Type, frame) => true,
+        // A foreach or using variable is read-only: C# calls a method that may change it on a copy.
+        ILocalReferenceOperation local => local.Local.RefKind != RefKind.RefReadOnly && !local.Local.IsForEach && !local.Local.IsUsing,
         IParameterReferenceOperation parameter => parameter.Parameter.RefKind is not (RefKind.In or RefKind.RefReadOnlyParameter),
         IInstanceReferenceOperation or IArrayElementReferenceOperation => true,
         IFieldReferenceOperation field => (!field.Field.IsReadOnly || IsConstructorOf(frame, field.Field.ContainingType))
@@ -482,6 +505,8 @@ internal sealed partial class Interpreter
                 }
 
                 var ownerValue = field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame);
+                if (Unknown.Is(ownerValue))
+                    return WriteToUnknownOwner(field.Field);
                 if (ownerValue is null && ThroughReference(field.Instance) is { } nullOwner)
                 {
                     // Nothing is stored: the write is made to a variable nobody reads, after the exception is raised.

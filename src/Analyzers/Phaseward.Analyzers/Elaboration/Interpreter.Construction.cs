@@ -36,6 +36,8 @@ internal sealed partial class Interpreter
     // A new object of the design's type, its constructor run with the creation as the caller of what it reports.
     private InterpretedObject MakeObject(IOperation creation, INamedTypeSymbol type, IMethodSymbol constructor, object?[] arguments)
     {
+        // Made even when its type failed to initialize outside a try: that is PW9003 here, and elaboration goes on.
+        InitializeForUse(type, creation.Syntax);
         var made = NewObject(type);
         EnterCall(creation);
         var outerCallers = callers;

@@ -90,7 +90,7 @@ internal sealed partial class Interpreter
         if (creation.DimensionSizes.Length != 1)
             return Unsupported(creation, "a multi-dimensional array", "only one-dimensional arrays are elaborated");
         var size = Evaluate(creation.DimensionSizes[0], frame);
-        if (Unknown.Is(size)) return size;
+        if (Unknown.Is(size)) return Skipped(creation, frame);
         // The size may be a long or ulong (C# allows them): charged to the memory budget before anything is made.
         var length = size is ulong huge ? (huge > long.MaxValue ? long.MaxValue : (long)huge) : System.Convert.ToInt64(size, CultureInfo.InvariantCulture);
         if (length < 0)
@@ -115,7 +115,7 @@ internal sealed partial class Interpreter
             // Elements of a struct type are values: one default each, not one shared by every slot.
             items[0] = initial;
             for (var i = 1; i < length; i++)
-                items[i] = CopyIfValue(initial);
+                items[i] = CopyIfValue(initial, element, frame);
         }
         else
         {
@@ -136,7 +136,7 @@ internal sealed partial class Interpreter
             if (element is ISpreadOperation spread)
             {
                 var source = Evaluate(spread.Operand, frame);
-                if (Unknown.Is(source)) return source;
+                if (Unknown.Is(source)) return Skipped(collection, frame);
                 if (source is object?[] array) items.AddRange(array);
                 else if (source is List<object?> list) items.AddRange(list);
                 else return Unsupported(spread, "this spread element", "only arrays and lists are spread");
@@ -173,6 +173,29 @@ internal sealed partial class Interpreter
     private object? VisitObjectOrCollectionInitializer(IObjectOrCollectionInitializerOperation initializer, Frame frame)
         => Unsupported(initializer, "this initializer", "it is only interpreted as part of an object creation");
 
+    /// <summary>A nested initializer, <c>new Outer { Inner = { X = 1 }, Items = { a, b } }</c>: it fills in the object the
+    /// member already holds (it makes none).</summary>
+    private object? VisitMemberInitializer(IMemberInitializerOperation nested, Frame frame)
+    {
+        var member = Evaluate(nested.InitializedMember, frame);
+        if (Unknown.Is(member)) return Skipped(nested.Initializer, frame);
+        if (member is null)
+            return NullReference(nested, nested.InitializedMember, "its initializer") ?? Unknown.Value;
+        implicitReceivers.Push(member);
+        try
+        {
+            foreach (var initializer in nested.Initializer.Initializers)
+                if (Unknown.Is(Evaluate(initializer, frame)))
+                    return Unknown.Value;
+        }
+        finally
+        {
+            implicitReceivers.Pop();
+        }
+
+        return member;
+    }
+
     private object? VisitAnonymousObjectCreation(IAnonymousObjectCreationOperation creation, Frame frame)
         => Unsupported(creation, "an anonymous object", "anonymous types are outside the subset the elaborator interprets");
 
@@ -180,7 +203,7 @@ internal sealed partial class Interpreter
     private object? VisitWith(IWithOperation with, Frame frame)
     {
         var original = Evaluate(with.Operand, frame);
-        if (Unknown.Is(original)) return original;
+        if (Unknown.Is(original)) return Skipped(with, frame);
         if (original is not InterpretedObject source)
             return Unsupported(with, "this 'with' expression", "only records and structs of this compilation are copied with 'with'");
         var copy = source.Copy();

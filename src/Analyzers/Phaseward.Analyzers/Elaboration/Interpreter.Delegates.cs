@@ -11,15 +11,21 @@ internal sealed partial class Interpreter
 {
     // A closure captures the variables as they are when it is made (Frame.Snapshot): a lambda made in a loop body sees
     // that iteration's variables, not the last iteration's.
-    private object? VisitAnonymousFunction(IAnonymousFunctionOperation lambda, Frame frame) => Closure.Of(lambda, frame.Snapshot());
+    private object? VisitAnonymousFunction(IAnonymousFunctionOperation lambda, Frame frame)
+    {
+        NoteDelegate(lambda, lambda.Symbol);
+        return Closure.Of(lambda, frame.Snapshot());
+    }
 
     private object? VisitDelegateCreation(IDelegateCreationOperation creation, Frame frame)
     {
         switch (creation.Target)
         {
             case IAnonymousFunctionOperation lambda:
+                NoteDelegate(lambda, lambda.Symbol);
                 return Closure.Of(lambda, frame.Snapshot());
             case IMethodReferenceOperation reference:
+                NoteDelegate(null, reference.Method);
                 var receiver = reference.Instance is null ? null : Evaluate(reference.Instance, frame);
                 if (Unknown.Is(receiver)) return receiver;
                 if (!session.IsInSource(reference.Method))
@@ -58,8 +64,8 @@ internal sealed partial class Interpreter
             var frame = new Frame(lambda.Symbol, closure.Captured, closure.Captured.Instance);
             var parameters = lambda.Symbol.Parameters;
             for (var i = 0; i < parameters.Length; i++)
-                frame.Declare(parameters[i], i < arguments.Length ? CopyIfValue(arguments[i]) : Unknown.Value);
-            Execute(lambda.Body, frame);
+                frame.Declare(parameters[i], i < arguments.Length ? CopyIfValue(arguments[i], parameters[i].Type, frame) : Unknown.Value);
+            LeaveBody(Execute(lambda.Body, frame), frame);
             return frame.ReturnValue;
         }
         finally
@@ -105,7 +111,7 @@ internal sealed partial class Interpreter
     {
         if (EventOwner(reference, reference, frame, out var owner) is { } notRead)
             return notRead;
-        return owner!.Find(reference.Event)?.Value;
+        return owner!.Find(reference.Event) is { } handlers ? Read(handlers, reference.Event) : null;
     }
 
     private object? VisitEventAssignment(IEventAssignmentOperation assignment, Frame frame)
@@ -117,9 +123,10 @@ internal sealed partial class Interpreter
         var handler = Evaluate(assignment.HandlerValue, frame);
         var handlers = owner!.GetOrAdd(reference.Event);
         NoteStoreInto(owner);
-        handlers.Value = Unknown.Is(handler) || Unknown.Is(handlers.Value)
+        var current = Read(handlers, reference.Event);
+        handlers.Value = Unknown.Is(handler) || Unknown.Is(current)
             ? Unknown.Value
-            : DelegateArithmetic(assignment, assignment.Adds ? BinaryOperatorKind.Add : BinaryOperatorKind.Subtract, handlers.Value, handler);
+            : DelegateArithmetic(assignment, assignment.Adds ? BinaryOperatorKind.Add : BinaryOperatorKind.Subtract, current, handler);
         return null;
     }
 

@@ -141,6 +141,8 @@ internal sealed partial class Interpreter
                 return VisitTuple((ITupleOperation)operation, frame);
             case OperationKind.ObjectOrCollectionInitializer:
                 return VisitObjectOrCollectionInitializer((IObjectOrCollectionInitializerOperation)operation, frame);
+            case OperationKind.MemberInitializer:
+                return VisitMemberInitializer((IMemberInitializerOperation)operation, frame);
             case OperationKind.AnonymousObjectCreation:
                 return VisitAnonymousObjectCreation((IAnonymousObjectCreationOperation)operation, frame);
             case OperationKind.With:
@@ -223,9 +225,8 @@ internal sealed partial class Interpreter
         }
 
         Unsupported(operation, StatementName(operation), "this kind of statement is outside the subset the elaborator interprets");
-        // What the skipped statement may have assigned becomes unknown.
-        Poison(operation, frame);
-        return Completion.Normal;
+        // What the skipped statement may have assigned becomes unknown, and where it may have jumped is skipped too.
+        return SkipStatement(operation, frame);
     }
 
     /// <summary>A statement rather than an expression (an <c>if</c> rather than <c>?:</c>, a broken statement rather than a broken expression).</summary>

@@ -3,6 +3,7 @@ using System.Collections.Generic;
 using System.Linq;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Operations;
+using Phaseward.Netlists;
 
 namespace Phaseward.Analyzers.Elaboration;
 
@@ -27,6 +28,7 @@ internal sealed partial class Interpreter
         var completion = Completion.Normal;
         DesignException? uncaught = null;
         tryDepth++;
+        activeTries.Add((statement, frame, callers));
         try
         {
             completion = Execute(statement.Body, frame);
@@ -34,19 +36,24 @@ internal sealed partial class Interpreter
         catch (DesignException e)
         {
             uncaught = e;
+            // The innermost try the exception reaches seeks its handler, outer filters included, before this finally runs.
+            if (!e.HandlerSought)
+                FindHandler(e);
         }
         finally
         {
+            activeTries.RemoveAt(activeTries.Count - 1);
             tryDepth--;
         }
 
         if (uncaught is not null)
         {
-            var handler = statement.Catches.FirstOrDefault(clause => Catches(clause, uncaught.Thrown, frame));
+            var handler = uncaught.Handler is var (clause, handlerFrame) && ReferenceEquals(handlerFrame, frame) && clause.Parent == statement ? clause : null;
             if (handler is not null)
             {
+                // 'throw;' rethrows the exception caught, whether or not the clause names it (and whatever its variable now holds).
+                caught.Push(uncaught.Thrown);
                 uncaught = null;
-                caught.Push(handler.ExceptionDeclarationOrExpression is null ? new object() : frame.Find(((IVariableDeclaratorOperation)handler.ExceptionDeclarationOrExpression).Symbol)!.Value!);
                 try
                 {
                     completion = Execute(handler.Handler, frame);
@@ -60,6 +67,15 @@ internal sealed partial class Interpreter
                     caught.Pop();
                 }
             }
+        }
+
+        // The body may have thrown in code that was skipped: a catch clause may then have run, and what it does is not
+        // known either; after it, the code runs on as after any catch.
+        if (completion == Completion.MaybeThrow && statement.Catches.Length > 0)
+        {
+            completion = Completion.Normal;
+            foreach (var clause in statement.Catches)
+                completion = Completion.Farther(completion, SkipStatement(clause.Handler, frame));
         }
 
         if (statement.Finally is not null)
@@ -80,15 +96,58 @@ internal sealed partial class Interpreter
         return completion;
     }
 
+    /// <summary>
+    /// The first pass, as .NET makes it: the catch clauses of the running try statements, innermost first, are tried
+    /// (their filters run) before any finally block runs; the one that takes the exception is kept on it.
+    /// </summary>
+    private void FindHandler(DesignException exception)
+    {
+        exception.HandlerSought = true;
+        for (var i = activeTries.Count - 1; i >= 0; i--)
+        {
+            var (statement, frame, tryCallers) = activeTries[i];
+            foreach (var clause in statement.Catches)
+            {
+                if (Catches(clause, exception.Thrown, frame, tryCallers))
+                {
+                    exception.Handler = (clause, frame);
+                    return;
+                }
+            }
+        }
+    }
+
     /// <summary>Does the catch clause take this exception? (Declares its variable and evaluates its filter.)</summary>
-    private bool Catches(ICatchClauseOperation clause, object thrown, Frame frame)
+    private bool Catches(ICatchClauseOperation clause, object thrown, Frame frame, SourceSpan[] tryCallers)
     {
         var type = clause.ExceptionType;
         if (type.SpecialType != SpecialType.System_Object && type.ToDisplayString() != "System.Exception" && IsOfType(thrown, type, frame) != true)
             return false;
         if (clause.ExceptionDeclarationOrExpression is IVariableDeclaratorOperation declarator)
             frame.Declare(declarator.Symbol, thrown);
-        return clause.Filter is null || Condition(clause.Filter, frame) == true;
+        return clause.Filter is null || FilterAccepts(clause.Filter, frame, tryCallers);
+    }
+
+    /// <summary>A filter runs where its try statement is; an exception it throws makes it false (the original goes on).</summary>
+    private bool FilterAccepts(IOperation filter, Frame frame, SourceSpan[] tryCallers)
+    {
+        var (outerTries, outerCallers) = (activeTries, callers);
+        activeTries = new();
+        callers = tryCallers;
+        tryDepth++;
+        try
+        {
+            return Condition(filter, frame) == true;
+        }
+        catch (DesignException)
+        {
+            return false;
+        }
+        finally
+        {
+            tryDepth--;
+            (activeTries, callers) = (outerTries, outerCallers);
+        }
     }
 
     private Completion VisitUsing(IUsingOperation statement, Frame frame)
@@ -102,7 +161,8 @@ internal sealed partial class Interpreter
                     resources.Add(frame.Find(declarator.Symbol)?.Value);
                 break;
             default:
-                resources.Add(Evaluate(statement.Resources, frame));
+                // 'using (s)' disposes a copy of a struct held in a variable, as C# does.
+                resources.Add(CopyIfValue(Evaluate(statement.Resources, frame), statement.Resources.Type, frame));
                 break;
         }
 

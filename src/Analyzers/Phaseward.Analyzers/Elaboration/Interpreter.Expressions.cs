@@ -18,8 +18,7 @@ internal sealed partial class Interpreter
         // unknown what a broken statement may have assigned).
         if (!IsStatement(invalid))
             return Unknown.Value;
-        Poison(invalid, frame);
-        return Completion.Normal;
+        return SkipStatement(invalid, frame);
     }
 
     /// <summary>An <c>if</c> statement, or a <c>?:</c> expression.</summary>
@@ -31,7 +30,7 @@ internal sealed partial class Interpreter
             {
                 true => Evaluate(conditional.WhenTrue, frame),
                 false => conditional.WhenFalse is null ? null : Evaluate(conditional.WhenFalse, frame),
-                _ => Unknown.Value,
+                _ => Skipped(conditional.WhenFalse, frame, Skipped(conditional.WhenTrue, frame)),
             };
 
         switch (condition)
@@ -41,20 +40,19 @@ internal sealed partial class Interpreter
             case false:
                 return conditional.WhenFalse is null ? Completion.Normal : Execute(conditional.WhenFalse, frame);
             default:
-                Poison(conditional.WhenTrue, frame);
-                if (conditional.WhenFalse is not null) Poison(conditional.WhenFalse, frame);
-                return Completion.Normal;
+                var escape = SkipStatement(conditional.WhenTrue, frame);
+                return conditional.WhenFalse is null ? escape : Completion.Farther(escape, SkipStatement(conditional.WhenFalse, frame));
         }
     }
 
     private object? VisitLocalReference(ILocalReferenceOperation local, Frame frame)
         => frame.Find(local.Local) is { } variable
-            ? variable.Value
+            ? Read(variable, local.Local)
             : Unsupported(local, "local " + Describe(local.Local), "it is read before the elaborator saw it assigned");
 
     private object? VisitParameterReference(IParameterReferenceOperation parameter, Frame frame)
         => (frame.Find(parameter.Parameter) ?? frame.Instance?.Find(parameter.Parameter)) is { } argument
-            ? argument.Value
+            ? Read(argument, parameter.Parameter)
             : Unsupported(parameter, "parameter " + Describe(parameter.Parameter), "its value is not known here");
 
     /// <summary><c>this</c>, the object an initializer fills in, or the value a property pattern reads from.</summary>
@@ -84,7 +82,7 @@ internal sealed partial class Interpreter
     private object? VisitCoalesce(ICoalesceOperation coalesce, Frame frame)
     {
         var tested = Evaluate(coalesce.Value, frame);
-        return Unknown.Is(tested) ? tested : tested ?? Evaluate(coalesce.WhenNull, frame);
+        return Unknown.Is(tested) ? Skipped(coalesce.WhenNull, frame) : tested ?? Evaluate(coalesce.WhenNull, frame);
     }
 
     private object? VisitConditionalAccessInstance(IConditionalAccessInstanceOperation receiver, Frame frame)
@@ -102,16 +100,16 @@ internal sealed partial class Interpreter
     private object? VisitSwitchExpression(ISwitchExpressionOperation switchExpression, Frame frame)
     {
         var value = Evaluate(switchExpression.Value, frame);
-        if (Unknown.Is(value)) return value;
+        if (Unknown.Is(value)) return Skipped(switchExpression, frame);
         foreach (var arm in switchExpression.Arms)
         {
             var matches = Decide(arm.Pattern, value, frame);
-            if (matches is null) return Unknown.Value;
+            if (matches is null) return Skipped(switchExpression, frame);
             if (!matches.Value) continue;
             if (arm.Guard is not null)
             {
                 var guard = Condition(arm.Guard, frame);
-                if (guard is null) return Unknown.Value;
+                if (guard is null) return Skipped(switchExpression, frame);
                 if (!guard.Value) continue;
             }
 
@@ -213,8 +211,10 @@ internal sealed partial class Interpreter
     private object? VisitConditionalAccess(IConditionalAccessOperation access, Frame frame)
     {
         var receiver = Evaluate(access.Operation, frame);
-        if (Unknown.Is(receiver) || receiver is null)
-            return receiver;
+        if (Unknown.Is(receiver))
+            return Skipped(access.WhenNotNull, frame);
+        if (receiver is null)
+            return null;
         conditionalReceivers.Push(receiver);
         try
         {

@@ -36,6 +36,10 @@ internal sealed partial class Interpreter
                 return type == typeof(object[]) ? items : TypedArray(items, type.GetElementType()!);
             case List<object?> list when type.IsArray:
                 return TypedArray(list.ToArray(), type.GetElementType()!);
+            case IndexValue index when type.FullName == "System.Index":
+                return IndexToClr(index, type);
+            case RangeValue range when type.FullName == "System.Range":
+                return Activator.CreateInstance(type, IndexToClr(range.Start, type.GetProperty("Start")!.PropertyType), IndexToClr(range.End, type.GetProperty("End")!.PropertyType));
             case TupleValue tuple when type.IsGenericType && type.FullName?.StartsWith("System.ValueTuple`", StringComparison.Ordinal) == true:
                 return ValueTupleToClr(tuple, type);
         }
@@ -54,6 +58,8 @@ internal sealed partial class Interpreter
             return type.IsAssignableFrom(list) ? Activator.CreateInstance(list, array) : Unconvertible.Value;
         }
 
+        if (ErasedComparers.Adapt(value, type) is { } comparer)
+            return comparer;
         if (value is InterpretedObject or TupleValue)
             return type == typeof(object) ? value : Unconvertible.Value;
         if (underlying.IsEnum && value is not Enum)
@@ -66,7 +72,13 @@ internal sealed partial class Interpreter
     }
 
     /// <summary>Collections whose size is already paid for (arrays, lists, sets, dictionaries, strings): not metered again.</summary>
-    private static bool IsMaterialized(object value) => value is Array or string || value is ICollection && value.GetType().Namespace == "System.Collections.Generic";
+    /// <remarks>Passed as they are, so the library takes the paths it takes for them at run time (a HashSet given to
+    /// SymmetricExceptWith is used as a set, in its order).</remarks>
+    private static bool IsMaterialized(object value)
+        => value is Array or string || value is ICollection or ISet<object?> && value.GetType().Namespace == "System.Collections.Generic";
+
+    // The interpreter's ^i as the runtime's System.Index (the analyzer's netstandard2.0 has none: made by reflection).
+    private static object IndexToClr(IndexValue index, Type indexType) => Activator.CreateInstance(indexType, index.Value, index.FromEnd)!;
 
     private static Type? SequenceElementType(Type type)
     {

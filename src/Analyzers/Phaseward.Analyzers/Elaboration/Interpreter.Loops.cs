@@ -1,5 +1,7 @@
+using System;
 using System.Collections;
 using System.Collections.Generic;
+using System.Linq;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Operations;
@@ -33,21 +35,15 @@ internal sealed partial class Interpreter
                 {
                     var condition = Condition(loop.Condition, frame);
                     if (condition is null)
-                    {
-                        Poison(loop.Body, frame);
-                        return Completion.Normal;
-                    }
+                        return SkipStatement(loop, frame);
 
                     if (condition.Value == loop.ConditionIsUntil)
                         return Completion.Normal;
                 }
 
                 first = false;
-                var completion = Execute(loop.Body, frame);
-                if (completion == Completion.Break)
-                    return Completion.Normal;
-                if (completion == Completion.Return)
-                    return completion;
+                if (AfterIteration(Execute(loop.Body, frame), loop, frame) is { } after)
+                    return after;
             }
         }
         finally
@@ -62,10 +58,7 @@ internal sealed partial class Interpreter
         // run, and while it is being typed it would run to the step or device budget: the loop is skipped, like any
         // code that does not compile (the compiler reports it), with what it assigns made unknown.
         if (HeaderDoesNotCompile(loop))
-        {
-            Poison(loop, frame);
-            return Completion.Normal;
-        }
+            return SkipStatement(loop, frame);
 
         foreach (var before in loop.Before)
             Execute(before, frame);
@@ -77,19 +70,12 @@ internal sealed partial class Interpreter
                 Step(loop);
                 var condition = Condition(loop.Condition, frame);
                 if (condition is null)
-                {
-                    Poison(loop.Body, frame);
-                    foreach (var bottom in loop.AtLoopBottom) Poison(bottom, frame);
-                    return Completion.Normal;
-                }
+                    return SkipStatement(loop, frame);
 
                 if (!condition.Value)
                     return Completion.Normal;
-                var completion = Execute(loop.Body, frame);
-                if (completion == Completion.Break)
-                    return Completion.Normal;
-                if (completion == Completion.Return)
-                    return completion;
+                if (AfterIteration(Execute(loop.Body, frame), loop, frame) is { } after)
+                    return after;
                 foreach (var bottom in loop.AtLoopBottom)
                     Execute(bottom, frame);
             }
@@ -139,9 +125,13 @@ internal sealed partial class Interpreter
             {
                 Step(loop);
                 var completion = RunForEachBody(loop, frame, value, variableType);
-                if (completion == Completion.Return)
-                    outcome = Completion.Return;
-                return completion != Completion.Break && completion != Completion.Return;
+                if (AfterIteration(completion, loop, frame) is not { } after)
+                    return true;
+                outcome = after;
+                // The iterator stops here; if the loop only may have stopped, what the iterator would do next is not known.
+                if (completion.IsMaybe)
+                    Poison(source, frame);
+                return false;
             }
             finally
             {
@@ -165,17 +155,55 @@ internal sealed partial class Interpreter
 
         if (streamed || collection is StreamedIterator)
             return outcome;
-        if (Unknown.Is(collection))
+
+        // A sequence of the design's own type (a bus that is IEnumerable<Net>): its GetEnumerator, an iterator streamed
+        // into the loop like any other, or one that hands out a library enumerator.
+        if (collection is InterpretedObject sequence)
         {
-            Poison(loop.Body, frame);
-            return Completion.Normal;
+            if (GetEnumeratorOf(sequence.Type) is not { } getEnumerator)
+            {
+                Unsupported(loop.Collection, "this foreach collection", "its type has no GetEnumerator method of this compilation");
+                return SkipStatement(loop, frame);
+            }
+
+            streamTo = (loop.Collection, Consume);
+            try
+            {
+                collection = InvokeUser(getEnumerator, sequence, Array.Empty<object?>(), Array.Empty<Variable?>(), loop.Collection, frame);
+            }
+            finally
+            {
+                streamTo = outerStream;
+            }
+
+            if (streamed || collection is StreamedIterator)
+                return outcome;
+            if (collection is IEnumerator enumerator)
+            {
+                try
+                {
+                    collection = Drained(enumerator);
+                }
+                catch (UnknownValueException e)
+                {
+                    UnknownFrom(e, loop.Collection);
+                    return SkipStatement(loop, frame);
+                }
+            }
+            else if (collection is InterpretedObject)
+            {
+                Unsupported(loop.Collection, "this foreach collection", "an enumerator written in the design (its own MoveNext and Current) is not run");
+                return SkipStatement(loop, frame);
+            }
         }
+
+        if (Unknown.Is(collection))
+            return SkipStatement(loop, frame);
 
         if (collection is null && ThroughReference(source) is { } nullSource)
         {
             NullReference(loop.Collection, nullSource, "its elements");
-            Poison(loop.Body, frame);
-            return Completion.Normal;
+            return SkipStatement(loop, frame);
         }
 
         IEnumerable? items = collection switch
@@ -190,8 +218,7 @@ internal sealed partial class Interpreter
         if (items is null)
         {
             Unsupported(loop.Collection, "this foreach collection", "only arrays, strings, the library's collections and sequences, and iterators are enumerated");
-            Poison(loop.Body, frame);
-            return Completion.Normal;
+            return SkipStatement(loop, frame);
         }
 
         loops.Push(loop);
@@ -200,11 +227,8 @@ internal sealed partial class Interpreter
             foreach (var raw in items)
             {
                 Step(loop);
-                var completion = RunForEachBody(loop, frame, raw, variableType);
-                if (completion == Completion.Break)
-                    return Completion.Normal;
-                if (completion == Completion.Return)
-                    return completion;
+                if (AfterIteration(RunForEachBody(loop, frame, raw, variableType), loop, frame) is { } after)
+                    return after;
             }
 
             return Completion.Normal;
@@ -214,13 +238,37 @@ internal sealed partial class Interpreter
             // A lazy library sequence (OrderBy, Select...) called back a lambda whose value is not known: the iterations
             // left are skipped, and what the body assigns made unknown.
             UnknownFrom(e, loop.Collection);
-            Poison(loop.Body, frame);
-            return Completion.Normal;
+            return SkipStatement(loop, frame);
         }
         finally
         {
             loops.Pop();
         }
+    }
+
+    /// <summary>The GetEnumerator a foreach calls on an object of the design's type: a public one, as C# looks first, else
+    /// its implementation of IEnumerable&lt;T&gt; or IEnumerable.</summary>
+    private static IMethodSymbol? GetEnumeratorOf(INamedTypeSymbol type)
+    {
+        for (var current = type; current is not null; current = current.BaseType)
+            foreach (var member in current.GetMembers("GetEnumerator"))
+                if (member is IMethodSymbol { Parameters.Length: 0, IsStatic: false, DeclaredAccessibility: Accessibility.Public } method)
+                    return method;
+        foreach (var contract in type.AllInterfaces.OrderBy(i => i.IsGenericType ? 0 : 1))
+            if (contract.Name == "IEnumerable" && contract.ContainingNamespace?.ToDisplayString() is "System.Collections.Generic" or "System.Collections"
+                && contract.GetMembers("GetEnumerator").FirstOrDefault() is { } declared
+                && type.FindImplementationForInterfaceMember(declared) is IMethodSymbol implementation)
+                return implementation;
+        return null;
+    }
+
+    // The values a library enumerator the design's GetEnumerator returned hands out, in order.
+    private static List<object?> Drained(IEnumerator enumerator)
+    {
+        var values = new List<object?>();
+        while (enumerator.MoveNext())
+            values.Add(enumerator.Current);
+        return values;
     }
 
     /// <summary>One iteration of a foreach: the loop variable (or deconstruction) set to the item, then the body.</summary>
@@ -232,7 +280,8 @@ internal sealed partial class Interpreter
         switch (loop.LoopControlVariable)
         {
             case IVariableDeclaratorOperation declarator:
-                frame.Declare(declarator.Symbol, item);
+                // The loop variable is a copy of a struct element: what the body does to it leaves the element as it was.
+                frame.Declare(declarator.Symbol, CopyIfValue(item, declarator.Symbol.Type, frame));
                 break;
             default:
                 Deconstruct(loop.LoopControlVariable, item, frame);

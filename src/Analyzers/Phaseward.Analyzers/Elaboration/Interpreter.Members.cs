@@ -40,14 +40,14 @@ internal sealed partial class Interpreter
             return Unsupported(field, "field " + Describe(symbol), "only fields declared in this compilation or the Phaseward DSL are read");
 
         if (symbol.IsStatic)
-            return StaticVariable(symbol, frame, field.Syntax).Value;
+            return Read(StaticVariable(symbol, frame, field.Syntax), symbol);
 
         var owner = field.Instance is null ? frame.Instance : Evaluate(field.Instance, frame);
         if (Unknown.Is(owner)) return owner;
         if (owner is null && ThroughReference(field.Instance) is { } nullOwner)
             return NullReference(field, nullOwner, "field " + Describe(symbol));
         if (owner is InterpretedObject instance && instance.Find(symbol) is { } stored)
-            return stored.Value;
+            return Read(stored, symbol);
         return Unsupported(field, "field " + Describe(symbol), owner is InterpretedObject
             ? "it was not initialized by the elaborator"
             : "only fields of objects the design's code made are read");
@@ -65,7 +65,7 @@ internal sealed partial class Interpreter
     {
         var property = reference.Property;
         var receiver = reference.Instance is null ? null : Evaluate(reference.Instance, frame);
-        if (Unknown.Is(receiver)) return receiver;
+        if (Unknown.Is(receiver)) return Skipped(reference, frame); // a getter may run
         if (receiver is null && !property.IsStatic && ThroughReference(reference.Instance) is { } nullReceiver)
             return NullReference(reference, nullReceiver, "property " + Describe(property));
 
@@ -97,7 +97,7 @@ internal sealed partial class Interpreter
         if (session.IsInSource(property))
         {
             if (property.IsStatic)
-                return IsAutoProperty(property) ? StaticVariable(property, frame, reference.Syntax).Value : CallGetter(reference, property, null, frame);
+                return IsAutoProperty(property) ? Read(StaticVariable(property, frame, reference.Syntax), property) : CallGetter(reference, property, null, frame);
             return Unsupported(reference, "property " + Describe(property), "only properties of the design and static properties are elaborated");
         }
 
@@ -125,7 +125,7 @@ internal sealed partial class Interpreter
             return Unsupported(reference, "property " + Describe(property), "it is not declared in this compilation");
         if (IsAutoProperty(property))
             return instance.Find(property) is { } stored
-                ? stored.Value
+                ? Read(stored, property)
                 : Unsupported(reference, "property " + Describe(property), "it was not initialized by the elaborator");
         return CallGetter(reference, property, instance, frame);
     }
@@ -136,11 +136,13 @@ internal sealed partial class Interpreter
             return Unsupported(reference, "property " + Describe(property), "it has no getter");
         Step(reference);
         var (arguments, references) = Arguments(reference.Arguments, getter, frame);
-        return arguments is null ? Unknown.Value : InvokeUser(getter, instance, arguments, references, reference, frame);
+        if (arguments is null || property.IsStatic && !InitializeForUse(StaticOwner(property.ContainingType, frame), reference.Syntax))
+            return Unknown.Value;
+        return InvokeUser(getter, instance, arguments, references, reference, frame);
     }
 
     /// <summary>A property that stores its value (auto-property, or a record's positional property).</summary>
-    private static bool IsAutoProperty(IPropertySymbol property)
+    internal static bool IsAutoProperty(IPropertySymbol property)
         => property.DeclaringSyntaxReferences.FirstOrDefault()?.GetSyntax() switch
         {
             PropertyDeclarationSyntax { ExpressionBody: null, AccessorList: { } accessors } => accessors.Accessors.All(a => a.Body is null && a.ExpressionBody is null),
@@ -307,6 +309,23 @@ internal sealed partial class Interpreter
         }
     }
 
+    /// <summary>
+    /// A static method or property of the type is called, or an object of it made: a type with a static constructor
+    /// (not beforefieldinit) is initialized first, as C# guarantees. One without is initialized at the first read of
+    /// one of its static fields (<see cref="StaticVariable"/>), as the .NET run does. False when its initialization
+    /// failed earlier: the TypeInitializationException is raised again.
+    /// </summary>
+    private bool InitializeForUse(INamedTypeSymbol type, SyntaxNode site)
+    {
+        if (!session.IsInSource(type) || !type.StaticConstructors.Any(c => !c.IsImplicitlyDeclared))
+            return true;
+        InitializeStatics(type);
+        if (!failedTypes.TryGetValue(type, out var failure))
+            return true;
+        Raise(site, TypeInitializationFailure(type, failure));
+        return false;
+    }
+
     private static TypeInitializationException TypeInitializationFailure(INamedTypeSymbol type, Exception? inner)
         => new(type.ToDisplayString(), inner);
 
@@ -333,7 +352,7 @@ internal sealed partial class Interpreter
     private object? VisitArrayElementReference(IArrayElementReferenceOperation element, Frame frame)
     {
         var array = Evaluate(element.ArrayReference, frame);
-        if (Unknown.Is(array)) return array;
+        if (Unknown.Is(array)) return Skipped(element, frame);
         if (element.Indices.Length != 1)
             return Unsupported(element, "a multi-dimensional array", "only one-dimensional arrays are elaborated");
         var index = Evaluate(element.Indices[0], frame);

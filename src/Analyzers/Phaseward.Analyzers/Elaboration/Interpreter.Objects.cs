@@ -39,7 +39,7 @@ internal sealed partial class Interpreter : IObjectSemantics
         if (other is not InterpretedObject that || !SymbolEqualityComparer.Default.Equals(value.Type, that.Type))
             return false;
         foreach (var member in value.Members)
-            if (member.Key is not IParameterSymbol && !Equals(member.Value.Value, that.Find(member.Key)?.Value))
+            if (member.Key is not IParameterSymbol && !Equals(Read(member.Value, member.Key), MemberValue(that, member.Key)))
                 return false;
         return true;
     }
@@ -52,7 +52,7 @@ internal sealed partial class Interpreter : IObjectSemantics
             return System.Runtime.CompilerServices.RuntimeHelpers.GetHashCode(value);
         var combined = 17;
         foreach (var member in value.Members.Where(m => m.Key is not IParameterSymbol).OrderBy(m => m.Key.Name, StringComparer.Ordinal))
-            combined = combined * 31 + (member.Value.Value?.GetHashCode() ?? 0);
+            combined = combined * 31 + (Read(member.Value, member.Key)?.GetHashCode() ?? 0);
         return combined;
     }
 
@@ -84,8 +84,16 @@ internal sealed partial class Interpreter : IObjectSemantics
         return InvokeForLibrary(compareTo, value, new[] { other }) is int order ? order : throw new UnknownValueException();
     }
 
-    /// <summary>Struct values are copied when stored or passed; everything else is shared by reference.</summary>
-    private static object? CopyIfValue(object? value) => value is InterpretedObject { Type.IsValueType: true } structValue ? structValue.Copy() : value;
+    /// <summary>
+    /// Struct values are copied when stored or passed; everything else is shared by reference. Stored where the type is
+    /// a reference type (object, an interface) a struct is a box, made by the boxing conversion: then the box is shared.
+    /// </summary>
+    private object? CopyIfValue(object? value, ITypeSymbol? storedAs, Frame frame)
+        => value is InterpretedObject { Type.IsValueType: true } structValue && !IsReferenceType(storedAs, frame) ? structValue.Copy() : value;
+
+    /// <summary>Whether a type is a reference type where the code runs (a type parameter: what it stands for there).</summary>
+    private static bool IsReferenceType(ITypeSymbol? type, Frame frame)
+        => (type is ITypeParameterSymbol parameter ? frame.TypeArgumentOf(parameter) : type)?.IsReferenceType == true;
 
     /// <summary>A call of a member the design's type does not declare in source: generated record members, object's members.</summary>
     private object? CallObjectMember(IInvocationOperation invocation, InterpretedObject self, IMethodSymbol method, Frame frame)
@@ -137,6 +145,9 @@ internal sealed partial class Interpreter : IObjectSemantics
         return null;
     }
 
+    // A stored member of an object, read as the design's code reads it (null when it has none).
+    private object? MemberValue(InterpretedObject value, ISymbol member) => value.Find(member) is { } stored ? Read(stored, member) : null;
+
     /// <summary>The values of a record's positional parameters, in order (what its generated Deconstruct gives).</summary>
     private List<object?> PositionalValues(InterpretedObject record)
     {
@@ -144,7 +155,7 @@ internal sealed partial class Interpreter : IObjectSemantics
         var values = new List<object?>();
         if (constructor is null) return values;
         foreach (var parameter in constructor.Parameters)
-            values.Add(PositionalProperty(record.Type, parameter) is { } property ? record.Find(property)?.Value : record.Find(parameter)?.Value);
+            values.Add(PositionalProperty(record.Type, parameter) is { } property ? MemberValue(record, property) : MemberValue(record, parameter));
         return values;
     }
 
@@ -167,9 +178,9 @@ internal sealed partial class Interpreter : IObjectSemantics
             object? value;
             ITypeSymbol type;
             if (member is IFieldSymbol field)
-                (value, type) = (record.Find(field)?.Value, field.Type);
+                (value, type) = (MemberValue(record, field), field.Type);
             else if (member is IPropertySymbol { IsIndexer: false, GetMethod: not null } property && property.Name != "EqualityContract")
-                (value, type) = (IsAutoProperty(property) ? record.Find(property)?.Value : InvokeForLibrary(property.GetMethod!, record, Array.Empty<object?>()), property.Type);
+                (value, type) = (IsAutoProperty(property) ? MemberValue(record, property) : InvokeForLibrary(property.GetMethod!, record, Array.Empty<object?>()), property.Type);
             else
                 continue;
             text.Append(any ? ", " : "").Append(member.Name).Append(" = ").Append(ValueText.Of(value, type));

@@ -15,7 +15,21 @@ internal sealed partial class Interpreter
     private object? VisitBinary(IBinaryOperation binary, Frame frame)
     {
         var left = Evaluate(binary.LeftOperand, frame);
-        if (Unknown.Is(left)) return left;
+        if (Unknown.Is(left)) return Skipped(binary.OperatorMethod is null ? binary.RightOperand : binary, frame);
+
+        if (binary.OperatorKind is BinaryOperatorKind.ConditionalAnd or BinaryOperatorKind.ConditionalOr && binary.OperatorMethod is { } userOperator)
+        {
+            // A user-defined && or ||: C# asks the type's operator false (for &&) or true (for ||) whether the left
+            // operand decides, and only then evaluates the right one and calls & or |.
+            var decidesName = binary.OperatorKind == BinaryOperatorKind.ConditionalAnd ? "op_False" : "op_True";
+            if (userOperator.ContainingType?.GetMembers(decidesName).OfType<IMethodSymbol>().FirstOrDefault() is not { } decides)
+                return Unsupported(binary, "this logical operator", "its type's operator true or false was not found");
+            var decided = CallOperator(binary, decides, new[] { left }, frame);
+            if (decided is true) return left;
+            if (decided is not false) return Skipped(binary, frame);
+            var rightOperand = Evaluate(binary.RightOperand, frame);
+            return Unknown.Is(rightOperand) ? Skipped(binary, frame) : CallOperator(binary, userOperator, new[] { left, rightOperand }, frame);
+        }
 
         if (binary.OperatorKind is BinaryOperatorKind.ConditionalAnd or BinaryOperatorKind.ConditionalOr && binary.OperatorMethod is null)
         {
@@ -26,7 +40,7 @@ internal sealed partial class Interpreter
         }
 
         var right = Evaluate(binary.RightOperand, frame);
-        if (Unknown.Is(right)) return right;
+        if (Unknown.Is(right)) return binary.OperatorMethod is null ? right : Skipped(binary, frame);
 
         if (binary.OperatorMethod is { } method)
             return CallOperator(binary, method, new[] { left, right }, frame);
@@ -176,7 +190,7 @@ internal sealed partial class Interpreter
     private object? VisitUnary(IUnaryOperation unary, Frame frame)
     {
         var operand = Evaluate(unary.Operand, frame);
-        if (Unknown.Is(operand)) return operand;
+        if (Unknown.Is(operand)) return unary.OperatorMethod is null ? operand : Skipped(unary, frame);
         if (unary.OperatorKind == UnaryOperatorKind.Hat && operand is int fromEnd)
             return new IndexValue(fromEnd, fromEnd: true);
         if (unary.OperatorMethod is { } method)
@@ -199,7 +213,11 @@ internal sealed partial class Interpreter
     {
         var value = Evaluate(conversion.Operand, frame);
         if (Unknown.Is(value))
-            return value;
+            return conversion.OperatorMethod is null ? value : Skipped(conversion, frame);
+        // Boxing a struct makes a box of its own (later copies of the box share it); unboxing copies the value out.
+        if (value is InterpretedObject { Type.IsValueType: true } structValue
+            && (conversion.Operand.Type?.IsReferenceType == true) != (conversion.Type?.IsReferenceType == true))
+            value = structValue.Copy();
         // Code that does not compile (half-typed, or a type that does not convert) is never given a meaning.
         if (!conversion.Conversion.Exists)
             return Unsupported(conversion, "this conversion", "it does not compile");
@@ -288,10 +306,10 @@ internal sealed partial class Interpreter
                     break;
                 case IInterpolationOperation hole:
                     var value = Evaluate(hole.Expression, frame);
-                    if (Unknown.Is(value)) return value;
+                    if (Unknown.Is(value)) return Skipped(interpolated, frame);
                     var alignment = hole.Alignment is null ? null : Evaluate(hole.Alignment, frame);
                     var format = hole.FormatString is null ? null : Evaluate(hole.FormatString, frame) as string;
-                    if (Unknown.Is(alignment)) return alignment;
+                    if (Unknown.Is(alignment)) return Skipped(interpolated, frame);
                     var composite = "{0" + (alignment is null ? "" : "," + System.Convert.ToInt32(alignment, CultureInfo.InvariantCulture).ToString(CultureInfo.InvariantCulture)) + "}";
                     // The hole is formatted in the run's current culture: ValueText gives its text when no culture changes it.
                     text.Append(string.Format(CultureInfo.InvariantCulture, composite, ValueText.Of(value, SourceType(hole.Expression), format)));

@@ -164,9 +164,16 @@ internal sealed partial class Interpreter
             {
                 if (((ISlicePatternOperation)pattern.Patterns[i]).Pattern is { } inner)
                 {
+                    // The slice has the type of what it slices, as C#'s range indexer or Slice gives it.
                     var length = items.Count - fixedCount;
-                    var part = new object?[length];
-                    for (var k = 0; k < length; k++) part[k] = items[i + k];
+                    var elements = new object?[length];
+                    for (var k = 0; k < length; k++) elements[k] = items[i + k];
+                    object part = value switch
+                    {
+                        string text => text.Substring(i, length),
+                        System.Collections.Generic.List<object?> => new System.Collections.Generic.List<object?>(elements),
+                        _ => elements,
+                    };
                     if (Match(inner, part, frame) is not true and var sliceResult) return sliceResult;
                 }
 

@@ -21,7 +21,7 @@ internal sealed partial class Interpreter
                 if (declarator.Symbol.IsRef && initializer is not null)
                     BindRefLocal(declarator.Symbol, initializer.Value, frame);
                 else
-                    frame.Declare(declarator.Symbol, initializer is null ? DefaultOf(declarator.Symbol.Type, frame) : CopyIfValue(Evaluate(initializer.Value, frame)));
+                    frame.Declare(declarator.Symbol, initializer is null ? DefaultOf(declarator.Symbol.Type, frame) : CopyIfValue(Evaluate(initializer.Value, frame), declarator.Symbol.Type, frame));
             }
 
         return Completion.Normal;
@@ -54,7 +54,7 @@ internal sealed partial class Interpreter
 
     private Completion VisitReturn(IReturnOperation ret, Frame frame)
     {
-        frame.ReturnValue = ret.ReturnedValue is null ? null : CopyIfValue(Evaluate(ret.ReturnedValue, frame));
+        frame.ReturnValue = ret.ReturnedValue is null ? null : CopyIfValue(Evaluate(ret.ReturnedValue, frame), ret.ReturnedValue.Type, frame);
         return Completion.Return;
     }
 
@@ -79,17 +79,22 @@ internal sealed partial class Interpreter
         if (condition is null)
             return true;
         var value = Evaluate(condition, frame);
-        return value is bool b ? b : null;
+        if (value is bool b)
+            return b;
+        // Unknown was reported where it arose; anything else (a null the library left) must not skip the code silently.
+        if (!Unknown.Is(value))
+            Unsupported(condition, "this condition", "its value is " + (value is null ? "null" : "a " + value.GetType().Name) + ", not true or false");
+        return null;
     }
+
+    // A switch section's break (or one it may have made) ends the switch only.
+    private static Completion AfterSwitch(Completion completion) => completion == Completion.MaybeBreak ? Completion.Normal : completion;
 
     private Completion VisitSwitch(ISwitchOperation switchStatement, Frame frame)
     {
         var value = Evaluate(switchStatement.Value, frame);
         if (Unknown.Is(value))
-        {
-            Poison(switchStatement, frame);
-            return Completion.Normal;
-        }
+            return AfterSwitch(SkipStatement(switchStatement, frame));
 
         ISwitchCaseOperation? chosen = null;
         ISwitchCaseOperation? fallback = null;
@@ -112,8 +117,7 @@ internal sealed partial class Interpreter
                 {
                     // Which section runs is not known (reported where that arose): none is guessed, and what the
                     // sections assign becomes unknown.
-                    Poison(switchStatement, frame);
-                    return Completion.Normal;
+                    return AfterSwitch(SkipStatement(switchStatement, frame));
                 }
                 else if (matches == true)
                 {
@@ -129,9 +133,11 @@ internal sealed partial class Interpreter
         chosen ??= fallback;
         if (chosen is null)
             return Completion.Normal;
-        foreach (var statement in chosen.Body)
+        for (var i = 0; i < chosen.Body.Length; i++)
         {
-            var completion = Execute(statement, frame);
+            var completion = Execute(chosen.Body[i], frame);
+            if (completion.IsMaybe)
+                return AfterSwitch(SkipRest(chosen.Body, i + 1, completion, frame));
             if (completion == Completion.Break)
                 return Completion.Normal;
             if (completion != Completion.Normal)
@@ -140,68 +146,6 @@ internal sealed partial class Interpreter
 
         return Completion.Normal;
     }
-
-    /// <summary>
-    /// Code that was skipped because its condition or collection is unknown may have assigned variables: they become
-    /// unknown too, so nothing downstream uses a stale value. (Lists and arrays it may have filled become unknown.)
-    /// </summary>
-    private void Poison(IOperation skipped, Frame frame)
-    {
-        foreach (var operation in skipped.DescendantsAndSelf())
-        {
-            // A mutating call or an element store only changes a collection, never the variable that holds it.
-            var collectionOnly = operation is IInvocationOperation;
-            IOperation? target = operation switch
-            {
-                IAssignmentOperation assignment => assignment.Target,
-                IIncrementOrDecrementOperation increment => increment.Target,
-                IInvocationOperation { Instance: { } instance } => instance,
-                _ => null,
-            };
-            while (target is IArrayElementReferenceOperation element)
-            {
-                target = element.ArrayReference;
-                collectionOnly = true;
-            }
-
-            if (target is IPropertyReferenceOperation { Instance: { } listInstance, Property.IsIndexer: true })
-            {
-                target = listInstance;
-                collectionOnly = true;
-            }
-
-            var variable = target is null ? null : VariableNamed(target, frame);
-            if (variable is not null && (!collectionOnly || variable.Value is object?[] || variable.Value is List<object?>))
-                variable.Value = Unknown.Value;
-        }
-    }
-
-    /// <summary>
-    /// A library call (or a ref) that could not be evaluated may have changed the collections and objects it was given:
-    /// the variables its arguments and receiver name that hold one become unknown, never read as they were before.
-    /// </summary>
-    private void PoisonMutables(IOperation skipped, Frame frame)
-    {
-        foreach (var operation in skipped.DescendantsAndSelf())
-            if (VariableNamed(operation, frame) is { Value: { } value } variable && MayChange(value))
-                variable.Value = Unknown.Value;
-    }
-
-    private static bool MayChange(object value)
-        => value is object?[] or ICollection or System.Text.StringBuilder or InterpretedObject { Type.IsValueType: false };
-
-    /// <summary>The variable a local, parameter, field or auto-property reference names in this frame (null for anything else).</summary>
-    private Variable? VariableNamed(IOperation reference, Frame frame) => reference switch
-    {
-        ILocalReferenceOperation local => frame.Find(local.Local),
-        IParameterReferenceOperation parameter => frame.Find(parameter.Parameter) ?? frame.Instance?.Find(parameter.Parameter),
-        IFieldReferenceOperation { Field.IsStatic: false, Instance: null or IInstanceReferenceOperation } field => frame.Instance?.Find(field.Field),
-        IFieldReferenceOperation { Field.IsStatic: true } field when session.IsInSource(field.Field) => StaticVariable(field.Field, frame, field.Syntax),
-        IPropertyReferenceOperation { Property.IsStatic: true } property when session.IsInSource(property.Property) && IsAutoProperty(property.Property)
-            => StaticVariable(property.Property, frame, property.Syntax),
-        IPropertyReferenceOperation { Property.IsStatic: false, Instance: null or IInstanceReferenceOperation } property => frame.Instance?.Find(property.Property),
-        _ => null,
-    };
 
     private Completion VisitBlock(IBlockOperation block, Frame frame)
     {
@@ -213,9 +157,11 @@ internal sealed partial class Interpreter
         var disposed = false;
         try
         {
-            foreach (var inner in block.Operations)
+            for (var i = 0; i < block.Operations.Length; i++)
             {
-                var completion = Execute(inner, frame);
+                var completion = Execute(block.Operations[i], frame);
+                if (completion.IsMaybe)
+                    return SkipRest(block.Operations, i + 1, completion, frame);
                 if (completion != Completion.Normal)
                     return completion;
             }
@@ -238,7 +184,7 @@ internal sealed partial class Interpreter
     private Completion VisitYieldReturn(IReturnOperation yielded, Frame frame)
     {
         Step(yielded);
-        var value = yielded.ReturnedValue is null ? null : CopyIfValue(Evaluate(yielded.ReturnedValue, frame));
+        var value = yielded.ReturnedValue is null ? null : CopyIfValue(Evaluate(yielded.ReturnedValue, frame), yielded.ReturnedValue.Type, frame);
         var owner = frame;
         while (owner.Yielded is null && owner.Consumer is null && owner.LexicalParent is not null)
             owner = owner.LexicalParent;

@@ -2,6 +2,7 @@ using System;
 using System.Collections.Generic;
 using System.Threading;
 using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Operations;
 using Phaseward.Netlists;
 
 namespace Phaseward.Analyzers.Elaboration;
@@ -100,6 +101,10 @@ internal sealed partial class Interpreter
     // The exceptions being handled by catch clauses (innermost last), for 'throw;'.
     private readonly Stack<object> caught = new();
 
+    // The try statements whose bodies are running (innermost last), with their frames and caller chains: an exception's
+    // handler is sought among them, filters included, before any finally runs (see FindHandler).
+    private List<(ITryOperation Statement, Frame Frame, SourceSpan[] Callers)> activeTries = new();
+
     // The call a foreach is about to enumerate, and the loop's body as a callback: when that call runs the design's
     // iterator, each 'yield return' hands its value to the body at once instead of collecting a list, so the iterator
     // runs only as far as the loop takes it and both sides' effects interleave as in C# (see VisitForEachLoop).
@@ -115,6 +120,15 @@ internal sealed partial class Interpreter
 
     // Resources of 'using var' declarations, per block that has them (innermost last): disposed when the block ends.
     private readonly Stack<List<object?>> usingScopes = new();
+
+    // How each piece of skipped code can jump out of itself (see EscapeOf).
+    private readonly Dictionary<IOperation, (Completion Escape, Completion UnlessThrown)> escapes = new();
+
+    // Writes in code the elaborator did not run, and when: what they may have changed reads as unknown (see Read).
+    private readonly SkippedWrites skippedWrites = new();
+
+    // What skipped code may write, found from its source (made when code is first skipped).
+    private SkippedEffects? skippedEffects;
 
     // Bytes charged against the memory budget (see ChargeMemory).
     private long allocatedBytes;

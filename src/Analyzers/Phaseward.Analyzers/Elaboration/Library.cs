@@ -114,6 +114,23 @@ internal static class Library
         return member;
     }
 
+    /// <summary>
+    /// A generic interface's member called on a library value whose interface is not the erased one (generic code of
+    /// the design calls <c>IComparable&lt;T&gt;.CompareTo</c> with T = int, and an int is no <c>IComparable&lt;object&gt;</c>):
+    /// the same member of the interface the value implements, when there is exactly one; else the member itself.
+    /// </summary>
+    public static MethodBase ForReceiver(MethodBase member, object receiver)
+    {
+        if (member.DeclaringType is not { IsInterface: true, IsGenericType: true } erased || erased.IsInstanceOfType(receiver))
+            return member;
+        var definition = erased.GetGenericTypeDefinition();
+        var implemented = receiver.GetType().GetInterfaces().Where(i => i.IsGenericType && i.GetGenericTypeDefinition() == definition).ToList();
+        if (implemented.Count != 1)
+            return member;
+        var arity = member.GetParameters().Length;
+        return implemented[0].GetMethods().FirstOrDefault(m => m.Name == member.Name && m.GetParameters().Length == arity) ?? member;
+    }
+
     private static Type? Open(INamedTypeSymbol definition)
         => ClrTypes.Resolve(definition.IsGenericType ? definition : definition) is { } resolved
             ? resolved
