@@ -21,6 +21,7 @@ public class ValueSemanticsTests
     [InlineData("Values.BoxedEnum")]
     [InlineData("Values.EnumLibrary")]
     [InlineData("Values.EnumArithmetic")]
+    [InlineData("Values.EnumSums")]
     [InlineData("Values.TupleText")]
     [InlineData("Values.TupleEquality")]
     [InlineData("Values.ReferenceEquality")]
@@ -209,6 +210,22 @@ public class ValueSemanticsTests
                         byte raw = (byte)lv;
                         var mixed = (Hue)(int)Trait.Latched;
                         Say(c, $"{raw}|{(int)lv}|{Hue.Ochre > Hue.Teal}|{mixed}|{mixed == Hue.Ochre}|{(long)Hue.Teal * 3}|{default(Hue)}|{Hue.Teal is Hue.Teal or Hue.Amber}");
+                    }
+                }
+                public sealed class EnumSums : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var step = 1;
+                        var x = Hue.Amber;
+                        x++;
+                        x += 2;
+                        var lv = Level.High;
+                        lv += 100;
+                        var tag = "";
+                        var high = Level.High;
+                        try { high = checked(high + 100); } catch (OverflowException) { tag = "ovf"; }
+                        Say(c, $"{Hue.Amber + step}|{step + Hue.Amber}|{Hue.Ochre - Hue.Amber}|{Hue.Ochre - 2}|{x}|{lv}|{(int)lv}|{tag}{high}|{Trait.Latched - Trait.Gated}");
                     }
                 }
                 public sealed class TupleText : Base

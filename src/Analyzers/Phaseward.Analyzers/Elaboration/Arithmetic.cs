@@ -29,7 +29,7 @@ internal static class Arithmetic
     private static object? BinaryOf(BinaryOperatorKind kind, object left, object right, ITypeSymbol operandType, bool isChecked)
     {
         if (operandType.TypeKind == TypeKind.Enum)
-            return Enum(kind, left, right);
+            return Enum(kind, left, right, isChecked);
         switch (operandType.SpecialType)
         {
             case SpecialType.System_Int32:
@@ -294,10 +294,22 @@ internal static class Arithmetic
         _ => null,
     };
 
-    private static object? Enum(BinaryOperatorKind kind, object left, object right)
+    private static object? Enum(BinaryOperatorKind kind, object left, object right, bool isChecked)
     {
         var a = System.Convert.ToInt64(left, CultureInfo.InvariantCulture);
         var b = System.Convert.ToInt64(right, CultureInfo.InvariantCulture);
+        var leftIsEnum = left is System.Enum or Elaboration.EnumValue;
+        var rightIsEnum = right is System.Enum or Elaboration.EnumValue;
+        // C#'s enum arithmetic: E + n and n + E give an E; E - n an E; E - E the underlying number.
+        if (kind == BinaryOperatorKind.Add && leftIsEnum != rightIsEnum)
+            return EnumSum(leftIsEnum ? left : right, a + b, isChecked);
+        if (kind == BinaryOperatorKind.Subtract && leftIsEnum)
+        {
+            var difference = EnumSum(left, a - b, isChecked);
+            return rightIsEnum ? (difference is Elaboration.EnumValue designEnum ? designEnum.Number
+                : System.Convert.ChangeType(difference, System.Enum.GetUnderlyingType(difference.GetType()), CultureInfo.InvariantCulture)) : difference;
+        }
+
         return kind switch
         {
             BinaryOperatorKind.Equals => a == b,
@@ -311,6 +323,15 @@ internal static class Arithmetic
             BinaryOperatorKind.ExclusiveOr => EnumValue(left, a ^ b),
             _ => null,
         };
+    }
+
+    // The enum value a + b or a - b gives, wrapped to the underlying type as unchecked C# does; checked, out of range throws.
+    private static object EnumSum(object like, long value, bool isChecked)
+    {
+        var result = EnumValue(like, value);
+        if (isChecked && System.Convert.ToInt64(result, CultureInfo.InvariantCulture) != value)
+            throw new OverflowException("Arithmetic operation resulted in an overflow.");
+        return result;
     }
 
     // A flags combination keeps the operand's representation: a DSL enum value, or the design's own enum's EnumValue.

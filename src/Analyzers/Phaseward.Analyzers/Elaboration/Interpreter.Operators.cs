@@ -96,7 +96,9 @@ internal sealed partial class Interpreter
 
         if (leftType is null || left is null || right is null)
             return Unsupported(binary, "this operator", "its operand types are not known");
-        return BinaryValue(binary, binary.OperatorKind, left, right, leftType, binary.IsChecked,
+        // n + E is enum arithmetic, though its left operand is the number.
+        var operandType = rightType is { TypeKind: TypeKind.Enum } && leftType.TypeKind != TypeKind.Enum ? rightType : leftType;
+        return BinaryValue(binary, binary.OperatorKind, left, right, operandType, binary.IsChecked,
             "the elaborator handles arithmetic, comparisons and logic on int, long, float, double, bool, string and enums");
     }
 
