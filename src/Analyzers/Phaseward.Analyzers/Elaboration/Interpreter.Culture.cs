@@ -115,15 +115,18 @@ internal sealed partial class Interpreter
         return null;
     }
 
-    // The culture is the calling thread's, set only for the duration of the call (RS1035 keeps analyzers from reading
-    // the culture for their own messages; this is the design's library code, which must never see the compiler's).
     private static bool SameResult(object? a, object? b)
         => a is Array first && b is Array second ? first.Cast<object?>().SequenceEqual(second.Cast<object?>()) : Equals(a, b);
 
+    // The elaboration runs in the invariant culture (DesignElaborator sets it on its thread); the contrary one is set only
+    // for the duration of the second call. (RS1035 keeps analyzers from reading the culture for their own messages; this
+    // is the design's library code, which must never see the compiler's.)
     private static object? InvokeUnder(CultureInfo culture, MethodBase member, object? receiver, object?[] arguments)
     {
         var thread = System.Threading.Thread.CurrentThread;
         var outer = thread.CurrentCulture;
+        if (ReferenceEquals(outer, culture))
+            return member is ConstructorInfo made ? made.Invoke(arguments) : member.Invoke(receiver, arguments);
         thread.CurrentCulture = culture;
         try
         {
