@@ -85,7 +85,7 @@ public class EverydayCSharpTests
                 }
                 public sealed class Formats : Base
                 {
-                    protected override void Describe(Circuit c) { var x = 7; var s = $"{x:D3}_{3.14159:F2}_{x,5}_{0.5:P0}_{1234567:N0}_{x:X}"; c.Inverter(c.Input("a"), s.Replace(" ", "_").Replace(",", "c").Replace("%", "pc")); }
+                    protected override void Describe(Circuit c) { var x = 7; var inv = System.Globalization.CultureInfo.InvariantCulture; var s = $"{x:D3}_{3.14159.ToString("F2", inv)}_{x,5}_{0.5.ToString("P0", inv)}_{1234567.ToString("N0", inv)}_{x:X}_{-x:X}_{x:x4}"; c.Inverter(c.Input("a"), s.Replace(" ", "_").Replace(",", "c").Replace("%", "pc")); }
                 }
                 public sealed class Bank { private readonly int[] v = new int[4]; public int this[int i] { get => v[i]; set => v[i] = value * 2; } public int this[string k] => k.Length; }
                 public sealed class Indexers : Base

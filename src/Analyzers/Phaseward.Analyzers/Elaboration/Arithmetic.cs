@@ -30,7 +30,7 @@ internal static partial class Arithmetic
     private static object? BinaryOf(BinaryOperatorKind kind, object left, object right, ITypeSymbol operandType, bool isChecked)
     {
         if (operandType.TypeKind == TypeKind.Enum)
-            return Enum(kind, left, right);
+            return Enum(kind, left, right, isChecked);
         switch (operandType.SpecialType)
         {
             case SpecialType.System_Int32:
@@ -56,22 +56,8 @@ internal static partial class Arithmetic
         }
     }
 
-    /// <summary><c>a + b</c> where either side is a string: C# calls ToString() on the other side (null gives "").</summary>
-    public static string Concatenate(object? left, object? right) => Text(left) + Text(right);
-
-    /// <summary>
-    /// The text C# would produce for a value in a concatenation or an interpolation hole. Formatted with the invariant
-    /// culture: the culture the design will run under is not known at compile time (analyzers must not depend on the
-    /// compiler's culture), and integers, the usual content of generated names, read the same in every culture.
-    /// </summary>
-    public static string Text(object? value) => value switch
-    {
-        null => string.Empty,
-        string s => s,
-        bool b => b ? "True" : "False",
-        IFormattable f => f.ToString(null, CultureInfo.InvariantCulture),
-        _ => value.ToString() ?? string.Empty,
-    };
+    /// <summary>The text C# would produce for a value in a concatenation or an interpolation hole (see <see cref="ValueText"/>).</summary>
+    public static string Text(object? value) => ValueText.Of(value);
 
     public static object? Unary(UnaryOperatorKind kind, object operand, ITypeSymbol type, bool isChecked)
     {
@@ -87,6 +73,8 @@ internal static partial class Arithmetic
 
     private static object? UnaryOf(UnaryOperatorKind kind, object operand, ITypeSymbol type, bool isChecked)
     {
+        if (type.TypeKind == TypeKind.Enum)
+            return kind == UnaryOperatorKind.BitwiseNegation ? EnumValue(operand, ~System.Convert.ToInt64(operand, CultureInfo.InvariantCulture)) : null;
         switch (type.SpecialType)
         {
             case SpecialType.System_Int32:
@@ -214,10 +202,22 @@ internal static partial class Arithmetic
         _ => null,
     };
 
-    private static object? Enum(BinaryOperatorKind kind, object left, object right)
+    private static object? Enum(BinaryOperatorKind kind, object left, object right, bool isChecked)
     {
         var a = System.Convert.ToInt64(left, CultureInfo.InvariantCulture);
         var b = System.Convert.ToInt64(right, CultureInfo.InvariantCulture);
+        var leftIsEnum = left is System.Enum or Elaboration.EnumValue;
+        var rightIsEnum = right is System.Enum or Elaboration.EnumValue;
+        // C#'s enum arithmetic: E + n and n + E give an E; E - n an E; E - E the underlying number.
+        if (kind == BinaryOperatorKind.Add && leftIsEnum != rightIsEnum)
+            return EnumSum(leftIsEnum ? left : right, a + b, isChecked);
+        if (kind == BinaryOperatorKind.Subtract && leftIsEnum)
+        {
+            var difference = EnumSum(left, a - b, isChecked);
+            return rightIsEnum ? (difference is Elaboration.EnumValue designEnum ? designEnum.Number
+                : System.Convert.ChangeType(difference, System.Enum.GetUnderlyingType(difference.GetType()), CultureInfo.InvariantCulture)) : difference;
+        }
+
         return kind switch
         {
             BinaryOperatorKind.Equals => a == b,
@@ -233,7 +233,18 @@ internal static partial class Arithmetic
         };
     }
 
-    // A flags combination keeps the operand's representation: a DSL enum value, or the int a design's own enum is kept as.
+    // The enum value a + b or a - b gives, wrapped to the underlying type as unchecked C# does; checked, out of range throws.
+    private static object EnumSum(object like, long value, bool isChecked)
+    {
+        var result = EnumValue(like, value);
+        if (isChecked && System.Convert.ToInt64(result, CultureInfo.InvariantCulture) != value)
+            throw new OverflowException("Arithmetic operation resulted in an overflow.");
+        return result;
+    }
+
+    // A flags combination keeps the operand's representation: a DSL enum value, or the design's own enum's EnumValue.
     private static object EnumValue(object like, long value)
-        => like is System.Enum ? System.Enum.ToObject(like.GetType(), value) : (object)System.Convert.ToInt32(value, CultureInfo.InvariantCulture);
+        => like is System.Enum ? System.Enum.ToObject(like.GetType(), value)
+            : like is Elaboration.EnumValue designEnum ? designEnum.With(value)
+            : (object)System.Convert.ToInt32(value, CultureInfo.InvariantCulture);
 }

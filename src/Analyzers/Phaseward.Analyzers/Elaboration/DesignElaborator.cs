@@ -20,6 +20,23 @@ internal static class DesignElaborator
 {
     public static ElaborationResult Elaborate(ElaborationSession session, DesignInfo design, ElaborationLimits limits, CancellationToken cancellationToken)
     {
+        // The library code the design calls runs in the invariant culture, never the compiler's (see ValueText): set once
+        // for the whole elaboration, on this thread, and restored after.
+        var thread = Thread.CurrentThread;
+        var compilerCulture = thread.CurrentCulture;
+        thread.CurrentCulture = System.Globalization.CultureInfo.InvariantCulture;
+        try
+        {
+            return ElaborateInvariant(session, design, limits, cancellationToken);
+        }
+        finally
+        {
+            thread.CurrentCulture = compilerCulture;
+        }
+    }
+
+    private static ElaborationResult ElaborateInvariant(ElaborationSession session, DesignInfo design, ElaborationLimits limits, CancellationToken cancellationToken)
+    {
         var interpreter = new Interpreter(session, design.Type.MetadataName, limits, cancellationToken);
         var describeBody = session.BodyOf(design.Describe, _ => BodyOf(session, design));
         if (describeBody is null)

@@ -40,7 +40,7 @@ internal sealed partial class Interpreter
         else if (IsDelegate(assignment.Target.Type))
             result = DelegateArithmetic(assignment, assignment.OperatorKind, current, operand);
         else if (assignment.OperatorKind == BinaryOperatorKind.Add && assignment.Target.Type?.SpecialType == SpecialType.System_String)
-            result = Concatenate(assignment, current, operand);
+            result = Concatenate(assignment, current, operand, assignment.Target.Type, SourceType(assignment.Value));
         else if (current is null || operand is null || assignment.Target.Type is null)
             result = Unsupported(assignment, "this compound assignment", "its operands are not known");
         else

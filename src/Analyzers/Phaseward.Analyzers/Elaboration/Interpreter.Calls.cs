@@ -56,14 +56,31 @@ internal sealed partial class Interpreter
                 : Unsupported(invocation, "this delegate call", "the delegate was not made by the design's code");
         }
 
-        if (method.Name == "HasFlag" && receiver is int flags && invocation.Arguments.Length == 1)
+        if (method is { IsStatic: true, Name: "ReferenceEquals", Parameters.Length: 2 } && method.ContainingType?.SpecialType == SpecialType.System_Object)
         {
-            // The design's own enums are kept as int, so Enum.HasFlag is answered here.
-            var flag = Evaluate(invocation.Arguments[0].Value, frame);
-            if (Unknown.Is(flag)) return flag;
-            var bits = System.Convert.ToInt32(flag, System.Globalization.CultureInfo.InvariantCulture);
-            return (flags & bits) == bits;
+            var (pair, _) = Arguments(invocation.Arguments, method, frame);
+            return pair is null ? Unknown.Value : SameObject(invocation, pair[0], pair[1]);
         }
+
+        if (method is { Name: "ToString", Parameters.Length: 0 } && receiver is not null and not InterpretedObject && ValueText.PrintsItsType(receiver))
+        {
+            // A library collection held with erased type arguments: its text comes from the type the source gives it.
+            try
+            {
+                return ValueText.Of(receiver, invocation.Instance?.Type);
+            }
+            catch (UnknownValueException e)
+            {
+                return UnknownFrom(e, invocation);
+            }
+        }
+
+        if (receiver is TupleValue tuple && method.Name is "ToString" or "Equals")
+            return CallTupleMember(invocation, tuple, method, frame);
+        if (receiver is EnumValue enumValue)
+            return CallEnumMember(invocation, enumValue, method, frame);
+        if (DesignEnumOf(invocation, frame) is { } designEnum)
+            return CallDesignEnumStatic(invocation, designEnum, frame);
 
         if (receiver is InterpretedObject self)
             return CallObjectMember(invocation, self, method, frame);
@@ -120,6 +137,7 @@ internal sealed partial class Interpreter
             return Unknown.Value;
 
         // Converted in place: every caller hands over an array it made for this call (one array per call, not two).
+        var given = !isDsl && MayReadCulture(method) ? (object?[])arguments.Clone() : null;
         var parameterTypes = session.ParameterTypesOf(member);
         if (arguments.Length != parameterTypes.Length)
             return Unsupported(site, "the call to " + Describe(method), "its arguments could not be passed (the run-time member takes " + parameterTypes.Length + ")");
@@ -148,7 +166,11 @@ internal sealed partial class Interpreter
 
         try
         {
-            var result = member is ConstructorInfo constructor ? constructor.Invoke(clrArguments) : member.Invoke(receiver, clrArguments);
+            object? result;
+            if (isDsl)
+                result = member is ConstructorInfo constructor ? constructor.Invoke(clrArguments) : member.Invoke(receiver, clrArguments);
+            else if (InvokeInCulture(member, method, receiver, clrArguments, given, out result) is { } cultureDependent)
+                return Unsupported(site, "the call to " + Describe(method), cultureDependent);
             if (references is not null)
                 for (var i = 0; i < references.Length && i < clrArguments.Length; i++)
                     if (references[i] is { } reference)

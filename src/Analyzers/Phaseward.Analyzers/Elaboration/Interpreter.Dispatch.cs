@@ -101,6 +101,8 @@ internal sealed partial class Interpreter
             // ---- operators (Interpreter.Operators) ----
             case OperationKind.Binary:
                 return VisitBinary((IBinaryOperation)operation, frame);
+            case OperationKind.TupleBinary:
+                return VisitTupleBinary((ITupleBinaryOperation)operation, frame);
             case OperationKind.Unary:
                 return VisitUnary((IUnaryOperation)operation, frame);
             case OperationKind.Conversion:

@@ -116,8 +116,21 @@ internal sealed partial class Interpreter
             return Evaluate(arm.Value, frame);
         }
 
-        Throws(switchExpression.Syntax, "SwitchExpressionException: no arm of the switch expression matches the value " + Arithmetic.Text(value));
+        Throws(switchExpression.Syntax, "SwitchExpressionException: no arm of the switch expression matches the value " + MessageText(value));
         return Unknown.Value;
+    }
+
+    /// <summary>A value's text for a message (not a value of the design): in the invariant culture when no other is known.</summary>
+    private static string MessageText(object? value)
+    {
+        try
+        {
+            return ValueText.Of(value);
+        }
+        catch (UnknownValueException)
+        {
+            return value is IFormattable formattable ? formattable.ToString(null, CultureInfo.InvariantCulture) : "(a value whose text is not known)";
+        }
     }
 
     private object? FromConstant(object? value, ITypeSymbol? type)
@@ -127,12 +140,17 @@ internal sealed partial class Interpreter
         return type.TypeKind == TypeKind.Enum ? ToEnum(value, type) : value;
     }
 
-    /// <summary>DSL enums become real enum values (the DSL's methods need them); the design's own enums stay integers.</summary>
+    /// <summary>
+    /// DSL and library enums become real enum values (the methods that take them need them); the design's own enums become
+    /// <see cref="EnumValue"/>s, which keep their type (to print their names, and to tell a boxed enum from an int).
+    /// </summary>
     private static object ToEnum(object value, ITypeSymbol type)
     {
-        var clr = ClrTypes.IsDsl(type) ? ClrTypes.Resolve(type) : null;
-        var number = System.Convert.ToInt64(value, CultureInfo.InvariantCulture);
-        return clr is { IsEnum: true } ? Enum.ToObject(clr, number) : System.Convert.ToInt32(number, CultureInfo.InvariantCulture);
+        var number = value is ulong huge ? unchecked((long)huge) : System.Convert.ToInt64(value, CultureInfo.InvariantCulture);
+        if (type is INamedTypeSymbol { DeclaringSyntaxReferences.Length: > 0 } declared)
+            return new EnumValue(declared, number);
+        // The DSL's and the library's enums (StringSplitOptions, MidpointRounding) are real .NET enums.
+        return ClrTypes.Resolve(type) is { IsEnum: true } clr ? Enum.ToObject(clr, number) : System.Convert.ToInt32(number, CultureInfo.InvariantCulture);
     }
 
     private object? DefaultOf(ITypeSymbol type, Frame? frame = null)

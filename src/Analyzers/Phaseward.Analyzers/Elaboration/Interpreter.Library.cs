@@ -185,10 +185,26 @@ internal sealed partial class Interpreter
                 return receiver ?? arguments[0];
             case "Equals" when arguments.Length == 1:
                 return receiver is null ? arguments[0] is null : receiver.Equals(arguments[0]);
-            case "GetHashCode" when arguments.Length == 0:
+            case "GetHashCode" when arguments.Length == 0 && (receiver is null or EnumValue or Enum or decimal || receiver.GetType().IsPrimitive):
                 return receiver?.GetHashCode() ?? 0;
+            case "GetHashCode" when arguments.Length == 0 && receiver is InterpretedObject value && UserOverride(value.Type, "GetHashCode", 0) is not null:
+                try
+                {
+                    return HashOf(value);
+                }
+                catch (UnknownValueException e)
+                {
+                    return UnknownFrom(e, invocation);
+                }
             case "ToString" when arguments.Length == 0:
-                return receiver is null ? "" : Arithmetic.Text(receiver);
+                try
+                {
+                    return receiver is null ? "" : Arithmetic.Text(receiver);
+                }
+                catch (UnknownValueException e)
+                {
+                    return UnknownFrom(e, invocation);
+                }
             default:
                 return Unsupported(invocation, "the call to " + Describe(method), "it is not a member of Nullable<T> the elaborator answers");
         }

@@ -18,15 +18,11 @@ internal sealed partial class Interpreter : IObjectSemantics
             return InvokeForLibrary(toString, value, Array.Empty<object?>()) is string text ? text : throw new UnknownValueException();
         if (value.Type.IsRecord)
         {
+            // As the generated ToString: "Name { ", then PrintMembers (the design's own, if it writes one), then "}".
             var text = new StringBuilder(value.Type.Name).Append(" { ");
-            var first = true;
-            foreach (var (name, member) in PrintedMembers(value))
-            {
-                text.Append(first ? "" : ", ").Append(name).Append(" = ").Append(Arithmetic.Text(member));
-                first = false;
-            }
-
-            return text.Append(first ? "}" : " }").ToString();
+            if (PrintMembers(value, value.Type, text))
+                text.Append(' ');
+            return text.Append('}').ToString();
         }
 
         return ClrTypes.MetadataName(value.Type);
@@ -112,8 +108,12 @@ internal sealed partial class Interpreter : IObjectSemantics
                     return TextOf(self);
                 case "Equals" when arguments.Length == 1:
                     return AreEqual(self, arguments[0]);
-                case "GetHashCode" when arguments.Length == 0 && (self.Type.IsRecord || UserOverride(self.Type, "GetHashCode", 0) is not null):
+                case "GetHashCode" when arguments.Length == 0 && UserOverride(self.Type, "GetHashCode", 0) is not null:
                     return HashOf(self);
+                case "GetHashCode" when arguments.Length == 0 && self.Type.IsRecord:
+                    // Library collections may still hash records (where a key goes is not seen): only the number is unknown.
+                    return Unsupported(invocation, "the hash code of the record " + Describe(self.Type),
+                        "a record's generated GetHashCode hashes its EqualityContract (a Type), whose hash differs from process to process");
                 case "GetType" when arguments.Length == 0:
                     return new TypeValue(self.Type);
                 case "Deconstruct" when self.Type.IsRecord && method.IsImplicitlyDeclared:
@@ -159,23 +159,35 @@ internal sealed partial class Interpreter : IObjectSemantics
         return values;
     }
 
-    /// <summary>The public fields and properties a record's generated ToString prints, base type's first.</summary>
-    private IEnumerable<(string Name, object? Value)> PrintedMembers(InterpretedObject record)
+    /// <summary>
+    /// A record's PrintMembers at one level of its hierarchy: the design's own if that level writes one; else the generated
+    /// one, which prints the base record's members first, then this level's public fields and properties. True when
+    /// something was printed.
+    /// </summary>
+    private bool PrintMembers(InterpretedObject record, INamedTypeSymbol level, StringBuilder text)
     {
-        var chain = new List<INamedTypeSymbol>();
-        for (var type = record.Type; type is not null && session.IsInSource(type); type = type.BaseType)
-            chain.Insert(0, type);
-        foreach (var type in chain)
-            foreach (var member in type.GetMembers())
-            {
-                if (member.IsStatic || member.DeclaredAccessibility != Accessibility.Public || member.IsImplicitlyDeclared && member is not IPropertySymbol)
-                    continue;
-                if (member is IFieldSymbol field)
-                    yield return (field.Name, MemberValue(record, field));
-                else if (member is IPropertySymbol { IsIndexer: false, GetMethod: not null } property && property.Name != "EqualityContract")
-                    yield return (property.Name, IsAutoProperty(property) ? MemberValue(record, property)
-                        : InvokeForLibrary(property.GetMethod!, record, Array.Empty<object?>()));
-            }
+        var own = level.GetMembers("PrintMembers").OfType<IMethodSymbol>()
+            .FirstOrDefault(m => !m.IsImplicitlyDeclared && m.Parameters.Length == 1 && m.Parameters[0].Type.Name == nameof(StringBuilder));
+        if (own is not null)
+            return InvokeForLibrary(own, record, new object?[] { text }) is bool printed ? printed : throw new UnknownValueException();
+        var any = level.BaseType is { IsRecord: true } baseRecord && session.IsInSource(baseRecord) && PrintMembers(record, baseRecord, text);
+        foreach (var member in level.GetMembers())
+        {
+            if (member.IsStatic || member.DeclaredAccessibility != Accessibility.Public || member.IsImplicitlyDeclared && member is not IPropertySymbol)
+                continue;
+            object? value;
+            ITypeSymbol type;
+            if (member is IFieldSymbol field)
+                (value, type) = (MemberValue(record, field), field.Type);
+            else if (member is IPropertySymbol { IsIndexer: false, GetMethod: not null } property && property.Name != "EqualityContract")
+                (value, type) = (IsAutoProperty(property) ? MemberValue(record, property) : InvokeForLibrary(property.GetMethod!, record, Array.Empty<object?>()), property.Type);
+            else
+                continue;
+            text.Append(any ? ", " : "").Append(member.Name).Append(" = ").Append(ValueText.Of(value, type));
+            any = true;
+        }
+
+        return any;
     }
 
     /// <summary>The design's own override of an object member (ToString, Equals, GetHashCode), if it writes one.</summary>

@@ -78,10 +78,11 @@ internal sealed partial class Interpreter
         if (binary.OperatorKind == BinaryOperatorKind.Add
             && (leftType?.SpecialType == SpecialType.System_String || rightType?.SpecialType == SpecialType.System_String))
         {
-            return Concatenate(binary, left, right);
+            return Concatenate(binary, left, right, SourceType(binary.LeftOperand), SourceType(binary.RightOperand));
         }
 
-        if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals && left is InterpretedObject { Type.IsRecord: true } record)
+        if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals && left is InterpretedObject { Type.IsRecord: true } record
+            && leftType is { IsRecord: true })
         {
             return RecordEquality(binary, record, right, negated: binary.OperatorKind == BinaryOperatorKind.NotEquals);
         }
@@ -89,15 +90,104 @@ internal sealed partial class Interpreter
         if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals
             && (left is null || right is null || (leftType?.IsReferenceType == true && leftType.SpecialType != SpecialType.System_String)))
         {
-            var same = left is null || right is null ? left is null && right is null : ReferenceEquals(left, right);
-            return binary.OperatorKind == BinaryOperatorKind.Equals ? same : !same;
+            var same = SameObject(binary, left, right);
+            return same is bool b ? (binary.OperatorKind == BinaryOperatorKind.Equals ? b : !b) : same;
         }
 
         if (leftType is null || left is null || right is null)
             return Unsupported(binary, "this operator", "its operand types are not known");
-        return BinaryValue(binary, binary.OperatorKind, left, right, leftType, binary.IsChecked,
+        // n + E is enum arithmetic, though its left operand is the number.
+        var operandType = rightType is { TypeKind: TypeKind.Enum } && leftType.TypeKind != TypeKind.Enum ? rightType : leftType;
+        return BinaryValue(binary, binary.OperatorKind, left, right, operandType, binary.IsChecked,
             "the elaborator handles arithmetic, comparisons and logic on int, long, float, double, bool, string and enums");
     }
+
+    /// <summary>
+    /// <c>t1 == t2</c> and <c>!=</c> on tuples: element by element, when the elements are of the types whose built-in
+    /// equality the elaborator knows (numbers, bool, char, string, enums, and tuples of them).
+    /// </summary>
+    private object? VisitTupleBinary(ITupleBinaryOperation binary, Frame frame)
+    {
+        var left = Evaluate(binary.LeftOperand, frame);
+        if (Unknown.Is(left)) return left;
+        var right = Evaluate(binary.RightOperand, frame);
+        if (Unknown.Is(right)) return right;
+        if (binary.OperatorKind is not (BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals)
+            || !HasBuiltInEquality(binary.LeftOperand.Type) || !HasBuiltInEquality(binary.RightOperand.Type))
+            return Unsupported(binary, "this tuple comparison", "the elaborator compares tuples of numbers, bools, chars, strings and enums");
+        var same = TuplesEqual(left, right);
+        return same is null ? Unsupported(binary, "this tuple comparison", "its operands are not tuples of the same length")
+            : binary.OperatorKind == BinaryOperatorKind.Equals ? same.Value : !same.Value;
+    }
+
+    /// <summary><c>ToString()</c> and <c>Equals(other)</c> of a tuple, as ValueTuple defines them (elements' own Equals).</summary>
+    private object? CallTupleMember(IInvocationOperation invocation, TupleValue tuple, IMethodSymbol method, Frame frame)
+    {
+        var (arguments, _) = Arguments(invocation.Arguments, method, frame);
+        if (arguments is null) return Unknown.Value;
+        try
+        {
+            return arguments.Length switch
+            {
+                0 when method.Name == "ToString" => tuple.ToString(),
+                1 when method.Name == "Equals" => tuple.Equals(arguments[0]),
+                _ => Unsupported(invocation, "the call to " + Describe(method), "of a tuple the elaborator answers ToString() and Equals(other)"),
+            };
+        }
+        catch (UnknownValueException e)
+        {
+            return UnknownFrom(e, invocation);
+        }
+    }
+
+    private static bool? TuplesEqual(object? left, object? right)
+    {
+        if (left is not TupleValue a || right is not TupleValue b || a.Items.Length != b.Items.Length)
+            return null;
+        for (var i = 0; i < a.Items.Length; i++)
+        {
+            var same = a.Items[i] is TupleValue || b.Items[i] is TupleValue ? TuplesEqual(a.Items[i], b.Items[i]) : Equal(a.Items[i], b.Items[i]);
+            if (same is not true)
+                return same;
+        }
+
+        return true;
+    }
+
+    private static bool HasBuiltInEquality(ITypeSymbol? type)
+    {
+        if (NullableUnderlying(type) is { } underlying)
+            type = underlying;
+        return type switch
+        {
+            INamedTypeSymbol { IsTupleType: true } tuple => tuple.TupleElements.All(e => HasBuiltInEquality(e.Type)),
+            { TypeKind: TypeKind.Enum } => true,
+            { } known => IsNumeric(known) || known.SpecialType is SpecialType.System_Boolean or SpecialType.System_String,
+            null => false,
+        };
+    }
+
+    /// <summary>
+    /// Reference equality (<c>==</c> on operands typed object or an interface, <c>ReferenceEquals</c>): true or false when
+    /// the identity is known, PW9001 when it is not. A value boxed into an object is a new object at each boxing, and which
+    /// box a value is held in is not modelled; two equal strings are one object or two depending on interning.
+    /// </summary>
+    private object SameObject(IOperation site, object? left, object? right)
+    {
+        if (left is null || right is null)
+            return left is null && right is null;
+        // Each type has one Type object.
+        if (left is TypeValue || right is TypeValue)
+            return Equals(left, right);
+        if (IsBoxedValue(left) || IsBoxedValue(right))
+            return Unsupported(site, "the reference equality of boxed values", "each boxing makes a new object, and which box holds a value is not modelled at compile time");
+        if (left is string a && right is string b && !ReferenceEquals(a, b) && string.Equals(a, b, StringComparison.Ordinal))
+            return Unsupported(site, "the reference equality of two equal strings", "whether they are one object depends on interning, which is not modelled at compile time");
+        return ReferenceEquals(left, right);
+    }
+
+    private static bool IsBoxedValue(object value)
+        => value is InterpretedObject instance ? instance.Type.IsValueType : value is not Closure && value.GetType().IsValueType || value is EnumValue or TupleValue;
 
     private object? VisitUnary(IUnaryOperation unary, Frame frame)
     {
@@ -147,11 +237,16 @@ internal sealed partial class Interpreter
             target = nullable.TypeArguments[0];
         if (target.TypeKind == TypeKind.Enum)
             return ToEnum(value, target);
-        if (IsNumeric(target) && (IsNumericValue(value) || value is Enum))
+        if (IsNumeric(target) && (IsNumericValue(value) || value is Enum or EnumValue))
         {
-            var number = value is Enum ? System.Convert.ToInt64(value, CultureInfo.InvariantCulture) : value;
+            var number = value is Enum or EnumValue ? System.Convert.ToInt64(value, CultureInfo.InvariantCulture) : value;
             return NumericConversion(conversion, number, target);
         }
+
+        // A design's enum cast to another underlying type (byte, uint...): its number, never the enum value itself.
+        if (value is EnumValue enumValue && target.IsValueType && target.SpecialType != SpecialType.None)
+            return SameType(enumValue.Number, target) ? enumValue.Number
+                : Unsupported(conversion, "this conversion of an enum to " + Describe(target), "the elaborator converts an enum to its own underlying type, int, long, float, double and char");
 
         return value;
     }
@@ -181,12 +276,20 @@ internal sealed partial class Interpreter
         if (underlying is ITypeParameterSymbol parameter && frame.TypeArgumentOf(parameter) is { } argument and not ITypeParameterSymbol)
             underlying = NullableUnderlying(argument) ?? argument;
         // Numbers may be held in a wider type than declared (a short as an int): for an unboxing only their kind is tested.
-        var fits = IsNumeric(underlying) || underlying.SpecialType is SpecialType.System_Byte or SpecialType.System_SByte or SpecialType.System_Int16
-                or SpecialType.System_UInt16 or SpecialType.System_UInt32 or SpecialType.System_UInt64 or SpecialType.System_Decimal
-            ? IsNumericValue(value) || value is Enum || value is decimal
+        var numericTarget = IsNumeric(underlying) || underlying.SpecialType is SpecialType.System_Byte or SpecialType.System_SByte or SpecialType.System_Int16
+            or SpecialType.System_UInt16 or SpecialType.System_UInt32 or SpecialType.System_UInt64 or SpecialType.System_Decimal;
+        var fits = numericTarget
+            ? IsNumericValue(value) || value is Enum || value is decimal || value is EnumValue
+            : underlying.TypeKind == TypeKind.Enum && !ClrTypes.IsDsl(underlying) && IsNumericValue(value) ? true
             : IsOfType(value, underlying, frame);
         if (fits is null)
             return Unsupported(conversion, "this cast to " + Describe(target), "whether the value is of that type cannot be decided at compile time");
+        // The run time lets a boxed enum be unboxed as its underlying type and a boxed number as an enum: the value
+        // takes the type the cast names.
+        if (fits.Value && value is EnumValue boxedEnum && numericTarget)
+            return IsNumeric(underlying) ? Arithmetic.ConvertNumber(boxedEnum.Number, underlying.SpecialType, isChecked: false) : boxedEnum.Number;
+        if (fits.Value && underlying.TypeKind == TypeKind.Enum && value is not EnumValue and not Enum)
+            return ToEnum(value, underlying);
         if (fits.Value)
             return value;
         if (conversion.IsTryCast)
@@ -223,9 +326,9 @@ internal sealed partial class Interpreter
                     var alignment = hole.Alignment is null ? null : Evaluate(hole.Alignment, frame);
                     var format = hole.FormatString is null ? null : Evaluate(hole.FormatString, frame) as string;
                     if (Unknown.Is(alignment)) return Skipped(interpolated, frame);
-                    var composite = "{0" + (alignment is null ? "" : "," + System.Convert.ToInt32(alignment, CultureInfo.InvariantCulture).ToString(CultureInfo.InvariantCulture))
-                        + (format is null ? "" : ":" + format) + "}";
-                    text.Append(string.Format(CultureInfo.InvariantCulture, composite, value is bool b ? (b ? "True" : "False") : value));
+                    var composite = "{0" + (alignment is null ? "" : "," + System.Convert.ToInt32(alignment, CultureInfo.InvariantCulture).ToString(CultureInfo.InvariantCulture)) + "}";
+                    // The hole is formatted in the run's current culture: ValueText gives its text when no culture changes it.
+                    text.Append(string.Format(CultureInfo.InvariantCulture, composite, ValueText.Of(value, SourceType(hole.Expression), format)));
                     break;
                 default:
                     return Unsupported(part, "this interpolated string", "interpolated string handlers are outside the subset");
@@ -236,13 +339,16 @@ internal sealed partial class Interpreter
         return text.ToString();
     }
 
-    /// <summary>String concatenation (an interpreted ToString may be called), charged to the memory budget.</summary>
-    private object? Concatenate(IOperation site, object? left, object? right)
+    /// <summary>
+    /// String concatenation (an interpreted ToString may be called), charged to the memory budget. The operands' types in
+    /// the source say how a collection prints its type.
+    /// </summary>
+    private object? Concatenate(IOperation site, object? left, object? right, ITypeSymbol? leftType, ITypeSymbol? rightType)
     {
         string joined;
         try
         {
-            joined = Arithmetic.Concatenate(left, right);
+            joined = ValueText.Of(left, leftType) + ValueText.Of(right, rightType);
         }
         catch (UnknownValueException e)
         {
@@ -300,6 +406,12 @@ internal sealed partial class Interpreter
     private static bool IsNumeric(ITypeSymbol type) => type.SpecialType is SpecialType.System_SByte or SpecialType.System_Byte
         or SpecialType.System_Int16 or SpecialType.System_UInt16 or SpecialType.System_Char or SpecialType.System_Int32 or SpecialType.System_UInt32
         or SpecialType.System_Int64 or SpecialType.System_UInt64 or SpecialType.System_Single or SpecialType.System_Double or SpecialType.System_Decimal;
+
+    /// <summary>The type an expression has in the source, under the implicit conversion (to object, to string) C# adds.</summary>
+    private static ITypeSymbol? SourceType(IOperation operation)
+        => operation is IConversionOperation { IsImplicit: true } conversion ? conversion.Operand.Type : operation.Type;
+
+    private static bool SameType(object value, ITypeSymbol type) => ClrTypes.Resolve(type) == value.GetType();
 
     private static bool IsNumericValue(object value) => value is int or long or double or float or char or short or byte or uint or ulong or sbyte or ushort or decimal;
 }

@@ -195,6 +195,8 @@ internal sealed partial class Interpreter
     {
         if (Unknown.Is(a) || Unknown.Is(b)) return null;
         if (a is null || b is null) return a is null && b is null;
+        // A design's enum equals only a value of the same enum (a boxed Color.Blue is not the int 4).
+        if (a is EnumValue || b is EnumValue) return a.Equals(b);
         if (IsComparable(a) && IsComparable(b))
             return Compare(a, b) == 0;
 
@@ -203,7 +205,7 @@ internal sealed partial class Interpreter
         return a.GetType().IsValueType ? a.Equals(b) : ReferenceEquals(a, b);
     }
 
-    private static bool IsComparable(object value) => IsNumericValue(value) || value is Enum;
+    private static bool IsComparable(object value) => IsNumericValue(value) || value is Enum or EnumValue;
 
     /// <summary>
     /// Orders two numbers exactly: whole numbers as whole numbers (a long above 2^53 or a ulong above long.MaxValue is

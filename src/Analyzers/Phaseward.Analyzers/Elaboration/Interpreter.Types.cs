@@ -45,9 +45,14 @@ internal sealed partial class Interpreter
             return type.IsTupleType ? type is INamedTypeSymbol { TupleElements.Length: var length } && length == tuple.Items.Length
                 : type.ToDisplayString() is "System.Runtime.CompilerServices.ITuple" or "System.ValueType" or "System.IComparable" ? true
                 : type.TypeKind == TypeKind.Interface ? null : false;
+        if (value is EnumValue enumValue)
+            return type.TypeKind == TypeKind.Enum ? SymbolEqualityComparer.Default.Equals(type, enumValue.Type)
+                : type.SpecialType is SpecialType.System_Enum or SpecialType.System_ValueType
+                    || type.ToDisplayString() is "System.IComparable" or "System.IFormattable" or "System.IConvertible" or "System.ISpanFormattable";
         if (value is Closure) return type.TypeKind == TypeKind.Delegate ? true : type.TypeKind == TypeKind.Interface ? null : false;
         if (session.IsInSource(type)) return false;
-        var clr = type.TypeKind == TypeKind.Enum && !ClrTypes.IsDsl(type) ? typeof(int) : Library.Erase(type);
+        if (type.TypeKind == TypeKind.Enum && !ClrTypes.IsDsl(type)) return false;
+        var clr = Library.Erase(type);
         return clr?.IsInstanceOfType(value);
     }
 
@@ -67,7 +72,7 @@ internal sealed partial class Interpreter
         }
     }
 
-    /// <summary>The members of a <see cref="TypeValue"/> that say only what the source says: ToString, Equals, GetHashCode.</summary>
+    /// <summary>The members of a <see cref="TypeValue"/> that say only what the source says: ToString, Equals (a Type's hash differs from process to process).</summary>
     private object? CallTypeMember(IInvocationOperation invocation, TypeValue type, IMethodSymbol method, Frame frame)
     {
         var (arguments, _) = Arguments(invocation.Arguments, method, frame);
@@ -78,7 +83,6 @@ internal sealed partial class Interpreter
             {
                 "ToString" when arguments.Length == 0 => type.ToString(),
                 "Equals" when arguments.Length == 1 => type.Equals(arguments[0]),
-                "GetHashCode" when arguments.Length == 0 => type.GetHashCode(),
                 _ => Unsupported(invocation, "the call to " + Describe(method), "of a type only its name, text and equality are read: the rest is reflection"),
             };
         }

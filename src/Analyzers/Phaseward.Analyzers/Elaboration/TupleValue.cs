@@ -1,6 +1,8 @@
+using System.Linq;
+
 namespace Phaseward.Analyzers.Elaboration;
 
-/// <summary>A tuple built by interpreted code (<c>(a, b)</c>): its elements, in order.</summary>
+/// <summary>A tuple built by interpreted code (<c>(a, b)</c>): its elements, in order. It prints as ValueTuple does: "(1, 2)".</summary>
 /// <remarks>
 /// Equal as ValueTuple is (element by element, each with its own Equals), so a tuple works as a dictionary key or set
 /// element. Its hash only places it in the library's tables: .NET's ValueTuple hash is seeded per process, so a design
@@ -11,6 +13,9 @@ internal sealed class TupleValue
     public TupleValue(object?[] items) => Items = items;
 
     public object?[] Items { get; }
+
+    /// <summary>As <c>ValueTuple.ToString()</c>: the elements' texts (null as nothing) between parentheses, ", " apart.</summary>
+    public override string ToString() => "(" + string.Join(", ", Items.Select(Arithmetic.Text)) + ")";
 
     public override bool Equals(object? obj)
     {

@@ -22,6 +22,9 @@ internal sealed class UnknownValueException : Exception
         : base(construct + ": " + why)
         => Construct = (construct, why);
 
+    /// <summary>A construct met while computing a value (a text, an equality) that is not interpreted, reported at the site.</summary>
+    public static UnknownValueException Unsupported(string construct, string why) => new(construct, why);
+
     /// <summary>Library code compared or hashed two of the design's delegates.</summary>
     public static UnknownValueException DelegateEquality
         => new("the equality of delegates made by the design", "C# compares a delegate's target and method, which the elaborator does not model");

@@ -90,12 +90,12 @@ public sealed class StringsAndBuilders : Design
         builder.Append("lane").Append('_', 2).Append(3);
         var prefix = builder.ToString().Replace("__", "-").ToUpper().Substring(0, 6).PadRight(8, 'x').Trim('x');
         var parts = "a,b,c".Split(',');
-        var spec = string.Concat(parts) + string.Format("{0:D2}", 7) + new string('x', 2) + $"{3.5,6:F1}|{parts.Length,-3}|";
+        var spec = string.Concat(parts) + string.Format("{0:D2}", 7) + new string('x', 2) + $"{3.5.ToString("F1", System.Globalization.CultureInfo.InvariantCulture),6}|{parts.Length,-3}|";
         var x = c.Input(prefix.ToLowerInvariant());
         for (var i = 0; i < Convert.ToInt32("2") + (int)Math.Round(Math.Sqrt(1.0)); i++)
             x = c.DynamicLatch(x, clk.Low, $"{prefix}.{i:D2}");
         c.Output(spec.Replace(" ", "_").Replace(".", "p").Replace("|", "I"), x);
-        c.Output("bits" + System.Numerics.BitOperations.PopCount(7u) + int.Parse("12") + double.Parse("1.5", System.Globalization.CultureInfo.InvariantCulture), c.Inverter(x));
+        c.Output("bits" + System.Numerics.BitOperations.PopCount(7u) + int.Parse("12") + double.Parse("1.5", System.Globalization.CultureInfo.InvariantCulture).ToString(System.Globalization.CultureInfo.InvariantCulture), c.Inverter(x));
     }
 }
 
