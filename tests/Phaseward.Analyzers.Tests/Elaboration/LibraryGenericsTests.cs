@@ -28,6 +28,20 @@ public class LibraryGenericsTests
     [InlineData("Quarry.ExtremesOfNoValues")]
     public void TypeArgumentsAreHonoured(string design) => ParityTests.AssertParity(Designs, design);
 
+    [Theory]
+    [InlineData("Quarry.ListToArray")]
+    [InlineData("Quarry.DictionaryValuesToArray")]
+    [InlineData("Quarry.ArrayToList")]
+    [InlineData("Quarry.CopyToAndClone")]
+    [InlineData("Quarry.FilteredToArray")]
+    [InlineData("Quarry.ResizeKeepsTheOldArray")]
+    [InlineData("Quarry.RepeatGivesCopies")]
+    [InlineData("Quarry.FillGivesCopies")]
+    [InlineData("Quarry.TuplesOfStructs")]
+    [InlineData("Quarry.AddAndAddRange")]
+    [InlineData("Quarry.BoxesStayShared")]
+    public void StructElementsAreCopied(string design) => ParityTests.AssertParity(Designs, design);
+
     [Fact]
     public async Task OfTypeWhereAnElementsTypeCannotBeDecidedIsPW9001()
     {

@@ -147,7 +147,7 @@ internal sealed partial class Interpreter
         {
             // A lazy sequence made in generic code (its element type a type parameter there) meets its static type here.
             if (!isDsl && i < method.Parameters.Length)
-                arguments[i] = WithErasedDefaults(arguments[i], method.Parameters[i].Type);
+                arguments[i] = OwnCopy(WithErasedDefaults(arguments[i], method.Parameters[i].Type), Resolved(method.Parameters[i].Type, frame));
             clrArguments[i] = ToClr(arguments[i], parameterTypes[i]);
             if (clrArguments[i] is Unconvertible)
                 return Unsupported(site, "the call to " + Describe(method), "argument " + (i + 1) + " cannot be passed to the library as " + parameterTypes[i].Name);
@@ -191,6 +191,7 @@ internal sealed partial class Interpreter
             if (IsExtremeOfNothing(method, result, resultType))
                 return Raise(site.Syntax, new InvalidOperationException("Sequence contains no elements"));
             var value = WithErasedDefaults(FromClr(result), method.MethodKind == MethodKind.Constructor ? null : resultType);
+            OwnLibraryCopies(site, method, receiver, clrArguments, value, resultType, frame);
             return value;
         }
         catch (TargetInvocationException e) when (e.InnerException is ElaborationStopped or UnknownValueException or DesignException
