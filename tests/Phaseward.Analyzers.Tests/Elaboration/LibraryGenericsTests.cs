@@ -39,6 +39,7 @@ public class LibraryGenericsTests
     [InlineData("Quarry.FillGivesCopies")]
     [InlineData("Quarry.TuplesOfStructs")]
     [InlineData("Quarry.AddAndAddRange")]
+    [InlineData("Quarry.CollectionsFromSequences")]
     [InlineData("Quarry.BoxesStayShared")]
     public void StructElementsAreCopied(string design) => ParityTests.AssertParity(Designs, design);
 
@@ -335,6 +336,23 @@ public class LibraryGenericsTests
                         d[0] = s;
                         s.X = 1;
                         Say(c, $"{l[0].X}{l[1].X}{l[2].X}{q.Peek().X}{d[0].X}{s.X}");
+                    }
+                }
+                public sealed class CollectionsFromSequences : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var a = new Tub[2];
+                        a[1].X = 1;
+                        var direct = a.ToDictionary(t => t.X);
+                        var lk = a.ToLookup(t => t.X);
+                        var h = a.Where(_ => true).ToHashSet();
+                        var d = a.Where(_ => true).ToDictionary(t => t.X);
+                        var byTub = a.Select(t => t).ToDictionary(t => t, t => t.X);
+                        var q = new Queue<Tub>(a.Select(t => t));
+                        var st = new Stack<Tub>(a.Where(_ => true));
+                        a[0].X = 7;
+                        Say(c, $"{h.Sum(t => t.X)}{d[0].X}{byTub.ContainsKey(new Tub())}{direct[0].X}{q.Peek().X}{st.Last().X}{lk[0].First().X}{a[0].X}");
                     }
                 }
                 public sealed class BoxesStayShared : Base

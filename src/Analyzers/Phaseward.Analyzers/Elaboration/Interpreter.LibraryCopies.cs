@@ -1,5 +1,6 @@
 using System.Collections;
 using System.Collections.Generic;
+using System.Collections.Immutable;
 using System.Linq;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Operations;
@@ -46,14 +47,59 @@ internal sealed partial class Interpreter
     }
 
     /// <summary>
-    /// After a library call: the array or list it returned (unless it is one it was given), the receiver a call such as
-    /// AddRange filled, and the arrays that CopyTo, Array.Copy, Fill or Resize wrote get their own struct copies; a new
-    /// set or dictionary made from an array leaves the array its own copies instead.
+    /// A new set, dictionary, queue or stack a call made (held with erased type arguments): refilled, in its order, with
+    /// copies of the structs it holds. False for other kinds of collection.
+    /// </summary>
+    private bool OwnCollectionElements(object? collection, ITypeSymbol? staticType)
+    {
+        var arguments = (staticType as INamedTypeSymbol)?.TypeArguments ?? ImmutableArray<ITypeSymbol>.Empty;
+        var first = arguments.Length > 0 ? arguments[0] : null;
+        var second = arguments.Length > 1 ? arguments[1] : null;
+        if (!MayHoldStructs(first) && !MayHoldStructs(second))
+            return collection is HashSet<object?> or SortedSet<object?> or Dictionary<object, object?> or SortedDictionary<object, object?> or Queue<object?> or Stack<object?>;
+        switch (collection)
+        {
+            case HashSet<object?> or SortedSet<object?>:
+                var set = (ISet<object?>)collection;
+                var items = set.ToList();
+                set.Clear();
+                foreach (var item in items)
+                    set.Add(OwnCopy(item, first));
+                return true;
+            case IDictionary<object, object?> map when collection is Dictionary<object, object?> or SortedDictionary<object, object?>:
+                var pairs = map.ToList();
+                map.Clear();
+                foreach (var pair in pairs)
+                    map.Add(OwnCopy(pair.Key, first)!, OwnCopy(pair.Value, second));
+                return true;
+            case Queue<object?> queue:
+                var queued = queue.ToArray();
+                queue.Clear();
+                foreach (var item in queued)
+                    queue.Enqueue(OwnCopy(item, first));
+                return true;
+            case Stack<object?> stack:
+                var stacked = stack.ToArray();
+                stack.Clear();
+                for (var i = stacked.Length - 1; i >= 0; i--)
+                    stack.Push(OwnCopy(stacked[i], first));
+                return true;
+            default:
+                return false;
+        }
+    }
+
+    /// <summary>
+    /// After a library call: the collection it made (an array, list, set, dictionary, queue or stack; not one it was
+    /// given), the receiver a call such as AddRange filled, and the arrays that CopyTo, Array.Copy, Fill or Resize wrote
+    /// get their own struct copies; the arrays a collection of another kind (a lookup) was made from keep theirs instead.
     /// </summary>
     private void OwnLibraryCopies(IOperation site, IMethodSymbol method, object? receiver, object?[] given, object? result, ITypeSymbol? resultType, Frame? frame)
     {
         // Only collections count (a lazy sequence is not a place: what enumerates it stores the elements somewhere).
-        var fresh = (result is ICollection || result?.GetType().Namespace == "System.Collections.Generic") && !ReferenceEquals(result, receiver) && !Holds(given, result);
+        // A getter or indexer gives what is stored (d.Values, grid[i]), not a new collection.
+        var fresh = method.MethodKind != MethodKind.PropertyGet && (result is ICollection or ILookup<object, object?> || result?.GetType().Namespace == "System.Collections.Generic")
+            && !ReferenceEquals(result, receiver) && !Holds(given, result);
         var writes = Mutators.Contains(method.Name) || method.ContainingType?.SpecialType == SpecialType.System_Array;
         if (!fresh && !writes)
             return; // most calls (a string's, a number's, Count, First): nothing stored anywhere
@@ -63,7 +109,7 @@ internal sealed partial class Interpreter
             OwnElements(result, resultType is not null && ElementTypeOf(resultType) is not null ? resultType : Resolved(receiverType, frame));
         if (writes && HasSequence(given))
             OwnElements(receiver, Resolved(receiverType, frame));
-        if (!writes && result is object?[] or List<object?>)
+        if (!writes && (result is object?[] or List<object?> || OwnCollectionElements(result, resultType)))
             return;
         for (var i = 0; i < given.Length && i < method.Parameters.Length; i++)
             if (given[i] is object?[] array)
