@@ -287,7 +287,8 @@ internal sealed partial class Interpreter
         {
             frameSizes.TryGetValue(body, out var expectedVariables);
             var frame = new Frame(method.OriginalDefinition, parent, method.IsStatic && method.MethodKind != MethodKind.LocalFunction ? null : instance, expectedVariables);
-            var parameters = method.OriginalDefinition.Parameters;
+            // A partial method's body (the implementing part) names its own parameters.
+            var parameters = (method.OriginalDefinition.PartialImplementationPart ?? method.OriginalDefinition).Parameters;
             frame.TypeArguments = TypeArgumentsOf(method, caller);
             for (var i = 0; i < parameters.Length && i < arguments.Length; i++)
             {

@@ -115,7 +115,7 @@ internal sealed partial class Interpreter
     private object? ReadDesignProperty(IPropertyReferenceOperation reference, InterpretedObject instance, Frame frame)
     {
         var property = reference.Property;
-        if (FindOverride(instance.Type, property) is { } overriding)
+        if (!ThroughBase(reference) && FindOverride(instance.Type, property) is { } overriding)
             property = overriding;
         if (ClrTypes.IsDsl(property))
             return property.Name == nameof(Design.Name)
@@ -140,6 +140,9 @@ internal sealed partial class Interpreter
             return Unknown.Value;
         return InvokeUser(getter, instance, arguments, references, reference, frame);
     }
+
+    /// <summary><c>base.P</c> or <c>base[i]</c>: the base class's own property, never an override (which would call itself).</summary>
+    private static bool ThroughBase(IPropertyReferenceOperation reference) => reference.Instance?.Syntax is BaseExpressionSyntax;
 
     /// <summary>A property that stores its value (auto-property, or a record's positional property).</summary>
     internal static bool IsAutoProperty(IPropertySymbol property)
