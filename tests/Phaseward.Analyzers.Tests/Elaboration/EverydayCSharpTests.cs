@@ -9,7 +9,8 @@ namespace Phaseward.Analyzers.Tests.Elaboration;
 /// were PW9001; so were a foreach over a sequence of the design's own type (a bus that is IEnumerable&lt;Net&gt;) and a
 /// nested initializer (<c>new Lane { Tap = { Depth = 2 }, Names = { "a" } }</c>). A property read or written through
 /// <c>base.</c> ran the override again (PW9002 at the recursion limit), a generic class's constructor and a partial
-/// method's body could not read their own parameters (PW9001).
+/// method's body could not read their own parameters (PW9001), and a static abstract property read through a type
+/// parameter (<c>T.Prefix</c>) was read as an empty static of the interface, silently.
 /// </summary>
 public class EverydayCSharpTests
 {
@@ -42,6 +43,7 @@ public class EverydayCSharpTests
     [InlineData("Everyday.TemplateDerived")]
     [InlineData("Everyday.GenericConstructor")]
     [InlineData("Everyday.PartialParts")]
+    [InlineData("Everyday.StaticAbstracts")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
 
     private static readonly InMemoryDesigns Designs = new(("/everyday/Everyday.cs", """
@@ -296,6 +298,15 @@ public class EverydayCSharpTests
                 public sealed partial class PartialParts
                 {
                     partial void Extra(ref int s, int i) { s += i; }
+                }
+                public interface IKind { static abstract string Prefix { get; } static abstract int Width(int n); static virtual int Extra => 1; }
+                public sealed class Narrow : IKind { public static string Prefix => "nw"; public static int Width(int n) => n; }
+                public sealed class Wide : IKind { public static string Prefix { get; } = "wdx"; public static int Width(int n) => 2 * n; public static int Extra => 5; }
+                public sealed class StaticAbstracts : Base
+                {
+                    private static int Count<T>() where T : IKind => T.Width(2) + T.Extra + T.Prefix.Length;
+                    protected override void Describe(Circuit c) { c.Inverter(c.Input("kind"), Name<Narrow>() + Name<Wide>()); Chain(c, Count<Narrow>() + Count<Wide>(), "sa"); }
+                    private static string Name<T>() where T : IKind => T.Prefix + "_";
                 }
             }
             """));

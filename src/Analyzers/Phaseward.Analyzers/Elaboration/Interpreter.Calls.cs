@@ -25,6 +25,13 @@ internal sealed partial class Interpreter
         if (receiver is null && !method.IsStatic && ThroughReference(invocation.Instance) is { } nullReceiver)
             return NullReference(invocation, nullReceiver, "the call to " + Describe(method));
 
+        if (invocation.ConstrainedToType is { } constrained && method.IsStatic)
+        {
+            if (StaticImplementation(constrained, method, frame) is not IMethodSymbol staticImplementation)
+                return Unsupported(invocation, "the call to " + Describe(method), "what the type parameter stands for is not known here");
+            method = staticImplementation;
+        }
+
         if (receiver is Circuit circuit && method.Name == nameof(Circuit.Place) && ClrTypes.IsDsl(method))
             return PlaceBlock(invocation, circuit, frame);
 
