@@ -7,7 +7,10 @@ namespace Phaseward.Analyzers.Tests.Elaboration;
 /// <c>GetValueOrDefault</c> on a nullable were PW9001, and a write or foreach through null was PW9001 instead of the
 /// NullReferenceException the design catches, typeof or GetType() (to name what a block makes by its type), combined delegates and events
 /// were PW9001; so were a foreach over a sequence of the design's own type (a bus that is IEnumerable&lt;Net&gt;) and a
-/// nested initializer (<c>new Lane { Tap = { Depth = 2 }, Names = { "a" } }</c>).
+/// nested initializer (<c>new Lane { Tap = { Depth = 2 }, Names = { "a" } }</c>). A property read or written through
+/// <c>base.</c> ran the override again (PW9002 at the recursion limit), a generic class's constructor and a partial
+/// method's body could not read their own parameters (PW9001), and a static abstract property read through a type
+/// parameter (<c>T.Prefix</c>) was read as an empty static of the interface, silently.
 /// </summary>
 public class EverydayCSharpTests
 {
@@ -37,6 +40,10 @@ public class EverydayCSharpTests
     [InlineData("Everyday.BusHandingOutAListEnumerator")]
     [InlineData("Everyday.BusLeftEarly")]
     [InlineData("Everyday.NestedInitializers")]
+    [InlineData("Everyday.TemplateDerived")]
+    [InlineData("Everyday.GenericConstructor")]
+    [InlineData("Everyday.PartialParts")]
+    [InlineData("Everyday.StaticAbstracts")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
 
     private static readonly InMemoryDesigns Designs = new(("/everyday/Everyday.cs", """
@@ -258,6 +265,48 @@ public class EverydayCSharpTests
                         var lane = new Lane { Tap = { Depth = 2, Names = { "p", "q" } }, At = { X = 3 }, Names = { "a", "b" } };
                         Chain(c, lane.Tap.Depth + lane.Tap.Names.Count + lane.At.X + lane.Names.Count, "ni");
                     }
+                }
+                public class TemplateBase : Base
+                {
+                    private int stored;
+                    protected virtual int W => 2;
+                    protected virtual int this[int i] => i * 2;
+                    protected virtual int Stored { get => stored; set => stored = value; }
+                    protected override void Describe(Circuit c) { Stored = 1; Chain(c, W + this[1] + Stored, "tb"); }
+                }
+                public sealed class TemplateDerived : TemplateBase
+                {
+                    protected override int W => base.W + 1;
+                    protected override int this[int i] => base[i] + 1;
+                    protected override int Stored { get => base.Stored + 1; set => base.Stored = value * 2; }
+                }
+                public sealed class Crate<T>
+                {
+                    public readonly int N;
+                    public readonly string Tag;
+                    public Crate(int n, string tag = "t") { N = n; Tag = tag + typeof(T).Name; }
+                }
+                public sealed class GenericConstructor : Base
+                {
+                    protected override void Describe(Circuit c) { var b = new Crate<string>(4); var g = new Crate<int>(2, "u"); Chain(c, b.N + g.N + g.Tag.Length, "gc"); }
+                }
+                public sealed partial class PartialParts : Base
+                {
+                    partial void Extra(ref int s, int i);
+                    protected override void Describe(Circuit c) { var s = 1; Extra(ref s, 3); Chain(c, s, "pp"); }
+                }
+                public sealed partial class PartialParts
+                {
+                    partial void Extra(ref int s, int i) { s += i; }
+                }
+                public interface IKind { static abstract string Prefix { get; } static abstract int Width(int n); static virtual int Extra => 1; }
+                public sealed class Narrow : IKind { public static string Prefix => "nw"; public static int Width(int n) => n; }
+                public sealed class Wide : IKind { public static string Prefix { get; } = "wdx"; public static int Width(int n) => 2 * n; public static int Extra => 5; }
+                public sealed class StaticAbstracts : Base
+                {
+                    private static int Count<T>() where T : IKind => T.Width(2) + T.Extra + T.Prefix.Length;
+                    protected override void Describe(Circuit c) { c.Inverter(c.Input("kind"), Name<Narrow>() + Name<Wide>()); Chain(c, Count<Narrow>() + Count<Wide>(), "sa"); }
+                    private static string Name<T>() where T : IKind => T.Prefix + "_";
                 }
             }
             """));

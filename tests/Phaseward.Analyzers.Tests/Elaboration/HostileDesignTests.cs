@@ -657,16 +657,9 @@ public class HostileDesignTests
         AssertNoStage(source);
     }
 
-    private static DiagnosticResult NotElaborated(int location, string what, string why)
-        => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
+    private static DiagnosticResult NotElaborated(int location, string what, string why) => InverterChainDesign.NotElaborated(location, what, why);
 
-    /// <summary>Nothing that depends on the construct is made: no stage at all.</summary>
-    private static void AssertNoStage(string source)
-    {
-        var result = new InMemoryDesigns(("/hostile/D.cs", Plain(source))).CompileTime("Hostile.D");
-        Assert.True(result.Issues.Count > 0);
-        Assert.DoesNotContain(result.Netlist!.Devices, d => d.Name.StartsWith("s", StringComparison.Ordinal));
-    }
+    private static void AssertNoStage(string source) => InverterChainDesign.AssertNoStage(source, "Hostile");
 
     private static string Design(string statements, string members = "", string declarations = "") => InverterChainDesign.Source("Hostile", declarations, members, statements);
 

@@ -1,4 +1,8 @@
+using System;
 using System.Text.RegularExpressions;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Testing;
+using Phaseward.Checking;
 
 namespace Phaseward.Analyzers.Tests.Elaboration;
 
@@ -34,4 +38,16 @@ internal static class InverterChainDesign
 
     /// <summary>The source without its {|#n: ... |} diagnostic markup (for run-time compilation and parity).</summary>
     public static string WithoutMarkup(string marked) => Regex.Replace(marked, @"\{\|#\d:|\|\}", "");
+
+    /// <summary>PW9001 at markup <paramref name="location"/> of the design D: what is not elaborated, and why.</summary>
+    public static DiagnosticResult NotElaborated(int location, string what, string why)
+        => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
+
+    /// <summary>Nothing that depends on the construct under test is made: something is reported, and no stage at all.</summary>
+    public static void AssertNoStage(string marked, string designNamespace)
+    {
+        var result = new InMemoryDesigns(("/" + designNamespace.ToLowerInvariant() + "/D.cs", WithoutMarkup(marked))).CompileTime(designNamespace + ".D");
+        Assert.True(result.Issues.Count > 0);
+        Assert.DoesNotContain(result.Netlist!.Devices, d => d.Name.StartsWith("s", StringComparison.Ordinal));
+    }
 }

@@ -261,16 +261,9 @@ public class LibraryBoundaryTests
             }
             """));
 
-    private static DiagnosticResult NotElaborated(int location, string what, string why)
-        => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
+    private static DiagnosticResult NotElaborated(int location, string what, string why) => InverterChainDesign.NotElaborated(location, what, why);
 
-    /// <summary>Nothing that depends on the construct is made: no stage at all.</summary>
-    private static void AssertNoStage(string source)
-    {
-        var result = new InMemoryDesigns(("/boundary/D.cs", InverterChainDesign.WithoutMarkup(source))).CompileTime("Boundary.D");
-        Assert.True(result.Issues.Count > 0);
-        Assert.DoesNotContain(result.Netlist!.Devices, d => d.Name.StartsWith("s", StringComparison.Ordinal));
-    }
+    private static void AssertNoStage(string source) => InverterChainDesign.AssertNoStage(source, "Boundary");
 
     private static string Source(string declarations, string members, string statements) => InverterChainDesign.Source("Boundary", declarations, members, statements);
 }

@@ -37,6 +37,7 @@ public class SkippedCodeTests
         private void Mark() => marks.Add(1);
         private static void Add(ref int x) => x += 10;
         private ref int Pick() => ref other;
+        private int Risky() { if (System.Environment.ProcessorCount > 0) throw new System.InvalidOperationException(); return 5; }
         """;
 
     [Theory]
@@ -71,6 +72,8 @@ public class SkippedCodeTests
     [InlineData("var k = 0; foreach (var n in new[] { 1, 2 }) { if (n > 1 && " + Unknown + ") break; k++; } count = k;", 1)]
     [InlineData("switch (count) { case 3: if (" + Unknown + ") break; count = 9; break; } count++;", 4)]
     [InlineData("try { if (" + Unknown + ") throw new System.InvalidOperationException(); count = 5; } catch (System.InvalidOperationException) { count = 6; }", 6)]
+    [InlineData("try { count = Risky(); count += 1; } catch (System.InvalidOperationException) { count = 9; }", 9)]
+    [InlineData("try { Bump(); foreach (var k in new[] { 1, 2 }) Risky(); extra = 2; } catch (System.InvalidOperationException) { } count = extra;", 7)]
     public void WhatSkippedCodeMayHaveChangedIsNeverReadAsBefore(string statements, int stagesAtRunTime)
     {
         var designs = Designs(statements);

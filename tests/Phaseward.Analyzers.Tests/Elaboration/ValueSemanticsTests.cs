@@ -290,8 +290,7 @@ public class ValueSemanticsTests
             }
             """));
 
-    private static DiagnosticResult NotElaborated(int location, string what, string why)
-        => new DiagnosticResult(RuleCatalog.NotElaborated.Id, DiagnosticSeverity.Warning).WithLocation(location).WithArguments(what, why, "D");
+    private static DiagnosticResult NotElaborated(int location, string what, string why) => InverterChainDesign.NotElaborated(location, what, why);
 
     private static string Design(string statements, string members = "", string declarations = "") => InverterChainDesign.Source("Values", declarations, members, statements);
 }

@@ -28,6 +28,10 @@ internal sealed class Completion
     /// <summary>Skipped code may have returned: the rest of the method is skipped, and what it returns is not known.</summary>
     public static readonly Completion MaybeReturn = new(nameof(MaybeReturn), 4);
 
+    /// <summary>Skipped code may have returned or thrown: the rest of the method is skipped, and the exception may go on to
+    /// a catch around it (in the method or a caller).</summary>
+    public static readonly Completion MaybeReturnOrThrow = new(nameof(MaybeReturnOrThrow), 5);
+
     private readonly string name;
 
     // How far a Maybe way may have jumped (0 for the others): the farther one wins when skipped code has several.
@@ -42,8 +46,12 @@ internal sealed class Completion
     /// <summary>Whether skipped code may have jumped (one of the Maybe ways).</summary>
     public bool IsMaybe => reach > 0;
 
-    /// <summary>The farther-reaching of two Maybe ways (or Normal when neither is one).</summary>
-    public static Completion Farther(Completion a, Completion b) => a.reach >= b.reach ? a : b;
+    /// <summary>The farther-reaching of two Maybe ways (or Normal when neither is one); a return and a throw make both.</summary>
+    public static Completion Farther(Completion a, Completion b)
+        => (a == MaybeThrow && b == MaybeReturn) || (a == MaybeReturn && b == MaybeThrow) ? MaybeReturnOrThrow : a.reach >= b.reach ? a : b;
+
+    /// <summary>Whether skipped code may have thrown (the exception then goes on to an enclosing catch).</summary>
+    public bool MayThrow => this == MaybeThrow || this == MaybeReturnOrThrow;
 
     public override string ToString() => name;
 }

@@ -185,7 +185,7 @@ internal sealed partial class Interpreter
         if (receiver is InterpretedObject instance || (receiver is null && property.IsStatic && session.IsInSource(property)))
         {
             var interpretedObject = receiver as InterpretedObject;
-            if (interpretedObject is not null && FindOverride(interpretedObject.Type, property) is { } overriding)
+            if (interpretedObject is not null && !ThroughBase(reference) && FindOverride(interpretedObject.Type, property) is { } overriding)
                 property = overriding;
             if (IsAutoProperty(property))
             {

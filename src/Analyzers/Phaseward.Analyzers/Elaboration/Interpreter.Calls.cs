@@ -25,6 +25,13 @@ internal sealed partial class Interpreter
         if (receiver is null && !method.IsStatic && ThroughReference(invocation.Instance) is { } nullReceiver)
             return NullReference(invocation, nullReceiver, "the call to " + Describe(method));
 
+        if (invocation.ConstrainedToType is { } constrained && method.IsStatic)
+        {
+            if (StaticImplementation(constrained, method, frame) is not IMethodSymbol staticImplementation)
+                return Unsupported(invocation, "the call to " + Describe(method), "what the type parameter stands for is not known here");
+            method = staticImplementation;
+        }
+
         if (receiver is Circuit circuit && method.Name == nameof(Circuit.Place) && ClrTypes.IsDsl(method))
             return PlaceBlock(invocation, circuit, frame);
 
@@ -293,7 +300,8 @@ internal sealed partial class Interpreter
         {
             frameSizes.TryGetValue(body, out var expectedVariables);
             var frame = new Frame(method.OriginalDefinition, parent, method.IsStatic && method.MethodKind != MethodKind.LocalFunction ? null : instance, expectedVariables);
-            var parameters = method.OriginalDefinition.Parameters;
+            // A partial method's body (the implementing part) names its own parameters.
+            var parameters = (method.OriginalDefinition.PartialImplementationPart ?? method.OriginalDefinition).Parameters;
             frame.TypeArguments = TypeArgumentsOf(method, caller);
             for (var i = 0; i < parameters.Length && i < arguments.Length; i++)
             {

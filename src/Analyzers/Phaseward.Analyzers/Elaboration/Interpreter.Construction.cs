@@ -70,9 +70,11 @@ internal sealed partial class Interpreter
         switch (syntax)
         {
             case ConstructorDeclarationSyntax declaration when ModelOf(declaration).GetOperation(declaration, cancellationToken) is IConstructorBodyOperation body:
-                var frame = new Frame(constructor, null, instance);
-                for (var i = 0; i < constructor.Parameters.Length && i < arguments.Length; i++)
-                    frame.Declare(constructor.Parameters[i], arguments[i]);
+                // The body names the parameters of the constructor as declared (GBox<T>'s, not GBox<string>'s).
+                var frame = new Frame(constructor.OriginalDefinition, null, instance);
+                var parameters = constructor.OriginalDefinition.Parameters;
+                for (var i = 0; i < parameters.Length && i < arguments.Length; i++)
+                    frame.Declare(parameters[i], arguments[i]);
                 var chained = body.Initializer switch
                 {
                     IExpressionStatementOperation { Operation: IInvocationOperation invocation } => invocation,

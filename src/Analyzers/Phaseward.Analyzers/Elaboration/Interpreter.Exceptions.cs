@@ -71,9 +71,10 @@ internal sealed partial class Interpreter
 
         // The body may have thrown in code that was skipped: a catch clause may then have run, and what it does is not
         // known either; after it, the code runs on as after any catch.
-        if (completion == Completion.MaybeThrow && statement.Catches.Length > 0)
+        if (completion.MayThrow && statement.Catches.Length > 0)
         {
-            completion = Completion.Normal;
+            mayHaveThrown = false;
+            completion = completion == Completion.MaybeReturnOrThrow ? Completion.MaybeReturn : Completion.Normal;
             foreach (var clause in statement.Catches)
                 completion = Completion.Farther(completion, SkipStatement(clause.Handler, frame));
         }

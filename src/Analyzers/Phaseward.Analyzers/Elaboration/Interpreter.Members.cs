@@ -68,6 +68,12 @@ internal sealed partial class Interpreter
         if (Unknown.Is(receiver)) return Skipped(reference, frame); // a getter may run
         if (receiver is null && !property.IsStatic && ThroughReference(reference.Instance) is { } nullReceiver)
             return NullReference(reference, nullReceiver, "property " + Describe(property));
+        if (reference.ConstrainedToType is { } constrained && property.IsStatic)
+        {
+            if (StaticImplementation(constrained, property, frame) is not IPropertySymbol implementation)
+                return Unsupported(reference, "property " + Describe(property), "what the type parameter stands for is not known here");
+            property = implementation;
+        }
 
         switch (receiver)
         {
@@ -115,7 +121,7 @@ internal sealed partial class Interpreter
     private object? ReadDesignProperty(IPropertyReferenceOperation reference, InterpretedObject instance, Frame frame)
     {
         var property = reference.Property;
-        if (FindOverride(instance.Type, property) is { } overriding)
+        if (!ThroughBase(reference) && FindOverride(instance.Type, property) is { } overriding)
             property = overriding;
         if (ClrTypes.IsDsl(property))
             return property.Name == nameof(Design.Name)
@@ -140,6 +146,32 @@ internal sealed partial class Interpreter
             return Unknown.Value;
         return InvokeUser(getter, instance, arguments, references, reference, frame);
     }
+
+    /// <summary>
+    /// A static abstract or virtual interface member reached through a type parameter (<c>T.Prefix</c>, <c>T.Make()</c>):
+    /// the implementation of the type the parameter stands for here (the interface's own body for a static virtual one it
+    /// does not implement). Null when what the parameter stands for is not known.
+    /// </summary>
+    private static ISymbol? StaticImplementation(ITypeSymbol constrained, ISymbol member, Frame frame)
+    {
+        var actual = constrained is ITypeParameterSymbol parameter ? frame.TypeArgumentOf(parameter) : constrained;
+        if (actual is null or ITypeParameterSymbol || member.ContainingType is not { } contract)
+            return null;
+        foreach (var implemented in actual.AllInterfaces)
+        {
+            if (!SymbolEqualityComparer.Default.Equals(implemented.OriginalDefinition, contract.OriginalDefinition))
+                continue;
+            var declared = implemented.GetMembers(member.Name).FirstOrDefault(m => SymbolEqualityComparer.Default.Equals(m.OriginalDefinition, member.OriginalDefinition));
+            if (declared is not null && actual.FindImplementationForInterfaceMember(declared) is { } implementation)
+                return implementation;
+            return declared is { IsAbstract: false } ? declared : null;
+        }
+
+        return member.IsAbstract ? null : member;
+    }
+
+    /// <summary><c>base.P</c> or <c>base[i]</c>: the base class's own property, never an override (which would call itself).</summary>
+    private static bool ThroughBase(IPropertyReferenceOperation reference) => reference.Instance?.Syntax is BaseExpressionSyntax;
 
     /// <summary>A property that stores its value (auto-property, or a record's positional property).</summary>
     internal static bool IsAutoProperty(IPropertySymbol property)

@@ -50,7 +50,7 @@ internal sealed partial class Interpreter
             return Completion.Normal;
         if (completion == Completion.Return)
             return completion;
-        if (completion == Completion.MaybeBreak || completion == Completion.MaybeThrow || completion == Completion.MaybeReturn)
+        if (completion == Completion.MaybeBreak || completion.MayThrow || completion == Completion.MaybeReturn)
         {
             Poison(loop, frame);
             return completion == Completion.MaybeBreak ? Completion.Normal : completion;
@@ -63,8 +63,20 @@ internal sealed partial class Interpreter
     /// returned or thrown in code that was skipped, what it returns is not known.</summary>
     private void LeaveBody(Completion completion, Frame frame)
     {
-        if (completion == Completion.MaybeReturn || completion == Completion.MaybeThrow)
+        if (completion == Completion.MaybeReturn || completion.MayThrow)
             frame.ReturnValue = Unknown.Value;
+        mayHaveThrown |= completion.MayThrow;
+    }
+
+    /// <summary>How a statement of a list ended, counting a method it called that may have thrown: then the statement may
+    /// have stopped there (what it wrote becomes unknown) and the exception goes on to the enclosing catch.</summary>
+    private Completion AfterStatement(Completion completion, IOperation statement, Frame frame)
+    {
+        if (!mayHaveThrown || !(completion == Completion.Normal || completion.IsMaybe))
+            return completion;
+        mayHaveThrown = false;
+        Poison(statement, frame);
+        return Completion.Farther(completion, Completion.MaybeThrow);
     }
 
     /// <summary>How skipped code can leave itself, the farthest way (Normal when it cannot): a return or yield break, a
@@ -83,7 +95,7 @@ internal sealed partial class Interpreter
             var operation = pending.Pop();
             var jump = JumpOutOf(skipped, operation);
             escape = Completion.Farther(escape, jump);
-            if (jump != Completion.MaybeThrow)
+            if (!jump.MayThrow)
                 unlessThrown = Completion.Farther(unlessThrown, jump);
             foreach (var child in operation.ChildOperations)
                 if (child is not (IAnonymousFunctionOperation or ILocalFunctionOperation)) // their jumps leave only them

@@ -135,7 +135,7 @@ internal sealed partial class Interpreter
             return Completion.Normal;
         for (var i = 0; i < chosen.Body.Length; i++)
         {
-            var completion = Execute(chosen.Body[i], frame);
+            var completion = AfterStatement(Execute(chosen.Body[i], frame), chosen.Body[i], frame);
             if (completion.IsMaybe)
                 return AfterSwitch(SkipRest(chosen.Body, i + 1, completion, frame));
             if (completion == Completion.Break)
@@ -159,7 +159,7 @@ internal sealed partial class Interpreter
         {
             for (var i = 0; i < block.Operations.Length; i++)
             {
-                var completion = Execute(block.Operations[i], frame);
+                var completion = AfterStatement(Execute(block.Operations[i], frame), block.Operations[i], frame);
                 if (completion.IsMaybe)
                     return SkipRest(block.Operations, i + 1, completion, frame);
                 if (completion != Completion.Normal)

@@ -121,6 +121,10 @@ internal sealed partial class Interpreter
     // Resources of 'using var' declarations, per block that has them (innermost last): disposed when the block ends.
     private readonly Stack<List<object?>> usingScopes = new();
 
+    // Set when a method's body may have thrown in code that was skipped (inside a try somewhere): the statement of the
+    // caller that called it may then have ended there too (see AfterStatement).
+    private bool mayHaveThrown;
+
     // How each piece of skipped code can jump out of itself (see EscapeOf).
     private readonly Dictionary<IOperation, (Completion Escape, Completion UnlessThrown)> escapes = new();
 
