@@ -105,7 +105,7 @@ internal sealed partial class Interpreter
         if (!method.IsStatic && Mutators.Contains(method.Name) && receiver is not string)
             NoteStoreThrough(invocation.Instance, frame);
         var (values, byReference) = Arguments(invocation.Arguments, method, frame);
-        var result = values is null ? Unknown.Value : CallClr(invocation, method, receiver, values, byReference);
+        var result = values is null ? Unknown.Value : WithTypeArgument(invocation, method, values, CallClr(invocation, method, receiver, values, byReference, frame), frame);
         // A library call that could not be made (or failed half-way) may have changed the collections it was given or
         // called on: they become unknown, never read as they were before the call.
         if (Unknown.Is(result) && !ClrTypes.IsDsl(method))
@@ -128,7 +128,8 @@ internal sealed partial class Interpreter
     /// Calls the real DSL (or library) member behind <paramref name="method"/>, telling the circuit where the call is.
     /// <paramref name="arguments"/> is converted in place to the member's parameter types.
     /// </summary>
-    private object? CallClr(IOperation site, IMethodSymbol method, object? receiver, object?[] arguments, Variable?[]? references = null)
+    /// <param name="frame">Where the call is written: what the type parameters in the member's types stand for (null: not generic code).</param>
+    private object? CallClr(IOperation site, IMethodSymbol method, object? receiver, object?[] arguments, Variable?[]? references = null, Frame? frame = null)
     {
         var isDsl = ClrTypes.IsDsl(method);
         var member = isDsl ? session.MemberOf(method) : session.LibraryMemberOf(method);
@@ -153,7 +154,7 @@ internal sealed partial class Interpreter
         {
             // A lazy sequence made in generic code (its element type a type parameter there) meets its static type here.
             if (!isDsl && i < method.Parameters.Length)
-                arguments[i] = WithErasedDefaults(arguments[i], method.Parameters[i].Type);
+                arguments[i] = OwnCopy(WithErasedDefaults(arguments[i], method.Parameters[i].Type), Resolved(method.Parameters[i].Type, frame));
             clrArguments[i] = ToClr(arguments[i], parameterTypes[i]);
             if (clrArguments[i] is Unconvertible)
                 return Unsupported(site, "the call to " + Describe(method), "argument " + (i + 1) + " cannot be passed to the library as " + parameterTypes[i].Name);
@@ -181,7 +182,7 @@ internal sealed partial class Interpreter
             if (references is not null)
                 for (var i = 0; i < references.Length && i < clrArguments.Length; i++)
                     if (references[i] is { } reference)
-                        reference.Value = WithErasedDefaults(FromClr(clrArguments[i]), method.Parameters[i].Type);
+                        reference.Value = WithErasedDefaults(FromClr(clrArguments[i]), Resolved(method.Parameters[i].Type, frame));
             if (circuit is not null && (circuit.DeviceCount > limits.DeviceBudget || circuit.NetCount > limits.DeviceBudget))
             {
                 Report(RuleCatalog.ElaborationBudgetExceeded.Id, loops.Count > 0 ? loops.Peek().Syntax : site.Syntax, DesignName,
@@ -193,7 +194,12 @@ internal sealed partial class Interpreter
                 return FromClr(result);
             Charge(site, result);
             RestoreErasedDefaults(site, clrArguments);
-            return WithErasedDefaults(FromClr(result), method.MethodKind == MethodKind.Constructor ? null : method.ReturnType);
+            var resultType = method.MethodKind == MethodKind.Constructor ? method.ContainingType : Resolved(method.ReturnType, frame);
+            if (IsExtremeOfNothing(method, result, resultType))
+                return Raise(site.Syntax, new InvalidOperationException("Sequence contains no elements"));
+            var value = WithErasedDefaults(FromClr(result), method.MethodKind == MethodKind.Constructor ? null : resultType);
+            OwnLibraryCopies(site, method, receiver, clrArguments, value, resultType, frame);
+            return value;
         }
         catch (TargetInvocationException e) when (e.InnerException is ElaborationStopped or UnknownValueException or DesignException
             || e.InnerException?.InnerException is UnknownValueException)

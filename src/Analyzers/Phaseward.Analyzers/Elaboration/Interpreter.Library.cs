@@ -75,7 +75,7 @@ internal sealed partial class Interpreter
     /// <remarks>Passed as they are, so the library takes the paths it takes for them at run time (a HashSet given to
     /// SymmetricExceptWith is used as a set, in its order).</remarks>
     private static bool IsMaterialized(object value)
-        => value is Array or string || value is ICollection or ISet<object?> && value.GetType().Namespace == "System.Collections.Generic";
+        => value is Array or string or CheckedCastView || value is ICollection or ISet<object?> && value.GetType().Namespace == "System.Collections.Generic";
 
     // The interpreter's ^i as the runtime's System.Index (the analyzer's netstandard2.0 has none: made by reflection).
     private static object IndexToClr(IndexValue index, Type indexType) => Activator.CreateInstance(indexType, index.Value, index.FromEnd)!;
@@ -244,7 +244,7 @@ internal sealed partial class Interpreter
         Step(creation);
         var (arguments, _) = Arguments(creation.Arguments, constructor, frame);
         if (arguments is null) return Unknown.Value;
-        var made = CallClr(creation, constructor, null, arguments);
+        var made = CallClr(creation, constructor, null, arguments, frame: frame);
         return made is null || Unknown.Is(made) ? made : Initialize(creation, made, frame);
     }
 
