@@ -19,6 +19,4 @@ internal readonly struct StoragePlace
     public object? Get() => get();
 
     public void Set(object? value) => set(value);
-
-    public static StoragePlace Of(Variable variable) => new(() => variable.Value, v => variable.Value = v);
 }
