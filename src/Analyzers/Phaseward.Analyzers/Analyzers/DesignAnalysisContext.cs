@@ -33,6 +33,12 @@ internal sealed class DesignAnalysisContext
 
     public CancellationToken CancellationToken => context.CancellationToken;
 
+    /// <summary>The document being analysed: only diagnostics in it are reported.</summary>
+    public SyntaxTree Tree => context.SemanticModel.SyntaxTree;
+
+    /// <summary>The compilation's options (with the per-document severity settings).</summary>
+    public CompilationOptions CompilationOptions => context.SemanticModel.Compilation.Options;
+
     /// <summary>Reports a diagnostic if it lies in the document being analysed (per-document analysis drops the others).</summary>
     public void Report(Diagnostic? diagnostic)
     {

@@ -55,7 +55,7 @@ public abstract class FindingAnalyzer : PhasewardAnalyzer
     {
         if (context.Elaboration.Netlist is not { } netlist)
             return;
-        var report = Checker.Check(netlist, Rules, context.Options.Policy, context.CancellationToken);
+        var report = Checker.Check(netlist, RulesReportableIn(context), context.Options.Policy, context.CancellationToken);
         var mapped = new List<(Finding, Diagnostic)>(report.Findings.Count);
         foreach (var finding in report.Findings)
         {
@@ -65,5 +65,22 @@ public abstract class FindingAnalyzer : PhasewardAnalyzer
 
         foreach (var diagnostic in InstanceGrouping.Group(mapped, netlist.DesignName, context.Mapper.Exact))
             context.Report(diagnostic);
+    }
+
+    /// <summary>The rules with at least one diagnostic the build has not switched off for the document.</summary>
+    private IReadOnlyList<Rule> RulesReportableIn(DesignAnalysisContext context)
+    {
+        List<Rule>? reportable = null;
+        for (var i = 0; i < Rules.Count; i++)
+        {
+            var rule = Rules[i];
+            var allOff = rule.Descriptors.All(d => SwitchedOffDiagnostics.IsOff(d.Id, context.Tree, context.CompilationOptions, context.CancellationToken));
+            if (allOff)
+                reportable ??= Rules.Take(i).ToList();
+            else
+                reportable?.Add(rule);
+        }
+
+        return reportable ?? Rules;
     }
 }
