@@ -54,7 +54,7 @@ public static class Program
         var references = ImmutableArray.CreateRange<MetadataReference>(Basic.Reference.Assemblies.Net80.References.All)
             .Add(MetadataReference.CreateFromFile(typeof(Design).Assembly.Location));
         if (settings.Profile is { } profileSize)
-            return Profile(settings.ProfileShape, profileSize, settings.Runs, references);
+            return Profile(settings.ProfileShape, profileSize, settings.Runs, settings.RulesOff, references);
 
         var sdk = settings.SkipSdk ? ImmutableArray<DiagnosticAnalyzer>.Empty : SdkAnalyzers.Load(settings.SdkAnalyzers ?? SdkAnalyzers.DefaultDirectory());
         var phaseward = PhasewardAnalyzers();
@@ -73,7 +73,7 @@ public static class Program
         cases.RemoveAll(c => c.Shape == DesignShape.StraightLine && c.Size > settings.StraightLineMax);
 
         // Warm-up: every measurement once on the smallest design, so JIT and first-use costs stay out of the table.
-        var warm = settings.Shapes.Select(shape => new Bench(new Case(shape, 1_000), references, phaseward, sdk)).ToList();
+        var warm = settings.Shapes.Select(shape => new Bench(new Case(shape, 1_000), references, phaseward, sdk, settings.RulesOff)).ToList();
         for (var i = 0; i < 3; i++)
         {
             foreach (var bench in warm)
@@ -83,7 +83,7 @@ public static class Program
         var results = new List<Bench>();
         foreach (var c in cases)
         {
-            var bench = new Bench(c, references, phaseward, sdk);
+            var bench = new Bench(c, references, phaseward, sdk, settings.RulesOff);
             var runs = c.Size >= settings.LargeSize ? settings.LargeRuns : settings.Runs;
             Console.Error.WriteLine($"[{DateTime.Now:HH:mm:ss}] {c.Shape} {c.Size:N0}: {runs} run(s)");
             bench.RunOnce(record: false, skipReferences: c.Size >= settings.LargeSize);   // per-case warm-up (Phaseward only when large)
@@ -105,7 +105,7 @@ public static class Program
     /// A Stopwatch breakdown by phase of one design: binding every method body (as the analyzer driver does anyway),
     /// then what Phaseward adds: interpretation with the netlist, each rule, mapping.
     /// </summary>
-    private static int Profile(DesignShape shape, int size, int runs, ImmutableArray<MetadataReference> references)
+    private static int Profile(DesignShape shape, int size, int runs, RulesOff rulesOff, ImmutableArray<MetadataReference> references)
     {
         var source = DesignGenerator.Generate(shape, size);
         var elaborations = new Samples();
@@ -146,7 +146,7 @@ public static class Program
             var total = 0.0;
             var findings = new List<Finding>();
             var ruleSpans = new List<(string Rule, DateTime Start, DateTime End)>();
-            foreach (var rule in Checker.Rules)
+            foreach (var rule in rulesOff.Running)
             {
                 var ruleAllocated = GC.GetAllocatedBytesForCurrentThread();
                 var ruleStart = DateTime.UtcNow;
@@ -216,6 +216,7 @@ public static class Program
                         $"{System.Environment.ProcessorCount} logical processors, GC {(System.Runtime.GCSettings.IsServerGC ? "server" : "workstation")}");
         text.AppendLine($"- Roslyn {typeof(CSharpCompilation).Assembly.GetName().Version} (host), Phaseward analyzers: {phasewardAnalyzers}, SDK code analyzers: {sdkAnalyzers}");
         text.AppendLine($"- times are {(Samples.CpuTime ? "process CPU time (user+system)" : "wall-clock time")}");
+        text.AppendLine($"- rules switched off (NoWarn): {settings.RulesOff}");
         text.AppendLine($"- runs per case: {settings.Runs} (from {settings.LargeSize:N0} devices: {settings.LargeRuns}), medians; analysis not concurrent (one thread)");
         text.AppendLine();
         return text.ToString();
@@ -270,11 +271,14 @@ public static class Program
         private readonly ImmutableArray<DiagnosticAnalyzer> phaseward;
         private readonly ImmutableArray<DiagnosticAnalyzer> sdk;
         private readonly ImmutableDictionary<string, ReportDiagnostic> sdkOptions;
+        private readonly RulesOff rulesOff;
         private SyntaxTree? tree;
 
-        public Bench(Case c, ImmutableArray<MetadataReference> references, ImmutableArray<DiagnosticAnalyzer> phaseward, ImmutableArray<DiagnosticAnalyzer> sdk)
+        public Bench(Case c, ImmutableArray<MetadataReference> references, ImmutableArray<DiagnosticAnalyzer> phaseward, ImmutableArray<DiagnosticAnalyzer> sdk,
+            RulesOff rulesOff)
         {
             Case = c;
+            this.rulesOff = rulesOff;
             this.references = references;
             this.phaseward = phaseward;
             this.sdk = sdk;
@@ -357,7 +361,7 @@ public static class Program
                 throw new InvalidOperationException($"Generated design elaborated to {netlist.Devices.Count} devices (expected {Devices}) with {result.Issues.Count} issue(s): " +
                                                     string.Join("; ", result.Issues.Take(3).Select(i => i.RuleId + " " + string.Join(", ", i.Arguments))));
             CheckReport? check = null;
-            var rulesMs = Samples.Time(() => check = Checker.Check(netlist, Checker.Rules, RulePolicy.Default, CancellationToken.None));
+            var rulesMs = Samples.Time(() => check = Checker.Check(netlist, rulesOff.Running, RulePolicy.Default, CancellationToken.None));
             var mapper = new DiagnosticMapper(session, design);
             var mappingMs = Samples.Time(() =>
             {
@@ -374,7 +378,7 @@ public static class Program
             double callbacksMs;
             using (var memory = PeakMemory.Start())
             {
-                var run = Analyze(phaseward, logTime: true);
+                var run = Analyze(phaseward, logTime: true, rulesOff.CompilationOptions);
                 memory.Dispose();
                 phasewardBytes = memory.PeakBytes;
                 phasewardMs = run.Ms;
@@ -391,7 +395,7 @@ public static class Program
                 // Alternating which of the pair goes first cancels a drift of the machine's speed within a run.
                 var walkFirst = runs++ % 2 == 0;
                 if (walkFirst) walkMs = Analyze(ImmutableArray.Create<DiagnosticAnalyzer>(new WalkAnalyzer()), logTime: false).Ms;
-                bothMs = Analyze(phaseward.Add(new WalkAnalyzer()), logTime: false).Ms;
+                bothMs = Analyze(phaseward.Add(new WalkAnalyzer()), logTime: false, rulesOff.CompilationOptions).Ms;
                 if (!walkFirst) walkMs = Analyze(ImmutableArray.Create<DiagnosticAnalyzer>(new WalkAnalyzer()), logTime: false).Ms;
                 if (!sdk.IsEmpty)
                     sdkMs = Analyze(sdk, logTime: false, sdkOptions).Ms;
@@ -443,7 +447,7 @@ public static class Program
     private sealed class Settings
     {
         public const string Usage = "usage: Phaseward.Benchmarks [--sizes 1000,10000,100000,1000000] [--straight-line-max 100000] [--runs 5] " +
-                                    "[--large-size 100000] [--large-runs 3] [--sdk-analyzers DIR | --no-sdk] [--shapes straight-line,loop,blocks] [--out FILE] [--compiler: the SDK's compiler as a child process instead] | --profile DEVICES [--profile-shape loop|straight-line|blocks] | --scaling PARTS [--runs 3]  [--wall: wall-clock instead of CPU time]";
+                                    "[--large-size 100000] [--large-runs 3] [--sdk-analyzers DIR | --no-sdk] [--shapes straight-line,loop,blocks] [--out FILE] [--rules-off PW1004,PW3005] [--compiler: the SDK's compiler as a child process instead] | --profile DEVICES [--profile-shape loop|straight-line|blocks] | --scaling PARTS [--runs 3]  [--wall: wall-clock instead of CPU time]";
 
         public int[] Sizes { get; private set; } = { 1_000, 10_000, 100_000, 1_000_000 };
 
@@ -466,6 +470,9 @@ public static class Program
         public bool SkipSdk { get; private set; }
 
         public string? Output { get; private set; }
+
+        /// <summary>Rules switched off as a build does (<see cref="RulesOff"/>).</summary>
+        public RulesOff RulesOff { get; private set; } = RulesOff.None;
 
         public int? Profile { get; private set; }
 
@@ -500,6 +507,7 @@ public static class Program
                     case "--sdk-analyzers": s.SdkAnalyzers = Value(); break;
                     case "--no-sdk": s.SkipSdk = true; break;
                     case "--out": s.Output = Value(); break;
+                    case "--rules-off": s.RulesOff = RulesOff.Parse(option, Value()); break;
                     case "--profile": s.Profile = Positive(option, Value()); break;
                     case "--profile-shape":
                         s.ProfileShape = ShapeNamed(option, Value());
