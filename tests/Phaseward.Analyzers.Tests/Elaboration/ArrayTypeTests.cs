@@ -1,3 +1,6 @@
+using System.Threading.Tasks;
+using Phaseward.Analyzers.Tests.Verifiers;
+
 namespace Phaseward.Analyzers.Tests.Elaboration;
 
 /// <summary>
@@ -23,8 +26,29 @@ public class ArrayTypeTests
     [InlineData("Arrays.CollectionExpressionArray")]
     [InlineData("Arrays.DesignClassArrays")]
     [InlineData("Arrays.InterfacesOfAnArray")]
-    [InlineData("Arrays.CopyToCovariant")]
+    [InlineData("Arrays.SetValueChecksTheElementType")]
+    [InlineData("Arrays.CopyOfFittingElements")]
+    [InlineData("Arrays.ShortArrayThroughItsInterface")]
+    [InlineData("Arrays.CloneKeepsTheElementType")]
+    [InlineData("Arrays.EmptyArraysOfTwoTypes")]
+    [InlineData("Arrays.GenericCodeMakesArraysOfItsTypeArgument")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
+
+    [Fact]
+    public async Task A_copy_that_would_throw_partway_is_PW9001()
+    {
+        // .NET copies element by element and throws InvalidCastException at the int: how much was copied is not modelled.
+        var source = InverterChainDesign.Source("Quarry", "", "", """
+            var from = new object[] { "a", 1 };
+            var to = new string[2];
+            {|#0:System.Array.Copy(from, to, 2)|};
+            count = to[0].Length + 2;
+            """);
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source,
+            InverterChainDesign.NotElaborated(0, "the call to 'Array.Copy(Array, Array, int)'",
+                "an element of the source is not 'string': .NET throws partway through the copy, and where it stops is not modelled")).RunAsync();
+        InverterChainDesign.AssertNoStage(source, "Quarry");
+    }
 
     private static readonly InMemoryDesigns Designs = new(("/arrays/Arrays.cs", """
             using System;
@@ -161,15 +185,66 @@ public class ArrayTypeTests
                         Chain(c, n, "ie");
                     }
                 }
-                public sealed class CopyToCovariant : Base
+                public sealed class SetValueChecksTheElementType : Base
                 {
                     protected override void Describe(Circuit c)
                     {
-                        var source = new object[] { "a", 1 };
-                        var target = new string[2];
+                        Array slots = new string[2];
                         var n = 1;
-                        try { Array.Copy(source, target, 2); } catch (InvalidCastException) { n = 6; }
-                        Chain(c, n, "ct");
+                        slots.SetValue("fits", 0);
+                        try { slots.SetValue(3, 1); n = 2; } catch (InvalidCastException) { n = 4; }
+                        Chain(c, n + ((string)slots.GetValue(0)!).Length, "sv");
+                    }
+                }
+                public sealed class CopyOfFittingElements : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var source = new object[] { "ab", "cde" };
+                        var target = new string[3];
+                        Array.Copy(source, target, 2);
+                        source.CopyTo(target, 1);
+                        Chain(c, target[0].Length + target[2].Length, "cf");
+                    }
+                }
+                public sealed class CloneKeepsTheElementType : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var names = new[] { "m", "n" };
+                        var copy = names.Clone();
+                        var n = copy is string[] strings ? strings.Length : 0;
+                        try { ((object[])copy)[0] = 1; } catch (ArrayTypeMismatchException) { n += 3; }
+                        Chain(c, n, "cl");
+                    }
+                }
+                public sealed class EmptyArraysOfTwoTypes : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        object words = Array.Empty<string>();
+                        object lanes = Array.Empty<Lane>();
+                        var n = 1 + (words is string[] ? 2 : 0) + (lanes is string[] ? 10 : 0) + (lanes is Lane[] ? 4 : 0);
+                        Chain(c, n, "ea");
+                    }
+                }
+                public sealed class GenericCodeMakesArraysOfItsTypeArgument : Base
+                {
+                    private static T[] Pair<T>(T first, T second) => new[] { first, second };
+                    private static int Probe<T>(T[] items, object intruder) { object[] seen = (object[])(object)items; try { seen[0] = intruder; return 1; } catch (ArrayTypeMismatchException) { return 5; } }
+                    protected override void Describe(Circuit c)
+                    {
+                        var n = Probe(Pair("a", "b"), 2) + Probe(Pair<object>("a", "b"), 2);
+                        Chain(c, n, "gc");
+                    }
+                }
+                public sealed class ShortArrayThroughItsInterface : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        System.Collections.Generic.IList<short> widths = new short[] { 1, 2 };
+                        widths[0] = 4;
+                        Chain(c, widths[0] + widths[1], "sa");
                     }
                 }
             }

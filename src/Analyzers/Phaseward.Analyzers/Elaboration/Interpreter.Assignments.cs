@@ -152,7 +152,13 @@ internal sealed partial class Interpreter
                 if (!IsWholeNumber(index)) break; // broken code
                 NoteStoreThrough(element.ArrayReference, frame);
                 var i = SlotIndex(element, index!, items);
-                return i < 0 ? default : new StoragePlace(() => items[i], v => items[i] = v);
+                if (i < 0) return default;
+                if (!MayBeCovariant(items, element.ArrayReference.Type is IArrayTypeSymbol seenAs ? seenAs.ElementType : null, frame))
+                    return new StoragePlace(() => items[i], v => items[i] = v);
+                return new StoragePlace(() => items[i], v =>
+                {
+                    if (StoreFits(items, v, element, frame)) items[i] = v;
+                });
 
             case IPropertyReferenceOperation property:
                 return PropertyPlace(property, frame);
@@ -226,6 +232,8 @@ internal sealed partial class Interpreter
                 v =>
                 {
                     if (Unknown.Is(v)) return;
+                    // An array seen through IList<T> or IList checks the element type as its indexer does.
+                    if (receiver is object?[] array && !StoreFits(array, v, reference, frame)) return;
                     var values = (object?[])indexArguments.Clone();
                     values[values.Length - 1] = v;
                     CallClr(reference, librarySetter, receiver, values);

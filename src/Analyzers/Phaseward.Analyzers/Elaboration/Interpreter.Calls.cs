@@ -143,6 +143,8 @@ internal sealed partial class Interpreter
             receiver = ToClr(receiver, primitive);
         if (!isDsl && !ChargeSizes(site, member, arguments))
             return Unknown.Value;
+        if (!isDsl && RefusedArrayStore(site, method, receiver, arguments) is { } refused)
+            return refused;
 
         // Converted in place: every caller hands over an array it made for this call (one array per call, not two).
         var given = !isDsl && MayReadCulture(method) ? (object?[])arguments.Clone() : null;
@@ -182,7 +184,7 @@ internal sealed partial class Interpreter
             if (references is not null)
                 for (var i = 0; i < references.Length && i < clrArguments.Length; i++)
                     if (references[i] is { } reference)
-                        reference.Value = WithErasedDefaults(FromClr(clrArguments[i]), Resolved(method.Parameters[i].Type, frame));
+                        reference.Value = TypedIfArray(WithErasedDefaults(FromClr(clrArguments[i]), Resolved(method.Parameters[i].Type, frame)), method.Parameters[i].Type, frame);
             if (circuit is not null && (circuit.DeviceCount > limits.DeviceBudget || circuit.NetCount > limits.DeviceBudget))
             {
                 Report(RuleCatalog.ElaborationBudgetExceeded.Id, loops.Count > 0 ? loops.Peek().Syntax : site.Syntax, DesignName,
@@ -191,7 +193,7 @@ internal sealed partial class Interpreter
             }
 
             if (isDsl)
-                return FromClr(result);
+                return TypedIfArray(FromClr(result), method.ReturnType, frame);
             Charge(site, result);
             RestoreErasedDefaults(site, clrArguments);
             var resultType = method.MethodKind == MethodKind.Constructor ? method.ContainingType : Resolved(method.ReturnType, frame);
@@ -199,7 +201,9 @@ internal sealed partial class Interpreter
                 return Raise(site.Syntax, new InvalidOperationException("Sequence contains no elements"));
             var value = WithErasedDefaults(FromClr(result), method.MethodKind == MethodKind.Constructor ? null : resultType);
             OwnLibraryCopies(site, method, receiver, clrArguments, value, resultType, frame);
-            return value;
+            return method.Name == "Clone" && receiver is object?[] original && value is object?[] clone
+                ? CloneOf(original, clone)
+                : TypedIfArray(value, resultType, frame);
         }
         catch (TargetInvocationException e) when (e.InnerException is ElaborationStopped or UnknownValueException or DesignException
             || e.InnerException?.InnerException is UnknownValueException)

@@ -124,7 +124,7 @@ internal sealed partial class Interpreter
         if (creation.Initializer is { } initializer)
             for (var i = 0; i < initializer.ElementValues.Length && i < length; i++)
                 items[i] = Evaluate(initializer.ElementValues[i], frame);
-        return items;
+        return Typed(items, element, frame);
     }
 
     private object? VisitCollectionExpression(ICollectionExpressionOperation collection, Frame frame)
@@ -149,7 +149,7 @@ internal sealed partial class Interpreter
         ChargeMemory(collection, 8L * items.Count);
         return collection.Type switch
         {
-            IArrayTypeSymbol => items.ToArray(),
+            IArrayTypeSymbol arrayType => Typed(items.ToArray(), arrayType.ElementType, frame),
             INamedTypeSymbol named when IsList(named) || IsListInterface(named) => items,
             _ => Unsupported(collection, "this collection expression", "only arrays and List<T> are built from collection expressions"),
         };

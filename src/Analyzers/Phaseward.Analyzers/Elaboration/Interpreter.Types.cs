@@ -29,6 +29,7 @@ internal sealed partial class Interpreter
         }
 
         if (type.SpecialType == SpecialType.System_Object) return true;
+        if (value is object?[] array) return ArrayIsOfType(array, type);
         if (NullableUnderlying(type) is { } underlying) type = underlying;
         if (value is InterpretedObject instance)
         {
