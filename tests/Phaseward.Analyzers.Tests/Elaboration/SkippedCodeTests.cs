@@ -25,6 +25,8 @@ public class SkippedCodeTests
     private const string Declarations = """
         public sealed class Box { public static int Made = 2; public void Set() => Made = 6; }
         public sealed class Cell { public int V = 1; }
+        public static class Holder<T> { public static int Value = 2; public static void Set() => Value = 6; }
+        public sealed class Tally<T> { public static int Made; static Tally() { Made = 2; } public void Set() => Made = 7; }
         """;
 
     private const string Members = """
@@ -51,6 +53,10 @@ public class SkippedCodeTests
     [InlineData("try { if (" + Unknown + ") Bump(); } finally { } count = extra;", 7)]
     // a static of another type, on its first use
     [InlineData("var box = new Box(); if (" + Unknown + ") box.Set(); count = Box.Made;", 6)]
+    // a static of a generic type's construction, first made in (or after) the skipped code
+    [InlineData("if (" + Unknown + ") Holder<int>.Value = 6; count = Holder<int>.Value;", 6)]
+    [InlineData("if (" + Unknown + ") Holder<string>.Set(); count = Holder<string>.Value;", 6)]
+    [InlineData("if (" + Unknown + ") new Tally<long>().Set(); count = Tally<long>.Made;", 7)]
     // a call on an object that is not known
     [InlineData("var box = new Box(); if (" + Unknown + ") box = new Box(); box.Set(); count = Box.Made;", 6)]
     [InlineData("var box = " + Unknown + " ? new Box() : null; box?.Set(); count = Box.Made;", 6)]
@@ -107,6 +113,7 @@ public class SkippedCodeTests
     [InlineData("if (" + Unknown + ") Bump(); count = other + 1;")]
     [InlineData("if (" + Unknown + ") Bump(); count = 4;")]
     [InlineData("var list = new System.Collections.Generic.List<int> { 1, 2 }; if (" + Unknown + ") extra = 2; count = list.Count + 2;")]
+    [InlineData("if (" + Unknown + ") extra = 2; count = Holder<int>.Value + 2;")]
     [InlineData("if (" + Unknown + ") Mark(); var fresh = new System.Collections.Generic.List<int> { 1 }; count = fresh.Count + 4;")]
     [InlineData("for (var i = 0; i < 2; i++) { if (" + Unknown + ") { var local = 1; local++; } count++; }")]
     [InlineData("if (" + Unknown + ") { foreach (var n in new[] { 1 }) { if (n > 0) break; } } count = 5;")]

@@ -204,6 +204,7 @@ internal sealed partial class Interpreter
             : type.GetMembers(member.Name).FirstOrDefault(m => SymbolEqualityComparer.Default.Equals(m.OriginalDefinition, member.OriginalDefinition)) ?? member.OriginalDefinition;
         if (statics.TryGetValue(key, out var variable))
             return variable;
+        var firstUse = type is not null && !initializedTypes.Contains(type);
         if (type is not null)
         {
             InitializeStatics(type);
@@ -217,7 +218,22 @@ internal sealed partial class Interpreter
 
         if (!statics.TryGetValue(key, out variable))
             statics[key] = variable = new Variable(DefaultOf(key is IFieldSymbol f ? f.Type : ((IPropertySymbol)key).Type));
+        if (firstUse && type!.IsGenericType && skippedWrites.Any)
+            MarkSkippedStatics(type);
         return variable;
+    }
+
+    /// <summary>
+    /// A generic type's construction first used after skipped code that may have written its statics: which construction
+    /// the skipped code used is not known (so it was not initialized then), and it may be this one. Its statics that
+    /// the skipped code may have written are stale, never read as the initializer left them.
+    /// </summary>
+    private void MarkSkippedStatics(INamedTypeSymbol construction)
+    {
+        foreach (var member in construction.GetMembers())
+            if (member.IsStatic && member is IFieldSymbol or IPropertySymbol && skippedWrites.MayHaveWritten(member)
+                && statics.TryGetValue(member, out var stale))
+                stale.MarkStale();
     }
 
     /// <summary>The type whose static storage a member lives in: its generic definition's type arguments resolved, else the definition.</summary>

@@ -39,6 +39,9 @@ internal sealed class SkippedWrites
         Any = true;
     }
 
+    /// <summary>Whether some skipped code may have written <paramref name="symbol"/> (in any object or construction).</summary>
+    public bool MayHaveWritten(ISymbol symbol) => symbols.ContainsKey(symbol.OriginalDefinition);
+
     /// <summary>Whether a skipped write may have changed what <paramref name="variable"/> (the storage of
     /// <paramref name="symbol"/>) holds since it was last written.</summary>
     public bool MayHaveChanged(Variable variable, ISymbol? symbol)

@@ -30,6 +30,9 @@ internal sealed class Variable
     /// later than this may have changed it.</summary>
     public long Written { get; private set; }
 
+    /// <summary>Marks the value as older than every skipped write: it reads as unknown if one may have reached it.</summary>
+    public void MarkStale() => Written = 0;
+
     /// <summary>Another cell holding the same value, written when this one was (a struct's field copied with it).</summary>
     public Variable Copy() => new(value, Written);
 }
