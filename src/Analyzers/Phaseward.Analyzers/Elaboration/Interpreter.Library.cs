@@ -60,6 +60,8 @@ internal sealed partial class Interpreter
 
         if (ErasedComparers.Adapt(value, type) is { } comparer)
             return comparer;
+        if (value is InterpretedObject designSequence && SequenceElementType(type) is not null && GetEnumeratorOf(designSequence.Type) is { } getEnumerator)
+            return EnumeratedForLibrary(designSequence, getEnumerator) is { } items ? ToClr(items, type) : Unconvertible.Value;
         if (value is InterpretedObject or TupleValue)
             return type == typeof(object) ? value : Unconvertible.Value;
         if (underlying.IsEnum && value is not Enum)

@@ -262,6 +262,52 @@ internal sealed partial class Interpreter
         return null;
     }
 
+    /// <summary>
+    /// A sequence of the design's own type handed to the library (LINQ, string.Join, a list's constructor): its
+    /// GetEnumerator run once, as the library would, and its values in order. The design's iterators run to the end when
+    /// called (as everywhere in the elaborator), so the values are all made here, before the library reads the first one.
+    /// Null when they are not known (reported where they are made) or the enumerator is the design's own.
+    /// </summary>
+    private List<object?>? EnumeratedForLibrary(InterpretedObject sequence, IMethodSymbol getEnumerator)
+    {
+        var site = clrSite ?? Current;
+        if (site is null)
+            return null;
+        var outerStream = streamTo;
+        streamTo = null;
+        object? enumerated;
+        try
+        {
+            enumerated = InvokeUser(getEnumerator, sequence, Array.Empty<object?>(), Array.Empty<Variable?>(), site, new Frame(null, null, sequence));
+        }
+        finally
+        {
+            streamTo = outerStream;
+        }
+
+        switch (enumerated)
+        {
+            case List<object?> yielded:
+                return yielded;
+            case IEnumerator enumerator:
+                try
+                {
+                    return Drained(enumerator);
+                }
+                catch (UnknownValueException e)
+                {
+                    UnknownFrom(e, site);
+                    return null;
+                }
+
+            case InterpretedObject:
+                Unsupported(site, "this sequence of " + Describe(sequence.Type), "an enumerator written in the design (its own MoveNext and Current) is not run");
+                return null;
+            default:
+                return null;
+        }
+    }
+
     // The values a library enumerator the design's GetEnumerator returned hands out, in order.
     private static List<object?> Drained(IEnumerator enumerator)
     {
