@@ -50,6 +50,9 @@ internal sealed partial class Interpreter
                 BinaryOperatorKind.Equals => left is null && right is null,
                 BinaryOperatorKind.NotEquals => !(left is null && right is null),
                 BinaryOperatorKind.LessThan or BinaryOperatorKind.LessThanOrEqual or BinaryOperatorKind.GreaterThan or BinaryOperatorKind.GreaterThanOrEqual => false,
+                // bool? & and | are three-valued (C# specification, §12.13.5): false & null is false, true | null is true.
+                BinaryOperatorKind.And when left is false || right is false => false,
+                BinaryOperatorKind.Or when left is true || right is true => true,
                 _ => null,
             };
         if (binary.IsLifted && binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals)
