@@ -12,7 +12,24 @@ public class OperatorSemanticsTests
     [InlineData("Operators.LiftedAndWithFalse")]
     [InlineData("Operators.LiftedOrWithTrue")]
     [InlineData("Operators.LiftedWithNullStaysNull")]
+    [InlineData("Operators.MethodGroupsOfOneMethodAreEqual")]
+    [InlineData("Operators.CombinedDelegatesCompareTheirLists")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
+
+    [Fact]
+    public async System.Threading.Tasks.Task Two_delegates_from_one_lambda_are_PW9001()
+    {
+        // Equal in .NET when the lambda captures nothing it caches, or both come from one scope's closure object: not modelled.
+        var source = InverterChainDesign.Source("Quarry", "", "", """
+            System.Func<int> Make() => () => 2;
+            var same = {|#0:Make() == Make()|};
+            count = same ? 4 : 1;
+            """);
+        await new Verifiers.PhasewardAnalyzerTest<ElaborationAnalyzer>(source,
+            InverterChainDesign.NotElaborated(0, "the equality of two delegates made from one lambda",
+                "C# compares the objects their captured variables live in, which the elaborator does not model")).RunAsync();
+        InverterChainDesign.AssertNoStage(source, "Quarry");
+    }
 
     private static readonly InMemoryDesigns Designs = new(("/operators/Operators.cs", """
             using System;
@@ -50,6 +67,37 @@ public class OperatorSemanticsTests
                         n += (unknownLane | false) is null ? 2 : 0;
                         n += (unknownLane ^ true) is null ? 4 : 0;
                         Chain(c, n, "ln");
+                    }
+                }
+                public sealed class MethodGroupsOfOneMethodAreEqual : Base
+                {
+                    private int taps;
+                    private void Tap() => taps++;
+                    private static void Idle() { }
+                    protected override void Describe(Circuit c)
+                    {
+                        Action first = Tap, second = Tap, other = Idle, again = Idle;
+                        var n = (first == second ? 3 : 1) + (first != other ? 2 : 0) + (other == again ? 4 : 0);
+                        Action? none = null;
+                        n += none == null ? 1 : 0;
+                        Chain(c, n, "mg");
+                    }
+                }
+                public sealed class CombinedDelegatesCompareTheirLists : Base
+                {
+                    private void Tap() { }
+                    private void Hold() { }
+                    protected override void Describe(Circuit c)
+                    {
+                        Action both = Tap;
+                        both += Hold;
+                        Action same = Tap;
+                        same += Hold;
+                        Action reversed = Hold;
+                        reversed += Tap;
+                        Action single = Tap;
+                        var n = (both == same ? 3 : 1) + (both == reversed ? 10 : 0) + (both == single ? 20 : 0);
+                        Chain(c, n, "cd");
                     }
                 }
             }

@@ -85,6 +85,32 @@ internal sealed class Closure
         return source;
     }
 
+    /// <summary>
+    /// <c>a == b</c> on delegates (C# specification, §12.12.9): equal invocation lists, part by part. Null when a pair of
+    /// parts cannot be told apart (see <see cref="SameDelegate"/>).
+    /// </summary>
+    public static bool? AreEqual(Closure a, Closure b)
+    {
+        var left = a.InvocationList;
+        var right = b.InvocationList;
+        if (left.Length != right.Length)
+            return false;
+        var decided = true;
+        for (var i = 0; i < left.Length; i++)
+        {
+            switch (SameDelegate(left[i], right[i]))
+            {
+                case false:
+                    return false;
+                case null:
+                    decided = false;
+                    break;
+            }
+        }
+
+        return decided ? true : null;
+    }
+
     // Delegate equality as far as it can be told: the same delegate object, or the same method group (method and
     // receiver) are equal; different methods are not. Two delegates made from one lambda may or may not share their
     // captured variables' object, which decides equality in C#: not told (null).

@@ -90,6 +90,15 @@ internal sealed partial class Interpreter
             return RecordEquality(binary, record, right, negated: binary.OperatorKind == BinaryOperatorKind.NotEquals);
         }
 
+        if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals && left is Closure leftDelegate && right is Closure rightDelegate
+            && IsDelegate(leftType) && IsDelegate(rightType))
+        {
+            if (Closure.AreEqual(leftDelegate, rightDelegate) is not { } equal)
+                return Unsupported(binary, "the equality of two delegates made from one lambda",
+                    "C# compares the objects their captured variables live in, which the elaborator does not model");
+            return binary.OperatorKind == BinaryOperatorKind.Equals ? equal : !equal;
+        }
+
         if (binary.OperatorKind is BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals
             && (left is null || right is null || (leftType?.IsReferenceType == true && leftType.SpecialType != SpecialType.System_String)))
         {
