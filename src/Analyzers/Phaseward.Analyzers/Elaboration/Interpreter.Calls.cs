@@ -102,6 +102,8 @@ internal sealed partial class Interpreter
             return Skipped(invocation, frame, Unsupported(invocation, "the call to " + Describe(method),
                 "it is outside what compile-time elaboration runs (only the Phaseward DSL, methods of this compilation and pure library members such as string, Math, LINQ and the collections)"));
 
+        if (receiver is System.Text.StringBuilder builder && AppendInterpolated(invocation, builder, frame) is { } appended)
+            return appended;
         if (!method.IsStatic && Mutators.Contains(method.Name) && receiver is not string)
             NoteStoreThrough(invocation.Instance, frame);
         var (values, byReference) = Arguments(invocation.Arguments, method, frame);

@@ -28,8 +28,9 @@ internal sealed partial class Interpreter
                 NoteDelegate(null, reference.Method);
                 var receiver = reference.Instance is null ? null : Evaluate(reference.Instance, frame);
                 if (Unknown.Is(receiver)) return receiver;
-                if (!session.IsInSource(reference.Method))
-                    return Unsupported(creation, "the method group " + Describe(reference.Method), "only methods and local functions of this compilation are passed as delegates; wrap it in a lambda");
+                if (!session.IsInSource(reference.Method) && !Library.IsValueOnlyMethod(reference.Method))
+                    return Unsupported(creation, "the method group " + Describe(reference.Method),
+                        "only methods and local functions of this compilation, and static library methods of values (char.IsDigit, Math.Abs, int.Parse), are passed as delegates; wrap it in a lambda");
                 return Closure.Of(reference.Method, receiver ?? (reference.Method.IsStatic ? null : frame.Instance), frame.Snapshot());
             default:
                 return Unsupported(creation, "this delegate", "it is not a lambda or a method group");
@@ -49,6 +50,8 @@ internal sealed partial class Interpreter
         }
 
         Step(site);
+        if (closure.Lambda is null && !session.IsInSource(closure.Method))
+            return CallClr(site, closure.Method, null, (object?[])arguments.Clone(), null, closure.Captured);
         if (closure.Lambda is null)
         {
             var method = closure.Method;

@@ -47,7 +47,8 @@ internal sealed partial class Interpreter
         if (type.IsInstanceOfType(value) && !(value is IEnumerable && !IsMaterialized(value) && type != typeof(object)))
             return value;
 
-        if (value is IEnumerable sequence && value is not string && SequenceElementType(type) is { } elementType)
+        // A string is a sequence of chars to a parameter it is not itself (LINQ's IEnumerable<T>, erased to object here).
+        if (value is IEnumerable sequence && SequenceElementType(type) is { } elementType)
         {
             // A plain sequence parameter gets a metered, converted sequence; a list or array parameter (the DSL's) a typed copy.
             if (type == typeof(IEnumerable) || type.IsGenericType && type.GetGenericTypeDefinition() == typeof(IEnumerable<>))

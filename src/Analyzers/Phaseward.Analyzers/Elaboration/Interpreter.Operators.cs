@@ -333,14 +333,18 @@ internal sealed partial class Interpreter
                     text.Append(literal.Text.ConstantValue.Value as string);
                     break;
                 case IInterpolationOperation hole:
-                    var value = Evaluate(hole.Expression, frame);
-                    if (Unknown.Is(value)) return Skipped(interpolated, frame);
-                    var alignment = hole.Alignment is null ? null : Evaluate(hole.Alignment, frame);
-                    var format = hole.FormatString is null ? null : Evaluate(hole.FormatString, frame) as string;
-                    if (Unknown.Is(alignment)) return Skipped(interpolated, frame);
-                    var composite = "{0" + (alignment is null ? "" : "," + System.Convert.ToInt32(alignment, CultureInfo.InvariantCulture).ToString(CultureInfo.InvariantCulture)) + "}";
-                    // The hole is formatted in the run's current culture: ValueText gives its text when no culture changes it.
-                    text.Append(string.Format(CultureInfo.InvariantCulture, composite, ValueText.Of(value, SourceType(hole.Expression), format)));
+                    if (!AppendHole(text, hole.Expression, hole.Alignment, hole.FormatString, frame))
+                        return Skipped(interpolated, frame);
+                    break;
+                // The parts of a $"..." handed to an interpolated string handler (StringBuilder.Append): the handler's
+                // AppendLiteral and AppendFormatted calls, which make the same text.
+                case IInterpolatedStringAppendOperation { Kind: OperationKind.InterpolatedStringAppendLiteral, AppendCall: IInvocationOperation { Arguments.Length: 1 } literalCall }:
+                    text.Append(literalCall.Arguments[0].Value.ConstantValue.Value as string);
+                    break;
+                case IInterpolatedStringAppendOperation { Kind: OperationKind.InterpolatedStringAppendFormatted, AppendCall: IInvocationOperation formattedCall }
+                    when ArgumentNamed(formattedCall, "value") is { } formatted:
+                    if (!AppendHole(text, formatted, ArgumentNamed(formattedCall, "alignment"), ArgumentNamed(formattedCall, "format"), frame))
+                        return Skipped(interpolated, frame);
                     break;
                 default:
                     return Unsupported(part, "this interpolated string", "interpolated string handlers are outside the subset");
@@ -349,6 +353,48 @@ internal sealed partial class Interpreter
 
         ChargeMemory(interpolated, 2L * text.Length);
         return text.ToString();
+    }
+
+    /// <summary>One hole of an interpolated string, aligned and formatted; false when its value or alignment is not known.</summary>
+    private bool AppendHole(StringBuilder text, IOperation expression, IOperation? alignmentOperation, IOperation? formatOperation, Frame frame)
+    {
+        var value = Evaluate(expression, frame);
+        if (Unknown.Is(value)) return false;
+        var alignment = alignmentOperation is null ? null : Evaluate(alignmentOperation, frame);
+        var format = formatOperation is null ? null : Evaluate(formatOperation, frame) as string;
+        if (Unknown.Is(alignment)) return false;
+        var composite = "{0" + (alignment is null ? "" : "," + System.Convert.ToInt32(alignment, CultureInfo.InvariantCulture).ToString(CultureInfo.InvariantCulture)) + "}";
+        // The hole is formatted in the run's current culture: ValueText gives its text when no culture changes it.
+        text.Append(string.Format(CultureInfo.InvariantCulture, composite, ValueText.Of(value, SourceType(expression), format)));
+        return true;
+    }
+
+    private static IOperation? ArgumentNamed(IInvocationOperation call, string name)
+    {
+        foreach (var argument in call.Arguments)
+            if (argument.Parameter?.Name == name)
+                return argument.Value;
+        return null;
+    }
+
+    /// <summary>
+    /// <c>builder.Append($"...")</c> and <c>AppendLine($"...")</c>: C# hands the string to the builder's interpolated
+    /// string handler, part by part; the text is the same as the interpolated string's, so it is made here and appended.
+    /// Null for any other call.
+    /// </summary>
+    private object? AppendInterpolated(IInvocationOperation invocation, StringBuilder builder, Frame frame)
+    {
+        if (invocation.TargetMethod is not { Name: "Append" or "AppendLine", Parameters.Length: 1 } method
+            || invocation.Arguments[0].Value is not IInterpolatedStringHandlerCreationOperation { Content: IInterpolatedStringOperation content })
+            return null;
+        NoteStoreThrough(invocation.Instance, frame);
+        if (Evaluate(content, frame) is not string text)
+        {
+            PoisonMutables(invocation, frame);
+            return Unknown.Value;
+        }
+
+        return method.Name == "Append" ? builder.Append(text) : builder.AppendLine(text);
     }
 
     /// <summary>

@@ -56,6 +56,14 @@ internal static class Library
         return PureTypes.Contains(name) && !ImpureMembers.Contains(name + "." + member.MetadataName);
     }
 
+    /// <summary>
+    /// A static pure library method whose parameters are all values or strings (<c>char.IsDigit</c>, <c>Math.Abs</c>,
+    /// <c>int.Parse</c>): called through a delegate it can change nothing the design holds.
+    /// </summary>
+    public static bool IsValueOnlyMethod(IMethodSymbol method)
+        => method.IsStatic && !ClrTypes.IsDsl(method) && IsPure(method)
+           && method.Parameters.All(p => p.RefKind == RefKind.None && (p.Type.IsValueType || p.Type.SpecialType == SpecialType.System_String));
+
     public static bool IsPureType(ITypeSymbol type) => type is INamedTypeSymbol named && PureTypes.Contains(ClrTypes.MetadataName(named.OriginalDefinition));
 
     private static readonly ConcurrentDictionary<string, MethodBase?> Members = new(StringComparer.Ordinal);

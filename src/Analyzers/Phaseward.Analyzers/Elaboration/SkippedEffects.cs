@@ -121,6 +121,11 @@ internal sealed class SkippedEffects
 
     private Summary SummarizeMethod(IMethodSymbol method)
     {
+        // A library method made into a delegate (list.Add as an Action): unless it can only read values, calling it may
+        // change a collection the design holds.
+        // (A member the compiler synthesizes, such as a record's Equals, is the compilation's own: summarized below.)
+        if (!SymbolEqualityComparer.Default.Equals(method.ContainingAssembly, session.Compilation.Assembly))
+            return Library.IsValueOnlyMethod(method) ? Summary.Empty : new Summary { ChangesCollections = true };
         var parts = new List<Summary>();
         var declarations = method.DeclaringSyntaxReferences.Select(r => r.GetSyntax(cancellationToken)).ToList();
         if (method.PartialImplementationPart is { } implementation)
