@@ -27,6 +27,7 @@ public class ValueSemanticsTests
     [InlineData("Values.ReferenceEquality")]
     [InlineData("Values.RecordPrinting")]
     [InlineData("Values.CultureFree")]
+    [InlineData("Values.GenericObjectText")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
 
     [Fact]
@@ -147,6 +148,14 @@ public class ValueSemanticsTests
                 public enum Hue { Amber = 1, Teal = 2, Ochre = 4 }
                 [Flags] public enum Trait { None = 0, Gated = 1, Skewed = 2, Latched = 4, Tuned = Gated | Latched }
                 public enum Level : byte { Low = 1, High = 200 }
+                public sealed class Slot<T> { }
+                public sealed class Rack { public sealed class Shelf<T> { } public sealed class Bin { } }
+                public sealed class GenericObjectText : Base
+                {
+                    // object.ToString prints the run-time type as Type.ToString does (type arguments in brackets, '+' for nesting).
+                    protected override void Describe(Circuit c)
+                        => Say(c, $"{new Slot<string>()}|{new Slot<Slot<int>>()}|{new Rack.Shelf<long>()}|{new Rack.Bin()}|{new Slot<Hue>().ToString()}");
+                }
                 public sealed class EnumText : Base
                 {
                     private static string Named(Hue hue = Hue.Ochre) => $"{hue}";

@@ -25,7 +25,8 @@ internal sealed partial class Interpreter : IObjectSemantics
             return text.Append('}').ToString();
         }
 
-        return ClrTypes.MetadataName(value.Type);
+        // object.ToString prints the run-time type as Type.ToString does: Ns.Box`1[System.Int32], Ns.Outer+Inner.
+        return new TypeValue(value.Type).ToString();
     }
 
     public bool AreEqual(InterpretedObject value, object? other)
