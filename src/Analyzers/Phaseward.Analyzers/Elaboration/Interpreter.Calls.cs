@@ -215,7 +215,7 @@ internal sealed partial class Interpreter
         }
         catch (TargetInvocationException e) when (e.InnerException is { } inner && inner is not OperationCanceledException)
         {
-            return Raise(site.Syntax, inner);
+            return RaiseFromLibrary(site, inner);
         }
         catch (Exception e) when (e is ArgumentException or TargetParameterCountException or InvalidCastException or MemberAccessException or TargetException)
         {
