@@ -217,7 +217,7 @@ internal sealed partial class Interpreter
         }
         catch (TargetInvocationException e) when (e.InnerException is { } inner && inner is not OperationCanceledException)
         {
-            return Raise(site.Syntax, inner);
+            return RaiseFromLibrary(site, inner);
         }
         catch (Exception e) when (e is ArgumentException or TargetParameterCountException or InvalidCastException or MemberAccessException or TargetException)
         {
@@ -381,14 +381,26 @@ internal sealed partial class Interpreter
         var effectsBefore = externalEffects;
         var outerObjects = iteratorObjectsAfter;
         iteratorObjectsAfter = InterpretedObject.LastSerial;
+        // What it throws is kept from the caller's catch clauses (and their filters): in C# it throws only when
+        // enumerated, and only if enumerated that far.
+        var (outerTries, outerTryDepth) = (activeTries, tryDepth);
+        activeTries = new();
+        tryDepth = outerTryDepth + 1;
         Completion completion;
         try
         {
             completion = Execute(body, frame);
         }
+        catch (DesignException e)
+        {
+            return Unsupported(site, "the iterator " + Describe(method),
+                "it throws (" + e.Describe() + ") when run to the end, and an iterator not enumerated straight by a foreach is run to completion when "
+                + "called: in C# none of it runs until it is enumerated, and whether it throws depends on how far it is enumerated");
+        }
         finally
         {
             iteratorObjectsAfter = outerObjects;
+            (activeTries, tryDepth) = (outerTries, outerTryDepth);
         }
 
         // It may have stopped (yield break) or thrown in code that was skipped: which values it yields is not known.

@@ -231,6 +231,32 @@ internal sealed partial class Interpreter
     }
 
     /// <summary>
+    /// An exception a library member threw for the design. One that wraps what the design's callback threw (List.Sort:
+    /// "Failed to compare two elements", the comparer's exception inside) gets the design's exception as its
+    /// InnerException, as in .NET, not the elaborator's carrier of it.
+    /// </summary>
+    private object? RaiseFromLibrary(IOperation site, Exception exception)
+    {
+        switch (exception.InnerException)
+        {
+            case ElaborationStopped stopped:
+                // The callback's exception was uncaught (PW9003 at its throw): the design ends there.
+                System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(stopped).Throw();
+                return null;
+            case DesignException { Thrown: Exception thrown }:
+                var wrapper = exception.GetType().GetConstructor(new[] { typeof(string), typeof(Exception) });
+                if (wrapper is null)
+                    return Unsupported(site, "the " + exception.GetType().Name + " the library throws around an exception of the design", "it cannot be made with the design's exception inside");
+                return Raise(site.Syntax, (Exception)wrapper.Invoke(new object[] { exception.Message, thrown }));
+            case DesignException:
+                return Unsupported(site, "the " + exception.GetType().Name + " the library throws around an exception of the design",
+                    "the design's exception is of its own class, which a .NET exception cannot hold as its InnerException at compile time");
+            default:
+                return Raise(site.Syntax, exception);
+        }
+    }
+
+    /// <summary>
     /// A member reached through an expression that is null: C# throws a NullReferenceException there. Inside a try the
     /// design may catch it; outside it is PW9003 naming the expression and the member. Never a read of some other
     /// object, nor a guessed value.

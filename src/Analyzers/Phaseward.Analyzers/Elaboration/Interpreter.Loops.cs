@@ -209,7 +209,6 @@ internal sealed partial class Interpreter
         IEnumerable? items = collection switch
         {
             object?[] array => array,
-            List<object?> list => list.ToArray(),
             string text => text,
             InterpretedObject => null,
             IEnumerable enumerable => enumerable,
@@ -222,12 +221,15 @@ internal sealed partial class Interpreter
         }
 
         loops.Push(loop);
+        // The collection's own enumerator, as C# takes it: a list, set or dictionary the body changes makes the next
+        // MoveNext throw (whichever changes the running .NET counts), and the design may catch that.
+        var itemEnumerator = items.GetEnumerator();
         try
         {
-            foreach (var raw in items)
+            while (NextItem(itemEnumerator, loop))
             {
                 Step(loop);
-                if (AfterIteration(RunForEachBody(loop, frame, raw, variableType), loop, frame) is { } after)
+                if (AfterIteration(RunForEachBody(loop, frame, itemEnumerator.Current, variableType), loop, frame) is { } after)
                     return after;
             }
 
@@ -243,6 +245,26 @@ internal sealed partial class Interpreter
         finally
         {
             loops.Pop();
+            (itemEnumerator as IDisposable)?.Dispose();
+        }
+    }
+
+    /// <summary>
+    /// The enumerator's MoveNext: the InvalidOperationException a library collection throws when it was changed since
+    /// the loop began is the design's (PW9003 when no catch takes it).
+    /// </summary>
+    private bool NextItem(IEnumerator enumerator, IForEachLoopOperation loop)
+    {
+        try
+        {
+            return enumerator.MoveNext();
+        }
+        catch (InvalidOperationException e)
+        {
+            if (tryDepth > 0)
+                throw new DesignException(e, loop.Collection.Syntax);
+            Throws(loop.Collection.Syntax, e.GetType().Name + ": " + e.Message);
+            throw new ElaborationStopped();
         }
     }
 
