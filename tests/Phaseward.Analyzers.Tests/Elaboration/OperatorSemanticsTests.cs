@@ -14,6 +14,7 @@ public class OperatorSemanticsTests
     [InlineData("Operators.LiftedWithNullStaysNull")]
     [InlineData("Operators.MethodGroupsOfOneMethodAreEqual")]
     [InlineData("Operators.CombinedDelegatesCompareTheirLists")]
+    [InlineData("Operators.UnsignedRightShift")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
 
     [Fact]
@@ -98,6 +99,19 @@ public class OperatorSemanticsTests
                         Action single = Tap;
                         var n = (both == same ? 3 : 1) + (both == reversed ? 10 : 0) + (both == single ? 20 : 0);
                         Chain(c, n, "cd");
+                    }
+                }
+                public sealed class UnsignedRightShift : Base
+                {
+                    // >>> shifts zeros in from the left whatever the sign (C# 11; C# specification, shift operators).
+                    protected override void Describe(Circuit c)
+                    {
+                        var mask = -16;
+                        long wide = -1L;
+                        var shifts = 2;
+                        var n = (mask >>> 28) + (int)(wide >>> 62) + (mask >> 30 == -1 ? 1 : 0) + (7 >>> 1) + (mask >>> shifts == 0x3FFFFFFC ? 2 : 0);
+                        mask >>>= 30;
+                        Chain(c, n + mask, "us");
                     }
                 }
             }
