@@ -274,6 +274,16 @@ internal sealed partial class Interpreter
                 continue;
             }
 
+            // An 'in' (or 'ref readonly') argument that is a variable is passed by reference too: the callee sees what
+            // is written to it during the call (through a 'ref' argument or a field), as in C#.
+            if (argument.Parameter.RefKind is RefKind.In or RefKind.RefReadOnlyParameter && session.IsInSource(method)
+                && VariableOf(argument.Value, frame) is { } readOnlyVariable)
+            {
+                (references ??= new Variable?[method.Parameters.Length])[ordinal] = readOnlyVariable;
+                values[ordinal] = Read(readOnlyVariable, ReferencedSymbol(argument.Value));
+                continue;
+            }
+
             var value = Evaluate(argument.Value, frame);
             if (Unknown.Is(value))
                 unknown = true;
