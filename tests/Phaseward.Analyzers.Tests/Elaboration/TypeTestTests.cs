@@ -48,6 +48,7 @@ public class TypeTestTests
     [InlineData("Velmora.UnboxNullables")]
     [InlineData("Velmora.UnboxSmallIntegers")]
     [InlineData("Velmora.UnboxInGenericCode")]
+    [InlineData("Velmora.UnboxSmallIntegersFromEveryPlace")]
     public void UnboxingNeedsTheExactType(string design) => ParityTests.AssertParity(Designs, design);
 
     [Theory]
@@ -271,7 +272,9 @@ public class TypeTestTests
                     {
                         object scan = Mode.Scan, two = 2, thick = Gauge.Thick, six = (byte)6, longTwo = 2L;
                         Say(c, string.Join(",", Try(() => (int)scan), Try(() => (Mode)two), Try(() => (Phase)scan), Try(() => (Mode)longTwo), Try(() => (long)scan),
-                            Try(() => (byte)thick), Try(() => (int)thick), Try(() => (Gauge)six), Try(() => (Gauge)two), Try(() => (Mode)thick)));
+                            Try(() => (byte)thick), Try(() => (int)thick), Try(() => (Gauge)six), Try(() => (Gauge)two), Try(() => (Mode)thick),
+                            Try(() => new[] { scan }.Cast<Phase>().First()), Try(() => new[] { scan }.Cast<int>().First()), Try(() => new[] { scan }.Cast<long>().First()),
+                            Try(() => new[] { two }.Cast<Mode>().First()), Try(() => new[] { scan }.Cast<int?>().First()!), Try(() => new[] { two }.Cast<Mode?>().First()!)));
                     }
                 }
                 public sealed class UnboxNullables : Base
@@ -281,7 +284,7 @@ public class TypeTestTests
                     {
                         object five = 5, nothing = null!, scan = Mode.Scan;
                         Say(c, string.Join(",", Try(() => (long?)five), Try(() => (int?)five), Try(() => (int?)nothing), Try(() => (Mode?)five), Try(() => (Mode?)scan),
-                            Try(() => (char?)five), Try(() => (double?)five)));
+                            Try(() => (char?)five), Try(() => (double?)five), Try(() => (int?)scan), Try(() => (Phase?)scan)));
                     }
                 }
                 public sealed class UnboxSmallIntegers : Base
@@ -298,6 +301,31 @@ public class TypeTestTests
                         object s1 = sum, s2 = a, s3 = b, s4 = w, s5 = (sbyte)-3, s6 = (ushort)9;
                         Say(c, string.Join(",", Try(() => (short)s1), Try(() => (int)s1), Try(() => (short)s2), Try(() => (int)s2), Try(() => (short)s3), Try(() => (long)s3),
                             Try(() => (byte)s4), Try(() => (int)s4), Try(() => (sbyte)s5), Try(() => (byte)s5), Try(() => (ushort)s6), Try(() => (short)s6)));
+                    }
+                }
+                public sealed class UnboxSmallIntegersFromEveryPlace : Base
+                {
+                    private static string Try(Func<object> f) { try { return Text(f()); } catch (InvalidCastException) { return "ic"; } }
+                    private static short Twice(short v) => (short)(v * 2);
+                    protected override void Describe(Circuit c)
+                    {
+                        short a = 3, b = 4;
+                        var flag = a < b;
+                        short m = flag ? a : b;
+                        short d = default;
+                        var arr = new short[2];
+                        (short, int) tp = (5, 1);
+                        var q = new List<short> { 7 };
+                        byte[] bytes = { 1, 2 };
+                        short sw = a switch { 3 => 30, _ => 40 };
+                        ushort us = 65535;
+                        us++;
+                        sbyte sb = -128;
+                        sb--;
+                        char ch = 'a';
+                        ch += (char)1;
+                        object[] boxes = { m, d, arr[1], tp.Item1, q[0], bytes[1], sw, Twice(a), Math.Max(a, b), us, sb, ch, q.Sum(v => v), bytes.Max() };
+                        Say(c, string.Join(",", boxes.Select(o => Try(() => (int)o) + Try(() => (short)o))));
                     }
                 }
                 public sealed class UnboxInGenericCode : Base
