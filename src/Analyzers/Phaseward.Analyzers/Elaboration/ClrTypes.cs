@@ -1,4 +1,5 @@
 using System;
+using System.Collections.Generic;
 using System.Reflection;
 using Microsoft.CodeAnalysis;
 
@@ -27,10 +28,12 @@ internal static class ClrTypes
             case INamedTypeSymbol named when named.IsGenericType:
                 var definition = FindType(named.ContainingAssembly, MetadataName(named.OriginalDefinition));
                 if (definition is null) return null;
-                var arguments = new Type[named.TypeArguments.Length];
+                // A type nested in a generic type (Dictionary<K, V>.ValueCollection) takes its containing types' type arguments first.
+                var typeArguments = AllTypeArguments(named);
+                var arguments = new Type[typeArguments.Count];
                 for (var i = 0; i < arguments.Length; i++)
                 {
-                    var argument = Resolve(named.TypeArguments[i]);
+                    var argument = Resolve(typeArguments[i]);
                     if (argument is null) return null;
                     arguments[i] = argument;
                 }
@@ -41,6 +44,14 @@ internal static class ClrTypes
             default:
                 return null;
         }
+    }
+
+    /// <summary>A type's type arguments, its containing types' first (the order of the run-time type's generic arguments).</summary>
+    public static List<ITypeSymbol> AllTypeArguments(INamedTypeSymbol type)
+    {
+        var arguments = type.ContainingType is { } containing ? AllTypeArguments(containing) : new List<ITypeSymbol>();
+        arguments.AddRange(type.TypeArguments);
+        return arguments;
     }
 
     /// <summary>Does the reflected parameter type match the symbol's type (ignoring by-ref)?</summary>

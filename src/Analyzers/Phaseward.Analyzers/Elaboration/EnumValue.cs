@@ -86,8 +86,11 @@ internal sealed class EnumValue : IFormattable, IComparable, IConvertible
         }
     }
 
+    // As the underlying type's CompareTo: sbyte, byte, short and ushort give the difference (Sgn.Neg vs Sgn.Pos is -2),
+    // the wider types -1, 0 or 1.
     public int CompareTo(object? obj) => obj is EnumValue other && SymbolEqualityComparer.Default.Equals(other.Type, Type)
-        ? (IsUnsigned(Underlying) ? unchecked((ulong)Value).CompareTo(unchecked((ulong)other.Value)) : Value.CompareTo(other.Value))
+        ? (SizeOf(Underlying) < 4 ? (int)(Value - other.Value)
+            : IsUnsigned(Underlying) ? unchecked((ulong)Value).CompareTo(unchecked((ulong)other.Value)) : Value.CompareTo(other.Value))
         : obj is null ? 1 : throw new ArgumentException("Object must be the same type as the enum. The type passed in was '" + obj.GetType() + "'; the enum type was '" + Type.Name + "'.");
 
     private ulong Mask => SizeOf(Underlying) == 8 ? ulong.MaxValue : (1UL << (8 * SizeOf(Underlying))) - 1;

@@ -205,7 +205,7 @@ internal sealed partial class Interpreter
             OwnLibraryCopies(site, method, receiver, clrArguments, value, resultType, frame);
             return method.Name == "Clone" && receiver is object?[] original && value is object?[] clone
                 ? CloneOf(original, clone)
-                : TypedIfArray(value, resultType, frame);
+                : TypedIfConstructed(TypedIfArray(value, resultType, frame), resultType, frame);
         }
         catch (TargetInvocationException e) when (e.InnerException is ElaborationStopped or UnknownValueException or DesignException
             || e.InnerException?.InnerException is UnknownValueException)

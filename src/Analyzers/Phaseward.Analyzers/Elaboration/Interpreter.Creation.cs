@@ -150,7 +150,9 @@ internal sealed partial class Interpreter
         return collection.Type switch
         {
             IArrayTypeSymbol arrayType => Typed(items.ToArray(), arrayType.ElementType, frame),
-            INamedTypeSymbol named when IsList(named) || IsListInterface(named) => items,
+            // C# makes a List<T> for a List<T>, IList<T> or ICollection<T>; for the read-only interfaces a type of its own choosing.
+            INamedTypeSymbol named when IsList(named) || IsMutableListInterface(named) => TypedIfConstructed(items, ListOf(named), frame),
+            INamedTypeSymbol named when IsListInterface(named) => items,
             _ => Unsupported(collection, "this collection expression", "only arrays and List<T> are built from collection expressions"),
         };
     }
@@ -164,6 +166,13 @@ internal sealed partial class Interpreter
     }
 
     private static bool IsList(INamedTypeSymbol type) => ClrTypes.MetadataName(type.OriginalDefinition) == "System.Collections.Generic.List`1";
+
+    private static bool IsMutableListInterface(INamedTypeSymbol type) => ClrTypes.MetadataName(type.OriginalDefinition) is
+        "System.Collections.Generic.IList`1" or "System.Collections.Generic.ICollection`1";
+
+    // List<E> for a collection expression's target type with element type E.
+    private INamedTypeSymbol? ListOf(INamedTypeSymbol target)
+        => session.Compilation.GetTypeByMetadataName("System.Collections.Generic.List`1") is { } list ? list.Construct(target.TypeArguments[0]) : null;
 
     private static bool IsListInterface(INamedTypeSymbol type) => ClrTypes.MetadataName(type.OriginalDefinition) is
         "System.Collections.Generic.IList`1" or "System.Collections.Generic.IReadOnlyList`1" or "System.Collections.Generic.IEnumerable`1"

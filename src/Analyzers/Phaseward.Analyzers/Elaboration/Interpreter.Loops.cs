@@ -109,6 +109,7 @@ internal sealed partial class Interpreter
         // iterator stops where the loop breaks, and what each side does happens in C#'s order (see streamTo).
         var source = StripConversions(loop.Collection);
         var variableType = (loop.LoopControlVariable as IVariableDeclaratorOperation)?.Symbol.Type;
+        var castsElements = variableType is not null && CastsElements(loop);
         var streamed = false;
         var outcome = Completion.Normal;
         var consumerCallers = callers;
@@ -124,7 +125,7 @@ internal sealed partial class Interpreter
             try
             {
                 Step(loop);
-                var completion = RunForEachBody(loop, frame, value, variableType);
+                var completion = RunForEachBody(loop, frame, value, variableType, castsElements);
                 if (AfterIteration(completion, loop, frame) is not { } after)
                     return true;
                 outcome = after;
@@ -229,7 +230,7 @@ internal sealed partial class Interpreter
             while (NextItem(itemEnumerator, loop))
             {
                 Step(loop);
-                if (AfterIteration(RunForEachBody(loop, frame, itemEnumerator.Current, variableType), loop, frame) is { } after)
+                if (AfterIteration(RunForEachBody(loop, frame, itemEnumerator.Current, variableType, castsElements), loop, frame) is { } after)
                     return after;
             }
 
@@ -340,10 +341,12 @@ internal sealed partial class Interpreter
     }
 
     /// <summary>One iteration of a foreach: the loop variable (or deconstruction) set to the item, then the body.</summary>
-    private Completion RunForEachBody(IForEachLoopOperation loop, Frame frame, object? raw, ITypeSymbol? variableType)
+    private Completion RunForEachBody(IForEachLoopOperation loop, Frame frame, object? raw, ITypeSymbol? variableType, bool castsElements)
     {
         var item = FromClr(raw);
-        if (variableType is not null && item is not null && !Unknown.Is(item) && IsNumeric(variableType) && IsNumericValue(item))
+        if (castsElements && !Unknown.Is(item))
+            item = CastElement(loop, item, variableType!, frame);
+        else if (variableType is not null && item is not null && !Unknown.Is(item) && IsNumeric(variableType) && IsNumericValue(item))
             item = Arithmetic.ConvertNumber(item, variableType.SpecialType, isChecked: false) ?? item;
         switch (loop.LoopControlVariable)
         {

@@ -240,6 +240,9 @@ internal sealed partial class Interpreter
         if (conversion.OperatorMethod is { } method)
             return CallOperator(conversion, method, new[] { value }, frame);
         var target = conversion.Type;
+        if (value is null && target is { IsValueType: true } && NullableUnderlying(Resolved(target, frame)) is null && target is not ITypeParameterSymbol
+            && Microsoft.CodeAnalysis.CSharp.CSharpExtensions.GetConversion(conversion) is { IsUnboxing: true })
+            return Raise(conversion.Syntax, new NullReferenceException("Object reference not set to an instance of an object."));
         if (target is null || value is null)
             return value;
         if (conversion.IsTryCast || !conversion.Conversion.IsImplicit && !conversion.Conversion.IsNumeric
@@ -284,24 +287,22 @@ internal sealed partial class Interpreter
     /// </summary>
     private object? CheckedCast(IConversionOperation conversion, object value, ITypeSymbol target, Frame frame)
     {
+        var toNullable = NullableUnderlying(target) is not null;
         var underlying = NullableUnderlying(target) ?? target;
         if (underlying is ITypeParameterSymbol parameter && frame.TypeArgumentOf(parameter) is { } argument and not ITypeParameterSymbol)
+        {
+            toNullable |= NullableUnderlying(argument) is not null;
             underlying = NullableUnderlying(argument) ?? argument;
-        // Numbers may be held in a wider type than declared (a short as an int): for an unboxing only their kind is tested.
-        var numericTarget = IsNumeric(underlying) || underlying.SpecialType is SpecialType.System_Byte or SpecialType.System_SByte or SpecialType.System_Int16
-            or SpecialType.System_UInt16 or SpecialType.System_UInt32 or SpecialType.System_UInt64 or SpecialType.System_Decimal;
-        var fits = numericTarget
-            ? IsNumericValue(value) || value is Enum || value is decimal || value is EnumValue
-            : underlying.TypeKind == TypeKind.Enum && !ClrTypes.IsDsl(underlying) && IsNumericValue(value) ? true
-            : IsOfType(value, underlying, frame);
+        }
+
+        // Unboxing a number or an enum needs its exact type; other values (the design's structs, tuples) are type-tested.
+        var unboxes = underlying.IsValueType ? UnboxesTo(value, underlying, toNullable) : null;
+        var unboxing = unboxes is not null;
+        var fits = unboxes ?? IsOfType(value, underlying, frame);
         if (fits is null)
             return Unsupported(conversion, "this cast to " + Describe(target), "whether the value is of that type cannot be decided at compile time");
-        // The run time lets a boxed enum be unboxed as its underlying type and a boxed number as an enum: the value
-        // takes the type the cast names.
-        if (fits.Value && value is EnumValue boxedEnum && numericTarget)
-            return IsNumeric(underlying) ? Arithmetic.ConvertNumber(boxedEnum.Number, underlying.SpecialType, isChecked: false) : boxedEnum.Number;
-        if (fits.Value && underlying.TypeKind == TypeKind.Enum && value is not EnumValue and not Enum)
-            return ToEnum(value, underlying);
+        if (fits.Value && unboxing)
+            return UnboxedAs(value, underlying);
         if (fits.Value)
             return value;
         if (conversion.IsTryCast)

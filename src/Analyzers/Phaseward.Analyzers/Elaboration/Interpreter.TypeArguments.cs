@@ -94,16 +94,11 @@ internal sealed partial class Interpreter
     // null casts to every type but a non-nullable value type.
     private bool? CastsTo(object? item, ITypeSymbol type) => item is null ? !HoldsAValue(type) : IsOfType(item, type, null);
 
-    /// <summary>Unboxing also takes a boxed enum as its underlying type, and a boxed number of that type as the enum.</summary>
-    private static object? Unboxed(object? item, ITypeSymbol type)
+    /// <summary>Unboxing also takes a boxed enum as its underlying type or another enum of it, and a boxed number as the enum.</summary>
+    private object? Unboxed(object? item, ITypeSymbol type)
     {
         var target = NullableUnderlying(type) ?? type;
-        if (item is EnumValue boxedEnum && SymbolEqualityComparer.Default.Equals(boxedEnum.Type.EnumUnderlyingType, target))
-            return boxedEnum.Number;
-        if (target is INamedTypeSymbol { TypeKind: TypeKind.Enum, EnumUnderlyingType: { } underlying } && item is not null and not EnumValue and not Enum
-            && IsNumericValue(item) && ClrTypes.Resolve(underlying) == item.GetType())
-            return ToEnum(item, target);
-        return null;
+        return item is not null && target.IsValueType && UnboxesTo(item, target, toNullable: NullableUnderlying(type) is not null) == true ? UnboxedAs(item, target) : null;
     }
 
     /// <summary>Min and Max of no values, where the result's type is a non-nullable value type: .NET throws.</summary>

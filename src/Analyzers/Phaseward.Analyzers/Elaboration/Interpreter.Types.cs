@@ -1,4 +1,5 @@
 using System;
+using System.Linq;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Operations;
 
@@ -28,19 +29,13 @@ internal sealed partial class Interpreter
             type = argument;
         }
 
+        // 'is Slot<T>' tests the construction T stands for; where that is not known, only a definition's test is exact.
+        if (frame is not null && MentionsTypeParameter(type))
+            type = ResolvedIn(type, frame) ?? type;
         if (type.SpecialType == SpecialType.System_Object) return true;
         if (value is object?[] array) return ArrayIsOfType(array, type);
         if (NullableUnderlying(type) is { } underlying) type = underlying;
-        if (value is InterpretedObject instance)
-        {
-            if (type.TypeKind == TypeKind.Interface)
-                return instance.Type.AllInterfaces.Contains((INamedTypeSymbol)type.OriginalDefinition, SymbolEqualityComparer.Default)
-                    || instance.Type.AllInterfaces.Contains((INamedTypeSymbol)type, SymbolEqualityComparer.Default);
-            for (var current = instance.Type; current is not null; current = current.BaseType)
-                if (SymbolEqualityComparer.Default.Equals(current.OriginalDefinition, type.OriginalDefinition))
-                    return true;
-            return false;
-        }
+        if (value is InterpretedObject instance) return InstanceIsOfType(instance, type);
 
         if (value is TupleValue tuple)
             return type.IsTupleType ? type is INamedTypeSymbol { TupleElements.Length: var length } && length == tuple.Items.Length
@@ -53,8 +48,37 @@ internal sealed partial class Interpreter
         if (value is Closure) return type.TypeKind == TypeKind.Delegate ? true : type.TypeKind == TypeKind.Interface ? null : false;
         if (session.IsInSource(type)) return false;
         if (type.TypeKind == TypeKind.Enum && !ClrTypes.IsDsl(type)) return false;
+        // The library holds its generics erased: a test of type arguments is answered by the type the object was made with.
+        if (type is INamedTypeSymbol named && HasTypeArguments(named))
+            return MentionsTypeParameter(type) ? null : ConstructedIsOfType(value, type);
         var clr = Library.Erase(type);
         return clr?.IsInstanceOfType(value);
+    }
+
+    /// <summary>
+    /// Is the design's object of the type? Its type is the constructed one (<c>Slot&lt;int&gt;</c>), so type arguments
+    /// and variance count. Where a type parameter in either type is not known, a test that the definitions already
+    /// answer no is no, and one of a type without type arguments yes; otherwise it cannot be decided.
+    /// </summary>
+    private bool? InstanceIsOfType(InterpretedObject instance, ITypeSymbol type)
+    {
+        if (!MentionsTypeParameter(instance.Type) && !MentionsTypeParameter(type))
+            return ConvertsByReference(instance.Type, type);
+        if (!DefinitionIsOfType(instance.Type, type))
+            return false;
+        // A type without type arguments is in every construction's ancestry, or in none.
+        return type is INamedTypeSymbol named && HasTypeArguments(named) ? null : true;
+    }
+
+    // The test by generic definitions alone: false is exact (no construction of an unrelated definition converts).
+    private static bool DefinitionIsOfType(INamedTypeSymbol instanceType, ITypeSymbol type)
+    {
+        if (type.TypeKind == TypeKind.Interface)
+            return instanceType.AllInterfaces.Any(i => SymbolEqualityComparer.Default.Equals(i.OriginalDefinition, type.OriginalDefinition));
+        for (var current = instanceType; current is not null; current = current.BaseType)
+            if (SymbolEqualityComparer.Default.Equals(current.OriginalDefinition, type.OriginalDefinition))
+                return true;
+        return false;
     }
 
     private static ITypeSymbol? NullableUnderlying(ITypeSymbol? type)

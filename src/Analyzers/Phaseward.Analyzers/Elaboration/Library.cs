@@ -160,7 +160,7 @@ internal static class Library
     private static Type? Close(Type open, INamedTypeSymbol symbol)
     {
         var parameters = open.GetGenericArguments();
-        var symbolArguments = AllTypeArguments(symbol);
+        var symbolArguments = ClrTypes.AllTypeArguments(symbol);
         var arguments = new Type[parameters.Length];
         for (var i = 0; i < parameters.Length; i++)
         {
@@ -177,13 +177,6 @@ internal static class Library
         {
             return null;
         }
-    }
-
-    private static List<ITypeSymbol> AllTypeArguments(INamedTypeSymbol symbol)
-    {
-        var outer = symbol.ContainingType is { } containing ? AllTypeArguments(containing) : new List<ITypeSymbol>();
-        outer.AddRange(symbol.TypeArguments);
-        return outer;
     }
 
     /// <summary>object for a type argument, unless the parameter needs a value type (then the real type, if known).</summary>
