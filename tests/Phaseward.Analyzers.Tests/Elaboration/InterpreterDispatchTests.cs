@@ -29,6 +29,7 @@ public class InterpreterDispatchTests
         ["PlaceOf"] = "where an assignment target stores its value (not its value)",
         ["VariableOf"] = "the variable a ref/out argument denotes",
         ["Deconstruct"] = "the targets of a deconstruction",
+        ["PlacesOf"] = "where the targets of a deconstruction store their parts, found before the value is evaluated",
         ["Poison"] = "which variables skipped code may have assigned (it is not run)",
         ["IsVariable"] = "whether a struct method's receiver is a variable or a value (it then runs on a copy)",
         ["VariableNamed"] = "the variable a name denotes, for skipped code and calls that could not be made (not its value)",

@@ -4,7 +4,9 @@ namespace Phaseward.Analyzers.Tests.Elaboration;
 /// Operators whose meaning a first reading of C# can miss, each design elaborated exactly as the compiled design runs it
 /// (the oracle: the design compiled and run by .NET, <see cref="ParityTests"/>): <c>bool?</c>'s <c>&amp;</c> and
 /// <c>|</c> are three-valued (C# specification, §12.13.5: <c>false &amp; null</c> is false, <c>true | null</c> is true),
-/// and two delegates are equal when they call the same method on the same target (§12.12.9, delegate equality).
+/// two delegates are equal when they call the same method on the same target (§12.12.9, delegate equality), and a
+/// deconstruction assignment fixes where each part goes before it evaluates the right side (§12.21.2, simple assignment;
+/// the targets' receivers and indices left to right, then the value, then the stores).
 /// </summary>
 public class OperatorSemanticsTests
 {
@@ -15,6 +17,9 @@ public class OperatorSemanticsTests
     [InlineData("Operators.MethodGroupsOfOneMethodAreEqual")]
     [InlineData("Operators.CombinedDelegatesCompareTheirLists")]
     [InlineData("Operators.UnsignedRightShift")]
+    [InlineData("Operators.DeconstructionFixesIndicesFirst")]
+    [InlineData("Operators.DeconstructionFixesReceiversFirst")]
+    [InlineData("Operators.DeconstructionSwaps")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
 
     [Fact]
@@ -112,6 +117,39 @@ public class OperatorSemanticsTests
                         var n = (mask >>> 28) + (int)(wide >>> 62) + (mask >> 30 == -1 ? 1 : 0) + (7 >>> 1) + (mask >>> shifts == 0x3FFFFFFC ? 2 : 0);
                         mask >>>= 30;
                         Chain(c, n + mask, "us");
+                    }
+                }
+                public sealed class Cell { public int W = 1; }
+                public sealed class DeconstructionFixesIndicesFirst : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var taps = new int[3];
+                        var j = 0;
+                        (j, taps[j]) = (2, 9);
+                        Chain(c, taps[0] + taps[2] * 10 + j, "di");
+                    }
+                }
+                public sealed class DeconstructionFixesReceiversFirst : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var first = new Cell();
+                        var second = new Cell();
+                        var current = first;
+                        (current, current.W) = (second, 5);
+                        Chain(c, first.W * 2 + second.W, "dr");
+                    }
+                }
+                public sealed class DeconstructionSwaps : Base
+                {
+                    protected override void Describe(Circuit c)
+                    {
+                        var (low, high) = (4, 1);
+                        (low, high) = (high, low);
+                        var lanes = new[] { 1, 2, 3 };
+                        (lanes[0], lanes[2]) = (lanes[2], lanes[0]);
+                        Chain(c, low + high * 2 + lanes[0], "ds");
                     }
                 }
             }

@@ -66,9 +66,31 @@ internal sealed partial class Interpreter
 
     private object? VisitDeconstructionAssignment(IDeconstructionAssignmentOperation deconstruction, Frame frame)
     {
+        // C# fixes where each part goes (the receivers, arrays and indices of the targets, left to right) before it
+        // evaluates the right side: in (j, b[j]) = (2, 9) the element is b[j] with j as it was.
+        var places = new Queue<StoragePlace>();
+        PlacesOf(deconstruction.Target, places, frame);
         var value = Evaluate(deconstruction.Value, frame);
-        Deconstruct(deconstruction.Target, value, frame);
+        Deconstruct(deconstruction.Target, value, frame, places);
         return value;
+    }
+
+    /// <summary>The places of a deconstruction's targets, left to right, as <see cref="Deconstruct"/> assigns them.</summary>
+    private void PlacesOf(IOperation target, Queue<StoragePlace> places, Frame frame)
+    {
+        switch (target)
+        {
+            case IDeclarationExpressionOperation declaration:
+                PlacesOf(declaration.Expression, places, frame);
+                return;
+            case ITupleOperation tuple:
+                foreach (var element in tuple.Elements)
+                    PlacesOf(element, places, frame);
+                return;
+            default:
+                places.Enqueue(PlaceOf(target, frame));
+                return;
+        }
     }
 
     private object? IncrementOrDecrement(IIncrementOrDecrementOperation operation, Frame frame)
@@ -96,13 +118,14 @@ internal sealed partial class Interpreter
         return value is UnmadeDefault unread ? ReadOfUnmadeDefault(target, unread) : value;
     }
 
-    /// <summary>Assigns the parts of a tuple value to the targets of a deconstruction (<c>var (a, b) = ...</c>).</summary>
-    private void Deconstruct(IOperation target, object? value, Frame frame)
+    /// <summary>Assigns the parts of a tuple value to the targets of a deconstruction (<c>var (a, b) = ...</c>), to the
+    /// <paramref name="places"/> found before the value was evaluated when given (else each target's place now).</summary>
+    private void Deconstruct(IOperation target, object? value, Frame frame, Queue<StoragePlace>? places = null)
     {
         switch (target)
         {
             case IDeclarationExpressionOperation declaration:
-                Deconstruct(declaration.Expression, value, frame);
+                Deconstruct(declaration.Expression, value, frame, places);
                 return;
             case ITupleOperation tuple:
                 var items = value as TupleValue ?? DeconstructedParts(value);
@@ -113,10 +136,10 @@ internal sealed partial class Interpreter
                 }
 
                 for (var i = 0; i < tuple.Elements.Length; i++)
-                    Deconstruct(tuple.Elements[i], items is not null && i < items.Items.Length ? items.Items[i] : Unknown.Value, frame);
+                    Deconstruct(tuple.Elements[i], items is not null && i < items.Items.Length ? items.Items[i] : Unknown.Value, frame, places);
                 return;
             default:
-                var place = PlaceOf(target, frame);
+                var place = places is not null ? places.Dequeue() : PlaceOf(target, frame);
                 if (place.IsKnown) place.Set(value);
                 else Poison(target, frame);
                 return;
