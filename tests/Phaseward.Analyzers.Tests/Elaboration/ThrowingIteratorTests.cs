@@ -5,11 +5,11 @@ using Phaseward.Analyzers.Tests.Verifiers;
 namespace Phaseward.Analyzers.Tests.Elaboration;
 
 /// <summary>
-/// An iterator not enumerated straight by a foreach is run to completion when called (docs/elaboration.md). In C# none
-/// of its body runs until it is enumerated, one MoveNext at a time (C# specification, §15.15, iterators): whether and
-/// where it throws depends on how far it is enumerated (First stops after one element, TakeWhile at the first that
-/// fails). One that throws when run to the end is therefore PW9001 at the call, naming it, and what depends on its
-/// values is not made. Before, the exception was thrown at the call, into the caller's catch, silently (the oracle for
+/// An iterator enumerated by library code (LINQ) is run to the end when the library first enumerates it
+/// (docs/elaboration.md). In C# it runs one MoveNext at a time (C# specification, §15.15, iterators): whether and where
+/// it throws depends on how far it is enumerated (First stops after one element, TakeWhile at the first that fails).
+/// One that throws when run to the end is therefore PW9001 at the call, naming it, and what depends on its values is
+/// not made; one never enumerated does not run at all. Before, the exception was thrown at the call, into the caller's catch, silently (the oracle for
 /// each scenario: the design compiled and run by .NET gives 1, 2 and 3 where the elaborator gave 3, 3 and 50).
 /// </summary>
 public class ThrowingIteratorTests
@@ -47,16 +47,16 @@ public class ThrowingIteratorTests
     [Fact]
     public async Task An_iterators_argument_check_is_not_thrown_at_the_call()
     {
-        // .NET runs nothing of Lanes at the call: the assignment after it happens and no catch runs (2 stages).
+        // .NET runs nothing of Lanes at the call, and the design never enumerates it: the assignment after it happens,
+        // no catch runs (2 stages), and nothing is reported.
         var source = InverterChainDesign.Source("Saltmarsh", "", """
             private static System.Collections.Generic.IEnumerable<int> Lanes(int n) { if (n < 0) throw new System.ArgumentException("n"); for (var i = 0; i < n; i++) yield return i; }
             """, """
-            try { var lanes = {|#0:Lanes(-1)|}; count = 2; } catch (System.ArgumentException) { count = 4; }
+            try { var lanes = Lanes(-1); count = 2; } catch (System.ArgumentException) { count = 4; }
             """);
-        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source,
-            InverterChainDesign.NotElaborated(0, "the iterator 'D.Lanes(int)'", string.Format(Why, "ArgumentException: n"))).RunAsync();
-        var netlist = new InMemoryDesigns(("/saltmarsh/D.cs", InverterChainDesign.WithoutMarkup(source))).CompileTime("Saltmarsh.D").Netlist!;
+        await new PhasewardAnalyzerTest<ElaborationAnalyzer>(source).RunAsync();
+        var netlist = new InMemoryDesigns(("/saltmarsh/D.cs", source)).CompileTime("Saltmarsh.D").Netlist!;
         Assert.Equal(2, netlist.Devices.Count(d => d.Name.StartsWith('s')));
-        Assert.Equal(2, new InMemoryDesigns(("/saltmarsh/D.cs", InverterChainDesign.WithoutMarkup(source))).RunTime("Saltmarsh.D").Devices.Count(d => d.Name.StartsWith('s')));
+        Assert.Equal(2, new InMemoryDesigns(("/saltmarsh/D.cs", source)).RunTime("Saltmarsh.D").Devices.Count(d => d.Name.StartsWith('s')));
     }
 }

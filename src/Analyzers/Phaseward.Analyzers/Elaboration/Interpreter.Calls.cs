@@ -329,14 +329,22 @@ internal sealed partial class Interpreter
 
             if (IsIterator(body))
             {
+                var runNow = runIteratorNow;
+                runIteratorNow = false;
                 if (streamTo is { } stream && ReferenceEquals(stream.Site, site))
                 {
                     streamTo = null;
                     frame.Consumer = stream.Consume;
                 }
-                else
+                else if (runNow)
                 {
                     frame.Yielded = new List<object?>();
+                }
+                else
+                {
+                    // Nothing runs at the call: each enumeration runs it from the start with these arguments.
+                    var given = (object?[])arguments.Clone();
+                    return new DeferredIterator(site, () => RunDeferred(method, instance, given, site, caller));
                 }
             }
 
@@ -386,6 +394,23 @@ internal sealed partial class Interpreter
     /// changes anything outside itself meanwhile (a field, a captured variable, a collection it did not make, devices),
     /// those changes come earlier than in C#: PW9001 at the call, and its values are not used.
     /// </summary>
+    /// <summary>Set for the one call that runs a <see cref="DeferredIterator"/> now (see <see cref="RunDeferred"/>).</summary>
+    private bool runIteratorNow;
+
+    /// <summary>Runs a deferred iterator call from the start, with the arguments it was called with.</summary>
+    private object? RunDeferred(IMethodSymbol method, InterpretedObject? instance, object?[] arguments, IOperation site, Frame caller)
+    {
+        runIteratorNow = true;
+        try
+        {
+            return InvokeUser(method, instance, (object?[])arguments.Clone(), Array.Empty<Variable?>(), site, caller);
+        }
+        finally
+        {
+            runIteratorNow = false;
+        }
+    }
+
     private object? RunToCompletion(IMethodSymbol method, IOperation body, Frame frame, IOperation site)
     {
         var effectsBefore = externalEffects;

@@ -157,6 +157,23 @@ internal sealed partial class Interpreter
         if (streamed || collection is StreamedIterator)
             return outcome;
 
+        // A call of the design's iterator made earlier and enumerated here: its values stream into the loop body.
+        if (collection is DeferredIterator deferred)
+        {
+            streamTo = (deferred.Site, Consume);
+            try
+            {
+                collection = deferred.RunNow();
+            }
+            finally
+            {
+                streamTo = outerStream;
+            }
+
+            if (streamed || collection is StreamedIterator)
+                return outcome;
+        }
+
         // A sequence of the design's own type (a bus that is IEnumerable<Net>): its GetEnumerator, an iterator streamed
         // into the loop like any other, or one that hands out a library enumerator.
         if (collection is InterpretedObject sequence)
@@ -308,6 +325,9 @@ internal sealed partial class Interpreter
             streamTo = outerStream;
         }
 
+        // An iterator GetEnumerator (yield return) runs when the library enumerates, which is now.
+        if (enumerated is DeferredIterator deferred)
+            enumerated = deferred.RunNow();
         switch (enumerated)
         {
             case List<object?> yielded:
