@@ -55,6 +55,10 @@ internal sealed partial class Interpreter
     /// </summary>
     private bool MayBeCovariant(object?[] array, ITypeSymbol? seenElementType, Frame frame)
     {
+        // Nothing derives from a struct or a sealed class: an array seen with such an element type is of that type (and
+        // the store, on the hot path of every array write, needs no lookup).
+        if (seenElementType is { IsValueType: true } or { IsSealed: true, TypeKind: TypeKind.Class })
+            return false;
         var element = ElementTypeOf(array);
         if (element is { IsValueType: true }) return false;
         return element is null || seenElementType is null || !SymbolEqualityComparer.Default.Equals(element, Resolved(seenElementType, frame));
@@ -78,8 +82,7 @@ internal sealed partial class Interpreter
     {
         if (ElementTypeOf(array) is not { } element)
             return IsOfEveryArray(type) ? true : null;
-        var conversion = session.Compilation.ClassifyCommonConversion(session.Compilation.CreateArrayTypeSymbol(element), type);
-        return conversion.IsIdentity || conversion.IsImplicit && conversion.IsReference;
+        return ConvertsByReference(session.Compilation.CreateArrayTypeSymbol(element), type);
     }
 
     private static bool IsOfEveryArray(ITypeSymbol type)

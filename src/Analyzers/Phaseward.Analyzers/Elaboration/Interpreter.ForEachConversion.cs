@@ -10,13 +10,19 @@ namespace Phaseward.Analyzers.Elaboration;
 // InvalidCastException there, as a cast would.
 internal sealed partial class Interpreter
 {
+    // Asked of the semantic model once per loop, not each time an inner loop runs again.
+    private readonly System.Collections.Generic.Dictionary<IForEachLoopOperation, bool> castingLoops = new();
+
     /// <summary>Whether the loop's elements are cast to its variable's type with a run-time test (a downcast or an unboxing).</summary>
-    private static bool CastsElements(IForEachLoopOperation loop)
+    private bool CastsElements(IForEachLoopOperation loop)
     {
-        if (loop.SemanticModel is not { } model || loop.Syntax is not CommonForEachStatementSyntax syntax)
-            return false;
-        var conversion = Microsoft.CodeAnalysis.CSharp.CSharpExtensions.GetForEachStatementInfo(model, syntax).ElementConversion;
-        return conversion.IsUnboxing || conversion.IsReference && conversion.IsExplicit;
+        if (castingLoops.TryGetValue(loop, out var casts))
+            return casts;
+        casts = loop.SemanticModel is { } model && loop.Syntax is CommonForEachStatementSyntax syntax
+            && Microsoft.CodeAnalysis.CSharp.CSharpExtensions.GetForEachStatementInfo(model, syntax).ElementConversion is var conversion
+            && (conversion.IsUnboxing || conversion.IsReference && conversion.IsExplicit);
+        castingLoops[loop] = casts;
+        return casts;
     }
 
     /// <summary>
