@@ -16,6 +16,7 @@ public class DeferredIteratorTests
     [InlineData("Deferred.ForeachOverAStoredIteratorInterleaves")]
     [InlineData("Deferred.LocalFunctionIteratorSeesItsCapturedLocal")]
     [InlineData("Deferred.IteratorPassedToAMethod")]
+    [InlineData("Deferred.SpreadOfSequences")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
 
     private static readonly InMemoryDesigns Designs = new(("/deferred/Deferred.cs", """
@@ -79,6 +80,21 @@ public class DeferredIteratorTests
                         var taps = Taps();
                         this.taps = 3;
                         Chain(c, Total(taps), "ip");
+                    }
+                }
+                public sealed class Bus : IEnumerable<int>
+                {
+                    public IEnumerator<int> GetEnumerator() { yield return 4; yield return 5; }
+                    System.Collections.IEnumerator System.Collections.IEnumerable.GetEnumerator() => GetEnumerator();
+                }
+                public sealed class SpreadOfSequences : Base
+                {
+                    private static IEnumerable<int> Taps() { yield return 1; yield return 2; }
+                    protected override void Describe(Circuit c)
+                    {
+                        int[] all = [.. Taps(), .. new HashSet<int> { 3 }, .. new Bus(), .. Enumerable.Range(6, 2)];
+                        char[] letters = [.. "ab"];
+                        Chain(c, all.Sum() + all.Length + letters.Length, "sp");
                     }
                 }
             }

@@ -138,7 +138,8 @@ internal sealed partial class Interpreter
                 if (Unknown.Is(source)) return Skipped(collection, frame);
                 if (source is object?[] array) items.AddRange(array);
                 else if (source is List<object?> list) items.AddRange(list);
-                else return Unsupported(spread, "this spread element", "only arrays and lists are spread");
+                else if (SpreadItems(spread, source) is { } spreadItems) items.AddRange(spreadItems);
+                else return Unknown.Value;
                 continue;
             }
 
@@ -155,6 +156,33 @@ internal sealed partial class Interpreter
             INamedTypeSymbol named when IsListInterface(named) => items,
             _ => Unsupported(collection, "this collection expression", "only arrays and List<T> are built from collection expressions"),
         };
+    }
+
+    /// <summary>
+    /// The values a spread element (<c>[.. source]</c>) enumerates that is not an array or list: an iterator, a LINQ
+    /// sequence, a set, a string, a sequence of the design's own type. Null when they are not known (reported).
+    /// </summary>
+    private IEnumerable<object?>? SpreadItems(ISpreadOperation spread, object? source)
+    {
+        switch (source)
+        {
+            case InterpretedObject sequence when GetEnumeratorOf(sequence.Type) is { } getEnumerator:
+                return EnumeratedForLibrary(sequence, getEnumerator);
+            case System.Collections.IEnumerable sequence:
+                try
+                {
+                    return Materialize(sequence);
+                }
+                catch (UnknownValueException e)
+                {
+                    UnknownFrom(e, spread);
+                    return null;
+                }
+
+            default:
+                Unsupported(spread, "this spread element", "it is not a sequence the elaborator enumerates");
+                return null;
+        }
     }
 
     private object? VisitTuple(ITupleOperation tuple, Frame frame)
