@@ -16,7 +16,26 @@ public class StringSequenceTests
     [InlineData("Strings.CharMethodGroup")]
     [InlineData("Strings.AppendInterpolated")]
     [InlineData("Strings.AppendLineInterpolatedWithFormat")]
+    [InlineData("Strings.FormattableDesignTypeInHoles")]
     public void RunsAsAtRunTime(string design) => ParityTests.AssertParity(Designs, design);
+
+    [Fact]
+    public async System.Threading.Tasks.Task String_Format_of_a_design_IFormattable_is_PW9001()
+    {
+        var source = InverterChainDesign.Source("Quarry", """
+            public readonly struct Volt : System.IFormattable
+            {
+                public string ToString(string? format, System.IFormatProvider? provider) => format == "K" ? "k3" : "m3300";
+            }
+            """, "", """
+            var text = {|#0:string.Format("{0:K}", new Volt())|};
+            count = text.Length;
+            """);
+        await new Verifiers.PhasewardAnalyzerTest<ElaborationAnalyzer>(source,
+            InverterChainDesign.NotElaborated(0, "the call to 'string.Format(string, object?)'",
+                "it would format an object of the design that is IFormattable, through its ToString(format, provider), which the library cannot call back")).RunAsync();
+        InverterChainDesign.AssertNoStage(source, "Quarry");
+    }
 
     [Fact]
     public async System.Threading.Tasks.Task A_library_method_group_that_could_change_a_collection_is_PW9001()
@@ -82,6 +101,23 @@ public class StringSequenceTests
                     {
                         var text = new StringBuilder().Append($"w{7,3}|{12:D4}").AppendLine($"{"x",-2}end").ToString();
                         Chain(c, text.Length, "al");
+                    }
+                }
+                public readonly struct Volt : IFormattable
+                {
+                    private readonly int millivolts;
+                    public Volt(int millivolts) => this.millivolts = millivolts;
+                    public override string ToString() => "v" + millivolts;
+                    public string ToString(string? format, IFormatProvider? provider) => format == "K" ? "k" + millivolts / 1000 : "m" + millivolts;
+                }
+                public sealed class FormattableDesignTypeInHoles : Base
+                {
+                    // A hole formats an IFormattable through ToString(format, provider); concatenation and ToString() call ToString().
+                    protected override void Describe(Circuit c)
+                    {
+                        var v = new Volt(3300);
+                        var text = $"{v}|{v:K}|{v,6}" + "/" + v + "/" + v.ToString() + new StringBuilder().Append($"{v:K}");
+                        Chain(c, 1, text.Replace("|", "_").Replace(" ", "_").Replace("/", "_"));
                     }
                 }
             }

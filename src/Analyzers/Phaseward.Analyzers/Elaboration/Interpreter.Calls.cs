@@ -147,6 +147,10 @@ internal sealed partial class Interpreter
             return Unknown.Value;
         if (!isDsl && RefusedArrayStore(site, method, receiver, arguments) is { } refused)
             return refused;
+        if (!isDsl && method.Name is "Format" or "AppendFormat" && arguments.Any(a => a is InterpretedObject o && FormattableToString(o) is not null
+                || a is object?[] items && items.Any(i => i is InterpretedObject io && FormattableToString(io) is not null)))
+            return Unsupported(site, "the call to " + Describe(method),
+                "it would format an object of the design that is IFormattable, through its ToString(format, provider), which the library cannot call back");
 
         // Converted in place: every caller hands over an array it made for this call (one array per call, not two).
         var given = !isDsl && MayReadCulture(method) ? (object?[])arguments.Clone() : null;

@@ -202,6 +202,15 @@ internal sealed partial class Interpreter : IObjectSemantics
         return null;
     }
 
+    /// <summary>The design type's implementation of IFormattable.ToString(string, IFormatProvider), if it has one.</summary>
+    private static IMethodSymbol? FormattableToString(InterpretedObject value)
+    {
+        foreach (var contract in value.Type.AllInterfaces)
+            if (contract.ToDisplayString() == "System.IFormattable" && contract.GetMembers("ToString").FirstOrDefault() is IMethodSymbol declared)
+                return value.Type.FindImplementationForInterfaceMember(declared) as IMethodSymbol;
+        return null;
+    }
+
     /// <summary>Interprets a member for library code (string.Join calling ToString, a HashSet calling Equals).</summary>
     private object? InvokeForLibrary(IMethodSymbol method, InterpretedObject self, object?[] arguments)
     {

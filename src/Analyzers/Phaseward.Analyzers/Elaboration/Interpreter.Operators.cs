@@ -365,8 +365,12 @@ internal sealed partial class Interpreter
         var format = formatOperation is null ? null : Evaluate(formatOperation, frame) as string;
         if (Unknown.Is(alignment)) return false;
         var composite = "{0" + (alignment is null ? "" : "," + System.Convert.ToInt32(alignment, CultureInfo.InvariantCulture).ToString(CultureInfo.InvariantCulture)) + "}";
-        // The hole is formatted in the run's current culture: ValueText gives its text when no culture changes it.
-        text.Append(string.Format(CultureInfo.InvariantCulture, composite, ValueText.Of(value, SourceType(expression), format)));
+        // A design's IFormattable is asked ToString(format, null), as the hole's formatting does; anything else is
+        // formatted in the run's current culture: ValueText gives its text when no culture changes it.
+        var holeText = value is InterpretedObject formattable && FormattableToString(formattable) is { } formatMethod
+            ? InvokeForLibrary(formatMethod, formattable, new object?[] { format, null }) as string ?? throw new UnknownValueException()
+            : ValueText.Of(value, SourceType(expression), format);
+        text.Append(string.Format(CultureInfo.InvariantCulture, composite, holeText));
         return true;
     }
 
