@@ -73,7 +73,8 @@ internal static partial class Arithmetic
 
     private static bool IsSigned(SpecialType type) => type is SpecialType.System_SByte or SpecialType.System_Int16 or SpecialType.System_Int32;
 
-    private static SpecialType TypeOf(object value) => value switch
+    /// <summary>The numeric type a held number is of (None for anything else).</summary>
+    internal static SpecialType TypeOf(object value) => value switch
     {
         sbyte => SpecialType.System_SByte,
         byte => SpecialType.System_Byte,

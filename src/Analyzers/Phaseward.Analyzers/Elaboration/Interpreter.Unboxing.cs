@@ -40,23 +40,7 @@ internal sealed partial class Interpreter
                 return value.GetType().FullName is { } name ? session.Compilation.GetTypeByMetadataName(name) : null;
         }
 
-        var special = Type.GetTypeCode(value.GetType()) switch
-        {
-            TypeCode.Boolean => SpecialType.System_Boolean,
-            TypeCode.Char => SpecialType.System_Char,
-            TypeCode.SByte => SpecialType.System_SByte,
-            TypeCode.Byte => SpecialType.System_Byte,
-            TypeCode.Int16 => SpecialType.System_Int16,
-            TypeCode.UInt16 => SpecialType.System_UInt16,
-            TypeCode.Int32 => SpecialType.System_Int32,
-            TypeCode.UInt32 => SpecialType.System_UInt32,
-            TypeCode.Int64 => SpecialType.System_Int64,
-            TypeCode.UInt64 => SpecialType.System_UInt64,
-            TypeCode.Single => SpecialType.System_Single,
-            TypeCode.Double => SpecialType.System_Double,
-            TypeCode.Decimal => SpecialType.System_Decimal,
-            _ => SpecialType.None,
-        };
+        var special = value is bool ? SpecialType.System_Boolean : Arithmetic.TypeOf(value);
         return special == SpecialType.None ? null : session.Compilation.GetSpecialType(special);
     }
 
